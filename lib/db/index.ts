@@ -1,0 +1,37 @@
+import { QueryTypes, Sequelize } from 'sequelize';
+import * as mariadb from 'mariadb';
+import { readDbConfig } from './config';
+
+/**
+ * One Sequelize instance (and so one connection pool) per process. In development
+ * Next re-evaluates modules on hot reload, so the instance lives on globalThis.
+ */
+const globalForDb = globalThis as unknown as { __clackwaterSequelize?: Sequelize };
+
+export function createSequelize(overrides: Partial<ReturnType<typeof readDbConfig>> = {}): Sequelize {
+  const cfg = { ...readDbConfig(), ...overrides };
+  return new Sequelize(cfg.database, cfg.user, cfg.password, {
+    host: cfg.host,
+    port: cfg.port,
+    dialect: 'mariadb',
+    dialectModule: mariadb,
+    logging: process.env.DB_LOG === '1' ? console.log : false,
+    pool: { max: Number(process.env.DB_POOL_MAX ?? 10), min: 0, acquire: 5_000, idle: 10_000 },
+    dialectOptions: { connectTimeout: 3_000 },
+    timezone: '+00:00',
+    define: { underscored: true, charset: 'utf8mb4', collate: 'utf8mb4_unicode_ci' },
+  });
+}
+
+export function getSequelize(): Sequelize {
+  if (!globalForDb.__clackwaterSequelize) globalForDb.__clackwaterSequelize = createSequelize();
+  return globalForDb.__clackwaterSequelize;
+}
+
+/** Round-trips a trivial query; used by /api/health. */
+export async function pingDatabase(): Promise<{ latencyMs: number }> {
+  const t0 = performance.now();
+  // QueryTypes.SELECT: a RAW query trips over the mariadb driver's frozen result meta.
+  await getSequelize().query('SELECT 1', { type: QueryTypes.SELECT });
+  return { latencyMs: Math.round((performance.now() - t0) * 10) / 10 };
+}

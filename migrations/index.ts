@@ -1,0 +1,12 @@
+import type { QueryInterface } from 'sequelize';
+import * as coreTables from './001-core-tables';
+
+type Step = (params: { context: QueryInterface }) => Promise<void>;
+
+/**
+ * Every migration in order. Listed here rather than globbed so the same list runs
+ * under tsx, vitest and any bundler. Never rename or reorder a landed entry.
+ */
+export const migrations: { name: string; up: Step; down: Step }[] = [
+  { name: '001-core-tables', ...coreTables },
+];

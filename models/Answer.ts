@@ -1,0 +1,35 @@
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type ForeignKey,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type NonAttribute,
+  type Sequelize,
+} from 'sequelize';
+import type { User } from './User';
+import type { Question } from './Question';
+
+export class Answer extends Model<InferAttributes<Answer>, InferCreationAttributes<Answer>> {
+  declare id: CreationOptional<number>;
+  declare questionId: ForeignKey<Question['id']>;
+  declare authorId: ForeignKey<User['id']>;
+  declare body: string;
+  declare createdAt: CreationOptional<Date>;
+  declare updatedAt: CreationOptional<Date>;
+
+  declare author?: NonAttribute<User>;
+
+  static initModel(sequelize: Sequelize) {
+    Answer.init(
+      {
+        id: { type: DataTypes.INTEGER.UNSIGNED, autoIncrement: true, primaryKey: true },
+        body: { type: DataTypes.TEXT('medium'), allowNull: false },
+        createdAt: DataTypes.DATE,
+        updatedAt: DataTypes.DATE,
+      },
+      { sequelize, tableName: 'answers' },
+    );
+  }
+}

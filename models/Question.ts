@@ -1,0 +1,42 @@
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type ForeignKey,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type NonAttribute,
+  type Sequelize,
+} from 'sequelize';
+import type { User } from './User';
+import type { Tag } from './Tag';
+
+export class Question extends Model<InferAttributes<Question>, InferCreationAttributes<Question>> {
+  declare id: CreationOptional<number>;
+  declare authorId: ForeignKey<User['id']>;
+  declare title: string;
+  declare body: string;
+  /** Denormalised count so lists need no join; kept in step by the code that adds answers. */
+  declare answerCount: CreationOptional<number>;
+  declare fixedAnswerId: number | null;
+  declare createdAt: CreationOptional<Date>;
+  declare updatedAt: CreationOptional<Date>;
+
+  declare author?: NonAttribute<User>;
+  declare tags?: NonAttribute<Tag[]>;
+
+  static initModel(sequelize: Sequelize) {
+    Question.init(
+      {
+        id: { type: DataTypes.INTEGER.UNSIGNED, autoIncrement: true, primaryKey: true },
+        title: { type: DataTypes.STRING(160), allowNull: false },
+        body: { type: DataTypes.TEXT('medium'), allowNull: false },
+        answerCount: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false, defaultValue: 0 },
+        fixedAnswerId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: true },
+        createdAt: DataTypes.DATE,
+        updatedAt: DataTypes.DATE,
+      },
+      { sequelize, tableName: 'questions' },
+    );
+  }
+}

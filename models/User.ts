@@ -1,0 +1,33 @@
+import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+
+export const ROLES = ['member', 'expert', 'moderator', 'admin'] as const;
+export type Role = (typeof ROLES)[number];
+
+export class User extends Model<InferAttributes<User>, InferCreationAttributes<User>> {
+  declare id: CreationOptional<number>;
+  declare handle: string;
+  declare displayName: string;
+  declare email: string;
+  declare role: CreationOptional<Role>;
+  declare region: string | null;
+  declare bio: string | null;
+  declare createdAt: CreationOptional<Date>;
+  declare updatedAt: CreationOptional<Date>;
+
+  static initModel(sequelize: Sequelize) {
+    User.init(
+      {
+        id: { type: DataTypes.INTEGER.UNSIGNED, autoIncrement: true, primaryKey: true },
+        handle: { type: DataTypes.STRING(40), allowNull: false, unique: true },
+        displayName: { type: DataTypes.STRING(80), allowNull: false },
+        email: { type: DataTypes.STRING(254), allowNull: false, unique: true },
+        role: { type: DataTypes.ENUM(...ROLES), allowNull: false, defaultValue: 'member' },
+        region: { type: DataTypes.STRING(80), allowNull: true },
+        bio: { type: DataTypes.TEXT, allowNull: true },
+        createdAt: DataTypes.DATE,
+        updatedAt: DataTypes.DATE,
+      },
+      { sequelize, tableName: 'users' },
+    );
+  }
+}

@@ -1,0 +1,32 @@
+import type { Sequelize } from 'sequelize';
+import { getSequelize } from '@/lib/db';
+import { User } from './User';
+import { Tag } from './Tag';
+import { Question } from './Question';
+import { Answer } from './Answer';
+import { QuestionTag } from './QuestionTag';
+
+export { User, Tag, Question, Answer, QuestionTag };
+
+const initialised = new WeakSet<Sequelize>();
+
+/** Initialises every model and association on one Sequelize instance, once. */
+export function initModels(sequelize: Sequelize = getSequelize()) {
+  if (!initialised.has(sequelize)) {
+    User.initModel(sequelize);
+    Tag.initModel(sequelize);
+    Question.initModel(sequelize);
+    Answer.initModel(sequelize);
+    QuestionTag.initModel(sequelize);
+
+    Question.belongsTo(User, { as: 'author', foreignKey: 'authorId' });
+    User.hasMany(Question, { as: 'questions', foreignKey: 'authorId' });
+    Answer.belongsTo(User, { as: 'author', foreignKey: 'authorId' });
+    Answer.belongsTo(Question, { as: 'question', foreignKey: 'questionId' });
+    Question.hasMany(Answer, { as: 'answers', foreignKey: 'questionId' });
+    Question.belongsToMany(Tag, { through: QuestionTag, as: 'tags', foreignKey: 'questionId', otherKey: 'tagId' });
+    Tag.belongsToMany(Question, { through: QuestionTag, as: 'questions', foreignKey: 'tagId', otherKey: 'questionId' });
+    initialised.add(sequelize);
+  }
+  return { sequelize, User, Tag, Question, Answer, QuestionTag };
+}

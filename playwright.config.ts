@@ -1,0 +1,43 @@
+import { defineConfig } from '@playwright/test';
+
+const port = Number(process.env.E2E_PORT ?? 3100);
+
+/** Chromium flags for a closed network, as root, headless. */
+export const CHROMIUM_ARGS = [
+  '--headless',
+  '--no-sandbox',
+  '--disable-gpu',
+  '--disable-quic',
+  '--no-first-run',
+  '--disable-background-networking',
+  '--disable-component-update',
+  '--disable-sync',
+];
+
+export default defineConfig({
+  testDir: 'tests/e2e',
+  fullyParallel: false,
+  workers: 1,
+  retries: 0,
+  reporter: [['list']],
+  timeout: 30_000,
+  use: {
+    baseURL: process.env.E2E_BASE_URL ?? `http://127.0.0.1:${port}`,
+    launchOptions: { executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium', args: CHROMIUM_ARGS },
+    trace: 'off',
+  },
+  projects: [
+    { name: 'desktop', use: { viewport: { width: 1280, height: 900 } } },
+  ],
+  // scripts/test.sh builds the app first; this only serves the build.
+  webServer: process.env.E2E_BASE_URL
+    ? undefined
+    : {
+        command: `npx next start -p ${port} -H 127.0.0.1`,
+        url: `http://127.0.0.1:${port}/api/health`,
+        reuseExistingServer: false,
+        timeout: 60_000,
+        stdout: 'ignore',
+        stderr: 'pipe',
+      },
+});

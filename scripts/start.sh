@@ -1,0 +1,39 @@
+#!/usr/bin/env bash
+# npm start — sets up whatever is missing, then serves Clackwater with demo data on
+# http://localhost:$PORT (3000). Ctrl-C stops the app and the database.
+set -euo pipefail
+. "$(dirname "$0")/env.sh"
+cd "$ROOT"
+export NEXT_TELEMETRY_DISABLED=1
+
+LOCK="$ROOT/.data/start-$PORT.pid"
+mkdir -p "$ROOT/.data"
+if [ -f "$LOCK" ] && kill -0 "$(cat "$LOCK")" 2>/dev/null; then
+  die "Clackwater is already running (pid $(cat "$LOCK")) on http://localhost:$PORT — stop that one with Ctrl-C first."
+fi
+echo $$ >"$LOCK"
+
+APP_PID=""
+cleanup() {
+  trap - INT TERM EXIT
+  [ -n "$APP_PID" ] && kill -TERM "$APP_PID" 2>/dev/null && wait "$APP_PID" 2>/dev/null || true
+  bash "$ROOT/scripts/db.sh" stop || true
+  rm -f "$LOCK"
+}
+trap cleanup INT TERM EXIT
+
+bash scripts/ensure-system.sh
+bash scripts/db.sh start
+npx tsx scripts/migrate.ts up
+npx tsx scripts/seed.ts
+bash scripts/build-if-needed.sh
+
+log "Clackwater is starting on http://localhost:$PORT (Ctrl-C stops it and the database)"
+npx next start -p "$PORT" &
+APP_PID=$!
+for _ in $(seq 1 60); do
+  curl -fs "http://127.0.0.1:$PORT/api/health" >/dev/null 2>&1 && break
+  sleep 1
+done
+log "ready: open http://localhost:$PORT"
+wait "$APP_PID"

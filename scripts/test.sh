@@ -1,0 +1,28 @@
+#!/usr/bin/env bash
+# npm test — the same set-up as npm start against a separate test database
+# (its own MariaDB on 127.0.0.1:3408), then typecheck, lint, unit and integration
+# tests (vitest, real MariaDB) and browser tests (Playwright, Debian's chromium).
+set -uo pipefail
+export CLACKWATER_ENV=test
+. "$(dirname "$0")/env.sh"
+cd "$ROOT"
+export NEXT_TELEMETRY_DISABLED=1 E2E_PORT="$PORT"
+mkdir -p .data/reports
+
+bash scripts/ensure-system.sh --browser || die "set-up failed"
+bash scripts/db.sh start || die "could not start the test database"
+trap 'bash "$ROOT/scripts/db.sh" stop >/dev/null 2>&1 || true' EXIT
+
+failed=0
+step() { log "$1"; shift; "$@" || { failed=1; log "FAILED: $*"; }; }
+
+step "typecheck" npx tsc --noEmit
+step "lint" npx eslint . --max-warnings=0
+step "reset test database" npx tsx scripts/reset-db.ts
+step "unit and integration tests (vitest)" npx vitest run --reporter=default --reporter=json --outputFile=.data/reports/vitest.json
+step "build" npx next build
+step "reset test database" npx tsx scripts/reset-db.ts
+step "browser tests (playwright)" env PLAYWRIGHT_JSON_OUTPUT_NAME=.data/reports/playwright.json npx playwright test --reporter=list,json
+
+node scripts/test-summary.mjs .data/reports/vitest.json .data/reports/playwright.json || failed=1
+exit $failed

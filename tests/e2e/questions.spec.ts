@@ -1,0 +1,62 @@
+import { execFileSync } from 'node:child_process';
+import { test, expect } from '@playwright/test';
+import { demoQuestions } from '../../migrations/seed/demo-data';
+
+const newestFirst = [...demoQuestions].sort((a, b) => a.daysAgo - b.daysAgo);
+
+test('the questions page lists seeded titles, newest first, and pages on', async ({ page }) => {
+  await page.goto('/questions');
+  await expect(page.getByRole('heading', { level: 1, name: 'Questions' })).toBeVisible();
+  const list = page.getByTestId('question-list');
+  await expect(list.getByRole('heading', { name: newestFirst[0].title })).toBeVisible();
+  await expect(list.getByRole('heading', { name: newestFirst[5].title })).toBeVisible();
+  await expect(page.getByText(`${demoQuestions.length} questions, newest first`)).toBeVisible();
+
+  await page.goto('/questions?perPage=5');
+  await expect(list.getByRole('heading', { name: newestFirst[4].title })).toBeVisible();
+  await expect(list.getByRole('heading', { name: newestFirst[5].title })).toHaveCount(0);
+  await page.getByRole('link', { name: 'Older →' }).click();
+  await expect(page).toHaveURL(/page=2/);
+  await expect(list.getByRole('heading', { name: newestFirst[5].title })).toBeVisible();
+  await expect(page.getByText('Page 2 of 3')).toBeVisible();
+});
+
+test('the header carries the site sections, a search box and the safety notice', async ({ page }) => {
+  await page.goto('/');
+  const nav = page.getByRole('navigation', { name: 'Main' });
+  for (const name of ['Guides', 'Calculators', 'Questions', 'Field log']) {
+    await expect(nav.getByRole('link', { name })).toBeVisible();
+  }
+  await page.getByRole('searchbox', { name: 'Search Clackwater' }).fill('winter');
+  await page.keyboard.press('Enter');
+  await expect(page).toHaveURL(/\/search\?q=winter/);
+  await expect(page.getByText(/drain the pump for winter/)).toBeVisible();
+  await page.getByRole('link', { name: 'safety notice' }).last().click();
+  await expect(page.getByRole('heading', { name: 'Safety notice' })).toBeVisible();
+});
+
+test('an unknown page gets the not-found page', async ({ page }) => {
+  const res = await page.goto('/no-such-page');
+  expect(res?.status()).toBe(404);
+  await expect(page.getByRole('heading', { name: 'Nothing here' })).toBeVisible();
+});
+
+test('with the database stopped, pages explain in plain words and recover when it returns', async ({ page, request }) => {
+  const db = (action: string) =>
+    execFileSync('bash', ['scripts/db.sh', action], { env: { ...process.env, CLACKWATER_ENV: 'test' }, stdio: 'pipe' });
+  db('stop');
+  try {
+    await page.goto('/questions');
+    await expect(page.getByRole('alert').filter({ hasText: 'can’t reach the database' })).toBeVisible();
+    await expect(page.locator('body')).not.toContainText(/at \S+\.(js|ts):\d+/);
+    const health = await request.get('/api/health');
+    expect(health.status()).toBe(503);
+    const api = await request.get('/api/questions');
+    expect(api.status()).toBe(503);
+    expect((await api.json()).error.code).toBe('database_unavailable');
+  } finally {
+    db('start');
+  }
+  await page.goto('/questions');
+  await expect(page.getByTestId('question-list').getByRole('heading', { name: newestFirst[0].title })).toBeVisible();
+});

@@ -1,0 +1,17 @@
+import { defineConfig } from 'vitest/config';
+import { fileURLToPath } from 'node:url';
+
+export default defineConfig({
+  resolve: { alias: { '@': fileURLToPath(new URL('.', import.meta.url)).replace(/\/$/, '') } },
+  test: {
+    include: ['tests/{unit,hydraulics,integration}/**/*.test.{ts,tsx}'],
+    environment: 'node',
+    // Never the development database: settings default to the test server (scripts/env.sh).
+    env: { CLACKWATER_ENV: 'test' },
+    // integration tests share one MariaDB database: run files one at a time
+    fileParallelism: false,
+    testTimeout: 30_000,
+    hookTimeout: 60_000,
+    benchmark: { include: ['bench/**/*.bench.ts'] },
+  },
+});
