@@ -1,0 +1,62 @@
+/**
+ * Typed input errors. Every calculator validates its own input and throws
+ * {@link EngineInputError} naming the field and the range it accepts, so a
+ * form can put the message beside the right box.
+ */
+
+/** The range a numeric field accepts, in the field's SI unit. */
+export interface FieldRange {
+  min?: number;
+  max?: number;
+  /** true when `min` itself is not allowed (e.g. a fall must be > 0). */
+  minExclusive?: boolean;
+  maxExclusive?: boolean;
+  /** SI unit of min and max, e.g. "m", "m³/s", "Pa"; "" when dimensionless. */
+  unit: string;
+}
+
+/** One field that failed, with a plain-words message. */
+export interface FieldIssue {
+  /** Dotted path of the field, e.g. "fallM" or "drivePipe.lengthM" or "trials.0.timeS". */
+  field: string;
+  message: string;
+  range?: FieldRange;
+}
+
+/** Thrown for invalid input. `field` and `range` describe the first issue; `issues` lists all. */
+export class EngineInputError extends Error {
+  readonly field: string;
+  readonly range?: FieldRange;
+  readonly issues: FieldIssue[];
+
+  constructor(issues: FieldIssue[]) {
+    const list = issues.length > 0 ? issues : [{ field: '(input)', message: 'invalid input' }];
+    super(list.map((i) => `${i.field}: ${i.message}`).join('; '));
+    this.name = 'EngineInputError';
+    this.field = list[0].field;
+    this.range = list[0].range;
+    this.issues = list;
+  }
+}
+
+/** Describes a range in words. Example: { min: 0, minExclusive: true, max: 100, unit: 'm' } → "greater than 0 and at most 100 m". */
+export function describeRange(r: FieldRange): string {
+  const u = r.unit ? ` ${r.unit}` : '';
+  const lo = r.min === undefined ? '' : `${r.minExclusive ? 'greater than' : 'at least'} ${r.min}`;
+  const hi = r.max === undefined ? '' : `${r.maxExclusive ? 'less than' : 'at most'} ${r.max}`;
+  if (lo && hi) return `${lo} and ${hi}${u}`;
+  return `${lo || hi}${u}`;
+}
+
+/** Collects cross-field issues found after schema parsing, then throws them together. */
+export class IssueCollector {
+  private readonly list: FieldIssue[] = [];
+
+  add(field: string, message: string, range?: FieldRange): void {
+    this.list.push({ field, message, range });
+  }
+
+  throwIfAny(): void {
+    if (this.list.length > 0) throw new EngineInputError(this.list);
+  }
+}

@@ -1,0 +1,223 @@
+/**
+ * The physics of N rams in parallel, each on its own drive pipe, all into
+ * one shared delivery line. Used by the array planner (and its staged mode).
+ *
+ * Each pump i:
+ *  - drive flow Qᵢ (m³/s): given, or estimated for its straight drive pipe
+ *    by estimateDriveFlow (ramCycle.ts);
+ *  - closing velocity v_c,ᵢ (m/s): from the same model, scaled by Qᵢ/Q_model
+ *    when Qᵢ was measured, so the velocity matches the measured flow;
+ *  - fittings in its drive pipe (ΣKᵢ beyond a straight run) dissipate
+ *    ΔHᵢ = ΣKᵢ·v_c,ᵢ²/(2g) of the fall at the moment the column's momentum is
+ *    turned into delivery, so the drive energy per unit weight left for the
+ *    pump is H_eff,ᵢ = H − ΔHᵢ. Qᵢ and ηᵢ describe the pump on a straight
+ *    drive pipe; the fitting is charged only through H_eff.
+ *  - delivery qᵢ = ηᵢ·Qᵢ·H_eff,ᵢ / h_p, where h_p = h + h_f(S) + h_m(S) is the
+ *    head at the pump: lift plus the shared line's friction and fitting
+ *    losses at the combined flow S = Σqᵢ (Darcy-Weisbach with Colebrook).
+ * ηᵢ, when not given, is the typical band value at hₚ/H_eff,ᵢ (efficiency.ts).
+ * S solves S = Σqᵢ(h + loss(S)); the right side falls as S grows, so the root
+ * is unique and found by regula falsi (Illinois variant).
+ */
+import { efficiencyBand, maxLiftRatio, type PumpType } from './efficiency';
+import { sumK, type Fitting } from './fittings';
+import { pipeHeadLoss, pipeLoss, type PipeLoss } from './friction';
+import { roughnessOf, type DrivePipe, type PipeRun } from './pipeSchemas';
+import { estimateDriveFlow } from './ramCycle';
+import { G } from './water';
+
+export interface PumpInput {
+  label?: string;
+  pumpType: PumpType;
+  driveFlowM3s?: number;
+  efficiency?: number;
+  drivePipe: DrivePipe;
+}
+
+export interface PreparedPump {
+  label: string;
+  pumpType: PumpType;
+  driveFlowM3s: number;
+  driveFlowEstimated: boolean;
+  closureVelocityMs: number;
+  fittingsK: number;
+  fittingHeadLossM: number;
+  effectiveFallM: number;
+  givenEfficiency?: number;
+}
+
+/**
+ * Works out one pump's drive flow, closing velocity and effective fall.
+ * Formula: Q = given or estimateDriveFlow(straight pipe); v_c = α·v₀·(Q/Q_model);
+ * ΔH = ΣK·v_c²/(2g); H_eff = max(0, H − ΔH).
+ * Units: fallM, liftM m; nu m²/s; closureRatio α dimensionless (0.3–0.98).
+ * Worked example: ½" sch 40 PVC, 20 ft, Q = 2 US gal/min (1.2618e-4 m³/s), one
+ * threaded elbow (K = 1.5): model Q = 1.128e-4, v_c = 1.005 × 1.2618/1.128 =
+ * 1.124 m/s → ΔH = 1.5 × 1.124²/19.613 = 0.0966 m; H_eff = 1.2192 − 0.0966 = 1.1226 m.
+ * Reference: see the module comment; K from Munson Table 8.2 (from memory).
+ */
+export function preparePump(p: PumpInput, index: number, fallM: number, liftM: number, nu: number, closureRatio: number): PreparedPump {
+  const dp = p.drivePipe;
+  const cycle = estimateDriveFlow({
+    fallM, pumpHeadM: liftM, lengthM: dp.lengthM, insideDiameterM: dp.insideDiameterM,
+    roughnessM: roughnessOf(dp), nu, closureRatio,
+  });
+  const Q = p.driveFlowM3s ?? cycle.driveFlowM3s;
+  const vc = cycle.closureVelocityMs * (Q / cycle.driveFlowM3s);
+  const k = sumK(dp.fittings as Fitting[]);
+  const loss = (k * vc * vc) / (2 * G);
+  return {
+    label: p.label ?? `pump ${index + 1}`,
+    pumpType: p.pumpType,
+    driveFlowM3s: Q,
+    driveFlowEstimated: p.driveFlowM3s === undefined,
+    closureVelocityMs: vc,
+    fittingsK: k,
+    fittingHeadLossM: loss,
+    effectiveFallM: Math.max(0, fallM - loss),
+    givenEfficiency: p.efficiency,
+  };
+}
+
+/** A pump whose fittings leave less than this share of the fall is taken as stopped. */
+const MIN_EFFECTIVE_FALL_SHARE = 0.05;
+
+/**
+ * Whether a pump still beats: H_eff > 0.05·H (fittings that eat 95 % of the fall stop it).
+ * Units: m. Worked example: H = 1.2192 m, H_eff = 1.1226 m → runs. Reference: engineering judgement, no source.
+ */
+export function pumpRuns(p: PreparedPump, fallM: number): boolean {
+  return p.effectiveFallM > MIN_EFFECTIVE_FALL_SHARE * fallM;
+}
+
+/**
+ * Efficiency of a pump working against head hp: the given η, else the typical
+ * band value at hp/H_eff (efficiency.ts). Units: hp m; result dimensionless.
+ * Worked example: homemade, hp = 8.884 m, H_eff = 1.2192 m → r = 7.29 → η = 0.513.
+ * Reference: EFFICIENCY_BANDS (from memory).
+ */
+export function pumpEfficiency(p: PreparedPump, hp: number): number {
+  if (p.givenEfficiency !== undefined) return p.givenEfficiency;
+  return efficiencyBand(p.pumpType, hp / p.effectiveFallM).typical;
+}
+
+/**
+ * Delivery of one pump against head hp: q = η·Q·H_eff/hp, m³/s (0 when stopped or hp ≤ H_eff).
+ * Units: hp, fallM m; result m³/s.
+ * Worked example: η = 0.513, Q = 1.2618e-4 m³/s, H_eff = 1.2192 m, hp = 8.884 m → 8.89e-6 m³/s (533 mL/min).
+ * Reference: D'Aubuisson relation.
+ */
+export function pumpDelivery(p: PreparedPump, hp: number, fallM: number): number {
+  if (!pumpRuns(p, fallM) || hp <= p.effectiveFallM) return 0;
+  return (pumpEfficiency(p, hp) * p.driveFlowM3s * p.effectiveFallM) / hp;
+}
+
+export interface LineSpec {
+  lengthM: number;
+  insideDiameterM: number;
+  roughnessM: number;
+  sumK: number;
+}
+
+/**
+ * A delivery line reduced to what the solver needs: L, D, ε (input or material
+ * table) and ΣK. Units: m. Example: 100 ft of ½" sch 40 PVC → { 30.48, 0.0158, 1.5e-6, 0 }.
+ * Reference: MATERIAL_PROPS (Munson Table 8.1, from memory).
+ */
+export function lineSpec(line: PipeRun): LineSpec {
+  return {
+    lengthM: line.lengthM,
+    insideDiameterM: line.insideDiameterM,
+    roughnessM: roughnessOf(line),
+    sumK: sumK(line.fittings as Fitting[]),
+  };
+}
+
+/**
+ * Losses in a line at a flow: Darcy-Weisbach with Colebrook plus ΣK·v²/(2g) (see pipeLoss).
+ * Units: flow m³/s, ν m²/s; heads m. Example: 1.78e-5 m³/s (1.07 L/min) in 30.48 m of ½" PVC at 10 °C:
+ * v = 0.0908 m/s, Re = 1098, f = 0.0583, h_f = 0.047 m.
+ * Reference: White, Fluid Mechanics, ch. 6.
+ */
+export function lineLoss(line: LineSpec, flowM3s: number, nu: number): PipeLoss {
+  return pipeLoss(flowM3s, line.lengthM, line.insideDiameterM, line.roughnessM, nu, line.sumK);
+}
+
+export interface ParallelSolution {
+  combinedFlowM3s: number;
+  pumpHeadM: number;
+  frictionHeadM: number;
+  minorHeadM: number;
+  deliveries: number[];
+  efficiencies: number[];
+  loss: PipeLoss;
+}
+
+/**
+ * Combined delivery of prepared pumps into one line against lift h, m³/s.
+ * `copies[i]` (default 1) runs that many identical copies of pump i.
+ * Worked example: two ½" rams (2 US gal/min each, H = 1.2192 m) into 30 m of
+ * ½" PVC, h = 8.8392 m: friction at the combined ≈ 1.1 L/min is a few cm, so
+ * S ≈ 2 × 537 mL/min.
+ */
+export function solveParallel(
+  pumps: readonly PreparedPump[], fallM: number, liftM: number, line: LineSpec, nu: number,
+  copies?: readonly number[],
+): ParallelSolution {
+  const total = (hp: number) => {
+    let s = 0;
+    for (let i = 0; i < pumps.length; i++) s += (copies?.[i] ?? 1) * pumpDelivery(pumps[i], hp, fallM);
+    return s;
+  };
+  const headAt = (S: number) => liftM + pipeHeadLoss(S, line.lengthM, line.insideDiameterM, line.roughnessM, nu, line.sumK);
+  // F(S) = total(head(S)) − S is decreasing; F(0) ≥ 0, F(S0) ≤ 0 with S0 = total(lift).
+  let a = 0;
+  let fa = total(liftM);
+  let b = fa;
+  let fb = total(headAt(b)) - b;
+  let S = b;
+  if (fa <= 0) S = 0;
+  else if (fb >= 0) S = b;
+  else {
+    let side = 0;
+    for (let i = 0; i < 100; i++) {
+      S = (a * fb - b * fa) / (fb - fa);
+      const fS = total(headAt(S)) - S;
+      if (Math.abs(fS) <= 1e-14 + 1e-10 * S || Math.abs(b - a) < 1e-15) break;
+      if (fS * fb > 0) {
+        b = S;
+        fb = fS;
+        if (side === -1) fa /= 2;
+        side = -1;
+      } else {
+        a = S;
+        fa = fS;
+        if (side === 1) fb /= 2;
+        side = 1;
+      }
+    }
+  }
+  const loss = lineLoss(line, S, nu);
+  const hp = liftM + loss.frictionHeadM + loss.minorHeadM;
+  const deliveries = pumps.map((p) => pumpDelivery(p, hp, fallM));
+  return {
+    combinedFlowM3s: deliveries.reduce((x, y, i) => x + (copies?.[i] ?? 1) * y, 0),
+    pumpHeadM: hp,
+    frictionHeadM: loss.frictionHeadM,
+    minorHeadM: loss.minorHeadM,
+    deliveries,
+    efficiencies: pumps.map((p) => (pumpRuns(p, fallM) ? pumpEfficiency(p, hp) : 0)),
+    loss,
+  };
+}
+
+/**
+ * Highest lift the array can reach, m: the largest maxLiftRatio·H_eff over its
+ * pumps. Parallel pumps add flow, not height, so this never grows with the
+ * number of pumps.
+ */
+export function arrayMaxLift(pumps: readonly PreparedPump[], fallM: number): number {
+  let best = 0;
+  for (const p of pumps) if (pumpRuns(p, fallM)) best = Math.max(best, maxLiftRatio(p.pumpType) * p.effectiveFallM);
+  return best;
+}

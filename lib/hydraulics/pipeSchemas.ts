@@ -1,0 +1,46 @@
+/**
+ * Schemas for a pipe run, shared by the calculators. Inputs are SI; a form
+ * that offers nominal sizes fills insideDiameterM and wallThicknessM from
+ * resolvePipe() in pipes.ts.
+ */
+import { z } from 'zod';
+import { fittingSchema } from './fittings';
+import { MATERIALS, MATERIAL_PROPS, type PipeMaterial } from './pipes';
+import { siNumber } from './schemaKit';
+
+/** Inside diameter of a pipe, m (5 mm to 300 mm). */
+export const insideDiameterM = () => siNumber({ min: 0.005, max: 0.3, unit: 'm' });
+
+export const pipeRunSchema = z.object({
+  /** length of the run, m */
+  lengthM: siNumber({ min: 0, minExclusive: true, max: 10000, unit: 'm' }),
+  insideDiameterM: insideDiameterM(),
+  material: z.enum(MATERIALS).default('pvc'),
+  /** wall thickness, m; needed for wave speed */
+  wallThicknessM: siNumber({ min: 0.0005, max: 0.05, unit: 'm' }).optional(),
+  /** absolute roughness ε, m; default from the material table */
+  roughnessM: siNumber({ min: 0, max: 0.01, unit: 'm' }).optional(),
+  /** Hazen-Williams C; default from the material table */
+  hazenWilliamsC: siNumber({ min: 40, max: 160, unit: '' }).optional(),
+  /** working pressure rating, Pa; default from the series table when known */
+  pressureRatingPa: siNumber({ min: 1e4, max: 1e8, unit: 'Pa' }).optional(),
+  /** fittings in the run (the drive pipe's entrance is counted separately) */
+  fittings: z.array(fittingSchema).max(50).default([]),
+});
+export type PipeRun = z.output<typeof pipeRunSchema>;
+
+/** A drive pipe: same fields, shorter limit on length (a drive pipe over 500 m is not a drive pipe). */
+export const drivePipeSchema = pipeRunSchema.extend({
+  lengthM: siNumber({ min: 0, minExclusive: true, max: 500, unit: 'm' }),
+});
+export type DrivePipe = z.output<typeof drivePipeSchema>;
+
+/** Roughness of a run, from the input or the material table, m. */
+export function roughnessOf(p: { roughnessM?: number; material: PipeMaterial }): number {
+  return p.roughnessM ?? MATERIAL_PROPS[p.material].roughnessM;
+}
+
+/** Hazen-Williams C of a run, from the input or the material table. */
+export function hazenCOf(p: { hazenWilliamsC?: number; material: PipeMaterial }): number {
+  return p.hazenWilliamsC ?? MATERIAL_PROPS[p.material].hazenWilliamsC;
+}

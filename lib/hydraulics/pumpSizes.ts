@@ -1,0 +1,50 @@
+/**
+ * Typical drive flow by pump (drive pipe) size.
+ *
+ * From memory: the ranges are the order of magnitude that ram handbooks and
+ * extension sheets give, roughly in proportion to the bore area (a ½-inch
+ * pump uses about 1–3 US gal/min, a 4-inch pump some 45–130); the actual
+ * drive flow of an installation depends on its fall, drive pipe and waste
+ * valve setting, so measure it, or estimate it for the site with
+ * estimateDriveFlow (ramCycle.ts). Used to flag a drive flow that is far
+ * out of line for the size.
+ */
+import type { NominalSize } from './pipes';
+import { toSI } from './units';
+
+/** [low, high] typical drive flow in US gal/min — from memory. */
+const RANGES_GPM: Record<NominalSize, readonly [number, number]> = {
+  '1/2': [1, 3],
+  '3/4': [2, 5],
+  '1': [3, 8],
+  '1-1/4': [5, 14],
+  '1-1/2': [7, 20],
+  '2': [12, 35],
+  '2-1/2': [18, 50],
+  '3': [25, 75],
+  '4': [45, 130],
+};
+
+export interface DriveFlowRange {
+  lowM3s: number;
+  highM3s: number;
+  source: string;
+}
+
+let table: Record<NominalSize, DriveFlowRange> | undefined;
+
+/** Typical drive flow range for each pump size, m³/s. Example: 1¼" → 5–14 US gal/min = 3.15e-4–8.83e-4 m³/s. */
+export function pumpSizeTable(): Record<NominalSize, DriveFlowRange> {
+  if (table) return table;
+  const t = {} as Record<NominalSize, DriveFlowRange>;
+  for (const [size, [lo, hi]] of Object.entries(RANGES_GPM) as [NominalSize, readonly [number, number]][]) {
+    t[size] = { lowM3s: toSI(lo, 'gal/min', 'flow'), highM3s: toSI(hi, 'gal/min', 'flow'), source: 'from memory' };
+  }
+  table = t;
+  return t;
+}
+
+/** Typical drive flow range of one size. */
+export function typicalDriveFlow(size: NominalSize): DriveFlowRange {
+  return pumpSizeTable()[size];
+}

@@ -1,0 +1,301 @@
+/**
+ * Stall check: from a site sheet and the symptoms, the likely causes,
+ * ranked, each with the reason worked out from the numbers and the guide
+ * that explains the fix.
+ */
+import { z } from 'zod';
+import { DRIVE_PIPE_GUIDES } from './drivePipeCheck';
+import { PUMP_TYPES, dAubuissonEfficiency, efficiencyBand, maxLiftRatio } from './efficiency';
+import { sumK, type Fitting } from './fittings';
+import { pipeLoss } from './friction';
+import { MATERIAL_PROPS, NOMINAL_SIZES, NOMINAL_LABELS } from './pipes';
+import { drivePipeSchema, pipeRunSchema, roughnessOf } from './pipeSchemas';
+import { typicalDriveFlow } from './pumpSizes';
+import { estimateDriveFlow } from './ramCycle';
+import { EngineInputError } from './errors';
+import { addRangeIssue, fallM, flowM3s, liftM, parseInput, siNumber, waterTempC } from './schemaKit';
+import { STALL_CAUSES, SYMPTOMS, type StallCauseCode, type Symptom } from './stallCauses';
+import { finish, step, tq, type CalcOutput, type Step, type Warning } from './steps';
+import { waveSpeed } from './transients';
+import { warn } from './warnings';
+import { G, waterProperties } from './water';
+
+export const siteSheetSchema = z.object({
+  fallM: fallM(),
+  liftM: liftM(),
+  drivePipe: drivePipeSchema,
+  /** flow the source can spare, m³/s */
+  sourceSpareFlowM3s: flowM3s().optional(),
+  /** measured drive flow of one pump, m³/s */
+  driveFlowM3s: flowM3s().optional(),
+  /** measured delivery of all pumps together, m³/s */
+  deliveredFlowM3s: flowM3s().optional(),
+  pumpSize: z.enum(NOMINAL_SIZES).optional(),
+  pumpCount: siNumber({ min: 1, max: 20, unit: '', integer: true }).default(1),
+  pumpType: z.enum(PUMP_TYPES).default('homemade'),
+  deliveryLine: pipeRunSchema.optional(),
+  beatsPerMinute: siNumber({ min: 1, max: 400, unit: 'beats/min' }).optional(),
+  /** depth of the drive pipe's mouth below the intake's water surface, m */
+  intakeSubmergenceM: siNumber({ min: 0, max: 10, unit: 'm' }).optional(),
+  wasteOutletSubmerged: z.boolean().optional(),
+  screenAtIntake: z.boolean().optional(),
+  frostRisk: z.boolean().optional(),
+  waterTempC: waterTempC(),
+});
+
+export const stallCheckSchema = z
+  .object({ site: siteSheetSchema, symptoms: z.array(z.enum(SYMPTOMS)).max(SYMPTOMS.length).default([]) })
+  .superRefine((v, ctx) => {
+    if (v.site.liftM <= v.site.fallM) {
+      addRangeIssue(ctx, ['site', 'liftM'], `must be greater than the fall (${v.site.fallM} m)`, { min: v.site.fallM, minExclusive: true, max: 1000, unit: 'm' });
+    }
+  });
+
+export type StallCheckInput = z.input<typeof stallCheckSchema>;
+
+export interface StallCause {
+  code: StallCauseCode;
+  title: string;
+  reason: string;
+  score: number;
+  guide: string;
+  /** true when the site sheet's numbers (not only the symptoms) point to this cause */
+  fromNumbers: boolean;
+}
+
+export interface StallCheckResults {
+  causes: StallCause[];
+  liftRatio: number;
+  lengthToFall: number;
+  lengthToDiameter: number;
+  /** drive flow of all pumps, measured or estimated, m³/s */
+  totalDriveFlowM3s: number;
+  driveFlowEstimated: boolean;
+  expectedDeliveryM3s: number;
+  expectedBeatsPerMinute: number;
+  measuredEfficiency?: number;
+  sourceShare?: number;
+}
+
+type Evidence = { state: 'problem' | 'ok' | 'unknown'; strength?: number; reason: string };
+
+/** Usual beat rate of small rams, beats per minute — common practice, no source. */
+const BPM_RANGE = [40, 120] as const;
+
+function score(code: StallCauseCode, symptoms: readonly Symptom[], ev: Evidence): number {
+  const weights = symptoms.map((s) => (STALL_CAUSES[code].symptoms as Partial<Record<Symptom, number>>)[s] ?? 0).filter((w) => w > 0);
+  const sym = weights.length ? Math.max(...weights) + 0.1 * (weights.length - 1) : 0;
+  let s: number;
+  if (ev.state === 'problem') s = 0.4 * (ev.strength ?? 1) + 0.6 * sym;
+  else if (ev.state === 'ok') s = 0.15 * sym;
+  else s = 0.5 * sym;
+  return Math.round(Math.min(1, s) * 1000) / 1000;
+}
+
+const f2 = (x: number, d = 2) => x.toFixed(d);
+const lpm = (q: number) => `${(q * 6e4).toFixed(2)} L/min`;
+
+/**
+ * Ranks the likely causes of a stall or weak delivery.
+ *
+ * Computed evidence: L/H and L/D against DRIVE_PIPE_GUIDES; total drive flow
+ * (measured, or estimated with estimateDriveFlow) against the source's spare
+ * flow; lift ratio h/H against the pump type's band; material stiffness
+ * (Korteweg wave speed); beat rate against 40–120 per minute and the model's
+ * rate; measured efficiency q·h/(Q·H) against the band; intake submergence
+ * against S = D(1 + 2.3·Fr), Fr = v/√(gD) (Hydraulic Institute ANSI/HI 9.8
+ * intake rule, from memory); fittings' head ΣK·v_c²/(2g); delivery-line loss.
+ * Score = 0.4·strength + 0.6·symptom weight when the numbers show a problem,
+ * 0.15·weight when they rule it out, 0.5·weight when unknown (0–1, sorted).
+ * Units: SI. Worked example: a cabin's ram on a seasonal creek, 4 ft fall,
+ * 29 ft lift, 20 ft of ½" HDPE drive pipe, "weak delivery": the flexible pipe
+ * (wave speed ≈ 310 m/s against ≈ 1450 m/s rigid) ranks first.
+ * Reference: as listed above; causes and guides in stallCauses.ts.
+ */
+export function runStallCheck(input: StallCheckInput): CalcOutput<StallCheckResults> {
+  const v = parseInput(stallCheckSchema, input);
+  const s = v.site;
+  const sym = v.symptoms;
+  const water = waterProperties(s.waterTempC);
+  const nu = water.kinematicViscosityM2s;
+  const H = s.fallM;
+  const h = s.liftM;
+  const dp = s.drivePipe;
+  const D = dp.insideDiameterM;
+  const L = dp.lengthM;
+  const mat = MATERIAL_PROPS[dp.material];
+  const k = sumK(dp.fittings as Fitting[]);
+  const steps: Step[] = [];
+  const warnings: Warning[] = [];
+  const ev = {} as Record<StallCauseCode, Evidence>;
+
+  const lh = L / H;
+  const ld = L / D;
+  steps.push(step('Drive pipe length against fall', '\\frac{L}{H}', `\\frac{${tq(L, 'm')}}{${tq(H, 'm')}}`, lh, ''));
+  const lhMin = Math.min(...DRIVE_PIPE_GUIDES.filter((g) => g.ratio === 'L/H').map((g) => g.min));
+  const lhMax = Math.max(...DRIVE_PIPE_GUIDES.filter((g) => g.ratio === 'L/H').map((g) => g.max));
+  const outLH = lh < lhMin || lh > lhMax;
+  const outLD = ld < 150 || ld > 1000;
+  ev['drive-pipe-outside-range'] = {
+    state: outLH || outLD ? 'problem' : 'ok',
+    reason: `The drive pipe is ${f2(L, 1)} m: ${f2(lh, 1)} times the fall (guides ${lhMin}–${lhMax}) and ${ld.toFixed(0)} times its bore (guide 150–1000)${outLH || outLD ? ', outside the usual range' : ', inside the usual range'}.`,
+  };
+
+  const eps = roughnessOf(dp);
+  const straight = estimateDriveFlow({ fallM: H, pumpHeadM: h, lengthM: L, insideDiameterM: D, roughnessM: eps, nu });
+  const actual = k > 0 ? estimateDriveFlow({ fallM: H, pumpHeadM: h, lengthM: L, insideDiameterM: D, roughnessM: eps, nu, fittingsK: k }) : straight;
+  const qEach = s.driveFlowM3s ?? actual.driveFlowM3s;
+  const totalDrive = qEach * s.pumpCount;
+  steps.push(step(s.driveFlowM3s === undefined ? 'Drive flow of all pumps (estimated)' : 'Drive flow of all pumps (measured)', 'Q = n\\,Q_1',
+    `Q = ${s.pumpCount} \\times ${tq(qEach, 'm³/s')}`, totalDrive, 'm³/s', 'flow'));
+
+  if (s.sourceSpareFlowM3s !== undefined) {
+    const share = totalDrive / s.sourceSpareFlowM3s;
+    ev['drive-flow-above-source'] = {
+      state: share > 0.9 ? 'problem' : 'ok',
+      strength: share > 1 ? 1 : 0.6,
+      reason: `The pumps use ${lpm(totalDrive)}${s.driveFlowM3s === undefined ? ' (estimated)' : ''}, ${(share * 100).toFixed(0)} % of the ${lpm(s.sourceSpareFlowM3s)} the source spares${share > 0.9 ? '; the intake draws down and sucks air' : ''}.`,
+    };
+  } else {
+    ev['drive-flow-above-source'] = { state: 'unknown', reason: `The pumps use about ${lpm(totalDrive)}; measure what the source spares in the driest month to compare.` };
+  }
+
+  const r = h / H;
+  const band = efficiencyBand(s.pumpType, r);
+  const rMax = maxLiftRatio(s.pumpType);
+  steps.push(step('Lift ratio', 'r = \\frac{h}{H}', `r = \\frac{${tq(h, 'm')}}{${tq(H, 'm')}}`, r, ''));
+  ev['lift-too-high'] = {
+    state: band.typical <= 0 || r > rMax / 2 ? 'problem' : 'ok',
+    strength: band.typical <= 0 ? 1 : 0.6,
+    reason: `The lift is ${f2(r, 1)} times the fall; a ${s.pumpType} ram is expected to manage up to about ${rMax} times, and its typical efficiency here is ${f2(band.typical)}.`,
+  };
+
+  const c = dp.wallThicknessM !== undefined ? waveSpeed(water.bulkModulusPa, water.densityKgM3, D, mat.youngsModulusPa, dp.wallThicknessM) : undefined;
+  const cRigid = Math.sqrt(water.bulkModulusPa / water.densityKgM3);
+  ev['flexible-drive-pipe'] = {
+    state: mat.rigid ? 'ok' : 'problem',
+    reason: mat.rigid
+      ? `The drive pipe is ${mat.label}, stiff enough to carry the pressure wave${c ? ` (wave speed ≈ ${c.toFixed(0)} m/s)` : ''}.`
+      : `The drive pipe is ${mat.label}: it stretches under the surge${c ? ` (wave speed ≈ ${c.toFixed(0)} m/s against ≈ ${cRigid.toFixed(0)} m/s in a rigid pipe)` : ''} and soaks up the energy the pump needs.`,
+  };
+
+  const bpmModel = actual.beatsPerMinute;
+  steps.push(step('Beat rate the model expects', 'n = \\frac{60}{t_a + t_d}', `n = \\frac{60}{${tq(actual.cycleTimeS, 's')}}`, bpmModel, ''));
+  const sizeRange = s.pumpSize ? typicalDriveFlow(s.pumpSize) : undefined;
+  if (s.beatsPerMinute !== undefined) {
+    const out = s.beatsPerMinute < BPM_RANGE[0] || s.beatsPerMinute > BPM_RANGE[1];
+    const fast = s.beatsPerMinute > BPM_RANGE[1];
+    ev['waste-valve-setting'] = {
+      state: out ? 'problem' : 'ok',
+      strength: 0.7,
+      reason: `It beats ${s.beatsPerMinute.toFixed(0)} times a minute (usual ${BPM_RANGE[0]}–${BPM_RANGE[1]}; the model expects about ${bpmModel.toFixed(0)} for this fall and drive pipe)${out ? (fast ? ': a short stroke or light valve shuts before the water gains speed' : ': a long stroke or heavy valve wastes water between beats') : ''}.`,
+    };
+  } else if (sizeRange && s.driveFlowM3s !== undefined && (s.driveFlowM3s > sizeRange.highM3s || s.driveFlowM3s < sizeRange.lowM3s)) {
+    ev['waste-valve-setting'] = {
+      state: 'problem', strength: 0.5,
+      reason: `The measured drive flow, ${lpm(s.driveFlowM3s)}, is outside the ${lpm(sizeRange.lowM3s)}–${lpm(sizeRange.highM3s)} typical of a ${NOMINAL_LABELS[s.pumpSize!]} pump (from memory); the waste valve's stroke or weight sets it.`,
+    };
+  } else {
+    ev['waste-valve-setting'] = { state: 'unknown', reason: `Count the beats per minute: the model expects about ${bpmModel.toFixed(0)} for this fall and drive pipe; far off that, reset the stroke and weight.` };
+  }
+
+  const expected = (band.typical * totalDrive * H) / h;
+  let measuredEff: number | undefined;
+  if (s.deliveredFlowM3s !== undefined && s.deliveredFlowM3s * h > totalDrive * H) {
+    if (s.driveFlowM3s !== undefined) {
+      const maxQ = (totalDrive * H) / h;
+      throw new EngineInputError([{ field: 'site.deliveredFlowM3s', message: `implies an efficiency above 1 with the measured drive flow; at this fall and lift it can be at most ${maxQ.toPrecision(4)} m³/s — check the measurements`, range: { min: 0, minExclusive: true, max: maxQ, unit: 'm³/s' } }]);
+    }
+    ev['delivery-valve-or-snifter'] = { state: 'unknown', reason: `It delivers ${lpm(s.deliveredFlowM3s)}, more than the estimated drive flow of ${lpm(totalDrive)} could lift; measure the drive flow at the waste valve.` };
+  } else if (s.deliveredFlowM3s !== undefined) {
+    measuredEff = dAubuissonEfficiency(totalDrive, s.deliveredFlowM3s, H, h);
+    steps.push(step("Measured efficiency (D'Aubuisson)", '\\eta_D = \\frac{q\\,h}{Q\\,H}',
+      `\\eta_D = \\frac{${tq(s.deliveredFlowM3s, 'm³/s')} \\times ${tq(h, 'm')}}{${tq(totalDrive, 'm³/s')} \\times ${tq(H, 'm')}}`, measuredEff, ''));
+    const low = measuredEff < band.low;
+    ev['delivery-valve-or-snifter'] = {
+      state: low ? 'problem' : 'ok', strength: 0.6,
+      reason: `It delivers ${lpm(s.deliveredFlowM3s)}, an efficiency of ${f2(measuredEff)} against a typical ${f2(band.low)}–${f2(band.high)}${low ? '; a leaking or sticking delivery valve returns water at every beat' : ''}.`,
+    };
+  } else {
+    ev['delivery-valve-or-snifter'] = { state: 'unknown', reason: `Expected delivery is about ${lpm(expected)}; measure it at the tank, and check the delivery valve seats and the snifter hole.` };
+  }
+
+  if (s.intakeSubmergenceM !== undefined) {
+    const fr = straight.fullFlowVelocityMs / Math.sqrt(G * D);
+    const need = D * (1 + 2.3 * fr);
+    steps.push(step('Intake submergence needed (HI 9.8)', 'S = D\\,(1 + 2.3\\,Fr),\\; Fr = \\frac{v}{\\sqrt{gD}}', `S = ${tq(D, 'm')} \\times (1 + 2.3 \\times ${tq(fr)})`, need, 'm', 'length'));
+    ev['air-in-drive-pipe'] = {
+      state: s.intakeSubmergenceM < need ? 'problem' : 'ok',
+      reason: `The drive pipe's mouth is ${f2(s.intakeSubmergenceM)} m under the surface; at ${f2(straight.fullFlowVelocityMs)} m/s it needs about ${f2(need)} m to keep a vortex from drawing air${s.intakeSubmergenceM < need ? '' : ' — enough'}.`,
+    };
+  } else {
+    ev['air-in-drive-pipe'] = { state: 'unknown', reason: 'Check that the drive pipe falls steadily with no high points, its joints are tight and its mouth is well under water.' };
+  }
+
+  ev['flooded-waste-outlet'] = s.wasteOutletSubmerged === undefined
+    ? { state: 'unknown', reason: 'Check that the waste water falls clear of the valve and the stream has not risen over it.' }
+    : { state: s.wasteOutletSubmerged ? 'problem' : 'ok', reason: s.wasteOutletSubmerged ? 'The waste outlet is under water: the valve cannot open fully against the backed-up water.' : 'The waste outlet discharges clear.' };
+  ev.debris = s.screenAtIntake === undefined
+    ? { state: 'unknown', reason: 'Look for leaves, grit or a frog in the intake, the drive pipe and both valves.' }
+    : { state: s.screenAtIntake ? 'ok' : 'problem', strength: 0.5, reason: s.screenAtIntake ? 'The intake is screened; still check the screen is clear.' : 'The intake has no screen, so leaves and grit reach the valves.' };
+  ev['waterlogged-air-chamber'] = { state: 'unknown', reason: 'Without air the chamber cannot cushion the beat: drain it and check the snifter or bladder.' };
+  ev['frozen-line'] = s.frostRisk === undefined
+    ? { state: 'unknown', reason: 'In frost, ice in an exposed delivery line stops the flow.' }
+    : { state: s.frostRisk ? 'problem' : 'ok', reason: s.frostRisk ? 'The site freezes: an exposed or shallow delivery line freezes first.' : 'The site sheet says it does not freeze.' };
+  ev['fall-too-small'] = {
+    state: H < 0.5 ? 'problem' : 'ok',
+    reason: `The fall is ${f2(H)} m; most rams need at least 0.5 m (Water for the World RWS.4.D.5).`,
+  };
+
+  const vc = straight.closureVelocityMs * (qEach / straight.driveFlowM3s);
+  const dH = (k * vc * vc) / (2 * G);
+  ev['fittings-in-drive-pipe'] = k > 0
+    ? { state: 'problem', strength: Math.min(1, (5 * dH) / H), reason: `Fittings in the drive pipe (ΣK = ${f2(k)}) take about ${f2(dH, 3)} m of the ${f2(H, 3)} m fall (${((dH / H) * 100).toFixed(1)} %) at the closing velocity of ${f2(vc)} m/s.` }
+    : { state: 'ok', reason: 'The site sheet lists no fittings in the drive pipe.' };
+
+  if (s.deliveryLine) {
+    const q = s.deliveredFlowM3s ?? expected;
+    const dl = s.deliveryLine;
+    const l = pipeLoss(q, dl.lengthM, dl.insideDiameterM, roughnessOf(dl), nu, sumK(dl.fittings as Fitting[]));
+    const loss = l.frictionHeadM + l.minorHeadM;
+    ev['delivery-line-friction'] = {
+      state: loss > 0.1 * h ? 'problem' : 'ok',
+      reason: `At ${lpm(q)} the delivery line loses ${f2(loss, 3)} m, ${((loss / h) * 100).toFixed(1)} % of the lift${loss > 0.1 * h ? ' — more than the 10 % usually allowed' : ''}.`,
+    };
+  } else {
+    ev['delivery-line-friction'] = { state: 'unknown', reason: 'Add the delivery line to the site sheet to check its friction.' };
+  }
+  ev['start-procedure'] = { state: 'unknown', reason: 'Fill the delivery line from below, then work the waste valve by hand until it keeps beating on its own.' };
+
+  const causes: StallCause[] = (Object.keys(ev) as StallCauseCode[])
+    .map((code) => ({
+      code, title: STALL_CAUSES[code].title, reason: ev[code].reason, score: score(code, sym, ev[code]),
+      guide: STALL_CAUSES[code].guide, fromNumbers: ev[code].state === 'problem',
+    }))
+    .filter((x) => x.score > 0)
+    .sort((a, b) => b.score - a.score || a.code.localeCompare(b.code));
+
+  if (s.wasteOutletSubmerged) {
+    warnings.push(warn('high-water-safety', 'A flooded pump means high water: streams rise fast and banks are slippery. Never work on the pump alone or in high water.'));
+  }
+  if (sym.includes('hammering') || sym.includes('waterlogged-air-chamber')) {
+    warnings.push(warn('air-chamber-safety', 'An air chamber holds stored energy: relieve the pressure before opening it, and never use glass or unrated parts.'));
+  }
+  if (sym.includes('delivery-stops-in-frost') || s.frostRisk) {
+    warnings.push(warn('frost-risk', 'Freezing splits pumps and pipe: drain what you cannot bury below the frost depth.'));
+  }
+
+  const results: StallCheckResults = {
+    causes,
+    liftRatio: r,
+    lengthToFall: lh,
+    lengthToDiameter: ld,
+    totalDriveFlowM3s: totalDrive,
+    driveFlowEstimated: s.driveFlowM3s === undefined,
+    expectedDeliveryM3s: expected,
+    expectedBeatsPerMinute: bpmModel,
+  };
+  if (measuredEff !== undefined) results.measuredEfficiency = measuredEff;
+  if (s.sourceSpareFlowM3s !== undefined) results.sourceShare = totalDrive / s.sourceSpareFlowM3s;
+  return finish(results, steps, warnings);
+}

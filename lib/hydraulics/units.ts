@@ -1,0 +1,391 @@
+/**
+ * Units at the edges. The engine computes in SI; this module turns what a
+ * person types ("4 ft", "2 gpm", "500 mL/min", "40 psi", "¾\"") into SI and
+ * SI back into display units for a US or metric reader.
+ *
+ * Unit library: js-quantities, chosen over convert-units because it parses
+ * compound units such as "gal/min", "L/s", "psi" and "cup/min" straight from
+ * strings, so inputs like "4 ft" or "2 gpm" are parsed directly, and because
+ * it reduces every unit to base units we can check.
+ *
+ * js-quantities 1.8 defines the US gallon (0.0037854118 m³), US cup
+ * (0.000236588238 m³) and psi (6894.76 Pa) as the US units, but rounded.
+ * NIST SP 811 (2008), Appendix B, and NIST Handbook 44 (Appendix C) give the
+ * exact definitions: 1 US gallon = 231 in³ (= 3.785411784 L), 1 US cup =
+ * 1/16 gallon = 14.4375 in³ (= 236.5882365 mL), 1 lbf = 1 lb × standard
+ * gravity = 0.45359237 kg × 9.80665 m/s², so 1 psi = 1 lbf/in² =
+ * 6894.757… Pa. We therefore re-express those units through js-quantities'
+ * own exact base units (inch = 0.0254 m, pound = 0.45359237 kg, gee =
+ * 9.80665 m/s², all exact in js-quantities) rather than trusting the
+ * rounded factors — no hand-written factor table.
+ */
+import Qty from 'js-quantities';
+import { EngineInputError } from './errors';
+
+export type QuantityKind =
+  | 'length'
+  | 'smallLength'
+  | 'flow'
+  | 'smallFlow'
+  | 'area'
+  | 'volume'
+  | 'dailyVolume'
+  | 'pressure'
+  | 'velocity'
+  | 'time'
+  | 'power'
+  | 'modulus'
+  | 'temperature'
+  | 'dimensionless';
+
+export type UnitSystem = 'US' | 'metric';
+
+/** The SI unit each kind is stored in (what schemas and results use). Temperature stays in °C. */
+export const SI_UNIT: Record<QuantityKind, string> = {
+  length: 'm',
+  smallLength: 'm',
+  flow: 'm^3/s',
+  smallFlow: 'm^3/s',
+  area: 'm^2',
+  volume: 'm^3',
+  dailyVolume: 'm^3/day',
+  pressure: 'Pa',
+  velocity: 'm/s',
+  time: 's',
+  power: 'W',
+  modulus: 'Pa',
+  temperature: 'tempC',
+  dimensionless: '',
+};
+
+/** Display unit per kind and system. */
+export const DISPLAY_UNITS: Record<QuantityKind, Record<UnitSystem, string>> = {
+  length: { US: 'ft', metric: 'm' },
+  smallLength: { US: 'in', metric: 'mm' },
+  flow: { US: 'gal/min', metric: 'L/min' },
+  smallFlow: { US: 'cup/min', metric: 'mL/min' },
+  area: { US: 'ft^2', metric: 'm^2' },
+  volume: { US: 'gal', metric: 'L' },
+  dailyVolume: { US: 'gal/day', metric: 'L/day' },
+  pressure: { US: 'psi', metric: 'kPa' },
+  velocity: { US: 'ft/s', metric: 'm/s' },
+  time: { US: 's', metric: 's' },
+  power: { US: 'W', metric: 'W' },
+  modulus: { US: 'GPa', metric: 'GPa' },
+  temperature: { US: 'tempF', metric: 'tempC' },
+  dimensionless: { US: '', metric: '' },
+};
+
+/** Units a unit picker may offer for each kind (all parseable by {@link toSI}). */
+export const UNIT_CHOICES: Record<QuantityKind, readonly string[]> = {
+  length: ['m', 'ft', 'in', 'mm', 'cm', 'yd'],
+  smallLength: ['mm', 'in', 'cm', 'm'],
+  flow: ['L/min', 'L/s', 'gal/min', 'gal/h', 'm^3/h', 'm^3/s', 'ft^3/s'],
+  smallFlow: ['mL/min', 'L/min', 'cup/min', 'gal/h', 'gal/min'],
+  area: ['m^2', 'ft^2', 'acre', 'hectare'],
+  volume: ['L', 'gal', 'm^3'],
+  dailyVolume: ['L/day', 'gal/day', 'm^3/day'],
+  pressure: ['kPa', 'psi', 'bar', 'Pa', 'MPa'],
+  velocity: ['m/s', 'ft/s'],
+  time: ['s', 'min', 'h', 'day'],
+  power: ['W'],
+  modulus: ['GPa', 'MPa'],
+  temperature: ['tempC', 'tempF'],
+  dimensionless: [''],
+};
+
+/** How units are shown to a reader. */
+const LABELS: Record<string, string> = {
+  'm^3/s': 'm³/s',
+  'm^3': 'm³',
+  'm^2': 'm²',
+  'ft^2': 'ft²',
+  'm^3/h': 'm³/h',
+  'm^3/day': 'm³/day',
+  'ft^3/s': 'ft³/s',
+  'gal/min': 'US gal/min',
+  'gal/h': 'US gal/h',
+  'gal/day': 'US gal/day',
+  gal: 'US gal',
+  'cup/min': 'US cups/min',
+  tempC: '°C',
+  tempF: '°F',
+};
+
+/** A unit as a reader should see it, e.g. "m^3/s" → "m³/s", "gal/min" → "US gal/min". */
+export function unitLabel(unit: string): string {
+  return LABELS[unit] ?? unit;
+}
+
+/** Spellings people type that js-quantities does not know, mapped to ones it does. Keys are lower case. */
+const ALIASES: Record<string, string> = {
+  gpm: 'gal/min',
+  usgpm: 'gal/min',
+  'us gpm': 'gal/min',
+  'us gal/min': 'gal/min',
+  gph: 'gal/h',
+  gpd: 'gal/day',
+  lpm: 'L/min',
+  lps: 'L/s',
+  lph: 'L/h',
+  lpd: 'L/day',
+  cfs: 'ft^3/s',
+  cms: 'm^3/s',
+  'cu ft': 'ft^3',
+  cuft: 'ft^3',
+  'cu ft/s': 'ft^3/s',
+  psig: 'psi',
+  kpa: 'kPa',
+  mpa: 'MPa',
+  gpa: 'GPa',
+  '"': 'in',
+  '″': 'in',
+  '”': 'in',
+  "''": 'in',
+  'in.': 'in',
+  "'": 'ft',
+  '′': 'ft',
+  '’': 'ft',
+  'ft.': 'ft',
+  '°c': 'tempC',
+  degc: 'tempC',
+  c: 'tempC',
+  '°f': 'tempF',
+  degf: 'tempF',
+  f: 'tempF',
+};
+
+const VULGAR: Record<string, string> = {
+  '½': ' 1/2', '⅓': ' 1/3', '⅔': ' 2/3', '¼': ' 1/4', '¾': ' 3/4',
+  '⅕': ' 1/5', '⅛': ' 1/8', '⅜': ' 3/8', '⅝': ' 5/8', '⅞': ' 7/8',
+};
+
+/** Exact re-definitions (NIST SP 811 B.8; NIST Handbook 44 App. C) through js-quantities' exact base units. */
+const EXACT_DEFINITIONS: Record<string, string> = {
+  '<gallon>': '231 in^3',
+  '<quart>': '57.75 in^3',
+  '<pint>': '28.875 in^3',
+  '<cup>': '14.4375 in^3',
+  '<fluid-ounce>': '1.8046875 in^3',
+  '<pound-force>': '1 lb*gee',
+  '<psi>': '1 lb*gee/in^2',
+};
+
+let corrections: Record<string, number> | undefined;
+
+/** Ratio exact/js-quantities for each re-defined unit, e.g. ≈ 0.99999999 for the gallon. */
+function correctionTable(): Record<string, number> {
+  if (corrections) return corrections;
+  const unitOf: Record<string, string> = {
+    '<gallon>': 'gal', '<quart>': 'qt', '<pint>': 'pint', '<cup>': 'cup',
+    '<fluid-ounce>': 'floz', '<pound-force>': 'lbf', '<psi>': 'psi',
+  };
+  const table: Record<string, number> = {};
+  for (const [name, def] of Object.entries(EXACT_DEFINITIONS)) {
+    table[name] = Qty(def).baseScalar / Qty(1, unitOf[name]).baseScalar;
+  }
+  corrections = table;
+  return table;
+}
+
+/** SI base value of a parsed quantity with the exact NIST definitions applied. */
+function exactBase(q: Qty): number {
+  const corr = correctionTable();
+  let v = q.baseScalar;
+  for (const u of q.numerator) v *= corr[u] ?? 1;
+  for (const u of q.denominator) v /= corr[u] ?? 1;
+  return v;
+}
+
+const canonicalCache = new Map<string, string>();
+
+function canonicalUnit(raw: string): string {
+  const hit = canonicalCache.get(raw);
+  if (hit !== undefined) return hit;
+  const u = canonicalise(raw);
+  if (canonicalCache.size < 2048) canonicalCache.set(raw, u);
+  return u;
+}
+
+function canonicalise(raw: string): string {
+  let u = raw.trim().replace(/\s+per\s+/gi, '/').replace(/\s*\/\s*/g, '/').replace(/\s+/g, ' ');
+  u = u.replace(/³/g, '^3').replace(/²/g, '^2').replace(/·/g, '*');
+  return ALIASES[u.toLowerCase()] ?? u;
+}
+
+const factorCache = new Map<string, number>();
+
+/** Exact SI base value of one `unit` (not for temperatures, which have an offset). */
+function baseFactor(unit: string): number {
+  const hit = factorCache.get(unit);
+  if (hit !== undefined) return hit;
+  const f = unit === '' ? 1 : exactBase(Qty(1, unit));
+  factorCache.set(unit, f);
+  return f;
+}
+
+const kindCache = new Map<string, boolean>();
+
+function checkKind(unit: string, kind: QuantityKind): boolean {
+  if (kind === 'dimensionless') return unit === '';
+  if (unit === '') return false;
+  const key = `${kind}|${unit}`;
+  const hit = kindCache.get(key);
+  if (hit !== undefined) return hit;
+  let ok: boolean;
+  try {
+    ok = Qty(1, unit).isCompatible(Qty(1, SI_UNIT[kind]));
+  } catch {
+    ok = false;
+  }
+  if (kindCache.size < 2048) kindCache.set(key, ok);
+  return ok;
+}
+
+/**
+ * Converts `value` in `unit` to the SI unit of `kind`.
+ * Example: toSI(2, 'gal/min', 'flow') = 2 × 231 × 0.0254³ / 60 = 1.26180394e-4 m³/s.
+ * Throws EngineInputError (field "unit") if the unit is unknown or of another kind.
+ */
+export function toSI(value: number, unit: string, kind: QuantityKind, field = 'unit'): number {
+  const u = canonicalUnit(unit);
+  if (!checkKind(u, kind)) {
+    throw new EngineInputError([{ field, message: `"${unit}" is not a unit of ${kindWords(kind)}; try ${UNIT_CHOICES[kind].filter(Boolean).join(', ')}` }]);
+  }
+  if (kind === 'temperature') return Qty(value, u).to('tempC').scalar;
+  return (value * baseFactor(u)) / baseFactor(SI_UNIT[kind]);
+}
+
+/** Converts an SI value of `kind` to `unit`. Example: fromSI(0.3048, 'ft', 'length') = 1. */
+export function fromSI(si: number, unit: string, kind: QuantityKind): number {
+  const u = canonicalUnit(unit);
+  if (!checkKind(u, kind)) throw new Error(`"${unit}" is not a unit of ${kindWords(kind)}`);
+  if (kind === 'temperature') return Qty(si, 'tempC').to(u).scalar;
+  return (si * baseFactor(SI_UNIT[kind])) / baseFactor(u);
+}
+
+function kindWords(kind: QuantityKind): string {
+  const words: Record<QuantityKind, string> = {
+    length: 'length', smallLength: 'length', flow: 'flow', smallFlow: 'flow', area: 'area', volume: 'volume',
+    dailyVolume: 'volume per day', pressure: 'pressure', velocity: 'velocity', time: 'time',
+    power: 'power', modulus: 'stiffness (pressure units)', temperature: 'temperature', dimensionless: 'a plain number',
+  };
+  return words[kind];
+}
+
+/** Splits "1 1/4 in", "3/4\"", "1.2 m", "1,000 gal" into number and unit text. */
+function splitNumber(text: string): { value: number; unit: string } | undefined {
+  let s = text.trim();
+  for (const [ch, rep] of Object.entries(VULGAR)) s = s.split(ch).join(rep);
+  s = s.replace(/⁄/g, '/').trim();
+  if (/^\d{1,3}(,\d{3})+(\.\d+)?/.test(s)) s = s.replace(/(\d),(?=\d{3})/g, '$1');
+  else s = s.replace(/^(\d+),(\d+)/, '$1.$2');
+  let m = /^(\d+)(?:\s+|-)(\d+)\/(\d+)\s*(.*)$/.exec(s);
+  if (m) return { value: Number(m[1]) + Number(m[2]) / Number(m[3]), unit: m[4] };
+  m = /^(\d+)\/(\d+)\s*(.*)$/.exec(s);
+  if (m) return { value: Number(m[1]) / Number(m[2]), unit: m[3] };
+  m = /^([+-]?(?:\d+\.?\d*|\.\d+)(?:e[+-]?\d+)?)\s*(.*)$/i.exec(s);
+  if (m) return { value: Number(m[1]), unit: m[2] };
+  return undefined;
+}
+
+/** A quantity as typed: "4 ft", or a number with its unit. A bare number is taken as already SI. */
+export type QuantityInput = string | number | { value: number; unit: string };
+
+/**
+ * Reads a quantity and returns its value in the SI unit of `kind`.
+ *
+ * Accepts "4 ft", "1.2 m", "2 gpm", "500 mL/min", "3 cups/min", "40 psi",
+ * "3/4 in", "¾\"", "1 1/4 in", "4'" or { value: 2, unit: 'gal/min' }.
+ * Worked example: parseQuantity('4 ft', 'length', 'fallM') = 4 × 0.3048 = 1.2192 m.
+ * Throws EngineInputError naming `field` when the text is not a finite
+ * number with a unit of that kind.
+ */
+export function parseQuantity(input: QuantityInput, kind: QuantityKind, field = 'value'): number {
+  let value: number;
+  let unit: string;
+  if (typeof input === 'number') {
+    value = input;
+    unit = SI_UNIT[kind];
+  } else if (typeof input === 'string') {
+    const parts = splitNumber(input);
+    if (!parts) {
+      throw new EngineInputError([{ field, message: `could not read "${input}" as a ${kindWords(kind)}; type a number and a unit, e.g. ${exampleFor(kind)}` }]);
+    }
+    value = parts.value;
+    unit = parts.unit;
+    if (unit === '' && kind !== 'dimensionless') {
+      throw new EngineInputError([{ field, message: `"${input}" needs a unit, e.g. ${exampleFor(kind)}` }]);
+    }
+  } else {
+    value = input.value;
+    unit = input.unit;
+  }
+  if (!Number.isFinite(value)) {
+    throw new EngineInputError([{ field, message: `must be a finite number, got ${String(value)}` }]);
+  }
+  const si = toSI(value, unit, kind, field);
+  if (!Number.isFinite(si)) throw new EngineInputError([{ field, message: 'is too large to use' }]);
+  return si;
+}
+
+function exampleFor(kind: QuantityKind): string {
+  const u = DISPLAY_UNITS[kind];
+  return kind === 'dimensionless' ? '0.6' : `"4 ${u.US}" or "1.2 ${u.metric}"`;
+}
+
+/** An SI value shown in a system's display unit. */
+export interface DisplayValue {
+  value: number;
+  /** unit as js-quantities spells it (pass back to fromDisplay/toSI) */
+  unit: string;
+  /** unit as a reader should see it */
+  label: string;
+}
+
+/** SI → display. Example: toDisplay('flow', 1.26180394e-4, 'US') → { value: 2, unit: 'gal/min', label: 'US gal/min' }. */
+export function toDisplay(kind: QuantityKind, si: number, system: UnitSystem): DisplayValue {
+  const unit = DISPLAY_UNITS[kind][system];
+  return { value: fromSI(si, unit, kind), unit, label: unitLabel(unit) };
+}
+
+/** Display → SI. Example: fromDisplay('pressure', 40, 'US') = 40 × 6894.757 = 275790.3 Pa. */
+export function fromDisplay(kind: QuantityKind, value: number, system: UnitSystem): number {
+  return toSI(value, DISPLAY_UNITS[kind][system], kind);
+}
+
+/** Field names that hold small lengths (diameters, walls, roughness, weir heads) shown in mm or in. */
+const SMALL_LENGTH_FIELD = /(Diameter|WallThickness|Roughness|NotchHead|Depth|DepthPerWeek|diameter|wallThickness|roughness|notchHead)M$/;
+
+/**
+ * The quantity kind of a schema or result field, from its SI suffix:
+ * …M3s flow, …M3PerDay daily volume, …M3 volume, …M2 area, …Pa pressure, …Ms velocity,
+ * …DiameterM / …WallThicknessM / …RoughnessM / …NotchHeadM / …DepthM small length, …M length,
+ * …S time, …W power, …TempC temperature. Unknown suffix → undefined.
+ */
+export function kindOfField(field: string): QuantityKind | undefined {
+  const leaf = field.split('.').pop() ?? field;
+  if (/M3s$/.test(leaf)) return 'flow';
+  if (/M3PerDay$/.test(leaf)) return 'dailyVolume';
+  if (/M3$/.test(leaf)) return 'volume';
+  if (/M2$/.test(leaf)) return 'area';
+  if (/ModulusPa$/.test(leaf)) return 'modulus';
+  if (/Pa$/.test(leaf)) return 'pressure';
+  if (/Ms$/.test(leaf)) return 'velocity';
+  if (SMALL_LENGTH_FIELD.test(leaf)) return 'smallLength';
+  if (/M$/.test(leaf)) return 'length';
+  if (/S$/.test(leaf)) return 'time';
+  if (/W$/.test(leaf)) return 'power';
+  if (/TempC$/.test(leaf)) return 'temperature';
+  return undefined;
+}
+
+/** Shows a field's SI value in a system's units; dimensionless when the field has no known kind. */
+export function fieldToDisplay(field: string, si: number, system: UnitSystem): DisplayValue {
+  return toDisplay(kindOfField(field) ?? 'dimensionless', si, system);
+}
+
+/** Reads a field's display value back to SI. */
+export function fieldFromDisplay(field: string, value: number, system: UnitSystem): number {
+  return fromDisplay(kindOfField(field) ?? 'dimensionless', value, system);
+}

@@ -1,0 +1,7 @@
+/**
+ * Version of the hydraulics engine. Saved with every worked calculation so a
+ * reader can tell which formulas and tables produced a stored result.
+ * Bump the minor number when a table or default changes numbers, the major
+ * number when a schema field changes meaning.
+ */
+export const ENGINE_VERSION = '1.0.0';

@@ -1,0 +1,73 @@
+/**
+ * Properties of fresh water and standard gravity, SI units.
+ *
+ * Table values (density, kinematic viscosity, speed of sound) follow
+ * Munson, Young & Okiishi, "Fundamentals of Fluid Mechanics", Table B.2
+ * "Physical properties of water (SI units)"; the values are recalled
+ * (from memory), not copied from a scan, and agree with other standard
+ * tables to the digits shown. The bulk modulus is derived from the table's
+ * speed of sound, K = ρ·c², which gives 2.19 GPa at 20 °C — the value
+ * Wylie & Streeter, "Fluid Transients" use for water (from memory).
+ */
+
+/** Standard acceleration of gravity, m/s² (exact; NIST SP 811, 2008, and NIST SP 330). */
+export const G = 9.80665;
+
+/** [°C, ρ kg/m³, ν m²/s, c m/s] — Munson/Young/Okiishi Table B.2 (from memory). */
+const TABLE: readonly (readonly [number, number, number, number])[] = [
+  [0, 999.9, 1.787e-6, 1403],
+  [5, 1000.0, 1.519e-6, 1427],
+  [10, 999.7, 1.306e-6, 1447],
+  [20, 998.2, 1.004e-6, 1481],
+  [30, 995.7, 8.009e-7, 1507],
+  [40, 992.2, 6.58e-7, 1526],
+];
+
+export interface WaterProperties {
+  temperatureC: number;
+  /** density ρ, kg/m³ */
+  densityKgM3: number;
+  /** kinematic viscosity ν, m²/s */
+  kinematicViscosityM2s: number;
+  /** speed of sound in unconfined water, m/s */
+  soundSpeedMs: number;
+  /** bulk modulus K = ρc², Pa */
+  bulkModulusPa: number;
+  /** specific weight γ = ρg, N/m³ */
+  specificWeightNm3: number;
+}
+
+const cache = new Map<number, WaterProperties>();
+
+/**
+ * Properties of water at a temperature, linearly interpolated in the table.
+ *
+ * Formula: p(T) = p₁ + (p₂ − p₁)(T − T₁)/(T₂ − T₁) between table rows; K = ρ·c²; γ = ρ·g.
+ * Parameters: temperatureC in °C, 0 ≤ T ≤ 40 (clamped to that range).
+ * Worked example: T = 15 °C lies halfway between 10 and 20 °C, so
+ * ρ = (999.7 + 998.2)/2 = 998.95 kg/m³ and ν = (1.306 + 1.004)/2 × 10⁻⁶ = 1.155 × 10⁻⁶ m²/s.
+ * Reference: Munson, Young & Okiishi, Fundamentals of Fluid Mechanics, Table B.2 (from memory).
+ */
+export function waterProperties(temperatureC = 10): WaterProperties {
+  const t = Math.min(40, Math.max(0, Number.isFinite(temperatureC) ? temperatureC : 10));
+  const hit = cache.get(t);
+  if (hit) return hit;
+  let i = 0;
+  while (i < TABLE.length - 2 && TABLE[i + 1][0] < t) i++;
+  const a = TABLE[i];
+  const b = TABLE[i + 1];
+  const w = (t - a[0]) / (b[0] - a[0]);
+  const lerp = (k: 1 | 2 | 3) => a[k] + (b[k] - a[k]) * w;
+  const rho = lerp(1);
+  const c = lerp(3);
+  const props: WaterProperties = {
+    temperatureC: t,
+    densityKgM3: rho,
+    kinematicViscosityM2s: lerp(2),
+    soundSpeedMs: c,
+    bulkModulusPa: rho * c * c,
+    specificWeightNm3: rho * G,
+  };
+  if (cache.size < 512) cache.set(t, props);
+  return props;
+}

@@ -1,0 +1,52 @@
+import { describe, expect, it } from 'vitest';
+import { DRIVE_PIPE_GUIDES, EngineInputError, checkDrivePipe, resolvePipe, toSI, waterProperties } from '@/lib/hydraulics';
+import { FALL, LIFT, drivePipe, ft } from './fixtures';
+
+describe('drive pipe check', () => {
+  const r = checkDrivePipe({ fallM: FALL, liftM: LIFT, drivePipe: drivePipe('1') });
+  it('length against fall and bore', () => {
+    // arithmetic: 20 ft / 4 ft = 5; 6.096 m / 0.026645 m = 228.8
+    expect(r.results.lengthToFall).toBeCloseTo(5, 12);
+    expect(r.results.lengthToDiameter).toBeCloseTo(228.8, 1);
+    expect(r.results.guides.every((g) => g.within)).toBe(true);
+  });
+  it('cites the guidance and where sources disagree', () => {
+    // L/H 3–12 (US extension publications), 5–12 (handbooks), L/D 150–1000 (Calvert) — all from memory
+    expect(DRIVE_PIPE_GUIDES.map((g) => [g.min, g.max])).toEqual([[3, 12], [5, 12], [150, 1000]]);
+    const between = checkDrivePipe({ fallM: FALL, drivePipe: { ...drivePipe('1'), lengthM: ft(16) } });
+    expect(between.warnings.map((w) => w.code)).toContain('drive-guides-disagree');
+  });
+  it('wave speed, surge and round trip follow Korteweg and Joukowsky', () => {
+    const w = waterProperties(10);
+    const p = resolvePipe('pvc-sch40', '1');
+    // Korteweg, as in Wylie & Streeter (1993): c = √((K/ρ)/(1 + KD/(Ee))) with E = 2.76 GPa (ASTM D1784, from memory)
+    const c = Math.sqrt(w.bulkModulusPa / w.densityKgM3 / (1 + (w.bulkModulusPa * p.insideDiameterM) / (2.76e9 * p.wallThicknessM)));
+    expect(r.results.waveSpeedMs).toBeCloseTo(c, 9);
+    expect(c).toBeGreaterThan(500); // thick-walled 1" sch 40 PVC, ≈ 548 m/s
+    // Joukowsky (1900): Δp = ρ·c·v₀
+    expect(r.results.surgePa).toBeCloseTo(w.densityKgM3 * c * r.results.fullFlowVelocityMs, 6);
+    expect(r.results.roundTripS).toBeCloseTo((2 * ft(20)) / c, 12);
+    expect(r.results.peakPressurePa).toBeCloseTo(r.results.staticPressurePa + r.results.surgePa, 6);
+    // 1" sch 40 PVC is rated 450 psi (ASTM D1785, from memory)
+    expect(r.results.ratingMargin).toBeCloseTo(toSI(450, 'psi', 'pressure') / r.results.peakPressurePa, 9);
+  });
+  it('warns when the surge exceeds the rating, deferring to codes and professionals', () => {
+    const weak = checkDrivePipe({ fallM: 20, drivePipe: { ...drivePipe('1'), lengthM: 100, pressureRatingPa: toSI(100, 'psi', 'pressure') } });
+    const w = weak.warnings.find((x) => x.code === 'surge-exceeds-rating');
+    expect(w).toBeDefined();
+    expect(w!.severity).toBe('danger');
+    expect(w!.message).toMatch(/local codes/);
+    expect(w!.message).toMatch(/licensed plumber or engineer/);
+  });
+  it('flags flexible pipe', () => {
+    const hd = checkDrivePipe({ fallM: FALL, drivePipe: drivePipe('1', 'hdpe-dr11') });
+    expect(hd.results.rigid).toBe(false);
+    expect(hd.results.waveSpeedMs).toBeLessThan(400);
+    expect(hd.warnings.map((w) => w.code)).toContain('flexible-drive-pipe');
+  });
+  it('needs wall and rating', () => {
+    const noWall: Record<string, unknown> = { ...drivePipe('1') };
+    delete noWall.wallThicknessM;
+    expect(() => checkDrivePipe({ fallM: FALL, drivePipe: noWall as never })).toThrow(EngineInputError);
+  });
+});
