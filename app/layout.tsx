@@ -6,6 +6,7 @@ import '@fontsource/literata/600.css';
 import './globals.css';
 import { SiteHeader } from '@/components/SiteHeader';
 import { SiteFooter } from '@/components/SiteFooter';
+import { UnitsProvider } from '@/components/units/UnitsProvider';
 import { palette } from '@/tailwind.config';
 import { SITE_DESCRIPTION, SITE_NAME, siteUrl } from '@/lib/site';
 
@@ -33,11 +34,13 @@ export default function RootLayout({ children }: { children: ReactNode }) {
         <a href="#main" className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:z-50 focus:rounded focus:bg-limestone-50 focus:px-3 focus:py-2">
           Skip to content
         </a>
-        <SiteHeader />
-        <main id="main" className="mx-auto w-full max-w-5xl flex-1 px-4 py-6">
-          {children}
-        </main>
-        <SiteFooter />
+        <UnitsProvider>
+          <SiteHeader />
+          <main id="main" className="mx-auto w-full max-w-5xl flex-1 px-4 py-6">
+            {children}
+          </main>
+          <SiteFooter />
+        </UnitsProvider>
       </body>
     </html>
   );

@@ -1,5 +1,6 @@
 import Link from 'next/link';
 import { Logo } from './Logo';
+import { UnitSwitch } from './units/UnitSwitch';
 
 const NAV = [
   { href: '/guides', label: 'Guides' },
@@ -27,7 +28,9 @@ export function SiteHeader() {
             ))}
           </ul>
         </nav>
-        <form action="/search" method="get" role="search" className="ml-auto flex min-w-0 flex-1 justify-end sm:flex-none">
+        <div className="ml-auto flex min-w-0 flex-1 items-center justify-end gap-3 sm:flex-none">
+        <UnitSwitch />
+        <form action="/search" method="get" role="search" className="flex min-w-0 flex-1 justify-end sm:flex-none">
           <label htmlFor="site-search" className="sr-only">
             Search Clackwater
           </label>
@@ -39,6 +42,7 @@ export function SiteHeader() {
             className="w-full min-w-0 rounded-md border border-creek-400 bg-creek-800 px-3 py-1.5 text-sm text-limestone-50 placeholder:text-creek-200 sm:w-64"
           />
         </form>
+        </div>
       </div>
     </header>
   );

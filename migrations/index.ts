@@ -1,5 +1,6 @@
 import type { QueryInterface } from 'sequelize';
 import * as coreTables from './001-core-tables';
+import * as guides from './002-guides';
 
 type Step = (params: { context: QueryInterface }) => Promise<void>;
 
@@ -9,4 +10,5 @@ type Step = (params: { context: QueryInterface }) => Promise<void>;
  */
 export const migrations: { name: string; up: Step; down: Step }[] = [
   { name: '001-core-tables', ...coreTables },
+  { name: '002-guides', ...guides },
 ];

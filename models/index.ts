@@ -5,8 +5,10 @@ import { Tag } from './Tag';
 import { Question } from './Question';
 import { Answer } from './Answer';
 import { QuestionTag } from './QuestionTag';
+import { SafetyCheck } from './SafetyCheck';
+import { WorkedCalculation } from './WorkedCalculation';
 
-export { User, Tag, Question, Answer, QuestionTag };
+export { User, Tag, Question, Answer, QuestionTag, SafetyCheck, WorkedCalculation };
 
 const initialised = new WeakSet<Sequelize>();
 
@@ -18,6 +20,8 @@ export function initModels(sequelize: Sequelize = getSequelize()) {
     Question.initModel(sequelize);
     Answer.initModel(sequelize);
     QuestionTag.initModel(sequelize);
+    SafetyCheck.initModel(sequelize);
+    WorkedCalculation.initModel(sequelize);
 
     Question.belongsTo(User, { as: 'author', foreignKey: 'authorId' });
     User.hasMany(Question, { as: 'questions', foreignKey: 'authorId' });
@@ -26,7 +30,9 @@ export function initModels(sequelize: Sequelize = getSequelize()) {
     Question.hasMany(Answer, { as: 'answers', foreignKey: 'questionId' });
     Question.belongsToMany(Tag, { through: QuestionTag, as: 'tags', foreignKey: 'questionId', otherKey: 'tagId' });
     Tag.belongsToMany(Question, { through: QuestionTag, as: 'questions', foreignKey: 'tagId', otherKey: 'questionId' });
+    SafetyCheck.belongsTo(User, { as: 'expert', foreignKey: 'expertId' });
+    WorkedCalculation.belongsTo(User, { as: 'author', foreignKey: 'authorId' });
     initialised.add(sequelize);
   }
-  return { sequelize, User, Tag, Question, Answer, QuestionTag };
+  return { sequelize, User, Tag, Question, Answer, QuestionTag, SafetyCheck, WorkedCalculation };
 }

@@ -1,15 +1,30 @@
 import type { Metadata } from 'next';
-import { ComingSoon } from '@/components/ComingSoon';
+import Link from 'next/link';
+import { CALCULATOR_CATALOGUE } from '@/lib/calculators-catalogue';
 
-export const metadata: Metadata = { title: 'Calculators' };
+export const metadata: Metadata = {
+  title: 'Calculators',
+  description: 'Yield estimate, array planner, drive pipe check, delivery line, source flow, demand and storage, and the stall check.',
+};
 
 export default function CalculatorsPage() {
   return (
-    <ComingSoon title="Calculators">
-      <p>
-        The yield estimate, array planner, drive pipe check, delivery line, source flow, demand and storage calculators
-        and the stall check are being built.
+    <div className="flex flex-col gap-4">
+      <h1 className="font-serif text-3xl font-semibold">Calculators</h1>
+      <p className="cw-prose cw-muted">
+        Every calculator shows its working, so you can check each number by hand. They are a guide for planning, not a
+        substitute for local codes or a licensed plumber or engineer.
       </p>
-    </ComingSoon>
+      <ul className="grid gap-3 sm:grid-cols-2">
+        {CALCULATOR_CATALOGUE.map((c) => (
+          <li key={c.id}>
+            <Link href={`/calculators/${c.id}`} className="cw-card block h-full no-underline hover:border-clay">
+              <h2 className="font-semibold text-clay-600 dark:text-clay-300">{c.name}</h2>
+              <p className="cw-muted mt-1 text-sm">{c.line}</p>
+            </Link>
+          </li>
+        ))}
+      </ul>
+    </div>
   );
 }

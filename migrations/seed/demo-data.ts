@@ -155,3 +155,49 @@ export const demoQuestions: DemoQuestion[] = [
     ],
   },
 ];
+
+/** Experts' safety checks on the guides. One is stale: the guide changed after it. */
+export const demoSafetyChecks: {
+  guide: string;
+  expert: string;
+  verdict: 'sound' | 'needs changes';
+  notes: string;
+  daysAgo: number;
+  stale?: boolean;
+  staleBecause?: string;
+}[] = [
+  { guide: 'how-a-ram-pump-works', expert: 'ironwheel_builds', verdict: 'sound', daysAgo: 6, notes: 'Cycle description matches what I see on the bench. The air chamber caution is in the right place.' },
+  { guide: 'the-drive-pipe', expert: 'quarry_lane_valves', verdict: 'needs changes', daysAgo: 40, stale: true, staleBecause: 'the surge section was added', notes: 'Needs a plain statement that a flexible drive pipe soaks up the surge, and a caution on pressure ratings.' },
+  { guide: 'the-drive-pipe', expert: 'quarry_lane_valves', verdict: 'sound', daysAgo: 20, stale: true, staleBecause: 'the fittings section was rewritten', notes: 'Surge caution added; the length guidance now says where sources disagree.' },
+  { guide: 'first-start-and-tuning', expert: 'ironwheel_builds', verdict: 'sound', daysAgo: 9, notes: 'One change at a time, timed beats: good advice. Stand clear of the waste valve on first start.' },
+  { guide: 'care-frost-floods-and-water-rights', expert: 'quarry_lane_valves', verdict: 'sound', daysAgo: 3, notes: 'Drinking-water and permit sections defer to the right authorities.' },
+  { guide: 'will-a-ram-meet-my-demand', expert: 'ironwheel_builds', verdict: 'needs changes', daysAgo: 12, notes: 'The livestock figures are per head per day; say that hot weather can double them.' },
+];
+
+/** Saved worked calculations; fixed ids so README and tests can link to them. */
+export const demoCalculations: { publicId?: string; tool: string; title: string; author: string; daysAgo: number; inputs: Record<string, string> }[] = [
+  {
+    publicId: 'FerncombeY1',
+    tool: 'yield-estimate',
+    title: 'Ferncombe: one ½-inch pump at 29 ft',
+    author: 'ironwheel_builds',
+    daysAgo: 2,
+    inputs: { fall: '4 ft', lift: '29 ft', driveFlow: '2 gal/min', pumpType: 'homemade' },
+  },
+  {
+    publicId: 'HighcragAP2',
+    tool: 'array-planner',
+    title: 'Highcrag far paddock: two ½-inch pumps side by side',
+    author: 'quarry_lane_valves',
+    daysAgo: 5,
+    inputs: { mode: 'parallel', pumps: '2', fall: '4 ft', lift: '30 ft', driveFlowEach: '2 gal/min', driveLength: '24 ft', driveSize: '1/2', driveMaterial: 'pvc-sch40', extraElbows: '0', deliveryLength: '300 ft', deliverySize: '3/4', deliveryMaterial: 'hdpe-dr11', sourceFlow: '8 gal/min' },
+  },
+  {
+    publicId: 'SorrelDL400',
+    tool: 'delivery-line',
+    title: 'Sorrel Creek cabin: 400 ft of ½-inch line',
+    author: 'ironwheel_builds',
+    daysAgo: 17,
+    inputs: { flow: '1 L/min', lift: '45 ft', length: '400 ft', size: '1/2', material: 'hdpe-dr11' },
+  },
+];

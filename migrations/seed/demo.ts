@@ -1,6 +1,9 @@
 import type { Sequelize } from 'sequelize';
 import { initModels } from '@/models';
-import { demoQuestions, demoTags, demoUsers } from './demo-data';
+import { contentHash, readGuideFile } from '@/lib/guides/content';
+import { computeFromForm } from '@/components/calculators/recompute';
+import { newPublicId } from '@/lib/calculations/store';
+import { demoCalculations, demoQuestions, demoSafetyChecks, demoTags, demoUsers } from './demo-data';
 
 const DAY = 86_400_000;
 
@@ -9,7 +12,7 @@ const DAY = 86_400_000;
  * nothing when the database already holds members (a second `npm start`).
  */
 export async function seedDemo(sequelize: Sequelize, now = new Date()): Promise<boolean> {
-  const { User, Tag, Question, Answer, QuestionTag } = initModels(sequelize);
+  const { User, Tag, Question, Answer, QuestionTag, SafetyCheck, WorkedCalculation } = initModels(sequelize);
   if ((await User.count()) > 0) return false;
 
   await sequelize.transaction(async (transaction) => {
@@ -38,6 +41,40 @@ export async function seedDemo(sequelize: Sequelize, now = new Date()): Promise<
           { transaction },
         );
       }
+    }
+
+    // Safety checks are tied to the guide file's hash as it is now; a "stale" one
+    // records the hash of an earlier wording, so the guide shows it changed since.
+    for (const c of demoSafetyChecks) {
+      const guide = readGuideFile(c.guide);
+      if (!guide) continue;
+      const hash = c.stale ? contentHash(`${c.guide}: an earlier version, before ${c.staleBecause}`) : guide.hash;
+      const at = new Date(now.getTime() - c.daysAgo * DAY);
+      await SafetyCheck.create(
+        { guideSlug: c.guide, contentHash: hash, expertId: must(userId, c.expert), verdict: c.verdict, notes: c.notes, createdAt: at, updatedAt: at },
+        { transaction },
+      );
+    }
+
+    // Worked calculations are computed by the engine at seed time, like any saved one.
+    for (const c of demoCalculations) {
+      const out = computeFromForm(c.tool, c.inputs);
+      if (!out.ok) throw new Error(`demo calculation ${c.title}: ${out.message}`);
+      const at = new Date(now.getTime() - c.daysAgo * DAY);
+      await WorkedCalculation.create(
+        {
+          publicId: c.publicId ?? newPublicId(),
+          tool: c.tool,
+          inputs: c.inputs,
+          results: out.output.results as Record<string, unknown>,
+          engineVersion: out.engineVersion,
+          title: c.title,
+          authorId: must(userId, c.author),
+          createdAt: at,
+          updatedAt: at,
+        },
+        { transaction },
+      );
     }
   });
   return true;

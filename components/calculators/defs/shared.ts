@@ -1,0 +1,59 @@
+import {
+  NOMINAL_LABELS,
+  NOMINAL_SIZES,
+  PIPE_SERIES,
+  parseNominalSize,
+  resolvePipe,
+  type NominalSize,
+  type PipeSeries,
+} from '@/lib/hydraulics';
+import type { FieldDef } from '../kit/types';
+
+export const SERIES_LABELS: Record<PipeSeries, string> = {
+  'steel-sch40': 'Steel, schedule 40',
+  'steel-sch80': 'Steel, schedule 80',
+  'pvc-sch40': 'PVC, schedule 40',
+  'pvc-sch80': 'PVC, schedule 80',
+  'hdpe-dr9': 'HDPE, DR 9',
+  'hdpe-dr11': 'HDPE, DR 11',
+  'hdpe-dr17': 'HDPE, DR 17',
+};
+
+export const sizeOptions = NOMINAL_SIZES.map((s) => ({ value: s, label: NOMINAL_LABELS[s] }));
+export const seriesOptions = PIPE_SERIES.map((s) => ({ value: s, label: SERIES_LABELS[s] }));
+
+export const normalizeSize = (raw: string) => parseNominalSize(raw) ?? raw;
+export const normalizeSeries = (raw: string) => {
+  const r = raw.trim().toLowerCase();
+  if ((PIPE_SERIES as readonly string[]).includes(r)) return r;
+  if (r === 'steel' || r === 'galvanized' || r === 'galvanised') return 'steel-sch40';
+  if (r === 'pvc') return 'pvc-sch40';
+  if (r === 'hdpe' || r === 'poly') return 'hdpe-dr11';
+  return r;
+};
+
+/** Length, nominal size and series of one pipe run, under `prefix` (an engine field such as "drivePipe"). */
+export function pipeFields(prefix: string, props: { length: string; size: string; series: string }, label: string): FieldDef[] {
+  return [
+    { type: 'quantity', name: `${prefix}.lengthM`, prop: props.length, label: `${label} length`, qty: 'length' },
+    { type: 'select', name: `${prefix}.nominal`, prop: props.size, label: `${label} size (nominal)`, options: sizeOptions, normalize: normalizeSize },
+    { type: 'select', name: `${prefix}.series`, prop: props.series, label: `${label} material`, options: seriesOptions, normalize: normalizeSeries },
+  ];
+}
+
+/** Replaces { nominal, series } with the inside diameter, wall and rating from the schedule tables. */
+export function resolvePipeRun(run: unknown, extra: Record<string, unknown> = {}) {
+  const r = (run ?? {}) as Record<string, unknown>;
+  const { nominal, series, ...rest } = r;
+  const spec = resolvePipe(series as PipeSeries, nominal as NominalSize);
+  return {
+    ...rest,
+    ...extra,
+    material: spec.material,
+    insideDiameterM: spec.insideDiameterM,
+    wallThicknessM: spec.wallThicknessM,
+    pressureRatingPa: spec.pressureRatingPa,
+  };
+}
+
+export const yesNo = (b: boolean) => (b ? 'yes' : 'no');

@@ -1,0 +1,88 @@
+import { NOMINAL_LABELS, NOMINAL_SIZES, runStallCheck, SYMPTOM_LABELS, SYMPTOMS, type StallCheckResults } from '@/lib/hydraulics';
+import type { CalculatorDef } from '../kit/types';
+import { normalizeSeries, normalizeSize, resolvePipeRun, seriesOptions, sizeOptions } from './shared';
+
+/** Words people and older links use for a symptom → the engine's code. */
+const SYMPTOM_ALIASES: Record<string, string> = { 'frost-stopped': 'delivery-stops-in-frost' };
+const normalizeSymptoms = (raw: string) =>
+  raw
+    .split(',')
+    .map((s) => s.trim())
+    .map((s) => SYMPTOM_ALIASES[s] ?? s)
+    .filter((s) => (SYMPTOMS as readonly string[]).includes(s))
+    .join(',');
+
+const triState = [
+  { value: '', label: 'not known' },
+  { value: 'yes', label: 'yes' },
+  { value: 'no', label: 'no' },
+];
+
+export const stallCheckDef: CalculatorDef<StallCheckResults> = {
+  id: 'stall-check',
+  title: 'Stall check',
+  blurb: 'Why a ram stops cycling or delivers less: likely causes, worked from your site sheet.',
+  guide: 'when-it-stops-cycling',
+  fields: [
+    { type: 'checks', name: 'symptoms', prop: 'symptoms', label: 'What it does', options: SYMPTOMS.map((s) => ({ value: s, label: SYMPTOM_LABELS[s] })), normalize: normalizeSymptoms },
+    { type: 'quantity', name: 'site.fallM', prop: 'fall', label: 'Fall', qty: 'length' },
+    { type: 'quantity', name: 'site.liftM', prop: 'lift', label: 'Lift', qty: 'length' },
+    { type: 'quantity', name: 'site.drivePipe.lengthM', prop: 'driveLength', label: 'Drive pipe length', qty: 'length' },
+    { type: 'select', name: 'site.drivePipe.nominal', prop: 'driveSize', label: 'Drive pipe size', options: sizeOptions, normalize: normalizeSize },
+    { type: 'select', name: 'site.drivePipe.series', prop: 'driveMaterial', label: 'Drive pipe material', options: seriesOptions, normalize: normalizeSeries },
+    { type: 'select', name: 'site.pumpSize', prop: 'pumpSize', label: 'Pump size', options: NOMINAL_SIZES.map((s) => ({ value: s, label: NOMINAL_LABELS[s] })), normalize: normalizeSize },
+    { type: 'number', name: 'site.pumpCount', prop: 'pumps', label: 'Pumps', min: 1, max: 20, step: 1 },
+    { type: 'quantity', name: 'site.sourceSpareFlowM3s', prop: 'sourceFlow', label: 'Flow the source can spare (optional)', qty: 'flow' },
+    { type: 'quantity', name: 'site.driveFlowM3s', prop: 'driveFlow', label: 'Measured drive flow of one pump (optional)', qty: 'flow' },
+    { type: 'quantity', name: 'site.deliveredFlowM3s', prop: 'delivered', label: 'Measured delivery (optional)', qty: 'smallFlow' },
+    { type: 'number', name: 'site.beatsPerMinute', prop: 'bpm', label: 'Beats per minute (optional)', min: 1, max: 400 },
+    { type: 'select', name: 'site.wasteOutletSubmerged', prop: 'wasteFlooded', label: 'Waste valve outlet under water', options: triState },
+    { type: 'select', name: 'site.screenAtIntake', prop: 'screen', label: 'Screen at the intake', options: triState },
+    { type: 'select', name: 'site.frostRisk', prop: 'frost', label: 'Freezing weather at the site', options: triState },
+  ],
+  defaults: { fall: '4 ft', lift: '29 ft', driveLength: '24 ft', driveSize: '1/2', driveMaterial: 'pvc-sch40', pumpSize: '1/2', pumps: '1' },
+  toInput: (v) => {
+    const site = { ...((v.site ?? {}) as Record<string, unknown>) };
+    for (const k of ['wasteOutletSubmerged', 'screenAtIntake', 'frostRisk']) {
+      if (site[k] === 'yes') site[k] = true;
+      else if (site[k] === 'no') site[k] = false;
+      else delete site[k];
+    }
+    site.drivePipe = resolvePipeRun(site.drivePipe);
+    const symptoms = normalizeSymptoms(((v.symptoms as string[] | undefined) ?? []).join(','));
+    return { site, symptoms: symptoms ? symptoms.split(',') : [] };
+  },
+  run: (input) => runStallCheck(input as never),
+  rows: (r) => [
+    { label: 'Expected delivery', value: r.expectedDeliveryM3s, qty: 'smallFlow' },
+    { label: `Drive flow of all pumps${r.driveFlowEstimated ? ' (estimated)' : ''}`, value: r.totalDriveFlowM3s, qty: 'flow' },
+    { label: 'Lift ratio h/H', value: r.liftRatio },
+    { label: 'Drive pipe L/H', value: r.lengthToFall },
+    { label: 'Expected beats per minute', value: r.expectedBeatsPerMinute },
+  ],
+  extra: (r) =>
+    r.causes.length === 0 ? (
+      <p className="text-sm">Nothing in these numbers points to a cause. Tick what the pump does to rank the likely ones.</p>
+    ) : (
+      <ol className="flex list-none flex-col gap-2 pl-0" aria-label="Likely causes" data-testid="stall-causes">
+        {r.causes.slice(0, 6).map((c, i) => (
+          <li key={c.code} className="rounded-md border border-limestone-300 p-2 text-sm dark:border-creek-600" data-cause={c.code}>
+            <p className="font-semibold">
+              {i + 1}. {c.title} <span className="cw-muted text-xs">({strength(c.score)})</span>
+            </p>
+            <p className="cw-muted">{c.reason}</p>
+            <a href={`/guides/${c.guide}`} className="cw-link text-xs">
+              How to fix it
+            </a>
+          </li>
+        ))}
+      </ol>
+    ),
+};
+
+/** How strongly the numbers and symptoms point at a cause, in words rather than a number to chase. */
+function strength(score: number) {
+  return score >= 0.6 ? 'strong sign' : score >= 0.3 ? 'some sign' : 'faint sign';
+}
+
+export { normalizeSymptoms };

@@ -1,0 +1,59 @@
+import { estimateYield, fromSI, DISPLAY_UNITS, unitLabel, type YieldEstimateResults } from '@/lib/hydraulics';
+import { LineChartCard } from '../charts';
+import type { CalculatorDef } from '../kit/types';
+
+export const yieldEstimateDef: CalculatorDef<YieldEstimateResults> = {
+  id: 'yield-estimate',
+  title: 'Yield estimate',
+  blurb: 'How much a ram delivers at your fall and lift.',
+  guide: 'will-a-ram-meet-my-demand',
+  fields: [
+    { type: 'quantity', name: 'fallM', prop: 'fall', label: 'Fall (supply head)', qty: 'length', help: 'From the intake’s water surface down to the pump.' },
+    { type: 'quantity', name: 'liftM', prop: 'lift', label: 'Lift (delivery head)', qty: 'length', help: 'From the pump up to where the delivery pipe empties.' },
+    { type: 'quantity', name: 'driveFlowM3s', prop: 'driveFlow', label: 'Drive flow', qty: 'flow', help: 'Water the pump uses: what comes out of the waste valve plus what it delivers.' },
+    { type: 'number', name: 'efficiency', prop: 'efficiency', label: 'Efficiency (optional)', percent: true, help: 'As 0.6 or 60 %. Leave empty to use the typical value for this lift ratio.' },
+    {
+      type: 'select',
+      name: 'pumpType',
+      prop: 'pumpType',
+      label: 'Pump',
+      options: [
+        { value: 'homemade', label: 'Home-built from fittings' },
+        { value: 'commercial', label: 'Cast, factory-made' },
+      ],
+    },
+    { type: 'quantity', name: 'measuredDeliveredFlowM3s', prop: 'measured', label: 'Measured delivery (optional)', qty: 'smallFlow', help: 'From a cup and a stopwatch, to work out your pump’s own efficiency.' },
+  ],
+  defaults: { fall: '4 ft', lift: '29 ft', driveFlow: '2 gal/min', pumpType: 'homemade' },
+  run: (input) => estimateYield(input as never),
+  rows: (r) => [
+    { label: 'Delivered', value: r.deliveredFlowM3s, qty: 'smallFlow', emphasis: true },
+    { label: 'Per day', value: r.deliveredPerDayM3PerDay, qty: 'dailyVolume', emphasis: true },
+    { label: 'Waste flow', value: r.wasteFlowM3s, qty: 'flow' },
+    { label: 'Lift ratio h/H', value: r.liftRatio },
+    { label: `Efficiency used (${r.efficiencySource})`, value: r.efficiencyUsed * 100, unit: '%' },
+    { label: 'Typical band at this ratio', value: `${Math.round(r.band.low * 100)}–${Math.round(r.band.high * 100)}`, unit: '%' },
+    ...(r.measured
+      ? [
+          { label: 'Measured efficiency, D’Aubuisson q·h/(Q·H)', value: r.measured.dAubuisson * 100, unit: '%' },
+          { label: 'Measured efficiency, Rankine q·(h−H)/((Q−q)·H)', value: r.measured.rankine * 100, unit: '%' },
+        ]
+      : []),
+    { label: 'Power in / out', value: `${r.powerInW.toFixed(2)} / ${r.powerOutW.toFixed(2)}`, unit: 'W' },
+    { label: 'Highest lift expected at this fall', value: r.maxLiftM, qty: 'length' },
+  ],
+  chart: (r, units, input) => {
+    const lu = DISPLAY_UNITS.length[units];
+    const fu = DISPLAY_UNITS.smallFlow[units];
+    const lift = Number(input.liftM);
+    return (
+      <LineChartCard
+        ariaLabel="Delivery against lift"
+        xLabel={`lift (${unitLabel(lu)})`}
+        yLabel={`delivery (${unitLabel(fu)})`}
+        points={r.curve.map((p) => ({ x: fromSI(p.liftM, lu, 'length'), y: fromSI(p.deliveryM3s, fu, 'smallFlow') }))}
+        mark={Number.isFinite(lift) ? { x: fromSI(lift, lu, 'length'), y: fromSI(r.deliveredFlowM3s, fu, 'smallFlow') } : undefined}
+      />
+    );
+  },
+};

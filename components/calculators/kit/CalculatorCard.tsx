@@ -1,0 +1,268 @@
+'use client';
+
+import { useEffect, useMemo, useRef, useState } from 'react';
+import { EngineInputError } from '@/lib/hydraulics';
+import { UNIT_CHOICES, unitLabel } from '@/lib/hydraulics';
+import type { CalcOutput } from '@/lib/hydraulics';
+import { useUnits } from '@/components/units/UnitsProvider';
+import { convertState, initialState, readForm, shareQuery } from './state';
+import { displayQuantity, formatNumber } from './format';
+import { Working } from './Working';
+import type { CalculatorDef, FieldDef, FormState } from './types';
+
+type Outcome<R> = { ok: true; output: CalcOutput<R> } | { ok: false; fieldErrors: Record<string, string>; general?: string };
+
+type Computed<R> = Outcome<R> & { input?: Record<string, unknown> };
+
+function visibleFields<R>(def: CalculatorDef<R>, state: FormState) {
+  return def.visible ? def.fields.filter((f) => def.visible!(f.name, state)) : def.fields;
+}
+
+function compute<R>(def: CalculatorDef<R>, state: FormState): Computed<R> {
+  const { values, errors } = readForm(visibleFields(def, state), state);
+  if (Object.keys(errors).length > 0) return { ok: false, fieldErrors: errors };
+  try {
+    return { ok: true, output: def.run(def.toInput ? def.toInput(values) : values), input: values };
+  } catch (err) {
+    if (err instanceof EngineInputError) {
+      const fieldErrors: Record<string, string> = {};
+      const known = new Set(def.fields.map((f) => f.name));
+      const general: string[] = [];
+      for (const issue of err.issues) {
+        const field = [...known].find((k) => issue.field === k || issue.field.startsWith(`${k}.`));
+        if (field) fieldErrors[field] ??= issue.message;
+        else general.push(`${issue.field}: ${issue.message}`);
+      }
+      return { ok: false, fieldErrors, general: general.join('; ') || undefined };
+    }
+    return { ok: false, fieldErrors: {}, general: 'This calculation could not be done with these numbers.' };
+  }
+}
+
+/**
+ * A live calculator: inputs with unit pickers on one side, large results with units
+ * on the other, warnings in amber, the working in KaTeX, a chart where a curve says
+ * more, and a share link that reopens the same inputs.
+ */
+export function CalculatorCard<R>({
+  def,
+  props = {},
+  onOutput,
+}: {
+  def: CalculatorDef<R>;
+  props?: Record<string, string | undefined>;
+  onOutput?: (state: FormState, output: CalcOutput<R> | null) => void;
+}) {
+  const { units } = useUnits();
+  const [state, setState] = useState<FormState>(() => initialState(def.fields, props, def.defaults, units));
+  const lastUnits = useRef(units);
+  const [copied, setCopied] = useState(false);
+
+  // The site-wide unit switch re-expresses what is in the boxes, so the same quantity shows converted.
+  useEffect(() => {
+    if (lastUnits.current !== units) {
+      lastUnits.current = units;
+      setState((s) => convertState(def.fields, s, units));
+    }
+  }, [units, def.fields]);
+
+  const outcome = useMemo(() => compute(def, state), [def, state]);
+  useEffect(() => {
+    onOutput?.(state, outcome.ok ? outcome.output : null);
+  }, [state, outcome, onOutput]);
+
+  const set = (name: string, patch: Partial<{ text: string; unit: string }>) =>
+    setState((s) => ({ ...s, [name]: { ...s[name], ...patch } as FormState[string] }));
+  const shareHref = `/calculators/${def.id}?${shareQuery(def.fields, state)}`;
+
+  return (
+    <section className="cw-card my-6 font-sans not-prose" data-calculator={def.id} aria-labelledby={`${def.id}-title`}>
+      <header className="mb-3 flex flex-wrap items-baseline justify-between gap-2">
+        <h3 id={`${def.id}-title`} className="text-lg font-semibold">
+          {def.title}
+        </h3>
+        <p className="cw-muted text-xs">{def.blurb}</p>
+      </header>
+      <div className="grid gap-6 md:grid-cols-2">
+        <form className="flex flex-col gap-3" onSubmit={(e) => e.preventDefault()} aria-label={`${def.title} inputs`}>
+          {visibleFields(def, state).map((f) => (
+            <Field key={f.name} id={`${def.id}-${f.name}`} field={f} state={state[f.name]} error={outcome.ok ? undefined : outcome.fieldErrors[f.name]} onChange={(p) => set(f.name, p)} />
+          ))}
+        </form>
+        <div aria-live="polite" data-testid={`${def.id}-results`}>
+          {outcome.ok ? (
+            <Results def={def} output={outcome.output} units={units} input={outcome.input ?? {}} />
+          ) : (
+            <p className="rounded-md border border-signal bg-signal-100 p-3 text-sm text-creek-900 dark:bg-signal-900 dark:text-signal-100" role="status">
+              {outcome.general ?? 'Fix the fields marked in amber to see the result.'}
+            </p>
+          )}
+        </div>
+      </div>
+      <footer data-print-hide className="mt-4 flex flex-wrap items-center gap-3 border-t border-limestone-300 pt-3 text-sm dark:border-creek-700">
+        <a href={shareHref} className="cw-link" data-testid={`${def.id}-share`}>
+          Share link
+        </a>
+        <button
+          type="button"
+          className="cw-link"
+          onClick={() => {
+            void navigator.clipboard?.writeText(new URL(shareHref, window.location.href).toString()).then(() => setCopied(true));
+          }}
+        >
+          {copied ? 'Copied' : 'Copy link'}
+        </button>
+        <a href={`/guides/${def.guide}`} className="cw-link ml-auto">
+          Read the guide
+        </a>
+      </footer>
+    </section>
+  );
+}
+
+function Field({
+  id,
+  field,
+  state,
+  error,
+  onChange,
+}: {
+  id: string;
+  field: FieldDef;
+  state: { text: string; unit?: string } | undefined;
+  error?: string;
+  onChange: (p: Partial<{ text: string; unit: string }>) => void;
+}) {
+  const s = state ?? { text: '' };
+  const describedBy = [field.help ? `${id}-help` : null, error ? `${id}-error` : null].filter(Boolean).join(' ') || undefined;
+  const box = `min-w-0 flex-1 rounded-md border bg-limestone-50 px-2 py-1.5 cw-num dark:bg-creek-950 ${error ? 'border-signal ring-1 ring-signal' : 'border-limestone-400 dark:border-creek-500'}`;
+  return (
+    <div className="flex flex-col gap-1">
+      {field.type === 'checks' ? (
+        <span className="text-sm font-medium">{field.label}</span>
+      ) : (
+        <label htmlFor={id} className="text-sm font-medium">
+          {field.label}
+        </label>
+      )}
+      <div className="flex gap-2">
+        {field.type === 'checks' ? (
+          <div id={id} role="group" aria-label={field.label} className="flex flex-wrap gap-x-4 gap-y-1" aria-describedby={describedBy}>
+            {field.options.map((o) => {
+              const chosen = s.text.split(',').map((x) => x.trim()).filter(Boolean);
+              const on = chosen.includes(o.value);
+              return (
+                <label key={o.value} className="flex items-center gap-1.5 text-sm">
+                  <input
+                    type="checkbox"
+                    checked={on}
+                    onChange={() => onChange({ text: (on ? chosen.filter((c) => c !== o.value) : [...chosen, o.value]).join(',') })}
+                    className="accent-clay"
+                  />
+                  {o.label}
+                </label>
+              );
+            })}
+          </div>
+        ) : field.type === 'select' ? (
+          <select id={id} value={s.text} onChange={(e) => onChange({ text: e.target.value })} className={box} aria-describedby={describedBy}>
+            {field.options.map((o) => (
+              <option key={o.value} value={o.value}>
+                {o.label}
+              </option>
+            ))}
+          </select>
+        ) : (
+          <input
+            id={id}
+            value={s.text}
+            inputMode={field.type === 'text' ? 'text' : 'decimal'}
+            autoComplete="off"
+            onChange={(e) => onChange({ text: e.target.value })}
+            className={box}
+            aria-invalid={error ? true : undefined}
+            aria-describedby={describedBy}
+            placeholder={field.type === 'text' ? field.placeholder : undefined}
+          />
+        )}
+        {field.type === 'quantity' ? (
+          <select
+            aria-label={`${field.label} unit`}
+            value={s.unit}
+            onChange={(e) => onChange({ unit: e.target.value })}
+            className="rounded-md border border-limestone-400 bg-limestone-50 px-1 py-1.5 text-sm dark:border-creek-500 dark:bg-creek-950"
+          >
+            {(field.units ?? UNIT_CHOICES[field.qty]).map((u) => (
+              <option key={u} value={u}>
+                {unitLabel(u)}
+              </option>
+            ))}
+          </select>
+        ) : null}
+      </div>
+      {field.help ? (
+        <p id={`${id}-help`} className="cw-muted text-xs">
+          {field.help}
+        </p>
+      ) : null}
+      {error ? (
+        <p id={`${id}-error`} className="text-xs font-semibold text-signal-700 dark:text-signal-300" role="alert">
+          {field.label}: {error}
+        </p>
+      ) : null}
+    </div>
+  );
+}
+
+function Results<R>({
+  def,
+  output,
+  units,
+  input,
+}: {
+  def: CalculatorDef<R>;
+  output: CalcOutput<R>;
+  units: 'US' | 'metric';
+  input: Record<string, unknown>;
+}) {
+  const rows = def.rows(output.results);
+  return (
+    <div className="flex flex-col gap-3">
+      <dl className="grid grid-cols-1 gap-2">
+        {rows.map((r) => {
+          const v =
+            typeof r.value === 'string'
+              ? { value: r.value, unit: r.unit ?? '' }
+              : r.qty
+                ? displayQuantity(r.qty, r.value, units)
+                : { value: formatNumber(r.value), unit: r.unit ?? '' };
+          return (
+            <div key={r.label} className={r.emphasis ? 'rounded-md bg-creek-50 p-2 dark:bg-creek-800' : ''}>
+              <dt className="cw-muted text-xs uppercase tracking-wide">{r.label}</dt>
+              <dd className={`cw-num ${r.emphasis ? 'text-3xl font-semibold' : 'text-lg'}`} data-result={r.label}>
+                {v.value} <span className="text-sm font-normal">{v.unit}</span>
+              </dd>
+            </div>
+          );
+        })}
+      </dl>
+      {output.warnings.length > 0 ? (
+        <ul className="flex flex-col gap-2" aria-label="Warnings">
+          {output.warnings.map((w) => (
+            <li key={w.code} className="rounded-md border-l-4 border-signal bg-signal-100 p-2 text-sm text-creek-900 dark:bg-signal-900 dark:text-signal-100" data-warning={w.code}>
+              <span aria-hidden="true">⚠ </span>
+              {w.message}{' '}
+              <a href={`/guides/${w.guide}`} className="cw-link">
+                Read more
+              </a>
+            </li>
+          ))}
+        </ul>
+      ) : null}
+      {def.extra ? def.extra(output.results, units) : null}
+      {def.chart ? <div className="h-56">{def.chart(output.results, units, input)}</div> : null}
+      <Working steps={output.steps} />
+      <p className="cw-muted text-xs">Engine {output.engineVersion}</p>
+    </div>
+  );
+}

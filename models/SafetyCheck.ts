@@ -1,0 +1,43 @@
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type ForeignKey,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type NonAttribute,
+  type Sequelize,
+} from 'sequelize';
+import type { User } from './User';
+
+export const SAFETY_VERDICTS = ['sound', 'needs changes'] as const;
+export type SafetyVerdict = (typeof SAFETY_VERDICTS)[number];
+
+/** An expert's sign-off on one version (content hash) of one guide. */
+export class SafetyCheck extends Model<InferAttributes<SafetyCheck>, InferCreationAttributes<SafetyCheck>> {
+  declare id: CreationOptional<number>;
+  declare guideSlug: string;
+  declare contentHash: string;
+  declare expertId: ForeignKey<User['id']>;
+  declare verdict: SafetyVerdict;
+  declare notes: string | null;
+  declare createdAt: CreationOptional<Date>;
+  declare updatedAt: CreationOptional<Date>;
+
+  declare expert?: NonAttribute<User>;
+
+  static initModel(sequelize: Sequelize) {
+    SafetyCheck.init(
+      {
+        id: { type: DataTypes.INTEGER.UNSIGNED, autoIncrement: true, primaryKey: true },
+        guideSlug: { type: DataTypes.STRING(80), allowNull: false },
+        contentHash: { type: DataTypes.CHAR(64), allowNull: false },
+        verdict: { type: DataTypes.ENUM(...SAFETY_VERDICTS), allowNull: false },
+        notes: { type: DataTypes.TEXT, allowNull: true },
+        createdAt: DataTypes.DATE,
+        updatedAt: DataTypes.DATE,
+      },
+      { sequelize, tableName: 'safety_checks' },
+    );
+  }
+}

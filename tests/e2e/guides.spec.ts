@@ -1,0 +1,84 @@
+import { test, expect, type Page } from '@playwright/test';
+import AxeBuilder from '@axe-core/playwright';
+
+const firstCard = (page: Page) => page.locator('[data-calculator="yield-estimate"]').first();
+const delivered = (page: Page) => firstCard(page).locator('[data-result="Delivered"]');
+
+test('the beginner’s journey: a checked guide, its caution, a live calculator, units and a share link', async ({ page, browser }) => {
+  await page.goto('/guides/how-a-ram-pump-works');
+  await expect(page.getByRole('heading', { level: 1, name: 'How a ram pump works' })).toBeVisible();
+  const status = page.getByTestId('safety-check-status');
+  await expect(status).toContainText('Safety checked');
+  await expect(status).toContainText('checked by Ironwheel Builds on');
+  await expect(page.getByRole('note').first()).toBeVisible();
+
+  // Change an input and see the result change.
+  const card = firstCard(page);
+  await card.scrollIntoViewIfNeeded();
+  const before = await delivered(page).textContent();
+  await card.getByLabel('Lift (delivery head)', { exact: true }).fill('40');
+  await expect(delivered(page)).not.toHaveText(before ?? '');
+  await expect(delivered(page)).toContainText('US cups/min');
+
+  // Switch units for the whole site: the same fall shows in metres.
+  await page.getByRole('banner').getByText('Metric').click();
+  await expect(card.getByLabel('Fall (supply head)', { exact: true })).toHaveValue('1.219');
+  await expect(card.getByLabel('Fall (supply head) unit')).toHaveValue('m');
+  await expect(card.getByLabel('Lift (delivery head)', { exact: true })).toHaveValue('12.19');
+  await expect(delivered(page)).toContainText('mL/min');
+  const metricResult = await delivered(page).textContent();
+
+  // The share link opens the same inputs and result in a fresh page.
+  const href = await card.getByTestId('yield-estimate-share').getAttribute('href');
+  expect(href).toMatch(/^\/calculators\/yield-estimate\?/);
+  const fresh = await browser.newContext({ baseURL: page.url() });
+  await fresh.addCookies([{ name: 'cw_units', value: 'metric', url: new URL(page.url()).origin }]);
+  const other = await fresh.newPage();
+  await other.goto(new URL(href!, page.url()).toString());
+  const card2 = firstCard(other);
+  await expect(card2.getByLabel('Fall (supply head)', { exact: true })).toHaveValue('1.219');
+  await expect(card2.getByLabel('Lift (delivery head)', { exact: true })).toHaveValue('12.19');
+  await expect(delivered(other)).toHaveText(metricResult ?? '');
+  await fresh.close();
+});
+
+test('show the working opens the steps in KaTeX', async ({ page }) => {
+  await page.goto('/calculators/yield-estimate?fall=4+ft&lift=29+ft&driveFlow=2+gal%2Fmin&efficiency=0.6');
+  await page.getByText('Show the working').click();
+  await expect(page.getByTestId('working').locator('.katex').first()).toBeVisible();
+});
+
+test('a guide changed since its last safety check says so, with the history', async ({ page }) => {
+  await page.goto('/guides/the-drive-pipe');
+  const status = page.getByTestId('safety-check-status');
+  await expect(status).toContainText('Changed since its last safety check');
+  await status.getByText(/History of safety checks/).click();
+  await expect(status).toContainText('an earlier version');
+  await page.goto('/guides/surveying-fall-and-flow');
+  await expect(page.getByTestId('safety-check-status')).toContainText('Not yet checked');
+});
+
+test('the guide index filters by level and tag', async ({ page }) => {
+  await page.goto('/guides');
+  await expect(page.getByTestId('guide-list').getByRole('listitem')).toHaveCount(10);
+  await page.getByRole('navigation', { name: 'Filter guides' }).getByRole('link', { name: 'advanced' }).click();
+  await expect(page.getByTestId('guide-list').getByRole('listitem')).toHaveCount(1);
+  await expect(page.getByRole('link', { name: 'Pumps in parallel and in stages' })).toBeVisible();
+});
+
+test('a saved worked calculation recomputes with the current engine', async ({ page }) => {
+  await page.goto('/calculations/FerncombeY1');
+  await expect(page.getByTestId('calc-unchanged')).toBeVisible();
+  await expect(page.locator('[data-calculator="yield-estimate"]')).toBeVisible();
+});
+
+for (const path of ['/guides', '/guides/the-drive-pipe', '/calculators/delivery-line']) {
+  test(`no serious or critical accessibility violations on ${path}`, async ({ page }) => {
+    await page.goto(path);
+    await page.waitForLoadState('networkidle');
+    const results = await new AxeBuilder({ page }).analyze();
+    expect(results.passes.length).toBeGreaterThan(10); // axe really ran
+    const bad = results.violations.filter((v) => v.impact === 'serious' || v.impact === 'critical');
+    expect(bad.map((v) => `${v.id}: ${v.nodes.length} × ${v.nodes[0]?.target.join(' ')}`)).toEqual([]);
+  });
+}
