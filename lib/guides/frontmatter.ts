@@ -1,17 +1,9 @@
 import { z } from 'zod';
+import { CALCULATOR_IDS } from '@/lib/hydraulics/registry';
 
 export const GUIDE_LEVELS = ['first build', 'working system', 'advanced'] as const;
 export type GuideLevel = (typeof GUIDE_LEVELS)[number];
 
-export const CALCULATOR_IDS = [
-  'yield-estimate',
-  'array-planner',
-  'drive-pipe-check',
-  'delivery-line',
-  'source-flow',
-  'demand-and-storage',
-  'stall-check',
-] as const;
 
 /** What every content/guides/*.mdx must declare; a guide that fails this breaks the build. */
 export const guideFrontmatterSchema = z.object({

@@ -2,7 +2,7 @@
  * Array planner: rams in parallel into one delivery line, and rams in
  * stages (lower pumps fill a tank that drives an upper pump).
  */
-import { z } from 'zod';
+import * as z from 'zod/mini';
 import { PUMP_TYPES } from './efficiency';
 import { drivePipeSchema, pipeRunSchema } from './pipeSchemas';
 import {
@@ -16,12 +16,12 @@ import { warn } from './warnings';
 import { waterProperties } from './water';
 
 export const arrayPumpSchema = z.object({
-  label: z.string().max(60).optional(),
-  pumpType: z.enum(PUMP_TYPES).default('homemade'),
+  label: z.optional(z.string().check(z.maxLength(60))),
+  pumpType: z._default(z.enum(PUMP_TYPES), 'homemade'),
   /** drive flow on a straight drive pipe, m³/s; omit to estimate it from the fall and the drive pipe */
-  driveFlowM3s: flowM3s().optional(),
+  driveFlowM3s: z.optional(flowM3s()),
   /** D'Aubuisson efficiency; omit to use the typical band */
-  efficiency: efficiency().optional(),
+  efficiency: z.optional(efficiency()),
   drivePipe: drivePipeSchema,
 });
 
@@ -30,26 +30,26 @@ export const arrayPlannerSchema = z
     fallM: fallM(),
     /** lift from the pumps to the outlet of the shared delivery line (the tank, when staged), m */
     liftM: liftM(),
-    pumps: z.array(arrayPumpSchema).min(1).max(20),
+    pumps: z.array(arrayPumpSchema).check(z.minLength(1), z.maxLength(20)),
     deliveryLine: pipeRunSchema,
     /** flow the source can spare in the driest month, m³/s */
-    sourceSpareFlowM3s: flowM3s().optional(),
+    sourceSpareFlowM3s: z.optional(flowM3s()),
     /** waste-valve closing velocity as a share of full-flow velocity (see ramCycle.ts) */
-    closureRatio: siNumber({ min: 0.3, max: 0.98, unit: '' }).default(DEFAULT_CLOSURE_RATIO),
+    closureRatio: z._default(siNumber({ min: 0.3, max: 0.98, unit: '' }), DEFAULT_CLOSURE_RATIO),
     /** an upper pump driven from the tank the pumps above fill */
-    staged: z
-      .object({
+    staged: z.optional(
+      z.object({
         /** fall from the tank's water surface down to the upper pump, m */
         upperFallM: fallM(),
         /** lift from the upper pump to its outlet, m */
         upperLiftM: liftM(),
         upperPump: arrayPumpSchema,
-        upperDeliveryLine: pipeRunSchema.optional(),
-      })
-      .optional(),
+        upperDeliveryLine: z.optional(pipeRunSchema),
+      }),
+    ),
     waterTempC: waterTempC(),
   })
-  .superRefine((v, ctx) => {
+  .check(z.superRefine((v, ctx) => {
     if (v.liftM <= v.fallM) {
       addRangeIssue(ctx, ['liftM'], `must be greater than the fall (${v.fallM} m)`, { min: v.fallM, minExclusive: true, max: 1000, unit: 'm' });
     }
@@ -58,7 +58,7 @@ export const arrayPlannerSchema = z
         min: v.staged.upperFallM, minExclusive: true, max: 1000, unit: 'm',
       });
     }
-  });
+  }));
 
 export type ArrayPlannerInput = z.input<typeof arrayPlannerSchema>;
 

@@ -3,7 +3,7 @@
  * the head and pressure at the pump, and the smallest standard pipe that
  * keeps the loss under a target.
  */
-import { z } from 'zod';
+import * as z from 'zod/mini';
 import { sumK, type Fitting } from './fittings';
 import { hazenWilliamsHeadLoss, pipeLoss, type FlowRegime } from './friction';
 import { NOMINAL_SIZES, PIPE_SERIES, defaultSeries, resolvePipe, type NominalSize, type PipeSeries } from './pipes';
@@ -20,11 +20,11 @@ export const deliveryLineSchema = z.object({
   liftM: liftM(),
   line: pipeRunSchema,
   /** series to pick the smallest standard size from; default by material */
-  sizingSeries: z.enum(PIPE_SERIES).optional(),
+  sizingSeries: z.optional(z.enum(PIPE_SERIES)),
   /** largest acceptable friction-plus-fitting loss, m; default 10 % of the lift (common practice, no source) */
-  targetLossM: siNumber({ min: 0, minExclusive: true, max: 1000, unit: 'm' }).optional(),
+  targetLossM: z.optional(siNumber({ min: 0, minExclusive: true, max: 1000, unit: 'm' })),
   /** the line runs where it freezes */
-  frostRisk: z.boolean().default(false),
+  frostRisk: z._default(z.boolean(), false),
   waterTempC: waterTempC(),
 });
 

@@ -3,7 +3,7 @@
  * against what the ram delivers in 24 hours, the tank for some days of
  * reserve, and how long it takes to refill.
  */
-import { z } from 'zod';
+import * as z from 'zod/mini';
 import { GARDEN_DEPTH_PER_WEEK_M, LIVESTOCK_KINDS, householdRate, livestockRates } from './demandRates';
 import { flowM3s, parseInput, siNumber } from './schemaKit';
 import { finish, step, tq, type CalcOutput, type Step, type Warning } from './steps';
@@ -12,26 +12,25 @@ import { warn } from './warnings';
 export const demandAndStorageSchema = z.object({
   /** ram delivery averaged over 24 hours, m³/s */
   deliveredFlowM3s: flowM3s(),
-  people: siNumber({ min: 0, max: 100, unit: '', integer: true }).default(0),
+  people: z._default(siNumber({ min: 0, max: 100, unit: '', integer: true }), 0),
   /** household use per person, m³/day; default USGS 80 US gal */
-  perPersonM3PerDay: siNumber({ min: 0, max: 2, unit: 'm³/day' }).optional(),
-  gardenAreaM2: siNumber({ min: 0, max: 100000, unit: 'm²' }).default(0),
+  perPersonM3PerDay: z.optional(siNumber({ min: 0, max: 2, unit: 'm³/day' })),
+  gardenAreaM2: z._default(siNumber({ min: 0, max: 100000, unit: 'm²' }), 0),
   /** water depth per week on the garden, m; default 1 inch */
-  gardenDepthPerWeekM: siNumber({ min: 0, max: 0.2, unit: 'm' }).default(GARDEN_DEPTH_PER_WEEK_M),
-  livestock: z
+  gardenDepthPerWeekM: z._default(siNumber({ min: 0, max: 0.2, unit: 'm' }), GARDEN_DEPTH_PER_WEEK_M),
+  livestock: z._default(z
     .array(z.object({
       kind: z.enum(LIVESTOCK_KINDS),
       count: siNumber({ min: 0, max: 100000, unit: '', integer: true }),
       /** override the table rate, m³/day per head */
-      perHeadM3PerDay: siNumber({ min: 0, max: 1, unit: 'm³/day' }).optional(),
+      perHeadM3PerDay: z.optional(siNumber({ min: 0, max: 1, unit: 'm³/day' })),
     }))
-    .max(30)
-    .default([]),
-  otherM3PerDay: siNumber({ min: 0, max: 1000, unit: 'm³/day' }).default(0),
+    .check(z.maxLength(30)), []),
+  otherM3PerDay: z._default(siNumber({ min: 0, max: 1000, unit: 'm³/day' }), 0),
   /** days the tank should carry the demand with no delivery */
-  reserveDays: siNumber({ min: 0, max: 60, unit: 'day' }).default(3),
+  reserveDays: z._default(siNumber({ min: 0, max: 60, unit: 'day' }), 3),
   /** an existing tank, m³ */
-  tankVolumeM3: siNumber({ min: 0, minExclusive: true, max: 10000, unit: 'm³' }).optional(),
+  tankVolumeM3: z.optional(siNumber({ min: 0, minExclusive: true, max: 10000, unit: 'm³' })),
 });
 
 export type DemandAndStorageInput = z.input<typeof demandAndStorageSchema>;

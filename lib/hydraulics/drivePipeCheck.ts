@@ -3,7 +3,7 @@
  * pressure wave and its surge against the pipe's rating, and whether the
  * material is stiff enough to carry the wave.
  */
-import { z } from 'zod';
+import * as z from 'zod/mini';
 import { sumK, type Fitting } from './fittings';
 import { MATERIAL_PROPS } from './pipes';
 import { drivePipeSchema, roughnessOf } from './pipeSchemas';
@@ -31,18 +31,18 @@ export const drivePipeCheckSchema = z
   .object({
     fallM: fallM(),
     /** lift, m; used for the pressure in the pump body while delivering */
-    liftM: liftM().optional(),
+    liftM: z.optional(liftM()),
     /** wallThicknessM and pressureRatingPa are required here (fill them from resolvePipe) */
     drivePipe: drivePipeSchema,
     /** measured drive flow, m³/s, for the mean velocity */
-    driveFlowM3s: flowM3s().optional(),
+    driveFlowM3s: z.optional(flowM3s()),
     /** waste-valve closing time, s; omit for a sudden closure (the worst case) */
-    valveClosureTimeS: siNumber({ min: 0, minExclusive: true, max: 5, unit: 's' }).optional(),
+    valveClosureTimeS: z.optional(siNumber({ min: 0, minExclusive: true, max: 5, unit: 's' })),
     /** required ratio of pipe rating to peak pressure */
-    requiredMargin: siNumber({ min: 1, max: 5, unit: '' }).default(1.5),
+    requiredMargin: z._default(siNumber({ min: 1, max: 5, unit: '' }), 1.5),
     waterTempC: waterTempC(),
   })
-  .superRefine((v, ctx) => {
+  .check(z.superRefine((v, ctx) => {
     if (v.drivePipe.wallThicknessM === undefined) {
       addRangeIssue(ctx, ['drivePipe', 'wallThicknessM'], 'is needed for the wave speed (pick a nominal size and series to fill it)', { min: 0.0005, max: 0.05, unit: 'm' });
     } else if (v.drivePipe.wallThicknessM > v.drivePipe.insideDiameterM) {
@@ -54,7 +54,7 @@ export const drivePipeCheckSchema = z
     if (v.liftM !== undefined && v.liftM <= v.fallM) {
       addRangeIssue(ctx, ['liftM'], `must be greater than the fall (${v.fallM} m)`, { min: v.fallM, minExclusive: true, max: 1000, unit: 'm' });
     }
-  });
+  }));
 
 export type DrivePipeCheckInput = z.input<typeof drivePipeCheckSchema>;
 

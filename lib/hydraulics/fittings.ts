@@ -7,7 +7,7 @@
  * the small screwed and solvent-welded fittings of ram installations; they
  * are the conservative (larger) column.
  */
-import { z } from 'zod';
+import * as z from 'zod/mini';
 import { siNumber } from './schemaKit';
 
 export const FITTING_K = {
@@ -58,10 +58,10 @@ export const FITTING_LABELS: Record<FittingKind, string> = {
 
 /** A fitting in a pipe: a kind from the table, or a custom K. */
 export const fittingSchema = z.object({
-  kind: z.enum(FITTING_KINDS).optional(),
+  kind: z.optional(z.enum(FITTING_KINDS)),
   /** custom loss coefficient, used when kind is absent */
-  k: siNumber({ min: 0, max: 1000, unit: '' }).optional(),
-  count: siNumber({ min: 1, max: 100, unit: '', integer: true }).default(1),
+  k: z.optional(siNumber({ min: 0, max: 1000, unit: '' })),
+  count: z._default(siNumber({ min: 1, max: 100, unit: '', integer: true }), 1),
 });
 export type Fitting = z.output<typeof fittingSchema>;
 

@@ -3,7 +3,7 @@
  * that offers nominal sizes fills insideDiameterM and wallThicknessM from
  * resolvePipe() in pipes.ts.
  */
-import { z } from 'zod';
+import * as z from 'zod/mini';
 import { fittingSchema } from './fittings';
 import { MATERIALS, MATERIAL_PROPS, type PipeMaterial } from './pipes';
 import { siNumber } from './schemaKit';
@@ -15,22 +15,22 @@ export const pipeRunSchema = z.object({
   /** length of the run, m */
   lengthM: siNumber({ min: 0, minExclusive: true, max: 10000, unit: 'm' }),
   insideDiameterM: insideDiameterM(),
-  material: z.enum(MATERIALS).default('pvc'),
+  material: z._default(z.enum(MATERIALS), 'pvc'),
   /** wall thickness, m; needed for wave speed */
-  wallThicknessM: siNumber({ min: 0.0005, max: 0.05, unit: 'm' }).optional(),
+  wallThicknessM: z.optional(siNumber({ min: 0.0005, max: 0.05, unit: 'm' })),
   /** absolute roughness ε, m; default from the material table */
-  roughnessM: siNumber({ min: 0, max: 0.01, unit: 'm' }).optional(),
+  roughnessM: z.optional(siNumber({ min: 0, max: 0.01, unit: 'm' })),
   /** Hazen-Williams C; default from the material table */
-  hazenWilliamsC: siNumber({ min: 40, max: 160, unit: '' }).optional(),
+  hazenWilliamsC: z.optional(siNumber({ min: 40, max: 160, unit: '' })),
   /** working pressure rating, Pa; default from the series table when known */
-  pressureRatingPa: siNumber({ min: 1e4, max: 1e8, unit: 'Pa' }).optional(),
+  pressureRatingPa: z.optional(siNumber({ min: 1e4, max: 1e8, unit: 'Pa' })),
   /** fittings in the run (the drive pipe's entrance is counted separately) */
-  fittings: z.array(fittingSchema).max(50).default([]),
+  fittings: z._default(z.array(fittingSchema).check(z.maxLength(50)), []),
 });
 export type PipeRun = z.output<typeof pipeRunSchema>;
 
 /** A drive pipe: same fields, shorter limit on length (a drive pipe over 500 m is not a drive pipe). */
-export const drivePipeSchema = pipeRunSchema.extend({
+export const drivePipeSchema = z.extend(pipeRunSchema, {
   lengthM: siNumber({ min: 0, minExclusive: true, max: 500, unit: 'm' }),
 });
 export type DrivePipe = z.output<typeof drivePipeSchema>;

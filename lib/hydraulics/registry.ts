@@ -3,7 +3,7 @@
  * schema (SI fields) and a run function returning
  * { results, steps, warnings, engineVersion }.
  */
-import type { z } from 'zod';
+import type * as z from 'zod/mini';
 import { arrayPlannerSchema, planArray } from './arrayPlanner';
 import { checkDeliveryLine, deliveryLineSchema } from './deliveryLine';
 import { demandAndStorageSchema, planDemandAndStorage } from './demandAndStorage';
@@ -24,14 +24,14 @@ export const CALCULATOR_IDS = [
 ] as const;
 export type CalculatorId = (typeof CALCULATOR_IDS)[number];
 
-export interface Calculator<S extends z.ZodType = z.ZodType, R = unknown> {
+export interface Calculator<S extends z.ZodMiniType = z.ZodMiniType, R = unknown> {
   id: CalculatorId;
   name: string;
   schema: S;
   run: (input: z.input<S>) => CalcOutput<R>;
 }
 
-function calc<S extends z.ZodType, R>(id: CalculatorId, name: string, schema: S, run: (input: z.input<S>) => CalcOutput<R>): Calculator<S, R> {
+function calc<S extends z.ZodMiniType, R>(id: CalculatorId, name: string, schema: S, run: (input: z.input<S>) => CalcOutput<R>): Calculator<S, R> {
   return { id, name, schema, run };
 }
 

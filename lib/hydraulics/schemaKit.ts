@@ -3,7 +3,7 @@
  * their accepted range (so a failed parse can say which range), and the
  * parse step that turns zod issues into an {@link EngineInputError}.
  */
-import { z } from 'zod';
+import * as z from 'zod/mini';
 import { EngineInputError, describeRange, type FieldIssue, type FieldRange } from './errors';
 
 /** Ranges keyed by the message they produced; the message is built from the range, so the map is exact. */
@@ -21,7 +21,7 @@ export interface NumberSpec extends FieldRange {
  * Example: siNumber({ min: 0, minExclusive: true, max: 100, unit: 'm' }) rejects 0, −1, NaN and 101
  * with "must be a number greater than 0 and at most 100 m".
  */
-export function siNumber(spec: NumberSpec): z.ZodNumber {
+export function siNumber(spec: NumberSpec): z.ZodMiniNumber<number> {
   const range: FieldRange = {
     min: spec.min,
     max: spec.max,
@@ -32,15 +32,16 @@ export function siNumber(spec: NumberSpec): z.ZodNumber {
   const message = `must be ${spec.integer ? 'a whole number' : 'a number'} ${describeRange(range)}`;
   RANGE_BY_MESSAGE.set(message, range);
   const err = { error: message };
-  let s = z.number(err);
-  if (spec.integer) s = s.int(err);
-  if (spec.min !== undefined) s = spec.minExclusive ? s.gt(spec.min, err) : s.gte(spec.min, err);
-  if (spec.max !== undefined) s = spec.maxExclusive ? s.lt(spec.max, err) : s.lte(spec.max, err);
-  return s;
+  const checks: z.core.$ZodCheck<number>[] = [];
+  if (spec.integer) checks.push(z.multipleOf(1, err));
+  if (spec.min !== undefined) checks.push(spec.minExclusive ? z.gt(spec.min, err) : z.gte(spec.min, err));
+  if (spec.max !== undefined) checks.push(spec.maxExclusive ? z.lt(spec.max, err) : z.lte(spec.max, err));
+  const s = z.number(err);
+  return checks.length ? s.check(...checks) : s;
 }
 
 /** Water temperature, °C; the tables in water.ts cover 0–40 °C. Default 10 °C, a spring-fed source. */
-export const waterTempC = () => siNumber({ min: 0, max: 40, unit: '°C' }).default(10);
+export const waterTempC = () => z._default(siNumber({ min: 0, max: 40, unit: '°C' }), 10);
 
 /** Fall (supply head) from the intake's water surface down to the pump, m. */
 export const fallM = () => siNumber({ min: 0, minExclusive: true, max: 100, unit: 'm' });
@@ -56,7 +57,7 @@ export const efficiency = () => siNumber({ min: 0, minExclusive: true, max: 1, u
 
 /** Adds a cross-field issue (e.g. lift at or below the fall) with its range, for schemas' superRefine. */
 export function addRangeIssue(
-  ctx: z.RefinementCtx,
+  ctx: z.core.$RefinementCtx,
   path: (string | number)[],
   message: string,
   range: FieldRange,
@@ -76,7 +77,7 @@ function issueRange(issue: z.core.$ZodIssue): FieldRange | undefined {
  * Parses input against a schema; throws EngineInputError listing every failing field with its range.
  * Example: parseInput(yieldEstimateSchema, { fallM: 0, … }) throws field "fallM", range (0, 100] m.
  */
-export function parseInput<S extends z.ZodType>(schema: S, input: unknown): z.output<S> {
+export function parseInput<S extends z.ZodMiniType>(schema: S, input: unknown): z.output<S> {
   const r = schema.safeParse(input);
   if (r.success) return r.data;
   const issues: FieldIssue[] = r.error.issues.map((issue) => ({

@@ -3,7 +3,7 @@
  * stopwatch, by a V-notch weir, or by timing a float; and how much of it a
  * plan would take.
  */
-import { z } from 'zod';
+import * as z from 'zod/mini';
 import { flowM3s, parseInput, siNumber } from './schemaKit';
 import { finish, step, tq, type CalcOutput, type Step, type Warning } from './steps';
 import { warn } from './warnings';
@@ -11,7 +11,7 @@ import { WEIR_ANGLE_RANGE, fromFeet, toFeet, vNotch90Usbr, vNotchFlow, weirCoeff
 
 const base = {
   /** total drive flow the plan would take from the source, m³/s */
-  plannedDrawM3s: flowM3s().optional(),
+  plannedDrawM3s: z.optional(flowM3s()),
 };
 
 const bucketSchema = z.object({
@@ -23,8 +23,7 @@ const bucketSchema = z.object({
       /** time to fill, s */
       timeS: siNumber({ min: 0.5, max: 3600, unit: 's' }),
     }))
-    .min(1)
-    .max(50),
+    .check(z.minLength(1), z.maxLength(50)),
   ...base,
 });
 
@@ -32,11 +31,11 @@ const vNotchSchema = z.object({
   method: z.literal('v-notch'),
   /** head above the notch's vertex, measured upstream (≥ 4 heads back), m */
   notchHeadM: siNumber({ min: 0, minExclusive: true, max: 1, unit: 'm' }),
-  angleDeg: siNumber({ min: WEIR_ANGLE_RANGE[0], max: WEIR_ANGLE_RANGE[1], unit: '°' }).default(90),
+  angleDeg: z._default(siNumber({ min: WEIR_ANGLE_RANGE[0], max: WEIR_ANGLE_RANGE[1], unit: '°' }), 90),
   /** height of the notch vertex above the approach channel's bed, m */
-  crestHeightM: siNumber({ min: 0, minExclusive: true, max: 10, unit: 'm' }).optional(),
+  crestHeightM: z.optional(siNumber({ min: 0, minExclusive: true, max: 10, unit: 'm' })),
   /** width of the approach channel, m */
-  approachWidthM: siNumber({ min: 0, minExclusive: true, max: 50, unit: 'm' }).optional(),
+  approachWidthM: z.optional(siNumber({ min: 0, minExclusive: true, max: 50, unit: 'm' })),
   ...base,
 });
 
@@ -45,13 +44,13 @@ const floatSchema = z.object({
   /** distance the float travels, m */
   distanceM: siNumber({ min: 0, minExclusive: true, max: 1000, unit: 'm' }),
   /** times of the float runs, s */
-  timesS: z.array(siNumber({ min: 0.2, max: 3600, unit: 's' })).min(1).max(50),
+  timesS: z.array(siNumber({ min: 0.2, max: 3600, unit: 's' })).check(z.minLength(1), z.maxLength(50)),
   /** stream width at the reach, m */
   widthM: siNumber({ min: 0, minExclusive: true, max: 100, unit: 'm' }),
   /** mean depth across the reach, m */
   meanDepthM: siNumber({ min: 0, minExclusive: true, max: 10, unit: 'm' }),
   /** mean velocity ÷ surface velocity; 0.85 typical (see measureSourceFlow) */
-  coefficient: siNumber({ min: 0.5, max: 1, unit: '' }).default(0.85),
+  coefficient: z._default(siNumber({ min: 0.5, max: 1, unit: '' }), 0.85),
   ...base,
 });
 

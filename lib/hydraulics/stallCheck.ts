@@ -3,7 +3,7 @@
  * ranked, each with the reason worked out from the numbers and the guide
  * that explains the fix.
  */
-import { z } from 'zod';
+import * as z from 'zod/mini';
 import { DRIVE_PIPE_GUIDES } from './drivePipeCheck';
 import { PUMP_TYPES, dAubuissonEfficiency, efficiencyBand, maxLiftRatio } from './efficiency';
 import { sumK, type Fitting } from './fittings';
@@ -25,31 +25,31 @@ export const siteSheetSchema = z.object({
   liftM: liftM(),
   drivePipe: drivePipeSchema,
   /** flow the source can spare, m³/s */
-  sourceSpareFlowM3s: flowM3s().optional(),
+  sourceSpareFlowM3s: z.optional(flowM3s()),
   /** measured drive flow of one pump, m³/s */
-  driveFlowM3s: flowM3s().optional(),
+  driveFlowM3s: z.optional(flowM3s()),
   /** measured delivery of all pumps together, m³/s */
-  deliveredFlowM3s: flowM3s().optional(),
-  pumpSize: z.enum(NOMINAL_SIZES).optional(),
-  pumpCount: siNumber({ min: 1, max: 20, unit: '', integer: true }).default(1),
-  pumpType: z.enum(PUMP_TYPES).default('homemade'),
-  deliveryLine: pipeRunSchema.optional(),
-  beatsPerMinute: siNumber({ min: 1, max: 400, unit: 'beats/min' }).optional(),
+  deliveredFlowM3s: z.optional(flowM3s()),
+  pumpSize: z.optional(z.enum(NOMINAL_SIZES)),
+  pumpCount: z._default(siNumber({ min: 1, max: 20, unit: '', integer: true }), 1),
+  pumpType: z._default(z.enum(PUMP_TYPES), 'homemade'),
+  deliveryLine: z.optional(pipeRunSchema),
+  beatsPerMinute: z.optional(siNumber({ min: 1, max: 400, unit: 'beats/min' })),
   /** depth of the drive pipe's mouth below the intake's water surface, m */
-  intakeSubmergenceM: siNumber({ min: 0, max: 10, unit: 'm' }).optional(),
-  wasteOutletSubmerged: z.boolean().optional(),
-  screenAtIntake: z.boolean().optional(),
-  frostRisk: z.boolean().optional(),
+  intakeSubmergenceM: z.optional(siNumber({ min: 0, max: 10, unit: 'm' })),
+  wasteOutletSubmerged: z.optional(z.boolean()),
+  screenAtIntake: z.optional(z.boolean()),
+  frostRisk: z.optional(z.boolean()),
   waterTempC: waterTempC(),
 });
 
 export const stallCheckSchema = z
-  .object({ site: siteSheetSchema, symptoms: z.array(z.enum(SYMPTOMS)).max(SYMPTOMS.length).default([]) })
-  .superRefine((v, ctx) => {
+  .object({ site: siteSheetSchema, symptoms: z._default(z.array(z.enum(SYMPTOMS)).check(z.maxLength(SYMPTOMS.length)), []) })
+  .check(z.superRefine((v, ctx) => {
     if (v.site.liftM <= v.site.fallM) {
       addRangeIssue(ctx, ['site', 'liftM'], `must be greater than the fall (${v.site.fallM} m)`, { min: v.site.fallM, minExclusive: true, max: 1000, unit: 'm' });
     }
-  });
+  }));
 
 export type StallCheckInput = z.input<typeof stallCheckSchema>;
 

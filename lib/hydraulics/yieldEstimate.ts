@@ -1,7 +1,7 @@
 /**
  * Yield estimate: how much a ram delivers from its drive flow, fall and lift.
  */
-import { z } from 'zod';
+import * as z from 'zod/mini';
 import {
   PUMP_TYPES,
   dAubuissonEfficiency,
@@ -24,16 +24,16 @@ export const yieldEstimateSchema = z
     fallM: fallM(),
     /** lift h from the pump up to the delivery outlet, m */
     liftM: liftM(),
-    pumpType: z.enum(PUMP_TYPES).default('homemade'),
+    pumpType: z._default(z.enum(PUMP_TYPES), 'homemade'),
     /** D'Aubuisson efficiency to assume; omit to use the typical value for the pump type at this lift ratio */
-    efficiency: efficiency().optional(),
+    efficiency: z.optional(efficiency()),
     /** measured delivered flow q, m³/s, to work out the pump's actual efficiency */
-    measuredDeliveredFlowM3s: flowM3s().optional(),
+    measuredDeliveredFlowM3s: z.optional(flowM3s()),
     /** number of points on the delivery-against-lift curve */
-    curvePoints: siNumber({ min: 5, max: 100, unit: '', integer: true }).default(25),
+    curvePoints: z._default(siNumber({ min: 5, max: 100, unit: '', integer: true }), 25),
     waterTempC: waterTempC(),
   })
-  .superRefine((v, ctx) => {
+  .check(z.superRefine((v, ctx) => {
     if (v.liftM <= v.fallM) {
       addRangeIssue(ctx, ['liftM'], `must be greater than the fall (${v.fallM} m): a ram lifts water above its source`, {
         min: v.fallM, minExclusive: true, max: 1000, unit: 'm',
@@ -52,7 +52,7 @@ export const yieldEstimateSchema = z
         });
       }
     }
-  });
+  }));
 
 export type YieldEstimateInput = z.input<typeof yieldEstimateSchema>;
 

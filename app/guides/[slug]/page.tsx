@@ -5,7 +5,7 @@ import 'katex/dist/katex.min.css';
 import { listGuides, neighbours, readGuideFile } from '@/lib/guides/content';
 import { renderGuide } from '@/components/guides/GuideBody';
 import { LevelBadge } from '@/components/guides/LevelBadge';
-import { SafetyCheckStatus } from '@/components/guides/SafetyCheckStatus';
+import { SafetyCheckStatusLazy as SafetyCheckStatus } from '@/components/guides/SafetyCheckStatusLazy';
 
 export const dynamicParams = false;
 
