@@ -82,3 +82,15 @@ for (const path of ['/guides', '/guides/the-drive-pipe', '/calculators/delivery-
     expect(bad.map((v) => `${v.id}: ${v.nodes.length} × ${v.nodes[0]?.target.join(' ')}`)).toEqual([]);
   });
 }
+
+test('at phone width a guide with calculators fits the screen', async ({ browser }) => {
+  const ctx = await browser.newContext({ viewport: { width: 390, height: 844 } });
+  const page = await ctx.newPage();
+  for (const path of ['/guides/pumps-in-parallel-and-in-stages', '/guides/when-it-stops-cycling', '/questions']) {
+    await page.goto(path);
+    await page.waitForLoadState('networkidle');
+    const overflow = await page.evaluate(() => document.documentElement.scrollWidth - window.innerWidth);
+    expect(overflow, `${path} is wider than the phone`).toBeLessThanOrEqual(0);
+  }
+  await ctx.close();
+});

@@ -76,7 +76,7 @@ export function CalculatorCard<R>({
   const shareHref = `/calculators/${def.id}?${shareQuery(def.fields, state)}`;
 
   return (
-    <section className="cw-card my-6 font-sans not-prose" data-calculator={def.id} aria-labelledby={`${def.id}-title`}>
+    <section className="cw-card my-6 min-w-0 max-w-full overflow-hidden font-sans not-prose" data-calculator={def.id} aria-labelledby={`${def.id}-title`}>
       <header className="mb-3 flex flex-wrap items-baseline justify-between gap-2">
         <h3 id={`${def.id}-title`} className="text-lg font-semibold">
           {def.title}
@@ -84,12 +84,12 @@ export function CalculatorCard<R>({
         <p className="cw-muted text-xs">{def.blurb}</p>
       </header>
       <div className="grid gap-6 md:grid-cols-2">
-        <form className="flex flex-col gap-3" onSubmit={(e) => e.preventDefault()} aria-label={`${def.title} inputs`}>
+        <form className="flex min-w-0 flex-col gap-3" onSubmit={(e) => e.preventDefault()} aria-label={`${def.title} inputs`}>
           {visibleFields(def, state).map((f) => (
             <Field key={f.name} id={`${def.id}-${f.name}`} field={f} state={state[f.name]} error={outcome.ok ? undefined : outcome.fieldErrors[f.name]} onChange={(p) => set(f.name, p)} />
           ))}
         </form>
-        <div aria-live="polite" data-testid={`${def.id}-results`}>
+        <div className="min-w-0" aria-live="polite" data-testid={`${def.id}-results`}>
           {outcome.ok ? (
             <Results def={def} output={outcome.output} units={units} input={outcome.input ?? {}} />
           ) : (
@@ -135,7 +135,7 @@ function Field({
 }) {
   const s = state ?? { text: '' };
   const describedBy = [field.help ? `${id}-help` : null, error ? `${id}-error` : null].filter(Boolean).join(' ') || undefined;
-  const box = `min-w-0 flex-1 rounded-md border bg-limestone-50 px-2 py-1.5 cw-num dark:bg-creek-950 ${error ? 'border-signal ring-1 ring-signal' : 'border-limestone-400 dark:border-creek-500'}`;
+  const box = `w-full min-w-0 flex-1 rounded-md border bg-limestone-50 px-2 py-1.5 cw-num dark:bg-creek-950 ${error ? 'border-signal ring-1 ring-signal' : 'border-limestone-400 dark:border-creek-500'}`;
   return (
     <div className="flex flex-col gap-1">
       {field.type === 'checks' ? (
