@@ -1,6 +1,9 @@
 import { defineConfig } from '@playwright/test';
 
 const port = Number(process.env.E2E_PORT ?? 3100);
+/** The browser tests' own SMTP catcher (tests/support/smtp-catcher.ts) listens here. */
+export const E2E_SMTP_PORT = Number(process.env.E2E_SMTP_PORT ?? 2526);
+const origin = `http://127.0.0.1:${port}`;
 
 /** Chromium flags for a closed network, as root, headless. */
 export const CHROMIUM_ARGS = [
@@ -22,7 +25,7 @@ export default defineConfig({
   reporter: [['list']],
   timeout: 30_000,
   use: {
-    baseURL: process.env.E2E_BASE_URL ?? `http://127.0.0.1:${port}`,
+    baseURL: process.env.E2E_BASE_URL ?? origin,
     launchOptions: { executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium', args: CHROMIUM_ARGS },
     trace: 'off',
   },
@@ -39,5 +42,6 @@ export default defineConfig({
         timeout: 60_000,
         stdout: 'ignore',
         stderr: 'pipe',
+        env: { ...process.env, SMTP_HOST: '127.0.0.1', SMTP_PORT: String(E2E_SMTP_PORT), NEXTAUTH_URL: origin, SITE_URL: origin } as Record<string, string>,
       },
 });

@@ -7,6 +7,7 @@ import './globals.css';
 import { SiteHeader } from '@/components/SiteHeader';
 import { SiteFooter } from '@/components/SiteFooter';
 import { UnitsProvider } from '@/components/units/UnitsProvider';
+import { Providers } from '@/components/account/Providers';
 import { palette } from '@/tailwind.config';
 import { SITE_DESCRIPTION, SITE_NAME, siteUrl } from '@/lib/site';
 
@@ -34,6 +35,7 @@ export default function RootLayout({ children }: { children: ReactNode }) {
         <a href="#main" className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:z-50 focus:rounded focus:bg-limestone-50 focus:px-3 focus:py-2">
           Skip to content
         </a>
+        <Providers>
         <UnitsProvider>
           <SiteHeader />
           <main id="main" className="mx-auto w-full max-w-5xl flex-1 px-4 py-6">
@@ -41,6 +43,7 @@ export default function RootLayout({ children }: { children: ReactNode }) {
           </main>
           <SiteFooter />
         </UnitsProvider>
+        </Providers>
       </body>
     </html>
   );

@@ -1,6 +1,7 @@
 import Link from 'next/link';
 import { Logo } from './Logo';
 import { UnitSwitch } from './units/UnitSwitch';
+import { AccountMenu } from './account/AccountMenu';
 
 const NAV = [
   { href: '/guides', label: 'Guides' },
@@ -30,6 +31,7 @@ export function SiteHeader() {
         </nav>
         <div className="ml-auto flex min-w-0 flex-1 items-center justify-end gap-3 sm:flex-none">
         <UnitSwitch />
+        <AccountMenu />
         <form action="/search" method="get" role="search" className="flex min-w-0 flex-1 justify-end sm:flex-none">
           <label htmlFor="site-search" className="sr-only">
             Search Clackwater

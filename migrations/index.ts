@@ -1,6 +1,7 @@
 import type { QueryInterface } from 'sequelize';
 import * as coreTables from './001-core-tables';
 import * as guides from './002-guides';
+import * as accounts from './003-accounts';
 
 type Step = (params: { context: QueryInterface }) => Promise<void>;
 
@@ -11,4 +12,5 @@ type Step = (params: { context: QueryInterface }) => Promise<void>;
 export const migrations: { name: string; up: Step; down: Step }[] = [
   { name: '001-core-tables', ...coreTables },
   { name: '002-guides', ...guides },
+  { name: '003-accounts', ...accounts },
 ];

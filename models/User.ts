@@ -11,6 +11,9 @@ export class User extends Model<InferAttributes<User>, InferCreationAttributes<U
   declare role: CreationOptional<Role>;
   declare region: string | null;
   declare bio: string | null;
+  declare passwordHash: CreationOptional<string | null>;
+  declare emailVerifiedAt: CreationOptional<Date | null>;
+  declare units: CreationOptional<'US' | 'metric'>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -24,10 +27,18 @@ export class User extends Model<InferAttributes<User>, InferCreationAttributes<U
         role: { type: DataTypes.ENUM(...ROLES), allowNull: false, defaultValue: 'member' },
         region: { type: DataTypes.STRING(80), allowNull: true },
         bio: { type: DataTypes.TEXT, allowNull: true },
+        passwordHash: { type: DataTypes.STRING(255), allowNull: true },
+        emailVerifiedAt: { type: DataTypes.DATE, allowNull: true },
+        units: { type: DataTypes.ENUM('US', 'metric'), allowNull: false, defaultValue: 'US' },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },
-      { sequelize, tableName: 'users' },
+      {
+        sequelize,
+        tableName: 'users',
+        // the hash never leaves the server by accident; sign-in reads it with User.unscoped()
+        defaultScope: { attributes: { exclude: ['passwordHash'] } },
+      },
     );
   }
 }

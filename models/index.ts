@@ -7,8 +7,11 @@ import { Answer } from './Answer';
 import { QuestionTag } from './QuestionTag';
 import { SafetyCheck } from './SafetyCheck';
 import { WorkedCalculation } from './WorkedCalculation';
+import { AuthToken } from './AuthToken';
+import { ExpertApplication } from './ExpertApplication';
+import { Notice } from './Notice';
 
-export { User, Tag, Question, Answer, QuestionTag, SafetyCheck, WorkedCalculation };
+export { User, Tag, Question, Answer, QuestionTag, SafetyCheck, WorkedCalculation, AuthToken, ExpertApplication, Notice };
 
 const initialised = new WeakSet<Sequelize>();
 
@@ -22,6 +25,9 @@ export function initModels(sequelize: Sequelize = getSequelize()) {
     QuestionTag.initModel(sequelize);
     SafetyCheck.initModel(sequelize);
     WorkedCalculation.initModel(sequelize);
+    AuthToken.initModel(sequelize);
+    ExpertApplication.initModel(sequelize);
+    Notice.initModel(sequelize);
 
     Question.belongsTo(User, { as: 'author', foreignKey: 'authorId' });
     User.hasMany(Question, { as: 'questions', foreignKey: 'authorId' });
@@ -32,7 +38,8 @@ export function initModels(sequelize: Sequelize = getSequelize()) {
     Tag.belongsToMany(Question, { through: QuestionTag, as: 'questions', foreignKey: 'tagId', otherKey: 'questionId' });
     SafetyCheck.belongsTo(User, { as: 'expert', foreignKey: 'expertId' });
     WorkedCalculation.belongsTo(User, { as: 'author', foreignKey: 'authorId' });
+    ExpertApplication.belongsTo(User, { as: 'applicant', foreignKey: 'userId' });
     initialised.add(sequelize);
   }
-  return { sequelize, User, Tag, Question, Answer, QuestionTag, SafetyCheck, WorkedCalculation };
+  return { sequelize, User, Tag, Question, Answer, QuestionTag, SafetyCheck, WorkedCalculation, AuthToken, ExpertApplication, Notice };
 }

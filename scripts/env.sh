@@ -19,5 +19,11 @@ export DB_HOST="${DB_HOST:-127.0.0.1}"
 export DB_USER="${DB_USER:-clackwater}"
 export DB_PASSWORD="${DB_PASSWORD:-clackwater}"
 
+export NEXTAUTH_URL="${NEXTAUTH_URL:-http://localhost:$PORT}"
+export SITE_URL="${SITE_URL:-$NEXTAUTH_URL}"
+export SMTP_HOST="${SMTP_HOST:-127.0.0.1}"
+export SMTP_PORT="${SMTP_PORT:-1025}"
+export MAILDEV_WEB_PORT="${MAILDEV_WEB_PORT:-1080}"
+
 log() { printf '\033[1;36m[clackwater]\033[0m %s\n' "$*"; }
 die() { printf '\033[1;31m[clackwater]\033[0m %s\n' "$*" >&2; exit 1; }

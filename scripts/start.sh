@@ -14,9 +14,11 @@ fi
 echo $$ >"$LOCK"
 
 APP_PID=""
+MAIL_PID=""
 cleanup() {
   trap - INT TERM EXIT
   [ -n "$APP_PID" ] && kill -TERM "$APP_PID" 2>/dev/null && wait "$APP_PID" 2>/dev/null || true
+  [ -n "$MAIL_PID" ] && kill -TERM "$MAIL_PID" 2>/dev/null || true
   bash "$ROOT/scripts/db.sh" stop || true
   rm -f "$LOCK"
 }
@@ -28,6 +30,12 @@ npx tsx scripts/migrate.ts up
 npx tsx scripts/seed.ts
 bash scripts/build-if-needed.sh
 
+# The local mail catcher: everything the app sends lands here, nothing leaves the machine.
+if [ "$SMTP_HOST" = "127.0.0.1" ] && ! (exec 3<>"/dev/tcp/127.0.0.1/$SMTP_PORT") 2>/dev/null; then
+  npx maildev --smtp "$SMTP_PORT" --web "$MAILDEV_WEB_PORT" --ip 127.0.0.1 --web-ip 127.0.0.1 --silent >"$ROOT/.data/maildev.log" 2>&1 &
+  MAIL_PID=$!
+fi
+
 log "Clackwater is starting on http://localhost:$PORT (Ctrl-C stops it and the database)"
 npx next start -p "$PORT" &
 APP_PID=$!
@@ -36,4 +44,5 @@ for _ in $(seq 1 60); do
   sleep 1
 done
 log "ready: open http://localhost:$PORT"
+log "mail the app sends (sign-up, sign-in links, resets): http://localhost:$MAILDEV_WEB_PORT/index.html"
 wait "$APP_PID"

@@ -1,6 +1,8 @@
 'use client';
 
 import useSWR from 'swr';
+import { useSession } from 'next-auth/react';
+import { RecordSafetyCheck } from './RecordSafetyCheck';
 import type { SafetyCheckView, SafetyStatus } from '@/lib/guides/safety';
 
 interface Payload {
@@ -22,7 +24,9 @@ const day = (iso: string) => dateFmt.format(new Date(iso));
  * live so a new check, or an edit that makes the last one stale, shows at once.
  */
 export function SafetyCheckStatus({ slug }: { slug: string }) {
-  const { data, error, isLoading } = useSWR(`/api/guides/${slug}/safety-checks`, fetcher, { revalidateOnFocus: false });
+  const { data, error, isLoading, mutate } = useSWR(`/api/guides/${slug}/safety-checks`, fetcher, { revalidateOnFocus: false });
+  const { data: session } = useSession();
+  const isExpert = session?.user?.role === 'expert';
 
   if (isLoading) return <p className="cw-muted text-sm">Looking up safety checks…</p>;
   if (error || !data) return <p className="cw-muted text-sm">Safety checks could not be loaded just now.</p>;
@@ -64,6 +68,7 @@ export function SafetyCheckStatus({ slug }: { slug: string }) {
           </ol>
         </details>
       ) : null}
+      {isExpert ? <RecordSafetyCheck slug={slug} onRecorded={() => mutate()} /> : null}
     </div>
   );
 }

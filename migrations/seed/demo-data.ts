@@ -4,6 +4,9 @@
  * watering its far paddock; and a cabin on seasonal Sorrel Creek. No real people,
  * places or products. Numbers are plausible, not measured.
  */
+/** Every demo account signs in with this password (README lists the accounts). Demo only. */
+export const DEMO_PASSWORD = 'lift-with-falling-water';
+
 export const demoUsers = [
   { handle: 'ferncombe_tamsin', displayName: 'Tamsin at Ferncombe', email: 'tamsin@ferncombe.example', role: 'member', region: 'Linnet valley, hill country' },
   { handle: 'highcrag_shepherd', displayName: 'Highcrag Shepherd', email: 'shepherd@highcrag.example', role: 'member', region: 'Highcrag, upper Linnet valley' },

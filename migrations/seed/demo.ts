@@ -3,7 +3,8 @@ import { initModels } from '@/models';
 import { contentHash, readGuideFile } from '@/lib/guides/content';
 import { computeFromForm } from '@/components/calculators/recompute';
 import { newPublicId } from '@/lib/calculations/store';
-import { demoCalculations, demoQuestions, demoSafetyChecks, demoTags, demoUsers } from './demo-data';
+import { hashPassword } from '@/lib/auth/password';
+import { DEMO_PASSWORD, demoCalculations, demoQuestions, demoSafetyChecks, demoTags, demoUsers } from './demo-data';
 
 const DAY = 86_400_000;
 
@@ -15,9 +16,10 @@ export async function seedDemo(sequelize: Sequelize, now = new Date()): Promise<
   const { User, Tag, Question, Answer, QuestionTag, SafetyCheck, WorkedCalculation } = initModels(sequelize);
   if ((await User.count()) > 0) return false;
 
+  const passwordHash = await hashPassword(DEMO_PASSWORD);
   await sequelize.transaction(async (transaction) => {
     const users = await User.bulkCreate(
-      demoUsers.map((u) => ({ ...u, createdAt: new Date(now.getTime() - 400 * DAY), updatedAt: now })),
+      demoUsers.map((u) => ({ ...u, passwordHash, emailVerifiedAt: now, createdAt: new Date(now.getTime() - 400 * DAY), updatedAt: now })),
       { transaction },
     );
     const userId = new Map(users.map((u) => [u.handle, u.id]));

@@ -30,7 +30,7 @@ test('the header carries the site sections, a search box and the safety notice',
   await page.getByRole('searchbox', { name: 'Search Clackwater' }).fill('winter');
   await page.keyboard.press('Enter');
   await expect(page).toHaveURL(/\/search\?q=winter/);
-  await expect(page.getByText(/drain the pump for winter/)).toBeVisible();
+  await expect(page.locator('#main').getByText(/drain the pump for winter/)).toBeVisible();
   await page.getByRole('link', { name: 'safety notice' }).last().click();
   await expect(page.getByRole('heading', { name: 'Safety notice' })).toBeVisible();
 });

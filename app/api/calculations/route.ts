@@ -2,6 +2,7 @@ import { NextResponse } from 'next/server';
 import { saveCalculationSchema } from '@/lib/validation/calculation';
 import { apiError, serverError, validationError } from '@/lib/http/errors';
 import { currentUser } from '@/lib/auth/session';
+import { can, REFUSAL } from '@/lib/auth/policy';
 import { saveWorkedCalculation } from '@/lib/calculations/store';
 import { computeFromForm } from '@/components/calculators/recompute';
 
@@ -20,8 +21,9 @@ export async function POST(request: Request) {
   }
   const parsed = saveCalculationSchema.safeParse(body);
   if (!parsed.success) return validationError(parsed.error);
-  const user = await currentUser();
-  if (!user) return apiError(401, 'Sign in to save a worked calculation.', undefined, 'unauthenticated');
+  const user = await currentUser(request);
+  if (!user) return apiError(401, REFUSAL['calculation.save'], undefined, 'unauthenticated');
+  if (!can(user, 'calculation.save')) return apiError(403, REFUSAL['calculation.save'], undefined, 'forbidden');
 
   const computed = computeFromForm(parsed.data.tool, parsed.data.inputs);
   if (!computed.ok) return apiError(422, computed.message, computed.field ? `inputs.${computed.field}` : undefined, 'invalid_inputs');

@@ -1,7 +1,13 @@
 import { NextResponse } from 'next/server';
+import { getSequelize } from '@/lib/db';
+import { initModels } from '@/models';
 import { readGuideFile } from '@/lib/guides/content';
 import { listSafetyChecks, safetyStatus } from '@/lib/guides/safety';
+import { readJson } from '@/lib/http/body';
 import { apiError, serverError } from '@/lib/http/errors';
+import { currentUser } from '@/lib/auth/session';
+import { can, REFUSAL } from '@/lib/auth/policy';
+import { safetyCheckSchema } from '@/lib/validation/community';
 
 export const dynamic = 'force-dynamic';
 
@@ -13,6 +19,44 @@ export async function GET(_req: Request, { params }: { params: Promise<{ slug: s
   try {
     const checks = await listSafetyChecks(slug, guide.hash);
     return NextResponse.json({ slug, hash: guide.hash, status: safetyStatus(checks), checks });
+  } catch (err) {
+    return serverError(err);
+  }
+}
+
+/**
+ * POST /api/guides/:slug/safety-checks — an expert records a safety check. It is tied
+ * to the hash of the guide file as the server reads it now; a hash from the browser
+ * is never used, so a check always names the text the expert was shown.
+ */
+export async function POST(request: Request, { params }: { params: Promise<{ slug: string }> }) {
+  const { slug } = await params;
+  try {
+    const user = await currentUser(request);
+    if (!user) return apiError(401, 'Sign in as an expert to record a safety check.', undefined, 'unauthenticated');
+    if (!can(user, 'safetyCheck.record')) return apiError(403, REFUSAL['safetyCheck.record'], undefined, 'forbidden');
+    const guide = readGuideFile(slug);
+    if (!guide) return apiError(404, `no guide called ${slug}`, 'slug', 'not_found');
+    const body = await readJson(request, safetyCheckSchema);
+    if ('response' in body) return body.response;
+    const { SafetyCheck } = initModels();
+    const check = await getSequelize().transaction((transaction) =>
+      SafetyCheck.create(
+        { guideSlug: slug, contentHash: guide.hash, expertId: user.id, verdict: body.data.verdict, notes: body.data.notes || null },
+        { transaction },
+      ),
+    );
+    return NextResponse.json(
+      {
+        id: check.id,
+        verdict: check.verdict,
+        notes: check.notes,
+        expert: { handle: user.handle, displayName: user.displayName },
+        checkedAt: check.createdAt.toISOString(),
+        current: true,
+      },
+      { status: 201 },
+    );
   } catch (err) {
     return serverError(err);
   }

@@ -1,0 +1,27 @@
+import { NextResponse } from 'next/server';
+import { emailOnlySchema } from '@/lib/validation/account';
+import { readJson } from '@/lib/http/body';
+import { apiError, serverError } from '@/lib/http/errors';
+import { clientIp, limitMessage, spend } from '@/lib/auth/rate-limit';
+import { requestPasswordReset } from '@/lib/accounts/service';
+
+export const dynamic = 'force-dynamic';
+
+const SENT = 'If that address has an account, a link to reset its password is on its way.';
+
+/** POST /api/account/password-reset { email } — the same answer whether or not the account exists. */
+export async function POST(request: Request) {
+  const body = await readJson(request, emailOnlySchema);
+  if ('response' in body) return body.response;
+  const limited = await spend([
+    ['resetIp', clientIp(request.headers)],
+    ['resetAccount', body.data.email],
+  ]);
+  if (!limited.ok) return apiError(429, limitMessage(limited.retryAfterS), undefined, 'rate_limited');
+  try {
+    await requestPasswordReset(body.data.email);
+    return NextResponse.json({ message: SENT }, { status: 202 });
+  } catch (err) {
+    return serverError(err);
+  }
+}

@@ -1,0 +1,60 @@
+import { NextResponse } from 'next/server';
+import { getSequelize } from '@/lib/db';
+import { initModels } from '@/models';
+import type { User } from '@/models/User';
+import { readJson } from '@/lib/http/body';
+import { apiError, serverError } from '@/lib/http/errors';
+import { currentUser } from '@/lib/auth/session';
+import { can, REFUSAL } from '@/lib/auth/policy';
+import { accountSettingsSchema } from '@/lib/validation/community';
+import { UNITS_COOKIE } from '@/lib/units/preference';
+
+export const dynamic = 'force-dynamic';
+
+const ONE_YEAR_S = 60 * 60 * 24 * 365;
+
+function settingsView(u: User) {
+  return { handle: u.handle, email: u.email, role: u.role, displayName: u.displayName, region: u.region ?? '', bio: u.bio ?? '', units: u.units };
+}
+
+/** GET /api/account/settings — the signed-in member's own settings. */
+export async function GET(request: Request) {
+  try {
+    const user = await currentUser(request);
+    if (!user) return apiError(401, 'Sign in to see your settings.', undefined, 'unauthenticated');
+    if (!can(user, 'profile.edit', user.id)) return apiError(403, REFUSAL['profile.edit'], undefined, 'forbidden');
+    const row = await initModels().User.findByPk(user.id);
+    if (!row) return apiError(401, 'Sign in to see your settings.', undefined, 'unauthenticated');
+    return NextResponse.json(settingsView(row));
+  } catch (err) {
+    return serverError(err);
+  }
+}
+
+/**
+ * PUT /api/account/settings — display name, region, bio and units, for oneself only:
+ * the row changed is always the session's own, never one named in the body.
+ */
+export async function PUT(request: Request) {
+  try {
+    const user = await currentUser(request);
+    if (!user) return apiError(401, 'Sign in to change your settings.', undefined, 'unauthenticated');
+    if (!can(user, 'profile.edit', user.id)) return apiError(403, REFUSAL['profile.edit'], undefined, 'forbidden');
+    const body = await readJson(request, accountSettingsSchema);
+    if ('response' in body) return body.response;
+    const { displayName, region, bio, units } = body.data;
+    const { User } = initModels();
+    const saved = await getSequelize().transaction(async (transaction) => {
+      const row = await User.findByPk(user.id, { transaction, lock: transaction.LOCK.UPDATE });
+      if (!row) return null;
+      return row.update({ displayName, region: region || null, bio: bio || null, units }, { transaction });
+    });
+    if (!saved) return apiError(401, 'Sign in to change your settings.', undefined, 'unauthenticated');
+    const res = NextResponse.json(settingsView(saved));
+    // Not httpOnly: the header's unit switch reads and writes the same cookie in the browser.
+    res.cookies.set(UNITS_COOKIE, units, { path: '/', maxAge: ONE_YEAR_S, sameSite: 'lax' });
+    return res;
+  } catch (err) {
+    return serverError(err);
+  }
+}

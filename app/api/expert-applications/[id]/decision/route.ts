@@ -1,0 +1,32 @@
+import { NextResponse } from 'next/server';
+import { readJson } from '@/lib/http/body';
+import { apiError, serverError } from '@/lib/http/errors';
+import { currentUser } from '@/lib/auth/session';
+import { can, REFUSAL } from '@/lib/auth/policy';
+import { expertDecisionSchema, routeId } from '@/lib/validation/community';
+import { decideExpertApplication } from '@/lib/accounts/roles';
+
+export const dynamic = 'force-dynamic';
+
+/** POST /api/expert-applications/:id/decision — a moderator approves or declines, with a note to the applicant. */
+export async function POST(request: Request, { params }: { params: Promise<{ id: string }> }) {
+  try {
+    const user = await currentUser(request);
+    if (!user) return apiError(401, 'Sign in to decide expert applications.', undefined, 'unauthenticated');
+    if (!can(user, 'expertApplication.decide')) return apiError(403, REFUSAL['expertApplication.decide'], undefined, 'forbidden');
+    const id = routeId((await params).id);
+    if (id === null) return apiError(404, 'There is no such expert application.', 'id', 'not_found');
+    const body = await readJson(request, expertDecisionSchema);
+    if ('response' in body) return body.response;
+    const out = await decideExpertApplication(user.id, id, body.data.decision, body.data.note);
+    if (!out.ok) return apiError(out.status, out.message, out.field, out.code);
+    return NextResponse.json({
+      id,
+      status: out.status,
+      applicantRole: out.role,
+      ...(out.mailed ? {} : { note: 'The decision is saved, but the e-mail to the applicant could not be sent just now.' }),
+    });
+  } catch (err) {
+    return serverError(err);
+  }
+}

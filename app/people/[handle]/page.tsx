@@ -1,0 +1,103 @@
+import type { Metadata } from 'next';
+import Link from 'next/link';
+import { notFound } from 'next/navigation';
+import { cache } from 'react';
+import { initModels } from '@/models';
+import type { Role } from '@/models/User';
+import { isDatabaseUnavailable } from '@/lib/db/errors';
+import { catalogueEntry } from '@/lib/calculators-catalogue';
+import { ServiceUnavailable } from '@/components/ServiceUnavailable';
+
+export const dynamic = 'force-dynamic';
+
+const dateFmt = new Intl.DateTimeFormat('en', { day: 'numeric', month: 'long', year: 'numeric', timeZone: 'UTC' });
+const monthFmt = new Intl.DateTimeFormat('en', { month: 'long', year: 'numeric', timeZone: 'UTC' });
+
+/** Public fields only: never the e-mail or anything from the account's private side. */
+const findPerson = cache(async (handle: string) => {
+  if (!/^[a-z0-9_]{1,40}$/.test(handle)) return null;
+  const { User, WorkedCalculation } = initModels();
+  const person = await User.findOne({ where: { handle }, attributes: ['id', 'handle', 'displayName', 'role', 'region', 'bio', 'createdAt'] });
+  if (!person) return null;
+  const calculations = await WorkedCalculation.findAll({
+    where: { authorId: person.id },
+    attributes: ['publicId', 'tool', 'title', 'createdAt'],
+    order: [
+      ['createdAt', 'DESC'],
+      ['id', 'DESC'],
+    ],
+    limit: 100,
+  });
+  return { person, calculations };
+});
+
+export async function generateMetadata({ params }: { params: Promise<{ handle: string }> }): Promise<Metadata> {
+  const { handle } = await params;
+  try {
+    const found = await findPerson(handle);
+    return { title: found ? found.person.displayName : 'Member not found' };
+  } catch {
+    return { title: 'Member' };
+  }
+}
+
+/** The role worth saying out loud on a profile; a plain member has no label. */
+const ROLE_LABEL: Record<Role, 'expert' | 'moderator' | null> = { expert: 'expert', moderator: 'moderator', admin: null, member: null };
+
+export default async function PersonPage({ params }: { params: Promise<{ handle: string }> }) {
+  const { handle } = await params;
+  let found: Awaited<ReturnType<typeof findPerson>>;
+  try {
+    found = await findPerson(handle);
+  } catch (err) {
+    if (isDatabaseUnavailable(err)) return <ServiceUnavailable what="this profile" />;
+    throw err;
+  }
+  if (!found) notFound();
+  const { person, calculations } = found;
+  const label = ROLE_LABEL[person.role as Role];
+
+  return (
+    <div className="flex max-w-3xl flex-col gap-4">
+      <header className="flex flex-col gap-1">
+        <h1 className="flex flex-wrap items-center gap-3 font-serif text-3xl font-semibold">
+          {person.displayName}
+          {label ? (
+            <span
+              data-testid="role-label"
+              className={`rounded px-2 py-0.5 font-sans text-sm font-semibold ${label === 'expert' ? 'bg-moss text-limestone-50' : 'bg-creek text-limestone-50 dark:bg-creek-300 dark:text-creek-950'}`}
+            >
+              {label}
+            </span>
+          ) : null}
+        </h1>
+        <p className="cw-muted font-sans text-sm">
+          @{person.handle}
+          {person.region ? ` · ${person.region}` : ''} · member since {monthFmt.format(person.createdAt)}
+        </p>
+      </header>
+      {person.bio ? <p className="cw-prose whitespace-pre-line">{person.bio}</p> : null}
+      <section aria-labelledby="calcs" className="flex flex-col gap-2">
+        <h2 id="calcs" className="font-serif text-xl font-semibold">
+          Worked calculations
+        </h2>
+        {calculations.length === 0 ? (
+          <p className="cw-muted font-sans text-sm">{`${person.displayName} has not saved a worked calculation yet.`}</p>
+        ) : (
+          <ul className="flex flex-col gap-2 font-sans">
+            {calculations.map((c) => (
+              <li key={c.publicId} className="cw-card py-3">
+                <Link href={`/calculations/${c.publicId}`} className="cw-link font-semibold">
+                  {c.title ?? `${catalogueEntry(c.tool)?.name ?? c.tool}: worked calculation`}
+                </Link>
+                <p className="cw-muted text-sm">
+                  {catalogueEntry(c.tool)?.name ?? c.tool} · {dateFmt.format(c.createdAt)}
+                </p>
+              </li>
+            ))}
+          </ul>
+        )}
+      </section>
+    </div>
+  );
+}

@@ -1,0 +1,34 @@
+import type { InputHTMLAttributes } from 'react';
+
+/** A labelled form input with its error beside it. */
+export function Field({ label, error, id, ...input }: InputHTMLAttributes<HTMLInputElement> & { label: string; id: string; error?: string }) {
+  return (
+    <div className="flex flex-col gap-1">
+      <label htmlFor={id} className="text-sm font-medium">
+        {label}
+      </label>
+      <input
+        id={id}
+        {...input}
+        aria-invalid={error ? true : undefined}
+        aria-describedby={error ? `${id}-error` : undefined}
+        className={`rounded-md border bg-limestone-50 px-3 py-2 dark:bg-creek-950 ${error ? 'border-signal ring-1 ring-signal' : 'border-limestone-400 dark:border-creek-500'}`}
+      />
+      {error ? (
+        <p id={`${id}-error`} role="alert" className="text-sm font-semibold text-signal-700 dark:text-signal-300">
+          {error}
+        </p>
+      ) : null}
+    </div>
+  );
+}
+
+/** Posts JSON and returns the body with the status, for forms. */
+export async function postJson(url: string, body: unknown): Promise<{ status: number; body: { message?: string; note?: string; error?: { field?: string; message: string } } }> {
+  try {
+    const res = await fetch(url, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify(body) });
+    return { status: res.status, body: await res.json().catch(() => ({})) };
+  } catch {
+    return { status: 0, body: { error: { message: 'Could not reach Clackwater. Check your connection and try again.' } } };
+  }
+}

@@ -1,0 +1,78 @@
+'use client';
+
+import { useState } from 'react';
+import Link from 'next/link';
+import { signIn } from 'next-auth/react';
+import { Field, postJson } from './Field';
+
+/** Password sign-in, and a passwordless link by e-mail. */
+export function SignInForms({ callbackUrl = '/' }: { callbackUrl?: string }) {
+  const [error, setError] = useState<string | null>(null);
+  const [busy, setBusy] = useState(false);
+  const [linkNote, setLinkNote] = useState<string | null>(null);
+  const [linkError, setLinkError] = useState<string | undefined>();
+
+  return (
+    <div className="grid gap-6 md:grid-cols-2">
+      <form
+        className="cw-card flex flex-col gap-3"
+        aria-label="Sign in with a password"
+        onSubmit={async (e) => {
+          e.preventDefault();
+          const f = new FormData(e.currentTarget);
+          setBusy(true);
+          setError(null);
+          const res = await signIn('password', { email: String(f.get('email')), password: String(f.get('password')), redirect: false });
+          setBusy(false);
+          if (res?.ok && !res.error) window.location.assign(callbackUrl);
+          else setError(res?.error && res.error !== 'CredentialsSignin' ? res.error : 'That e-mail and password do not match an account.');
+        }}
+      >
+        <h2 className="text-lg font-semibold">With your password</h2>
+        <Field id="signin-email" name="email" type="email" label="E-mail" autoComplete="email" required />
+        <Field id="signin-password" name="password" type="password" label="Password" autoComplete="current-password" required />
+        {error ? (
+          <p role="alert" className="text-sm font-semibold text-signal-700 dark:text-signal-300">
+            {error}
+          </p>
+        ) : null}
+        <button type="submit" className="cw-button self-start" disabled={busy}>
+          Sign in
+        </button>
+        <p className="text-sm">
+          <Link href="/reset-password" className="cw-link">
+            Forgotten your password?
+          </Link>{' '}
+          ·{' '}
+          <Link href="/sign-up" className="cw-link">
+            New here? Sign up
+          </Link>
+        </p>
+      </form>
+      <form
+        className="cw-card flex flex-col gap-3"
+        aria-label="Sign in with an e-mailed link"
+        onSubmit={async (e) => {
+          e.preventDefault();
+          const f = new FormData(e.currentTarget);
+          setLinkError(undefined);
+          const res = await postJson('/api/account/sign-in-link', { email: String(f.get('email')) });
+          if (res.status === 202) setLinkNote(res.body.message ?? 'Check your e-mail.');
+          else setLinkError(res.body.error?.message ?? 'That did not work; try again.');
+        }}
+      >
+        <h2 className="text-lg font-semibold">With a link by e-mail</h2>
+        <p className="cw-muted text-sm">No password needed: we e-mail you a link that signs you in once.</p>
+        <Field id="link-email" name="email" type="email" label="E-mail" autoComplete="email" required error={linkError} />
+        <button type="submit" className="cw-button self-start">
+          E-mail me a link
+        </button>
+        {linkNote ? (
+          <p role="status" className="text-sm text-moss-600 dark:text-moss-300">
+            {linkNote}
+          </p>
+        ) : null}
+      </form>
+    </div>
+  );
+}

@@ -1,0 +1,46 @@
+'use client';
+
+import { useState } from 'react';
+import { Field, postJson } from './Field';
+
+export function SignUpForm() {
+  const [errors, setErrors] = useState<Record<string, string>>({});
+  const [done, setDone] = useState<string | null>(null);
+  const [busy, setBusy] = useState(false);
+  if (done) {
+    return (
+      <div role="status" className="cw-card">
+        <p className="font-semibold">{done}</p>
+        <p className="cw-muted mt-2 text-sm">The link works once and lasts 48 hours. Then sign in.</p>
+      </div>
+    );
+  }
+  return (
+    <form
+      className="cw-card flex max-w-md flex-col gap-3"
+      aria-label="Sign up"
+      onSubmit={async (e) => {
+        e.preventDefault();
+        const f = new FormData(e.currentTarget);
+        setBusy(true);
+        const res = await postJson('/api/account/sign-up', Object.fromEntries(['email', 'password', 'handle', 'displayName'].map((k) => [k, String(f.get(k) ?? '')])));
+        setBusy(false);
+        if (res.status === 202) setDone([res.body.message, res.body.note].filter(Boolean).join(' '));
+        else setErrors({ [res.body.error?.field ?? 'form']: res.body.error?.message ?? 'That did not work; try again.' });
+      }}
+    >
+      <Field id="signup-email" name="email" type="email" label="E-mail" autoComplete="email" required error={errors.email} />
+      <Field id="signup-handle" name="handle" label="Handle (public, lower case)" autoComplete="username" required pattern="[a-z0-9_]{3,30}" error={errors.handle} />
+      <Field id="signup-name" name="displayName" label="Display name" autoComplete="nickname" required error={errors.displayName} />
+      <Field id="signup-password" name="password" type="password" label="Password (10 characters or more)" autoComplete="new-password" required error={errors.password} />
+      {errors.form ? (
+        <p role="alert" className="text-sm font-semibold text-signal-700 dark:text-signal-300">
+          {errors.form}
+        </p>
+      ) : null}
+      <button type="submit" className="cw-button self-start" disabled={busy}>
+        Sign up
+      </button>
+    </form>
+  );
+}

@@ -1,0 +1,28 @@
+import type { Action } from './policy';
+
+/**
+ * Every API route handler and the policy action it checks ('public' when anyone
+ * may call it, 'session' for next-auth's own endpoints). The permission matrix test
+ * walks app/api and fails when a handler has no entry here.
+ */
+export const API_ROUTES: Record<string, Action | 'public' | 'session'> = {
+  'GET /api/health': 'public',
+  'GET /api/questions': 'public',
+  'GET /api/guides/[slug]/safety-checks': 'public',
+  'GET /api/calculations/[id]': 'public',
+  'POST /api/calculations': 'calculation.save',
+  'POST /api/guides/[slug]/safety-checks': 'safetyCheck.record',
+  'GET /api/expert-applications': 'expertApplication.decide',
+  'POST /api/expert-applications': 'expertApplication.submit',
+  'POST /api/expert-applications/[id]/decision': 'expertApplication.decide',
+  'PUT /api/admin/users/[id]/role': 'user.changeRole',
+  'GET /api/account/settings': 'profile.edit',
+  'PUT /api/account/settings': 'profile.edit',
+  'GET /api/auth/[...nextauth]': 'session',
+  'POST /api/auth/[...nextauth]': 'session',
+  'POST /api/account/sign-up': 'public',
+  'POST /api/account/verify-email': 'public',
+  'POST /api/account/password-reset': 'public',
+  'POST /api/account/password-reset/confirm': 'public',
+  'POST /api/account/sign-in-link': 'public',
+};

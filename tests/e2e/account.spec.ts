@@ -1,0 +1,56 @@
+import { test, expect } from '@playwright/test';
+import { SmtpCatcher, linkIn } from '../support/smtp-catcher';
+import { E2E_SMTP_PORT } from '../../playwright.config';
+
+const catcher = new SmtpCatcher(E2E_SMTP_PORT);
+test.beforeAll(() => catcher.start());
+test.afterAll(() => catcher.stop());
+
+test('sign up, confirm the e-mail from the catcher, sign in with a link, sign out', async ({ page }) => {
+  const email = `heron${Date.now()}@linnetmill.example`;
+  await page.goto('/sign-up');
+  await page.getByLabel('E-mail').fill(email);
+  await page.getByLabel('Handle (public, lower case)').fill(`heron_${Date.now() % 100000}`);
+  await page.getByLabel('Display name').fill('Heron at Linnet Mill');
+  await page.getByLabel('Password (10 characters or more)').fill('weir plank thistle ember');
+  await page.getByRole('button', { name: 'Sign up' }).click();
+  await expect(page.getByRole('status')).toContainText('Check your e-mail');
+
+  const verify = linkIn(await catcher.waitFor(email, /Confirm your e-mail/), '/verify-email?token=');
+  await page.goto(verify.url);
+  await expect(page.getByText('Your e-mail is confirmed')).toBeVisible();
+  // The link works once.
+  await page.goto(verify.url);
+  await expect(page.locator('#main').getByRole('alert')).toContainText('already been used');
+
+  await page.goto('/sign-in');
+  await page.getByRole('form', { name: 'Sign in with an e-mailed link' }).getByLabel('E-mail').fill(email);
+  await page.getByRole('button', { name: 'E-mail me a link' }).click();
+  await expect(page.getByText('a sign-in link is on its way')).toBeVisible();
+  const link = linkIn(await catcher.waitFor(email, /sign-in link/), '/sign-in/link?token=');
+  await page.goto(link.url);
+  await expect(page).toHaveURL(/\/$/);
+  const menu = page.getByTestId('account-menu');
+  await expect(menu).toContainText('Heron at Linnet Mill');
+
+  await menu.locator('summary').click();
+  await menu.getByRole('button', { name: 'Sign out' }).click();
+  await expect(page.getByRole('banner').getByRole('link', { name: 'Sign in' })).toBeVisible();
+});
+
+test('a wrong password gets a plain message', async ({ page }) => {
+  await page.goto('/sign-in');
+  const form = page.getByRole('form', { name: 'Sign in with a password' });
+  await form.getByLabel('E-mail').fill('admin@clackwater.example');
+  await form.getByLabel('Password').fill('not the right one at all');
+  await form.getByRole('button', { name: 'Sign in' }).click();
+  await expect(form.getByRole('alert')).toContainText('do not match an account');
+});
+
+test('every page carries the security headers', async ({ request }) => {
+  const res = await request.get('/guides');
+  const h = res.headers();
+  expect(h['content-security-policy']).toContain("frame-ancestors 'none'");
+  expect(h['x-content-type-options']).toBe('nosniff');
+  expect(h['referrer-policy']).toBe('strict-origin-when-cross-origin');
+});

@@ -1,0 +1,67 @@
+import { SMTPServer } from 'smtp-server';
+import { simpleParser } from 'mailparser';
+
+export interface CaughtMail {
+  to: string[];
+  subject: string;
+  text: string;
+  headers: Map<string, unknown>;
+}
+
+/** An in-process SMTP server that keeps every message it is given, for tests. */
+export class SmtpCatcher {
+  readonly messages: CaughtMail[] = [];
+  private server?: SMTPServer;
+  private waiters: (() => void)[] = [];
+
+  constructor(readonly port: number) {}
+
+  async start() {
+    this.server = new SMTPServer({
+      authOptional: true,
+      disabledCommands: ['STARTTLS'],
+      logger: false,
+      onData: (stream, _session, done) => {
+        simpleParser(stream)
+          .then((mail) => {
+            const to = ([] as { value: { address?: string }[] }[])
+              .concat((mail.to as never) ?? [])
+              .flatMap((a) => a.value.map((v) => v.address ?? ''));
+            this.messages.push({ to, subject: mail.subject ?? '', text: mail.text ?? '', headers: mail.headers });
+            this.waiters.splice(0).forEach((w) => w());
+            done();
+          })
+          .catch((err: Error) => done(err));
+      },
+    });
+    await new Promise<void>((resolve, reject) => {
+      this.server!.once('error', reject);
+      this.server!.listen(this.port, '127.0.0.1', () => resolve());
+    });
+  }
+
+  async stop() {
+    await new Promise<void>((resolve) => (this.server ? this.server.close(() => resolve()) : resolve()));
+  }
+
+  /** The newest message to `address` matching `subject`, waiting up to `ms` for it to arrive. */
+  async waitFor(address: string, subject: RegExp, ms = 10_000): Promise<CaughtMail> {
+    const deadline = Date.now() + ms;
+    for (;;) {
+      const found = [...this.messages].reverse().find((m) => m.to.includes(address) && subject.test(m.subject));
+      if (found) return found;
+      if (Date.now() > deadline) throw new Error(`no mail to ${address} matching ${subject} within ${ms} ms`);
+      await new Promise<void>((r) => {
+        this.waiters.push(r);
+        setTimeout(r, 200);
+      });
+    }
+  }
+}
+
+/** The first link in a message's text that starts with `path`, and its token. */
+export function linkIn(mail: CaughtMail, path: string): { url: string; token: string } {
+  const m = new RegExp(`(https?://[^\\s]+${path.replace(/[/?]/g, '\\$&')}[^\\s]*)`).exec(mail.text);
+  if (!m) throw new Error(`no ${path} link in: ${mail.text}`);
+  return { url: m[1], token: new URL(m[1]).searchParams.get('token') ?? '' };
+}

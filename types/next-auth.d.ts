@@ -1,0 +1,16 @@
+import 'next-auth';
+import 'next-auth/jwt';
+
+declare module 'next-auth' {
+  interface Session {
+    user: { id: number; role: string; handle: string; name?: string | null; email?: string | null };
+  }
+}
+
+declare module 'next-auth/jwt' {
+  interface JWT {
+    uid?: number;
+    role?: string;
+    handle?: string;
+  }
+}
