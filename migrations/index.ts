@@ -2,6 +2,7 @@ import type { QueryInterface } from 'sequelize';
 import * as coreTables from './001-core-tables';
 import * as guides from './002-guides';
 import * as accounts from './003-accounts';
+import * as authAdapter from './004-auth-adapter';
 
 type Step = (params: { context: QueryInterface }) => Promise<void>;
 
@@ -13,4 +14,5 @@ export const migrations: { name: string; up: Step; down: Step }[] = [
   { name: '001-core-tables', ...coreTables },
   { name: '002-guides', ...guides },
   { name: '003-accounts', ...accounts },
+  { name: '004-auth-adapter', ...authAdapter },
 ];

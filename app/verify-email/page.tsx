@@ -8,7 +8,7 @@ export default async function VerifyEmailPage({ searchParams }: { searchParams: 
   return (
     <div className="flex flex-col gap-4">
       <h1 className="font-serif text-3xl font-semibold">Confirm your e-mail</h1>
-      {typeof token === 'string' ? <TokenAction token={token} kind="verify" /> : <p role="alert">This link is missing its token; open it from the e-mail again.</p>}
+      {typeof token === 'string' ? <TokenAction token={token} /> : <p role="alert">This link is missing its token; open it from the e-mail again.</p>}
     </div>
   );
 }

@@ -3,7 +3,7 @@
 import { useState } from 'react';
 import Link from 'next/link';
 import { signIn } from 'next-auth/react';
-import { Field, postJson } from './Field';
+import { Field } from './Field';
 
 /** Password sign-in, and a passwordless link by e-mail. */
 export function SignInForms({ callbackUrl = '/' }: { callbackUrl?: string }) {
@@ -56,9 +56,9 @@ export function SignInForms({ callbackUrl = '/' }: { callbackUrl?: string }) {
           e.preventDefault();
           const f = new FormData(e.currentTarget);
           setLinkError(undefined);
-          const res = await postJson('/api/account/sign-in-link', { email: String(f.get('email')) });
-          if (res.status === 202) setLinkNote(res.body.message ?? 'Check your e-mail.');
-          else setLinkError(res.body.error?.message ?? 'That did not work; try again.');
+          const res = await signIn('email', { email: String(f.get('email')), redirect: false, callbackUrl });
+          if (res?.ok && !res.error) setLinkNote('If that address has an account, a sign-in link is on its way.');
+          else setLinkError(res?.error === 'EmailSignin' || !res?.error ? 'The link could not be sent just now; try again in a minute.' : res.error);
         }}
       >
         <h2 className="text-lg font-semibold">With a link by e-mail</h2>

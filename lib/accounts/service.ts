@@ -4,7 +4,7 @@ import { initModels } from '@/models';
 import { hashPassword, passwordProblem } from '@/lib/auth/password';
 import { consumeToken, issueToken, TOKEN_PROBLEM } from '@/lib/auth/tokens';
 import { sendMail, type Message } from '@/lib/mail/transport';
-import { resetPasswordMessage, signInLinkMessage, verifyEmailMessage } from '@/lib/mail/account-messages';
+import { resetPasswordMessage, verifyEmailMessage } from '@/lib/mail/account-messages';
 
 export type Outcome = { ok: true; mailed: boolean } | { ok: false; status: number; field?: string; message: string };
 
@@ -90,13 +90,4 @@ export async function resetPassword(token: string, password: string): Promise<{ 
     await User.unscoped().update({ passwordHash, emailVerifiedAt: new Date() }, { where: { id: used.userId }, transaction });
     return { ok: true as const };
   });
-}
-
-/** E-mails a passwordless sign-in link when the address has an account; the same answer either way. */
-export async function requestSignInLink(email: string): Promise<void> {
-  const { User } = initModels();
-  const user = await User.findOne({ where: { email } });
-  if (!user) return;
-  const token = await getSequelize().transaction((t) => issueToken(user.id, 'sign-in-link', t));
-  await trySend(signInLinkMessage(user.email, user.displayName, token));
 }

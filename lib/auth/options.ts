@@ -1,9 +1,12 @@
 import type { NextAuthOptions } from 'next-auth';
 import CredentialsProvider from 'next-auth/providers/credentials';
 import { initModels } from '@/models';
+import EmailProvider from 'next-auth/providers/email';
 import { getSequelize } from '@/lib/db';
+import { mailFrom, sendMail } from '@/lib/mail/transport';
+import { signInLinkMessage } from '@/lib/mail/account-messages';
+import { clackwaterAdapter } from './adapter';
 import { verifyPassword } from './password';
-import { consumeToken, TOKEN_PROBLEM } from './tokens';
 import { clientIp, forgive, limitMessage, spend } from './rate-limit';
 import { authSecret } from './secret';
 
@@ -20,13 +23,14 @@ function toAuthed(u: { id: number; displayName: string; email: string; role: str
 }
 
 /**
- * Two ways in, both through next-auth: e-mail and password (argon2id), and a
- * passwordless link whose single-use token we issue and e-mail ourselves
- * (lib/auth/tokens.ts), so unknown addresses get the same answer as known ones.
- * Sessions are signed JWTs in an httpOnly, SameSite=Lax cookie.
+ * Two ways in, both through next-auth: e-mail and password (argon2id, a credentials
+ * provider), and a passwordless link (the e-mail provider, its tokens kept by the
+ * Sequelize adapter in `verification_tokens`). Sessions are signed JWTs in an
+ * httpOnly, SameSite=Lax cookie.
  */
 export const authOptions: NextAuthOptions = {
   secret: authSecret(),
+  adapter: clackwaterAdapter(getSequelize()),
   session: { strategy: 'jwt', maxAge: 30 * 24 * 3600 },
   pages: { signIn: '/sign-in', error: '/sign-in' },
   providers: [
@@ -53,35 +57,36 @@ export const authOptions: NextAuthOptions = {
         return toAuthed(user);
       },
     }),
-    CredentialsProvider({
-      id: 'link',
-      name: 'Sign-in link',
-      credentials: { token: { label: 'Token', type: 'text' } },
-      async authorize(credentials) {
-        const raw = String(credentials?.token ?? '');
-        const sequelize = getSequelize();
+    EmailProvider({
+      // The link is sent by our own code, and only to addresses that have an account:
+      // everyone who asks gets the same answer, and a link never creates an account.
+      server: { host: process.env.SMTP_HOST ?? '127.0.0.1', port: Number(process.env.SMTP_PORT ?? 1025) },
+      from: mailFrom(),
+      maxAge: 15 * 60,
+      async sendVerificationRequest({ identifier, url }) {
         const { User } = initModels();
-        const result = await sequelize.transaction(async (transaction) => {
-          const used = await consumeToken(raw, 'sign-in-link', transaction);
-          if (!used.ok) return used;
-          const user = await User.findByPk(used.userId, { transaction });
-          if (!user) return { ok: false as const, reason: 'unknown' as const };
-          // Following the link proves the address.
-          if (!user.emailVerifiedAt) await user.update({ emailVerifiedAt: new Date() }, { transaction });
-          return { ok: true as const, user };
-        });
-        if (!result.ok) throw new Error(TOKEN_PROBLEM[result.reason]);
-        return toAuthed(result.user);
+        const user = await User.findOne({ where: { email: identifier.trim().toLowerCase() } });
+        if (!user) return;
+        try {
+          await sendMail(signInLinkMessage(user.email, user.displayName, url));
+        } catch (err) {
+          // The same answer either way; the failure is for the server log.
+          console.error(`sign-in link to ${user.email} not sent: ${err instanceof Error ? err.message : String(err)}`);
+        }
       },
     }),
   ],
   callbacks: {
     async jwt({ token, user }) {
       if (user) {
-        const u = user as AuthedUser;
-        token.uid = Number(u.id);
-        token.role = u.role;
-        token.handle = u.handle;
+        // A link sign-in hands us the adapter's view of the user; read role and handle from ours.
+        const { User } = initModels();
+        const u = await User.findByPk(Number(user.id), { attributes: ['id', 'role', 'handle'] });
+        if (u) {
+          token.uid = u.id;
+          token.role = u.role;
+          token.handle = u.handle;
+        }
       }
       return token;
     },

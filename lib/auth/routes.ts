@@ -24,5 +24,4 @@ export const API_ROUTES: Record<string, Action | 'public' | 'session'> = {
   'POST /api/account/verify-email': 'public',
   'POST /api/account/password-reset': 'public',
   'POST /api/account/password-reset/confirm': 'public',
-  'POST /api/account/sign-in-link': 'public',
 };

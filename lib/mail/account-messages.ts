@@ -21,8 +21,8 @@ export function resetPasswordMessage(to: string, name: string, token: string): M
   };
 }
 
-export function signInLinkMessage(to: string, name: string, token: string): Message {
-  const link = `${siteUrl()}/sign-in/link?token=${token}`;
+/** `link` is next-auth's callback URL, carrying its own single-use token. */
+export function signInLinkMessage(to: string, name: string, link: string): Message {
   return {
     to,
     subject: 'Your Clackwater sign-in link',

@@ -27,7 +27,7 @@ test('sign up, confirm the e-mail from the catcher, sign in with a link, sign ou
   await page.getByRole('form', { name: 'Sign in with an e-mailed link' }).getByLabel('E-mail').fill(email);
   await page.getByRole('button', { name: 'E-mail me a link' }).click();
   await expect(page.getByText('a sign-in link is on its way')).toBeVisible();
-  const link = linkIn(await catcher.waitFor(email, /sign-in link/), '/sign-in/link?token=');
+  const link = linkIn(await catcher.waitFor(email, /sign-in link/), '/api/auth/callback/email?');
   await page.goto(link.url);
   await expect(page).toHaveURL(/\/$/);
   const menu = page.getByTestId('account-menu');
@@ -53,4 +53,44 @@ test('every page carries the security headers', async ({ request }) => {
   expect(h['content-security-policy']).toContain("frame-ancestors 'none'");
   expect(h['x-content-type-options']).toBe('nosniff');
   expect(h['referrer-policy']).toBe('strict-origin-when-cross-origin');
+});
+
+const DEMO = [
+  { email: 'tamsin@ferncombe.example', name: 'Tamsin at Ferncombe', extra: null },
+  { email: 'builds@ironwheel.example', name: 'Ironwheel Builds', extra: null },
+  { email: 'moss@clackwater.example', name: 'Moss (moderator)', extra: 'Expert applications' },
+  { email: 'admin@clackwater.example', name: 'Clackwater admin', extra: 'Members and roles' },
+];
+
+async function signInWithPassword(page: import('@playwright/test').Page, email: string) {
+  await page.goto('/sign-in');
+  const form = page.getByRole('form', { name: 'Sign in with a password' });
+  await form.getByLabel('E-mail').fill(email);
+  await form.getByLabel('Password').fill('lift-with-falling-water');
+  await form.getByRole('button', { name: 'Sign in' }).click();
+  await expect(page).toHaveURL(/\/$/);
+}
+
+for (const d of DEMO) {
+  test(`the demo ${d.name} signs in with the demo password`, async ({ page }) => {
+    await signInWithPassword(page, d.email);
+    const menu = page.getByTestId('account-menu');
+    await expect(menu).toContainText(d.name);
+    if (d.extra) {
+      await menu.locator('summary').click();
+      await expect(menu.getByRole('link', { name: d.extra })).toBeVisible();
+    }
+  });
+}
+
+test('a signed-in member saves a worked calculation and opens its permalink; a visitor is asked to sign in', async ({ page }) => {
+  await page.goto('/calculators/yield-estimate?fall=4+ft&lift=29+ft&driveFlow=2+gal%2Fmin');
+  await expect(page.locator('[data-calculator="yield-estimate"]').getByRole('link', { name: 'Sign in to save' })).toBeVisible();
+  await signInWithPassword(page, 'tamsin@ferncombe.example');
+  await page.goto('/calculators/yield-estimate?fall=4+ft&lift=29+ft&driveFlow=2+gal%2Fmin');
+  await page.getByRole('button', { name: 'Save as a worked calculation' }).click();
+  await page.getByTestId('saved-calculation').click();
+  await expect(page).toHaveURL(/\/calculations\/[0-9A-Za-z]{10}$/);
+  await expect(page.getByText('saved by Tamsin at Ferncombe')).toBeVisible();
+  await expect(page.getByTestId('calc-unchanged')).toBeVisible();
 });

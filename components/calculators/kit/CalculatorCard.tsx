@@ -8,6 +8,7 @@ import { useUnits } from '@/components/units/UnitsProvider';
 import { convertState, initialState, readForm, shareQuery } from './state';
 import { displayQuantity, formatNumber } from './format';
 import { Working } from './Working';
+import { SaveCalculation } from './SaveCalculation';
 import type { CalculatorDef, FieldDef, FormState } from './types';
 
 type Outcome<R> = { ok: true; output: CalcOutput<R> } | { ok: false; fieldErrors: Record<string, string>; general?: string };
@@ -112,6 +113,7 @@ export function CalculatorCard<R>({
         >
           {copied ? 'Copied' : 'Copy link'}
         </button>
+        {outcome.ok ? <SaveCalculation tool={def.id} inputs={shareQuery(def.fields, state)} /> : null}
         <a href={`/guides/${def.guide}`} className="cw-link ml-auto">
           Read the guide
         </a>
