@@ -22,13 +22,3 @@ export function Field({ label, error, id, ...input }: InputHTMLAttributes<HTMLIn
     </div>
   );
 }
-
-/** Posts JSON and returns the body with the status, for forms. */
-export async function postJson(url: string, body: unknown): Promise<{ status: number; body: { message?: string; note?: string; error?: { field?: string; message: string } } }> {
-  try {
-    const res = await fetch(url, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify(body) });
-    return { status: res.status, body: await res.json().catch(() => ({})) };
-  } catch {
-    return { status: 0, body: { error: { message: 'Could not reach Clackwater. Check your connection and try again.' } } };
-  }
-}

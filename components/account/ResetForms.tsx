@@ -2,7 +2,8 @@
 
 import { useState } from 'react';
 import Link from 'next/link';
-import { Field, postJson } from './Field';
+import { Field } from './Field';
+import { sendJson } from '@/components/forms/api';
 
 export function ResetRequestForm() {
   const [note, setNote] = useState<string | null>(null);
@@ -13,9 +14,9 @@ export function ResetRequestForm() {
       aria-label="Reset password"
       onSubmit={async (e) => {
         e.preventDefault();
-        const res = await postJson('/api/account/password-reset', { email: String(new FormData(e.currentTarget).get('email')) });
-        if (res.status === 202) setNote(res.body.message ?? 'Check your e-mail.');
-        else setError(res.body.error?.message);
+        const res = await sendJson<{ message: string }>('/api/account/password-reset', 'POST', { email: String(new FormData(e.currentTarget).get('email')) });
+        if (res.ok) setNote(res.data.message);
+        else setError(res.error.message);
       }}
     >
       <Field id="reset-email" name="email" type="email" label="E-mail" autoComplete="email" required error={error} />
@@ -45,8 +46,8 @@ export function NewPasswordForm({ token }: { token: string }) {
       aria-label="Choose a new password"
       onSubmit={async (e) => {
         e.preventDefault();
-        const res = await postJson('/api/account/password-reset/confirm', { token, password: String(new FormData(e.currentTarget).get('password')) });
-        setResult({ ok: res.status === 200, message: res.body.message ?? res.body.error?.message ?? 'That did not work.', field: res.body.error?.field });
+        const res = await sendJson<{ message: string }>('/api/account/password-reset/confirm', 'POST', { token, password: String(new FormData(e.currentTarget).get('password')) });
+        setResult(res.ok ? { ok: true, message: res.data.message } : { ok: false, message: res.error.message, field: res.error.field });
       }}
     >
       <Field id="new-password" name="password" type="password" label="New password (10 characters or more)" autoComplete="new-password" required error={result && result.field === 'password' ? result.message : undefined} />

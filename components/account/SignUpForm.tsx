@@ -1,7 +1,8 @@
 'use client';
 
 import { useState } from 'react';
-import { Field, postJson } from './Field';
+import { Field } from './Field';
+import { sendJson } from '@/components/forms/api';
 
 export function SignUpForm() {
   const [errors, setErrors] = useState<Record<string, string>>({});
@@ -23,10 +24,10 @@ export function SignUpForm() {
         e.preventDefault();
         const f = new FormData(e.currentTarget);
         setBusy(true);
-        const res = await postJson('/api/account/sign-up', Object.fromEntries(['email', 'password', 'handle', 'displayName'].map((k) => [k, String(f.get(k) ?? '')])));
+        const res = await sendJson<{ message: string; note?: string }>('/api/account/sign-up', 'POST', Object.fromEntries(['email', 'password', 'handle', 'displayName'].map((k) => [k, String(f.get(k) ?? '')])));
         setBusy(false);
-        if (res.status === 202) setDone([res.body.message, res.body.note].filter(Boolean).join(' '));
-        else setErrors({ [res.body.error?.field ?? 'form']: res.body.error?.message ?? 'That did not work; try again.' });
+        if (res.ok) setDone([res.data.message, res.data.note].filter(Boolean).join(' '));
+        else setErrors({ [res.error.field ?? 'form']: res.error.message });
       }}
     >
       <Field id="signup-email" name="email" type="email" label="E-mail" autoComplete="email" required error={errors.email} />

@@ -2,7 +2,7 @@
 
 import { useEffect, useRef, useState } from 'react';
 import Link from 'next/link';
-import { postJson } from './Field';
+import { sendJson } from '@/components/forms/api';
 
 /**
  * The page an e-mailed link opens. The token is used by a POST from the page, not
@@ -15,8 +15,8 @@ export function TokenAction({ token }: { token: string }) {
     if (started.current) return;
     started.current = true;
     void (async () => {
-      const res = await postJson('/api/account/verify-email', { token });
-      setState({ ok: res.status === 200, message: res.body.message ?? res.body.error?.message ?? 'That did not work.' });
+      const res = await sendJson<{ message: string }>('/api/account/verify-email', 'POST', { token });
+      setState(res.ok ? { ok: true, message: res.data.message } : { ok: false, message: res.error.message });
     })();
   }, [token]);
   if (!state) return <p role="status">Confirming your e-mail…</p>;
