@@ -10,7 +10,11 @@ export function QuestionList({ items }: { items: QuestionSummary[] }) {
       {items.map((q) => (
         <li key={q.id} className="cw-card">
           <div className="flex flex-wrap items-baseline justify-between gap-2">
-            <h3 className="font-serif text-lg font-semibold leading-snug">{q.title}</h3>
+            <h3 className="font-serif text-lg font-semibold leading-snug">
+              <Link href={`/questions/${q.id}`} className="no-underline hover:underline">
+                {q.title}
+              </Link>
+            </h3>
             <span className="cw-num flex-none text-sm">
               {q.fixed ? (
                 <span className="rounded bg-moss px-2 py-0.5 font-semibold text-limestone-50">fixed it</span>
@@ -24,9 +28,9 @@ export function QuestionList({ items }: { items: QuestionSummary[] }) {
           <p className="cw-muted mt-1 font-serif text-sm">{q.excerpt}</p>
           <div className="mt-2 flex flex-wrap items-center gap-2 text-xs">
             {q.tags.map((t) => (
-              <span key={t.slug} className="rounded-full border border-creek-300 px-2 py-0.5 dark:border-creek-500">
+              <Link key={t.slug} href={`/tags/${t.slug}`} className="rounded-full border border-creek-300 px-2 py-0.5 no-underline dark:border-creek-500">
                 {t.name}
-              </span>
+              </Link>
             ))}
             <span className="cw-muted ml-auto">
               {q.author.displayName} · <time dateTime={q.createdAt}>{dateFmt.format(new Date(q.createdAt))}</time>

@@ -3,6 +3,7 @@ import * as coreTables from './001-core-tables';
 import * as guides from './002-guides';
 import * as accounts from './003-accounts';
 import * as authAdapter from './004-auth-adapter';
+import * as forum from './005-forum';
 
 type Step = (params: { context: QueryInterface }) => Promise<void>;
 
@@ -15,4 +16,5 @@ export const migrations: { name: string; up: Step; down: Step }[] = [
   { name: '002-guides', ...guides },
   { name: '003-accounts', ...accounts },
   { name: '004-auth-adapter', ...authAdapter },
+  { name: '005-forum', ...forum },
 ];

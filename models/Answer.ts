@@ -16,6 +16,8 @@ export class Answer extends Model<InferAttributes<Answer>, InferCreationAttribut
   declare questionId: ForeignKey<Question['id']>;
   declare authorId: ForeignKey<User['id']>;
   declare body: string;
+  declare helpfulCount: CreationOptional<number>;
+  declare calculationId: CreationOptional<number | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -26,10 +28,12 @@ export class Answer extends Model<InferAttributes<Answer>, InferCreationAttribut
       {
         id: { type: DataTypes.INTEGER.UNSIGNED, autoIncrement: true, primaryKey: true },
         body: { type: DataTypes.TEXT('medium'), allowNull: false },
+        helpfulCount: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false, defaultValue: 0 },
+        calculationId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: true },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },
-      { sequelize, tableName: 'answers' },
+      { sequelize, modelName: 'Answer' /* the bundler minifies class names */, tableName: 'answers' },
     );
   }
 }

@@ -24,7 +24,7 @@ export class AuthToken extends Model<InferAttributes<AuthToken>, InferCreationAt
         usedAt: { type: DataTypes.DATE, allowNull: true },
         createdAt: DataTypes.DATE,
       },
-      { sequelize, tableName: 'auth_tokens', updatedAt: false },
+      { sequelize, modelName: 'AuthToken' /* the bundler minifies class names */, tableName: 'auth_tokens', updatedAt: false },
     );
   }
 }

@@ -47,7 +47,7 @@ export class ExpertApplication extends Model<InferAttributes<ExpertApplication>,
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },
-      { sequelize, tableName: 'expert_applications' },
+      { sequelize, modelName: 'ExpertApplication' /* the bundler minifies class names */, tableName: 'expert_applications' },
     );
   }
 }

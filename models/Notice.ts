@@ -21,7 +21,7 @@ export class Notice extends Model<InferAttributes<Notice>, InferCreationAttribut
         readAt: { type: DataTypes.DATE, allowNull: true },
         createdAt: DataTypes.DATE,
       },
-      { sequelize, tableName: 'notices', updatedAt: false },
+      { sequelize, modelName: 'Notice' /* the bundler minifies class names */, tableName: 'notices', updatedAt: false },
     );
   }
 }

@@ -19,6 +19,11 @@ export class Question extends Model<InferAttributes<Question>, InferCreationAttr
   /** Denormalised count so lists need no join; kept in step by the code that adds answers. */
   declare answerCount: CreationOptional<number>;
   declare fixedAnswerId: number | null;
+  /** the site sheet as the asker typed it (stall-check form fields with their units) */
+  declare siteSheet: CreationOptional<Record<string, string> | null>;
+  declare helpfulCount: CreationOptional<number>;
+  declare guideSlug: CreationOptional<string | null>;
+  declare lastActivityAt: CreationOptional<Date | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -33,10 +38,14 @@ export class Question extends Model<InferAttributes<Question>, InferCreationAttr
         body: { type: DataTypes.TEXT('medium'), allowNull: false },
         answerCount: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false, defaultValue: 0 },
         fixedAnswerId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: true },
+        siteSheet: { type: DataTypes.JSON, allowNull: true },
+        helpfulCount: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false, defaultValue: 0 },
+        guideSlug: { type: DataTypes.STRING(80), allowNull: true },
+        lastActivityAt: { type: DataTypes.DATE, allowNull: true },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },
-      { sequelize, tableName: 'questions' },
+      { sequelize, modelName: 'Question' /* the bundler minifies class names */, tableName: 'questions' },
     );
   }
 }

@@ -10,7 +10,7 @@ export class QuestionTag extends Model<InferAttributes<QuestionTag>, InferCreati
         questionId: { type: DataTypes.INTEGER.UNSIGNED, primaryKey: true },
         tagId: { type: DataTypes.INTEGER.UNSIGNED, primaryKey: true },
       },
-      { sequelize, tableName: 'question_tags', timestamps: false },
+      { sequelize, modelName: 'QuestionTag' /* the bundler minifies class names */, tableName: 'question_tags', timestamps: false },
     );
   }
 }

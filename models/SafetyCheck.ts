@@ -37,7 +37,7 @@ export class SafetyCheck extends Model<InferAttributes<SafetyCheck>, InferCreati
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },
-      { sequelize, tableName: 'safety_checks' },
+      { sequelize, modelName: 'SafetyCheck' /* the bundler minifies class names */, tableName: 'safety_checks' },
     );
   }
 }

@@ -18,7 +18,7 @@ export class Tag extends Model<InferAttributes<Tag>, InferCreationAttributes<Tag
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },
-      { sequelize, tableName: 'tags' },
+      { sequelize, modelName: 'Tag' /* the bundler minifies class names */, tableName: 'tags' },
     );
   }
 }

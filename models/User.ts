@@ -35,6 +35,8 @@ export class User extends Model<InferAttributes<User>, InferCreationAttributes<U
       },
       {
         sequelize,
+        // named here: the bundler minifies class names, and Sequelize aliases tables by model name
+        modelName: 'User',
         tableName: 'users',
         // the hash never leaves the server by accident; sign-in reads it with User.unscoped()
         defaultScope: { attributes: { exclude: ['passwordHash'] } },

@@ -38,7 +38,7 @@ export class WorkedCalculation extends Model<InferAttributes<WorkedCalculation>,
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },
-      { sequelize, tableName: 'worked_calculations' },
+      { sequelize, modelName: 'WorkedCalculation' /* the bundler minifies class names */, tableName: 'worked_calculations' },
     );
   }
 }

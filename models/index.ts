@@ -10,8 +10,13 @@ import { WorkedCalculation } from './WorkedCalculation';
 import { AuthToken } from './AuthToken';
 import { ExpertApplication } from './ExpertApplication';
 import { Notice } from './Notice';
+import { Reply } from './Reply';
+import { Revision } from './Revision';
+import { HelpfulMark } from './HelpfulMark';
+import { QuestionFollow } from './QuestionFollow';
+import { Photo } from './Photo';
 
-export { User, Tag, Question, Answer, QuestionTag, SafetyCheck, WorkedCalculation, AuthToken, ExpertApplication, Notice };
+export { User, Tag, Question, Answer, QuestionTag, SafetyCheck, WorkedCalculation, AuthToken, ExpertApplication, Notice, Reply, Revision, HelpfulMark, QuestionFollow, Photo };
 
 const initialised = new WeakSet<Sequelize>();
 
@@ -28,6 +33,11 @@ export function initModels(sequelize: Sequelize = getSequelize()) {
     AuthToken.initModel(sequelize);
     ExpertApplication.initModel(sequelize);
     Notice.initModel(sequelize);
+    Reply.initModel(sequelize);
+    Revision.initModel(sequelize);
+    HelpfulMark.initModel(sequelize);
+    QuestionFollow.initModel(sequelize);
+    Photo.initModel(sequelize);
 
     Question.belongsTo(User, { as: 'author', foreignKey: 'authorId' });
     User.hasMany(Question, { as: 'questions', foreignKey: 'authorId' });
@@ -39,7 +49,13 @@ export function initModels(sequelize: Sequelize = getSequelize()) {
     SafetyCheck.belongsTo(User, { as: 'expert', foreignKey: 'expertId' });
     WorkedCalculation.belongsTo(User, { as: 'author', foreignKey: 'authorId' });
     ExpertApplication.belongsTo(User, { as: 'applicant', foreignKey: 'userId' });
+    Reply.belongsTo(User, { as: 'author', foreignKey: 'authorId' });
+    Question.hasMany(Reply, { as: 'replies', foreignKey: 'questionId' });
+    Answer.belongsTo(WorkedCalculation, { as: 'calculation', foreignKey: 'calculationId' });
+    Revision.belongsTo(User, { as: 'editor', foreignKey: 'editorId' });
+    Question.hasMany(Photo, { as: 'photos', foreignKey: 'questionId' });
+    Answer.hasMany(Photo, { as: 'photos', foreignKey: 'answerId' });
     initialised.add(sequelize);
   }
-  return { sequelize, User, Tag, Question, Answer, QuestionTag, SafetyCheck, WorkedCalculation, AuthToken, ExpertApplication, Notice };
+  return { sequelize, User, Tag, Question, Answer, QuestionTag, SafetyCheck, WorkedCalculation, AuthToken, ExpertApplication, Notice, Reply, Revision, HelpfulMark, QuestionFollow, Photo };
 }

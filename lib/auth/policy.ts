@@ -37,6 +37,26 @@ export const POLICY = {
   'profile.edit': signedIn('own'),
   /** one's own notices */
   'notice.read': signedIn('own'),
+  /** ask a question (with a site sheet and photos) */
+  'question.ask': signedIn(),
+  /** edit a question: the asker's own */
+  'question.edit': signedIn('own'),
+  /** answer a question, optionally with a worked calculation */
+  'answer.post': signedIn(),
+  /** edit an answer: the author's own */
+  'answer.edit': signedIn('own'),
+  /** reply under a question or an answer */
+  'reply.post': signedIn(),
+  /** edit a reply: the author's own */
+  'reply.edit': signedIn('own'),
+  /** mark someone else's post helpful (never one's own: checked where the post is known) */
+  'post.markHelpful': signedIn(),
+  /** choose the answer that fixed it: the asker only */
+  'question.markFixed': signedIn('own'),
+  /** follow a question */
+  'question.follow': signedIn(),
+  /** upload a photo for a question or an answer */
+  'photo.upload': signedIn(),
 } as const satisfies Record<string, Row>;
 
 export type Action = keyof typeof POLICY;
@@ -64,4 +84,14 @@ export const REFUSAL: Record<Action, string> = {
   'user.changeRole': 'Only admins can change roles.',
   'profile.edit': 'You can only change your own profile.',
   'notice.read': 'You can only read your own notices.',
+  'question.ask': 'Sign in to ask a question.',
+  'question.edit': 'Only the asker can edit this question.',
+  'answer.post': 'Sign in to answer.',
+  'answer.edit': 'Only its author can edit this answer.',
+  'reply.post': 'Sign in to reply.',
+  'reply.edit': 'Only its author can edit this reply.',
+  'post.markHelpful': 'Sign in to mark a post helpful.',
+  'question.markFixed': 'Only the asker can choose the answer that fixed it.',
+  'question.follow': 'Sign in to follow a question.',
+  'photo.upload': 'Sign in to add photos.',
 };

@@ -19,6 +19,7 @@ function makeLimits() {
     resetAccount: limiter(3, 60 * 60, 'reset-account'),
     linkIp: limiter(10, 60 * 60, 'link-ip'),
     linkAccount: limiter(3, 60 * 60, 'link-account'),
+    uploadAccount: limiter(30, 60 * 60, 'upload-account'),
   };
 }
 export function limits() {

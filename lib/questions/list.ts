@@ -1,3 +1,4 @@
+import { Op, type WhereOptions } from 'sequelize';
 import { initModels } from '@/models';
 import type { Pagination } from '@/lib/validation/pagination';
 
@@ -22,11 +23,42 @@ export interface QuestionPage {
 
 const EXCERPT = 180;
 
-/** Newest questions first, one page at a time (index questions_created_at_id). */
-export async function listQuestions({ page, perPage }: Pagination): Promise<QuestionPage> {
+export type ListFilter =
+  | { kind: 'newest' }
+  | { kind: 'unanswered' }
+  | { kind: 'tag'; tag: string }
+  | { kind: 'mine'; userId: number }
+  | { kind: 'followed'; userId: number };
+
+/** The question ids a filter selects, as a where clause on questions (each on an index). */
+async function filterWhere(filter: ListFilter): Promise<WhereOptions> {
+  const { Tag, QuestionTag, QuestionFollow } = initModels();
+  switch (filter.kind) {
+    case 'unanswered':
+      return { answerCount: 0 };
+    case 'mine':
+      return { authorId: filter.userId };
+    case 'tag': {
+      const tag = await Tag.findOne({ where: { slug: filter.tag } });
+      const rows = tag ? await QuestionTag.findAll({ where: { tagId: tag.id }, attributes: ['questionId'] }) : [];
+      return { id: { [Op.in]: rows.map((r) => r.questionId) } };
+    }
+    case 'followed': {
+      const rows = await QuestionFollow.findAll({ where: { userId: filter.userId }, attributes: ['questionId'] });
+      return { id: { [Op.in]: rows.map((r) => r.questionId) } };
+    }
+    default:
+      return {};
+  }
+}
+
+/** Newest questions first, one page at a time (index questions_created_at_id), optionally filtered. */
+export async function listQuestions({ page, perPage }: Pagination, filter: ListFilter = { kind: 'newest' }): Promise<QuestionPage> {
   const { Question, User, Tag } = initModels();
-  const total = await Question.count();
+  const where = await filterWhere(filter);
+  const total = await Question.count({ where });
   const ids = await Question.findAll({
+    where,
     attributes: ['id'],
     order: [
       ['createdAt', 'DESC'],

@@ -1,24 +1,30 @@
 import { execFileSync } from 'node:child_process';
 import { test, expect } from '@playwright/test';
-import { demoQuestions } from '../../migrations/seed/demo-data';
+import { demoQuestions as baseQuestions } from '../../migrations/seed/demo-data';
+import { demoThreads } from '../../migrations/seed/demo-forum-data';
+
+const demoQuestions = [...baseQuestions, ...demoThreads];
 
 const newestFirst = [...demoQuestions].sort((a, b) => a.daysAgo - b.daysAgo);
 
-test('the questions page lists seeded titles, newest first, and pages on', async ({ page }) => {
-  await page.goto('/questions');
+test('the questions page lists seeded titles, newest first, and pages on', async ({ page, request }) => {
+  await page.goto('/questions?perPage=100');
   await expect(page.getByRole('heading', { level: 1, name: 'Questions' })).toBeVisible();
   const list = page.getByTestId('question-list');
-  await expect(list.getByRole('heading', { name: newestFirst[0].title })).toBeVisible();
-  await expect(list.getByRole('heading', { name: newestFirst[5].title })).toBeVisible();
-  await expect(page.getByText(`${demoQuestions.length} questions, newest first`)).toBeVisible();
+  // every seeded title is there (other browser tests may have asked more)
+  for (const q of newestFirst) await expect(list.getByRole('heading', { name: q.title })).toBeVisible();
+  const total = Number((await page.getByText(/\d+ questions, newest first/).textContent())?.match(/\d+/)?.[0]);
+  expect(total).toBeGreaterThanOrEqual(demoQuestions.length);
 
+  // Paging: the page shows what the API says is newest, five at a time.
+  const newest = (await (await request.get('/api/questions?perPage=10')).json()).items as { title: string }[];
   await page.goto('/questions?perPage=5');
-  await expect(list.getByRole('heading', { name: newestFirst[4].title })).toBeVisible();
-  await expect(list.getByRole('heading', { name: newestFirst[5].title })).toHaveCount(0);
+  await expect(list.getByRole('heading', { name: newest[4].title })).toBeVisible();
+  await expect(list.getByRole('heading', { name: newest[5].title })).toHaveCount(0);
   await page.getByRole('link', { name: 'Older →' }).click();
   await expect(page).toHaveURL(/page=2/);
-  await expect(list.getByRole('heading', { name: newestFirst[5].title })).toBeVisible();
-  await expect(page.getByText('Page 2 of 3')).toBeVisible();
+  await expect(list.getByRole('heading', { name: newest[5].title })).toBeVisible();
+  await expect(page.getByText(`Page 2 of ${Math.ceil(total / 5)}`)).toBeVisible();
 });
 
 test('the header carries the site sections, a search box and the safety notice', async ({ page }) => {
@@ -58,5 +64,5 @@ test('with the database stopped, pages explain in plain words and recover when i
     db('start');
   }
   await page.goto('/questions');
-  await expect(page.getByTestId('question-list').getByRole('heading', { name: newestFirst[0].title })).toBeVisible();
+  await expect(page.getByTestId('question-list').getByRole('heading').first()).toBeVisible();
 });

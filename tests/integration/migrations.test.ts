@@ -5,6 +5,7 @@ import { createMigrator } from '@/lib/db/migrator';
 import { migrations } from '@/migrations';
 import { seedDemo } from '@/migrations/seed/demo';
 import { demoQuestions, demoUsers } from '@/migrations/seed/demo-data';
+import { demoThreads } from '@/migrations/seed/demo-forum-data';
 import { initModels } from '@/models';
 import { assertTestDatabase } from './reset';
 
@@ -38,8 +39,8 @@ describe('migrations round trip on the real MariaDB', () => {
     expect(await seedDemo(sequelize)).toBe(false); // a second seed writes nothing
     const { Question, User, Answer } = initModels(sequelize);
     expect(await User.count()).toBe(demoUsers.length);
-    expect(await Question.count()).toBe(demoQuestions.length);
-    expect(await Answer.count()).toBe(demoQuestions.reduce((n, q) => n + q.answers.length, 0));
+    expect(await Question.count()).toBe(demoQuestions.length + demoThreads.length);
+    expect(await Answer.count()).toBe([...demoQuestions, ...demoThreads].reduce((n, q) => n + q.answers.length, 0));
     const q = await Question.findOne({ where: { title: demoQuestions[0].title }, include: ['author', 'tags'] });
     expect(q?.author?.handle).toBe(demoQuestions[0].author);
     expect(q?.tags?.map((t) => t.slug).sort()).toEqual([...demoQuestions[0].tags].sort());

@@ -56,6 +56,24 @@ const SAMPLES: Record<string, (ids: Record<string, number>) => Sample> = {
   'PUT /api/admin/users/[id]/role': (ids) => ({ params: { id: String(ids.member) }, body: { role: 'member' } }),
   'GET /api/account/settings': () => ({}),
   'PUT /api/account/settings': () => ({ body: { displayName: 'Same Name', region: '', bio: '', units: 'US' } }),
+  // multipart cannot be sent as JSON: an allowed caller gets 400 for the JSON body, never 401/403
+  'POST /api/photos': () => ({ body: {} }),
+  'POST /api/questions': () => ({
+    body: { title: 'Waste valve sticks open after rain', body: 'Since the brook rose the valve hangs open and the pump will not restart.', tags: ['stall'] },
+  }),
+  'PUT /api/questions/[id]': (ids) => ({
+    params: { id: String(ids.ownerQuestion) },
+    body: { title: 'Half-inch pump beats for a minute, then stops', body: 'Edited: the drive pipe is 12 ft of 3/4 inch PVC on 4 ft of fall.', tags: ['stall'] },
+  }),
+  'POST /api/questions/[id]/answers': (ids) => ({ params: { id: String(ids.otherQuestion) }, body: { body: 'Drain the drive pipe and the pump body before the first frost.' } }),
+  'POST /api/questions/[id]/replies': (ids) => ({ params: { id: String(ids.otherQuestion) }, body: { body: 'Same here on our creek.' } }),
+  'PUT /api/questions/[id]/fixed': (ids) => ({ params: { id: String(ids.ownerQuestion) }, body: { answerId: null } }),
+  'POST /api/questions/[id]/follow': (ids) => ({ params: { id: String(ids.otherQuestion) } }),
+  'DELETE /api/questions/[id]/follow': (ids) => ({ params: { id: String(ids.otherQuestion) } }),
+  'PUT /api/answers/[id]': (ids) => ({ params: { id: String(ids.ownerAnswer) }, body: { body: 'We run two side by side at Ferncombe; size the line for both.' } }),
+  'PUT /api/replies/[id]': (ids) => ({ params: { id: String(ids.ownerReply) }, body: { body: 'Thanks, that did it.' } }),
+  'POST /api/helpful': (ids) => ({ body: { postType: 'question', postId: ids.otherQuestion } }),
+  'DELETE /api/helpful': (ids) => ({ body: { postType: 'question', postId: ids.otherQuestion } }),
 };
 
 /** Routes that only ever act on the caller's own account: every signed-in persona is the owner. */
@@ -102,6 +120,13 @@ describe('permission matrix: every API route × every persona, against the polic
     const { User } = initModels();
     const ids: Record<string, number> = {};
     for (const [p, handle] of Object.entries(PERSONA_HANDLE)) ids[p] = (await User.findOne({ where: { handle } }))!.id;
+    // Posts the "owner" persona wrote, and a thread by someone who is none of the personas.
+    const { Question, Answer, Reply } = initModels();
+    const cabin = (await User.findOne({ where: { handle: 'sorrel_cabin' } }))!.id;
+    ids.ownerQuestion = (await Question.findOne({ where: { authorId: ids.owner } }))!.id;
+    ids.ownerAnswer = (await Answer.findOne({ where: { authorId: ids.owner } }))!.id;
+    ids.otherQuestion = (await Question.findOne({ where: { authorId: cabin } }))!.id;
+    ids.ownerReply = (await Reply.create({ questionId: ids.otherQuestion, parentType: 'question', answerId: null, replyToId: null, authorId: ids.owner, body: 'A first reply.' })).id;
     const failures: string[] = [];
     for (const h of handlers) {
       const action = API_ROUTES[h.key];

@@ -1,7 +1,10 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import { NextRequest } from 'next/server';
 import { GET } from '@/app/api/questions/route';
-import { demoQuestions } from '@/migrations/seed/demo-data';
+import { demoQuestions as baseQuestions } from '@/migrations/seed/demo-data';
+import { demoThreads } from '@/migrations/seed/demo-forum-data';
+
+const demoQuestions = [...baseQuestions, ...demoThreads];
 import { freshDemoDatabase } from './db';
 
 const get = (qs: string) => GET(new NextRequest(`http://localhost/api/questions${qs}`));

@@ -2,6 +2,10 @@ import { NextResponse, type NextRequest } from 'next/server';
 import { paginationSchema } from '@/lib/validation/pagination';
 import { queryObject, serverError, validationError } from '@/lib/http/errors';
 import { listQuestions } from '@/lib/questions/list';
+import { askQuestionSchema } from '@/lib/validation/question';
+import { readJson } from '@/lib/http/body';
+import { guarded } from '@/lib/http/guard';
+import { askQuestion } from '@/lib/forum/posts';
 
 export const dynamic = 'force-dynamic';
 
@@ -14,4 +18,14 @@ export async function GET(request: NextRequest) {
   } catch (err) {
     return serverError(err);
   }
+}
+
+/** POST /api/questions — ask, with a site sheet (checked by the engine) and photos; one transaction. */
+export async function POST(request: Request) {
+  return guarded(request, 'question.ask', async (user) => {
+    const body = await readJson(request, askQuestionSchema);
+    if ('response' in body) return body.response;
+    const q = await askQuestion(user, body.data);
+    return NextResponse.json({ id: q.id, url: `/questions/${q.id}` }, { status: 201 });
+  });
 }

@@ -1,0 +1,26 @@
+import { NextResponse, type NextRequest } from 'next/server';
+import { z } from 'zod';
+import { apiError, queryObject, serverError, validationError } from '@/lib/http/errors';
+import { idParam } from '@/lib/http/guard';
+import { listRevisions } from '@/lib/forum/thread';
+
+export const dynamic = 'force-dynamic';
+const schema = z.object({
+  postType: z.enum(['question', 'answer', 'reply'], { error: 'postType must be question, answer or reply' }).default('question'),
+  postId: z.string().regex(/^\d{1,10}$/, 'postId must be a number').transform(Number).optional(),
+});
+
+/** GET /api/questions/:id/revisions?postType=&postId= — every version of a post, oldest first. */
+export async function GET(request: NextRequest, { params }: { params: Promise<{ id: string }> }) {
+  const id = idParam((await params).id);
+  if (!id) return apiError(400, 'id must be a question number', 'id');
+  const parsed = schema.safeParse(queryObject(request.nextUrl.searchParams));
+  if (!parsed.success) return validationError(parsed.error);
+  try {
+    const postId = parsed.data.postType === 'question' ? id : parsed.data.postId;
+    if (!postId) return apiError(400, 'postId is required for answers and replies', 'postId');
+    return NextResponse.json({ revisions: await listRevisions(parsed.data.postType, postId) });
+  } catch (err) {
+    return serverError(err);
+  }
+}

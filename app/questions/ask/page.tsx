@@ -1,0 +1,62 @@
+import type { Metadata } from 'next';
+import Link from 'next/link';
+import 'katex/dist/katex.min.css';
+import { currentUserInPage } from '@/lib/auth/session';
+import { can, REFUSAL } from '@/lib/auth/policy';
+import { isDatabaseUnavailable } from '@/lib/db/errors';
+import { initModels } from '@/models';
+import { ServiceUnavailable } from '@/components/ServiceUnavailable';
+import { AskForm } from '@/components/questions/AskForm';
+
+export const metadata: Metadata = { title: 'Ask a question' };
+export const dynamic = 'force-dynamic';
+
+const SLUG = /^[a-z0-9-]{1,80}$/;
+
+export default async function AskQuestionPage({ searchParams }: { searchParams: Promise<Record<string, string | string[] | undefined>> }) {
+  const sp = await searchParams;
+  const one = (v: string | string[] | undefined) => (typeof v === 'string' && SLUG.test(v) ? v : undefined);
+
+  let state: { kind: 'signed-out' } | { kind: 'refused' } | { kind: 'form'; tags: { slug: string; name: string }[] };
+  try {
+    const user = await currentUserInPage();
+    if (!user) state = { kind: 'signed-out' };
+    else if (!can(user, 'question.ask')) state = { kind: 'refused' };
+    else {
+      const rows = await initModels().Tag.findAll({ attributes: ['slug', 'name'], order: [['name', 'ASC']] });
+      state = { kind: 'form', tags: rows.map((t) => ({ slug: t.slug, name: t.name })) };
+    }
+  } catch (err) {
+    if (isDatabaseUnavailable(err)) return <ServiceUnavailable what="the question form" />;
+    throw err;
+  }
+
+  const tag = one(sp.tag);
+  return (
+    <div className="flex flex-col gap-4">
+      <div className="flex max-w-prose flex-col gap-2">
+        <h1 className="font-serif text-3xl font-semibold">Ask a question</h1>
+        <p className="cw-prose cw-muted">
+          Say what you built and what it does. The site sheet carries your measurements, so the people who answer can work
+          with your numbers.
+        </p>
+      </div>
+      {state.kind === 'signed-out' ? (
+        <p className="cw-card max-w-prose font-sans">
+          <Link href="/sign-in?callbackUrl=/questions/ask" className="cw-link">
+            Sign in to ask
+          </Link>{' '}
+          a question. Reading and the calculators need no account.
+        </p>
+      ) : state.kind === 'refused' ? (
+        <p className="cw-card max-w-prose font-sans">{REFUSAL['question.ask']}</p>
+      ) : (
+        <AskForm
+          tags={state.tags}
+          defaultTag={tag && state.tags.some((t) => t.slug === tag) ? tag : undefined}
+          guide={one(sp.guide)}
+        />
+      )}
+    </div>
+  );
+}

@@ -1,0 +1,39 @@
+import type { Metadata } from 'next';
+import { notFound } from 'next/navigation';
+import { initModels } from '@/models';
+import { listQuestions } from '@/lib/questions/list';
+import { paginationSchema } from '@/lib/validation/pagination';
+import { isDatabaseUnavailable } from '@/lib/db/errors';
+import { QuestionList, Pager } from '@/components/QuestionList';
+import { ServiceUnavailable } from '@/components/ServiceUnavailable';
+
+type Props = { params: Promise<{ tag: string }>; searchParams: Promise<Record<string, string | string[] | undefined>> };
+
+export async function generateMetadata({ params }: Props): Promise<Metadata> {
+  return { title: `Questions tagged ${(await params).tag}` };
+}
+
+export default async function TagPage({ params, searchParams }: Props) {
+  const { tag } = await params;
+  const sp = await searchParams;
+  const parsed = paginationSchema.safeParse({ page: typeof sp.page === 'string' ? sp.page : undefined });
+  if (!parsed.success || !/^[a-z0-9-]{2,40}$/.test(tag)) notFound();
+  let loaded;
+  try {
+    const t = await initModels().Tag.findOne({ where: { slug: tag } });
+    loaded = t ? { t, data: await listQuestions(parsed.data, { kind: 'tag', tag }) } : null;
+  } catch (err) {
+    if (isDatabaseUnavailable(err)) return <ServiceUnavailable what="these questions" />;
+    throw err;
+  }
+  if (!loaded) notFound();
+  const { t, data } = loaded;
+  return (
+    <div className="flex flex-col gap-4">
+      <h1 className="font-serif text-3xl font-semibold">{t.name}</h1>
+      {t.description ? <p className="cw-prose cw-muted">{t.description}</p> : null}
+      <QuestionList items={data.items} />
+      <Pager page={data.page} totalPages={data.totalPages} basePath={`/tags/${tag}`} />
+    </div>
+  );
+}

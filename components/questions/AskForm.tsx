@@ -1,0 +1,328 @@
+'use client';
+
+import { useDeferredValue, useEffect, useId, useMemo, useState, type ReactNode } from 'react';
+import { Controller, useForm, useWatch, type FieldPath } from 'react-hook-form';
+import { zodResolver } from '@hookform/resolvers/zod';
+import type { z } from 'zod';
+import { SYMPTOM_LABELS, SYMPTOMS } from '@/lib/hydraulics';
+import { askQuestionSchema, SITE_SHEET_FIELDS, type SiteSheetField } from '@/lib/validation/question';
+import { computeFromForm } from '@/components/calculators/recompute';
+import { stallCheckDef } from '@/components/calculators/defs/stallCheck';
+import { seriesOptions, sizeOptions } from '@/components/calculators/defs/shared';
+import { inputClass, labelClass, sendJson } from '@/components/forms/api';
+import { MemberText } from '@/components/posts/MemberText';
+import { PhotoPicker } from '@/components/photos/PhotoPicker';
+
+type AskInput = z.input<typeof askQuestionSchema>;
+type AskOutput = z.output<typeof askQuestionSchema>;
+type SiteSheet = Partial<Record<SiteSheetField, string>>;
+
+/** The site sheet's boxes, labelled as the trade says them; `hint` shows how to type a value with its unit. */
+const MEASUREMENTS: { name: SiteSheetField; label: string; hint: string }[] = [
+  { name: 'fall', label: 'Fall', hint: 'from the intake’s water surface down to the pump, e.g. “4 ft” or “1.2 m”' },
+  { name: 'lift', label: 'Lift', hint: 'from the pump up to the tank’s inlet, e.g. “29 ft”' },
+  { name: 'driveLength', label: 'Drive pipe length', hint: 'e.g. “24 ft”' },
+  { name: 'sourceFlow', label: 'Source flow the source can spare', hint: 'in the driest month, e.g. “5 gal/min” or “20 L/min”' },
+  { name: 'pumps', label: 'Pumps', hint: 'how many rams share the source' },
+  { name: 'driveFlow', label: 'Measured drive flow of one pump', hint: 'optional, e.g. “4 gal/min”' },
+  { name: 'delivered', label: 'Measured delivery', hint: 'optional, at the tank, e.g. “0.5 gal/min”' },
+  { name: 'bpm', label: 'Beats per minute', hint: 'optional, count the waste valve for a minute' },
+  { name: 'deliveryLength', label: 'Delivery pipe length', hint: 'optional, e.g. “300 ft”' },
+];
+const PUMP_AND_PIPES: { name: SiteSheetField; label: string; options: readonly { value: string; label: string }[] }[] = [
+  { name: 'driveSize', label: 'Drive pipe size', options: sizeOptions },
+  { name: 'driveMaterial', label: 'Drive pipe material', options: seriesOptions },
+  { name: 'pumpSize', label: 'Pump size', options: sizeOptions },
+  { name: 'deliverySize', label: 'Delivery pipe size', options: sizeOptions },
+  { name: 'deliveryMaterial', label: 'Delivery pipe material', options: seriesOptions },
+];
+
+/** The stall check cannot run without these; until they are typed it only checks what is there. */
+const STALL_NEEDS = ['fall', 'lift', 'driveLength', 'driveSize', 'driveMaterial'] as const;
+/** The site sheet's names are the stall check card's prop names; the delivery pipe is not one of its inputs. */
+const STALL_PROPS = ['fall', 'lift', 'driveLength', 'driveSize', 'driveMaterial', 'sourceFlow', 'pumpSize', 'pumps', 'driveFlow', 'delivered', 'bpm', 'symptoms'] as const;
+
+const blank = (v: string | undefined) => !v || v.trim() === '';
+
+function siteSheetAsStallProps(sheet: SiteSheet): Record<string, string> {
+  // '' (not undefined) for an empty box, so the card's defaults never stand in for the member's numbers
+  return Object.fromEntries(STALL_PROPS.map((k) => [k, sheet[k]?.trim() ?? '']));
+}
+
+type StallView =
+  | { kind: 'idle' }
+  | { kind: 'needs'; missing: string[] }
+  | { kind: 'refused'; field?: string; message: string }
+  | { kind: 'causes'; node: ReactNode };
+
+function runStall(sheet: SiteSheet): StallView {
+  const props = siteSheetAsStallProps(sheet);
+  if (blank(props.fall) && blank(props.lift)) return { kind: 'idle' };
+  const missing = STALL_NEEDS.filter((k) => blank(props[k]));
+  try {
+    // With a box still empty, check what the member did type: stand-ins fill the gaps only so the
+    // engine can read the rest, and only its complaints about the member's own numbers are shown.
+    const probe = missing.length ? { ...props, ...Object.fromEntries(missing.map((k) => [k, stallCheckDef.defaults[k] ?? ''])) } : props;
+    const r = computeFromForm('stall-check', probe);
+    if (!r.ok) return r.field && (missing as readonly string[]).includes(r.field) ? needs(missing) : { kind: 'refused', field: r.field, message: r.message };
+    if (missing.length) return needs(missing);
+    return { kind: 'causes', node: stallCheckDef.extra?.(r.output.results as never, 'US') };
+  } catch {
+    return missing.length ? needs(missing) : { kind: 'idle' };
+  }
+}
+const needs = (missing: readonly string[]): StallView => ({
+  kind: 'needs',
+  missing: missing.map((k) => [...MEASUREMENTS, ...PUMP_AND_PIPES].find((f) => f.name === k)?.label.toLowerCase() ?? k),
+});
+
+function FieldMessage({ id, message }: { id: string; message?: string }) {
+  return message ? (
+    <p id={id} role="alert" className="mt-1 text-sm font-semibold text-clay-600 dark:text-clay-300">
+      {message}
+    </p>
+  ) : null;
+}
+
+interface SimilarQuestion {
+  id: number | string;
+  title: string;
+  fixed?: boolean;
+}
+
+/** Questions like this one, by tags and the site's fall and lift; silent when the search fails. */
+function useSimilarQuestions(tags: string[], fall: string, lift: string) {
+  const [items, setItems] = useState<SimilarQuestion[]>([]);
+  const key = `${tags.join(',')}|${fall.trim()}|${lift.trim()}`;
+  useEffect(() => {
+    const [t, f, l] = key.split('|');
+    if (!t && !f && !l) return;
+    const q = new URLSearchParams();
+    if (t) q.set('tags', t);
+    if (f) q.set('fall', f);
+    if (l) q.set('lift', l);
+    const ctl = new AbortController();
+    // wait for a pause in typing rather than asking on every keystroke — common practice, no source
+    const timer = setTimeout(async () => {
+      try {
+        const res = await fetch(`/api/questions/similar?${q}`, { signal: ctl.signal });
+        const json = res.ok ? ((await res.json()) as { items?: SimilarQuestion[] }) : null;
+        if (!ctl.signal.aborted) setItems(Array.isArray(json?.items) ? json.items.slice(0, 5) : []);
+      } catch {
+        if (!ctl.signal.aborted) setItems([]);
+      }
+    }, 400);
+    return () => {
+      clearTimeout(timer);
+      ctl.abort();
+    };
+  }, [key]);
+  return key === '||' ? [] : items;
+}
+
+/** Asking a question: title, what happened (Markdown, previewed), tags, the site sheet, photos. */
+export function AskForm({ tags, defaultTag, guide }: { tags: { slug: string; name: string }[]; defaultTag?: string; guide?: string }) {
+  const uid = useId();
+  const id = (name: string) => `${uid}-${name.replace('.', '-')}`;
+  const {
+    register,
+    control,
+    handleSubmit,
+    setError,
+    setValue,
+    formState: { errors, isSubmitting },
+  } = useForm<AskInput, unknown, AskOutput>({
+    resolver: zodResolver(askQuestionSchema),
+    defaultValues: {
+      title: '',
+      body: '',
+      tags: defaultTag ? [defaultTag] : [],
+      siteSheet: Object.fromEntries(SITE_SHEET_FIELDS.map((f) => [f, ''])),
+      photoIds: [],
+      guide,
+    },
+  });
+  const body = useDeferredValue(useWatch({ control, name: 'body' }) ?? '');
+  const sheet = (useWatch({ control, name: 'siteSheet' }) ?? {}) as SiteSheet;
+  const chosenTags = useWatch({ control, name: 'tags' }) ?? [];
+  // keyed on the values, not the object: the engine runs once per change to the site sheet
+  const sheetKey = JSON.stringify(STALL_PROPS.map((k) => sheet[k] ?? ''));
+  const stall = useMemo(() => runStall(Object.fromEntries(STALL_PROPS.map((k, i) => [k, (JSON.parse(sheetKey) as string[])[i]]))), [sheetKey]);
+  const similar = useSimilarQuestions(chosenTags, sheet.fall ?? '', sheet.lift ?? '');
+
+  async function onSubmit(values: AskOutput) {
+    const siteSheet = Object.fromEntries(Object.entries(values.siteSheet ?? {}).filter(([, v]) => !blank(v)));
+    const out = await sendJson<{ id: number; url: string }>('/api/questions', 'POST', {
+      ...values,
+      siteSheet: Object.keys(siteSheet).length ? siteSheet : undefined,
+    });
+    if (out.ok) {
+      window.location.assign(out.data.url ?? `/questions/${out.data.id}`);
+      return;
+    }
+    const field = out.error.field;
+    const known = field && (['title', 'body', 'tags', 'photoIds', 'guide'].includes(field) || /^siteSheet\.\w+$/.test(field));
+    setError(known ? (field as FieldPath<AskInput>) : 'root.server', { message: out.error.message }, { shouldFocus: true });
+  }
+
+  const describe = (name: string, hint?: boolean) =>
+    [hint ? `${id(name)}-hint` : '', errorAt(name) ? `${id(name)}-error` : ''].filter(Boolean).join(' ') || undefined;
+  const errorAt = (name: string): string | undefined => {
+    if (name.startsWith('siteSheet.')) return (errors.siteSheet as Record<string, { message?: string } | undefined> | undefined)?.[name.slice(10)]?.message;
+    return (errors as Record<string, { message?: string } | undefined>)[name]?.message;
+  };
+
+  return (
+    <form onSubmit={handleSubmit(onSubmit)} noValidate className="flex flex-col gap-4 font-sans lg:grid lg:grid-cols-[minmax(0,1fr)_20rem] lg:items-start">
+      <div className="flex flex-col gap-4">
+        <section className="cw-card flex flex-col gap-4" aria-labelledby={id('q')}>
+          <h2 id={id('q')} className="font-serif text-xl font-semibold">Your question</h2>
+          <div>
+            <label htmlFor={id('title')} className={labelClass}>Title</label>
+            <input id={id('title')} {...register('title')} maxLength={160} aria-invalid={errorAt('title') ? true : undefined} aria-describedby={describe('title')} className={inputClass} />
+            <FieldMessage id={`${id('title')}-error`} message={errorAt('title')} />
+          </div>
+          <div>
+            <label htmlFor={id('body')} className={labelClass}>What happened</label>
+            <p id={`${id('body')}-hint`} className="cw-muted text-sm">What you built, what it does, what you have tried. Markdown works; math in $…$.</p>
+            <textarea id={id('body')} {...register('body')} rows={8} aria-invalid={errorAt('body') ? true : undefined} aria-describedby={describe('body', true)} className={`${inputClass} font-serif`} />
+            <FieldMessage id={`${id('body')}-error`} message={errorAt('body')} />
+            {body.trim() ? (
+              <section aria-labelledby={id('preview')} className="mt-2 rounded-md border border-dashed border-limestone-400 p-3 dark:border-creek-500">
+                <h3 id={id('preview')} className="cw-muted text-xs font-semibold uppercase tracking-wide">Preview</h3>
+                <MemberText>{body}</MemberText>
+              </section>
+            ) : null}
+          </div>
+          <fieldset aria-describedby={describe('tags')}>
+            <legend className={labelClass}>Tags (one to five)</legend>
+            <Controller
+              control={control}
+              name="tags"
+              render={({ field }) => (
+                <div className="mt-1 flex flex-wrap gap-2">
+                  {tags.map((t) => (
+                    <label key={t.slug} className="flex items-center gap-2 rounded-full border border-limestone-400 px-3 py-1 text-sm has-[:checked]:border-creek has-[:checked]:bg-creek-100 dark:border-creek-500 dark:has-[:checked]:bg-creek-700">
+                      <input
+                        type="checkbox"
+                        value={t.slug}
+                        checked={field.value?.includes(t.slug) ?? false}
+                        onChange={(e) => field.onChange(e.target.checked ? [...(field.value ?? []), t.slug] : (field.value ?? []).filter((s) => s !== t.slug))}
+                        onBlur={field.onBlur}
+                      />
+                      {t.name}
+                    </label>
+                  ))}
+                </div>
+              )}
+            />
+            <FieldMessage id={`${id('tags')}-error`} message={errorAt('tags')} />
+          </fieldset>
+        </section>
+
+        <section className="cw-card flex flex-col gap-4" aria-labelledby={id('sheet')}>
+          <div>
+            <h2 id={id('sheet')} className="font-serif text-xl font-semibold">Site sheet</h2>
+            <p className="cw-muted text-sm">Your measurements, each with its unit. Answerers can rerun them; leave out what you do not know.</p>
+          </div>
+          <div className="grid gap-4 sm:grid-cols-2">
+            {MEASUREMENTS.map((m) => {
+              const name = `siteSheet.${m.name}` as const;
+              return (
+                <div key={m.name}>
+                  <label htmlFor={id(name)} className={labelClass}>{m.label}</label>
+                  <input id={id(name)} {...register(name)} inputMode="text" autoComplete="off" aria-invalid={errorAt(name) ? true : undefined} aria-describedby={describe(name, true)} className={`${inputClass} cw-num`} />
+                  <p id={`${id(name)}-hint`} className="cw-muted mt-1 text-xs">{m.hint}</p>
+                  <FieldMessage id={`${id(name)}-error`} message={errorAt(name)} />
+                </div>
+              );
+            })}
+            {PUMP_AND_PIPES.map((s) => {
+              const name = `siteSheet.${s.name}` as const;
+              return (
+                <div key={s.name}>
+                  <label htmlFor={id(name)} className={labelClass}>{s.label}</label>
+                  <select id={id(name)} {...register(name)} aria-invalid={errorAt(name) ? true : undefined} aria-describedby={describe(name)} className={inputClass}>
+                    <option value="">not known</option>
+                    {s.options.map((o) => (
+                      <option key={o.value} value={o.value}>{o.label}</option>
+                    ))}
+                  </select>
+                  <FieldMessage id={`${id(name)}-error`} message={errorAt(name)} />
+                </div>
+              );
+            })}
+          </div>
+          <fieldset aria-describedby={describe('siteSheet.symptoms')}>
+            <legend className={labelClass}>What the pump does</legend>
+            <Controller
+              control={control}
+              name="siteSheet.symptoms"
+              render={({ field }) => {
+                const on = (field.value ?? '').split(',').filter(Boolean);
+                return (
+                  <div className="mt-1 grid gap-2 sm:grid-cols-2">
+                    {SYMPTOMS.map((s) => (
+                      <label key={s} className="flex items-center gap-2 text-sm">
+                        <input type="checkbox" checked={on.includes(s)} onBlur={field.onBlur} onChange={(e) => field.onChange((e.target.checked ? [...on, s] : on.filter((x) => x !== s)).join(','))} />
+                        {SYMPTOM_LABELS[s]}
+                      </label>
+                    ))}
+                  </div>
+                );
+              }}
+            />
+            <FieldMessage id={`${id('siteSheet.symptoms')}-error`} message={errorAt('siteSheet.symptoms')} />
+          </fieldset>
+        </section>
+
+        <section className="cw-card flex flex-col gap-2" aria-labelledby={id('photos')}>
+          <h2 id={id('photos')} className="font-serif text-xl font-semibold">Photos</h2>
+          <p className="cw-muted text-sm">The pump, the waste valve beating, the intake: up to six.</p>
+          <PhotoPicker onChange={(ids: string[]) => setValue('photoIds', ids)} />
+          <FieldMessage id={`${id('photoIds')}-error`} message={errorAt('photoIds')} />
+        </section>
+
+        {guide ? <p className="cw-muted text-sm">Asked from the guide <a href={`/guides/${guide}`} className="cw-link">{guide.replace(/-/g, ' ')}</a>.</p> : null}
+        <FieldMessage id={id('server')} message={errors.root?.server?.message} />
+        <div>
+          <button type="submit" className="cw-button" disabled={isSubmitting}>{isSubmitting ? 'Posting…' : 'Post my question'}</button>
+        </div>
+      </div>
+
+      <aside className="flex flex-col gap-4 lg:sticky lg:top-4">
+        <section className="cw-card flex flex-col gap-2" aria-labelledby={id('before')} data-testid="before-you-post">
+          <h2 id={id('before')} className="font-serif text-lg font-semibold">Before you post</h2>
+          <p className="cw-muted text-sm">The stall check, run on your site sheet as you type.</p>
+          <div aria-live="polite" className="flex flex-col gap-2">
+            {stall.kind === 'idle' ? (
+              <p className="text-sm">Type the fall and the lift to start.</p>
+            ) : stall.kind === 'needs' ? (
+              <p className="text-sm">Add the {stall.missing.join(', ')} to see the likely causes.</p>
+            ) : stall.kind === 'refused' ? (
+              <p role="alert" className="rounded-md border-l-4 border-signal bg-signal-100 p-2 text-sm text-signal-900 dark:bg-signal-900 dark:text-signal-100">
+                <span aria-hidden="true">⚠ </span>
+                {stall.message}
+              </p>
+            ) : (
+              stall.node
+            )}
+          </div>
+        </section>
+        {similar.length ? (
+          <section className="cw-card flex flex-col gap-2" aria-labelledby={id('similar')}>
+            <h2 id={id('similar')} className="font-serif text-lg font-semibold">Similar questions</h2>
+            <ul className="flex flex-col gap-1 text-sm">
+              {similar.map((q) => (
+                <li key={q.id}>
+                  <a href={`/questions/${q.id}`} className="cw-link">{q.title}</a>
+                  {q.fixed ? <span className="ml-2 rounded-full bg-moss-100 px-2 text-xs text-moss-700 dark:bg-moss-700 dark:text-moss-100">fixed it</span> : null}
+                </li>
+              ))}
+            </ul>
+          </section>
+        ) : null}
+      </aside>
+    </form>
+  );
+}

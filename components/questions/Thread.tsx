@@ -1,0 +1,197 @@
+'use client';
+
+import Link from 'next/link';
+import useSWR from 'swr';
+import { MemberText } from '@/components/posts/MemberText';
+import { CalculatorById } from '@/components/calculators/Calculators';
+import { can } from '@/lib/auth/policy';
+import type { AnswerView, ReplyView, ThreadView } from '@/lib/forum/thread';
+import { catalogueEntry } from '@/lib/calculators-catalogue';
+import { PhotoGallery } from '@/components/photos/PhotoGallery';
+import { EditBody, HelpfulButton, RevisionHistory } from './PostControls';
+import { AnswerComposer, ReplyComposer } from './AnswerComposer';
+import { call } from './api';
+
+type Viewer = { id: number; handle: string; role: 'member' | 'expert' | 'moderator' | 'admin' } | null;
+const fetcher = (url: string) => fetch(url).then((r) => (r.ok ? r.json() : Promise.reject(new Error(String(r.status)))));
+const when = (iso: string) => new Date(iso).toUTCString().slice(5, 16);
+
+function Byline({ person, at }: { person: { handle: string; displayName: string; expert: boolean }; at: string }) {
+  return (
+    <span className="cw-muted text-xs">
+      <Link href={`/people/${person.handle}`} className="cw-link">
+        {person.displayName}
+      </Link>
+      {person.expert ? <span className="ml-1 rounded bg-creek px-1.5 py-0.5 font-semibold text-limestone-50">expert</span> : null} · {when(at)}
+    </span>
+  );
+}
+
+/**
+ * The live part of a thread page. The server draws it first; after that SWR keeps
+ * it current, and every action (answer, reply, helpful, fixed it, follow) goes
+ * through the route handlers and refreshes it — marks change at once (optimistic).
+ */
+export function Thread({ initial, viewer }: { initial: ThreadView; viewer: Viewer }) {
+  const key = `/api/questions/${initial.id}`;
+  const { data, mutate } = useSWR<ThreadView>(key, fetcher, { fallbackData: initial, revalidateOnMount: false, revalidateOnFocus: false });
+  const t = data ?? initial;
+  const refresh = () => void mutate();
+  const isAsker = can(viewer, 'question.markFixed', t.author.id);
+  const optimistic = (patch: (v: ThreadView) => ThreadView) => (_: unknown, settle: Promise<unknown>) => {
+    void mutate(patch(t), { revalidate: false });
+    void settle.then(() => mutate());
+  };
+
+  const repliesUnder = (answerId: number | null) => t.replies.filter((r) => r.answerId === answerId);
+
+  return (
+    <div className="flex flex-col gap-6">
+      <section aria-label="The question" className="flex flex-col gap-3">
+        <MemberText>{t.body}</MemberText>
+        {t.photos.length ? <PhotoGallery photos={t.photos} /> : null}
+        <div className="flex flex-wrap items-center gap-3">
+          <Byline person={t.author} at={t.createdAt} />
+          <HelpfulButton
+            postType="question"
+            postId={t.id}
+            count={t.helpfulCount}
+            marked={t.markedByViewer}
+            disabled={!viewer || viewer.id === t.author.id}
+            onChanged={(o, settle) => optimistic((v) => ({ ...v, helpfulCount: o.count, markedByViewer: o.marked }))(o, settle)}
+          />
+          {viewer ? (
+            <button
+              type="button"
+              className="cw-link text-xs"
+              onClick={async () => {
+                await call(t.followedByViewer ? 'DELETE' : 'POST', `${key}/follow`);
+                refresh();
+              }}
+            >
+              {t.followedByViewer ? 'Following · stop' : 'Follow this question'}
+            </button>
+          ) : null}
+          {can(viewer, 'question.edit', t.author.id) ? (
+            <EditBody url={key} initial={t.body} onSaved={refresh} extra={{ title: t.title, tags: t.tags.map((x) => x.slug), siteSheet: t.siteSheet ?? undefined }} />
+          ) : null}
+          {t.edited ? <RevisionHistory questionId={t.id} postType="question" postId={t.id} /> : null}
+        </div>
+        <Replies items={repliesUnder(null)} viewer={viewer} questionId={t.id} answerId={null} onChange={refresh} />
+        {viewer ? <ReplyComposer questionId={t.id} onPosted={refresh} label="Reply to the question" /> : null}
+      </section>
+
+      <section aria-label="Answers" className="flex flex-col gap-4">
+        <h2 className="font-serif text-2xl font-semibold">
+          {t.answers.length} {t.answers.length === 1 ? 'answer' : 'answers'}
+        </h2>
+        {t.answers.map((a) => (
+          <Answer key={a.id} a={a} t={t} viewer={viewer} isAsker={isAsker} onChange={refresh} replies={repliesUnder(a.id)} optimistic={optimistic} />
+        ))}
+      </section>
+
+      {viewer ? (
+        <AnswerComposer questionId={t.id} siteSheet={t.siteSheet} onPosted={refresh} />
+      ) : (
+        <p className="cw-card">
+          <Link href={`/sign-in?callbackUrl=/questions/${t.id}`} className="cw-link">
+            Sign in
+          </Link>{' '}
+          to answer or reply.
+        </p>
+      )}
+    </div>
+  );
+}
+
+function Answer({
+  a,
+  t,
+  viewer,
+  isAsker,
+  onChange,
+  replies,
+  optimistic,
+}: {
+  a: AnswerView;
+  t: ThreadView;
+  viewer: Viewer;
+  isAsker: boolean;
+  onChange: () => void;
+  replies: ReplyView[];
+  optimistic: (patch: (v: ThreadView) => ThreadView) => (o: unknown, settle: Promise<unknown>) => void;
+}) {
+  return (
+    <article className={`cw-card flex flex-col gap-3 ${a.fixed ? 'border-2 border-moss' : ''}`} data-answer={a.id} aria-label={`Answer by ${a.author.displayName}`}>
+      {a.fixed ? <p className="self-start rounded bg-moss px-2 py-0.5 text-xs font-semibold text-limestone-50">fixed it</p> : null}
+      <MemberText>{a.body}</MemberText>
+      {a.photos.length ? <PhotoGallery photos={a.photos} /> : null}
+      {a.calculation ? (
+        <div className="flex flex-col gap-1" data-testid="answer-calculation">
+          <p className="text-sm font-semibold">
+            Worked calculation: {catalogueEntry(a.calculation.tool)?.name ?? a.calculation.tool} —{' '}
+            <Link href={`/calculations/${a.calculation.id}`} className="cw-link">
+              permalink
+            </Link>
+          </p>
+          <p className="cw-muted text-xs">Try with my numbers: change any input below; your copy is yours alone.</p>
+          <CalculatorById id={a.calculation.tool} props={a.calculation.inputs} />
+        </div>
+      ) : null}
+      <div className="flex flex-wrap items-center gap-3">
+        <Byline person={a.author} at={a.createdAt} />
+        <HelpfulButton
+          postType="answer"
+          postId={a.id}
+          count={a.helpfulCount}
+          marked={a.markedByViewer}
+          disabled={!viewer || viewer.handle === a.author.handle}
+          onChanged={(o, settle) =>
+            optimistic((v) => ({ ...v, answers: v.answers.map((x) => (x.id === a.id ? { ...x, helpfulCount: o.count, markedByViewer: o.marked } : x)) }))(o, settle)
+          }
+        />
+        {isAsker ? (
+          <button
+            type="button"
+            className="rounded-full border border-moss px-3 py-0.5 text-xs font-semibold text-moss-600 hover:bg-moss hover:text-limestone-50 dark:text-moss-300"
+            onClick={async () => {
+              await call('PUT', `/api/questions/${t.id}/fixed`, { answerId: a.fixed ? null : a.id });
+              onChange();
+            }}
+          >
+            {a.fixed ? 'Not the fix after all' : 'This fixed it'}
+          </button>
+        ) : null}
+        {can(viewer, 'answer.edit', viewer && a.author.handle === viewer.handle ? viewer.id : -1) ? <EditBody url={`/api/answers/${a.id}`} initial={a.body} onSaved={onChange} /> : null}
+        {a.edited ? <RevisionHistory questionId={t.id} postType="answer" postId={a.id} /> : null}
+      </div>
+      <Replies items={replies} viewer={viewer} questionId={t.id} answerId={a.id} onChange={onChange} />
+      {viewer ? <ReplyComposer questionId={t.id} answerId={a.id} onPosted={onChange} label="Reply to this answer" /> : null}
+    </article>
+  );
+}
+
+function Replies({ items, viewer, questionId, answerId, onChange }: { items: ReplyView[]; viewer: Viewer; questionId: number; answerId: number | null; onChange: () => void }) {
+  const children = (parent: number | null) => items.filter((r) => r.replyToId === parent);
+  const render = (parent: number | null) => {
+    const list = children(parent);
+    if (!list.length) return null;
+    return (
+      <ul className={`flex flex-col gap-2 ${parent === null ? '' : 'ml-4 border-l border-limestone-300 pl-3 dark:border-creek-600'}`}>
+        {list.map((r) => (
+          <li key={r.id} data-reply={r.id} data-depth={r.depth} className="text-sm">
+            <MemberText>{r.body}</MemberText>
+            <div className="flex flex-wrap items-center gap-3">
+              <Byline person={r.author} at={r.createdAt} />
+              {viewer && viewer.handle === r.author.handle ? <EditBody url={`/api/replies/${r.id}`} initial={r.body} onSaved={onChange} /> : null}
+              {viewer ? <ReplyComposer questionId={questionId} answerId={answerId} replyToId={r.id} onPosted={onChange} /> : null}
+              {r.edited ? <RevisionHistory questionId={questionId} postType="reply" postId={r.id} /> : null}
+            </div>
+            {render(r.id)}
+          </li>
+        ))}
+      </ul>
+    );
+  };
+  return render(null);
+}

@@ -1,0 +1,215 @@
+import { Op, type Transaction } from 'sequelize';
+import { getSequelize } from '@/lib/db';
+import { initModels } from '@/models';
+import type { SessionUser } from '@/lib/auth/session';
+import { can, REFUSAL } from '@/lib/auth/policy';
+import { attachPhotos } from '@/lib/photos/store';
+import { ForumError } from './errors';
+import { validateSiteSheet } from './site-sheet';
+
+/** Replies nest this deep; a reply to one at the cap joins its level instead (flattened). */
+export const MAX_REPLY_DEPTH = 3;
+
+async function tagIds(slugs: string[], transaction: Transaction) {
+  const { Tag } = initModels();
+  const tags = await Tag.findAll({ where: { slug: slugs }, transaction });
+  const unknown = slugs.filter((s) => !tags.some((t) => t.slug === s));
+  if (unknown.length) throw new ForumError(422, `tags: no tag called ${unknown.join(', ')}`, 'tags');
+  return tags.map((t) => t.id);
+}
+
+export async function askQuestion(
+  user: SessionUser,
+  input: { title: string; body: string; tags: string[]; siteSheet?: Record<string, string | undefined>; photoIds: string[]; guide?: string },
+) {
+  const siteSheet = validateSiteSheet(input.siteSheet);
+  const { Question, QuestionTag, Revision, QuestionFollow } = initModels();
+  return getSequelize().transaction(async (transaction) => {
+    const ids = await tagIds([...new Set(input.tags)], transaction);
+    const now = new Date();
+    const q = await Question.create(
+      { authorId: user.id, title: input.title, body: input.body, answerCount: 0, fixedAnswerId: null, siteSheet, guideSlug: input.guide ?? null, lastActivityAt: now },
+      { transaction },
+    );
+    await QuestionTag.bulkCreate(ids.map((tagId) => ({ questionId: q.id, tagId })), { transaction });
+    await Revision.create({ postType: 'question', postId: q.id, editorId: user.id, title: q.title, body: q.body }, { transaction });
+    await QuestionFollow.create({ questionId: q.id, userId: user.id }, { transaction });
+    if (input.photoIds.length) {
+      const n = await attachPhotos(input.photoIds, user.id, { questionId: q.id }, transaction);
+      if (n !== input.photoIds.length) throw new ForumError(422, 'photoIds: a photo is not yours or is already attached', 'photoIds');
+    }
+    return q;
+  });
+}
+
+async function loadQuestion(id: number, transaction?: Transaction) {
+  const { Question } = initModels();
+  const q = await Question.findByPk(id, { transaction, lock: transaction ? transaction.LOCK.UPDATE : undefined });
+  if (!q) throw new ForumError(404, 'no such question', 'id');
+  return q;
+}
+
+export async function editQuestion(user: SessionUser, id: number, input: { title: string; body: string; tags: string[]; siteSheet?: Record<string, string | undefined> }) {
+  const siteSheet = validateSiteSheet(input.siteSheet);
+  const { QuestionTag, Revision } = initModels();
+  return getSequelize().transaction(async (transaction) => {
+    const q = await loadQuestion(id, transaction);
+    if (!can(user, 'question.edit', q.authorId)) throw new ForumError(403, REFUSAL['question.edit']);
+    const ids = await tagIds([...new Set(input.tags)], transaction);
+    await q.update({ title: input.title, body: input.body, siteSheet }, { transaction });
+    await QuestionTag.destroy({ where: { questionId: id }, transaction });
+    await QuestionTag.bulkCreate(ids.map((tagId) => ({ questionId: id, tagId })), { transaction });
+    await Revision.create({ postType: 'question', postId: id, editorId: user.id, title: input.title, body: input.body }, { transaction });
+    return q;
+  });
+}
+
+export async function postAnswer(user: SessionUser, questionId: number, input: { body: string; calculationId?: string; photoIds: string[] }) {
+  const { Answer, WorkedCalculation, Revision } = initModels();
+  return getSequelize().transaction(async (transaction) => {
+    const q = await loadQuestion(questionId, transaction);
+    let calculationId: number | null = null;
+    if (input.calculationId) {
+      const calc = await WorkedCalculation.findOne({ where: { publicId: input.calculationId }, transaction });
+      if (!calc) throw new ForumError(422, 'calculationId: no worked calculation with that id', 'calculationId');
+      calculationId = calc.id;
+    }
+    const a = await Answer.create({ questionId, authorId: user.id, body: input.body, calculationId }, { transaction });
+    await Revision.create({ postType: 'answer', postId: a.id, editorId: user.id, title: null, body: a.body }, { transaction });
+    if (input.photoIds.length) {
+      const n = await attachPhotos(input.photoIds, user.id, { answerId: a.id }, transaction);
+      if (n !== input.photoIds.length) throw new ForumError(422, 'photoIds: a photo is not yours or is already attached', 'photoIds');
+    }
+    await q.update({ answerCount: q.answerCount + 1, lastActivityAt: new Date() }, { transaction });
+    return a;
+  });
+}
+
+export async function editPostBody(user: SessionUser, postType: 'answer' | 'reply', id: number, body: string) {
+  const { Answer, Reply, Revision } = initModels();
+  return getSequelize().transaction(async (transaction) => {
+    const post = postType === 'answer' ? await Answer.findByPk(id, { transaction }) : await Reply.findByPk(id, { transaction });
+    if (!post) throw new ForumError(404, `no such ${postType}`, 'id');
+    const action = postType === 'answer' ? 'answer.edit' : 'reply.edit';
+    if (!can(user, action, post.authorId)) throw new ForumError(403, REFUSAL[action]);
+    post.body = body;
+    await post.save({ transaction });
+    await Revision.create({ postType, postId: id, editorId: user.id, title: null, body }, { transaction });
+    return post;
+  });
+}
+
+export async function postReply(user: SessionUser, questionId: number, input: { body: string; answerId?: number; replyToId?: number }) {
+  const { Answer, Reply, Revision } = initModels();
+  return getSequelize().transaction(async (transaction) => {
+    const q = await loadQuestion(questionId, transaction);
+    let answerId: number | null = input.answerId ?? null;
+    let depth = 0;
+    let replyToId: number | null = null;
+    if (input.replyToId) {
+      const parent = await Reply.findOne({ where: { id: input.replyToId, questionId }, transaction });
+      if (!parent) throw new ForumError(422, 'replyToId: no such reply in this thread', 'replyToId');
+      answerId = parent.answerId;
+      // Nesting is capped; past the cap a reply joins its parent's level (flattened).
+      if (parent.depth + 1 > MAX_REPLY_DEPTH) {
+        depth = parent.depth;
+        replyToId = parent.replyToId;
+      } else {
+        depth = parent.depth + 1;
+        replyToId = parent.id;
+      }
+    } else if (answerId) {
+      const a = await Answer.findOne({ where: { id: answerId, questionId }, transaction });
+      if (!a) throw new ForumError(422, 'answerId: no such answer on this question', 'answerId');
+    }
+    const r = await Reply.create(
+      { questionId, parentType: answerId ? 'answer' : 'question', answerId, replyToId, depth, authorId: user.id, body: input.body },
+      { transaction },
+    );
+    await Revision.create({ postType: 'reply', postId: r.id, editorId: user.id, title: null, body: r.body }, { transaction });
+    await q.update({ lastActivityAt: new Date() }, { transaction });
+    return r;
+  });
+}
+
+type PostType = 'question' | 'answer' | 'reply';
+
+async function postOwner(postType: PostType, postId: number, transaction: Transaction) {
+  const { Question, Answer, Reply } = initModels();
+  const model = { question: Question, answer: Answer, reply: Reply }[postType] as typeof Answer;
+  const post = await model.findByPk(postId, { transaction, lock: transaction.LOCK.UPDATE });
+  if (!post) throw new ForumError(404, `no such ${postType}`, 'postId');
+  return post;
+}
+
+/** One helpful mark per member per post, never on one's own post; the post's count follows. */
+export async function markHelpful(user: SessionUser, postType: PostType, postId: number, on: boolean) {
+  const { HelpfulMark } = initModels();
+  return getSequelize().transaction(async (transaction) => {
+    const post = await postOwner(postType, postId, transaction);
+    if (post.authorId === user.id) throw new ForumError(403, 'You cannot mark your own post helpful.');
+    const existing = await HelpfulMark.findOne({ where: { postType, postId, userId: user.id }, transaction });
+    if (on && existing) throw new ForumError(409, 'You have already marked this helpful.');
+    if (!on && !existing) throw new ForumError(404, 'You have not marked this helpful.');
+    if (on) await HelpfulMark.create({ postType, postId, userId: user.id }, { transaction });
+    else await existing!.destroy({ transaction });
+    const count = await HelpfulMark.count({ where: { postType, postId }, transaction });
+    await post.update({ helpfulCount: count }, { transaction });
+    return count;
+  });
+}
+
+/** The asker's choice of the answer that fixed it (or none). */
+export async function chooseFixed(user: SessionUser, questionId: number, answerId: number | null) {
+  const { Answer } = initModels();
+  return getSequelize().transaction(async (transaction) => {
+    const q = await loadQuestion(questionId, transaction);
+    if (!can(user, 'question.markFixed', q.authorId)) throw new ForumError(403, REFUSAL['question.markFixed']);
+    if (answerId !== null) {
+      const a = await Answer.findOne({ where: { id: answerId, questionId }, transaction });
+      if (!a) throw new ForumError(422, 'answerId: no such answer on this question', 'answerId');
+    }
+    await q.update({ fixedAnswerId: answerId }, { transaction });
+    return q;
+  });
+}
+
+export async function setFollow(user: SessionUser, questionId: number, on: boolean) {
+  const { QuestionFollow } = initModels();
+  await loadQuestion(questionId);
+  if (on) await QuestionFollow.findOrCreate({ where: { questionId, userId: user.id } });
+  else await QuestionFollow.destroy({ where: { questionId, userId: user.id } });
+  return on;
+}
+
+/** Solved questions sharing a tag, nearest in fall and lift first. */
+export async function similarQuestions(tags: string[], fallM?: number, liftM?: number, limit = 5) {
+  const { Question, Tag } = initModels();
+  if (tags.length === 0) return [];
+  const rows = await Question.findAll({
+    attributes: ['id', 'title', 'fixedAnswerId', 'siteSheet', 'createdAt'],
+    include: [{ model: Tag, as: 'tags', attributes: ['slug'], where: { slug: { [Op.in]: tags } }, through: { attributes: [] } }],
+    order: [['createdAt', 'DESC']],
+    limit: 50,
+  });
+  const { parseQuantity } = await import('@/lib/hydraulics');
+  const read = (s: unknown) => {
+    try {
+      return typeof s === 'string' ? parseQuantity(s, 'length') : undefined;
+    } catch {
+      return undefined;
+    }
+  };
+  const distance = (q: (typeof rows)[number]) => {
+    const sheet = (q.siteSheet ?? {}) as Record<string, string>;
+    const f = read(sheet.fall);
+    const l = read(sheet.lift);
+    if (fallM === undefined || liftM === undefined || f === undefined || l === undefined) return 10;
+    return Math.abs(Math.log(f / fallM)) + Math.abs(Math.log(l / liftM));
+  };
+  return rows
+    .map((q) => ({ id: q.id, title: q.title, fixed: q.fixedAnswerId !== null, d: distance(q) + (q.fixedAnswerId !== null ? 0 : 1) }))
+    .sort((a, b) => a.d - b.d)
+    .slice(0, limit)
+    .map(({ id, title, fixed }) => ({ id, title, fixed }));
+}

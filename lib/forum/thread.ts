@@ -1,0 +1,160 @@
+import { Op } from 'sequelize';
+import { initModels } from '@/models';
+import { ForumError } from './errors';
+
+export interface PersonView {
+  handle: string;
+  displayName: string;
+  expert: boolean;
+}
+export interface ReplyView {
+  id: number;
+  answerId: number | null;
+  replyToId: number | null;
+  depth: number;
+  author: PersonView;
+  body: string;
+  helpfulCount: number;
+  markedByViewer: boolean;
+  createdAt: string;
+  edited: boolean;
+}
+export interface AnswerView {
+  id: number;
+  author: PersonView;
+  body: string;
+  helpfulCount: number;
+  markedByViewer: boolean;
+  fixed: boolean;
+  calculation: { id: string; tool: string; title: string | null; inputs: Record<string, string> } | null;
+  photos: { id: string; width: number; height: number; alt: string | null }[];
+  createdAt: string;
+  edited: boolean;
+}
+export interface ThreadView {
+  id: number;
+  title: string;
+  body: string;
+  author: PersonView & { id: number };
+  tags: { slug: string; name: string }[];
+  siteSheet: Record<string, string> | null;
+  guideSlug: string | null;
+  helpfulCount: number;
+  markedByViewer: boolean;
+  fixedAnswerId: number | null;
+  followedByViewer: boolean;
+  photos: { id: string; width: number; height: number; alt: string | null }[];
+  answers: AnswerView[];
+  replies: ReplyView[];
+  createdAt: string;
+  edited: boolean;
+}
+
+const person = (u: { handle: string; displayName: string; role: string } | undefined): PersonView => ({
+  handle: u?.handle ?? 'unknown',
+  displayName: u?.displayName ?? 'unknown',
+  expert: u?.role === 'expert',
+});
+
+/**
+ * A whole thread for the page and GET /api/questions/:id: answers ordered by
+ * fixed it, then helpful marks, then age; replies in time order with their depth.
+ */
+export async function loadThread(id: number, viewerId: number | null): Promise<ThreadView> {
+  const { Question, Answer, Reply, User, Tag, WorkedCalculation, Photo, HelpfulMark, QuestionFollow, Revision } = initModels();
+  const q = await Question.findByPk(id, {
+    include: [
+      { model: User, as: 'author', attributes: ['id', 'handle', 'displayName', 'role'] },
+      { model: Tag, as: 'tags', attributes: ['slug', 'name'], through: { attributes: [] } },
+      { model: Photo, as: 'photos', attributes: ['publicId', 'width', 'height', 'alt'] },
+    ],
+  });
+  if (!q) throw new ForumError(404, 'no such question', 'id');
+  const [answers, replies, marks, follow] = await Promise.all([
+    Answer.findAll({
+      where: { questionId: id },
+      include: [
+        { model: User, as: 'author', attributes: ['handle', 'displayName', 'role'] },
+        { model: WorkedCalculation, as: 'calculation', attributes: ['publicId', 'tool', 'title', 'inputs'] },
+        { model: Photo, as: 'photos', attributes: ['publicId', 'width', 'height', 'alt'] },
+      ],
+    }),
+    Reply.findAll({ where: { questionId: id }, include: [{ model: User, as: 'author', attributes: ['handle', 'displayName', 'role'] }], order: [['createdAt', 'ASC'], ['id', 'ASC']] }),
+    viewerId ? HelpfulMark.findAll({ where: { userId: viewerId }, attributes: ['postType', 'postId'], limit: 5000 }) : Promise.resolve([]),
+    viewerId ? QuestionFollow.findOne({ where: { questionId: id, userId: viewerId } }) : Promise.resolve(null),
+  ]);
+  // How many revisions each post of this thread has: more than one means it was edited.
+  const revisionCounts = await Revision.count({
+    where: {
+      [Op.or]: [
+        { postType: 'question', postId: id },
+        ...(answers.length ? [{ postType: 'answer' as const, postId: answers.map((a) => a.id) }] : []),
+        ...(replies.length ? [{ postType: 'reply' as const, postId: replies.map((r) => r.id) }] : []),
+      ],
+    },
+    group: ['postType', 'postId'],
+  });
+  const marked = new Set(marks.map((m) => `${m.postType}:${m.postId}`));
+  const edits = new Map((revisionCounts as unknown as { postType: string; postId: number; count: number }[]).map((r) => [`${r.postType}:${r.postId}`, Number(r.count)]));
+  const edited = (t: string, pid: number) => (edits.get(`${t}:${pid}`) ?? 1) > 1;
+  const photoView = (ps: { publicId: string; width: number; height: number; alt: string | null }[] | undefined) =>
+    (ps ?? []).map((p) => ({ id: p.publicId, width: p.width, height: p.height, alt: p.alt }));
+
+  const answerViews: AnswerView[] = answers
+    .map((a) => {
+      const calc = (a as unknown as { calculation?: { publicId: string; tool: string; title: string | null; inputs: Record<string, string> } }).calculation;
+      return {
+        id: a.id,
+        author: person(a.author),
+        body: a.body,
+        helpfulCount: a.helpfulCount,
+        markedByViewer: marked.has(`answer:${a.id}`),
+        fixed: q.fixedAnswerId === a.id,
+        calculation: calc ? { id: calc.publicId, tool: calc.tool, title: calc.title, inputs: calc.inputs } : null,
+        photos: photoView((a as unknown as { photos?: never[] }).photos),
+        createdAt: a.createdAt.toISOString(),
+        edited: edited('answer', a.id),
+      };
+    })
+    .sort((x, y) => Number(y.fixed) - Number(x.fixed) || y.helpfulCount - x.helpfulCount || x.createdAt.localeCompare(y.createdAt));
+
+  return {
+    id: q.id,
+    title: q.title,
+    body: q.body,
+    author: { ...person(q.author), id: q.authorId as number },
+    tags: (q.tags ?? []).map((t) => ({ slug: t.slug, name: t.name })),
+    siteSheet: (q.siteSheet as Record<string, string> | null) ?? null,
+    guideSlug: q.guideSlug ?? null,
+    helpfulCount: q.helpfulCount,
+    markedByViewer: marked.has(`question:${q.id}`),
+    fixedAnswerId: q.fixedAnswerId,
+    followedByViewer: follow !== null,
+    photos: photoView((q as unknown as { photos?: never[] }).photos),
+    answers: answerViews,
+    replies: replies.map((r) => ({
+      id: r.id,
+      answerId: r.answerId,
+      replyToId: r.replyToId,
+      depth: r.depth,
+      author: person(r.author),
+      body: r.body,
+      helpfulCount: r.helpfulCount,
+      markedByViewer: marked.has(`reply:${r.id}`),
+      createdAt: r.createdAt.toISOString(),
+      edited: edited('reply', r.id),
+    })),
+    createdAt: q.createdAt.toISOString(),
+    edited: edited('question', q.id),
+  };
+}
+
+export async function listRevisions(postType: 'question' | 'answer' | 'reply', postId: number) {
+  const { Revision, User } = initModels();
+  const rows = await Revision.findAll({
+    where: { postType, postId },
+    include: [{ model: User, as: 'editor', attributes: ['handle', 'displayName'] }],
+    order: [['createdAt', 'ASC'], ['id', 'ASC']],
+  });
+  return rows.map((r) => ({ id: r.id, title: r.title, body: r.body, editor: r.editor?.displayName ?? 'unknown', at: r.createdAt.toISOString() }));
+}

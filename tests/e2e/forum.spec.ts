@@ -1,0 +1,91 @@
+import { test, expect, type Page } from '@playwright/test';
+import sharp from 'sharp';
+
+const PASSWORD = 'lift-with-falling-water';
+const TITLE = `Pump stops after a few beats since the creek dropped ${Date.now() % 100000}`;
+
+async function signIn(page: Page, email: string) {
+  await page.goto('/sign-in');
+  const form = page.getByRole('form', { name: 'Sign in with a password' });
+  await form.getByLabel('E-mail').fill(email);
+  await form.getByLabel('Password').fill(PASSWORD);
+  await form.getByRole('button', { name: 'Sign in' }).click();
+  await expect(page).toHaveURL(/\/$/);
+}
+
+test.describe.serial('the forum', () => {
+  let questionUrl = '';
+
+  test('the asking journey: a site sheet, the stall check, a photo, posted and listed', async ({ page }) => {
+    await signIn(page, 'cabin@sorrelcreek.example');
+    await page.goto('/questions/ask');
+    await page.getByLabel('Title').fill(TITLE);
+    await page.getByLabel('What happened').fill('It beats about a dozen times, then the waste valve stays shut until I push it down again.');
+    await page.getByLabel('Stops cycling', { exact: true }).check();
+    const sheet = page.locator('section', { has: page.getByRole('heading', { name: /site sheet/i }) });
+    await sheet.getByLabel('Fall', { exact: true }).fill('5 ft');
+    await sheet.getByLabel('Lift', { exact: true }).fill('45 ft');
+    await sheet.getByLabel('Drive pipe length', { exact: true }).fill('12 ft');
+    await sheet.getByLabel('Drive pipe size', { exact: true }).selectOption('3/4');
+    await sheet.getByLabel('Drive pipe material', { exact: true }).selectOption('pvc-sch40');
+    await sheet.getByLabel('Pump size', { exact: true }).selectOption('3/4');
+    await sheet.getByLabel('Pumps', { exact: true }).fill('1');
+    await sheet.getByLabel('stops after some beats').check();
+
+    const before = page.getByTestId('before-you-post');
+    await expect(before).toContainText(/Drive pipe length outside the usual range/i);
+
+    const png = await sharp({ create: { width: 64, height: 48, channels: 3, background: { r: 95, g: 122, b: 58 } } }).png().toBuffer();
+    await page.getByLabel('Photos (optional)').setInputFiles({ name: 'pump.png', mimeType: 'image/png', buffer: png });
+    await expect(page.getByRole('list', { name: 'Photos added' }).getByRole('listitem')).toHaveCount(1);
+
+    await page.getByRole('button', { name: 'Post my question' }).click();
+    await expect(page.getByRole('heading', { level: 1, name: TITLE })).toBeVisible();
+    questionUrl = page.url();
+    await expect(page.getByRole('region', { name: 'Site sheet' })).toContainText('Drive pipe length');
+    await expect(page.locator('img[src*="/api/photos/"]').first()).toBeVisible();
+
+    await page.goto('/questions?show=unanswered');
+    await expect(page.getByRole('link', { name: TITLE })).toBeVisible();
+  });
+
+  test('the expert’s journey: an answer with a worked calculation, fixed it, and try with my numbers', async ({ page, browser }) => {
+    await signIn(page, 'builds@ironwheel.example');
+    await page.goto(questionUrl);
+    const composer = page.getByRole('form', { name: 'Your answer' });
+    await composer.getByLabel('Answer (Markdown; math between $ signs)').fill('Twelve feet is short for five feet of fall: the pulse comes back too soon. Here is the drive pipe check for your site.');
+    await composer.getByLabel('Add a worked calculation').selectOption('drive-pipe-check');
+    const card = composer.locator('[data-calculator="drive-pipe-check"]');
+    // prefilled from the site sheet
+    await expect(card.getByLabel('Drive pipe length', { exact: true })).toHaveValue('12');
+    await card.getByLabel('Drive pipe length', { exact: true }).fill('30');
+    await composer.getByRole('button', { name: 'Attach this calculation' }).click();
+    await expect(composer.getByTestId('calculation-attached')).toBeVisible();
+    await composer.getByRole('button', { name: 'Post the answer' }).click();
+    const answer = page.locator('[data-answer]').filter({ hasText: 'Twelve feet is short' });
+    await expect(answer).toBeVisible();
+    await expect(answer.getByText('expert', { exact: true })).toBeVisible();
+    await expect(answer.getByTestId('answer-calculation')).toBeVisible();
+
+    // The asker marks it fixed it.
+    const asker = await browser.newContext();
+    const askerPage = await asker.newPage();
+    await signIn(askerPage, 'cabin@sorrelcreek.example');
+    await askerPage.goto(questionUrl);
+    await askerPage.locator('[data-answer]').filter({ hasText: 'Twelve feet is short' }).getByRole('button', { name: 'This fixed it' }).click();
+    await expect(askerPage.locator('[data-answer]').first()).toContainText('fixed it');
+    await asker.close();
+
+    // A visitor tries the worked calculation with their own numbers.
+    const visitor = await browser.newContext();
+    const v = await visitor.newPage();
+    await v.goto(questionUrl);
+    const calc = v.locator('[data-answer]').first().locator('[data-calculator="drive-pipe-check"]');
+    await expect(calc.getByLabel('Drive pipe length', { exact: true })).toHaveValue('30');
+    const before = await calc.locator('[data-result="Length ÷ fall (L/H)"]').textContent();
+    await calc.getByLabel('Drive pipe length', { exact: true }).fill('50');
+    await expect(calc.locator('[data-result="Length ÷ fall (L/H)"]')).not.toHaveText(before ?? '');
+    await expect(v.getByRole('link', { name: 'Sign in', exact: true }).last()).toBeVisible();
+    await visitor.close();
+  });
+});
