@@ -47,6 +47,7 @@ export const demoThreads: DemoThread[] = [
     tags: ['tuning', 'drive-pipe'],
     daysAgo: 4,
     siteSheet: { fall: '6 ft', lift: '40 ft', driveLength: '40 ft', driveSize: '1', driveMaterial: 'pvc-sch40', pumpSize: '1', pumps: '1', bpm: '35', symptoms: 'hammering' },
+    photo: { alt: 'A one-inch ram on a concrete pad with a PVC tee at the pump body', caption: 'Highcrag: the tee that creaks' },
     answers: [
       { author: 'quarry_lane_valves', hoursLater: 2, body: 'A slow, heavy beat means a long stroke; the surge grows with the speed the water reaches. Check the pressure rating of every fitting against the surge in the drive pipe check, shorten the stroke, and stand clear while you test. Never use unrated parts here.', helpfulFrom: ['highcrag_shepherd', 'ferncombe_tamsin'] },
     ],
@@ -103,6 +104,7 @@ export const demoThreads: DemoThread[] = [
     author: 'highcrag_shepherd',
     title: 'Flood took the intake screen — what now?',
     body: 'A spate last week ripped out the intake screen and filled the drive pipe with gravel.',
+    photo: { alt: 'The intake pool after a flood, the screen gone and gravel over the drive pipe mouth', caption: 'Highcrag: after the spate' },
     tags: ['stall'],
     daysAgo: 19,
     answers: [{ author: 'quarry_lane_valves', hoursLater: 12, body: 'Wait for the water to drop; never work alone in high water. Flush the drive pipe from the top, check both valves for grit, and anchor the new screen to something that will not move.' }],

@@ -4,6 +4,11 @@ import sharp from 'sharp';
 const PASSWORD = 'lift-with-falling-water';
 const TITLE = `Pump stops after a few beats since the creek dropped ${Date.now() % 100000}`;
 
+/** Waits until streamed content has replaced its loading fallback (no hidden copies left). */
+async function settled(page: Page) {
+  await page.waitForFunction(() => !document.querySelector('div[hidden][id^="S:"]'));
+}
+
 async function signIn(page: Page, email: string) {
   await page.goto('/sign-in');
   const form = page.getByRole('form', { name: 'Sign in with a password' });
@@ -19,7 +24,8 @@ test.describe.serial('the forum', () => {
   test('the asking journey: a site sheet, the stall check, a photo, posted and listed', async ({ page }) => {
     await signIn(page, 'cabin@sorrelcreek.example');
     await page.goto('/questions/ask');
-    await page.getByLabel('Title').fill(TITLE);
+    await settled(page);
+    await page.getByLabel('Title', { exact: true }).fill(TITLE);
     await page.getByLabel('What happened').fill('It beats about a dozen times, then the waste valve stays shut until I push it down again.');
     await page.getByLabel('Stops cycling', { exact: true }).check();
     const sheet = page.locator('section', { has: page.getByRole('heading', { name: /site sheet/i }) });
@@ -52,6 +58,7 @@ test.describe.serial('the forum', () => {
   test('the expert’s journey: an answer with a worked calculation, fixed it, and try with my numbers', async ({ page, browser }) => {
     await signIn(page, 'builds@ironwheel.example');
     await page.goto(questionUrl);
+    await settled(page);
     const composer = page.getByRole('form', { name: 'Your answer' });
     await composer.getByLabel('Answer (Markdown; math between $ signs)').fill('Twelve feet is short for five feet of fall: the pulse comes back too soon. Here is the drive pipe check for your site.');
     await composer.getByLabel('Add a worked calculation').selectOption('drive-pipe-check');
@@ -72,6 +79,7 @@ test.describe.serial('the forum', () => {
     const askerPage = await asker.newPage();
     await signIn(askerPage, 'cabin@sorrelcreek.example');
     await askerPage.goto(questionUrl);
+    await settled(askerPage);
     await askerPage.locator('[data-answer]').filter({ hasText: 'Twelve feet is short' }).getByRole('button', { name: 'This fixed it' }).click();
     await expect(askerPage.locator('[data-answer]').first()).toContainText('fixed it');
     await asker.close();
@@ -80,6 +88,7 @@ test.describe.serial('the forum', () => {
     const visitor = await browser.newContext();
     const v = await visitor.newPage();
     await v.goto(questionUrl);
+    await settled(v);
     const calc = v.locator('[data-answer]').first().locator('[data-calculator="drive-pipe-check"]');
     await expect(calc.getByLabel('Drive pipe length', { exact: true })).toHaveValue('30');
     const before = await calc.locator('[data-result="Length ÷ fall (L/H)"]').textContent();
