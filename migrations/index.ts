@@ -4,6 +4,7 @@ import * as guides from './002-guides';
 import * as accounts from './003-accounts';
 import * as authAdapter from './004-auth-adapter';
 import * as forum from './005-forum';
+import * as moderation from './006-moderation';
 
 type Step = (params: { context: QueryInterface }) => Promise<void>;
 
@@ -17,4 +18,5 @@ export const migrations: { name: string; up: Step; down: Step }[] = [
   { name: '003-accounts', ...accounts },
   { name: '004-auth-adapter', ...authAdapter },
   { name: '005-forum', ...forum },
+  { name: '006-moderation', ...moderation },
 ];

@@ -18,6 +18,9 @@ export class Answer extends Model<InferAttributes<Answer>, InferCreationAttribut
   declare body: string;
   declare helpfulCount: CreationOptional<number>;
   declare calculationId: CreationOptional<number | null>;
+  declare hiddenAt: CreationOptional<Date | null>;
+  declare hiddenReason: CreationOptional<string | null>;
+  declare deletedAt: CreationOptional<Date | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -30,6 +33,9 @@ export class Answer extends Model<InferAttributes<Answer>, InferCreationAttribut
         body: { type: DataTypes.TEXT('medium'), allowNull: false },
         helpfulCount: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false, defaultValue: 0 },
         calculationId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: true },
+        hiddenAt: { type: DataTypes.DATE, allowNull: true },
+        hiddenReason: { type: DataTypes.STRING(300), allowNull: true },
+        deletedAt: { type: DataTypes.DATE, allowNull: true },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

@@ -12,6 +12,9 @@ export class Photo extends Model<InferAttributes<Photo>, InferCreationAttributes
   declare height: number;
   declare bytes: number;
   declare alt: string | null;
+  declare hiddenAt: CreationOptional<Date | null>;
+  declare hiddenReason: CreationOptional<string | null>;
+  declare deletedAt: CreationOptional<Date | null>;
   declare createdAt: CreationOptional<Date>;
 
   static initModel(sequelize: Sequelize) {
@@ -27,6 +30,9 @@ export class Photo extends Model<InferAttributes<Photo>, InferCreationAttributes
         height: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false },
         bytes: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false },
         alt: { type: DataTypes.STRING(200), allowNull: true },
+        hiddenAt: { type: DataTypes.DATE, allowNull: true },
+        hiddenReason: { type: DataTypes.STRING(300), allowNull: true },
+        deletedAt: { type: DataTypes.DATE, allowNull: true },
         createdAt: DataTypes.DATE,
       },
       { sequelize, modelName: 'Photo' /* the bundler minifies class names */, tableName: 'photos', updatedAt: false },

@@ -24,6 +24,10 @@ export class Question extends Model<InferAttributes<Question>, InferCreationAttr
   declare helpfulCount: CreationOptional<number>;
   declare guideSlug: CreationOptional<string | null>;
   declare lastActivityAt: CreationOptional<Date | null>;
+  declare hiddenAt: CreationOptional<Date | null>;
+  declare hiddenReason: CreationOptional<string | null>;
+  declare deletedAt: CreationOptional<Date | null>;
+  declare lockedAt: CreationOptional<Date | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -42,6 +46,10 @@ export class Question extends Model<InferAttributes<Question>, InferCreationAttr
         helpfulCount: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false, defaultValue: 0 },
         guideSlug: { type: DataTypes.STRING(80), allowNull: true },
         lastActivityAt: { type: DataTypes.DATE, allowNull: true },
+        hiddenAt: { type: DataTypes.DATE, allowNull: true },
+        hiddenReason: { type: DataTypes.STRING(300), allowNull: true },
+        deletedAt: { type: DataTypes.DATE, allowNull: true },
+        lockedAt: { type: DataTypes.DATE, allowNull: true },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

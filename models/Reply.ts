@@ -12,6 +12,9 @@ export class Reply extends Model<InferAttributes<Reply>, InferCreationAttributes
   declare authorId: number;
   declare body: string;
   declare helpfulCount: CreationOptional<number>;
+  declare hiddenAt: CreationOptional<Date | null>;
+  declare hiddenReason: CreationOptional<string | null>;
+  declare deletedAt: CreationOptional<Date | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -29,6 +32,9 @@ export class Reply extends Model<InferAttributes<Reply>, InferCreationAttributes
         authorId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false },
         body: { type: DataTypes.TEXT, allowNull: false },
         helpfulCount: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false, defaultValue: 0 },
+        hiddenAt: { type: DataTypes.DATE, allowNull: true },
+        hiddenReason: { type: DataTypes.STRING(300), allowNull: true },
+        deletedAt: { type: DataTypes.DATE, allowNull: true },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

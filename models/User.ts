@@ -14,6 +14,7 @@ export class User extends Model<InferAttributes<User>, InferCreationAttributes<U
   declare passwordHash: CreationOptional<string | null>;
   declare emailVerifiedAt: CreationOptional<Date | null>;
   declare units: CreationOptional<'US' | 'metric'>;
+  declare suspendedUntil: CreationOptional<Date | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -30,6 +31,7 @@ export class User extends Model<InferAttributes<User>, InferCreationAttributes<U
         passwordHash: { type: DataTypes.STRING(255), allowNull: true },
         emailVerifiedAt: { type: DataTypes.DATE, allowNull: true },
         units: { type: DataTypes.ENUM('US', 'metric'), allowNull: false, defaultValue: 'US' },
+        suspendedUntil: { type: DataTypes.DATE, allowNull: true },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

@@ -15,8 +15,10 @@ import { Revision } from './Revision';
 import { HelpfulMark } from './HelpfulMark';
 import { QuestionFollow } from './QuestionFollow';
 import { Photo } from './Photo';
+import { Flag } from './Flag';
+import { AuditEntry } from './AuditEntry';
 
-export { User, Tag, Question, Answer, QuestionTag, SafetyCheck, WorkedCalculation, AuthToken, ExpertApplication, Notice, Reply, Revision, HelpfulMark, QuestionFollow, Photo };
+export { User, Tag, Question, Answer, QuestionTag, SafetyCheck, WorkedCalculation, AuthToken, ExpertApplication, Notice, Reply, Revision, HelpfulMark, QuestionFollow, Photo, Flag, AuditEntry };
 
 const initialised = new WeakSet<Sequelize>();
 
@@ -38,6 +40,8 @@ export function initModels(sequelize: Sequelize = getSequelize()) {
     HelpfulMark.initModel(sequelize);
     QuestionFollow.initModel(sequelize);
     Photo.initModel(sequelize);
+    Flag.initModel(sequelize);
+    AuditEntry.initModel(sequelize);
 
     Question.belongsTo(User, { as: 'author', foreignKey: 'authorId' });
     User.hasMany(Question, { as: 'questions', foreignKey: 'authorId' });
@@ -55,7 +59,9 @@ export function initModels(sequelize: Sequelize = getSequelize()) {
     Revision.belongsTo(User, { as: 'editor', foreignKey: 'editorId' });
     Question.hasMany(Photo, { as: 'photos', foreignKey: 'questionId' });
     Answer.hasMany(Photo, { as: 'photos', foreignKey: 'answerId' });
+    Flag.belongsTo(User, { as: 'flagger', foreignKey: 'flaggerId' });
+    AuditEntry.belongsTo(User, { as: 'actor', foreignKey: 'actorId' });
     initialised.add(sequelize);
   }
-  return { sequelize, User, Tag, Question, Answer, QuestionTag, SafetyCheck, WorkedCalculation, AuthToken, ExpertApplication, Notice, Reply, Revision, HelpfulMark, QuestionFollow, Photo };
+  return { sequelize, User, Tag, Question, Answer, QuestionTag, SafetyCheck, WorkedCalculation, AuthToken, ExpertApplication, Notice, Reply, Revision, HelpfulMark, QuestionFollow, Photo, Flag, AuditEntry };
 }

@@ -1,3 +1,4 @@
+import { recordAudit } from '@/lib/moderation/audit';
 import { getSequelize } from '@/lib/db';
 import { initModels } from '@/models';
 import type { Role } from '@/models/User';
@@ -99,6 +100,7 @@ export async function decideExpertApplication(
     );
     // A moderator or admin who applied keeps their standing; only a member becomes an expert.
     if (approved && applicant.role === 'member') await applicant.update({ role: 'expert' }, { transaction });
+    await recordAudit({ actorId: moderatorId, action: approved ? 'expert-approve' : 'expert-decline', targetType: 'expert-application', targetId: application.id, reason: note, details: { applicantId: applicant.id } }, transaction);
     await Notice.create(
       {
         userId: applicant.id,
@@ -140,7 +142,9 @@ export async function changeRole(adminId: number, userId: number, role: Role): P
     const user = await User.findByPk(userId, { transaction, lock: transaction.LOCK.UPDATE });
     if (!user) return { ok: false, status: 404, message: 'There is no such member.', code: 'not_found' } satisfies Failure;
     if (user.role === role) return { ok: true as const, role, changed: false };
+    const before = user.role;
     await user.update({ role }, { transaction });
+    await recordAudit({ actorId: adminId, action: 'role-change', targetType: 'member', targetId: userId, reason: `role changed from ${before} to ${role}`, details: { before, after: role } }, transaction);
     await Notice.create(
       { userId, kind: 'role-change', message: `An admin changed your role: you are now ${ROLE_WORDS[role]} on Clackwater.`, link: '/settings', readAt: null },
       { transaction },

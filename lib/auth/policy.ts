@@ -57,6 +57,14 @@ export const POLICY = {
   'question.follow': signedIn(),
   /** upload a photo for a question or an answer */
   'photo.upload': signedIn(),
+  /** flag a post for the review queue */
+  'post.flag': signedIn(),
+  /** the review queue and its actions (never on one's own posts or flags: checked per post) */
+  'moderation.act': row({ moderator: true, admin: true }),
+  /** read the audit log */
+  'audit.read': row({ admin: true }),
+  /** see hidden and deleted posts */
+  'moderation.seeHidden': row({ moderator: true, admin: true }),
 } as const satisfies Record<string, Row>;
 
 export type Action = keyof typeof POLICY;
@@ -94,4 +102,8 @@ export const REFUSAL: Record<Action, string> = {
   'question.markFixed': 'Only the asker can choose the answer that fixed it.',
   'question.follow': 'Sign in to follow a question.',
   'photo.upload': 'Sign in to add photos.',
+  'post.flag': 'Sign in to flag a post.',
+  'moderation.act': 'Only moderators can use the review queue.',
+  'audit.read': 'Only admins can read the audit log.',
+  'moderation.seeHidden': 'Only moderators can see hidden posts.',
 };

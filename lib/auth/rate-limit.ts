@@ -19,6 +19,12 @@ function makeLimits() {
     resetAccount: limiter(3, 60 * 60, 'reset-account'),
     linkIp: limiter(10, 60 * 60, 'link-ip'),
     linkAccount: limiter(3, 60 * 60, 'link-account'),
+    // flood limits on writing: posts (new members get fewer), flags
+    postAccount: limiter(30, 60 * 60, 'post-account'),
+    postNewAccount: limiter(6, 60 * 60, 'post-new-account'),
+    postIp: limiter(120, 60 * 60, 'post-ip'),
+    flagAccount: limiter(20, 60 * 60, 'flag-account'),
+    flagIp: limiter(60, 60 * 60, 'flag-ip'),
     uploadAccount: limiter(30, 60 * 60, 'upload-account'),
   };
 }

@@ -41,4 +41,8 @@ export const API_ROUTES: Record<string, Action | 'public' | 'session'> = {
   'PUT /api/replies/[id]': 'reply.edit',
   'POST /api/helpful': 'post.markHelpful',
   'DELETE /api/helpful': 'post.markHelpful',
+  'POST /api/flags': 'post.flag',
+  'GET /api/review': 'moderation.act',
+  'POST /api/review/actions': 'moderation.act',
+  'GET /api/admin/audit': 'audit.read',
 };

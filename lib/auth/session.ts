@@ -6,7 +6,7 @@ import { authOptions } from './options';
 import { authSecret } from './secret';
 import type { Actor } from './policy';
 
-export type SessionUser = Actor & { handle: string; displayName: string; email: string };
+export type SessionUser = Actor & { handle: string; displayName: string; email: string; suspendedUntil: Date | null; memberSince: Date };
 
 /**
  * The signed-in member, read fresh from the database so a role change or a
@@ -16,8 +16,8 @@ async function loadActor(uid: unknown): Promise<SessionUser | null> {
   const id = Number(uid);
   if (!Number.isInteger(id) || id <= 0) return null;
   const { User } = initModels();
-  const u = await User.findByPk(id, { attributes: ['id', 'role', 'handle', 'displayName', 'email'] });
-  return u ? { id: u.id, role: u.role, handle: u.handle, displayName: u.displayName, email: u.email } : null;
+  const u = await User.findByPk(id, { attributes: ['id', 'role', 'handle', 'displayName', 'email', 'suspendedUntil', 'createdAt'] });
+  return u ? { id: u.id, role: u.role, handle: u.handle, displayName: u.displayName, email: u.email, suspendedUntil: u.suspendedUntil ?? null, memberSince: u.createdAt } : null;
 }
 
 /** For route handlers: the session cookie on this request. */

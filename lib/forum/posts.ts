@@ -68,6 +68,7 @@ export async function postAnswer(user: SessionUser, questionId: number, input: {
   const { Answer, WorkedCalculation, Revision } = initModels();
   return getSequelize().transaction(async (transaction) => {
     const q = await loadQuestion(questionId, transaction);
+    if (q.lockedAt) throw new ForumError(409, 'This thread is locked: no new answers or replies.');
     let calculationId: number | null = null;
     if (input.calculationId) {
       const calc = await WorkedCalculation.findOne({ where: { publicId: input.calculationId }, transaction });
@@ -103,6 +104,7 @@ export async function postReply(user: SessionUser, questionId: number, input: { 
   const { Answer, Reply, Revision } = initModels();
   return getSequelize().transaction(async (transaction) => {
     const q = await loadQuestion(questionId, transaction);
+    if (q.lockedAt) throw new ForumError(409, 'This thread is locked: no new answers or replies.');
     let answerId: number | null = input.answerId ?? null;
     let depth = 0;
     let replyToId: number | null = null;

@@ -1,6 +1,7 @@
 import { Op } from 'sequelize';
 import { initModels } from '@/models';
 import { ForumError } from './errors';
+import { can, type Actor } from '@/lib/auth/policy';
 
 export interface PersonView {
   handle: string;
@@ -18,6 +19,9 @@ export interface ReplyView {
   markedByViewer: boolean;
   createdAt: string;
   edited: boolean;
+  cautionUnsafe: boolean;
+  hiddenAt: string | null;
+  deletedAt: string | null;
 }
 export interface AnswerView {
   id: number;
@@ -30,6 +34,9 @@ export interface AnswerView {
   photos: { id: string; width: number; height: number; alt: string | null }[];
   createdAt: string;
   edited: boolean;
+  cautionUnsafe: boolean;
+  hiddenAt: string | null;
+  deletedAt: string | null;
 }
 export interface ThreadView {
   id: number;
@@ -48,6 +55,10 @@ export interface ThreadView {
   replies: ReplyView[];
   createdAt: string;
   edited: boolean;
+  cautionUnsafe: boolean;
+  hiddenAt: string | null;
+  deletedAt: string | null;
+  lockedAt: string | null;
 }
 
 const person = (u: { handle: string; displayName: string; role: string } | undefined): PersonView => ({
@@ -60,8 +71,10 @@ const person = (u: { handle: string; displayName: string; role: string } | undef
  * A whole thread for the page and GET /api/questions/:id: answers ordered by
  * fixed it, then helpful marks, then age; replies in time order with their depth.
  */
-export async function loadThread(id: number, viewerId: number | null): Promise<ThreadView> {
-  const { Question, Answer, Reply, User, Tag, WorkedCalculation, Photo, HelpfulMark, QuestionFollow, Revision } = initModels();
+export async function loadThread(id: number, viewer: Actor | null): Promise<ThreadView> {
+  const viewerId = viewer?.id ?? null;
+  const seeHidden = can(viewer, 'moderation.seeHidden');
+  const { Question, Answer, Reply, User, Tag, WorkedCalculation, Photo, HelpfulMark, QuestionFollow, Revision, Flag } = initModels();
   const q = await Question.findByPk(id, {
     include: [
       { model: User, as: 'author', attributes: ['id', 'handle', 'displayName', 'role'] },
@@ -69,17 +82,19 @@ export async function loadThread(id: number, viewerId: number | null): Promise<T
       { model: Photo, as: 'photos', attributes: ['publicId', 'width', 'height', 'alt'] },
     ],
   });
-  if (!q) throw new ForumError(404, 'no such question', 'id');
+  // Hidden and deleted posts vanish for everyone but moderators.
+  if (!q || (!seeHidden && (q.hiddenAt || q.deletedAt))) throw new ForumError(404, 'no such question', 'id');
+  const visible = seeHidden ? {} : { hiddenAt: null, deletedAt: null };
   const [answers, replies, marks, follow] = await Promise.all([
     Answer.findAll({
-      where: { questionId: id },
+      where: { questionId: id, ...visible },
       include: [
         { model: User, as: 'author', attributes: ['handle', 'displayName', 'role'] },
         { model: WorkedCalculation, as: 'calculation', attributes: ['publicId', 'tool', 'title', 'inputs'] },
         { model: Photo, as: 'photos', attributes: ['publicId', 'width', 'height', 'alt'] },
       ],
     }),
-    Reply.findAll({ where: { questionId: id }, include: [{ model: User, as: 'author', attributes: ['handle', 'displayName', 'role'] }], order: [['createdAt', 'ASC'], ['id', 'ASC']] }),
+    Reply.findAll({ where: { questionId: id, ...visible }, include: [{ model: User, as: 'author', attributes: ['handle', 'displayName', 'role'] }], order: [['createdAt', 'ASC'], ['id', 'ASC']] }),
     viewerId ? HelpfulMark.findAll({ where: { userId: viewerId }, attributes: ['postType', 'postId'], limit: 5000 }) : Promise.resolve([]),
     viewerId ? QuestionFollow.findOne({ where: { questionId: id, userId: viewerId } }) : Promise.resolve(null),
   ]);
@@ -93,6 +108,14 @@ export async function loadThread(id: number, viewerId: number | null): Promise<T
       ],
     },
     group: ['postType', 'postId'],
+  });
+  // An open "unsafe advice" flag shows readers a caution until a moderator reviews it.
+  const unsafeRows = await Flag.findAll({ where: { status: 'open', reason: 'unsafe', postType: ['question', 'answer', 'reply'] }, attributes: ['postType', 'postId'], limit: 2000 });
+  const unsafe = new Set(unsafeRows.map((f) => `${f.postType}:${f.postId}`));
+  const modState = (t: string, p: { id: number; hiddenAt?: Date | null; deletedAt?: Date | null }) => ({
+    cautionUnsafe: unsafe.has(`${t}:${p.id}`),
+    hiddenAt: p.hiddenAt?.toISOString() ?? null,
+    deletedAt: p.deletedAt?.toISOString() ?? null,
   });
   const marked = new Set(marks.map((m) => `${m.postType}:${m.postId}`));
   const edits = new Map((revisionCounts as unknown as { postType: string; postId: number; count: number }[]).map((r) => [`${r.postType}:${r.postId}`, Number(r.count)]));
@@ -114,6 +137,7 @@ export async function loadThread(id: number, viewerId: number | null): Promise<T
         photos: photoView((a as unknown as { photos?: never[] }).photos),
         createdAt: a.createdAt.toISOString(),
         edited: edited('answer', a.id),
+        ...modState('answer', a),
       };
     })
     .sort((x, y) => Number(y.fixed) - Number(x.fixed) || y.helpfulCount - x.helpfulCount || x.createdAt.localeCompare(y.createdAt));
@@ -143,9 +167,12 @@ export async function loadThread(id: number, viewerId: number | null): Promise<T
       markedByViewer: marked.has(`reply:${r.id}`),
       createdAt: r.createdAt.toISOString(),
       edited: edited('reply', r.id),
+      ...modState('reply', r),
     })),
     createdAt: q.createdAt.toISOString(),
     edited: edited('question', q.id),
+    ...modState('question', q),
+    lockedAt: q.lockedAt?.toISOString() ?? null,
   };
 }
 

@@ -2,6 +2,23 @@ import { apiError, serverError } from './errors';
 import { currentUser, type SessionUser } from '@/lib/auth/session';
 import { can, POLICY, REFUSAL, type Action } from '@/lib/auth/policy';
 import { ForumError } from '@/lib/forum/errors';
+import { clientIp, limitMessage, spend, type LimitName } from '@/lib/auth/rate-limit';
+
+/** Members younger than this are "new": fewer posts an hour and fewer links a post. */
+export const NEW_MEMBER_DAYS = 7;
+export const NEW_MEMBER_MAX_LINKS = 2;
+
+/** Actions a suspended member cannot take. */
+const WRITES = new Set<Action>(['calculation.save', 'question.ask', 'question.edit', 'answer.post', 'answer.edit', 'reply.post', 'reply.edit', 'post.markHelpful', 'question.markFixed', 'post.flag', 'photo.upload', 'expertApplication.submit']);
+
+export function isNewMember(user: SessionUser, now = Date.now()): boolean {
+  return now - user.memberSince.getTime() < NEW_MEMBER_DAYS * 86_400_000;
+}
+
+/** Links in a Markdown text: bare URLs and [text](url). */
+export function countLinks(text: string): number {
+  return (text.match(/https?:\/\/[^\s)]+/g) ?? []).length;
+}
 
 /**
  * The common shape of a write: who is asking (401 when signed out), may their role
@@ -9,7 +26,12 @@ import { ForumError } from '@/lib/forum/errors';
  * ForumError turned into its status and field. 'own' rules are checked again by the
  * work itself once it knows the owner.
  */
-export async function guarded(request: Request, action: Action, work: (user: SessionUser) => Promise<Response>): Promise<Response> {
+export async function guarded(
+  request: Request,
+  action: Action,
+  work: (user: SessionUser) => Promise<Response>,
+  options: { flood?: 'post' | 'flag' } = {},
+): Promise<Response> {
   let user: SessionUser | null;
   try {
     user = await currentUser(request);
@@ -19,6 +41,22 @@ export async function guarded(request: Request, action: Action, work: (user: Ses
   if (!user) return apiError(401, REFUSAL[action], undefined, 'unauthenticated');
   const rule = POLICY[action][user.role];
   if (!(rule === 'own' || can(user, action))) return apiError(403, REFUSAL[action], undefined, 'forbidden');
+  if (WRITES.has(action) && user.suspendedUntil && user.suspendedUntil.getTime() > Date.now()) {
+    return apiError(403, `Your account is suspended until ${user.suspendedUntil.toUTCString().slice(5, 16)}. See your notices in Settings for the reason.`, undefined, 'suspended');
+  }
+  if (options.flood) {
+    const ip = clientIp(request.headers);
+    const checks: [LimitName, string][] =
+      options.flood === 'flag'
+        ? [['flagIp', ip], ['flagAccount', String(user.id)]]
+        : [['postIp', ip], [isNewMember(user) ? 'postNewAccount' : 'postAccount', String(user.id)]];
+    try {
+      const limited = await spend(checks);
+      if (!limited.ok) return apiError(429, limitMessage(limited.retryAfterS), undefined, 'rate_limited');
+    } catch (err) {
+      return serverError(err);
+    }
+  }
   try {
     return await work(user);
   } catch (err) {

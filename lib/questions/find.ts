@@ -10,7 +10,7 @@ export async function findQuestionsByText(text: string, limit = 20) {
   const like = `%${text.replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
   const rows = await Question.findAll({
     attributes: ['id', 'title', 'answerCount', 'createdAt'],
-    where: { [Op.or]: [{ title: { [Op.like]: like } }, { body: { [Op.like]: like } }] },
+    where: { hiddenAt: null, deletedAt: null, [Op.or]: [{ title: { [Op.like]: like } }, { body: { [Op.like]: like } }] },
     order: [['createdAt', 'DESC']],
     limit,
   });

@@ -55,7 +55,8 @@ async function filterWhere(filter: ListFilter): Promise<WhereOptions> {
 /** Newest questions first, one page at a time (index questions_created_at_id), optionally filtered. */
 export async function listQuestions({ page, perPage }: Pagination, filter: ListFilter = { kind: 'newest' }): Promise<QuestionPage> {
   const { Question, User, Tag } = initModels();
-  const where = await filterWhere(filter);
+  // hidden and deleted questions never appear in lists
+  const where = { ...(await filterWhere(filter)), hiddenAt: null, deletedAt: null } as WhereOptions;
   const total = await Question.count({ where });
   const ids = await Question.findAll({
     where,

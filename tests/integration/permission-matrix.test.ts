@@ -74,6 +74,10 @@ const SAMPLES: Record<string, (ids: Record<string, number>) => Sample> = {
   'PUT /api/replies/[id]': (ids) => ({ params: { id: String(ids.ownerReply) }, body: { body: 'Thanks, that did it.' } }),
   'POST /api/helpful': (ids) => ({ body: { postType: 'question', postId: ids.otherQuestion } }),
   'DELETE /api/helpful': (ids) => ({ body: { postType: 'question', postId: ids.otherQuestion } }),
+  'POST /api/flags': (ids) => ({ body: { postType: 'answer', postId: ids.flagTarget, reason: 'spam' } }),
+  'GET /api/review': () => ({}),
+  'POST /api/review/actions': (ids) => ({ body: { action: 'warn', postType: 'answer', postId: ids.ownerAnswer, reason: 'checking the matrix' } }),
+  'GET /api/admin/audit': () => ({}),
 };
 
 /** Routes that only ever act on the caller's own account: every signed-in persona is the owner. */
@@ -126,6 +130,8 @@ describe('permission matrix: every API route × every persona, against the polic
     ids.ownerQuestion = (await Question.findOne({ where: { authorId: ids.owner } }))!.id;
     ids.ownerAnswer = (await Answer.findOne({ where: { authorId: ids.owner } }))!.id;
     ids.otherQuestion = (await Question.findOne({ where: { authorId: cabin } }))!.id;
+    const quarry = (await User.findOne({ where: { handle: 'quarry_lane_valves' } }))!.id;
+    ids.flagTarget = (await Answer.findOne({ where: { authorId: quarry } }))!.id;
     ids.ownerReply = (await Reply.create({ questionId: ids.otherQuestion, parentType: 'question', answerId: null, replyToId: null, authorId: ids.owner, body: 'A first reply.' })).id;
     const failures: string[] = [];
     for (const h of handlers) {

@@ -17,7 +17,7 @@ export async function GET(request: NextRequest, { params }: Ctx) {
   if (!id) return apiError(400, 'id must be a question number', 'id');
   try {
     const viewer = await currentUser(request);
-    return NextResponse.json(await loadThread(id, viewer?.id ?? null));
+    return NextResponse.json(await loadThread(id, viewer));
   } catch (err) {
     if (err instanceof ForumError) return apiError(err.status, err.message, err.field);
     return serverError(err);

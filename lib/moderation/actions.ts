@@ -1,0 +1,100 @@
+import { Op } from 'sequelize';
+import { getSequelize } from '@/lib/db';
+import { initModels } from '@/models';
+import { ForumError } from '@/lib/forum/errors';
+import type { SessionUser } from '@/lib/auth/session';
+import { recordAudit } from './audit';
+import { loadPost, type ModeratedType } from './posts';
+
+export const MODERATION_ACTIONS = ['dismiss', 'hide', 'restore', 'delete', 'lock', 'unlock', 'retag', 'warn', 'suspend'] as const;
+export type ModerationAction = (typeof MODERATION_ACTIONS)[number];
+
+const WORDS: Record<ModerationAction, string> = {
+  dismiss: 'The flags on your post were reviewed and dismissed',
+  hide: 'A moderator hid your post',
+  restore: 'A moderator restored your post',
+  delete: 'A moderator removed your post',
+  lock: 'A moderator locked your thread',
+  unlock: 'A moderator unlocked your thread',
+  retag: 'A moderator changed the tags on your question',
+  warn: 'A moderator warned you about a post',
+  suspend: 'A moderator suspended your account',
+};
+
+/**
+ * Takes one moderation action. The change, the flags it settles, its audit row and
+ * the author's notice are one transaction: no action without its audit row.
+ */
+export async function moderate(
+  moderator: SessionUser,
+  input: { action: ModerationAction; postType: ModeratedType; postId: number; reason: string; tags?: string[]; until?: string },
+) {
+  const { Flag, Question, QuestionTag, Tag, User, Notice } = initModels();
+  return getSequelize().transaction(async (transaction) => {
+    const { post, questionId } = await loadPost(input.postType, input.postId, transaction);
+    if (post.authorId === moderator.id) throw new ForumError(403, 'Moderators cannot act on their own posts.');
+    const ownFlag = await Flag.findOne({ where: { postType: input.postType, postId: input.postId, flaggerId: moderator.id, status: 'open' }, transaction });
+    if (ownFlag) throw new ForumError(403, 'Moderators cannot act on a post they flagged themselves; another moderator will.');
+    const now = new Date();
+    const details: Record<string, unknown> = { questionId };
+    const settleFlags = (status: 'dismissed' | 'upheld') =>
+      Flag.update({ status, resolvedBy: moderator.id, resolvedAt: now }, { where: { postType: input.postType, postId: input.postId, status: 'open' }, transaction });
+
+    switch (input.action) {
+      case 'dismiss':
+        await settleFlags('dismissed');
+        if (post.hiddenAt && /pending review/.test(post.hiddenReason ?? '')) await post.update({ hiddenAt: null, hiddenReason: null }, { transaction });
+        break;
+      case 'hide':
+        await post.update({ hiddenAt: now, hiddenReason: input.reason }, { transaction });
+        await settleFlags('upheld');
+        break;
+      case 'restore':
+        await post.update({ hiddenAt: null, hiddenReason: null, deletedAt: null }, { transaction });
+        await settleFlags('dismissed');
+        break;
+      case 'delete':
+        await post.update({ deletedAt: now }, { transaction });
+        await settleFlags('upheld');
+        break;
+      case 'lock':
+      case 'unlock': {
+        if (input.postType !== 'question') throw new ForumError(422, 'postType: only a question’s thread can be locked', 'postType');
+        await Question.update({ lockedAt: input.action === 'lock' ? now : null }, { where: { id: input.postId }, transaction });
+        break;
+      }
+      case 'retag': {
+        if (input.postType !== 'question') throw new ForumError(422, 'postType: only questions have tags', 'postType');
+        const slugs = [...new Set(input.tags ?? [])];
+        if (slugs.length < 1 || slugs.length > 5) throw new ForumError(422, 'tags: choose one to five', 'tags');
+        const tags = await Tag.findAll({ where: { slug: { [Op.in]: slugs } }, transaction });
+        if (tags.length !== slugs.length) throw new ForumError(422, 'tags: one of these is not a tag', 'tags');
+        const before = await QuestionTag.findAll({ where: { questionId: input.postId }, transaction });
+        details.tagsBefore = before.map((t) => t.tagId);
+        await QuestionTag.destroy({ where: { questionId: input.postId }, transaction });
+        await QuestionTag.bulkCreate(tags.map((t) => ({ questionId: input.postId, tagId: t.id })), { transaction });
+        details.tags = slugs;
+        break;
+      }
+      case 'warn':
+        break;
+      case 'suspend': {
+        const until = input.until ? new Date(`${input.until}T23:59:59Z`) : null;
+        if (!until || Number.isNaN(until.getTime()) || until <= now) throw new ForumError(422, 'until: the suspension must end on a date after today', 'until');
+        await User.update({ suspendedUntil: until }, { where: { id: post.authorId }, transaction });
+        details.until = until.toISOString();
+        break;
+      }
+    }
+    const audit = await recordAudit(
+      { actorId: moderator.id, action: input.action, targetType: input.action === 'warn' || input.action === 'suspend' ? 'member' : input.postType, targetId: input.action === 'warn' || input.action === 'suspend' ? post.authorId : input.postId, reason: input.reason, details: { ...details, postType: input.postType, postId: input.postId } },
+      transaction,
+    );
+    const untilWords = input.action === 'suspend' ? ` until ${new Date(details.until as string).toUTCString().slice(5, 16)}` : '';
+    await Notice.create(
+      { userId: post.authorId, kind: 'moderation', message: `${WORDS[input.action]}${untilWords}. Reason: ${input.reason}`, link: `/questions/${questionId}`, readAt: null },
+      { transaction },
+    );
+    return { auditId: audit.id };
+  });
+}

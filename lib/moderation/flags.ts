@@ -1,0 +1,39 @@
+import { getSequelize } from '@/lib/db';
+import { initModels } from '@/models';
+import { ForumError } from '@/lib/forum/errors';
+import type { SessionUser } from '@/lib/auth/session';
+import type { FlagReason } from '@/models/Flag';
+import { recordAudit } from './audit';
+import { loadPost, type ModeratedType } from './posts';
+
+/** Open flags that hide a post pending review; FLAG_HIDE_THRESHOLD overrides it. */
+export function hideThreshold(): number {
+  const n = Number(process.env.FLAG_HIDE_THRESHOLD ?? 3);
+  return Number.isInteger(n) && n > 0 ? n : 3;
+}
+
+/**
+ * One open flag per member per post. A post reaching the threshold of open flags,
+ * or flagged unsafe by an expert, is hidden pending review — in the same
+ * transaction, with its audit row.
+ */
+export async function flagPost(user: SessionUser, input: { postType: ModeratedType; postId: number; reason: FlagReason; note?: string }) {
+  const { Flag } = initModels();
+  return getSequelize().transaction(async (transaction) => {
+    const { post } = await loadPost(input.postType, input.postId, transaction);
+    if (post.authorId === user.id) throw new ForumError(403, 'You cannot flag your own post.');
+    const mine = await Flag.findOne({ where: { postType: input.postType, postId: input.postId, flaggerId: user.id, status: 'open' }, transaction });
+    if (mine) throw new ForumError(409, 'You have already flagged this post; a moderator will look at it.');
+    const flag = await Flag.create({ postType: input.postType, postId: input.postId, flaggerId: user.id, reason: input.reason, note: input.note ?? null }, { transaction });
+    const open = await Flag.count({ where: { postType: input.postType, postId: input.postId, status: 'open' }, transaction });
+    const byExpert = input.reason === 'unsafe' && user.role === 'expert';
+    let hidden = false;
+    if (!post.hiddenAt && !post.deletedAt && (open >= hideThreshold() || byExpert)) {
+      const why = byExpert ? 'flagged as unsafe advice by an expert; hidden pending review' : `${open} flags; hidden pending review`;
+      await post.update({ hiddenAt: new Date(), hiddenReason: why }, { transaction });
+      await recordAudit({ actorId: null, action: 'auto-hide', targetType: input.postType, targetId: input.postId, reason: why, details: { flagId: flag.id, openFlags: open } }, transaction);
+      hidden = true;
+    }
+    return { flagId: flag.id, hidden };
+  });
+}

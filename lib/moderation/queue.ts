@@ -1,0 +1,47 @@
+import { Op } from 'sequelize';
+import { initModels } from '@/models';
+import type { FlagReason } from '@/models/Flag';
+
+/** Posts with open flags, oldest flag first, each with its context, the flaggers' notes and its revisions. */
+export async function reviewQueue(filter: { reason?: FlagReason; olderThanHours?: number }) {
+  const { Flag, User, Question, Answer, Reply, Revision, Tag } = initModels();
+  const where: Record<string | symbol, unknown> = { status: 'open', postType: { [Op.in]: ['question', 'answer', 'reply'] } };
+  if (filter.reason) where.reason = filter.reason;
+  if (filter.olderThanHours) where.createdAt = { [Op.lte]: new Date(Date.now() - filter.olderThanHours * 3_600_000) };
+  const flags = await Flag.findAll({ where, include: [{ model: User, as: 'flagger', attributes: ['handle', 'displayName', 'role'] }], order: [['createdAt', 'ASC']], limit: 500 });
+  const groups = new Map<string, typeof flags>();
+  for (const f of flags) {
+    const k = `${f.postType}:${f.postId}`;
+    groups.set(k, [...(groups.get(k) ?? []), f]);
+  }
+  const items = [];
+  for (const [k, fs] of groups) {
+    const [type, idText] = k.split(':') as ['question' | 'answer' | 'reply', string];
+    const id = Number(idText);
+    const model = { question: Question, answer: Answer, reply: Reply }[type] as unknown as typeof Answer;
+    const post = (await model.findByPk(id, { include: [{ model: User, as: 'author', attributes: ['id', 'handle', 'displayName'] }] })) as unknown as {
+      id: number; body: string; questionId?: number; hiddenAt: Date | null; deletedAt: Date | null; createdAt: Date; author?: { id: number; handle: string; displayName: string };
+    } | null;
+    if (!post) continue;
+    const questionId = type === 'question' ? post.id : (post.questionId as number);
+    const q = await Question.findByPk(questionId, { attributes: ['id', 'title'], include: [{ model: Tag, as: 'tags', attributes: ['slug'], through: { attributes: [] } }] });
+    const revisions = await Revision.findAll({ where: { postType: type, postId: id }, include: [{ model: User, as: 'editor', attributes: ['displayName'] }], order: [['createdAt', 'ASC']] });
+    items.push({
+      post: {
+        type,
+        id,
+        questionId,
+        questionTitle: q?.title ?? '',
+        body: post.body,
+        author: post.author ? { id: post.author.id, handle: post.author.handle, displayName: post.author.displayName } : null,
+        hiddenAt: post.hiddenAt?.toISOString() ?? null,
+        deletedAt: post.deletedAt?.toISOString() ?? null,
+        createdAt: post.createdAt.toISOString(),
+        tags: (q?.tags ?? []).map((t) => t.slug),
+      },
+      flags: fs.map((f) => ({ id: f.id, reason: f.reason, note: f.note, flagger: { handle: f.flagger?.handle ?? '', displayName: f.flagger?.displayName ?? '', role: f.flagger?.role ?? 'member' }, createdAt: f.createdAt.toISOString() })),
+      revisions: revisions.map((r) => ({ body: r.body, at: r.createdAt.toISOString(), editor: r.editor?.displayName ?? 'unknown' })),
+    });
+  }
+  return { items };
+}
