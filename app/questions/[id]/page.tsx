@@ -15,9 +15,9 @@ import { Caution } from '@/components/Caution';
 
 type Params = Promise<{ id: string }>;
 
-async function load(id: number, viewerId: number | null): Promise<ThreadView | null> {
+async function load(id: number, viewer: Awaited<ReturnType<typeof currentUserInPage>>): Promise<ThreadView | null> {
   try {
-    return await loadThread(id, viewerId);
+    return await loadThread(id, viewer);
   } catch (err) {
     if (err instanceof ForumError && err.status === 404) return null;
     throw err;
@@ -37,7 +37,7 @@ export default async function QuestionPage({ params }: { params: Params }) {
   let viewer: Awaited<ReturnType<typeof currentUserInPage>>;
   try {
     viewer = await currentUserInPage();
-    thread = await load(id, viewer?.id ?? null);
+    thread = await load(id, viewer);
   } catch (err) {
     if (isDatabaseUnavailable(err)) return <ServiceUnavailable what="this question" />;
     throw err;
