@@ -11,6 +11,8 @@ import { PhotoGallery } from '@/components/photos/PhotoGallery';
 import { EditBody, HelpfulButton, RevisionHistory } from './PostControls';
 import { AnswerComposer, ReplyComposer } from './AnswerComposer';
 import { call } from './api';
+import { FlagButton } from '@/components/moderation/FlagButton';
+import { PostMarks } from '@/components/moderation/PostMarks';
 
 type Viewer = { id: number; handle: string; role: 'member' | 'expert' | 'moderator' | 'admin' } | null;
 const fetcher = (url: string) => fetch(url).then((r) => (r.ok ? r.json() : Promise.reject(new Error(String(r.status)))));
@@ -47,7 +49,13 @@ export function Thread({ initial, viewer }: { initial: ThreadView; viewer: Viewe
 
   return (
     <div className="flex flex-col gap-6">
+      {t.lockedAt ? (
+        <p role="status" className="cw-card font-sans text-sm font-semibold">
+          This thread is locked: it takes no new answers or replies.
+        </p>
+      ) : null}
       <section aria-label="The question" className="flex flex-col gap-3">
+        <PostMarks post={t} kind="question" />
         <MemberText>{t.body}</MemberText>
         {t.photos.length ? <PhotoGallery photos={t.photos} /> : null}
         <div className="flex flex-wrap items-center gap-3">
@@ -76,9 +84,10 @@ export function Thread({ initial, viewer }: { initial: ThreadView; viewer: Viewe
             <EditBody url={key} initial={t.body} onSaved={refresh} extra={{ title: t.title, tags: t.tags.map((x) => x.slug), siteSheet: t.siteSheet ?? undefined }} />
           ) : null}
           {t.edited ? <RevisionHistory questionId={t.id} postType="question" postId={t.id} /> : null}
+          {viewer && viewer.id !== t.author.id ? <FlagButton postType="question" postId={t.id} onFlagged={refresh} /> : null}
         </div>
-        <Replies items={repliesUnder(null)} viewer={viewer} questionId={t.id} answerId={null} onChange={refresh} />
-        {viewer ? <ReplyComposer questionId={t.id} onPosted={refresh} label="Reply to the question" /> : null}
+        <Replies items={repliesUnder(null)} viewer={viewer} locked={!!t.lockedAt} questionId={t.id} answerId={null} onChange={refresh} />
+        {viewer && !t.lockedAt ? <ReplyComposer questionId={t.id} onPosted={refresh} label="Reply to the question" /> : null}
       </section>
 
       <section aria-label="Answers" className="flex flex-col gap-4">
@@ -90,7 +99,7 @@ export function Thread({ initial, viewer }: { initial: ThreadView; viewer: Viewe
         ))}
       </section>
 
-      {viewer ? (
+      {t.lockedAt ? null : viewer ? (
         <AnswerComposer questionId={t.id} siteSheet={t.siteSheet} onPosted={refresh} />
       ) : (
         <p className="cw-card">
@@ -124,6 +133,7 @@ function Answer({
   return (
     <article className={`cw-card flex flex-col gap-3 ${a.fixed ? 'border-2 border-moss' : ''}`} data-answer={a.id} aria-label={`Answer by ${a.author.displayName}`}>
       {a.fixed ? <p className="self-start rounded bg-moss px-2 py-0.5 text-xs font-semibold text-limestone-50">fixed it</p> : null}
+      <PostMarks post={a} kind="answer" />
       <MemberText>{a.body}</MemberText>
       {a.photos.length ? <PhotoGallery photos={a.photos} /> : null}
       {a.calculation ? (
@@ -164,14 +174,29 @@ function Answer({
         ) : null}
         {can(viewer, 'answer.edit', viewer && a.author.handle === viewer.handle ? viewer.id : -1) ? <EditBody url={`/api/answers/${a.id}`} initial={a.body} onSaved={onChange} /> : null}
         {a.edited ? <RevisionHistory questionId={t.id} postType="answer" postId={a.id} /> : null}
+        {viewer && viewer.handle !== a.author.handle ? <FlagButton postType="answer" postId={a.id} onFlagged={onChange} /> : null}
       </div>
-      <Replies items={replies} viewer={viewer} questionId={t.id} answerId={a.id} onChange={onChange} />
-      {viewer ? <ReplyComposer questionId={t.id} answerId={a.id} onPosted={onChange} label="Reply to this answer" /> : null}
+      <Replies items={replies} viewer={viewer} locked={!!t.lockedAt} questionId={t.id} answerId={a.id} onChange={onChange} />
+      {viewer && !t.lockedAt ? <ReplyComposer questionId={t.id} answerId={a.id} onPosted={onChange} label="Reply to this answer" /> : null}
     </article>
   );
 }
 
-function Replies({ items, viewer, questionId, answerId, onChange }: { items: ReplyView[]; viewer: Viewer; questionId: number; answerId: number | null; onChange: () => void }) {
+function Replies({
+  items,
+  viewer,
+  locked,
+  questionId,
+  answerId,
+  onChange,
+}: {
+  items: ReplyView[];
+  viewer: Viewer;
+  locked: boolean;
+  questionId: number;
+  answerId: number | null;
+  onChange: () => void;
+}) {
   const children = (parent: number | null) => items.filter((r) => r.replyToId === parent);
   const render = (parent: number | null) => {
     const list = children(parent);
@@ -180,12 +205,14 @@ function Replies({ items, viewer, questionId, answerId, onChange }: { items: Rep
       <ul className={`flex flex-col gap-2 ${parent === null ? '' : 'ml-4 border-l border-limestone-300 pl-3 dark:border-creek-600'}`}>
         {list.map((r) => (
           <li key={r.id} data-reply={r.id} data-depth={r.depth} className="text-sm">
+            <PostMarks post={r} kind="reply" />
             <MemberText>{r.body}</MemberText>
             <div className="flex flex-wrap items-center gap-3">
               <Byline person={r.author} at={r.createdAt} />
               {viewer && viewer.handle === r.author.handle ? <EditBody url={`/api/replies/${r.id}`} initial={r.body} onSaved={onChange} /> : null}
-              {viewer ? <ReplyComposer questionId={questionId} answerId={answerId} replyToId={r.id} onPosted={onChange} /> : null}
+              {viewer && !locked ? <ReplyComposer questionId={questionId} answerId={answerId} replyToId={r.id} onPosted={onChange} /> : null}
               {r.edited ? <RevisionHistory questionId={questionId} postType="reply" postId={r.id} /> : null}
+              {viewer && viewer.handle !== r.author.handle ? <FlagButton postType="reply" postId={r.id} onFlagged={onChange} /> : null}
             </div>
             {render(r.id)}
           </li>

@@ -1,0 +1,182 @@
+import type { Metadata } from 'next';
+import Link from 'next/link';
+import { currentUserInPage } from '@/lib/auth/session';
+import { can, REFUSAL } from '@/lib/auth/policy';
+import { isDatabaseUnavailable } from '@/lib/db/errors';
+import { auditFilterSchema } from '@/lib/validation/moderation';
+import { listAudit } from '@/lib/moderation/audit';
+import { ServiceUnavailable } from '@/components/ServiceUnavailable';
+import { AUDIT_ACTION_WORDS } from '@/components/moderation/words';
+import { inputClass, labelClass } from '@/components/forms/api';
+
+export const metadata: Metadata = { title: 'Audit log' };
+export const dynamic = 'force-dynamic';
+
+type Search = Promise<Record<string, string | string[] | undefined>>;
+type AuditPage = Awaited<ReturnType<typeof listAudit>>;
+type AuditItem = AuditPage['items'][number];
+
+const FIELDS = ['action', 'actor', 'from', 'to', 'page'] as const;
+const whenFmt = new Intl.DateTimeFormat('en', { day: 'numeric', month: 'short', year: 'numeric', hour: '2-digit', minute: '2-digit', timeZone: 'UTC', hour12: false });
+
+/** The query as typed: one value per field, blanks dropped (an empty GET form field means "any"). */
+function readQuery(raw: Record<string, string | string[] | undefined>) {
+  const out: Partial<Record<(typeof FIELDS)[number], string>> = {};
+  for (const f of FIELDS) {
+    const v = raw[f];
+    const s = (Array.isArray(v) ? v[0] : v)?.trim();
+    if (s) out[f] = s;
+  }
+  return out;
+}
+
+function Target({ item }: { item: AuditItem }) {
+  const details = (item.details ?? {}) as { questionId?: unknown };
+  const label = item.targetType === 'member' ? `member #${item.targetId}` : `${item.targetType} #${item.targetId}`;
+  return typeof details.questionId === 'number' ? (
+    <Link href={`/questions/${details.questionId}`} className="cw-link">
+      {label}
+    </Link>
+  ) : (
+    <>{label}</>
+  );
+}
+
+/** The audit log: every moderation action with who, when and why. Read-only, admins only. */
+export default async function AuditPage({ searchParams }: { searchParams: Search }) {
+  const query = readQuery(await searchParams);
+  const parsed = auditFilterSchema.safeParse(query);
+  const filter = parsed.success ? parsed.data : {};
+  const problem = parsed.success ? null : (parsed.error.issues[0]?.message ?? 'These filters could not be read.');
+
+  let data: AuditPage | null = null;
+  let signedIn = false;
+  try {
+    const user = await currentUserInPage();
+    signedIn = user !== null;
+    if (user && can(user, 'audit.read')) data = await listAudit(filter);
+  } catch (err) {
+    if (isDatabaseUnavailable(err)) return <ServiceUnavailable what="the audit log" />;
+    throw err;
+  }
+
+  if (!data) {
+    return (
+      <div className="flex max-w-2xl flex-col gap-4">
+        <h1 className="font-serif text-3xl font-semibold">Audit log</h1>
+        <p className="cw-card font-sans" role="alert">
+          {REFUSAL['audit.read']}{' '}
+          {signedIn ? null : (
+            <Link href="/sign-in?callbackUrl=/admin/audit" className="cw-link">
+              Sign in
+            </Link>
+          )}
+        </p>
+      </div>
+    );
+  }
+
+  const totalPages = Math.max(1, Math.ceil(data.total / data.perPage));
+  const pageLink = (page: number) => `/admin/audit?${new URLSearchParams({ ...query, page: String(page) })}`;
+
+  return (
+    <div className="flex flex-col gap-4">
+      <h1 className="font-serif text-3xl font-semibold">Audit log</h1>
+      <form method="get" action="/admin/audit" role="search" aria-label="Filter the audit log" className="cw-card flex flex-wrap items-end gap-4">
+        <div>
+          <label htmlFor="audit-action" className={labelClass}>
+            Action
+          </label>
+          <select id="audit-action" name="action" defaultValue={query.action ?? ''} className={inputClass}>
+            <option value="">any action</option>
+            {Object.entries(AUDIT_ACTION_WORDS).map(([value, words]) => (
+              <option key={value} value={value}>
+                {words}
+              </option>
+            ))}
+          </select>
+        </div>
+        <div>
+          <label htmlFor="audit-actor" className={labelClass}>
+            Moderator handle
+          </label>
+          <input id="audit-actor" name="actor" defaultValue={query.actor ?? ''} maxLength={40} className={inputClass} />
+        </div>
+        <div>
+          <label htmlFor="audit-from" className={labelClass}>
+            From
+          </label>
+          <input id="audit-from" name="from" type="date" defaultValue={query.from ?? ''} className={inputClass} />
+        </div>
+        <div>
+          <label htmlFor="audit-to" className={labelClass}>
+            To
+          </label>
+          <input id="audit-to" name="to" type="date" defaultValue={query.to ?? ''} className={inputClass} />
+        </div>
+        <button type="submit" className="cw-button">
+          Show
+        </button>
+      </form>
+      {problem ? (
+        <p role="alert" className="font-sans text-sm font-semibold text-clay-600 dark:text-clay-300">
+          {problem} Showing the whole log instead.
+        </p>
+      ) : null}
+      <p className="cw-muted font-sans text-sm">
+        {data.total === 0 ? 'Nothing recorded matches.' : `${data.total} ${data.total === 1 ? 'entry' : 'entries'}, newest first · page ${data.page} of ${totalPages}. Times are UTC.`}
+      </p>
+      {data.items.length ? (
+        <div className="cw-card overflow-x-auto p-0">
+          <table className="w-full font-sans text-sm">
+            <caption className="sr-only">Moderation actions</caption>
+            <thead>
+              <tr className="border-b border-limestone-300 text-left dark:border-creek-600">
+                <th scope="col" className="px-3 py-2">When</th>
+                <th scope="col" className="px-3 py-2">Who</th>
+                <th scope="col" className="px-3 py-2">Action</th>
+                <th scope="col" className="px-3 py-2">Target</th>
+                <th scope="col" className="px-3 py-2">Reason</th>
+              </tr>
+            </thead>
+            <tbody>
+              {data.items.map((item) => (
+                <tr key={item.id} className="border-b border-limestone-200 align-top last:border-0 dark:border-creek-700">
+                  <td className="cw-num whitespace-nowrap px-3 py-2">{whenFmt.format(new Date(item.at))}</td>
+                  <td className="px-3 py-2">
+                    {item.actor ? (
+                      <Link href={`/people/${item.actor.handle}`} className="cw-link">
+                        {item.actor.displayName}
+                      </Link>
+                    ) : (
+                      <span className="cw-muted">Clackwater (automatic)</span>
+                    )}
+                  </td>
+                  <td className="px-3 py-2">{AUDIT_ACTION_WORDS[item.action] ?? item.action}</td>
+                  <td className="whitespace-nowrap px-3 py-2">
+                    <Target item={item} />
+                  </td>
+                  <td className="px-3 py-2">{item.reason}</td>
+                </tr>
+              ))}
+            </tbody>
+          </table>
+        </div>
+      ) : null}
+      {totalPages > 1 ? (
+        <nav aria-label="Pages" className="flex gap-4 font-sans text-sm">
+          {data.page > 1 ? (
+            <Link href={pageLink(data.page - 1)} className="cw-link">
+              ← Newer
+            </Link>
+          ) : null}
+          {data.page < totalPages ? (
+            <Link href={pageLink(data.page + 1)} className="cw-link">
+              Older →
+            </Link>
+          ) : null}
+        </nav>
+      ) : null}
+    </div>
+  );
+}

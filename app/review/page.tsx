@@ -1,0 +1,52 @@
+import type { Metadata } from 'next';
+import Link from 'next/link';
+import { currentUserInPage, type SessionUser } from '@/lib/auth/session';
+import { can, REFUSAL } from '@/lib/auth/policy';
+import { isDatabaseUnavailable } from '@/lib/db/errors';
+import { ServiceUnavailable } from '@/components/ServiceUnavailable';
+import { ReviewQueue } from '@/components/moderation/ReviewQueue';
+
+export const metadata: Metadata = { title: 'Review queue' };
+export const dynamic = 'force-dynamic';
+
+/** The moderators' review queue; the list itself loads in the browser so it can refresh after each action. */
+export default async function ReviewPage() {
+  let user: SessionUser | null;
+  try {
+    user = await currentUserInPage();
+  } catch (err) {
+    if (isDatabaseUnavailable(err)) return <ServiceUnavailable what="the review queue" />;
+    throw err;
+  }
+
+  if (!user || !can(user, 'moderation.act')) {
+    return (
+      <div className="flex max-w-2xl flex-col gap-4">
+        <h1 className="font-serif text-3xl font-semibold">Review queue</h1>
+        <p className="cw-card font-sans" role="alert">
+          {REFUSAL['moderation.act']}{' '}
+          {user ? null : (
+            <Link href="/sign-in?callbackUrl=/review" className="cw-link">
+              Sign in
+            </Link>
+          )}
+        </p>
+      </div>
+    );
+  }
+
+  return (
+    <div className="flex flex-col gap-4">
+      <h1 className="font-serif text-3xl font-semibold">Review queue</h1>
+      <p className="cw-muted font-sans text-sm">
+        Posts members have flagged. Read each in its thread before acting; every action needs a reason, which the author
+        sees and the audit log keeps. Expert applications are under{' '}
+        <Link href="/review/experts" className="cw-link">
+          expert applications
+        </Link>
+        .
+      </p>
+      <ReviewQueue viewer={{ id: user.id, handle: user.handle }} />
+    </div>
+  );
+}

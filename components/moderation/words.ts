@@ -1,0 +1,41 @@
+/** The review queue's plain words, shared by the flag form, the queue and the audit log. */
+export type PostType = 'question' | 'answer' | 'reply';
+export type FlagReason = 'spam' | 'unsafe' | 'rude' | 'off-topic' | 'other';
+export type ModerationAction = 'dismiss' | 'hide' | 'restore' | 'delete' | 'lock' | 'unlock' | 'retag' | 'warn' | 'suspend';
+
+export const FLAG_REASON_WORDS: Record<FlagReason, string> = {
+  spam: 'spam',
+  unsafe: 'unsafe advice',
+  rude: 'rude',
+  'off-topic': 'off-topic',
+  other: 'other',
+};
+
+export const ACTION_WORDS: Record<ModerationAction, string> = {
+  dismiss: 'Dismiss the flags',
+  hide: 'Hide the post',
+  restore: 'Restore the post',
+  delete: 'Delete the post',
+  lock: 'Lock the thread',
+  unlock: 'Unlock the thread',
+  retag: 'Change the tags',
+  warn: 'Warn the author',
+  suspend: 'Suspend the author',
+};
+
+/** What the audit log calls each action it records, including the automatic hide. */
+export const AUDIT_ACTION_WORDS: Record<string, string> = {
+  dismiss: 'dismissed flags',
+  hide: 'hid',
+  restore: 'restored',
+  delete: 'deleted',
+  lock: 'locked',
+  unlock: 'unlocked',
+  retag: 'changed tags',
+  warn: 'warned',
+  suspend: 'suspended',
+  'auto-hide': 'hid automatically',
+};
+
+/** Actions that only make sense on a question (the thread as a whole). */
+export const QUESTION_ONLY: ModerationAction[] = ['lock', 'unlock', 'retag'];
