@@ -68,7 +68,7 @@ test('the guide index filters by level and tag', async ({ page }) => {
 
 test('a saved worked calculation recomputes with the current engine', async ({ page }) => {
   await page.goto('/calculations/FerncombeY1');
-  await expect(page.getByTestId('calc-unchanged')).toBeVisible();
+  await expect(page.locator('[data-testid="calc-unchanged"]:visible')).toBeVisible();
   await expect(page.locator('[data-calculator="yield-estimate"]')).toBeVisible();
 });
 
