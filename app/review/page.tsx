@@ -3,6 +3,7 @@ import Link from 'next/link';
 import { currentUserInPage, type SessionUser } from '@/lib/auth/session';
 import { can, REFUSAL } from '@/lib/auth/policy';
 import { isDatabaseUnavailable } from '@/lib/db/errors';
+import { Refused } from '@/components/account/Refused';
 import { ServiceUnavailable } from '@/components/ServiceUnavailable';
 import { ReviewQueue } from '@/components/moderation/ReviewQueue';
 
@@ -20,19 +21,7 @@ export default async function ReviewPage() {
   }
 
   if (!user || !can(user, 'moderation.act')) {
-    return (
-      <div className="flex max-w-2xl flex-col gap-4">
-        <h1 className="font-serif text-3xl font-semibold">Review queue</h1>
-        <p className="cw-card font-sans" role="alert">
-          {REFUSAL['moderation.act']}{' '}
-          {user ? null : (
-            <Link href="/sign-in?callbackUrl=/review" className="cw-link">
-              Sign in
-            </Link>
-          )}
-        </p>
-      </div>
-    );
+    return <Refused title="Review queue" message={REFUSAL['moderation.act']} signedIn={user !== null} signInTo="/review" />;
   }
 
   return (

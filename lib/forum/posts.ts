@@ -1,5 +1,6 @@
 import { Op, type Transaction } from 'sequelize';
 import { getSequelize } from '@/lib/db';
+import { parseQuantity } from '@/lib/hydraulics';
 import { initModels } from '@/models';
 import type { SessionUser } from '@/lib/auth/session';
 import { can, REFUSAL } from '@/lib/auth/policy';
@@ -194,7 +195,6 @@ export async function similarQuestions(tags: string[], fallM?: number, liftM?: n
     order: [['createdAt', 'DESC']],
     limit: 50,
   });
-  const { parseQuantity } = await import('@/lib/hydraulics');
   const read = (s: unknown) => {
     try {
       return typeof s === 'string' ? parseQuantity(s, 'length') : undefined;

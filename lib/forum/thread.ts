@@ -85,7 +85,7 @@ export async function loadThread(id: number, viewer: Actor | null): Promise<Thre
   // Hidden and deleted posts vanish for everyone but moderators.
   if (!q || (!seeHidden && (q.hiddenAt || q.deletedAt))) throw new ForumError(404, 'no such question', 'id');
   const visible = seeHidden ? {} : { hiddenAt: null, deletedAt: null };
-  const [answers, replies, marks, follow] = await Promise.all([
+  const [answers, replies, follow] = await Promise.all([
     Answer.findAll({
       where: { questionId: id, ...visible },
       include: [
@@ -95,22 +95,21 @@ export async function loadThread(id: number, viewer: Actor | null): Promise<Thre
       ],
     }),
     Reply.findAll({ where: { questionId: id, ...visible }, include: [{ model: User, as: 'author', attributes: ['handle', 'displayName', 'role'] }], order: [['createdAt', 'ASC'], ['id', 'ASC']] }),
-    viewerId ? HelpfulMark.findAll({ where: { userId: viewerId }, attributes: ['postType', 'postId'], limit: 5000 }) : Promise.resolve([]),
     viewerId ? QuestionFollow.findOne({ where: { questionId: id, userId: viewerId } }) : Promise.resolve(null),
   ]);
-  // How many revisions each post of this thread has: more than one means it was edited.
-  const revisionCounts = await Revision.count({
-    where: {
-      [Op.or]: [
-        { postType: 'question', postId: id },
-        ...(answers.length ? [{ postType: 'answer' as const, postId: answers.map((a) => a.id) }] : []),
-        ...(replies.length ? [{ postType: 'reply' as const, postId: replies.map((r) => r.id) }] : []),
-      ],
-    },
-    group: ['postType', 'postId'],
-  });
-  // An open "unsafe advice" flag shows readers a caution until a moderator reviews it.
-  const unsafeRows = await Flag.findAll({ where: { status: 'open', reason: 'unsafe', postType: ['question', 'answer', 'reply'] }, attributes: ['postType', 'postId'], limit: 2000 });
+  // Every per-post lookup below is for this thread's posts only.
+  const thisThread = [
+    { postType: 'question' as const, postId: id },
+    ...(answers.length ? [{ postType: 'answer' as const, postId: answers.map((a) => a.id) }] : []),
+    ...(replies.length ? [{ postType: 'reply' as const, postId: replies.map((r) => r.id) }] : []),
+  ];
+  const [revisionCounts, marks, unsafeRows] = await Promise.all([
+    // more than one revision means the post was edited
+    Revision.count({ where: { [Op.or]: thisThread }, group: ['postType', 'postId'] }),
+    viewerId ? HelpfulMark.findAll({ where: { userId: viewerId, [Op.or]: thisThread }, attributes: ['postType', 'postId'] }) : Promise.resolve([]),
+    // an open "unsafe advice" flag shows readers a caution until a moderator reviews it
+    Flag.findAll({ where: { status: 'open', reason: 'unsafe', [Op.or]: thisThread }, attributes: ['postType', 'postId'] }),
+  ]);
   const unsafe = new Set(unsafeRows.map((f) => `${f.postType}:${f.postId}`));
   const modState = (t: string, p: { id: number; hiddenAt?: Date | null; deletedAt?: Date | null }) => ({
     cautionUnsafe: unsafe.has(`${t}:${p.id}`),

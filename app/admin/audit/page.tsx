@@ -5,6 +5,7 @@ import { can, REFUSAL } from '@/lib/auth/policy';
 import { isDatabaseUnavailable } from '@/lib/db/errors';
 import { auditFilterSchema } from '@/lib/validation/moderation';
 import { listAudit } from '@/lib/moderation/audit';
+import { Refused } from '@/components/account/Refused';
 import { ServiceUnavailable } from '@/components/ServiceUnavailable';
 import { AUDIT_ACTION_WORDS } from '@/components/moderation/words';
 import { inputClass, labelClass } from '@/components/forms/api';
@@ -61,19 +62,7 @@ export default async function AuditPage({ searchParams }: { searchParams: Search
   }
 
   if (!data) {
-    return (
-      <div className="flex max-w-2xl flex-col gap-4">
-        <h1 className="font-serif text-3xl font-semibold">Audit log</h1>
-        <p className="cw-card font-sans" role="alert">
-          {REFUSAL['audit.read']}{' '}
-          {signedIn ? null : (
-            <Link href="/sign-in?callbackUrl=/admin/audit" className="cw-link">
-              Sign in
-            </Link>
-          )}
-        </p>
-      </div>
-    );
+    return <Refused title="Audit log" message={REFUSAL['audit.read']} signedIn={signedIn} signInTo="/admin/audit" />;
   }
 
   const totalPages = Math.max(1, Math.ceil(data.total / data.perPage));

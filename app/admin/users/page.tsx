@@ -4,6 +4,7 @@ import { currentUserInPage } from '@/lib/auth/session';
 import { can, REFUSAL } from '@/lib/auth/policy';
 import { isDatabaseUnavailable } from '@/lib/db/errors';
 import { listMembersPage } from '@/lib/accounts/roles';
+import { Refused } from '@/components/account/Refused';
 import { ServiceUnavailable } from '@/components/ServiceUnavailable';
 import { RolePicker } from './RolePicker';
 
@@ -31,14 +32,7 @@ export default async function AdminUsersPage({ searchParams }: { searchParams: P
   }
 
   if (!data) {
-    return (
-      <div className="flex max-w-2xl flex-col gap-4">
-        <h1 className="font-serif text-3xl font-semibold">Members and roles</h1>
-        <p className="cw-card font-sans" role="alert">
-          {REFUSAL['user.changeRole']}
-        </p>
-      </div>
-    );
+    return <Refused title="Members and roles" message={REFUSAL['user.changeRole']} signedIn={true} />;
   }
 
   return (

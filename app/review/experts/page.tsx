@@ -4,6 +4,7 @@ import { currentUserInPage } from '@/lib/auth/session';
 import { can, REFUSAL } from '@/lib/auth/policy';
 import { isDatabaseUnavailable } from '@/lib/db/errors';
 import { listPendingApplications, type PendingApplicationView } from '@/lib/accounts/roles';
+import { Refused } from '@/components/account/Refused';
 import { ServiceUnavailable } from '@/components/ServiceUnavailable';
 import { DecisionForm } from './DecisionForm';
 
@@ -29,19 +30,7 @@ export default async function ReviewExpertsPage() {
   }
 
   if (!applications) {
-    return (
-      <div className="flex max-w-2xl flex-col gap-4">
-        <h1 className="font-serif text-3xl font-semibold">Expert applications</h1>
-        <p className="cw-card font-sans" role="alert">
-          {REFUSAL['expertApplication.decide']}{' '}
-          {signedIn ? null : (
-            <Link href="/sign-in?callbackUrl=/review/experts" className="cw-link">
-              Sign in
-            </Link>
-          )}
-        </p>
-      </div>
-    );
+    return <Refused title="Expert applications" message={REFUSAL['expertApplication.decide']} signedIn={signedIn} signInTo="/review/experts" />;
   }
 
   return (
