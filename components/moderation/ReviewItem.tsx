@@ -18,6 +18,8 @@ export interface ReviewItemView {
     deletedAt: string | null;
     createdAt: string;
     tags?: string[];
+    /** a flagged photo's public id: the queue shows it even while hidden */
+    photoId?: string | null;
   };
   flags: { id: number; reason: FlagReason; note: string | null; flagger: { handle: string; displayName: string; role: string }; createdAt: string }[];
   revisions: { body: string; at: string; editor: string }[];
@@ -31,7 +33,7 @@ export function ReviewItem({ item, viewer, onDone }: { item: ReviewItemView; vie
   const authorName = post.author?.displayName ?? 'a removed member';
   const own = post.author?.id === viewer.id;
   const flaggedByMe = flags.some((f) => f.flagger.handle === viewer.handle);
-  const where = post.type === 'question' ? 'Question' : post.type === 'answer' ? 'Answer on' : 'Reply on';
+  const where = { question: 'Question', answer: 'Answer on', reply: 'Reply on', photo: 'Photo on' }[post.type];
 
   return (
     <article className="cw-card flex flex-col gap-3" aria-label={`Flagged ${post.type} by ${authorName}`} data-review-item={`${post.type}:${post.id}`}>
@@ -62,7 +64,16 @@ export function ReviewItem({ item, viewer, onDone }: { item: ReviewItemView; vie
       </header>
 
       <section aria-label="The post" className="rounded-md border-l-4 border-limestone-300 pl-3 dark:border-creek-600">
-        <MemberText>{post.body}</MemberText>
+        {post.photoId ? (
+          <figure className="flex flex-col gap-1">
+            {/* moderators are served hidden photos too */}
+            {/* eslint-disable-next-line @next/next/no-img-element */}
+            <img src={`/api/photos/${post.photoId}`} alt={post.body || 'the flagged photo'} className="max-h-80 w-auto max-w-full rounded-md object-contain" />
+            <figcaption className="cw-muted font-sans text-xs">{post.body ? `Description: ${post.body}` : 'No description given.'}</figcaption>
+          </figure>
+        ) : (
+          <MemberText>{post.body}</MemberText>
+        )}
       </section>
 
       <section aria-label="Flags" className="font-sans text-sm">

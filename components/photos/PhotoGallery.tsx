@@ -1,12 +1,17 @@
 'use client';
 
 import { useCallback, useEffect, useRef, useState } from 'react';
+import { FlagButton } from '@/components/moderation/FlagButton';
 
 export interface GalleryPhoto {
   id: string;
   alt?: string | null;
   width?: number;
   height?: number;
+  /** the number a flag names; without it the photo cannot be flagged */
+  ref?: number;
+  /** shown to moderators only: the photo is hidden or deleted for readers */
+  hidden?: boolean;
 }
 
 const thumbUrl = (id: string) => `/api/photos/${id}/thumb`;
@@ -17,7 +22,7 @@ const webUrl = (id: string) => `/api/photos/${id}`;
  * viewer is a native modal <dialog>: it keeps focus inside, closes on Esc and
  * returns focus to the thumbnail. Arrow keys and buttons step through the photos.
  */
-export function PhotoGallery({ photos, label = 'Photos' }: { photos: GalleryPhoto[]; label?: string }) {
+export function PhotoGallery({ photos, label = 'Photos', canFlag = false }: { photos: GalleryPhoto[]; label?: string; canFlag?: boolean }) {
   const dialog = useRef<HTMLDialogElement>(null);
   const [open, setOpen] = useState<number | null>(null);
   const count = photos.length;
@@ -56,8 +61,9 @@ export function PhotoGallery({ photos, label = 'Photos' }: { photos: GalleryPhot
             <button type="button" onClick={() => show(i)} className="block rounded-md border border-limestone-300 hover:border-clay dark:border-creek-600" aria-label={`Open ${describe(p, i)}`}>
               {/* our own route serves a sized WebP already; next/image would re-encode it */}
               {/* eslint-disable-next-line @next/next/no-img-element */}
-              <img src={thumbUrl(p.id)} alt="" loading="lazy" className="h-24 w-24 rounded-md object-cover" />
+              <img src={thumbUrl(p.id)} alt="" loading="lazy" className={`h-24 w-24 rounded-md object-cover ${p.hidden ? 'opacity-50' : ''}`} />
             </button>
+            {p.hidden ? <span className="block text-center font-sans text-xs font-semibold">hidden</span> : null}
           </li>
         ))}
       </ul>
@@ -81,7 +87,8 @@ export function PhotoGallery({ photos, label = 'Photos' }: { photos: GalleryPhot
                 {current.alt ? `${current.alt} — ` : ''}
                 {open + 1} of {count}
               </span>
-              <span className="flex gap-2">
+              <span className="flex flex-wrap items-start gap-2">
+                {canFlag && current.ref ? <FlagButton key={current.id} postType="photo" postId={current.ref} /> : null}
                 {count > 1 ? (
                   <>
                     <button type="button" className="cw-button" onClick={() => step(-1)}>

@@ -57,7 +57,7 @@ export function Thread({ initial, viewer }: { initial: ThreadView; viewer: Viewe
       <section aria-label="The question" className="flex flex-col gap-3">
         <PostMarks post={t} kind="question" />
         <MemberText>{t.body}</MemberText>
-        {t.photos.length ? <PhotoGallery photos={t.photos} /> : null}
+        {t.photos.length ? <PhotoGallery photos={t.photos} canFlag={!!viewer && viewer.id !== t.author.id} /> : null}
         <div className="flex flex-wrap items-center gap-3">
           <Byline person={t.author} at={t.createdAt} />
           <HelpfulButton
@@ -135,7 +135,7 @@ function Answer({
       {a.fixed ? <p className="self-start rounded bg-moss px-2 py-0.5 text-xs font-semibold text-limestone-50">fixed it</p> : null}
       <PostMarks post={a} kind="answer" />
       <MemberText>{a.body}</MemberText>
-      {a.photos.length ? <PhotoGallery photos={a.photos} /> : null}
+      {a.photos.length ? <PhotoGallery photos={a.photos} canFlag={!!viewer && viewer.handle !== a.author.handle} /> : null}
       {a.calculation ? (
         <div className="flex flex-col gap-1" data-testid="answer-calculation">
           <p className="text-sm font-semibold">

@@ -26,6 +26,7 @@ function makeLimits() {
     flagAccount: limiter(20, 60 * 60, 'flag-account'),
     flagIp: limiter(60, 60 * 60, 'flag-ip'),
     uploadAccount: limiter(30, 60 * 60, 'upload-account'),
+    uploadIp: limiter(90, 60 * 60, 'upload-ip'),
   };
 }
 export function limits() {

@@ -3,6 +3,15 @@ import { initModels } from '@/models';
 import { ForumError } from './errors';
 import { can, type Actor } from '@/lib/auth/policy';
 
+/** A photo with a post; `ref` is what a flag names, `hidden` only ever true for moderators. */
+export interface PhotoView {
+  id: string;
+  ref: number;
+  width: number;
+  height: number;
+  alt: string | null;
+  hidden: boolean;
+}
 export interface PersonView {
   handle: string;
   displayName: string;
@@ -31,7 +40,7 @@ export interface AnswerView {
   markedByViewer: boolean;
   fixed: boolean;
   calculation: { id: string; tool: string; title: string | null; inputs: Record<string, string> } | null;
-  photos: { id: string; width: number; height: number; alt: string | null }[];
+  photos: PhotoView[];
   createdAt: string;
   edited: boolean;
   cautionUnsafe: boolean;
@@ -50,7 +59,7 @@ export interface ThreadView {
   markedByViewer: boolean;
   fixedAnswerId: number | null;
   followedByViewer: boolean;
-  photos: { id: string; width: number; height: number; alt: string | null }[];
+  photos: PhotoView[];
   answers: AnswerView[];
   replies: ReplyView[];
   createdAt: string;
@@ -75,11 +84,13 @@ export async function loadThread(id: number, viewer: Actor | null): Promise<Thre
   const viewerId = viewer?.id ?? null;
   const seeHidden = can(viewer, 'moderation.seeHidden');
   const { Question, Answer, Reply, User, Tag, WorkedCalculation, Photo, HelpfulMark, QuestionFollow, Revision, Flag } = initModels();
+  // hidden and deleted photos are left out for everyone but moderators, like posts
+  const photoInclude = { model: Photo, as: 'photos', attributes: ['id', 'publicId', 'width', 'height', 'alt', 'ownerId', 'hiddenAt', 'deletedAt'], required: false, ...(seeHidden ? {} : { where: { hiddenAt: null, deletedAt: null } }) };
   const q = await Question.findByPk(id, {
     include: [
       { model: User, as: 'author', attributes: ['id', 'handle', 'displayName', 'role'] },
       { model: Tag, as: 'tags', attributes: ['slug', 'name'], through: { attributes: [] } },
-      { model: Photo, as: 'photos', attributes: ['publicId', 'width', 'height', 'alt'] },
+      photoInclude,
     ],
   });
   // Hidden and deleted posts vanish for everyone but moderators.
@@ -91,7 +102,7 @@ export async function loadThread(id: number, viewer: Actor | null): Promise<Thre
       include: [
         { model: User, as: 'author', attributes: ['handle', 'displayName', 'role'] },
         { model: WorkedCalculation, as: 'calculation', attributes: ['publicId', 'tool', 'title', 'inputs'] },
-        { model: Photo, as: 'photos', attributes: ['publicId', 'width', 'height', 'alt'] },
+        photoInclude,
       ],
     }),
     Reply.findAll({ where: { questionId: id, ...visible }, include: [{ model: User, as: 'author', attributes: ['handle', 'displayName', 'role'] }], order: [['createdAt', 'ASC'], ['id', 'ASC']] }),
@@ -119,8 +130,8 @@ export async function loadThread(id: number, viewer: Actor | null): Promise<Thre
   const marked = new Set(marks.map((m) => `${m.postType}:${m.postId}`));
   const edits = new Map((revisionCounts as unknown as { postType: string; postId: number; count: number }[]).map((r) => [`${r.postType}:${r.postId}`, Number(r.count)]));
   const edited = (t: string, pid: number) => (edits.get(`${t}:${pid}`) ?? 1) > 1;
-  const photoView = (ps: { publicId: string; width: number; height: number; alt: string | null }[] | undefined) =>
-    (ps ?? []).map((p) => ({ id: p.publicId, width: p.width, height: p.height, alt: p.alt }));
+  const photoView = (ps: { id: number; publicId: string; width: number; height: number; alt: string | null; hiddenAt: Date | null; deletedAt: Date | null }[] | undefined) =>
+    (ps ?? []).map((p) => ({ id: p.publicId, ref: p.id, width: p.width, height: p.height, alt: p.alt, hidden: !!(p.hiddenAt || p.deletedAt) }));
 
   const answerViews: AnswerView[] = answers
     .map((a) => {

@@ -30,7 +30,7 @@ export async function guarded(
   request: Request,
   action: Action,
   work: (user: SessionUser) => Promise<Response>,
-  options: { flood?: 'post' | 'flag' } = {},
+  options: { flood?: 'post' | 'flag' | 'upload' } = {},
 ): Promise<Response> {
   let user: SessionUser | null;
   try {
@@ -46,13 +46,18 @@ export async function guarded(
   }
   if (options.flood) {
     const ip = clientIp(request.headers);
-    const checks: [LimitName, string][] =
-      options.flood === 'flag'
-        ? [['flagIp', ip], ['flagAccount', String(user.id)]]
-        : [['postIp', ip], [isNewMember(user) ? 'postNewAccount' : 'postAccount', String(user.id)]];
+    const checks: Record<typeof options.flood, [LimitName, string][]> = {
+      flag: [['flagIp', ip], ['flagAccount', String(user.id)]],
+      upload: [['uploadIp', ip], ['uploadAccount', String(user.id)]],
+      post: [['postIp', ip], [isNewMember(user) ? 'postNewAccount' : 'postAccount', String(user.id)]],
+    };
     try {
-      const limited = await spend(checks);
-      if (!limited.ok) return apiError(429, limitMessage(limited.retryAfterS), undefined, 'rate_limited');
+      const limited = await spend(checks[options.flood]);
+      if (!limited.ok) {
+        const res = apiError(429, limitMessage(limited.retryAfterS), undefined, 'rate_limited');
+        res.headers.set('Retry-After', String(limited.retryAfterS));
+        return res;
+      }
     } catch (err) {
       return serverError(err);
     }

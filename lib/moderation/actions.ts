@@ -92,7 +92,7 @@ export async function moderate(
     );
     const untilWords = input.action === 'suspend' ? ` until ${new Date(details.until as string).toUTCString().slice(5, 16)}` : '';
     await Notice.create(
-      { userId: post.authorId, kind: 'moderation', message: `${WORDS[input.action]}${untilWords}. Reason: ${input.reason}`, link: `/questions/${questionId}`, readAt: null },
+      { userId: post.authorId, kind: 'moderation', message: `${WORDS[input.action]}${untilWords}. Reason: ${input.reason}`, link: questionId ? `/questions/${questionId}` : null, readAt: null },
       { transaction },
     );
     return { auditId: audit.id };

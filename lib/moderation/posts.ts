@@ -2,23 +2,42 @@ import type { Transaction } from 'sequelize';
 import { initModels } from '@/models';
 import { ForumError } from '@/lib/forum/errors';
 
-export type ModeratedType = 'question' | 'answer' | 'reply';
+export type ModeratedType = 'question' | 'answer' | 'reply' | 'photo';
 
-/** The post (locked for update) and the question it belongs to. */
-export async function loadPost(postType: ModeratedType, postId: number, transaction: Transaction) {
-  const { Question, Answer, Reply } = initModels();
+/** What moderation needs of any post: its author, its words and its visibility. */
+export interface ModeratedPost {
+  id: number;
+  authorId: number;
+  body: string;
+  hiddenAt: Date | null;
+  hiddenReason: string | null;
+  deletedAt: Date | null;
+  createdAt: Date;
+  update: (v: Record<string, unknown>, o: { transaction: Transaction }) => Promise<unknown>;
+}
+
+/** The post (locked for update) and the question it belongs to. A photo's author is its uploader, its words its description. */
+export async function loadPost(postType: ModeratedType, postId: number, transaction: Transaction): Promise<{ post: ModeratedPost; questionId: number | null }> {
+  const { Question, Answer, Reply, Photo } = initModels();
+  if (postType === 'photo') {
+    const photo = await Photo.findByPk(postId, { transaction, lock: transaction.LOCK.UPDATE });
+    if (!photo) throw new ForumError(404, 'no such photo', 'postId');
+    let questionId = photo.questionId;
+    if (questionId === null && photo.answerId !== null) questionId = (await Answer.findByPk(photo.answerId, { attributes: ['questionId'], transaction }))?.questionId ?? null;
+    const post: ModeratedPost = {
+      id: photo.id,
+      authorId: photo.ownerId,
+      body: photo.alt ? `Photo: ${photo.alt}` : 'A photo without a description',
+      hiddenAt: photo.hiddenAt ?? null,
+      hiddenReason: photo.hiddenReason ?? null,
+      deletedAt: photo.deletedAt ?? null,
+      createdAt: photo.createdAt,
+      update: (v, o) => photo.update(v, o),
+    };
+    return { post, questionId };
+  }
   const model = { question: Question, answer: Answer, reply: Reply }[postType] as unknown as typeof Answer;
-  const post = (await model.findByPk(postId, { transaction, lock: transaction.LOCK.UPDATE })) as unknown as {
-    id: number;
-    authorId: number;
-    body: string;
-    hiddenAt: Date | null;
-    hiddenReason: string | null;
-    deletedAt: Date | null;
-    questionId?: number;
-    createdAt: Date;
-    update: (v: Record<string, unknown>, o: { transaction: Transaction }) => Promise<unknown>;
-  } | null;
+  const post = (await model.findByPk(postId, { transaction, lock: transaction.LOCK.UPDATE })) as unknown as (ModeratedPost & { questionId?: number }) | null;
   if (!post) throw new ForumError(404, `no such ${postType}`, 'postId');
   const questionId = postType === 'question' ? post.id : (post.questionId as number);
   return { post, questionId };

@@ -4,8 +4,8 @@ import type { FlagReason } from '@/models/Flag';
 
 /** Posts with open flags, oldest flag first, each with its context, the flaggers' notes and its revisions. */
 export async function reviewQueue(filter: { reason?: FlagReason; olderThanHours?: number }) {
-  const { Flag, User, Question, Answer, Reply, Revision, Tag } = initModels();
-  const where: Record<string | symbol, unknown> = { status: 'open', postType: { [Op.in]: ['question', 'answer', 'reply'] } };
+  const { Flag, User, Question, Answer, Reply, Revision, Tag, Photo } = initModels();
+  const where: Record<string | symbol, unknown> = { status: 'open', postType: { [Op.in]: ['question', 'answer', 'reply', 'photo'] } };
   if (filter.reason) where.reason = filter.reason;
   if (filter.olderThanHours) where.createdAt = { [Op.lte]: new Date(Date.now() - filter.olderThanHours * 3_600_000) };
   const flags = await Flag.findAll({ where, include: [{ model: User, as: 'flagger', attributes: ['handle', 'displayName', 'role'] }], order: [['createdAt', 'ASC']], limit: 500 });
@@ -16,14 +16,23 @@ export async function reviewQueue(filter: { reason?: FlagReason; olderThanHours?
   }
   const items = [];
   for (const [k, fs] of groups) {
-    const [type, idText] = k.split(':') as ['question' | 'answer' | 'reply', string];
+    const [type, idText] = k.split(':') as ['question' | 'answer' | 'reply' | 'photo', string];
     const id = Number(idText);
-    const model = { question: Question, answer: Answer, reply: Reply }[type] as unknown as typeof Answer;
-    const post = (await model.findByPk(id, { include: [{ model: User, as: 'author', attributes: ['id', 'handle', 'displayName'] }] })) as unknown as {
-      id: number; body: string; questionId?: number; hiddenAt: Date | null; deletedAt: Date | null; createdAt: Date; author?: { id: number; handle: string; displayName: string };
-    } | null;
+    type QueuedPost = { id: number; body: string; questionId?: number | null; hiddenAt: Date | null; deletedAt: Date | null; createdAt: Date; author?: { id: number; handle: string; displayName: string }; photoId?: string };
+    let post: QueuedPost | null;
+    if (type === 'photo') {
+      const photo = await Photo.findByPk(id);
+      const owner = photo ? await User.findByPk(photo.ownerId, { attributes: ['id', 'handle', 'displayName'] }) : null;
+      const answer = photo?.answerId ? await Answer.findByPk(photo.answerId, { attributes: ['questionId'] }) : null;
+      post = photo
+        ? { id: photo.id, body: photo.alt ?? '', questionId: photo.questionId ?? answer?.questionId ?? null, hiddenAt: photo.hiddenAt ?? null, deletedAt: photo.deletedAt ?? null, createdAt: photo.createdAt, author: owner ?? undefined, photoId: photo.publicId }
+        : null;
+    } else {
+      const model = { question: Question, answer: Answer, reply: Reply }[type] as unknown as typeof Answer;
+      post = (await model.findByPk(id, { include: [{ model: User, as: 'author', attributes: ['id', 'handle', 'displayName'] }] })) as unknown as QueuedPost | null;
+    }
     if (!post) continue;
-    const questionId = type === 'question' ? post.id : (post.questionId as number);
+    const questionId = type === 'question' ? post.id : (post.questionId ?? 0);
     const q = await Question.findByPk(questionId, { attributes: ['id', 'title'], include: [{ model: Tag, as: 'tags', attributes: ['slug'], through: { attributes: [] } }] });
     const revisions = await Revision.findAll({ where: { postType: type, postId: id }, include: [{ model: User, as: 'editor', attributes: ['displayName'] }], order: [['createdAt', 'ASC']] });
     items.push({
@@ -38,6 +47,7 @@ export async function reviewQueue(filter: { reason?: FlagReason; olderThanHours?
         deletedAt: post.deletedAt?.toISOString() ?? null,
         createdAt: post.createdAt.toISOString(),
         tags: (q?.tags ?? []).map((t) => t.slug),
+        photoId: post.photoId ?? null,
       },
       flags: fs.map((f) => ({ id: f.id, reason: f.reason, note: f.note, flagger: { handle: f.flagger?.handle ?? '', displayName: f.flagger?.displayName ?? '', role: f.flagger?.role ?? 'member' }, createdAt: f.createdAt.toISOString() })),
       revisions: revisions.map((r) => ({ body: r.body, at: r.createdAt.toISOString(), editor: r.editor?.displayName ?? 'unknown' })),

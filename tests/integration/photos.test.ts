@@ -233,16 +233,26 @@ describe('POST /api/photos', () => {
     expect(Number(res.headers.get('retry-after'))).toBeGreaterThan(0);
     await limits().uploadAccount.delete(String(other.id));
   });
+
+  it('limits uploads per address too, whoever is signed in', async () => {
+    await limits().uploadIp.penalty('local', 90); // the 90 an hour per address chosen in lib/auth/rate-limit.ts; requests here carry no proxy header
+    const before = storedFiles();
+    const res = await upload([{ name: 'a.png', data: png, type: 'image/png' }], { as: OTHER });
+    expect(res.status).toBe(429);
+    expect(Number(res.headers.get('retry-after'))).toBeGreaterThan(0);
+    await expectNothingKept(before);
+    await limits().uploadIp.delete('local');
+  });
 });
 
 describe('GET /api/photos/:id and /thumb', () => {
-  it('serves our WebP copies with nosniff and a year of caching', async () => {
+  it('serves our WebP copies with nosniff and an hour of caching', async () => {
     const [p] = (await (await upload([{ name: 'a.png', data: png, type: 'image/png' }])).json()).photos;
     for (const res of [await getWeb(new Request(`http://localhost${p.url}`), ctx(p.id)), await getThumb(new Request(`http://localhost${p.thumbUrl}`), ctx(p.id))]) {
       expect(res.status).toBe(200);
       expect(res.headers.get('content-type')).toBe('image/webp');
       expect(res.headers.get('x-content-type-options')).toBe('nosniff');
-      expect(res.headers.get('cache-control')).toBe('public, max-age=31536000, immutable'); // one year, common practice for immutable assets, no source
+      expect(res.headers.get('cache-control')).toBe('public, max-age=3600'); // an hour, so a photo taken down leaves readers' caches soon: common practice, no source
       expect(res.headers.get('content-disposition')).toMatch(/^inline/);
       expect((await sharp(Buffer.from(await res.arrayBuffer())).metadata()).format).toBe('webp');
     }

@@ -4,7 +4,7 @@ export const dynamic = 'force-dynamic';
 export const runtime = 'nodejs';
 
 /** GET /api/photos/:id — the web-size copy (longest side ≤ 1600 px). */
-export async function GET(_req: Request, { params }: { params: Promise<{ id: string }> }) {
+export async function GET(request: Request, { params }: { params: Promise<{ id: string }> }) {
   const { id } = await params;
-  return servePhoto(id, 'web');
+  return servePhoto(request, id, 'web');
 }

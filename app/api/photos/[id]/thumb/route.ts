@@ -4,7 +4,7 @@ export const dynamic = 'force-dynamic';
 export const runtime = 'nodejs';
 
 /** GET /api/photos/:id/thumb — the thumbnail (longest side ≤ 320 px). */
-export async function GET(_req: Request, { params }: { params: Promise<{ id: string }> }) {
+export async function GET(request: Request, { params }: { params: Promise<{ id: string }> }) {
   const { id } = await params;
-  return servePhoto(id, 'thumb');
+  return servePhoto(request, id, 'thumb');
 }
