@@ -85,7 +85,7 @@ export async function loadThread(id: number, viewer: Actor | null): Promise<Thre
   const seeHidden = can(viewer, 'moderation.seeHidden');
   const { Question, Answer, Reply, User, Tag, WorkedCalculation, Photo, HelpfulMark, QuestionFollow, Revision, Flag } = initModels();
   // hidden and deleted photos are left out for everyone but moderators, like posts
-  const photoInclude = { model: Photo, as: 'photos', attributes: ['id', 'publicId', 'width', 'height', 'alt', 'ownerId', 'hiddenAt', 'deletedAt'], required: false, ...(seeHidden ? {} : { where: { hiddenAt: null, deletedAt: null } }) };
+  const photoInclude = { model: Photo, as: 'photos', attributes: ['id', 'publicId', 'width', 'height', 'alt', 'hiddenAt', 'deletedAt'], required: false, ...(seeHidden ? {} : { where: { hiddenAt: null, deletedAt: null } }) };
   const q = await Question.findByPk(id, {
     include: [
       { model: User, as: 'author', attributes: ['id', 'handle', 'displayName', 'role'] },

@@ -16,14 +16,19 @@ export interface ModeratedPost {
   update: (v: Record<string, unknown>, o: { transaction: Transaction }) => Promise<unknown>;
 }
 
+/** The thread a photo is shown in: its question's, or its answer's question's; null while unattached. */
+export async function photoQuestionId(photo: { questionId: number | null; answerId: number | null }, transaction?: Transaction): Promise<number | null> {
+  if (photo.questionId !== null || photo.answerId === null) return photo.questionId;
+  return (await initModels().Answer.findByPk(photo.answerId, { attributes: ['questionId'], transaction }))?.questionId ?? null;
+}
+
 /** The post (locked for update) and the question it belongs to. A photo's author is its uploader, its words its description. */
 export async function loadPost(postType: ModeratedType, postId: number, transaction: Transaction): Promise<{ post: ModeratedPost; questionId: number | null }> {
   const { Question, Answer, Reply, Photo } = initModels();
   if (postType === 'photo') {
     const photo = await Photo.findByPk(postId, { transaction, lock: transaction.LOCK.UPDATE });
     if (!photo) throw new ForumError(404, 'no such photo', 'postId');
-    let questionId = photo.questionId;
-    if (questionId === null && photo.answerId !== null) questionId = (await Answer.findByPk(photo.answerId, { attributes: ['questionId'], transaction }))?.questionId ?? null;
+    const questionId = await photoQuestionId(photo, transaction);
     const post: ModeratedPost = {
       id: photo.id,
       authorId: photo.ownerId,

@@ -1,6 +1,7 @@
 import { Op } from 'sequelize';
 import { initModels } from '@/models';
 import type { FlagReason } from '@/models/Flag';
+import { photoQuestionId } from './posts';
 
 /** Posts with open flags, oldest flag first, each with its context, the flaggers' notes and its revisions. */
 export async function reviewQueue(filter: { reason?: FlagReason; olderThanHours?: number }) {
@@ -23,9 +24,8 @@ export async function reviewQueue(filter: { reason?: FlagReason; olderThanHours?
     if (type === 'photo') {
       const photo = await Photo.findByPk(id);
       const owner = photo ? await User.findByPk(photo.ownerId, { attributes: ['id', 'handle', 'displayName'] }) : null;
-      const answer = photo?.answerId ? await Answer.findByPk(photo.answerId, { attributes: ['questionId'] }) : null;
       post = photo
-        ? { id: photo.id, body: photo.alt ?? '', questionId: photo.questionId ?? answer?.questionId ?? null, hiddenAt: photo.hiddenAt ?? null, deletedAt: photo.deletedAt ?? null, createdAt: photo.createdAt, author: owner ?? undefined, photoId: photo.publicId }
+        ? { id: photo.id, body: photo.alt ?? '', questionId: await photoQuestionId(photo), hiddenAt: photo.hiddenAt ?? null, deletedAt: photo.deletedAt ?? null, createdAt: photo.createdAt, author: owner ?? undefined, photoId: photo.publicId }
         : null;
     } else {
       const model = { question: Question, answer: Answer, reply: Reply }[type] as unknown as typeof Answer;

@@ -1,7 +1,4 @@
 import { beforeAll, describe, expect, it } from 'vitest';
-import { NextRequest } from 'next/server';
-import { encode } from 'next-auth/jwt';
-import { authSecret } from '@/lib/auth/secret';
 import { initModels } from '@/models';
 import { POST as flagPOST } from '@/app/api/flags/route';
 import { POST as actionPOST } from '@/app/api/review/actions/route';
@@ -10,23 +7,9 @@ import { GET as threadGET } from '@/app/api/questions/[id]/route';
 import { GET as photoGET } from '@/app/api/photos/[id]/route';
 import { GET as thumbGET } from '@/app/api/photos/[id]/thumb/route';
 import { freshDemoDatabase } from './db';
+import { actAs } from './act-as';
 
-// eslint-disable-next-line @typescript-eslint/no-explicit-any -- handlers differ in their context types
-type Handler = (r: any, ctx: any) => Promise<Response>;
-const cookie = async (handle: string) => {
-  const u = (await initModels().User.findOne({ where: { handle } }))!;
-  return `next-auth.session-token=${await encode({ token: { uid: u.id, role: u.role, handle }, secret: authSecret() })}`;
-};
-let ip = 0;
-async function raw(handler: Handler, method: string, url: string, who: string | null, body?: unknown, params: Record<string, string> = {}) {
-  const headers: Record<string, string> = { 'content-type': 'application/json', 'x-forwarded-for': `10.5.0.${++ip}` };
-  if (who) headers.cookie = await cookie(who);
-  return handler(new NextRequest(`http://localhost${url}`, { method, headers, body: body === undefined ? undefined : JSON.stringify(body) }), { params: Promise.resolve(params) });
-}
-async function call(handler: Handler, method: string, url: string, who: string | null, body?: unknown, params: Record<string, string> = {}) {
-  const res = await raw(handler, method, url, who, body, params);
-  return { status: res.status, body: await res.json() };
-}
+const { raw, call } = actAs('10.5.0');
 const act = (body: Record<string, unknown>) => call(actionPOST, 'POST', '/api/review/actions', 'moss_moderator', body);
 const question = async (title: string) => (await initModels().Question.findOne({ where: { title } }))!;
 const firstAnswer = async (title: string) => (await initModels().Answer.findOne({ where: { questionId: (await question(title)).id }, order: [['id', 'ASC']] }))!;

@@ -1,8 +1,5 @@
 import { beforeAll, describe, expect, it } from 'vitest';
-import { NextRequest } from 'next/server';
 import { QueryTypes } from 'sequelize';
-import { encode } from 'next-auth/jwt';
-import { authSecret } from '@/lib/auth/secret';
 import { getSequelize } from '@/lib/db';
 import { initModels } from '@/models';
 import { POST as flagPOST } from '@/app/api/flags/route';
@@ -15,20 +12,9 @@ import { GET as listGET } from '@/app/api/questions/route';
 import { changeRole } from '@/lib/accounts/roles';
 import { hideThreshold } from '@/lib/moderation/flags';
 import { freshDemoDatabase } from './db';
+import { actAs } from './act-as';
 
-// eslint-disable-next-line @typescript-eslint/no-explicit-any -- handlers differ in their context types
-type Handler = (r: any, ctx: any) => Promise<Response>;
-const cookie = async (handle: string) => {
-  const u = (await initModels().User.findOne({ where: { handle } }))!;
-  return `next-auth.session-token=${await encode({ token: { uid: u.id, role: u.role, handle }, secret: authSecret() })}`;
-};
-let ip = 0;
-async function call(handler: Handler, method: string, url: string, who: string | null, body?: unknown, params: Record<string, string> = {}) {
-  const headers: Record<string, string> = { 'content-type': 'application/json', 'x-forwarded-for': `10.4.0.${++ip}` };
-  if (who) headers.cookie = await cookie(who);
-  const res = await handler(new NextRequest(`http://localhost${url}`, { method, headers, body: body === undefined ? undefined : JSON.stringify(body) }), { params: Promise.resolve(params) });
-  return { status: res.status, body: await res.json() };
-}
+const { call } = actAs('10.4.0');
 const answerBy = async (handle: string, questionTitle: string) => {
   const { User, Question, Answer } = initModels();
   const u = (await User.findOne({ where: { handle } }))!;

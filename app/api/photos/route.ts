@@ -10,17 +10,16 @@ export const runtime = 'nodejs';
  * POST /api/photos — multipart field `photos` (up to 6 JPEG, PNG or WebP files) and
  * an optional `alt` per photo. Answers 201 with the stored photos, unattached: the
  * question or answer that uses them attaches them by id when it is saved.
- * Suspended members are refused; uploads are flood-limited per account and per address.
+ * Suspended members are refused; uploads are flood-limited per account and per address
+ * (a request that is not multipart at all spends no upload allowance).
  */
 export async function POST(request: Request) {
-  if (!/^multipart\/form-data;/i.test(request.headers.get('content-type') ?? '')) {
-    // checked first only for signed-in callers: guarded() answers 401 before any work
-    return guarded(request, 'photo.upload', async () => apiError(400, 'Send photos as multipart/form-data in the field “photos”.', 'photos', 'not_multipart'));
-  }
+  const multipart = /^multipart\/form-data;/i.test(request.headers.get('content-type') ?? '');
   return guarded(
     request,
     'photo.upload',
     async (user) => {
+      if (!multipart) return apiError(400, 'Send photos as multipart/form-data in the field “photos”.', 'photos', 'not_multipart');
       try {
         const photos = await ingestUpload(request, user.id);
         return NextResponse.json({ photos }, { status: 201 });
@@ -29,6 +28,6 @@ export async function POST(request: Request) {
         throw err;
       }
     },
-    { flood: 'upload' },
+    multipart ? { flood: 'upload' } : {},
   );
 }
