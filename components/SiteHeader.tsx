@@ -40,7 +40,7 @@ export function SiteHeader() {
             id="site-search"
             name="q"
             type="search"
-            placeholder="Search guides and questions"
+            placeholder="Search guides, questions, field logs"
             className="w-full min-w-0 rounded-md border border-creek-400 bg-creek-800 px-3 py-1.5 text-sm text-limestone-50 placeholder:text-creek-200 sm:w-64"
           />
         </form>

@@ -1,46 +1,62 @@
 import type { Metadata } from 'next';
-import Link from 'next/link';
-import { findQuestionsByText } from '@/lib/questions/find';
+import { searchQuerySchema } from '@/lib/validation/search';
+import { search, type SearchResult } from '@/lib/search';
+import { GUIDE_LEVELS } from '@/lib/guides/frontmatter';
+import { listGuides } from '@/lib/guides/content';
+import { currentUserInPage } from '@/lib/auth/session';
+import { can } from '@/lib/auth/policy';
+import { initModels } from '@/models';
 import { isDatabaseUnavailable } from '@/lib/db/errors';
 import { ServiceUnavailable } from '@/components/ServiceUnavailable';
+import { SearchResults, type SearchState } from '@/components/search/SearchResults';
 
 export const metadata: Metadata = { title: 'Search', robots: { index: false } };
 
+/** /search: drawn with its first results on the server (works without scripts), then live. */
 export default async function SearchPage({ searchParams }: { searchParams: Promise<Record<string, string | string[]>> }) {
   const sp = await searchParams;
-  const q = (typeof sp.q === 'string' ? sp.q : '').trim().slice(0, 200);
-  let results: Awaited<ReturnType<typeof findQuestionsByText>> = [];
-  if (q) {
-    try {
-      results = await findQuestionsByText(q);
-    } catch (err) {
-      if (isDatabaseUnavailable(err)) return <ServiceUnavailable what="search results" />;
-      throw err;
+  const raw = Object.fromEntries(Object.entries(sp).map(([k, v]) => [k, Array.isArray(v) ? v[v.length - 1] : v]));
+  const parsed = searchQuerySchema.safeParse({ ...raw, limit: '20', offset: '0' });
+  const problem = parsed.success ? null : parsed.error.issues[0]?.message;
+  const query = parsed.success ? parsed.data : searchQuerySchema.parse({ q: typeof raw.q === 'string' ? raw.q.slice(0, 200) : '' });
+
+  let result: SearchResult | null = null;
+  let tags: { slug: string; name: string }[] = [];
+  try {
+    const viewer = await currentUserInPage();
+    tags = (await initModels().Tag.findAll({ attributes: ['slug', 'name'], order: [['name', 'ASC']] })).map((t) => ({ slug: t.slug, name: t.name }));
+    if (query.q) {
+      const { q, kind, ...rest } = query;
+      result = await search({ q, kinds: kind, ...rest }, { seeHidden: can(viewer, 'moderation.seeHidden') });
     }
+  } catch (err) {
+    if (isDatabaseUnavailable(err)) return <ServiceUnavailable what="search" />;
+    throw err;
   }
+  const initial: SearchState = {
+    q: query.q,
+    kind: query.kind.join(','),
+    tag: query.tag ?? '',
+    solved: query.solved === undefined ? '' : String(query.solved),
+    level: query.level ?? '',
+  };
+  const suggestions = listGuides()
+    .slice(0, 5)
+    .map((g) => ({ href: `/guides/${g.slug}`, title: g.meta.title }));
+
   return (
     <div className="flex flex-col gap-4">
       <h1 className="font-serif text-3xl font-semibold">Search</h1>
-      {!q ? (
-        <p className="cw-muted">Type in the search box above: a symptom, a pipe size, a tag.</p>
-      ) : results.length === 0 ? (
-        <p className="cw-muted">
-          Nothing matched “{q}”. Try fewer words, or{' '}
-          <Link href="/questions" className="cw-link">
-            browse the questions
-          </Link>
-          .
+      <p className="cw-muted max-w-prose text-sm">
+        Guides, questions, answers and field logs. Sizes match however they are written (¾&quot;, 0.75 in, 19 mm, DN20), and so do the trade’s
+        other names (supply head for fall, impulse valve for waste valve).
+      </p>
+      {problem ? (
+        <p role="alert" className="cw-card text-sm">
+          {problem}
         </p>
-      ) : (
-        <ul className="flex flex-col gap-2">
-          {results.map((r) => (
-            <li key={r.id} className="cw-card">
-              <span className="font-serif font-semibold">{r.title}</span>{' '}
-              <span className="cw-muted cw-num text-sm">· {r.answerCount} answers</span>
-            </li>
-          ))}
-        </ul>
-      )}
+      ) : null}
+      <SearchResults initial={initial} initialResult={result} tags={tags} levels={GUIDE_LEVELS} suggestions={suggestions} />
     </div>
   );
 }

@@ -131,7 +131,7 @@ function Answer({
   optimistic: (patch: (v: ThreadView) => ThreadView) => (o: unknown, settle: Promise<unknown>) => void;
 }) {
   return (
-    <article className={`cw-card flex flex-col gap-3 ${a.fixed ? 'border-2 border-moss' : ''}`} data-answer={a.id} aria-label={`Answer by ${a.author.displayName}`}>
+    <article className={`cw-card flex flex-col gap-3 ${a.fixed ? 'border-2 border-moss' : ''}`} data-answer={a.id} id={`answer-${a.id}`} aria-label={`Answer by ${a.author.displayName}`}>
       {a.fixed ? <p className="self-start rounded bg-moss px-2 py-0.5 text-xs font-semibold text-limestone-50">fixed it</p> : null}
       <PostMarks post={a} kind="answer" />
       <MemberText>{a.body}</MemberText>
@@ -204,7 +204,7 @@ function Replies({
     return (
       <ul className={`flex flex-col gap-2 ${parent === null ? '' : 'ml-4 border-l border-limestone-300 pl-3 dark:border-creek-600'}`}>
         {list.map((r) => (
-          <li key={r.id} data-reply={r.id} data-depth={r.depth} className="text-sm">
+          <li key={r.id} id={`reply-${r.id}`} data-reply={r.id} data-depth={r.depth} className="text-sm">
             <PostMarks post={r} kind="reply" />
             <MemberText>{r.body}</MemberText>
             <div className="flex flex-wrap items-center gap-3">

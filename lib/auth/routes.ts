@@ -29,6 +29,7 @@ export const API_ROUTES: Record<string, Action | 'public' | 'session'> = {
   'GET /api/photos/[id]/thumb': 'public',
   'POST /api/questions': 'question.ask',
   'GET /api/questions/similar': 'public',
+  'GET /api/search': 'public',
   'GET /api/questions/[id]': 'public',
   'PUT /api/questions/[id]': 'question.edit',
   'POST /api/questions/[id]/answers': 'answer.post',

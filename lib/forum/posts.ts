@@ -7,6 +7,14 @@ import { can, REFUSAL } from '@/lib/auth/policy';
 import { attachPhotos } from '@/lib/photos/store';
 import { ForumError } from './errors';
 import { validateSiteSheet } from './site-sheet';
+import { indexThread } from '@/lib/search';
+
+/** Runs a write, then brings the thread's search documents up to date (same request). */
+async function thenIndex<T>(write: Promise<T>, questionId: (result: T) => number): Promise<T> {
+  const result = await write;
+  await indexThread(questionId(result));
+  return result;
+}
 
 /** Replies nest this deep; a reply to one at the cap joins its level instead (flattened). */
 export const MAX_REPLY_DEPTH = 3;
@@ -25,7 +33,7 @@ export async function askQuestion(
 ) {
   const siteSheet = validateSiteSheet(input.siteSheet);
   const { Question, QuestionTag, Revision, QuestionFollow } = initModels();
-  return getSequelize().transaction(async (transaction) => {
+  const write = getSequelize().transaction(async (transaction) => {
     const ids = await tagIds([...new Set(input.tags)], transaction);
     const now = new Date();
     const q = await Question.create(
@@ -41,6 +49,7 @@ export async function askQuestion(
     }
     return q;
   });
+  return thenIndex(write, (q) => q.id);
 }
 
 async function loadQuestion(id: number, transaction?: Transaction) {
@@ -53,7 +62,7 @@ async function loadQuestion(id: number, transaction?: Transaction) {
 export async function editQuestion(user: SessionUser, id: number, input: { title: string; body: string; tags: string[]; siteSheet?: Record<string, string | undefined> }) {
   const siteSheet = validateSiteSheet(input.siteSheet);
   const { QuestionTag, Revision } = initModels();
-  return getSequelize().transaction(async (transaction) => {
+  const write = getSequelize().transaction(async (transaction) => {
     const q = await loadQuestion(id, transaction);
     if (!can(user, 'question.edit', q.authorId)) throw new ForumError(403, REFUSAL['question.edit']);
     const ids = await tagIds([...new Set(input.tags)], transaction);
@@ -63,11 +72,12 @@ export async function editQuestion(user: SessionUser, id: number, input: { title
     await Revision.create({ postType: 'question', postId: id, editorId: user.id, title: input.title, body: input.body }, { transaction });
     return q;
   });
+  return thenIndex(write, (q) => q.id);
 }
 
 export async function postAnswer(user: SessionUser, questionId: number, input: { body: string; calculationId?: string; photoIds: string[] }) {
   const { Answer, WorkedCalculation, Revision } = initModels();
-  return getSequelize().transaction(async (transaction) => {
+  const write = getSequelize().transaction(async (transaction) => {
     const q = await loadQuestion(questionId, transaction);
     if (q.lockedAt) throw new ForumError(409, 'This thread is locked: no new answers or replies.');
     let calculationId: number | null = null;
@@ -85,11 +95,12 @@ export async function postAnswer(user: SessionUser, questionId: number, input: {
     await q.update({ answerCount: q.answerCount + 1, lastActivityAt: new Date() }, { transaction });
     return a;
   });
+  return thenIndex(write, (a) => a.questionId);
 }
 
 export async function editPostBody(user: SessionUser, postType: 'answer' | 'reply', id: number, body: string) {
   const { Answer, Reply, Revision } = initModels();
-  return getSequelize().transaction(async (transaction) => {
+  const write = getSequelize().transaction(async (transaction) => {
     const post = postType === 'answer' ? await Answer.findByPk(id, { transaction }) : await Reply.findByPk(id, { transaction });
     if (!post) throw new ForumError(404, `no such ${postType}`, 'id');
     const action = postType === 'answer' ? 'answer.edit' : 'reply.edit';
@@ -99,11 +110,12 @@ export async function editPostBody(user: SessionUser, postType: 'answer' | 'repl
     await Revision.create({ postType, postId: id, editorId: user.id, title: null, body }, { transaction });
     return post;
   });
+  return thenIndex(write, (post) => post.questionId);
 }
 
 export async function postReply(user: SessionUser, questionId: number, input: { body: string; answerId?: number; replyToId?: number }) {
   const { Answer, Reply, Revision } = initModels();
-  return getSequelize().transaction(async (transaction) => {
+  const write = getSequelize().transaction(async (transaction) => {
     const q = await loadQuestion(questionId, transaction);
     if (q.lockedAt) throw new ForumError(409, 'This thread is locked: no new answers or replies.');
     let answerId: number | null = input.answerId ?? null;
@@ -133,6 +145,7 @@ export async function postReply(user: SessionUser, questionId: number, input: { 
     await q.update({ lastActivityAt: new Date() }, { transaction });
     return r;
   });
+  return thenIndex(write, (r) => r.questionId);
 }
 
 type PostType = 'question' | 'answer' | 'reply';
@@ -165,7 +178,7 @@ export async function markHelpful(user: SessionUser, postType: PostType, postId:
 /** The asker's choice of the answer that fixed it (or none). */
 export async function chooseFixed(user: SessionUser, questionId: number, answerId: number | null) {
   const { Answer } = initModels();
-  return getSequelize().transaction(async (transaction) => {
+  const write = getSequelize().transaction(async (transaction) => {
     const q = await loadQuestion(questionId, transaction);
     if (!can(user, 'question.markFixed', q.authorId)) throw new ForumError(403, REFUSAL['question.markFixed']);
     if (answerId !== null) {
@@ -175,6 +188,7 @@ export async function chooseFixed(user: SessionUser, questionId: number, answerI
     await q.update({ fixedAnswerId: answerId }, { transaction });
     return q;
   });
+  return thenIndex(write, (q) => q.id);
 }
 
 export async function setFollow(user: SessionUser, questionId: number, on: boolean) {

@@ -5,6 +5,7 @@ import { ForumError } from '@/lib/forum/errors';
 import type { SessionUser } from '@/lib/auth/session';
 import { recordAudit } from './audit';
 import { loadPost, type ModeratedType } from './posts';
+import { indexThread } from '@/lib/search';
 
 export const MODERATION_ACTIONS = ['dismiss', 'hide', 'restore', 'delete', 'lock', 'unlock', 'retag', 'warn', 'suspend'] as const;
 export type ModerationAction = (typeof MODERATION_ACTIONS)[number];
@@ -30,7 +31,7 @@ export async function moderate(
   input: { action: ModerationAction; postType: ModeratedType; postId: number; reason: string; tags?: string[]; until?: string },
 ) {
   const { Flag, Question, QuestionTag, Tag, User, Notice } = initModels();
-  return getSequelize().transaction(async (transaction) => {
+  const done = await getSequelize().transaction(async (transaction) => {
     const { post, questionId } = await loadPost(input.postType, input.postId, transaction);
     if (post.authorId === moderator.id) throw new ForumError(403, 'Moderators cannot act on their own posts.');
     const ownFlag = await Flag.findOne({ where: { postType: input.postType, postId: input.postId, flaggerId: moderator.id, status: 'open' }, transaction });
@@ -95,6 +96,9 @@ export async function moderate(
       { userId: post.authorId, kind: 'moderation', message: `${WORDS[input.action]}${untilWords}. Reason: ${input.reason}`, link: questionId ? `/questions/${questionId}` : null, readAt: null },
       { transaction },
     );
-    return { auditId: audit.id };
+    return { auditId: audit.id, questionId };
   });
+  // hide, restore, delete and retag change what search shows: the thread is reindexed now
+  if (done.questionId) await indexThread(done.questionId);
+  return { auditId: done.auditId };
 }

@@ -1,0 +1,26 @@
+import { NextResponse, type NextRequest } from 'next/server';
+import { queryObject, serverError, validationError } from '@/lib/http/errors';
+import { searchQuerySchema } from '@/lib/validation/search';
+import { search } from '@/lib/search';
+import { currentUser } from '@/lib/auth/session';
+import { can } from '@/lib/auth/policy';
+
+export const dynamic = 'force-dynamic';
+
+/**
+ * GET /api/search?q=…&kind=question,guide&tag=…&solved=true&level=…&limit=10&offset=0
+ * Guides, questions, answers, replies and field log entries; hidden and deleted
+ * posts only for moderators.
+ */
+export async function GET(request: NextRequest) {
+  const parsed = searchQuerySchema.safeParse(queryObject(request.nextUrl.searchParams));
+  if (!parsed.success) return validationError(parsed.error);
+  try {
+    const viewer = await currentUser(request);
+    const { q, kind, ...rest } = parsed.data;
+    const result = await search({ q, kinds: kind, ...rest }, { seeHidden: can(viewer, 'moderation.seeHidden') });
+    return NextResponse.json(result, { headers: { 'Cache-Control': 'private, no-store' } });
+  } catch (err) {
+    return serverError(err);
+  }
+}

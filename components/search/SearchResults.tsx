@@ -1,0 +1,288 @@
+'use client';
+
+import Link from 'next/link';
+import { useRouter } from 'next/navigation';
+import { useCallback, useEffect, useId, useRef, useState } from 'react';
+import type { SearchItem, SearchResult, Segment } from '@/lib/search';
+import { KIND_FILTERS, KIND_LABEL } from './kinds';
+
+export interface SearchState {
+  q: string;
+  kind: string;
+  tag: string;
+  solved: string;
+  level: string;
+}
+
+function Marked({ segments }: { segments: Segment[] }) {
+  return (
+    <>
+      {segments.map((s, i) =>
+        s.hit ? (
+          <mark key={i} className="rounded-sm bg-clay-200 px-0.5 text-inherit dark:bg-clay-700/60">
+            {s.text}
+          </mark>
+        ) : (
+          <span key={i}>{s.text}</span>
+        ),
+      )}
+    </>
+  );
+}
+
+function toQuery(s: SearchState) {
+  const p = new URLSearchParams();
+  if (s.q.trim()) p.set('q', s.q.trim());
+  if (s.kind) p.set('kind', s.kind);
+  if (s.tag) p.set('tag', s.tag);
+  if (s.solved) p.set('solved', s.solved);
+  if (s.level) p.set('level', s.level);
+  return p.toString();
+}
+
+type Status = { kind: 'idle' } | { kind: 'loading' } | { kind: 'error'; message: string };
+
+/**
+ * The /search page's box, filters and results: results follow each keystroke
+ * (GET /api/search), ↑/↓ move through them and Enter opens one; the address bar
+ * keeps the query so a result list can be shared and the back button works.
+ */
+export function SearchResults({
+  initial,
+  initialResult,
+  tags,
+  levels,
+  suggestions,
+}: {
+  initial: SearchState;
+  initialResult: SearchResult | null;
+  tags: { slug: string; name: string }[];
+  levels: readonly string[];
+  suggestions: { href: string; title: string }[];
+}) {
+  const router = useRouter();
+  const [state, setState] = useState(initial);
+  const [result, setResult] = useState<SearchResult | null>(initialResult);
+  const [status, setStatus] = useState<Status>({ kind: 'idle' });
+  const [active, setActive] = useState(-1);
+  const listRef = useRef<HTMLOListElement>(null);
+  const pending = useRef<{ timer?: ReturnType<typeof setTimeout>; ctl?: AbortController }>({});
+  const id = useId();
+
+  /** Each change of the box or a filter: new address, then (after a short pause) new results. */
+  const run = useCallback((next: SearchState) => {
+    const query = toQuery(next);
+    window.history.replaceState(null, '', query ? `/search?${query}` : '/search');
+    clearTimeout(pending.current.timer);
+    pending.current.ctl?.abort();
+    if (!next.q.trim()) {
+      setResult(null);
+      setStatus({ kind: 'idle' });
+      return;
+    }
+    const ctl = new AbortController();
+    pending.current.ctl = ctl;
+    setStatus({ kind: 'loading' });
+    pending.current.timer = setTimeout(async () => {
+      try {
+        const res = await fetch(`/api/search?${query}&limit=20`, { signal: ctl.signal });
+        const body = await res.json();
+        if (!res.ok) {
+          setStatus({ kind: 'error', message: body?.error?.message ?? 'Search is not answering just now.' });
+          return;
+        }
+        setResult(body as SearchResult);
+        setActive(-1);
+        setStatus({ kind: 'idle' });
+      } catch (err) {
+        if ((err as Error).name !== 'AbortError') setStatus({ kind: 'error', message: 'Search is not answering just now. Check your connection and try again.' });
+      }
+    }, 120);
+  }, []);
+
+  useEffect(() => () => {
+    clearTimeout(pending.current.timer);
+    pending.current.ctl?.abort();
+  }, []);
+
+  const items = result?.items ?? [];
+  const open = useCallback((item: SearchItem) => router.push(item.url), [router]);
+
+  const onKeyDown = (e: React.KeyboardEvent) => {
+    if (!items.length) return;
+    if (e.key === 'ArrowDown') {
+      e.preventDefault();
+      setActive((a) => Math.min(items.length - 1, a + 1));
+    } else if (e.key === 'ArrowUp') {
+      e.preventDefault();
+      setActive((a) => Math.max(-1, a - 1));
+    } else if (e.key === 'Enter' && active >= 0) {
+      e.preventDefault();
+      open(items[active]);
+    } else if (e.key === 'Escape') {
+      setActive(-1);
+    }
+  };
+
+  useEffect(() => {
+    if (active >= 0) listRef.current?.querySelector<HTMLElement>(`[data-index="${active}"]`)?.scrollIntoView({ block: 'nearest' });
+  }, [active]);
+
+  const set = (patch: Partial<SearchState>) => {
+    const next = { ...state, ...patch };
+    setState(next);
+    run(next);
+  };
+  const select = 'rounded-md border border-limestone-300 bg-limestone-50 px-2 py-1 text-sm dark:border-creek-600 dark:bg-creek-800';
+  const activeId = active >= 0 ? `${id}-r${active}` : undefined;
+
+  return (
+    <div className="flex flex-col gap-4" onKeyDown={onKeyDown}>
+      <form role="search" action="/search" method="get" onSubmit={(e) => e.preventDefault()} className="flex flex-col gap-3">
+        <label htmlFor={`${id}-q`} className="sr-only">
+          Search
+        </label>
+        <input
+          id={`${id}-q`}
+          name="q"
+          type="search"
+          autoFocus
+          autoComplete="off"
+          value={state.q}
+          onChange={(e) => set({ q: e.target.value })}
+          placeholder="A symptom, a size, a part: “1-inch pump stops when the creek drops”"
+          role="combobox"
+          aria-expanded={items.length > 0}
+          aria-controls={`${id}-results`}
+          aria-activedescendant={activeId}
+          aria-autocomplete="list"
+          className="w-full rounded-md border border-creek-300 bg-white px-3 py-2 text-base dark:border-creek-500 dark:bg-creek-900"
+        />
+        <fieldset className="flex flex-wrap items-center gap-3 text-sm">
+          <legend className="sr-only">Filters</legend>
+          <label className="flex items-center gap-1">
+            <span className="cw-muted">Show</span>
+            <select className={select} value={state.kind} onChange={(e) => set({ kind: e.target.value })} name="kind">
+              {KIND_FILTERS.map((k) => (
+                <option key={k.value} value={k.value}>
+                  {k.label}
+                </option>
+              ))}
+            </select>
+          </label>
+          <label className="flex items-center gap-1">
+            <span className="cw-muted">Tag</span>
+            <select className={select} value={state.tag} onChange={(e) => set({ tag: e.target.value })} name="tag">
+              <option value="">any</option>
+              {tags.map((t) => (
+                <option key={t.slug} value={t.slug}>
+                  {t.name}
+                </option>
+              ))}
+            </select>
+          </label>
+          <label className="flex items-center gap-1">
+            <span className="cw-muted">Threads</span>
+            <select className={select} value={state.solved} onChange={(e) => set({ solved: e.target.value })} name="solved">
+              <option value="">any</option>
+              <option value="true">fixed</option>
+              <option value="false">not fixed yet</option>
+            </select>
+          </label>
+          <label className="flex items-center gap-1">
+            <span className="cw-muted">Guide level</span>
+            <select className={select} value={state.level} onChange={(e) => set({ level: e.target.value })} name="level">
+              <option value="">any</option>
+              {levels.map((l) => (
+                <option key={l} value={l}>
+                  {l}
+                </option>
+              ))}
+            </select>
+          </label>
+        </fieldset>
+      </form>
+
+      <p className="cw-muted text-sm" aria-live="polite">
+        {status.kind === 'loading'
+          ? 'Searching…'
+          : status.kind === 'error'
+            ? ''
+            : result && state.q.trim()
+              ? `${result.total === 1 ? '1 result' : `${result.total} results`} · ↑ ↓ to move, Enter to open`
+              : ''}
+      </p>
+      {status.kind === 'error' ? (
+        <p role="alert" className="cw-card border-signal-500 text-sm">
+          {status.message}
+        </p>
+      ) : null}
+
+      {!state.q.trim() ? (
+        <section className="cw-card flex flex-col gap-2" aria-label="Where to start">
+          <p>Type what you see at the pump, a pipe size in any units, or a part’s name. Results appear as you type.</p>
+          <p className="cw-muted text-sm">Start with a guide:</p>
+          <ul className="flex flex-col gap-1">
+            {suggestions.map((s) => (
+              <li key={s.href}>
+                <Link className="cw-link" href={s.href}>
+                  {s.title}
+                </Link>
+              </li>
+            ))}
+          </ul>
+        </section>
+      ) : result && items.length === 0 && status.kind === 'idle' ? (
+        <section className="cw-card flex flex-col gap-2" aria-label="No results">
+          <p>Nothing matched “{state.q.trim()}”{state.kind || state.tag || state.solved || state.level ? ' with these filters' : ''}.</p>
+          <p className="text-sm">
+            Try fewer words or another spelling of a size, read{' '}
+            {suggestions.slice(0, 2).map((s, i) => (
+              <span key={s.href}>
+                {i ? ' or ' : ''}
+                <Link className="cw-link" href={s.href}>
+                  {s.title}
+                </Link>
+              </span>
+            ))}
+            , or{' '}
+            <Link className="cw-link" href="/questions/ask">
+              ask the community
+            </Link>{' '}
+            with your measurements.
+          </p>
+        </section>
+      ) : (
+        <ol ref={listRef} id={`${id}-results`} role="listbox" aria-label="Results" className="flex flex-col gap-2">
+          {items.map((item, i) => (
+            <li
+              key={item.id}
+              id={`${id}-r${i}`}
+              data-index={i}
+              role="option"
+              aria-selected={i === active}
+              className={`cw-card flex flex-col gap-1 ${i === active ? 'ring-2 ring-clay-400' : ''}`}
+              onMouseEnter={() => setActive(i)}
+            >
+              <div className="flex flex-wrap items-baseline gap-x-2 text-xs uppercase tracking-wide">
+                <span className="font-semibold text-creek-500 dark:text-creek-200">{KIND_LABEL[item.kind]}</span>
+                {item.solved ? <span className="text-moss-700 dark:text-moss-300">fixed</span> : null}
+                {item.level ? <span className="cw-muted normal-case">{item.level}</span> : null}
+                {item.hidden ? <span className="text-signal-700">hidden: moderators only</span> : null}
+              </div>
+              <Link href={item.url} className="font-serif text-lg font-semibold no-underline hover:underline" tabIndex={-1}>
+                <Marked segments={item.title} />
+              </Link>
+              {item.snippet.length ? (
+                <p className="text-sm">
+                  <Marked segments={item.snippet} />
+                </p>
+              ) : null}
+              {item.tags.length ? <p className="cw-muted text-xs">{item.tags.join(' · ')}</p> : null}
+            </li>
+          ))}
+        </ol>
+      )}
+    </div>
+  );
+}

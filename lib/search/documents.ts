@@ -1,0 +1,190 @@
+import GithubSlugger from 'github-slugger';
+import { Op } from 'sequelize';
+import { listGuides, type GuideFile } from '@/lib/guides/content';
+import { initModels } from '@/models';
+
+export const SEARCH_KINDS = ['guide', 'question', 'answer', 'reply', 'field-log'] as const;
+export type SearchKind = (typeof SEARCH_KINDS)[number];
+
+/** One searchable thing: a guide section, a post, a field log entry. */
+export interface SearchDoc {
+  /** `question-12`, `answer-40`, `guide-the-drive-pipe--friction` (letters, digits, - and _ only) */
+  id: string;
+  kind: SearchKind;
+  title: string;
+  url: string;
+  /** the text searched and quoted in snippets (after the title) */
+  text: string;
+  tags: string[];
+  /** the thread has an answer that fixed it (null for guides) */
+  solved: boolean | null;
+  /** a guide's level (null for posts) */
+  level: string | null;
+  /** hidden or deleted, itself or its thread: only moderators find it */
+  hidden: boolean;
+  /** ISO date of the post, or of the guide's last update */
+  date: string;
+  /** the question's id for posts: used to reindex or drop a thread at once */
+  threadId: number | null;
+}
+
+/** A document's title and tags: matches here rank above matches in the text. */
+export function headText(d: Pick<SearchDoc, 'title' | 'tags'>): string {
+  return `${d.title}\n${d.tags.map((t) => t.replace(/-/g, ' ')).join(' ')}`;
+}
+
+/** MDX to readable words: drop imports, JSX tags (keep their text), Markdown marks. */
+export function mdxToText(mdx: string): string {
+  return mdx
+    .replace(/^(import|export)\s.*$/gm, '')
+    .replace(/<[A-Z][\w.]*(?:\s[^>]*?)?\/>/gs, ' ')
+    .replace(/<\/?[A-Za-z][\w.]*(?:\s[^>]*?)?>/gs, ' ')
+    .replace(/!\[([^\]]*)\]\([^)]*\)/g, '$1')
+    .replace(/\[([^\]]*)\]\([^)]*\)/g, '$1')
+    .replace(/\$\$?([^$]*)\$\$?/g, ' $1 ')
+    .replace(/[*_`>#|~]+/g, ' ')
+    .replace(/[ \t]+/g, ' ')
+    .replace(/\n{2,}/g, '\n')
+    .trim();
+}
+
+/** A guide cut at its h2/h3 headings; anchors as rehype-slug makes them (github-slugger). */
+export function guideSections(guide: GuideFile): SearchDoc[] {
+  const slugger = new GithubSlugger();
+  const sections: { heading: string | null; anchor: string | null; lines: string[] }[] = [{ heading: null, anchor: null, lines: [] }];
+  let inFence = false;
+  for (const line of guide.body.split('\n')) {
+    if (/^```/.test(line)) inFence = !inFence;
+    const h = !inFence && /^(#{2,3})\s+(.+?)\s*#*$/.exec(line);
+    if (h) {
+      const heading = mdxToText(h[2]);
+      sections.push({ heading, anchor: slugger.slug(heading), lines: [] });
+    } else sections[sections.length - 1].lines.push(line);
+  }
+  return sections
+    .map((s) => ({ ...s, text: mdxToText(s.lines.join('\n')) }))
+    .filter((s) => s.heading || s.text)
+    .map((s) => ({
+      id: `guide-${guide.slug}${s.anchor ? `--${s.anchor.replace(/[^a-z0-9_-]/g, '')}` : ''}`,
+      kind: 'guide' as const,
+      title: s.heading ? `${guide.meta.title}: ${s.heading}` : guide.meta.title,
+      url: `/guides/${guide.slug}${s.anchor ? `#${s.anchor}` : ''}`,
+      text: s.heading ? s.text : `${guide.meta.summary}\n${s.text}`,
+      tags: guide.meta.tags,
+      solved: null,
+      level: guide.meta.level,
+      hidden: false,
+      date: new Date(`${guide.meta.updated}T00:00:00Z`).toISOString(),
+      threadId: null,
+    }));
+}
+
+export function allGuideDocs(): SearchDoc[] {
+  return listGuides().flatMap(guideSections);
+}
+
+/** "drivePipeSize" → "drive pipe size" */
+const words = (key: string) => key.replace(/([a-z])([A-Z])/g, '$1 $2').toLowerCase();
+
+export function siteSheetText(sheet: Record<string, unknown> | null | undefined): string {
+  if (!sheet) return '';
+  return Object.entries(sheet)
+    .filter(([, v]) => v !== null && v !== undefined && v !== '')
+    .map(([k, v]) => {
+      const value = Array.isArray(v) ? v.join(', ') : String(v);
+      // nominal sizes are stored as inches without the unit ("3/4", "1-1/4")
+      return `${words(k)} ${/size$/i.test(k) && /^\d[\d/.\s-]*$/.test(value) ? `${value} inch` : value}`;
+    })
+    .join('; ');
+}
+
+interface QuestionRow {
+  id: number;
+  title: string;
+  body: string;
+  siteSheet: Record<string, unknown> | null;
+  fixedAnswerId: number | null;
+  hiddenAt: Date | null;
+  deletedAt: Date | null;
+  createdAt: Date;
+  tags?: { slug: string }[];
+}
+
+function questionDoc(q: QuestionRow): SearchDoc {
+  const sheet = siteSheetText(q.siteSheet);
+  return {
+    id: `question-${q.id}`,
+    kind: 'question',
+    title: q.title,
+    url: `/questions/${q.id}`,
+    text: sheet ? `${sheet}\n${q.body}` : q.body,
+    tags: (q.tags ?? []).map((t) => t.slug),
+    solved: q.fixedAnswerId !== null,
+    level: null,
+    hidden: Boolean(q.hiddenAt || q.deletedAt),
+    date: q.createdAt.toISOString(),
+    threadId: q.id,
+  };
+}
+
+interface PostRow {
+  id: number;
+  questionId: number;
+  body: string;
+  hiddenAt: Date | null;
+  deletedAt: Date | null;
+  createdAt: Date;
+}
+
+function postDoc(kind: 'answer' | 'reply', p: PostRow, q: SearchDoc): SearchDoc {
+  return {
+    id: `${kind}-${p.id}`,
+    kind,
+    title: q.title,
+    url: `${q.url}#${kind}-${p.id}`,
+    text: p.body,
+    tags: q.tags,
+    solved: q.solved,
+    level: null,
+    hidden: q.hidden || Boolean(p.hiddenAt || p.deletedAt),
+    date: p.createdAt.toISOString(),
+    threadId: q.threadId,
+  };
+}
+
+const Q_ATTRS = ['id', 'title', 'body', 'siteSheet', 'fixedAnswerId', 'hiddenAt', 'deletedAt', 'createdAt'];
+const P_ATTRS = ['id', 'questionId', 'body', 'hiddenAt', 'deletedAt', 'createdAt'];
+
+/** Every document of the given threads: the question, its answers and replies. */
+export async function threadDocs(questionIds: number[]): Promise<SearchDoc[]> {
+  if (questionIds.length === 0) return [];
+  const { Question, Answer, Reply, Tag } = initModels();
+  const [questions, answers, replies] = await Promise.all([
+    Question.findAll({ attributes: Q_ATTRS, where: { id: { [Op.in]: questionIds } }, include: [{ model: Tag, as: 'tags', attributes: ['slug'], through: { attributes: [] } }] }),
+    Answer.findAll({ attributes: P_ATTRS, where: { questionId: { [Op.in]: questionIds } }, raw: true }),
+    Reply.findAll({ attributes: P_ATTRS, where: { questionId: { [Op.in]: questionIds } }, raw: true }),
+  ]);
+  const byId = new Map(questions.map((q) => [q.id, questionDoc(q.get({ plain: true }) as QuestionRow)]));
+  const out = [...byId.values()];
+  for (const a of answers as unknown as PostRow[]) {
+    const q = byId.get(a.questionId);
+    if (q) out.push(postDoc('answer', a, q));
+  }
+  for (const r of replies as unknown as PostRow[]) {
+    const q = byId.get(r.questionId);
+    if (q) out.push(postDoc('reply', r, q));
+  }
+  return out;
+}
+
+/** Every thread in the database, a batch of questions at a time (for rebuilds). */
+export async function* allThreadDocs(batch = 2000): AsyncGenerator<SearchDoc[]> {
+  const { Question } = initModels();
+  let after = 0;
+  for (;;) {
+    const ids = (await Question.findAll({ attributes: ['id'], where: { id: { [Op.gt]: after } }, order: [['id', 'ASC']], limit: batch, raw: true })).map((r) => r.id);
+    if (ids.length === 0) return;
+    yield await threadDocs(ids);
+    after = ids[ids.length - 1];
+  }
+}

@@ -1,0 +1,193 @@
+import { mkdirSync, statSync, writeFileSync } from 'node:fs';
+import path from 'node:path';
+import { allGuideDocs, allThreadDocs, threadDocs, type SearchDoc, type SearchKind } from './documents';
+import type { SearchEngine, SearchFilters } from './engine';
+import { FlexEngine } from './flex-engine';
+import { MeiliEngine } from './meili-engine';
+import { queryTerms } from './normalize';
+import { highlight, snippet, type Segment } from './snippet';
+
+export { SEARCH_KINDS, type SearchKind, type SearchDoc } from './documents';
+export type { Segment } from './snippet';
+
+/**
+ * Search across guides, questions, answers, replies and field log entries.
+ * One interface, two engines: flexsearch in this process (the default), or
+ * Meilisearch when MEILISEARCH_URL is set (shared by every app instance).
+ */
+
+interface State {
+  engine: SearchEngine;
+  built: Promise<void> | null;
+  builtAt: number;
+  checkedAt: number;
+}
+
+const g = globalThis as unknown as { __clackwaterSearch?: State };
+
+export function createEngine(env: Record<string, string | undefined> = process.env): SearchEngine {
+  return env.MEILISEARCH_URL ? new MeiliEngine(env.MEILISEARCH_URL, env.MEILISEARCH_KEY || undefined, env.MEILISEARCH_INDEX || 'clackwater') : new FlexEngine();
+}
+
+function state(): State {
+  g.__clackwaterSearch ??= { engine: createEngine(), built: null, builtAt: 0, checkedAt: 0 };
+  return g.__clackwaterSearch;
+}
+
+/** Use this engine from now on (tests swap in a Meilisearch adapter on a fake server). */
+export function useEngine(engine: SearchEngine) {
+  g.__clackwaterSearch = { engine, built: null, builtAt: 0, checkedAt: 0 };
+}
+
+export function searchEngine(): SearchEngine {
+  return state().engine;
+}
+
+/** `npm run search:rebuild` touches this file; in-process indexes older than it rebuild. */
+export function rebuildStampPath() {
+  return path.join(process.env.SEARCH_STATE_DIR ?? path.join(process.cwd(), '.data', 'search'), 'rebuilt-at');
+}
+
+function stampTime(): number {
+  try {
+    return statSync(/* turbopackIgnore: true */ rebuildStampPath()).mtimeMs;
+  } catch {
+    return 0;
+  }
+}
+
+/** Fills an engine from the database and content/guides; returns how many documents. */
+async function fill(engine: SearchEngine): Promise<{ documents: number; ms: number }> {
+  const t0 = performance.now();
+  await engine.clear();
+  const guides = allGuideDocs();
+  await engine.upsert(guides);
+  let documents = guides.length;
+  for await (const batch of allThreadDocs()) {
+    await engine.upsert(batch);
+    documents += batch.length;
+  }
+  return { documents, ms: performance.now() - t0 };
+}
+
+/** Rebuilds this process's index (and a shared Meilisearch index) now. */
+export async function rebuildIndex(): Promise<{ documents: number; ms: number }> {
+  const s = state();
+  s.builtAt = Date.now();
+  const run = fill(s.engine);
+  s.built = run.then(() => undefined);
+  s.built.catch(() => (s.built = null));
+  return run;
+}
+
+/** Marks a rebuild for every in-process index (they rebuild on their next search). */
+export function stampRebuild() {
+  const file = rebuildStampPath();
+  mkdirSync(/* turbopackIgnore: true */ path.dirname(file), { recursive: true });
+  writeFileSync(/* turbopackIgnore: true */ file, new Date().toISOString());
+}
+
+/**
+ * The index, built when missing: an in-process index starts empty in every new
+ * server, a Meilisearch index is built when it holds nothing.
+ */
+export async function ensureIndex(): Promise<void> {
+  const s = state();
+  const now = Date.now();
+  if (s.built && s.engine.name === 'flexsearch' && now - s.checkedAt > 5_000) {
+    s.checkedAt = now;
+    if (stampTime() > s.builtAt) s.built = null;
+  }
+  s.built ??= (async () => {
+    s.builtAt = Date.now();
+    if (s.engine.name === 'meilisearch' && (await s.engine.count()) > 0) return;
+    await fill(s.engine);
+  })().catch((err) => {
+    s.built = null;
+    throw err;
+  });
+  return s.built;
+}
+
+/**
+ * Brings a thread's documents (question, answers, replies) up to date after a write:
+ * called by every create, edit, hide, restore and delete, in the same request.
+ * The database stays the record: if the engine fails, the write still stands and the
+ * error is logged; the next rebuild repairs the index.
+ */
+export async function indexThread(questionId: number): Promise<void> {
+  const s = state();
+  if (!s.built) return; // not built yet: the coming build reads the database anyway
+  try {
+    await s.built;
+    await s.engine.upsert(await threadDocs([questionId]));
+  } catch (err) {
+    console.error(`search: could not index thread ${questionId}:`, err instanceof Error ? err.message : err);
+  }
+}
+
+/** Adds or replaces documents of another kind (field log entries). */
+export async function indexDocs(docs: SearchDoc[]): Promise<void> {
+  const s = state();
+  if (!s.built) return;
+  try {
+    await s.built;
+    await s.engine.upsert(docs);
+  } catch (err) {
+    console.error('search: could not index documents:', err instanceof Error ? err.message : err);
+  }
+}
+
+export interface SearchParams {
+  q: string;
+  kinds?: SearchKind[];
+  tag?: string;
+  solved?: boolean;
+  level?: string;
+  limit: number;
+  offset: number;
+}
+
+export interface SearchItem {
+  id: string;
+  kind: SearchKind;
+  url: string;
+  title: Segment[];
+  snippet: Segment[];
+  tags: string[];
+  solved: boolean | null;
+  level: string | null;
+  hidden: boolean;
+  date: string;
+}
+
+export interface SearchResult {
+  items: SearchItem[];
+  total: number;
+  engine: SearchEngine['name'];
+  ms: number;
+}
+
+export async function search(params: SearchParams, viewer: { seeHidden: boolean }): Promise<SearchResult> {
+  const t0 = performance.now();
+  await ensureIndex();
+  const terms = queryTerms(params.q);
+  const filters: SearchFilters = { kinds: params.kinds, tag: params.tag, solved: params.solved, level: params.level, includeHidden: viewer.seeHidden };
+  const { docs, total } = await searchEngine().search(terms, filters, params.limit, params.offset);
+  const set = new Set(terms);
+  const items = docs.map((d) => ({
+    id: d.id,
+    kind: d.kind,
+    url: d.url,
+    title: highlight(d.title, set),
+    snippet: snippet(d.text, set),
+    tags: d.tags,
+    solved: d.solved,
+    level: d.level,
+    hidden: d.hidden,
+    date: d.date,
+  }));
+  return { items, total, engine: searchEngine().name, ms: performance.now() - t0 };
+}
+
+export const plain = (segments: Segment[]) => segments.map((s) => s.text).join('');
