@@ -1,6 +1,6 @@
 import type { Metadata } from 'next';
 import { searchQuerySchema } from '@/lib/validation/search';
-import { search, type SearchResult } from '@/lib/search';
+import { search, SearchUnavailableError, type SearchResult } from '@/lib/search';
 import { GUIDE_LEVELS } from '@/lib/guides/frontmatter';
 import { listGuides } from '@/lib/guides/content';
 import { currentUserInPage } from '@/lib/auth/session';
@@ -21,13 +21,20 @@ export default async function SearchPage({ searchParams }: { searchParams: Promi
   const query = parsed.success ? parsed.data : searchQuerySchema.parse({ q: typeof raw.q === 'string' ? raw.q.slice(0, 200) : '' });
 
   let result: SearchResult | null = null;
+  let unavailable: string | null = null;
   let tags: { slug: string; name: string }[] = [];
   try {
     const viewer = await currentUserInPage();
     tags = (await initModels().Tag.findAll({ attributes: ['slug', 'name'], order: [['name', 'ASC']] })).map((t) => ({ slug: t.slug, name: t.name }));
     if (query.q) {
       const { q, kind, ...rest } = query;
-      result = await search({ q, kinds: kind, ...rest }, { seeHidden: can(viewer, 'moderation.seeHidden') });
+      result = await search({ q, kinds: kind, ...rest }, { seeHidden: can(viewer, 'moderation.seeHidden') }).catch((err) => {
+        if (err instanceof SearchUnavailableError) {
+          unavailable = err.message;
+          return null;
+        }
+        throw err;
+      });
     }
   } catch (err) {
     if (isDatabaseUnavailable(err)) return <ServiceUnavailable what="search" />;
@@ -51,6 +58,11 @@ export default async function SearchPage({ searchParams }: { searchParams: Promi
         Guides, questions, answers and field logs. Sizes match however they are written (¾&quot;, 0.75 in, 19 mm, DN20), and so do the trade’s
         other names (supply head for fall, impulse valve for waste valve).
       </p>
+      {unavailable ? (
+        <p role="alert" className="cw-card text-sm">
+          {unavailable}
+        </p>
+      ) : null}
       {problem ? (
         <p role="alert" className="cw-card text-sm">
           {problem}

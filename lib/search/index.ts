@@ -138,6 +138,13 @@ export async function indexDocs(docs: SearchDoc[]): Promise<void> {
   }
 }
 
+/** The search engine (a Meilisearch server) did not answer: a 503 with a plain message. */
+export class SearchUnavailableError extends Error {
+  constructor(cause: unknown) {
+    super('Search is not answering just now. Please try again in a minute; guides and questions can still be browsed.', { cause });
+  }
+}
+
 export interface SearchParams {
   q: string;
   kinds?: SearchKind[];
@@ -170,10 +177,20 @@ export interface SearchResult {
 
 export async function search(params: SearchParams, viewer: { seeHidden: boolean }): Promise<SearchResult> {
   const t0 = performance.now();
-  await ensureIndex();
   const terms = queryTerms(params.q);
   const filters: SearchFilters = { kinds: params.kinds, tag: params.tag, solved: params.solved, level: params.level, includeHidden: viewer.seeHidden };
-  const { docs, total } = await searchEngine().search(terms, filters, params.limit, params.offset);
+  let found: Awaited<ReturnType<SearchEngine['search']>>;
+  try {
+    await ensureIndex();
+    found = await searchEngine().search(terms, filters, params.limit, params.offset);
+  } catch (err) {
+    if (searchEngine().name === 'meilisearch') {
+      console.error('search: Meilisearch failed:', err instanceof Error ? err.message : err);
+      throw new SearchUnavailableError(err);
+    }
+    throw err;
+  }
+  const { docs, total } = found;
   const set = new Set(terms);
   const items = docs.map((d) => ({
     id: d.id,

@@ -1,7 +1,7 @@
 import { NextResponse, type NextRequest } from 'next/server';
-import { queryObject, serverError, validationError } from '@/lib/http/errors';
+import { apiError, queryObject, serverError, validationError } from '@/lib/http/errors';
 import { searchQuerySchema } from '@/lib/validation/search';
-import { search } from '@/lib/search';
+import { search, SearchUnavailableError } from '@/lib/search';
 import { currentUser } from '@/lib/auth/session';
 import { can } from '@/lib/auth/policy';
 
@@ -21,6 +21,7 @@ export async function GET(request: NextRequest) {
     const result = await search({ q, kinds: kind, ...rest }, { seeHidden: can(viewer, 'moderation.seeHidden') });
     return NextResponse.json(result, { headers: { 'Cache-Control': 'private, no-store' } });
   } catch (err) {
+    if (err instanceof SearchUnavailableError) return apiError(503, err.message, undefined, 'search_unavailable');
     return serverError(err);
   }
 }

@@ -1,0 +1,111 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { GET as searchGET } from '@/app/api/search/route';
+import { POST as actionPOST } from '@/app/api/review/actions/route';
+import { createEngine, rebuildIndex, search, useEngine } from '@/lib/search';
+import { FlexEngine } from '@/lib/search/flex-engine';
+import { MeiliEngine } from '@/lib/search/meili-engine';
+import type { SearchParams } from '@/lib/search';
+import { initModels } from '@/models';
+import { startFakeMeilisearch, type FakeMeili } from '../support/fake-meilisearch';
+import { freshDemoDatabase } from './db';
+import { actAs } from './act-as';
+
+const { call } = actAs('10.8.1');
+
+/** A fixed set of builders' queries, with and without filters. */
+const QUERIES: Omit<SearchParams, 'limit' | 'offset'>[] = [
+  { q: 'Has anyone had a 1-inch pump stop when the creek drops?' },
+  { q: 'impulse valve weight' },
+  { q: 'pressure tank water-logged' },
+  { q: '19 mm drive line' },
+  { q: 'frost drain' },
+  { q: 'supply head' },
+  { q: 'pumps in parallel one delivery line' },
+  { q: 'snifter', kinds: ['question'] },
+  { q: 'drive pipe length', kinds: ['guide'], level: 'first build' },
+  { q: 'waste valve', solved: true },
+  { q: 'tank', tag: 'storage' },
+];
+
+async function topIds(params: Omit<SearchParams, 'limit' | 'offset'>, n: number, seeHidden = false) {
+  return (await search({ ...params, limit: n, offset: 0 }, { seeHidden })).items.map((i) => i.id);
+}
+/** How many documents match, and which (when they fit in one page of 50). */
+async function matches(params: Omit<SearchParams, 'limit' | 'offset'>) {
+  const r = await search({ ...params, limit: 50, offset: 0 }, { seeHidden: false });
+  return { total: r.total, ids: r.total <= 50 ? r.items.map((i) => i.id).sort() : null };
+}
+
+describe('the Meilisearch adapter against a fake server gives the in-process results', () => {
+  let fake: FakeMeili;
+  const flexTop = new Map<string, string[]>();
+  const flexAll = new Map<string, Awaited<ReturnType<typeof matches>>>();
+
+  beforeAll(async () => {
+    await freshDemoDatabase();
+    useEngine(new FlexEngine());
+    await rebuildIndex();
+    for (const q of QUERIES) {
+      flexTop.set(JSON.stringify(q), await topIds(q, 3));
+      flexAll.set(JSON.stringify(q), await matches(q));
+    }
+    fake = await startFakeMeilisearch();
+  });
+  afterAll(async () => {
+    useEngine(new FlexEngine());
+    await fake?.close();
+  });
+
+  it('MEILISEARCH_URL picks the adapter', () => {
+    expect(createEngine({ MEILISEARCH_URL: fake.url }).name).toBe('meilisearch');
+    expect(createEngine({}).name).toBe('flexsearch');
+  });
+
+  it('builds the index through the API: create, settings, documents', async () => {
+    useEngine(new MeiliEngine(fake.url, undefined, 'clackwater_test'));
+    const { documents } = await rebuildIndex();
+    const idx = fake.indexes.get('clackwater_test')!;
+    expect(idx.docs.size).toBe(documents);
+    expect(idx.settings).toMatchObject({ searchableAttributes: ['head', 'body'], filterableAttributes: expect.arrayContaining(['kind', 'tags', 'solved', 'level', 'hidden']) });
+    expect(fake.requests).toEqual(expect.arrayContaining(['POST /indexes', 'PATCH /indexes/clackwater_test/settings', 'POST /indexes/clackwater_test/documents']));
+  });
+
+  // Both rank by words, then title/tag matches; their last tie-breaks differ (Meilisearch's
+  // proximity and document order against our rarity of the matched terms), so the first
+  // result and the whole set of matches are compared exactly, the rest of the order not.
+  it('returns the same top results and the same matches as flexsearch for each query', async () => {
+    for (const q of QUERIES) {
+      const key = JSON.stringify(q);
+      const top = await topIds(q, 3);
+      const expected = flexTop.get(key)!;
+      expect(top.length, key).toBeGreaterThan(0);
+      expect(top[0], key).toBe(expected[0]);
+      expect(await matches(q), key).toEqual(flexAll.get(key));
+    }
+  });
+
+  it('keeps hidden posts from everyone but moderators, through GET /api/search', async () => {
+    const q = (await initModels().Question.findOne({ where: { title: 'Using a pressure tank as the air chamber' } }))!;
+    const res = await call(actionPOST, 'POST', '/api/review/actions', 'moss_moderator', { action: 'hide', postType: 'question', postId: q.id, reason: 'checking the adapter' });
+    expect(res.status).toBe(200);
+    const found = async (who: string | null) => (await call(searchGET, 'GET', '/api/search?q=old%20well%20pressure%20tank&limit=20', who)).body;
+    const member = await found('highcrag_shepherd');
+    expect(member.engine).toBe('meilisearch');
+    expect(member.items.map((i: { id: string }) => i.id)).not.toContain(`question-${q.id}`);
+    expect((await found('moss_moderator')).items.map((i: { id: string }) => i.id)).toContain(`question-${q.id}`);
+    expect(fake.requests.filter((r) => r === 'POST /indexes/clackwater_test/search').length).toBeGreaterThan(0);
+  });
+
+  it('a Meilisearch that stops answering gives a readable 503, and writes still stand', async () => {
+    await fake.close();
+    const res = await call(searchGET, 'GET', '/api/search?q=pump', null);
+    expect(res.status).toBe(503);
+    expect(res.body.error).toMatchObject({ code: 'search_unavailable', message: expect.stringMatching(/^Search is not answering just now/) });
+    expect(res.body.error.message).not.toMatch(/fetch|ECONNREFUSED|stack/i);
+    const q = (await initModels().Question.findOne({ order: [['id', 'ASC']] }))!;
+    const hide = await call(actionPOST, 'POST', '/api/review/actions', 'moss_moderator', { action: 'lock', postType: 'question', postId: q.id, reason: 'search is down' });
+    expect(hide.status).toBe(200);
+    expect((await initModels().Question.findByPk(q.id))!.lockedAt).not.toBeNull();
+    fake = await startFakeMeilisearch();
+  });
+});
