@@ -90,14 +90,15 @@ interface SimilarQuestion {
   fixed?: boolean;
 }
 
-/** Questions like this one, by tags and the site's fall and lift; silent when the search fails. */
-function useSimilarQuestions(tags: string[], fall: string, lift: string) {
+/** Questions like this one (search on its title, tags, fall and lift); silent when the search fails. */
+function useSimilarQuestions(title: string, tags: string[], fall: string, lift: string) {
   const [items, setItems] = useState<SimilarQuestion[]>([]);
-  const key = `${tags.join(',')}|${fall.trim()}|${lift.trim()}`;
+  const key = `${tags.join(',')}|${fall.trim()}|${lift.trim()}|${title.trim().replace(/\|/g, ' ')}`;
   useEffect(() => {
-    const [t, f, l] = key.split('|');
-    if (!t && !f && !l) return;
+    const [t, f, l, title] = key.split('|');
+    if (!t && !f && !l && !title) return;
     const q = new URLSearchParams();
+    if (title) q.set('title', title);
     if (t) q.set('tags', t);
     if (f) q.set('fall', f);
     if (l) q.set('lift', l);
@@ -117,7 +118,7 @@ function useSimilarQuestions(tags: string[], fall: string, lift: string) {
       ctl.abort();
     };
   }, [key]);
-  return key === '||' ? [] : items;
+  return key === '|||' ? [] : items;
 }
 
 /** Asking a question: title, what happened (Markdown, previewed), tags, the site sheet, photos. */
@@ -145,10 +146,11 @@ export function AskForm({ tags, defaultTag, guide }: { tags: { slug: string; nam
   const body = useDeferredValue(useWatch({ control, name: 'body' }) ?? '');
   const sheet = (useWatch({ control, name: 'siteSheet' }) ?? {}) as SiteSheet;
   const chosenTags = useWatch({ control, name: 'tags' }) ?? [];
+  const title = useDeferredValue(useWatch({ control, name: 'title' }) ?? '');
   // keyed on the values, not the object: the engine runs once per change to the site sheet
   const sheetKey = JSON.stringify(STALL_PROPS.map((k) => sheet[k] ?? ''));
   const stall = useMemo(() => runStall(Object.fromEntries(STALL_PROPS.map((k, i) => [k, (JSON.parse(sheetKey) as string[])[i]]))), [sheetKey]);
-  const similar = useSimilarQuestions(chosenTags, sheet.fall ?? '', sheet.lift ?? '');
+  const similar = useSimilarQuestions(title, chosenTags, sheet.fall ?? '', sheet.lift ?? '');
 
   async function onSubmit(values: AskOutput) {
     const siteSheet = Object.fromEntries(Object.entries(values.siteSheet ?? {}).filter(([, v]) => !blank(v)));

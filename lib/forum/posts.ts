@@ -1,6 +1,5 @@
-import { Op, type Transaction } from 'sequelize';
+import type { Transaction } from 'sequelize';
 import { getSequelize } from '@/lib/db';
-import { parseQuantity } from '@/lib/hydraulics';
 import { initModels } from '@/models';
 import type { SessionUser } from '@/lib/auth/session';
 import { can, REFUSAL } from '@/lib/auth/policy';
@@ -197,35 +196,4 @@ export async function setFollow(user: SessionUser, questionId: number, on: boole
   if (on) await QuestionFollow.findOrCreate({ where: { questionId, userId: user.id } });
   else await QuestionFollow.destroy({ where: { questionId, userId: user.id } });
   return on;
-}
-
-/** Solved questions sharing a tag, nearest in fall and lift first. */
-export async function similarQuestions(tags: string[], fallM?: number, liftM?: number, limit = 5) {
-  const { Question, Tag } = initModels();
-  if (tags.length === 0) return [];
-  const rows = await Question.findAll({
-    attributes: ['id', 'title', 'fixedAnswerId', 'siteSheet', 'createdAt'],
-    include: [{ model: Tag, as: 'tags', attributes: ['slug'], where: { slug: { [Op.in]: tags } }, through: { attributes: [] } }],
-    order: [['createdAt', 'DESC']],
-    limit: 50,
-  });
-  const read = (s: unknown) => {
-    try {
-      return typeof s === 'string' ? parseQuantity(s, 'length') : undefined;
-    } catch {
-      return undefined;
-    }
-  };
-  const distance = (q: (typeof rows)[number]) => {
-    const sheet = (q.siteSheet ?? {}) as Record<string, string>;
-    const f = read(sheet.fall);
-    const l = read(sheet.lift);
-    if (fallM === undefined || liftM === undefined || f === undefined || l === undefined) return 10;
-    return Math.abs(Math.log(f / fallM)) + Math.abs(Math.log(l / liftM));
-  };
-  return rows
-    .map((q) => ({ id: q.id, title: q.title, fixed: q.fixedAnswerId !== null, d: distance(q) + (q.fixedAnswerId !== null ? 0 : 1) }))
-    .sort((a, b) => a.d - b.d)
-    .slice(0, limit)
-    .map(({ id, title, fixed }) => ({ id, title, fixed }));
 }

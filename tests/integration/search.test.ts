@@ -6,6 +6,7 @@ import { POST as answerPOST } from '@/app/api/questions/[id]/answers/route';
 import { POST as replyPOST } from '@/app/api/questions/[id]/replies/route';
 import { PUT as answerPUT } from '@/app/api/answers/[id]/route';
 import { POST as actionPOST } from '@/app/api/review/actions/route';
+import { GET as similarGET } from '@/app/api/questions/similar/route';
 import { rebuildIndex, searchEngine } from '@/lib/search';
 import { freshDemoDatabase } from './db';
 import { actAs } from './act-as';
@@ -97,6 +98,16 @@ describe('search follows every write (real MariaDB, in-process engine)', () => {
       expect(await ids(q, 'ferncombe_tamsin')).not.toContain(id);
       expect(await ids(q, 'moss_moderator')).toContain(id);
     }
+  });
+
+  it('the ask form’s similar questions come from search: other words for the part, heights in other units', async () => {
+    // 1.2 m = 3.94 ft, the demo thread's 4 ft of fall (1 ft = 0.3048 m exactly)
+    const res = await call(similarGET, 'GET', `/api/questions/similar?${new URLSearchParams({ title: 'How heavy should the impulse valve be', tags: 'tuning', fall: '1.2 m' })}`, null);
+    expect(res.status).toBe(200);
+    expect(res.body.items[0]).toMatchObject({ title: 'What weight on the waste valve for 4 ft of fall?' });
+    const tooLong = await call(similarGET, 'GET', `/api/questions/similar?title=${'x'.repeat(161)}`, null);
+    expect(tooLong.status).toBe(400);
+    expect(tooLong.body.error.field).toBe('title');
   });
 
   it('validates its parameters, naming the field', async () => {

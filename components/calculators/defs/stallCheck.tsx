@@ -1,5 +1,6 @@
 import { NOMINAL_LABELS, NOMINAL_SIZES, runStallCheck, SYMPTOM_LABELS, SYMPTOMS, type StallCheckResults } from '@/lib/hydraulics';
 import type { CalculatorDef } from '../kit/types';
+import { RelatedThreads } from '@/components/search/RelatedThreads';
 import { normalizeSeries, normalizeSize, resolvePipeRun, seriesOptions, sizeOptions } from './shared';
 
 /** Words people and older links use for a symptom → the engine's code. */
@@ -64,6 +65,7 @@ export const stallCheckDef: CalculatorDef<StallCheckResults> = {
     r.causes.length === 0 ? (
       <p className="text-sm">Nothing in these numbers points to a cause. Tick what the pump does to rank the likely ones.</p>
     ) : (
+      <>
       <ol className="flex list-none flex-col gap-2 pl-0" aria-label="Likely causes" data-testid="stall-causes">
         {r.causes.slice(0, 6).map((c, i) => (
           <li key={c.code} className="rounded-md border border-limestone-300 p-2 text-sm dark:border-creek-600" data-cause={c.code}>
@@ -77,6 +79,8 @@ export const stallCheckDef: CalculatorDef<StallCheckResults> = {
           </li>
         ))}
       </ol>
+      <RelatedThreads query={r.causes.slice(0, 2).map((c) => c.title).join(' ')} />
+      </>
     ),
 };
 
