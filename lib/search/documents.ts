@@ -12,6 +12,12 @@ export interface SearchDoc {
   id: string;
   kind: SearchKind;
   title: string;
+  /**
+   * What ranks above the text: a question's title and tags, a guide section's heading
+   * (the guide's title and tags for its opening). Answers and replies show their
+   * thread's title but rank on their own words, so the question comes before them.
+   */
+  head: string;
   url: string;
   /** the text searched and quoted in snippets (after the title) */
   text: string;
@@ -28,10 +34,7 @@ export interface SearchDoc {
   threadId: number | null;
 }
 
-/** A document's title and tags: matches here rank above matches in the text. */
-export function headText(d: Pick<SearchDoc, 'title' | 'tags'>): string {
-  return `${d.title}\n${d.tags.map((t) => t.replace(/-/g, ' ')).join(' ')}`;
-}
+const tagWords = (tags: string[]) => tags.map((t) => t.replace(/-/g, ' ')).join(' ');
 
 /** MDX to readable words: drop imports, JSX tags (keep their text), Markdown marks. */
 export function mdxToText(mdx: string): string {
@@ -68,6 +71,7 @@ export function guideSections(guide: GuideFile): SearchDoc[] {
       id: `guide-${guide.slug}${s.anchor ? `--${s.anchor.replace(/[^a-z0-9_-]/g, '')}` : ''}`,
       kind: 'guide' as const,
       title: s.heading ? `${guide.meta.title}: ${s.heading}` : guide.meta.title,
+      head: s.heading ?? `${guide.meta.title}\n${tagWords(guide.meta.tags)}`,
       url: `/guides/${guide.slug}${s.anchor ? `#${s.anchor}` : ''}`,
       text: s.heading ? s.text : `${guide.meta.summary}\n${s.text}`,
       tags: guide.meta.tags,
@@ -112,13 +116,15 @@ interface QuestionRow {
 
 function questionDoc(q: QuestionRow): SearchDoc {
   const sheet = siteSheetText(q.siteSheet);
+  const tags = (q.tags ?? []).map((t) => t.slug);
   return {
     id: `question-${q.id}`,
     kind: 'question',
     title: q.title,
+    head: `${q.title}\n${tagWords(tags)}`,
     url: `/questions/${q.id}`,
     text: sheet ? `${sheet}\n${q.body}` : q.body,
-    tags: (q.tags ?? []).map((t) => t.slug),
+    tags,
     solved: q.fixedAnswerId !== null,
     level: null,
     hidden: Boolean(q.hiddenAt || q.deletedAt),
@@ -141,6 +147,7 @@ function postDoc(kind: 'answer' | 'reply', p: PostRow, q: SearchDoc): SearchDoc 
     id: `${kind}-${p.id}`,
     kind,
     title: q.title,
+    head: '',
     url: `${q.url}#${kind}-${p.id}`,
     text: p.body,
     tags: q.tags,

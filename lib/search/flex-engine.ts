@@ -1,5 +1,5 @@
 import { Index } from 'flexsearch';
-import { headText, type SearchDoc } from './documents';
+import type { SearchDoc } from './documents';
 import { CANDIDATES, passes, rank, type EngineResult, type SearchEngine, type SearchFilters } from './engine';
 import { indexTerms } from './normalize';
 
@@ -25,7 +25,7 @@ export class FlexEngine implements SearchEngine {
         this.body.remove(d.id);
       }
       this.docs.set(d.id, d);
-      this.head.add(d.id, indexTerms(headText(d)).join(' '));
+      this.head.add(d.id, indexTerms(d.head).join(' '));
       this.body.add(d.id, indexTerms(d.text).join(' '));
     }
   }

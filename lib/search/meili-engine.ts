@@ -1,10 +1,10 @@
 import { Meilisearch, type Index as MeiliIndex } from 'meilisearch';
-import { headText, type SearchDoc } from './documents';
+import type { SearchDoc } from './documents';
 import { CANDIDATES, type EngineResult, type SearchEngine, type SearchFilters } from './engine';
 import { indexTerms } from './normalize';
 
-/** the document as stored: our encoded terms of the title/tags (`head`) and of the text (`body`) */
-type MeiliDoc = SearchDoc & { head: string; body: string };
+/** the document as stored, with our encoded terms of its head and of its text */
+type MeiliDoc = SearchDoc & { headTerms: string; bodyTerms: string };
 
 const WAIT = { timeout: 30_000, interval: 25 };
 const quote = (s: string) => JSON.stringify(s);
@@ -35,7 +35,7 @@ export class MeiliEngine implements SearchEngine {
       await this.client.createIndex(this.uid, { primaryKey: 'id' }).waitTask(WAIT);
       await this.index()
         .updateSettings({
-          searchableAttributes: ['head', 'body'],
+          searchableAttributes: ['headTerms', 'bodyTerms'],
           rankingRules: ['words', 'attribute', 'typo', 'proximity', 'sort', 'exactness'],
           filterableAttributes: ['kind', 'tags', 'solved', 'level', 'hidden', 'threadId'],
           stopWords: [],
@@ -52,7 +52,7 @@ export class MeiliEngine implements SearchEngine {
   async upsert(docs: SearchDoc[]) {
     if (docs.length === 0) return;
     await this.ready();
-    const task = await this.index().addDocuments(docs.map((d) => ({ ...d, head: indexTerms(headText(d)).join(' '), body: indexTerms(d.text).join(' ') })), { primaryKey: 'id' }).waitTask(WAIT);
+    const task = await this.index().addDocuments(docs.map((d) => ({ ...d, headTerms: indexTerms(d.head).join(' '), bodyTerms: indexTerms(d.text).join(' ') })), { primaryKey: 'id' }).waitTask(WAIT);
     if (task.status !== 'succeeded') throw new Error(`Meilisearch could not index documents: ${task.error?.message ?? task.status}`);
   }
 
@@ -89,7 +89,7 @@ export class MeiliEngine implements SearchEngine {
       limit: Math.min(limit, CANDIDATES),
       offset,
       matchingStrategy: 'last',
-      attributesToRetrieve: ['id', 'kind', 'title', 'url', 'text', 'tags', 'solved', 'level', 'hidden', 'date', 'threadId'],
+      attributesToRetrieve: ['id', 'kind', 'title', 'head', 'url', 'text', 'tags', 'solved', 'level', 'hidden', 'date', 'threadId'],
     });
     return { docs: res.hits as SearchDoc[], total: Math.min(res.estimatedTotalHits ?? res.hits.length, CANDIDATES) };
   }

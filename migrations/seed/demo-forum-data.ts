@@ -202,4 +202,17 @@ export const demoThreads: DemoThread[] = [
     daysAgo: 52,
     answers: [],
   },
+  {
+    author: 'highcrag_shepherd',
+    title: '1-inch pump stops every dry spell when the creek drops',
+    body: 'The 1" pump on the top creek runs all spring. In a dry spell the pool drops a few inches and within a day the waste valve stops shut. Clear it, it runs an hour, stops again. Drive pipe is 40 ft of 1¼" galvanised off a box in the pool.',
+    tags: ['stall', 'drive-pipe'],
+    daysAgo: 4,
+    siteSheet: { fall: '6 ft', lift: '45 ft', driveLength: '40 ft', driveSize: '1-1/4', driveMaterial: 'steel-sch40', pumpSize: '1', pumps: '1', symptoms: 'stops-after-some-beats' },
+    answers: [
+      { author: 'ironwheel_builds', hoursLater: 5, body: 'When the pool drops, the top of the drive pipe gets close to the surface and a vortex pulls air in; the air cushions the surge and the pump stalls. Set the intake a foot or more below the lowest water you expect, or raise the pool with a low weir of stones. Do the work from the bank when the creek is low, and not alone.', helpfulFrom: ['highcrag_shepherd'] },
+    ],
+    fixed: 0,
+    replies: [{ author: 'highcrag_shepherd', toAnswer: 0, hoursLater: 50, body: 'Lowered the intake box 14 inches. Ran through the whole dry week.' }],
+  },
 ];

@@ -66,7 +66,7 @@ describe('the Meilisearch adapter against a fake server gives the in-process res
     const { documents } = await rebuildIndex();
     const idx = fake.indexes.get('clackwater_test')!;
     expect(idx.docs.size).toBe(documents);
-    expect(idx.settings).toMatchObject({ searchableAttributes: ['head', 'body'], filterableAttributes: expect.arrayContaining(['kind', 'tags', 'solved', 'level', 'hidden']) });
+    expect(idx.settings).toMatchObject({ searchableAttributes: ['headTerms', 'bodyTerms'], filterableAttributes: expect.arrayContaining(['kind', 'tags', 'solved', 'level', 'hidden']) });
     expect(fake.requests).toEqual(expect.arrayContaining(['POST /indexes', 'PATCH /indexes/clackwater_test/settings', 'POST /indexes/clackwater_test/documents']));
   });
 
