@@ -34,9 +34,13 @@ function state(): State {
   return g.__clackwaterSearch;
 }
 
-/** Use this engine from now on (tests swap in a Meilisearch adapter on a fake server). */
-export function useEngine(engine: SearchEngine) {
-  g.__clackwaterSearch = { engine, built: null, builtAt: 0, checkedAt: 0 };
+/**
+ * Use this engine from now on (tests swap in a Meilisearch adapter on a fake server;
+ * benchmarks hand over an index they filled themselves with `filled`).
+ */
+export function useEngine(engine: SearchEngine, opts: { filled?: boolean } = {}) {
+  const now = Date.now();
+  g.__clackwaterSearch = { engine, built: opts.filled ? Promise.resolve() : null, builtAt: opts.filled ? now : 0, checkedAt: now };
 }
 
 export function searchEngine(): SearchEngine {

@@ -140,6 +140,8 @@ const SYNONYM_RE = new RegExp(
     .join('|')})(?:e?s|ing|ed)?\b`,
   'y',
 );
+/** the first word of each synonym phrase, to try the phrase rule only where it can match */
+const SYNONYM_FIRST_WORDS = new Set(SYNONYMS.flatMap((s) => s.phrases.map((p) => p.split(/[-\s]/)[0])));
 const SYNONYM_OF = new Map<string, string>(SYNONYMS.flatMap((s) => s.phrases.map((p) => [p.replace(/[-\s]+/g, ' '), s.term] as const)));
 
 /** flexsearch's English stop-word list */
@@ -166,16 +168,21 @@ export function tokenize(input: string): Token[] {
     }
     const atWordStart = i === 0 || !/[\p{L}\p{N}]/u.test(text[i - 1]);
     let matched: Token | null = null;
+    WORD_RE.lastIndex = i;
+    const w = WORD_RE.exec(text);
     if (atWordStart) {
-      for (const rule of RULES) {
-        rule.re.lastIndex = i;
-        const m = rule.re.exec(text);
-        if (m) {
-          matched = rule.make(m);
-          if (matched) break;
+      // the unit and size rules start at a digit, a vulgar fraction or "dn"; synonyms at their first word
+      if (/[\d¼½¾⅛⅜⅝⅞]/.test(ch) || (ch === 'd' && text[i + 1] === 'n')) {
+        for (const rule of RULES) {
+          rule.re.lastIndex = i;
+          const m = rule.re.exec(text);
+          if (m) {
+            matched = rule.make(m);
+            if (matched) break;
+          }
         }
       }
-      if (!matched) {
+      if (!matched && w && SYNONYM_FIRST_WORDS.has(w[0])) {
         SYNONYM_RE.lastIndex = i;
         const m = SYNONYM_RE.exec(text);
         if (m) matched = { term: SYNONYM_OF.get(m[1].replace(/[-\s]+/g, ' ')) ?? m[1], start: i, end: i + m[0].length };
@@ -186,8 +193,6 @@ export function tokenize(input: string): Token[] {
       i = matched.end;
       continue;
     }
-    WORD_RE.lastIndex = i;
-    const w = WORD_RE.exec(text);
     if (!w) {
       i++;
       continue;

@@ -37,14 +37,25 @@ export function highlight(text: string, terms: Set<string>): Segment[] {
 export function snippet(text: string, terms: Set<string>, width = 200): Segment[] {
   const flat = text.replace(/\s+/g, ' ').trim();
   const spans = hitSpans(flat, terms);
+  // two pointers over the hits: the window of `width` characters with the most distinct hit words
   let best = 0;
   let bestCount = 0;
+  const inWindow = new Map<string, number>();
+  const word = (k: number) => flat.slice(spans[k].start, spans[k].end).toLowerCase();
   for (let i = 0, j = 0; i < spans.length; i++) {
-    while (j < spans.length && spans[j].end - spans[i].start <= width) j++;
-    const distinct = new Set(spans.slice(i, j).map((s) => flat.slice(s.start, s.end).toLowerCase())).size;
-    if (distinct > bestCount) {
-      bestCount = distinct;
+    while (j < spans.length && spans[j].end - spans[i].start <= width) {
+      const w = word(j++);
+      inWindow.set(w, (inWindow.get(w) ?? 0) + 1);
+    }
+    if (inWindow.size > bestCount) {
+      bestCount = inWindow.size;
       best = spans[i].start;
+    }
+    if (j > i) {
+      const w = word(i);
+      const c = inWindow.get(w)! - 1;
+      if (c === 0) inWindow.delete(w);
+      else inWindow.set(w, c);
     }
   }
   let from = Math.max(0, best - Math.floor(width / 4));
