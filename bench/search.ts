@@ -7,7 +7,7 @@
  */
 import { allGuideDocs, type SearchDoc } from '@/lib/search/documents';
 import { FlexEngine } from '@/lib/search/flex-engine';
-import { search, useEngine } from '@/lib/search';
+import { search, setSearchEngine } from '@/lib/search';
 import { benchQueries, generatePosts, type BenchPost } from './generate';
 
 const QUERIES = 1000;
@@ -62,7 +62,7 @@ async function inProcess(count: number) {
   const after = process.memoryUsage();
   console.log(`index: ${await engine.count()} documents (${count} posts and the guides) built in ${(buildMs / 1000).toFixed(1)} s`);
   console.log(`memory: resident ${mb(after.rss)} (+${mb(after.rss - before.rss)} for the index), heap used +${mb(after.heapUsed - before.heapUsed)}${(globalThis as { gc?: unknown }).gc ? '' : ' (run with --expose-gc for steadier figures)'}`);
-  useEngine(engine, { filled: true });
+  setSearchEngine(engine, { filled: true });
   const queries = benchQueries(QUERIES);
   for (const q of queries.slice(0, 50)) await search({ q: q.q, limit: 10, offset: 0 }, { seeHidden: false }); // warm-up
   const times: number[] = [];

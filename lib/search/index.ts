@@ -38,7 +38,7 @@ function state(): State {
  * Use this engine from now on (tests swap in a Meilisearch adapter on a fake server;
  * benchmarks hand over an index they filled themselves with `filled`).
  */
-export function useEngine(engine: SearchEngine, opts: { filled?: boolean } = {}) {
+export function setSearchEngine(engine: SearchEngine, opts: { filled?: boolean } = {}) {
   const now = Date.now();
   g.__clackwaterSearch = { engine, built: opts.filled ? Promise.resolve() : null, builtAt: opts.filled ? now : 0, checkedAt: now };
 }

@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { GET as searchGET } from '@/app/api/search/route';
 import { POST as actionPOST } from '@/app/api/review/actions/route';
-import { createEngine, rebuildIndex, search, useEngine } from '@/lib/search';
+import { createEngine, rebuildIndex, search, setSearchEngine } from '@/lib/search';
 import { FlexEngine } from '@/lib/search/flex-engine';
 import { MeiliEngine } from '@/lib/search/meili-engine';
 import type { SearchParams } from '@/lib/search';
@@ -43,7 +43,7 @@ describe('the Meilisearch adapter against a fake server gives the in-process res
 
   beforeAll(async () => {
     await freshDemoDatabase();
-    useEngine(new FlexEngine());
+    setSearchEngine(new FlexEngine());
     await rebuildIndex();
     for (const q of QUERIES) {
       flexTop.set(JSON.stringify(q), await topIds(q, 3));
@@ -52,7 +52,7 @@ describe('the Meilisearch adapter against a fake server gives the in-process res
     fake = await startFakeMeilisearch();
   });
   afterAll(async () => {
-    useEngine(new FlexEngine());
+    setSearchEngine(new FlexEngine());
     await fake?.close();
   });
 
@@ -62,7 +62,7 @@ describe('the Meilisearch adapter against a fake server gives the in-process res
   });
 
   it('builds the index through the API: create, settings, documents', async () => {
-    useEngine(new MeiliEngine(fake.url, undefined, 'clackwater_test'));
+    setSearchEngine(new MeiliEngine(fake.url, undefined, 'clackwater_test'));
     const { documents } = await rebuildIndex();
     const idx = fake.indexes.get('clackwater_test')!;
     expect(idx.docs.size).toBe(documents);
