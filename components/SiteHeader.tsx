@@ -40,8 +40,8 @@ export function SiteHeader() {
             id="site-search"
             name="q"
             type="search"
-            placeholder="Search guides, questions, field logs"
-            className="w-full min-w-0 rounded-md border border-creek-400 bg-creek-800 px-3 py-1.5 text-sm text-limestone-50 placeholder:text-creek-200 sm:w-64"
+            placeholder="Search guides, threads, field logs"
+            className="w-full min-w-0 rounded-md border border-creek-400 bg-creek-800 px-3 py-1.5 text-sm text-limestone-50 placeholder:text-creek-200 sm:w-72"
           />
         </form>
         </div>
