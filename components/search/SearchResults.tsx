@@ -30,6 +30,33 @@ function Marked({ segments }: { segments: Segment[] }) {
   );
 }
 
+const SOLVED_FILTERS = [
+  { value: '', label: 'any' },
+  { value: 'true', label: 'fixed' },
+  { value: 'false', label: 'not fixed yet' },
+];
+
+/** One labelled filter of the results. */
+function Filter({ label, name, value, options, onChange }: { label: string; name: Exclude<keyof SearchState, 'q'>; value: string; options: { value: string; label: string }[]; onChange: (patch: Partial<SearchState>) => void }) {
+  return (
+    <label className="flex items-center gap-1">
+      <span className="cw-muted">{label}</span>
+      <select
+        className="rounded-md border border-limestone-300 bg-limestone-50 px-2 py-1 text-sm dark:border-creek-600 dark:bg-creek-800"
+        value={value}
+        onChange={(e) => onChange({ [name]: e.target.value })}
+        name={name}
+      >
+        {options.map((o) => (
+          <option key={o.value} value={o.value}>
+            {o.label}
+          </option>
+        ))}
+      </select>
+    </label>
+  );
+}
+
 function toQuery(s: SearchState) {
   const p = new URLSearchParams();
   if (s.q.trim()) p.set('q', s.q.trim());
@@ -133,7 +160,6 @@ export function SearchResults({
     setState(next);
     run(next);
   };
-  const select = 'rounded-md border border-limestone-300 bg-limestone-50 px-2 py-1 text-sm dark:border-creek-600 dark:bg-creek-800';
   const activeId = active >= 0 ? `${id}-r${active}` : undefined;
 
   return (
@@ -160,46 +186,10 @@ export function SearchResults({
         />
         <fieldset className="flex flex-wrap items-center gap-3 text-sm">
           <legend className="sr-only">Filters</legend>
-          <label className="flex items-center gap-1">
-            <span className="cw-muted">Show</span>
-            <select className={select} value={state.kind} onChange={(e) => set({ kind: e.target.value })} name="kind">
-              {KIND_FILTERS.map((k) => (
-                <option key={k.value} value={k.value}>
-                  {k.label}
-                </option>
-              ))}
-            </select>
-          </label>
-          <label className="flex items-center gap-1">
-            <span className="cw-muted">Tag</span>
-            <select className={select} value={state.tag} onChange={(e) => set({ tag: e.target.value })} name="tag">
-              <option value="">any</option>
-              {tags.map((t) => (
-                <option key={t.slug} value={t.slug}>
-                  {t.name}
-                </option>
-              ))}
-            </select>
-          </label>
-          <label className="flex items-center gap-1">
-            <span className="cw-muted">Threads</span>
-            <select className={select} value={state.solved} onChange={(e) => set({ solved: e.target.value })} name="solved">
-              <option value="">any</option>
-              <option value="true">fixed</option>
-              <option value="false">not fixed yet</option>
-            </select>
-          </label>
-          <label className="flex items-center gap-1">
-            <span className="cw-muted">Guide level</span>
-            <select className={select} value={state.level} onChange={(e) => set({ level: e.target.value })} name="level">
-              <option value="">any</option>
-              {levels.map((l) => (
-                <option key={l} value={l}>
-                  {l}
-                </option>
-              ))}
-            </select>
-          </label>
+          <Filter label="Show" name="kind" value={state.kind} onChange={set} options={KIND_FILTERS} />
+          <Filter label="Tag" name="tag" value={state.tag} onChange={set} options={[{ value: '', label: 'any' }, ...tags.map((t) => ({ value: t.slug, label: t.name }))]} />
+          <Filter label="Threads" name="solved" value={state.solved} onChange={set} options={SOLVED_FILTERS} />
+          <Filter label="Guide level" name="level" value={state.level} onChange={set} options={[{ value: '', label: 'any' }, ...levels.map((l) => ({ value: l, label: l }))]} />
         </fieldset>
       </form>
 
