@@ -4,7 +4,7 @@ import { fileURLToPath } from 'node:url';
 export default defineConfig({
   resolve: { alias: { '@': fileURLToPath(new URL('.', import.meta.url)).replace(/\/$/, '') } },
   test: {
-    include: ['tests/{unit,hydraulics,integration}/**/*.test.{ts,tsx}'],
+    include: ['tests/{unit,hydraulics,integration,reliability}/**/*.test.{ts,tsx}'],
     environment: 'node',
     // Never the development database: settings default to the test server (scripts/env.sh).
     env: { CLACKWATER_ENV: 'test', SMTP_PORT: process.env.VITEST_SMTP_PORT ?? '2525', NEXTAUTH_SECRET: 'vitest-only-secret-not-for-use-anywhere-else', SITE_URL: 'http://127.0.0.1:3100', NEXTAUTH_URL: 'http://127.0.0.1:3100' },
