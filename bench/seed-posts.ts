@@ -4,17 +4,26 @@
  *   DB_NAME=clackwater_test_bench npx tsx bench/seed-posts.ts 100000
  * Refuses any database whose name lacks "test" (it starts from empty).
  */
-import { QueryTypes } from 'sequelize';
+import { QueryTypes, type Sequelize } from 'sequelize';
 import { getSequelize } from '@/lib/db';
 import { resetDatabase } from '../tests/integration/reset';
 import { generatePosts, type BenchPost } from './generate';
 
-async function main() {
-  const count = Number(process.argv[2] ?? 100_000);
-  const sequelize = getSequelize();
-  const t0 = performance.now();
-  await resetDatabase(sequelize);
+/**
+ * Adds `members` invented members and `count` invented posts by them to a database
+ * that holds the demo (ids after the demo's).
+ */
+export async function insertBenchPosts(sequelize: Sequelize, count: number, members = Math.max(50, Math.round(count / 5))) {
   const one = async (sql: string) => (await sequelize.query<{ n: number }>(sql, { type: QueryTypes.SELECT }))[0].n;
+  const uBase = await one('SELECT COALESCE(MAX(id), 0) AS n FROM users');
+  const joined = new Date(Date.now() - 2000 * 86_400_000);
+  for (let from = 1; from <= members; from += 5000) {
+    const rows = [];
+    for (let i = from; i < Math.min(from + 5000, members + 1); i++) {
+      rows.push({ id: uBase + i, handle: `bench_member_${i}`, display_name: `Bench member ${i}`, email: `member${i}@bench.example`, role: 'member', units: i % 3 ? 'US' : 'metric', email_verified_at: joined, created_at: joined, updated_at: joined });
+    }
+    await sequelize.getQueryInterface().bulkInsert('users', rows);
+  }
   const users = (await sequelize.query<{ id: number }>("SELECT id FROM users WHERE role IN ('member', 'expert') ORDER BY id", { type: QueryTypes.SELECT })).map((u) => u.id);
   const tagIds = new Map((await sequelize.query<{ id: number; slug: string }>('SELECT id, slug FROM tags', { type: QueryTypes.SELECT })).map((t) => [t.slug, t.id]));
   const qBase = await one('SELECT COALESCE(MAX(id), 0) AS n FROM questions');
@@ -44,11 +53,21 @@ async function main() {
   }
   await flush();
   await sequelize.query('UPDATE questions q SET answer_count = (SELECT COUNT(*) FROM answers a WHERE a.question_id = q.id)');
+}
+
+async function main() {
+  const count = Number(process.argv[2] ?? 100_000);
+  const sequelize = getSequelize();
+  const t0 = performance.now();
+  await resetDatabase(sequelize);
+  await insertBenchPosts(sequelize, count);
   console.log(`seeded ${count} invented posts into ${sequelize.getDatabaseName()} in ${((performance.now() - t0) / 1000).toFixed(1)} s`);
   await sequelize.close();
 }
 
-main().catch((err) => {
-  console.error(`bench seed failed: ${err instanceof Error ? err.message : String(err)}`);
-  process.exit(1);
-});
+if (require.main === module) {
+  main().catch((err) => {
+    console.error(`bench seed failed: ${err instanceof Error ? err.message : String(err)}`);
+    process.exit(1);
+  });
+}
