@@ -4,18 +4,18 @@ import path from 'node:path';
 import zlib from 'node:zlib';
 import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
 import { NextRequest } from 'next/server';
-import { encode } from 'next-auth/jwt';
 import sharp from 'sharp';
 import { POST } from '@/app/api/photos/route';
 import { GET as getWeb } from '@/app/api/photos/[id]/route';
 import { GET as getThumb } from '@/app/api/photos/[id]/thumb/route';
-import { authSecret } from '@/lib/auth/secret';
 import { limits } from '@/lib/auth/rate-limit';
 import { ingestUpload } from '@/lib/photos/ingest';
 import { attachPhotos } from '@/lib/photos/store';
 import { isStorageUnavailable, photoPath } from '@/lib/photos/storage';
 import { initModels } from '@/models';
 import { freshDemoDatabase } from './db';
+import { upload as uploadAs, type Part } from '../support/photo-upload';
+import { sessionCookie } from './act-as';
 
 // A fresh upload directory for this file; the storage module reads UPLOAD_DIR on every call.
 const uploadDir = mkdtempSync(path.join(os.tmpdir(), 'clackwater-photos-'));
@@ -24,22 +24,7 @@ process.env.UPLOAD_DIR = uploadDir;
 const MEMBER = 'highcrag_shepherd';
 const OTHER = 'ferncombe_tamsin';
 
-async function cookieFor(handle: string): Promise<string> {
-  const { User } = initModels();
-  const u = (await User.findOne({ where: { handle } }))!;
-  const token = await encode({ token: { uid: u.id, role: u.role, handle: u.handle }, secret: authSecret() });
-  return `next-auth.session-token=${token}`;
-}
-
-type Part = { name: string; data: Buffer | string; type?: string };
-async function upload(parts: Part[], { as = MEMBER as string | null, alt = [] as string[] } = {}) {
-  const form = new FormData();
-  for (const p of parts) form.append('photos', new File([typeof p.data === 'string' ? p.data : new Uint8Array(p.data)], p.name, { type: p.type ?? 'application/octet-stream' }));
-  for (const a of alt) form.append('alt', a);
-  const cookie = as ? await cookieFor(as) : undefined;
-  const req = new NextRequest('http://localhost/api/photos', { method: 'POST', body: form, headers: cookie ? { cookie } : {} });
-  return POST(req);
-}
+const upload = (parts: Part[], opts: { as?: string | null; alt?: string[] } = {}) => uploadAs(parts, { as: opts.as === undefined ? MEMBER : opts.as, alt: opts.alt ?? [] });
 
 const ctx = (id: string) => ({ params: Promise.resolve({ id }) });
 
@@ -208,7 +193,7 @@ describe('POST /api/photos', () => {
     const before = storedFiles();
     const form = new FormData();
     form.append('alt', 'nothing here');
-    const req = new NextRequest('http://localhost/api/photos', { method: 'POST', body: form, headers: { cookie: await cookieFor(MEMBER) } });
+    const req = new NextRequest('http://localhost/api/photos', { method: 'POST', body: form, headers: { cookie: await sessionCookie(MEMBER) } });
     const res = await POST(req);
     expect(res.status).toBe(400);
     expect((await res.json()).error.code).toBe('no_file');
@@ -216,7 +201,7 @@ describe('POST /api/photos', () => {
   });
 
   it('answers 400 to a signed-in JSON body, 401 to a signed-out caller', async () => {
-    const json = await POST(new NextRequest('http://localhost/api/photos', { method: 'POST', body: '{}', headers: { 'content-type': 'application/json', cookie: await cookieFor(MEMBER) } }));
+    const json = await POST(new NextRequest('http://localhost/api/photos', { method: 'POST', body: '{}', headers: { 'content-type': 'application/json', cookie: await sessionCookie(MEMBER) } }));
     expect(json.status).toBe(400);
     const before = storedFiles();
     const res = await upload([{ name: 'a.png', data: png, type: 'image/png' }], { as: null });
