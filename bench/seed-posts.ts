@@ -60,7 +60,7 @@ async function main() {
   const sequelize = getSequelize();
   const t0 = performance.now();
   await resetDatabase(sequelize);
-  await insertBenchPosts(sequelize, count);
+  await insertBenchPosts(sequelize, count, process.argv[3] ? Number(process.argv[3]) : undefined);
   console.log(`seeded ${count} invented posts into ${sequelize.getDatabaseName()} in ${((performance.now() - t0) / 1000).toFixed(1)} s`);
   await sequelize.close();
 }

@@ -1,0 +1,21 @@
+#!/usr/bin/env bash
+# npm run bench:load — the load benchmark end to end on loopback: a benchmark database
+# (clackwater_test_load on the test MariaDB) with the demo, 20,000 invented members and
+# 400,000 invented posts (100,000 questions, 300,000 answers and replies), `next start`
+# on it, then bench/load.ts. About four minutes on two cores.
+set -euo pipefail
+export CLACKWATER_ENV=test DB_NAME=clackwater_test_load PORT="${BENCH_PORT:-3300}"
+. "$(dirname "$0")/../scripts/env.sh"
+cd "$ROOT"
+export NEXTAUTH_URL="http://127.0.0.1:$PORT" SITE_URL="http://127.0.0.1:$PORT" NEXT_TELEMETRY_DISABLED=1
+bash scripts/db.sh start
+mariadb --no-defaults --socket="$DB_DATA_DIR/sock" -uroot -e "CREATE DATABASE IF NOT EXISTS \`$DB_NAME\` CHARACTER SET utf8mb4 COLLATE utf8mb4_unicode_ci"
+log "seeding 400,000 posts and 20,000 members into $DB_NAME"
+npx tsx bench/seed-posts.ts "${POSTS:-400000}" "${MEMBERS:-20000}"
+[ -f .next/BUILD_ID ] || npx next build
+node node_modules/next/dist/bin/next start -p "$PORT" -H 127.0.0.1 >.data/bench-load-server.log 2>&1 &
+server=$!
+trap 'kill $server 2>/dev/null || true' EXIT
+for _ in $(seq 1 120); do curl -sf "http://127.0.0.1:$PORT/api/health" >/dev/null && break; sleep 0.5; done
+thread=$(mariadb --no-defaults --socket="$DB_DATA_DIR/sock" -uroot -N "$DB_NAME" -e "SELECT id FROM questions WHERE hidden_at IS NULL ORDER BY answer_count DESC LIMIT 1")
+node --import tsx bench/load.ts "http://127.0.0.1:$PORT" "$thread"
