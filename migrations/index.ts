@@ -6,6 +6,7 @@ import * as authAdapter from './004-auth-adapter';
 import * as forum from './005-forum';
 import * as moderation from './006-moderation';
 import * as listIndexes from './009-list-indexes';
+import * as rateLimits from './010-rate-limits';
 
 type Step = (params: { context: QueryInterface }) => Promise<void>;
 
@@ -22,4 +23,5 @@ export const migrations: { name: string; up: Step; down: Step }[] = [
   { name: '006-moderation', ...moderation },
   // 007 and 008 are the field log and e-mail
   { name: '009-list-indexes', ...listIndexes },
+  { name: '010-rate-limits', ...rateLimits },
 ];

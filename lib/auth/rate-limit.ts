@@ -1,11 +1,14 @@
 import { RateLimiterMemory, RateLimiterRes } from 'rate-limiter-flexible';
+import { getSequelize } from '@/lib/db';
+import { RateLimiterMariaDB } from './rate-limit-store';
 
+/** Limits on the account endpoints and on writing, per client address and per account. */
 /**
- * Limits on the account endpoints, per client address and per account (e-mail).
- * In-process for now; one instance serves the site. Several instances need a
- * shared store (RateLimiterMySQL on the same MariaDB) — see README "Scaling out".
+ * In this process's memory by default; with RATE_LIMIT_STORE=mariadb the counts live
+ * in the database, so they hold across every app instance (README, "Scaling out").
  */
 function limiter(points: number, durationS: number, keyPrefix: string) {
+  if (process.env.RATE_LIMIT_STORE === 'mariadb') return new RateLimiterMariaDB({ points, duration: durationS, keyPrefix, sequelize: getSequelize() });
   return new RateLimiterMemory({ points, duration: durationS, keyPrefix });
 }
 

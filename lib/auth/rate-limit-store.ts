@@ -1,0 +1,57 @@
+import { QueryTypes, type Sequelize } from 'sequelize';
+import { RateLimiterMemory, RateLimiterMySQL } from 'rate-limiter-flexible';
+
+/**
+ * rate-limiter-flexible's MySQL limiter, kept as the library wrote it (ranking,
+ * blocking, insurance), with its four store calls done through our Sequelize pool on
+ * the `rate_limits` table (migration 010): the library's own store code speaks the
+ * `mysql` driver's callback API and `??` placeholders, which the mariadb driver does
+ * not. Every app instance on the same database then shares one count per key.
+ */
+type Row = { points: number; expire: number | null };
+
+export class RateLimiterMariaDB extends RateLimiterMySQL {
+  private db: Sequelize;
+
+  constructor(opts: { points: number; duration: number; keyPrefix: string; sequelize: Sequelize }) {
+    super({
+      points: opts.points,
+      duration: opts.duration,
+      keyPrefix: opts.keyPrefix,
+      storeClient: opts.sequelize,
+      storeType: 'sequelize',
+      tableName: 'rate_limits',
+      tableCreated: true,
+      // the database not answering must not lock everyone out, nor let floods through
+      insuranceLimiter: new RateLimiterMemory({ points: opts.points, duration: opts.duration, keyPrefix: `${opts.keyPrefix}-insurance` }),
+    });
+    this.db = opts.sequelize;
+  }
+
+  async _upsert(key: string, points: number, msDuration: number, forceExpire = false): Promise<Row[]> {
+    const now = Date.now();
+    const expire = msDuration > 0 ? now + msDuration : null;
+    return this.db.transaction(async (transaction) => {
+      if (forceExpire) {
+        await this.db.query('INSERT INTO rate_limits (`key`, points, expire) VALUES (?, ?, ?) ON DUPLICATE KEY UPDATE points = ?, expire = ?', { replacements: [key, points, expire, points, expire], transaction });
+      } else {
+        await this.db.query(
+          'INSERT INTO rate_limits (`key`, points, expire) VALUES (?, ?, ?) ON DUPLICATE KEY UPDATE points = IF(expire <= ?, ?, points + (?)), expire = IF(expire <= ?, ?, expire)',
+          { replacements: [key, points, expire, now, points, points, now, expire], transaction },
+        );
+      }
+      const rows = await this.db.query<Row>('SELECT points, expire FROM rate_limits WHERE `key` = ?', { replacements: [key], type: QueryTypes.SELECT, transaction });
+      return rows.map((r) => ({ points: Number(r.points), expire: r.expire === null ? null : Number(r.expire) }));
+    });
+  }
+
+  async _get(key: string): Promise<Row[] | null> {
+    const rows = await this.db.query<Row>('SELECT points, expire FROM rate_limits WHERE `key` = ? AND (expire > ? OR expire IS NULL)', { replacements: [key, Date.now()], type: QueryTypes.SELECT });
+    return rows.length ? rows.map((r) => ({ points: Number(r.points), expire: r.expire === null ? null : Number(r.expire) })) : null;
+  }
+
+  async _delete(key: string): Promise<boolean> {
+    const [, meta] = (await this.db.query('DELETE FROM rate_limits WHERE `key` = ?', { replacements: [key] })) as [unknown, { affectedRows?: number }];
+    return (meta?.affectedRows ?? 0) > 0;
+  }
+}
