@@ -17,6 +17,15 @@ export const CHROMIUM_ARGS = [
   '--disable-sync',
 ];
 
+/**
+ * What the app under test runs with (a second instance in tests/e2e/two-instances.spec.ts
+ * uses the same): its own SMTP catcher, and rate limits kept in MariaDB so they hold
+ * across instances.
+ */
+export function serverEnv(at: string): Record<string, string> {
+  return { ...(process.env as Record<string, string>), SMTP_HOST: '127.0.0.1', SMTP_PORT: String(E2E_SMTP_PORT), NEXTAUTH_URL: at, SITE_URL: at, RATE_LIMIT_STORE: 'mariadb' };
+}
+
 export default defineConfig({
   testDir: 'tests/e2e',
   fullyParallel: false,
@@ -42,6 +51,6 @@ export default defineConfig({
         timeout: 60_000,
         stdout: 'ignore',
         stderr: 'pipe',
-        env: { ...process.env, SMTP_HOST: '127.0.0.1', SMTP_PORT: String(E2E_SMTP_PORT), NEXTAUTH_URL: origin, SITE_URL: origin } as Record<string, string>,
+        env: serverEnv(origin),
       },
 });
