@@ -5,6 +5,7 @@ import * as accounts from './003-accounts';
 import * as authAdapter from './004-auth-adapter';
 import * as forum from './005-forum';
 import * as moderation from './006-moderation';
+import * as fieldLog from './007-field-log';
 
 type Step = (params: { context: QueryInterface }) => Promise<void>;
 
@@ -19,4 +20,5 @@ export const migrations: { name: string; up: Step; down: Step }[] = [
   { name: '004-auth-adapter', ...authAdapter },
   { name: '005-forum', ...forum },
   { name: '006-moderation', ...moderation },
+  { name: '007-field-log', ...fieldLog },
 ];
