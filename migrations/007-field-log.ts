@@ -83,8 +83,9 @@ export async function down({ context: qi }: { context: QueryInterface }) {
         `SELECT CONSTRAINT_NAME FROM information_schema.KEY_COLUMN_USAGE WHERE TABLE_SCHEMA = DATABASE() AND TABLE_NAME = '${t}' AND COLUMN_NAME = 'field_log_entry_id' AND REFERENCED_TABLE_NAME IS NOT NULL`,
         { type: QueryTypes.SELECT },
       );
-      for (const fk of fks) await qi.removeConstraint(t, fk.CONSTRAINT_NAME);
-      await qi.removeColumn(t, 'field_log_entry_id');
+      // plain ALTERs with an UPDATE type: a RAW result trips over the mariadb driver's frozen metadata
+      const drops = [...fks.map((fk) => `DROP FOREIGN KEY \`${fk.CONSTRAINT_NAME}\``), 'DROP COLUMN field_log_entry_id'];
+      await qi.sequelize.query(`ALTER TABLE ${t} ${drops.join(', ')}`, { type: QueryTypes.UPDATE });
     }
   }
   await qi.dropTable('field_log_links');

@@ -143,7 +143,7 @@ export function sortAndPage(entries: EntryView[], f: Pick<FieldLogFilter, 'sort'
     return f.dir === 'asc' ? c : -c;
   });
   const start = (f.page - 1) * f.perPage;
-  return { total: entries.length, page: f.page, perPage: f.perPage, items: sorted.slice(start, start + f.perPage) };
+  return { total: entries.length, page: f.page, perPage: f.perPage, totalPages: Math.max(1, Math.ceil(entries.length / f.perPage)), items: sorted.slice(start, start + f.perPage) };
 }
 
 export interface Comparison {
