@@ -8,7 +8,9 @@ import { GET as exportCsvRoute } from '@/app/api/field-log/export/route';
 import { POST as importRoute } from '@/app/api/field-log/import/route';
 import { POST as moderate } from '@/app/api/review/actions/route';
 import { estimateYield, toSI } from '@/lib/hydraulics';
-import { getComparison } from '@/lib/field-log/store';
+import { getComparison, getEntry } from '@/lib/field-log/store';
+import { entrySiteSheet } from '@/lib/field-log/site-sheet';
+import { POST as ask } from '@/app/api/questions/route';
 import { demoFieldLog } from '@/migrations/seed/demo-field-log';
 import { initModels } from '@/models';
 import { actAs } from './act-as';
@@ -200,6 +202,22 @@ describe('field log API', () => {
       expect(e.performance.dAubuisson).toBeGreaterThanOrEqual(e.performance.band.low);
       expect(e.performance.dAubuisson).toBeLessThanOrEqual(e.performance.band.high);
     }
+  });
+
+  it('a question can be asked with its site sheet filled from an entry, and links to it', async () => {
+    const { FieldLogEntry, Question } = initModels();
+    const one = (await FieldLogEntry.findOne({ where: { siteName: 'Ferncombe lower meadow' }, order: [['id', 'ASC']] }))!;
+    const view = (await getEntry(one.id, null))!;
+    const siteSheet = entrySiteSheet(view);
+    expect(siteSheet.fall).toBe('2.4 m');
+    expect(siteSheet.driveMaterial).toBe('steel-sch40');
+    const question = { title: 'Second pump gave less than double', body: 'Two 1 inch pumps in parallel deliver about 1.7 times one pump. Is the intake the limit?', tags: ['stall'], siteSheet, fieldLogEntryId: one.id };
+    const res = await call(ask, 'POST', '/api/questions', 'ferncombe_tamsin', question);
+    expect(res.status).toBe(201);
+    expect((await Question.findByPk(res.body.id))?.fieldLogEntryId).toBe(one.id);
+    const bad = await call(ask, 'POST', '/api/questions', 'ferncombe_tamsin', { ...question, fieldLogEntryId: 999999 });
+    expect(bad.status).toBe(422);
+    expect(bad.body.error.field).toBe('fieldLogEntryId');
   });
 
   it('a hidden entry is shown only to moderators', async () => {
