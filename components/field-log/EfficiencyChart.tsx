@@ -28,7 +28,9 @@ export function EfficiencyChart({ points }: { points: ChartPoint[] }) {
   const mine = points.filter((p) => p.mine);
   const dot = (fill: string, size: number) =>
     function Dot(props: unknown) {
-      const { cx, cy, payload } = props as { cx: number; cy: number; payload: ChartPoint };
+      const { cx, cy, payload } = props as { cx: number; cy: number; payload?: Partial<ChartPoint> };
+      // recharts also draws the shape for legend and tooltip markers, without a point behind it
+      if (!payload || typeof payload.y !== 'number' || typeof payload.x !== 'number' || payload.id === undefined) return <circle cx={cx} cy={cy} r={size} fill={fill} />;
       return (
         <a href={`/field-log/${payload.id}`} aria-label={`${payload.site}: efficiency ${payload.y.toFixed(2)} at lift ratio ${payload.x.toFixed(1)}`} data-entry-id={payload.id}>
           <circle cx={cx} cy={cy} r={size} fill={fill} stroke={palette.limestone[50]} strokeWidth={1} style={{ cursor: 'pointer' }} />
@@ -47,8 +49,8 @@ export function EfficiencyChart({ points }: { points: ChartPoint[] }) {
           <Area dataKey="range" name="homemade typical band" stroke="none" fill={palette.moss[300]} fillOpacity={0.35} isAnimationActive={false} />
           <Line dataKey="typical" name="homemade typical" stroke={palette.moss[600]} strokeDasharray="5 4" dot={false} isAnimationActive={false} />
           <Line dataKey="commercial" name="commercial typical" stroke={palette.creek[400]} strokeDasharray="2 3" dot={false} connectNulls isAnimationActive={false} />
-          <Scatter data={others} dataKey="y" name="entries" fill={palette.clay.DEFAULT} shape={dot(palette.clay.DEFAULT, 5)} isAnimationActive={false} onClick={(p) => router.push(`/field-log/${(p as unknown as { payload: ChartPoint }).payload.id}`)} />
-          <Scatter data={mine} dataKey="y" name="your entries" fill={palette.creek.DEFAULT} shape={dot(palette.creek.DEFAULT, 7)} isAnimationActive={false} />
+          <Scatter data={others} dataKey="y" name="entries" legendType="circle" fill={palette.clay.DEFAULT} shape={dot(palette.clay.DEFAULT, 5)} isAnimationActive={false} onClick={(p) => router.push(`/field-log/${(p as unknown as { payload: ChartPoint }).payload.id}`)} />
+          <Scatter data={mine} dataKey="y" name="your entries" legendType="circle" fill={palette.creek.DEFAULT} shape={dot(palette.creek.DEFAULT, 7)} isAnimationActive={false} />
         </ComposedChart>
       </ResponsiveContainer>
       <figcaption className="cw-muted mt-1 font-sans text-xs">

@@ -21,7 +21,7 @@ test('the community page shows the demo entries on the chart and in the table', 
   await expect(page.getByRole('table', { name: 'Field log entries' }).locator('tbody tr')).toHaveCount(20);
   // sorting by efficiency, highest first, puts the API's best entry on top
   const best = (await (await request.get('/api/field-log?sort=efficiency&dir=desc&perPage=1')).json()).items[0];
-  await page.getByRole('link', { name: 'Efficiency' }).click();
+  await page.getByRole('table', { name: 'Field log entries' }).getByRole('link', { name: 'Efficiency', exact: true }).click();
   await expect(page).toHaveURL(/sort=efficiency/);
   await expect(page.locator('tbody tr').first()).toHaveAttribute('data-entry-row', String(best.id));
 });
