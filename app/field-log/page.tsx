@@ -10,7 +10,8 @@ import { filteredEntries, sortAndPage, type EntryView } from '@/lib/field-log/st
 import { ServiceUnavailable } from '@/components/ServiceUnavailable';
 import { Pager } from '@/components/QuestionList';
 import { EfficiencyChart } from '@/components/field-log/EfficiencyChart';
-import { lmin, material, metres, pumpsWords, size } from '@/components/field-log/format';
+import { material, pumpsWords, shown, shownValue, size, unitOf } from '@/components/field-log/format';
+import { readUnitPreference } from '@/lib/units/server';
 import { inputClass, labelClass } from '@/components/forms/api';
 
 export const metadata: Metadata = {
@@ -19,13 +20,13 @@ export const metadata: Metadata = {
 };
 export const dynamic = 'force-dynamic';
 
-const COLUMNS: { key: FieldLogFilter['sort'] | null; label: string }[] = [
+const columns = (flowUnit: string): { key: FieldLogFilter['sort'] | null; label: string }[] => [
   { key: 'site', label: 'Site' },
   { key: 'testedOn', label: 'Tested' },
   { key: null, label: 'Pumps' },
   { key: null, label: 'Drive pipe' },
   { key: 'liftRatio', label: 'h/H' },
-  { key: 'delivered', label: 'Delivered (L/min)' },
+  { key: 'delivered', label: `Delivered (${flowUnit})` },
   { key: 'efficiency', label: 'Efficiency' },
 ];
 
@@ -48,6 +49,7 @@ export default async function FieldLogPage({ searchParams }: { searchParams: Pro
     throw err;
   }
   const page = sortAndPage(entries, f);
+  const units = await readUnitPreference();
   if (f.page > page.totalPages) notFound();
 
   const filterQuery: Record<string, string> = { ...(f.pumpSize ? { pumpSize: f.pumpSize } : {}), ...(f.material ? { material: f.material } : {}) };
@@ -106,7 +108,7 @@ export default async function FieldLogPage({ searchParams }: { searchParams: Pro
           <table className="w-full border-collapse font-sans text-sm" aria-label="Field log entries">
             <thead>
               <tr className="border-b border-limestone-400 text-left dark:border-creek-500">
-                {COLUMNS.map((c) => (
+                {columns(unitOf('flow', units)).map((c) => (
                   <th key={c.label} scope="col" className="px-2 py-1" aria-sort={c.key && f.sort === c.key ? (f.dir === 'asc' ? 'ascending' : 'descending') : undefined}>
                     {c.key ? <Link href={sortHref(c.key)} className="cw-link">{c.label}{f.sort === c.key ? (f.dir === 'asc' ? ' ↑' : ' ↓') : ''}</Link> : c.label}
                   </th>
@@ -119,9 +121,9 @@ export default async function FieldLogPage({ searchParams }: { searchParams: Pro
                   <td className="px-2 py-1"><Link href={`/field-log/${e.id}`} className="cw-link">{e.siteName}</Link>{e.authorId === viewerId ? <span className="cw-muted"> (yours)</span> : null}</td>
                   <td className="cw-num px-2 py-1">{e.testedOn}</td>
                   <td className="px-2 py-1">{pumpsWords(e.pumpCount, e.arrangement, e.pumpSize)}</td>
-                  <td className="px-2 py-1">{metres(e.driveLengthM)} m of {size(e.driveSize)} {material(e.driveMaterial)}</td>
+                  <td className="px-2 py-1">{shown('length', e.driveLengthM, units)} of {size(e.driveSize)} {material(e.driveMaterial)}</td>
                   <td className="cw-num px-2 py-1">{e.performance.liftRatio.toFixed(1)}</td>
-                  <td className="cw-num px-2 py-1">{lmin(e.deliveredFlowM3s)}</td>
+                  <td className="cw-num px-2 py-1">{shownValue('flow', e.deliveredFlowM3s, units)}</td>
                   <td className="cw-num px-2 py-1">{e.performance.dAubuisson.toFixed(2)}</td>
                 </tr>
               ))}

@@ -49,8 +49,9 @@ export function EfficiencyChart({ points }: { points: ChartPoint[] }) {
           <Area dataKey="range" name="homemade typical band" stroke="none" fill={palette.moss[300]} fillOpacity={0.35} isAnimationActive={false} />
           <Line dataKey="typical" name="homemade typical" stroke={palette.moss[600]} strokeDasharray="5 4" dot={false} isAnimationActive={false} />
           <Line dataKey="commercial" name="commercial typical" stroke={palette.creek[400]} strokeDasharray="2 3" dot={false} connectNulls isAnimationActive={false} />
-          <Scatter data={others} dataKey="y" name="entries" legendType="circle" fill={palette.clay.DEFAULT} shape={dot(palette.clay.DEFAULT, 5)} isAnimationActive={false} onClick={(p) => router.push(`/field-log/${(p as unknown as { payload: ChartPoint }).payload.id}`)} />
-          <Scatter data={mine} dataKey="y" name="your entries" legendType="circle" fill={palette.creek.DEFAULT} shape={dot(palette.creek.DEFAULT, 7)} isAnimationActive={false} />
+          {/* an empty series would fall back to the chart's band rows and draw phantom points */}
+          {others.length ? <Scatter data={others} dataKey="y" name="entries" legendType="circle" fill={palette.clay.DEFAULT} shape={dot(palette.clay.DEFAULT, 5)} isAnimationActive={false} onClick={(p) => router.push(`/field-log/${(p as unknown as { payload: ChartPoint }).payload.id}`)} /> : null}
+          {mine.length ? <Scatter data={mine} dataKey="y" name="your entries" legendType="circle" fill={palette.creek.DEFAULT} shape={dot(palette.creek.DEFAULT, 7)} isAnimationActive={false} /> : null}
         </ComposedChart>
       </ResponsiveContainer>
       <figcaption className="cw-muted mt-1 font-sans text-xs">

@@ -26,7 +26,8 @@ test('the community page shows the demo entries on the chart and in the table', 
   await expect(page.locator('tbody tr').first()).toHaveAttribute('data-entry-row', String(best.id));
 });
 
-test('record a test with three bucket trials, see it on the chart, link it as the after of an earlier test and read the ratio', async ({ page, request }) => {
+test('record a test with three bucket trials, see it on the chart, link it as the after of an earlier test and read the ratio', async ({ page, request, baseURL }) => {
+  await page.context().addCookies([{ name: 'cw_units', value: 'metric', url: baseURL! }]);
   await signIn(page, 'tamsin@ferncombe.example');
   await page.goto('/field-log/new');
   const form = page.getByRole('form', { name: 'Record a field log test' });

@@ -7,6 +7,8 @@ import { POST as link } from '@/app/api/field-log/[id]/link/route';
 import { GET as exportCsvRoute } from '@/app/api/field-log/export/route';
 import { POST as importRoute } from '@/app/api/field-log/import/route';
 import { POST as moderate } from '@/app/api/review/actions/route';
+import { POST as flag } from '@/app/api/flags/route';
+import { GET as queue } from '@/app/api/review/route';
 import { estimateYield, toSI } from '@/lib/hydraulics';
 import { getComparison, getEntry } from '@/lib/field-log/store';
 import { entrySiteSheet } from '@/lib/field-log/site-sheet';
@@ -223,6 +225,10 @@ describe('field log API', () => {
   it('a hidden entry is shown only to moderators', async () => {
     const res = await call(create, 'POST', '/api/field-log', 'sorrel_cabin', { ...entry, siteName: 'To be hidden', testedOn: '2026-07-01' });
     const id = String(res.body.id);
+    const flagged = await call(flag, 'POST', '/api/flags', 'highcrag_shepherd', { postType: 'field-log', postId: res.body.id, reason: 'other', note: 'numbers look copied' });
+    expect(flagged.status).toBeLessThan(300);
+    const q = await call(queue, 'GET', '/api/review', 'moss_moderator');
+    expect(q.body.items.some((i: { post: { type: string; id: number } }) => i.post.type === 'field-log' && i.post.id === res.body.id)).toBe(true);
     const hide = await call(moderate, 'POST', '/api/review/actions', 'moss_moderator', { action: 'hide', postType: 'field-log', postId: res.body.id, reason: 'made-up numbers' });
     expect(hide.status).toBe(200);
     expect((await call(getOne, 'GET', `/api/field-log/${id}`, null, undefined, { id })).status).toBe(404);

@@ -12,7 +12,8 @@ import { initModels } from '@/models';
 import { ServiceUnavailable } from '@/components/ServiceUnavailable';
 import { Caution } from '@/components/Caution';
 import { LinkForm } from '@/components/field-log/LinkForm';
-import { lmin, material, metres, pumpsWords, size } from '@/components/field-log/format';
+import { material, pumpsWords, shown, size } from '@/components/field-log/format';
+import { readUnitPreference } from '@/lib/units/server';
 
 type Params = Promise<{ id: string }>;
 export const dynamic = 'force-dynamic';
@@ -61,6 +62,9 @@ export default async function FieldLogEntryPage({ params }: { params: Params }) 
     throw err;
   }
   const p = e.performance;
+  const units = await readUnitPreference();
+  const flow = (si: number) => shown('flow', si, units);
+  const len = (si: number) => shown('length', si, units);
 
   return (
     <article className="flex flex-col gap-5">
@@ -76,25 +80,25 @@ export default async function FieldLogEntryPage({ params }: { params: Params }) 
       <section aria-labelledby="measured-heading" className="cw-card font-sans">
         <h2 id="measured-heading" className="mb-2 font-serif text-xl font-semibold">Measured against predicted</h2>
         <dl className="grid gap-x-8 sm:grid-cols-2">
-          <Row label="Delivered (mean of the trials)"><span data-testid="delivered">{lmin(e.deliveredFlowM3s)} L/min</span></Row>
-          <Row label="Predicted by the yield estimate">{lmin(p.predictedDeliveredFlowM3s)} L/min</Row>
+          <Row label="Delivered (mean of the trials)"><span data-testid="delivered">{flow(e.deliveredFlowM3s)}</span></Row>
+          <Row label="Predicted by the yield estimate">{flow(p.predictedDeliveredFlowM3s)}</Row>
           <Row label="Measured ÷ predicted">{p.measuredOverPredicted.toFixed(2)}</Row>
           <Row label="Lift ratio h/H">{p.liftRatio.toFixed(2)}</Row>
           <Row label="Efficiency, D'Aubuisson q·h/(Q·H)"><span data-testid="efficiency-d">{p.dAubuisson.toFixed(3)}</span></Row>
           <Row label="Efficiency, Rankine q·(h−H)/((Q−q)·H)"><span data-testid="efficiency-r">{p.rankine.toFixed(3)}</span></Row>
           <Row label={`Typical band (${e.pumpType})`}>{p.band.low.toFixed(2)}–{p.band.high.toFixed(2)}, typical {p.band.typical.toFixed(2)}</Row>
-          <Row label="Trial spread">{lmin(p.spread.min)}–{lmin(p.spread.max)} L/min</Row>
+          <Row label="Trial spread">{flow(p.spread.min)} to {flow(p.spread.max)}</Row>
         </dl>
       </section>
 
       <section aria-labelledby="trials-heading" className="font-sans">
         <h2 id="trials-heading" className="mb-2 font-serif text-xl font-semibold">Bucket trials</h2>
         <table className="w-full max-w-md border-collapse text-sm" aria-label="Bucket trials">
-          <thead><tr className="border-b border-limestone-400 text-left"><th className="px-2 py-1">Trial</th><th className="px-2 py-1">Volume (L)</th><th className="px-2 py-1">Seconds</th><th className="px-2 py-1">L/min</th></tr></thead>
+          <thead><tr className="border-b border-limestone-400 text-left"><th className="px-2 py-1">Trial</th><th className="px-2 py-1">Volume (L)</th><th className="px-2 py-1">Seconds</th><th className="px-2 py-1">Flow</th></tr></thead>
           <tbody>
             {e.trials.map((t, i) => (
               <tr key={i} className="border-b border-limestone-300 dark:border-creek-600">
-                <td className="px-2 py-1">{i + 1}</td><td className="cw-num px-2 py-1">{Number(t.volumeL.toPrecision(6))}</td><td className="cw-num px-2 py-1">{t.seconds}</td><td className="cw-num px-2 py-1">{lmin(trialFlowM3s(t))}</td>
+                <td className="px-2 py-1">{i + 1}</td><td className="cw-num px-2 py-1">{Number(t.volumeL.toPrecision(6))}</td><td className="cw-num px-2 py-1">{t.seconds}</td><td className="cw-num px-2 py-1">{flow(trialFlowM3s(t))}</td>
               </tr>
             ))}
           </tbody>
@@ -104,11 +108,11 @@ export default async function FieldLogEntryPage({ params }: { params: Params }) 
       <section aria-labelledby="site-heading" className="cw-card font-sans">
         <h2 id="site-heading" className="mb-2 font-serif text-xl font-semibold">The installation</h2>
         <dl className="grid gap-x-8 sm:grid-cols-2">
-          <Row label="Fall">{metres(e.fallM)} m{e.typed.fall ? ` (typed “${e.typed.fall}”)` : ''}</Row>
-          <Row label="Lift">{metres(e.liftM)} m{e.typed.lift ? ` (typed “${e.typed.lift}”)` : ''}</Row>
-          <Row label="Drive pipe">{metres(e.driveLengthM)} m of {size(e.driveSize)} {material(e.driveMaterial)}</Row>
-          <Row label="Delivery line">{e.deliveryLengthM !== null ? `${metres(e.deliveryLengthM)} m of ${size(e.deliverySize)} ${material(e.deliveryMaterial)}` : 'not recorded'}</Row>
-          <Row label={`Drive flow (${e.driveFlowMethod})`}>{lmin(e.driveFlowM3s)} L/min</Row>
+          <Row label="Fall">{len(e.fallM)}{e.typed.fall ? ` (typed “${e.typed.fall}”)` : ''}</Row>
+          <Row label="Lift">{len(e.liftM)}{e.typed.lift ? ` (typed “${e.typed.lift}”)` : ''}</Row>
+          <Row label="Drive pipe">{len(e.driveLengthM)} of {size(e.driveSize)} {material(e.driveMaterial)}</Row>
+          <Row label="Delivery line">{e.deliveryLengthM !== null ? `${len(e.deliveryLengthM)} of ${size(e.deliverySize)} ${material(e.deliveryMaterial)}` : 'not recorded'}</Row>
+          <Row label={`Drive flow (${e.driveFlowMethod})`}>{flow(e.driveFlowM3s)}</Row>
           <Row label="How the drive flow was found">{e.driveFlowHow || '—'}</Row>
           <Row label="Beats per minute">{e.beatsPerMinute ?? '—'}</Row>
           <Row label="Waste valve setting">{e.wasteValveSetting || '—'}</Row>

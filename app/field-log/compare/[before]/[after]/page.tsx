@@ -6,7 +6,8 @@ import { isDatabaseUnavailable } from '@/lib/db/errors';
 import { idParam } from '@/lib/http/guard';
 import { getComparison, type Comparison } from '@/lib/field-log/store';
 import { ServiceUnavailable } from '@/components/ServiceUnavailable';
-import { lmin, pumpsWords } from '@/components/field-log/format';
+import { pumpsWords, shown } from '@/components/field-log/format';
+import { readUnitPreference } from '@/lib/units/server';
 
 export const metadata: Metadata = { title: 'Before and after' };
 export const dynamic = 'force-dynamic';
@@ -24,11 +25,13 @@ export default async function ComparePage({ params }: { params: Promise<{ before
     throw err;
   }
   if (!c) notFound();
+  const units = await readUnitPreference();
+  const flow = (si: number) => shown('flow', si, units);
   const side = (label: string, e: Comparison['before']) => (
     <div className="cw-card flex flex-col gap-1 font-sans text-sm">
       <h2 className="font-serif text-lg font-semibold">{label}: <Link href={`/field-log/${e.id}`} className="cw-link">{e.testedOn}</Link></h2>
-      <p>{pumpsWords(e.pumpCount, e.arrangement, e.pumpSize)}; drive flow {lmin(e.driveFlowM3s)} L/min ({e.driveFlowMethod})</p>
-      <p className="cw-num">Delivered {lmin(e.deliveredFlowM3s)} L/min (trials {lmin(e.performance.spread.min)}–{lmin(e.performance.spread.max)}), efficiency {e.performance.dAubuisson.toFixed(2)}</p>
+      <p>{pumpsWords(e.pumpCount, e.arrangement, e.pumpSize)}; drive flow {flow(e.driveFlowM3s)} ({e.driveFlowMethod})</p>
+      <p className="cw-num">Delivered {flow(e.deliveredFlowM3s)} (trials {flow(e.performance.spread.min)} to {flow(e.performance.spread.max)}), efficiency {e.performance.dAubuisson.toFixed(2)}</p>
     </div>
   );
   return (
