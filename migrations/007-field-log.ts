@@ -73,10 +73,11 @@ export async function up({ context: qi }: { context: QueryInterface }) {
   );
   await qi.addIndex('field_log_links', ['before_id', 'after_id'], { name: 'field_log_links_pair', unique: true });
   await qi.addColumn('questions', 'field_log_entry_id', ref('field_log_entries', true));
+  await qi.addColumn('photos', 'field_log_entry_id', ref('field_log_entries', true));
 }
 
 export async function down({ context: qi }: { context: QueryInterface }) {
-  for (const t of ['questions']) {
+  for (const t of ['questions', 'photos']) {
     const present = Object.keys(await qi.describeTable(t));
     if (present.includes('field_log_entry_id')) {
       const fks = await qi.sequelize.query<{ CONSTRAINT_NAME: string }>(

@@ -5,6 +5,7 @@ import { useRouter } from 'next/navigation';
 import { NOMINAL_LABELS, NOMINAL_SIZES } from '@/lib/hydraulics/pipes';
 import { PIPE_MATERIAL_CHOICES } from '@/lib/validation/field-log';
 import { FieldError, inputClass, labelClass, sendJson, type FormError } from '@/components/forms/api';
+import { PhotoPicker } from '@/components/photos/PhotoPicker';
 import { MATERIAL_LABELS } from './format';
 
 type Trial = { volume: string; seconds: string };
@@ -26,6 +27,7 @@ export function EntryForm() {
     driveFlow: '', driveFlowMethod: 'measured', driveFlowHow: '', bpm: '', wasteValveSetting: '', waterTempC: '', notes: '',
   });
   const [trials, setTrials] = useState<Trial[]>([{ volume: '', seconds: '' }]);
+  const [photoIds, setPhotoIds] = useState<string[]>([]);
   const [error, setError] = useState<FormError | null>(null);
   const [busy, setBusy] = useState(false);
   const set = (k: string) => (e: { target: { value: string } }) => setV((o) => ({ ...o, [k]: e.target.value }));
@@ -41,7 +43,7 @@ export function EntryForm() {
       deliveryLength: opt(v.deliveryLength), deliverySize: opt(v.deliverySize), deliveryMaterial: opt(v.deliveryMaterial),
       driveFlow: v.driveFlow, driveFlowMethod: v.driveFlowMethod, driveFlowHow: v.driveFlowHow,
       trials: trials.map((t) => ({ volume: /^\s*[\d.]+\s*$/.test(t.volume) ? `${t.volume.trim()} L` : t.volume, seconds: Number(t.seconds) })),
-      bpm: num(v.bpm), wasteValveSetting: v.wasteValveSetting, waterTempC: num(v.waterTempC), notes: v.notes,
+      bpm: num(v.bpm), wasteValveSetting: v.wasteValveSetting, waterTempC: num(v.waterTempC), notes: v.notes, photoIds,
     });
     setBusy(false);
     if (out.ok) router.push(out.data.url);
@@ -119,6 +121,11 @@ export function EntryForm() {
         <label className={labelClass} htmlFor="fl-notes">Notes</label>
         <textarea id="fl-notes" name="notes" rows={4} className={inputClass} value={v.notes} onChange={set('notes')} />
       </div>
+      <section aria-label="Photos" className="flex flex-col gap-2">
+        <h2 className={labelClass}>Photos of the installation (optional)</h2>
+        <PhotoPicker onChange={setPhotoIds} />
+        <FieldError error={error} field="photoIds" />
+      </section>
       <FieldError error={error} />
       <button type="submit" className="cw-button self-start" disabled={busy}>Save the test</button>
     </form>

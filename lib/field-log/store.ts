@@ -10,6 +10,7 @@ import type { SessionUser } from '@/lib/auth/session';
 import { can, type Actor } from '@/lib/auth/policy';
 import { ForumError } from '@/lib/forum/errors';
 import { parseNominalSize } from '@/lib/hydraulics';
+import { attachPhotos } from '@/lib/photos/store';
 import type { FieldLogEntryData, FieldLogFilter } from '@/lib/validation/field-log';
 import { performance, readEntry, type EntryPerformance, type TrialSI } from './measure';
 import { deliveryRatio, plannerRatio, type Ratio } from './compare';
@@ -42,6 +43,10 @@ export async function createEntry(user: { id: number }, v: FieldLogEntryData, tr
   const work = async (t: Transaction) => {
     const e = await FieldLogEntry.create(rows.entry, { transaction: t });
     await FieldLogTrial.bulkCreate(rows.trials.map((x) => ({ ...x, entryId: e.id })), { transaction: t });
+    if (v.photoIds.length) {
+      const n = await attachPhotos(v.photoIds, user.id, { fieldLogEntryId: e.id }, t);
+      if (n !== new Set(v.photoIds).size) throw new ForumError(422, 'photoIds: a photo is not yours or is already attached', 'photoIds');
+    }
     return e;
   };
   return transaction ? work(transaction) : getSequelize().transaction(work);

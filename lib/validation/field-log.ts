@@ -40,6 +40,7 @@ export const fieldLogEntrySchema = z.object({
   wasteValveSetting: z.string().trim().max(200, 'wasteValveSetting must be at most 200 characters').default(''),
   waterTempC: z.number({ error: 'waterTempC must be a number' }).min(0, 'waterTempC must be at least 0').max(40, 'waterTempC must be at most 40').optional(),
   notes: z.string().trim().max(5000, 'notes must be at most 5,000 characters').default(''),
+  photoIds: z.array(z.string().regex(/^[0-9A-Za-z]{10,24}$/, 'photoIds must be ids from the upload')).max(6, 'at most six photos').default([]),
 });
 export type FieldLogEntryInput = z.input<typeof fieldLogEntrySchema>;
 export type FieldLogEntryData = z.output<typeof fieldLogEntrySchema>;

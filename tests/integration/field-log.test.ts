@@ -15,6 +15,7 @@ import { entrySiteSheet } from '@/lib/field-log/site-sheet';
 import { POST as ask } from '@/app/api/questions/route';
 import { demoFieldLog } from '@/migrations/seed/demo-field-log';
 import { initModels } from '@/models';
+import { newPhotoId } from '@/lib/photos/storage';
 import { actAs } from './act-as';
 import { freshDemoDatabase } from './db';
 
@@ -106,6 +107,24 @@ describe('field log API', () => {
     expect(badTrial.status).toBe(422);
     expect(badTrial.body.error.field).toBe('trials.1.volume');
     expect(await count()).toBe(before);
+  });
+
+  it("attaches the member's own uploaded photos to the entry, and refuses someone else's with nothing saved", async () => {
+    const { Photo, User } = initModels();
+    const cabin = (await User.findOne({ where: { handle: 'sorrel_cabin' } }))!.id;
+    const shepherd = (await User.findOne({ where: { handle: 'highcrag_shepherd' } }))!.id;
+    const photo = (ownerId: number, publicId: string) => Photo.create({ publicId, ownerId, questionId: null, answerId: null, mime: 'image/webp', width: 640, height: 480, bytes: 1000, alt: 'the pump' });
+    const mine = (await photo(cabin, newPhotoId())).publicId;
+    const theirs = (await photo(shepherd, newPhotoId())).publicId;
+    const before = await count();
+    const refused = await call(create, 'POST', '/api/field-log', 'sorrel_cabin', { ...entry, photoIds: [theirs] });
+    expect(refused.status).toBe(422);
+    expect(refused.body.error.field).toBe('photoIds');
+    expect(await count()).toBe(before);
+    const ok = await call(create, 'POST', '/api/field-log', 'sorrel_cabin', { ...entry, siteName: 'Photo test site', photoIds: [mine] });
+    expect(ok.status).toBe(201);
+    expect((await Photo.findOne({ where: { publicId: mine } }))?.fieldLogEntryId).toBe(ok.body.id);
+    expect((await Photo.findOne({ where: { publicId: theirs } }))?.fieldLogEntryId).toBeNull();
   });
 
   it('imports all or nothing by default, naming each bad row and column', async () => {

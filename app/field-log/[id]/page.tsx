@@ -9,6 +9,7 @@ import { idParam } from '@/lib/http/guard';
 import { getEntry, linksOf, type EntryView } from '@/lib/field-log/store';
 import { trialFlowM3s } from '@/lib/field-log/measure';
 import { initModels } from '@/models';
+import { photoUrl } from '@/lib/photos/storage';
 import { ServiceUnavailable } from '@/components/ServiceUnavailable';
 import { Caution } from '@/components/Caution';
 import { LinkForm } from '@/components/field-log/LinkForm';
@@ -41,11 +42,14 @@ export default async function FieldLogEntryPage({ params }: { params: Params }) 
   let candidates: { id: number; label: string }[] = [];
   let mayLink = false;
   let mayAsk = false;
+  let photos: { id: string; alt: string | null; width: number; height: number }[] = [];
   try {
     const viewer = await currentUserInPage();
     e = await getEntry(id, viewer);
     if (!e) notFound();
     links = await linksOf(id);
+    const photoRows = await initModels().Photo.findAll({ where: { fieldLogEntryId: id, ...(can(viewer, 'moderation.seeHidden') ? {} : { hiddenAt: null, deletedAt: null }) }, order: [['id', 'ASC']] });
+    photos = photoRows.map((r) => ({ id: r.publicId, alt: r.alt, width: r.width, height: r.height }));
     mayLink = can(viewer, 'fieldLog.edit', e.authorId);
     mayAsk = can(viewer, 'question.ask');
     if (mayLink) {
@@ -120,6 +124,20 @@ export default async function FieldLogEntryPage({ params }: { params: Params }) 
         </dl>
         {e.notes ? <p className="cw-prose mt-3 whitespace-pre-line">{e.notes}</p> : null}
       </section>
+
+      {photos.length ? (
+        <section aria-labelledby="photos-heading">
+          <h2 id="photos-heading" className="mb-2 font-serif text-xl font-semibold">Photos</h2>
+          <div className="flex flex-wrap gap-3">
+            {photos.map((ph) => (
+              <a key={ph.id} href={photoUrl(ph.id)}>
+                {/* eslint-disable-next-line @next/next/no-img-element -- our own WebP copies, served by /api/photos */}
+                <img src={photoUrl(ph.id, 'thumb')} alt={ph.alt ?? `Photo of ${e.siteName}`} className="h-32 w-auto rounded-md border border-limestone-300" loading="lazy" />
+              </a>
+            ))}
+          </div>
+        </section>
+      ) : null}
 
       <Caution title="Measuring safely">
         A drive pipe and delivery line hold water under pressure and a waste valve slams hundreds of times a minute: keep hands
