@@ -79,3 +79,16 @@ test('the demo one-pump against two-pump comparison shows both ratios', async ({
   expect(measured).toBeLessThan(2);
   await expect(page.getByTestId('planner-ratio')).toBeVisible();
 });
+
+test('an entry opens the ask form with the site sheet filled from it', async ({ page, request }) => {
+  const list = (await (await request.get('/api/field-log?perPage=100&sort=testedOn&dir=asc')).json()).items as { id: number; siteName: string }[];
+  const one = list.find((e) => e.siteName === 'Ferncombe lower meadow')!;
+  await signIn(page, 'tamsin@ferncombe.example');
+  await page.goto(`/field-log/${one.id}`);
+  await page.getByRole('link', { name: 'Ask a question about this test' }).click();
+  await expect(page).toHaveURL(new RegExp(`/questions/ask\\?fieldLog=${one.id}$`));
+  await expect(page.getByTestId('from-field-log')).toContainText(`field log entry ${one.id}`);
+  // the demo entry's fall and lift as recorded (2.4 m and 12 m)
+  await expect(page.getByLabel('Fall', { exact: true })).toHaveValue('2.4 m');
+  await expect(page.getByLabel('Lift', { exact: true })).toHaveValue('12 m');
+});
