@@ -130,7 +130,7 @@ export default async function FieldLogPage({ searchParams }: { searchParams: Pro
             </tbody>
           </table>
         </div>
-        <Pager page={page.page} totalPages={page.totalPages} basePath="/field-log" query={{ ...sortQuery, ...(one(sp.perPage) ? { perPage: String(f.perPage) } : {}) }} />
+        <Pager page={page.page} totalPages={page.totalPages} basePath="/field-log" query={{ ...sortQuery, ...(one(sp.perPage) ? { perPage: String(f.perPage) } : {}) }} words={['← Previous', 'Next →']} />
       </section>
     </div>
   );

@@ -24,6 +24,11 @@ test('the community page shows the demo entries on the chart and in the table', 
   await page.getByRole('table', { name: 'Field log entries' }).getByRole('link', { name: 'Efficiency', exact: true }).click();
   await expect(page).toHaveURL(/sort=efficiency/);
   await expect(page.locator('tbody tr').first()).toHaveAttribute('data-entry-row', String(best.id));
+  // the next page keeps the sort
+  await page.getByRole('link', { name: 'Next →' }).click();
+  await expect(page).toHaveURL(/sort=efficiency.*page=2|page=2.*sort=efficiency/);
+  const second = (await (await request.get('/api/field-log?sort=efficiency&dir=desc&perPage=20&page=2')).json()).items[0];
+  await expect(page.locator('tbody tr').first()).toHaveAttribute('data-entry-row', String(second.id));
 });
 
 test('record a test with three bucket trials, see it on the chart, link it as the after of an earlier test and read the ratio', async ({ page, request, baseURL }) => {
