@@ -47,11 +47,14 @@ export function Pager({
   totalPages,
   basePath,
   query = {},
+  words = ['← Newer', 'Older →'],
 }: {
   page: number;
   totalPages: number;
   basePath: string;
   query?: Record<string, string>;
+  /** link words for the previous and next page; lists not in date order say "Previous"/"Next" */
+  words?: readonly [string, string];
 }) {
   if (totalPages <= 1) return null;
   const href = (p: number) => `${basePath}?${new URLSearchParams({ ...query, page: String(p) })}`;
@@ -59,7 +62,7 @@ export function Pager({
     <nav aria-label="Pages" className="mt-6 flex items-center justify-between text-sm">
       {page > 1 ? (
         <Link href={href(page - 1)} className="cw-link" rel="prev">
-          ← Newer
+          {words[0]}
         </Link>
       ) : (
         <span />
@@ -69,7 +72,7 @@ export function Pager({
       </span>
       {page < totalPages ? (
         <Link href={href(page + 1)} className="cw-link" rel="next">
-          Older →
+          {words[1]}
         </Link>
       ) : (
         <span />

@@ -5,6 +5,7 @@ import * as accounts from './003-accounts';
 import * as authAdapter from './004-auth-adapter';
 import * as forum from './005-forum';
 import * as moderation from './006-moderation';
+import * as fieldLog from './007-field-log';
 import * as listIndexes from './009-list-indexes';
 import * as rateLimits from './010-rate-limits';
 
@@ -21,7 +22,8 @@ export const migrations: { name: string; up: Step; down: Step }[] = [
   { name: '004-auth-adapter', ...authAdapter },
   { name: '005-forum', ...forum },
   { name: '006-moderation', ...moderation },
-  // 007 and 008 are the field log and e-mail
+  { name: '007-field-log', ...fieldLog },
+  // 008 is e-mail
   { name: '009-list-indexes', ...listIndexes },
   { name: '010-rate-limits', ...rateLimits },
 ];

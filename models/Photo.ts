@@ -7,6 +7,7 @@ export class Photo extends Model<InferAttributes<Photo>, InferCreationAttributes
   declare ownerId: number;
   declare questionId: number | null;
   declare answerId: number | null;
+  declare fieldLogEntryId: CreationOptional<number | null>;
   declare mime: string;
   declare width: number;
   declare height: number;
@@ -25,6 +26,7 @@ export class Photo extends Model<InferAttributes<Photo>, InferCreationAttributes
         ownerId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false },
         questionId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: true },
         answerId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: true },
+        fieldLogEntryId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: true },
         mime: { type: DataTypes.STRING(40), allowNull: false },
         width: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false },
         height: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false },

@@ -28,6 +28,8 @@ export class Question extends Model<InferAttributes<Question>, InferCreationAttr
   declare hiddenReason: CreationOptional<string | null>;
   declare deletedAt: CreationOptional<Date | null>;
   declare lockedAt: CreationOptional<Date | null>;
+  /** the field log entry the site sheet was filled from, if any */
+  declare fieldLogEntryId: CreationOptional<number | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -50,6 +52,7 @@ export class Question extends Model<InferAttributes<Question>, InferCreationAttr
         hiddenReason: { type: DataTypes.STRING(300), allowNull: true },
         deletedAt: { type: DataTypes.DATE, allowNull: true },
         lockedAt: { type: DataTypes.DATE, allowNull: true },
+        fieldLogEntryId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: true },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

@@ -17,8 +17,11 @@ import { QuestionFollow } from './QuestionFollow';
 import { Photo } from './Photo';
 import { Flag } from './Flag';
 import { AuditEntry } from './AuditEntry';
+import { FieldLogEntry } from './FieldLogEntry';
+import { FieldLogTrial } from './FieldLogTrial';
+import { FieldLogLink } from './FieldLogLink';
 
-export { User, Tag, Question, Answer, QuestionTag, SafetyCheck, WorkedCalculation, AuthToken, ExpertApplication, Notice, Reply, Revision, HelpfulMark, QuestionFollow, Photo, Flag, AuditEntry };
+export { User, Tag, Question, Answer, QuestionTag, SafetyCheck, WorkedCalculation, AuthToken, ExpertApplication, Notice, Reply, Revision, HelpfulMark, QuestionFollow, Photo, Flag, AuditEntry, FieldLogEntry, FieldLogTrial, FieldLogLink };
 
 const initialised = new WeakSet<Sequelize>();
 
@@ -42,6 +45,9 @@ export function initModels(sequelize: Sequelize = getSequelize()) {
     Photo.initModel(sequelize);
     Flag.initModel(sequelize);
     AuditEntry.initModel(sequelize);
+    FieldLogEntry.initModel(sequelize);
+    FieldLogTrial.initModel(sequelize);
+    FieldLogLink.initModel(sequelize);
 
     Question.belongsTo(User, { as: 'author', foreignKey: 'authorId' });
     User.hasMany(Question, { as: 'questions', foreignKey: 'authorId' });
@@ -61,7 +67,9 @@ export function initModels(sequelize: Sequelize = getSequelize()) {
     Answer.hasMany(Photo, { as: 'photos', foreignKey: 'answerId' });
     Flag.belongsTo(User, { as: 'flagger', foreignKey: 'flaggerId' });
     AuditEntry.belongsTo(User, { as: 'actor', foreignKey: 'actorId' });
+    FieldLogEntry.belongsTo(User, { as: 'author', foreignKey: 'authorId' });
+    FieldLogEntry.hasMany(FieldLogTrial, { as: 'trials', foreignKey: 'entryId' });
     initialised.add(sequelize);
   }
-  return { sequelize, User, Tag, Question, Answer, QuestionTag, SafetyCheck, WorkedCalculation, AuthToken, ExpertApplication, Notice, Reply, Revision, HelpfulMark, QuestionFollow, Photo, Flag, AuditEntry };
+  return { sequelize, User, Tag, Question, Answer, QuestionTag, SafetyCheck, WorkedCalculation, AuthToken, ExpertApplication, Notice, Reply, Revision, HelpfulMark, QuestionFollow, Photo, Flag, AuditEntry, FieldLogEntry, FieldLogTrial, FieldLogLink };
 }

@@ -33,16 +33,22 @@ export function ReviewItem({ item, viewer, onDone }: { item: ReviewItemView; vie
   const authorName = post.author?.displayName ?? 'a removed member';
   const own = post.author?.id === viewer.id;
   const flaggedByMe = flags.some((f) => f.flagger.handle === viewer.handle);
-  const where = { question: 'Question', answer: 'Answer on', reply: 'Reply on', photo: 'Photo on' }[post.type];
+  const where = { question: 'Question', answer: 'Answer on', reply: 'Reply on', photo: 'Photo on', 'field-log': 'Field log entry' }[post.type];
 
   return (
     <article className="cw-card flex flex-col gap-3" aria-label={`Flagged ${post.type} by ${authorName}`} data-review-item={`${post.type}:${post.id}`}>
       <header className="flex flex-col gap-1 font-sans">
         <p className="text-sm">
           {where}{' '}
-          <Link href={`/questions/${post.questionId}`} className="cw-link font-semibold">
-            {post.questionTitle || `question ${post.questionId}`}
-          </Link>
+          {post.type === 'field-log' ? (
+            <Link href={`/field-log/${post.id}`} className="cw-link font-semibold">
+              {`entry ${post.id}`}
+            </Link>
+          ) : (
+            <Link href={`/questions/${post.questionId}`} className="cw-link font-semibold">
+              {post.questionTitle || `question ${post.questionId}`}
+            </Link>
+          )}
         </p>
         <p className="cw-muted text-xs">
           by{' '}

@@ -1,5 +1,5 @@
 /** The review queue's plain words, shared by the flag form, the queue and the audit log. */
-export type PostType = 'question' | 'answer' | 'reply' | 'photo';
+export type PostType = 'question' | 'answer' | 'reply' | 'photo' | 'field-log';
 export type FlagReason = 'spam' | 'unsafe' | 'rude' | 'off-topic' | 'other';
 export type ModerationAction = 'dismiss' | 'hide' | 'restore' | 'delete' | 'lock' | 'unlock' | 'retag' | 'warn' | 'suspend';
 

@@ -122,7 +122,13 @@ function useSimilarQuestions(title: string, tags: string[], fall: string, lift: 
 }
 
 /** Asking a question: title, what happened (Markdown, previewed), tags, the site sheet, photos. */
-export function AskForm({ tags, defaultTag, guide }: { tags: { slug: string; name: string }[]; defaultTag?: string; guide?: string }) {
+export function AskForm({ tags, defaultTag, guide, fromFieldLog }: {
+  tags: { slug: string; name: string }[];
+  defaultTag?: string;
+  guide?: string;
+  /** a field log entry to fill the site sheet from, and to link the question to */
+  fromFieldLog?: { id: number; siteSheet: SiteSheet };
+}) {
   const uid = useId();
   const id = (name: string) => `${uid}-${name.replace('.', '-')}`;
   const {
@@ -138,7 +144,8 @@ export function AskForm({ tags, defaultTag, guide }: { tags: { slug: string; nam
       title: '',
       body: '',
       tags: defaultTag ? [defaultTag] : [],
-      siteSheet: Object.fromEntries(SITE_SHEET_FIELDS.map((f) => [f, ''])),
+      siteSheet: Object.fromEntries(SITE_SHEET_FIELDS.map((f) => [f, fromFieldLog?.siteSheet[f] ?? ''])),
+      fieldLogEntryId: fromFieldLog?.id,
       photoIds: [],
       guide,
     },

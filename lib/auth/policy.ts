@@ -65,6 +65,12 @@ export const POLICY = {
   'audit.read': row({ admin: true }),
   /** see hidden and deleted posts */
   'moderation.seeHidden': row({ moderator: true, admin: true }),
+  /** record a field log entry (one test of an installation) */
+  'fieldLog.create': signedIn(),
+  /** link one's own entry as the after of an earlier one on the same site */
+  'fieldLog.edit': signedIn('own'),
+  /** import field log entries from CSV, as one's own */
+  'fieldLog.import': signedIn(),
 } as const satisfies Record<string, Row>;
 
 export type Action = keyof typeof POLICY;
@@ -106,4 +112,7 @@ export const REFUSAL: Record<Action, string> = {
   'moderation.act': 'Only moderators can use the review queue.',
   'audit.read': 'Only admins can read the audit log.',
   'moderation.seeHidden': 'Only moderators can see hidden posts.',
+  'fieldLog.create': 'Sign in to record a field log entry.',
+  'fieldLog.edit': 'Only its author can change this field log entry.',
+  'fieldLog.import': 'Sign in to import field log entries.',
 };

@@ -46,4 +46,10 @@ export const API_ROUTES: Record<string, Action | 'public' | 'session'> = {
   'GET /api/review': 'moderation.act',
   'POST /api/review/actions': 'moderation.act',
   'GET /api/admin/audit': 'audit.read',
+  'GET /api/field-log': 'public',
+  'POST /api/field-log': 'fieldLog.create',
+  'GET /api/field-log/[id]': 'public',
+  'POST /api/field-log/[id]/link': 'fieldLog.edit',
+  'GET /api/field-log/export': 'public',
+  'POST /api/field-log/import': 'fieldLog.import',
 };

@@ -28,15 +28,19 @@ async function tagIds(slugs: string[], transaction: Transaction) {
 
 export async function askQuestion(
   user: SessionUser,
-  input: { title: string; body: string; tags: string[]; siteSheet?: Record<string, string | undefined>; photoIds: string[]; guide?: string },
+  input: { title: string; body: string; tags: string[]; siteSheet?: Record<string, string | undefined>; photoIds: string[]; guide?: string; fieldLogEntryId?: number },
 ) {
   const siteSheet = validateSiteSheet(input.siteSheet);
-  const { Question, QuestionTag, Revision, QuestionFollow } = initModels();
+  const { Question, QuestionTag, Revision, QuestionFollow, FieldLogEntry } = initModels();
   const write = getSequelize().transaction(async (transaction) => {
     const ids = await tagIds([...new Set(input.tags)], transaction);
+    if (input.fieldLogEntryId !== undefined) {
+      const entry = await FieldLogEntry.findOne({ where: { id: input.fieldLogEntryId, hiddenAt: null, deletedAt: null }, attributes: ['id'], transaction });
+      if (!entry) throw new ForumError(422, 'fieldLogEntryId: no such field log entry', 'fieldLogEntryId');
+    }
     const now = new Date();
     const q = await Question.create(
-      { authorId: user.id, title: input.title, body: input.body, answerCount: 0, fixedAnswerId: null, siteSheet, guideSlug: input.guide ?? null, lastActivityAt: now },
+      { authorId: user.id, title: input.title, body: input.body, answerCount: 0, fixedAnswerId: null, siteSheet, guideSlug: input.guide ?? null, fieldLogEntryId: input.fieldLogEntryId ?? null, lastActivityAt: now },
       { transaction },
     );
     await QuestionTag.bulkCreate(ids.map((tagId) => ({ questionId: q.id, tagId })), { transaction });

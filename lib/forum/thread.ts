@@ -55,6 +55,7 @@ export interface ThreadView {
   tags: { slug: string; name: string }[];
   siteSheet: Record<string, string> | null;
   guideSlug: string | null;
+  fieldLogEntryId: number | null;
   helpfulCount: number;
   markedByViewer: boolean;
   fixedAnswerId: number | null;
@@ -160,6 +161,7 @@ export async function loadThread(id: number, viewer: Actor | null): Promise<Thre
     tags: (q.tags ?? []).map((t) => ({ slug: t.slug, name: t.name })),
     siteSheet: (q.siteSheet as Record<string, string> | null) ?? null,
     guideSlug: q.guideSlug ?? null,
+    fieldLogEntryId: q.fieldLogEntryId ?? null,
     helpfulCount: q.helpfulCount,
     markedByViewer: marked.has(`question:${q.id}`),
     fixedAnswerId: q.fixedAnswerId,

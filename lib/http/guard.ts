@@ -9,7 +9,7 @@ export const NEW_MEMBER_DAYS = 7;
 export const NEW_MEMBER_MAX_LINKS = 2;
 
 /** Actions a suspended member cannot take. */
-const WRITES = new Set<Action>(['calculation.save', 'question.ask', 'question.edit', 'answer.post', 'answer.edit', 'reply.post', 'reply.edit', 'post.markHelpful', 'question.markFixed', 'post.flag', 'photo.upload', 'expertApplication.submit']);
+const WRITES = new Set<Action>(['calculation.save', 'question.ask', 'question.edit', 'answer.post', 'answer.edit', 'reply.post', 'reply.edit', 'post.markHelpful', 'question.markFixed', 'post.flag', 'photo.upload', 'expertApplication.submit', 'fieldLog.create', 'fieldLog.edit', 'fieldLog.import']);
 
 export function isNewMember(user: SessionUser, now = Date.now()): boolean {
   return now - user.memberSince.getTime() < NEW_MEMBER_DAYS * 86_400_000;

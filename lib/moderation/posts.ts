@@ -2,7 +2,7 @@ import type { Transaction } from 'sequelize';
 import { initModels } from '@/models';
 import { ForumError } from '@/lib/forum/errors';
 
-export type ModeratedType = 'question' | 'answer' | 'reply' | 'photo';
+export type ModeratedType = 'question' | 'answer' | 'reply' | 'photo' | 'field-log';
 
 /** What moderation needs of any post: its author, its words and its visibility. */
 export interface ModeratedPost {
@@ -24,7 +24,23 @@ export async function photoQuestionId(photo: { questionId: number | null; answer
 
 /** The post (locked for update) and the question it belongs to. A photo's author is its uploader, its words its description. */
 export async function loadPost(postType: ModeratedType, postId: number, transaction: Transaction): Promise<{ post: ModeratedPost; questionId: number | null }> {
-  const { Question, Answer, Reply, Photo } = initModels();
+  const { Question, Answer, Reply, Photo, FieldLogEntry } = initModels();
+  if (postType === 'field-log') {
+    // an entry belongs to no thread; its words are its site, its measurements and its notes
+    const entry = await FieldLogEntry.findByPk(postId, { transaction, lock: transaction.LOCK.UPDATE });
+    if (!entry) throw new ForumError(404, 'no such field log entry', 'postId');
+    const post: ModeratedPost = {
+      id: entry.id,
+      authorId: entry.authorId,
+      body: `Field log: ${entry.siteName} (${entry.testedOn}). ${entry.notes}`.trim(),
+      hiddenAt: entry.hiddenAt ?? null,
+      hiddenReason: entry.hiddenReason ?? null,
+      deletedAt: entry.deletedAt ?? null,
+      createdAt: entry.createdAt,
+      update: (v, o) => entry.update(v, o),
+    };
+    return { post, questionId: null };
+  }
   if (postType === 'photo') {
     const photo = await Photo.findByPk(postId, { transaction, lock: transaction.LOCK.UPDATE });
     if (!photo) throw new ForumError(404, 'no such photo', 'postId');

@@ -5,8 +5,8 @@ import { photoQuestionId } from './posts';
 
 /** Posts with open flags, oldest flag first, each with its context, the flaggers' notes and its revisions. */
 export async function reviewQueue(filter: { reason?: FlagReason; olderThanHours?: number }) {
-  const { Flag, User, Question, Answer, Reply, Revision, Tag, Photo } = initModels();
-  const where: Record<string | symbol, unknown> = { status: 'open', postType: { [Op.in]: ['question', 'answer', 'reply', 'photo'] } };
+  const { Flag, User, Question, Answer, Reply, Revision, Tag, Photo, FieldLogEntry } = initModels();
+  const where: Record<string | symbol, unknown> = { status: 'open', postType: { [Op.in]: ['question', 'answer', 'reply', 'photo', 'field-log'] } };
   if (filter.reason) where.reason = filter.reason;
   if (filter.olderThanHours) where.createdAt = { [Op.lte]: new Date(Date.now() - filter.olderThanHours * 3_600_000) };
   const flags = await Flag.findAll({ where, include: [{ model: User, as: 'flagger', attributes: ['handle', 'displayName', 'role'] }], order: [['createdAt', 'ASC']], limit: 500 });
@@ -17,11 +17,17 @@ export async function reviewQueue(filter: { reason?: FlagReason; olderThanHours?
   }
   const items = [];
   for (const [k, fs] of groups) {
-    const [type, idText] = k.split(':') as ['question' | 'answer' | 'reply' | 'photo', string];
+    const [type, idText] = k.split(':') as ['question' | 'answer' | 'reply' | 'photo' | 'field-log', string];
     const id = Number(idText);
     type QueuedPost = { id: number; body: string; questionId?: number | null; hiddenAt: Date | null; deletedAt: Date | null; createdAt: Date; author?: { id: number; handle: string; displayName: string }; photoId?: string };
     let post: QueuedPost | null;
-    if (type === 'photo') {
+    if (type === 'field-log') {
+      const entry = await FieldLogEntry.findByPk(id);
+      const author = entry ? await User.findByPk(entry.authorId, { attributes: ['id', 'handle', 'displayName'] }) : null;
+      post = entry
+        ? { id: entry.id, body: `Field log: ${entry.siteName} (${entry.testedOn}). ${entry.notes}`.trim(), questionId: null, hiddenAt: entry.hiddenAt ?? null, deletedAt: entry.deletedAt ?? null, createdAt: entry.createdAt, author: author ?? undefined }
+        : null;
+    } else if (type === 'photo') {
       const photo = await Photo.findByPk(id);
       const owner = photo ? await User.findByPk(photo.ownerId, { attributes: ['id', 'handle', 'displayName'] }) : null;
       post = photo

@@ -3,7 +3,7 @@ import { FLAG_REASONS } from '@/models/Flag';
 import { MODERATION_ACTIONS } from '@/lib/moderation/actions';
 
 const postRef = {
-  postType: z.enum(['question', 'answer', 'reply', 'photo'], { error: 'postType must be question, answer, reply or photo' }),
+  postType: z.enum(['question', 'answer', 'reply', 'photo', 'field-log'], { error: 'postType must be question, answer, reply, photo or field-log' }),
   postId: z.number({ error: 'postId must be a number' }).int().positive(),
 };
 

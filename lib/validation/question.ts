@@ -36,6 +36,8 @@ export const askQuestionSchema = z.object({
   siteSheet: siteSheetSchema,
   photoIds: z.array(z.string().regex(/^[0-9A-Za-z]{10,24}$/, 'photoIds must be ids from the upload')).max(6, 'at most six photos').default([]),
   guide: z.string().regex(/^[a-z0-9-]+$/).max(80).optional(),
+  /** the field log entry the site sheet was filled from */
+  fieldLogEntryId: z.number({ error: 'fieldLogEntryId must be a field log entry number' }).int().positive().optional(),
 });
 export type AskQuestion = z.input<typeof askQuestionSchema>;
 

@@ -6,6 +6,7 @@ import { newPublicId } from '@/lib/calculations/store';
 import { hashPassword } from '@/lib/auth/password';
 import { demoThreads } from './demo-forum-data';
 import { seedPhoto } from './demo-photos';
+import { seedFieldLog } from './demo-field-log';
 import { DEMO_PASSWORD, demoCalculations, demoQuestions, demoSafetyChecks, demoTags, demoUsers } from './demo-data';
 
 const DAY = 86_400_000;
@@ -114,6 +115,8 @@ export async function seedDemo(sequelize: Sequelize, now = new Date()): Promise<
         await Revision.create({ postType: 'reply', postId: reply.id, editorId: reply.authorId, title: null, body: reply.body, createdAt: at }, { transaction });
       }
     }
+
+    await seedFieldLog(initModels(sequelize), (handle) => must(userId, handle), now, transaction);
   });
   return true;
 }

@@ -6,6 +6,7 @@ import { migrations } from '@/migrations';
 import { seedDemo } from '@/migrations/seed/demo';
 import { demoQuestions, demoUsers } from '@/migrations/seed/demo-data';
 import { demoThreads } from '@/migrations/seed/demo-forum-data';
+import { demoFieldLog } from '@/migrations/seed/demo-field-log';
 import { initModels } from '@/models';
 import { assertTestDatabase } from './reset';
 
@@ -41,6 +42,10 @@ describe('migrations round trip on the real MariaDB', () => {
     expect(await User.count()).toBe(demoUsers.length);
     expect(await Question.count()).toBe(demoQuestions.length + demoThreads.length);
     expect(await Answer.count()).toBe([...demoQuestions, ...demoThreads].reduce((n, q) => n + q.answers.length, 0));
+    const { FieldLogEntry, FieldLogTrial, FieldLogLink } = initModels(sequelize);
+    expect(await FieldLogEntry.count()).toBe(demoFieldLog().length);
+    expect(await FieldLogTrial.count()).toBe(demoFieldLog().reduce((n, e) => n + e.trials.length, 0));
+    expect(await FieldLogLink.count()).toBe(1);
     const q = await Question.findOne({ where: { title: demoQuestions[0].title }, include: ['author', 'tags'] });
     expect(q?.author?.handle).toBe(demoQuestions[0].author);
     expect(q?.tags?.map((t) => t.slug).sort()).toEqual([...demoQuestions[0].tags].sort());

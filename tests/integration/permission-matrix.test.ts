@@ -78,6 +78,15 @@ const SAMPLES: Record<string, (ids: Record<string, number>) => Sample> = {
   'GET /api/review': () => ({}),
   'POST /api/review/actions': (ids) => ({ body: { action: 'warn', postType: 'answer', postId: ids.ownerAnswer, reason: 'checking the matrix' } }),
   'GET /api/admin/audit': () => ({}),
+  'POST /api/field-log': () => ({
+    body: {
+      siteName: 'Matrix test spring', testedOn: '2026-06-01', pumpSize: '1', fall: '2 m', lift: '10 m', driveLength: '12 m', driveSize: '1',
+      driveMaterial: 'pvc', driveFlow: '20 L/min', driveFlowMethod: 'measured', trials: [{ volume: '2 L', seconds: 40 }],
+    },
+  }),
+  'POST /api/field-log/[id]/link': (ids) => ({ params: { id: String(ids.ownerEntryAfter) }, body: { beforeId: ids.ownerEntryBefore, whatChanged: 'outlet moved higher' } }),
+  // a header with no rows: an allowed caller gets 422 for the empty file, never 401/403
+  'POST /api/field-log/import': () => ({ body: { csv: 'site_name,tested_on\r\n' } }),
 };
 
 /** Routes that only ever act on the caller's own account: every signed-in persona is the owner. */
@@ -132,6 +141,9 @@ describe('permission matrix: every API route × every persona, against the polic
     ids.otherQuestion = (await Question.findOne({ where: { authorId: cabin } }))!.id;
     const quarry = (await User.findOne({ where: { handle: 'quarry_lane_valves' } }))!.id;
     ids.flagTarget = (await Answer.findOne({ where: { authorId: quarry } }))!.id;
+    const garden = await initModels().FieldLogEntry.findAll({ where: { authorId: ids.owner, siteName: 'Ferncombe top garden' }, order: [['id', 'ASC']] });
+    ids.ownerEntryBefore = garden[0].id;
+    ids.ownerEntryAfter = garden[1].id;
     ids.ownerReply = (await Reply.create({ questionId: ids.otherQuestion, parentType: 'question', answerId: null, replyToId: null, authorId: ids.owner, body: 'A first reply.' })).id;
     const failures: string[] = [];
     for (const h of handlers) {

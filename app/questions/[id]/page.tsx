@@ -81,6 +81,13 @@ export default async function QuestionPage({ params }: { params: Params }) {
               </Link>
             </p>
           ) : null}
+          {thread.fieldLogEntryId ? (
+            <p className="mt-2 text-sm">
+              <Link href={`/field-log/${thread.fieldLogEntryId}`} className="cw-link">
+                Filled from field log entry {thread.fieldLogEntryId}
+              </Link>
+            </p>
+          ) : null}
         </section>
       ) : null}
       <Thread initial={thread} viewer={viewer ? { id: viewer.id, handle: viewer.handle, role: viewer.role } : null} />

@@ -7,6 +7,9 @@ import { isDatabaseUnavailable } from '@/lib/db/errors';
 import { initModels } from '@/models';
 import { ServiceUnavailable } from '@/components/ServiceUnavailable';
 import { AskForm } from '@/components/questions/AskForm';
+import { getEntry } from '@/lib/field-log/store';
+import { entrySiteSheet } from '@/lib/field-log/site-sheet';
+import { idParam } from '@/lib/http/guard';
 
 export const metadata: Metadata = { title: 'Ask a question' };
 export const dynamic = 'force-dynamic';
@@ -17,6 +20,8 @@ export default async function AskQuestionPage({ searchParams }: { searchParams: 
   const sp = await searchParams;
   const one = (v: string | string[] | undefined) => (typeof v === 'string' && SLUG.test(v) ? v : undefined);
 
+  const fieldLogId = typeof sp.fieldLog === 'string' ? idParam(sp.fieldLog) : undefined;
+  let fromFieldLog: { id: number; siteSheet: ReturnType<typeof entrySiteSheet> } | undefined;
   let state: { kind: 'signed-out' } | { kind: 'refused' } | { kind: 'form'; tags: { slug: string; name: string }[] };
   try {
     const user = await currentUserInPage();
@@ -25,6 +30,8 @@ export default async function AskQuestionPage({ searchParams }: { searchParams: 
     else {
       const rows = await initModels().Tag.findAll({ attributes: ['slug', 'name'], order: [['name', 'ASC']] });
       state = { kind: 'form', tags: rows.map((t) => ({ slug: t.slug, name: t.name })) };
+      const entry = fieldLogId ? await getEntry(fieldLogId, user) : null;
+      if (entry && !entry.hidden && !entry.deleted) fromFieldLog = { id: entry.id, siteSheet: entrySiteSheet(entry) };
     }
   } catch (err) {
     if (isDatabaseUnavailable(err)) return <ServiceUnavailable what="the question form" />;
@@ -41,6 +48,11 @@ export default async function AskQuestionPage({ searchParams }: { searchParams: 
           with your numbers.
         </p>
       </div>
+      {fromFieldLog ? (
+        <p className="cw-muted max-w-prose font-sans text-sm" data-testid="from-field-log">
+          The site sheet is filled from <Link href={`/field-log/${fromFieldLog.id}`} className="cw-link">field log entry {fromFieldLog.id}</Link>; the question will link to it.
+        </p>
+      ) : null}
       {state.kind === 'signed-out' ? (
         <p className="cw-card max-w-prose font-sans">
           <Link href="/sign-in?callbackUrl=/questions/ask" className="cw-link">
@@ -55,6 +67,7 @@ export default async function AskQuestionPage({ searchParams }: { searchParams: 
           tags={state.tags}
           defaultTag={tag && state.tags.some((t) => t.slug === tag) ? tag : undefined}
           guide={one(sp.guide)}
+          fromFieldLog={fromFieldLog}
         />
       )}
     </div>

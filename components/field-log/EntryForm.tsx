@@ -1,0 +1,133 @@
+'use client';
+
+import { useState } from 'react';
+import { useRouter } from 'next/navigation';
+import { NOMINAL_LABELS, NOMINAL_SIZES } from '@/lib/hydraulics/pipes';
+import { PIPE_MATERIAL_CHOICES } from '@/lib/validation/field-log';
+import { FieldError, inputClass, labelClass, sendJson, type FormError } from '@/components/forms/api';
+import { PhotoPicker } from '@/components/photos/PhotoPicker';
+import { MATERIAL_LABELS } from './format';
+
+type Trial = { volume: string; seconds: string };
+
+const TEXT_FIELDS: { name: string; label: string; hint: string }[] = [
+  { name: 'fall', label: 'Fall', hint: 'intake water surface down to the pump, e.g. “4 ft” or “1.2 m”' },
+  { name: 'lift', label: 'Lift', hint: 'pump up to the delivery outlet, e.g. “29 ft”' },
+  { name: 'driveLength', label: 'Drive pipe length', hint: 'e.g. “30 ft”' },
+  { name: 'deliveryLength', label: 'Delivery line length', hint: 'optional, e.g. “200 ft”' },
+  { name: 'driveFlow', label: 'Drive flow (all pumps)', hint: 'e.g. “8 gal/min” or “30 L/min”' },
+];
+
+/** Records one test: the installation, the drive flow and each bucket trial. */
+export function EntryForm() {
+  const router = useRouter();
+  const [v, setV] = useState<Record<string, string>>({
+    siteName: '', testedOn: new Date().toISOString().slice(0, 10), pumpType: 'homemade', pumpSize: '1', pumpCount: '1', arrangement: 'single',
+    fall: '', lift: '', driveLength: '', driveSize: '1', driveMaterial: 'pvc', deliveryLength: '', deliverySize: '', deliveryMaterial: '',
+    driveFlow: '', driveFlowMethod: 'measured', driveFlowHow: '', bpm: '', wasteValveSetting: '', waterTempC: '', notes: '',
+  });
+  const [trials, setTrials] = useState<Trial[]>([{ volume: '', seconds: '' }]);
+  const [photoIds, setPhotoIds] = useState<string[]>([]);
+  const [error, setError] = useState<FormError | null>(null);
+  const [busy, setBusy] = useState(false);
+  const set = (k: string) => (e: { target: { value: string } }) => setV((o) => ({ ...o, [k]: e.target.value }));
+  const num = (s: string) => (s.trim() === '' ? undefined : Number(s));
+  const opt = (s: string) => (s.trim() === '' ? undefined : s);
+
+  async function submit(ev: React.FormEvent) {
+    ev.preventDefault();
+    setBusy(true);
+    const out = await sendJson<{ id: number; url: string }>('/api/field-log', 'POST', {
+      siteName: v.siteName, testedOn: v.testedOn, pumpType: v.pumpType, pumpSize: v.pumpSize, pumpCount: num(v.pumpCount), arrangement: v.arrangement,
+      fall: v.fall, lift: v.lift, driveLength: v.driveLength, driveSize: v.driveSize, driveMaterial: v.driveMaterial,
+      deliveryLength: opt(v.deliveryLength), deliverySize: opt(v.deliverySize), deliveryMaterial: opt(v.deliveryMaterial),
+      driveFlow: v.driveFlow, driveFlowMethod: v.driveFlowMethod, driveFlowHow: v.driveFlowHow,
+      trials: trials.map((t) => ({ volume: /^\s*[\d.]+\s*$/.test(t.volume) ? `${t.volume.trim()} L` : t.volume, seconds: Number(t.seconds) })),
+      bpm: num(v.bpm), wasteValveSetting: v.wasteValveSetting, waterTempC: num(v.waterTempC), notes: v.notes, photoIds,
+    });
+    setBusy(false);
+    if (out.ok) router.push(out.data.url);
+    else setError(out.error);
+  }
+
+  const text = (name: string, label: string, hint?: string, type = 'text') => (
+    <div>
+      <label className={labelClass} htmlFor={`fl-${name}`}>{label}</label>
+      <input id={`fl-${name}`} name={name} type={type} className={inputClass} value={v[name]} onChange={set(name)} aria-describedby={hint ? `fl-${name}-hint` : undefined} />
+      {hint ? <p id={`fl-${name}-hint`} className="cw-muted mt-1 text-xs">{hint}</p> : null}
+      <FieldError error={error} field={name} />
+    </div>
+  );
+  const select = (name: string, label: string, options: readonly { value: string; label: string }[]) => (
+    <div>
+      <label className={labelClass} htmlFor={`fl-${name}`}>{label}</label>
+      <select id={`fl-${name}`} name={name} className={inputClass} value={v[name]} onChange={set(name)}>
+        {options.map((o) => <option key={o.value} value={o.value}>{o.label}</option>)}
+      </select>
+      <FieldError error={error} field={name} />
+    </div>
+  );
+  const sizes = NOMINAL_SIZES.map((s) => ({ value: s, label: NOMINAL_LABELS[s] }));
+  const materials = PIPE_MATERIAL_CHOICES.map((m) => ({ value: m, label: MATERIAL_LABELS[m] }));
+
+  return (
+    <form onSubmit={submit} noValidate className="flex max-w-3xl flex-col gap-5 font-sans" aria-label="Record a field log test">
+      <fieldset className="grid gap-4 sm:grid-cols-2">
+        <legend className="mb-2 font-serif text-lg font-semibold">The test</legend>
+        {text('siteName', 'Site name', 'the same name links tests of one installation')}
+        {text('testedOn', 'Date of the test', undefined, 'date')}
+        {select('pumpType', 'Pump type', [{ value: 'homemade', label: 'homemade' }, { value: 'commercial', label: 'commercial' }])}
+        {select('pumpSize', 'Pump size', sizes)}
+        {text('pumpCount', 'Number of pumps', undefined, 'number')}
+        {select('arrangement', 'Arrangement', [{ value: 'single', label: 'single pump' }, { value: 'parallel', label: 'in parallel' }, { value: 'staged', label: 'staged' }])}
+      </fieldset>
+      <fieldset className="grid gap-4 sm:grid-cols-2">
+        <legend className="mb-2 font-serif text-lg font-semibold">Heads and pipes</legend>
+        {TEXT_FIELDS.slice(0, 3).map((f) => <div key={f.name}>{text(f.name, f.label, f.hint)}</div>)}
+        {select('driveSize', 'Drive pipe size', sizes)}
+        {select('driveMaterial', 'Drive pipe material', materials)}
+        {text('deliveryLength', 'Delivery line length', TEXT_FIELDS[3].hint)}
+        {select('deliverySize', 'Delivery line size', [{ value: '', label: 'not recorded' }, ...sizes])}
+        {select('deliveryMaterial', 'Delivery line material', [{ value: '', label: 'not recorded' }, ...materials])}
+      </fieldset>
+      <fieldset className="grid gap-4 sm:grid-cols-2">
+        <legend className="mb-2 font-serif text-lg font-semibold">Drive flow and the pump</legend>
+        {text('driveFlow', TEXT_FIELDS[4].label, TEXT_FIELDS[4].hint)}
+        {select('driveFlowMethod', 'Drive flow was', [{ value: 'measured', label: 'measured' }, { value: 'estimated', label: 'estimated' }])}
+        {text('driveFlowHow', 'How', 'e.g. waste and delivery caught in a bucket, timed')}
+        {text('bpm', 'Beats per minute', 'optional', 'number')}
+        {text('wasteValveSetting', 'Waste valve setting', 'optional, in words')}
+        {text('waterTempC', 'Water temperature (°C)', 'optional', 'number')}
+      </fieldset>
+      <fieldset className="flex flex-col gap-3">
+        <legend className="mb-2 font-serif text-lg font-semibold">Bucket trials at the delivery outlet</legend>
+        <p className="cw-muted text-sm">One row a trial: what the bucket caught and how long it took. A bare number is litres; “1.5 gal” works too.</p>
+        {trials.map((t, i) => (
+          <div key={i} className="flex flex-wrap items-end gap-3" data-trial={i}>
+            <label className={labelClass}>Trial {i + 1} volume
+              <input name={`trials.${i}.volume`} aria-label={`Trial ${i + 1} volume`} className={inputClass} value={t.volume} onChange={(e) => setTrials((o) => o.map((x, j) => (j === i ? { ...x, volume: e.target.value } : x)))} />
+            </label>
+            <label className={labelClass}>seconds
+              <input name={`trials.${i}.seconds`} aria-label={`Trial ${i + 1} seconds`} type="number" step="0.1" className={inputClass} value={t.seconds} onChange={(e) => setTrials((o) => o.map((x, j) => (j === i ? { ...x, seconds: e.target.value } : x)))} />
+            </label>
+            {trials.length > 1 ? <button type="button" className="cw-link text-sm" onClick={() => setTrials((o) => o.filter((_, j) => j !== i))}>Remove</button> : null}
+            <FieldError error={error} field={`trials.${i}`} />
+          </div>
+        ))}
+        <FieldError error={error} field="trials" />
+        <button type="button" className="cw-link self-start text-sm" onClick={() => setTrials((o) => [...o, { volume: '', seconds: '' }])}>Add a trial</button>
+      </fieldset>
+      <div>
+        <label className={labelClass} htmlFor="fl-notes">Notes</label>
+        <textarea id="fl-notes" name="notes" rows={4} className={inputClass} value={v.notes} onChange={set('notes')} />
+      </div>
+      <section aria-label="Photos" className="flex flex-col gap-2">
+        <h2 className={labelClass}>Photos of the installation (optional)</h2>
+        <PhotoPicker onChange={setPhotoIds} />
+        <FieldError error={error} field="photoIds" />
+      </section>
+      <FieldError error={error} />
+      <button type="submit" className="cw-button self-start" disabled={busy}>Save the test</button>
+    </form>
+  );
+}

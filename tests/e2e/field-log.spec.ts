@@ -1,0 +1,99 @@
+import { test, expect, type Page } from '@playwright/test';
+
+const PASSWORD = 'lift-with-falling-water';
+
+async function signIn(page: Page, email: string) {
+  await page.goto('/sign-in');
+  const form = page.getByRole('form', { name: 'Sign in with a password' });
+  await form.getByLabel('E-mail').fill(email);
+  await form.getByLabel('Password').fill(PASSWORD);
+  await form.getByRole('button', { name: 'Sign in' }).click();
+  await expect(page).toHaveURL(/\/$/);
+}
+
+test('the community page shows the demo entries on the chart and in the table', async ({ page, request }) => {
+  const api = await (await request.get('/api/field-log?perPage=100')).json();
+  expect(api.total).toBeGreaterThanOrEqual(30);
+  await page.goto('/field-log');
+  await expect(page.getByRole('heading', { level: 1, name: 'Field log' })).toBeVisible();
+  const chart = page.getByTestId('field-log-chart');
+  await expect(chart.locator('[data-entry-id]')).toHaveCount(api.total);
+  await expect(page.getByRole('table', { name: 'Field log entries' }).locator('tbody tr')).toHaveCount(20);
+  // sorting by efficiency, highest first, puts the API's best entry on top
+  const best = (await (await request.get('/api/field-log?sort=efficiency&dir=desc&perPage=1')).json()).items[0];
+  await page.getByRole('table', { name: 'Field log entries' }).getByRole('link', { name: 'Efficiency', exact: true }).click();
+  await expect(page).toHaveURL(/sort=efficiency/);
+  await expect(page.locator('tbody tr').first()).toHaveAttribute('data-entry-row', String(best.id));
+  // the next page keeps the sort
+  await page.getByRole('link', { name: 'Next →' }).click();
+  await expect(page).toHaveURL(/sort=efficiency.*page=2|page=2.*sort=efficiency/);
+  const second = (await (await request.get('/api/field-log?sort=efficiency&dir=desc&perPage=20&page=2')).json()).items[0];
+  await expect(page.locator('tbody tr').first()).toHaveAttribute('data-entry-row', String(second.id));
+});
+
+test('record a test with three bucket trials, see it on the chart, link it as the after of an earlier test and read the ratio', async ({ page, request, baseURL }) => {
+  await page.context().addCookies([{ name: 'cw_units', value: 'metric', url: baseURL! }]);
+  await signIn(page, 'tamsin@ferncombe.example');
+  await page.goto('/field-log/new');
+  const form = page.getByRole('form', { name: 'Record a field log test' });
+  await form.getByLabel('Site name').fill('Ferncombe top garden');
+  await form.getByLabel('Pump size').selectOption('3/4');
+  await form.getByLabel('Fall', { exact: true }).fill('1.8 m');
+  await form.getByLabel('Lift', { exact: true }).fill('5.4 m');
+  await form.getByLabel('Drive pipe length').fill('10 m');
+  await form.getByLabel('Drive pipe size').selectOption('3/4');
+  await form.getByLabel('Drive pipe material').selectOption('pvc');
+  await form.getByLabel('Drive flow (all pumps)').fill('14 L/min');
+  const trials = [['2.5', '45'], ['2.5', '46'], ['2.5', '44']];
+  for (const [i, [vol, s]] of trials.entries()) {
+    if (i > 0) await form.getByRole('button', { name: 'Add a trial' }).click();
+    await form.getByLabel(`Trial ${i + 1} volume`).fill(vol);
+    await form.getByLabel(`Trial ${i + 1} seconds`).fill(s);
+  }
+  await form.getByRole('button', { name: 'Save the test' }).click();
+  await expect(page).toHaveURL(/\/field-log\/\d+$/);
+  const id = Number(page.url().split('/').pop());
+  // 2.5 L in 45, 46 and 44 s: mean of 3.333, 3.261 and 3.409 L/min = 3.33 L/min (hand calculation)
+  await expect(page.getByTestId('delivered')).toHaveText('3.33 L/min');
+  // D'Aubuisson q·h/(Q·H) = 3.3344 × 5.4 / (14 × 1.8) = 0.715 (hand calculation from the definition: 18.006 ÷ 25.2 = 0.7145)
+  await expect(page.getByTestId('efficiency-d')).toHaveText('0.715');
+
+  await page.goto('/field-log');
+  await expect(page.getByTestId('field-log-chart').locator(`[data-entry-id="${id}"]`)).toHaveCount(1);
+
+  await page.goto(`/field-log/${id}`);
+  const linkForm = page.getByRole('form', { name: 'Link as the after of an earlier test' });
+  const beforeId = Number(await linkForm.getByLabel('Before (an earlier test on this site)').inputValue());
+  await linkForm.getByLabel('What changed').fill('drive pipe re-laid straighter');
+  await linkForm.getByRole('button', { name: 'Link and compare' }).click();
+  await expect(page).toHaveURL(new RegExp(`/field-log/compare/${beforeId}/${id}$`));
+  const before = await (await request.get(`/api/field-log/${beforeId}`)).json();
+  const after = await (await request.get(`/api/field-log/${id}`)).json();
+  // the ratio of mean trial flows, after ÷ before
+  await expect(page.getByTestId('measured-ratio')).toHaveText(`${(after.deliveredFlowM3s / before.deliveredFlowM3s).toFixed(2)}×`);
+  await expect(page.getByText('What changed: drive pipe re-laid straighter')).toBeVisible();
+});
+
+test('the demo one-pump against two-pump comparison shows both ratios', async ({ page, request }) => {
+  const list = (await (await request.get('/api/field-log?perPage=100&sort=testedOn&dir=asc')).json()).items as { id: number; siteName: string }[];
+  const [one, two] = list.filter((e) => e.siteName === 'Ferncombe lower meadow');
+  await page.goto(`/field-log/compare/${one.id}/${two.id}`);
+  const measured = Number((await page.getByTestId('measured-ratio').textContent())?.replace('×', ''));
+  // two pumps on one intake and one delivery line: more than one pump gives, less than double (common practice, no source)
+  expect(measured).toBeGreaterThan(1.3);
+  expect(measured).toBeLessThan(2);
+  await expect(page.getByTestId('planner-ratio')).toBeVisible();
+});
+
+test('an entry opens the ask form with the site sheet filled from it', async ({ page, request }) => {
+  const list = (await (await request.get('/api/field-log?perPage=100&sort=testedOn&dir=asc')).json()).items as { id: number; siteName: string }[];
+  const one = list.find((e) => e.siteName === 'Ferncombe lower meadow')!;
+  await signIn(page, 'tamsin@ferncombe.example');
+  await page.goto(`/field-log/${one.id}`);
+  await page.getByRole('link', { name: 'Ask a question about this test' }).click();
+  await expect(page).toHaveURL(new RegExp(`/questions/ask\\?fieldLog=${one.id}$`));
+  await expect(page.getByTestId('from-field-log')).toContainText(`field log entry ${one.id}`);
+  // the demo entry's fall and lift as recorded (2.4 m and 12 m)
+  await expect(page.getByLabel('Fall', { exact: true })).toHaveValue('2.4 m');
+  await expect(page.getByLabel('Lift', { exact: true })).toHaveValue('12 m');
+});
