@@ -5,7 +5,7 @@ import { ForumError } from '@/lib/forum/errors';
 import type { SessionUser } from '@/lib/auth/session';
 import { recordAudit } from './audit';
 import { loadPost, type ModeratedType } from './posts';
-import { indexThread } from '@/lib/search';
+import { indexFieldLog, indexThread } from '@/lib/search';
 
 export const MODERATION_ACTIONS = ['dismiss', 'hide', 'restore', 'delete', 'lock', 'unlock', 'retag', 'warn', 'suspend'] as const;
 export type ModerationAction = (typeof MODERATION_ACTIONS)[number];
@@ -100,5 +100,6 @@ export async function moderate(
   });
   // hide, restore, delete and retag change what search shows: the thread is reindexed now
   if (done.questionId) await indexThread(done.questionId);
+  if (input.postType === 'field-log') await indexFieldLog([input.postId]);
   return { auditId: done.auditId };
 }

@@ -184,6 +184,45 @@ export async function threadDocs(questionIds: number[]): Promise<SearchDoc[]> {
   return out;
 }
 
+const ARRANGEMENT_WORDS: Record<string, string> = { single: '', parallel: ' in parallel', staged: ' in stages' };
+
+/** Field log entries as search documents: site, pumps and measurements as typed, notes. */
+export async function fieldLogDocs(ids?: number[]): Promise<SearchDoc[]> {
+  const { FieldLogEntry } = initModels();
+  const rows = await FieldLogEntry.findAll({
+    attributes: ['id', 'siteName', 'testedOn', 'pumpType', 'pumpSize', 'pumpCount', 'arrangement', 'driveMaterial', 'driveFlowMethod', 'driveFlowHow', 'wasteValveSetting', 'notes', 'typed', 'hiddenAt', 'deletedAt'],
+    where: ids ? { id: { [Op.in]: ids } } : {},
+    order: [['id', 'ASC']],
+  });
+  return rows.map((e) => {
+    const t = (e.typed ?? {}) as Record<string, string>;
+    const pumps = `${e.pumpCount > 1 ? `${e.pumpCount} × ` : ''}${e.pumpSize} inch ${e.pumpType} pump${e.pumpCount > 1 ? 's' : ''}${ARRANGEMENT_WORDS[e.arrangement] ?? ''}`;
+    const title = `${e.siteName}: ${pumps}, ${t.fall ?? ''} fall, ${t.lift ?? ''} lift`;
+    return {
+      id: `field-log-${e.id}`,
+      kind: 'field-log' as const,
+      title,
+      head: title,
+      url: `/field-log/${e.id}`,
+      text: [
+        e.notes,
+        `drive pipe ${t.driveLength ?? ''} of ${t.driveSize ?? e.driveSize} inch ${e.driveMaterial}`,
+        `drive flow ${t.driveFlow ?? ''} (${e.driveFlowMethod}${e.driveFlowHow ? `: ${e.driveFlowHow}` : ''})`,
+        t.trials ? `bucket trials ${t.trials}` : '',
+        e.wasteValveSetting ? `waste valve ${e.wasteValveSetting}` : '',
+      ]
+        .filter(Boolean)
+        .join('\n'),
+      tags: [],
+      solved: null,
+      level: null,
+      hidden: Boolean(e.hiddenAt || e.deletedAt),
+      date: new Date(`${e.testedOn}T00:00:00Z`).toISOString(),
+      threadId: null,
+    };
+  });
+}
+
 /** Every thread in the database, a batch of questions at a time (for rebuilds). */
 export async function* allThreadDocs(batch = 2000): AsyncGenerator<SearchDoc[]> {
   const { Question } = initModels();

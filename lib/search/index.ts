@@ -1,6 +1,6 @@
 import { mkdirSync, statSync, writeFileSync } from 'node:fs';
 import path from 'node:path';
-import { allGuideDocs, allThreadDocs, threadDocs, type SearchDoc, type SearchKind } from './documents';
+import { allGuideDocs, allThreadDocs, fieldLogDocs, threadDocs, type SearchDoc, type SearchKind } from './documents';
 import type { SearchEngine, SearchFilters } from './engine';
 import { FlexEngine } from './flex-engine';
 import { MeiliEngine } from './meili-engine';
@@ -71,6 +71,9 @@ async function fill(engine: SearchEngine): Promise<{ documents: number; ms: numb
     await engine.upsert(batch);
     documents += batch.length;
   }
+  const entries = await fieldLogDocs();
+  await engine.upsert(entries);
+  documents += entries.length;
   return { documents, ms: performance.now() - t0 };
 }
 
@@ -130,15 +133,15 @@ export async function indexThread(questionId: number): Promise<void> {
   }
 }
 
-/** Adds or replaces documents of another kind (field log entries). */
-export async function indexDocs(docs: SearchDoc[]): Promise<void> {
+/** Brings field log entries up to date after a write (record, import, hide, restore, delete). */
+export async function indexFieldLog(ids: number[]): Promise<void> {
   const s = state();
-  if (!s.built) return;
+  if (!s.built || ids.length === 0) return;
   try {
     await s.built;
-    await s.engine.upsert(docs);
+    await s.engine.upsert(await fieldLogDocs(ids));
   } catch (err) {
-    console.error('search: could not index documents:', err instanceof Error ? err.message : err);
+    console.error(`search: could not index field log entries ${ids.join(', ')}:`, err instanceof Error ? err.message : err);
   }
 }
 

@@ -7,6 +7,7 @@ import { POST as replyPOST } from '@/app/api/questions/[id]/replies/route';
 import { PUT as answerPUT } from '@/app/api/answers/[id]/route';
 import { POST as actionPOST } from '@/app/api/review/actions/route';
 import { GET as similarGET } from '@/app/api/questions/similar/route';
+import { POST as fieldLogPOST } from '@/app/api/field-log/route';
 import { rebuildIndex, searchEngine } from '@/lib/search';
 import { freshDemoDatabase } from './db';
 import { actAs } from './act-as';
@@ -98,6 +99,26 @@ describe('search follows every write (real MariaDB, in-process engine)', () => {
       expect(await ids(q, 'ferncombe_tamsin')).not.toContain(id);
       expect(await ids(q, 'moss_moderator')).toContain(id);
     }
+  });
+
+  it('field log entries are found by site, pumps and notes; a hidden one only by moderators', async () => {
+    const demo = await find('Ferncombe lower meadow', null, '&kind=field-log');
+    expect(demo.length).toBeGreaterThan(0);
+    expect(demo[0].url).toMatch(/^\/field-log\/\d+$/);
+    const res = await call(fieldLogPOST, 'POST', '/api/field-log', 'sorrel_cabin', {
+      siteName: 'Tolvaddon sluice trial', testedOn: '2026-05-14', pumpSize: '1/2', fall: '4 ft', lift: '29 ft',
+      driveLength: '30 ft', driveSize: '1/2', driveMaterial: 'pvc', deliveryLength: '200 ft', deliverySize: '1/2', deliveryMaterial: 'hdpe',
+      driveFlow: '2 gal/min', driveFlowMethod: 'measured', driveFlowHow: 'a bucket for a minute',
+      trials: [{ volume: '0.49 L', seconds: 60 }, { volume: '0.5 L', seconds: 60 }], bpm: 60, notes: 'Eelgrass fouled the strainer twice.',
+    });
+    expect(res.status).toBe(201);
+    const id = `field-log-${res.body.id}`;
+    expect(await ids('tolvaddon')).toContain(id);
+    expect(await ids('eelgrass strainer', null, '&kind=field-log')).toEqual([id]);
+    expect((await moderate({ action: 'hide', postType: 'field-log', postId: res.body.id, reason: 'checking search' })).status).toBe(200);
+    expect(await ids('tolvaddon')).not.toContain(id);
+    expect(await ids('tolvaddon', 'sorrel_cabin')).not.toContain(id);
+    expect(await ids('tolvaddon', 'moss_moderator')).toContain(id);
   });
 
   it('the ask form’s similar questions come from search: other words for the part, heights in other units', async () => {

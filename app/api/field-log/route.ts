@@ -6,6 +6,7 @@ import { currentUser } from '@/lib/auth/session';
 import { ForumError } from '@/lib/forum/errors';
 import { fieldLogEntrySchema, fieldLogFilterSchema } from '@/lib/validation/field-log';
 import { createEntry, filteredEntries, sortAndPage } from '@/lib/field-log/store';
+import { indexFieldLog } from '@/lib/search';
 
 export const dynamic = 'force-dynamic';
 
@@ -28,6 +29,7 @@ export async function POST(request: Request) {
     const body = await readJson(request, fieldLogEntrySchema);
     if ('response' in body) return body.response;
     const e = await createEntry(user, body.data);
+    await indexFieldLog([e.id]);
     return NextResponse.json({ id: e.id, url: `/field-log/${e.id}` }, { status: 201 });
   }, { flood: 'post' });
 }

@@ -4,6 +4,7 @@ import { readJson } from '@/lib/http/body';
 import { guarded } from '@/lib/http/guard';
 import { importModeSchema } from '@/lib/validation/field-log';
 import { importCsv } from '@/lib/field-log/csv';
+import { indexFieldLog } from '@/lib/search';
 
 export const dynamic = 'force-dynamic';
 
@@ -22,6 +23,7 @@ export async function POST(request: Request) {
     const body = await readJson(request, importSchema);
     if ('response' in body) return body.response;
     const result = await importCsv(user, body.data.csv, body.data.mode);
+    await indexFieldLog(result.ids);
     if (body.data.mode === 'all-or-nothing' && result.errors.length) {
       return NextResponse.json({ error: { field: 'csv', message: `${result.errors.length} of the rows have errors; nothing was imported. Fix them, or import the valid rows only.`, code: 'invalid_rows' }, ...result }, { status: 422 });
     }
