@@ -1,6 +1,6 @@
 import { mkdirSync, statSync, writeFileSync } from 'node:fs';
 import path from 'node:path';
-import { allGuideDocs, allThreadDocs, fieldLogDocs, threadDocs, type SearchDoc, type SearchKind } from './documents';
+import { allGuideDocs, allThreadDocs, fieldLogDocs, threadDocs, type SearchKind } from './documents';
 import type { SearchEngine, SearchFilters } from './engine';
 import { FlexEngine } from './flex-engine';
 import { MeiliEngine } from './meili-engine';
