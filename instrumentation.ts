@@ -1,9 +1,14 @@
 /**
  * Runs once when a server starts (Next's instrumentation hook): search builds its
- * index in the background so the first search does not wait for it.
+ * index in the background so the first search does not wait for it, and the mail
+ * scheduler starts the outbox worker and the digests (MAIL_WORKER=off skips it).
  */
 export async function register() {
   if (process.env.NEXT_RUNTIME !== 'nodejs') return;
+  if (process.env.MAIL_WORKER !== 'off') {
+    const { startMailScheduler } = await import('@/lib/mail/scheduler');
+    startMailScheduler();
+  }
   if (process.env.SEARCH_WARM_ON_START === 'off') return;
   const { ensureIndex } = await import('@/lib/search');
   ensureIndex().catch((err) => console.error(`search: the index will be built on the first search (${err instanceof Error ? err.message : err})`));

@@ -31,7 +31,8 @@ const nextConfig = {
   reactStrictMode: true,
   poweredByHeader: false,
   // Sequelize loads its dialect at run time; keep it and the driver out of the bundle.
-  serverExternalPackages: ['sequelize', 'mariadb'],
+  // The e-mail renderer uses react-dom/server, which the server-component bundle refuses.
+  serverExternalPackages: ['sequelize', 'mariadb', '@react-email/render', '@react-email/components', 'nodemailer', 'node-cron'],
   typedRoutes: false,
   async headers() {
     return [{ source: '/:path*', headers: securityHeaders }];

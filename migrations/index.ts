@@ -6,6 +6,7 @@ import * as authAdapter from './004-auth-adapter';
 import * as forum from './005-forum';
 import * as moderation from './006-moderation';
 import * as fieldLog from './007-field-log';
+import * as mail from './008-mail';
 import * as listIndexes from './009-list-indexes';
 import * as rateLimits from './010-rate-limits';
 
@@ -23,7 +24,7 @@ export const migrations: { name: string; up: Step; down: Step }[] = [
   { name: '005-forum', ...forum },
   { name: '006-moderation', ...moderation },
   { name: '007-field-log', ...fieldLog },
-  // 008 is e-mail
+  { name: '008-mail', ...mail },
   { name: '009-list-indexes', ...listIndexes },
   { name: '010-rate-limits', ...rateLimits },
 ];

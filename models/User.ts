@@ -2,6 +2,8 @@ import { DataTypes, Model, type CreationOptional, type InferAttributes, type Inf
 
 export const ROLES = ['member', 'expert', 'moderator', 'admin'] as const;
 export type Role = (typeof ROLES)[number];
+export const DIGEST_FREQUENCIES = ['off', 'daily', 'weekly'] as const;
+export type DigestFrequency = (typeof DIGEST_FREQUENCIES)[number];
 
 export class User extends Model<InferAttributes<User>, InferCreationAttributes<User>> {
   declare id: CreationOptional<number>;
@@ -15,6 +17,12 @@ export class User extends Model<InferAttributes<User>, InferCreationAttributes<U
   declare emailVerifiedAt: CreationOptional<Date | null>;
   declare units: CreationOptional<'US' | 'metric'>;
   declare suspendedUntil: CreationOptional<Date | null>;
+  declare digestFrequency: CreationOptional<DigestFrequency>;
+  declare notifyAnswers: CreationOptional<boolean>;
+  declare notifyReplies: CreationOptional<boolean>;
+  declare notifyFixed: CreationOptional<boolean>;
+  declare notifyModeration: CreationOptional<boolean>;
+  declare notifyExpert: CreationOptional<boolean>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -32,6 +40,12 @@ export class User extends Model<InferAttributes<User>, InferCreationAttributes<U
         emailVerifiedAt: { type: DataTypes.DATE, allowNull: true },
         units: { type: DataTypes.ENUM('US', 'metric'), allowNull: false, defaultValue: 'US' },
         suspendedUntil: { type: DataTypes.DATE, allowNull: true },
+        digestFrequency: { type: DataTypes.ENUM(...DIGEST_FREQUENCIES), allowNull: false, defaultValue: 'off' },
+        notifyAnswers: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: true },
+        notifyReplies: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: true },
+        notifyFixed: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: true },
+        notifyModeration: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: true },
+        notifyExpert: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: true },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

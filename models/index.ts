@@ -20,8 +20,10 @@ import { AuditEntry } from './AuditEntry';
 import { FieldLogEntry } from './FieldLogEntry';
 import { FieldLogTrial } from './FieldLogTrial';
 import { FieldLogLink } from './FieldLogLink';
+import { TagFollow } from './TagFollow';
+import { MailMessage } from './MailMessage';
 
-export { User, Tag, Question, Answer, QuestionTag, SafetyCheck, WorkedCalculation, AuthToken, ExpertApplication, Notice, Reply, Revision, HelpfulMark, QuestionFollow, Photo, Flag, AuditEntry, FieldLogEntry, FieldLogTrial, FieldLogLink };
+export { User, Tag, Question, Answer, QuestionTag, SafetyCheck, WorkedCalculation, AuthToken, ExpertApplication, Notice, Reply, Revision, HelpfulMark, QuestionFollow, Photo, Flag, AuditEntry, FieldLogEntry, FieldLogTrial, FieldLogLink, TagFollow, MailMessage };
 
 const initialised = new WeakSet<Sequelize>();
 
@@ -48,6 +50,8 @@ export function initModels(sequelize: Sequelize = getSequelize()) {
     FieldLogEntry.initModel(sequelize);
     FieldLogTrial.initModel(sequelize);
     FieldLogLink.initModel(sequelize);
+    TagFollow.initModel(sequelize);
+    MailMessage.initModel(sequelize);
 
     Question.belongsTo(User, { as: 'author', foreignKey: 'authorId' });
     User.hasMany(Question, { as: 'questions', foreignKey: 'authorId' });
@@ -71,5 +75,5 @@ export function initModels(sequelize: Sequelize = getSequelize()) {
     FieldLogEntry.hasMany(FieldLogTrial, { as: 'trials', foreignKey: 'entryId' });
     initialised.add(sequelize);
   }
-  return { sequelize, User, Tag, Question, Answer, QuestionTag, SafetyCheck, WorkedCalculation, AuthToken, ExpertApplication, Notice, Reply, Revision, HelpfulMark, QuestionFollow, Photo, Flag, AuditEntry, FieldLogEntry, FieldLogTrial, FieldLogLink };
+  return { sequelize, User, Tag, Question, Answer, QuestionTag, SafetyCheck, WorkedCalculation, AuthToken, ExpertApplication, Notice, Reply, Revision, HelpfulMark, QuestionFollow, Photo, Flag, AuditEntry, FieldLogEntry, FieldLogTrial, FieldLogLink, TagFollow, MailMessage };
 }

@@ -6,6 +6,9 @@ import { isDatabaseUnavailable } from '@/lib/db/errors';
 import { initModels } from '@/models';
 import { ServiceUnavailable } from '@/components/ServiceUnavailable';
 import { SettingsForm, type SettingsValues } from './SettingsForm';
+import { MailSettingsForm } from './MailSettingsForm';
+import { loadMailSettings } from '@/lib/mail/settings';
+import type { MailSettings } from '@/lib/validation/mail';
 
 export const metadata: Metadata = { title: 'Settings' };
 export const dynamic = 'force-dynamic';
@@ -20,7 +23,7 @@ interface NoticeView {
 }
 
 export default async function SettingsPage() {
-  let loaded: { handle: string; canApply: boolean; values: SettingsValues; notices: NoticeView[] } | null = null;
+  let loaded: { handle: string; canApply: boolean; expert: boolean; values: SettingsValues; mail: { settings: MailSettings; tagChoices: { slug: string; name: string }[] }; notices: NoticeView[] } | null = null;
   let refusal: string | null = null;
   try {
     const user = await currentUserInPage();
@@ -37,8 +40,11 @@ export default async function SettingsPage() {
             limit: 50,
           })
         : [];
-      if (row) {
+      const mail = await loadMailSettings(user.id);
+      if (row && mail) {
         loaded = {
+          expert: row.role !== 'member',
+          mail,
           handle: row.handle,
           canApply: can(user, 'expertApplication.submit'),
           values: { displayName: row.displayName, region: row.region ?? '', bio: row.bio ?? '', units: row.units },
@@ -83,6 +89,12 @@ export default async function SettingsPage() {
         </p>
       </header>
       <SettingsForm initial={loaded.values} />
+      <section className="flex flex-col gap-2">
+        <h2 id="email" className="font-serif text-xl font-semibold">
+          E-mail
+        </h2>
+        <MailSettingsForm initial={loaded.mail.settings} tagChoices={loaded.mail.tagChoices} expert={loaded.expert} />
+      </section>
       {loaded.canApply ? (
         <p className="font-sans text-sm">
           Built and tuned ram pumps for others?{' '}

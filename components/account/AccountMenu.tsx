@@ -30,9 +30,14 @@ export function AccountMenu() {
           </Link>
         ) : null}
         {data.user.role === 'admin' ? (
-          <Link href="/admin/users" className="no-underline hover:underline">
-            Members and roles
-          </Link>
+          <>
+            <Link href="/admin/users" className="no-underline hover:underline">
+              Members and roles
+            </Link>
+            <Link href="/admin/outbox" className="no-underline hover:underline">
+              E-mail outbox
+            </Link>
+          </>
         ) : null}
         <button type="button" className="text-left hover:underline" onClick={() => void signOut({ callbackUrl: '/' })}>
           Sign out

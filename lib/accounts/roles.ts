@@ -2,13 +2,13 @@ import { recordAudit } from '@/lib/moderation/audit';
 import { getSequelize } from '@/lib/db';
 import { initModels } from '@/models';
 import type { Role } from '@/models/User';
-import { sendMail } from '@/lib/mail/transport';
-import { expertDecisionMessage } from '@/lib/mail/account-messages';
+import { notifyExpertDecision } from '@/lib/mail/notify';
 import type { ExpertApplicationInput } from '@/lib/validation/community';
 
 /**
- * Expert applications and role changes. Each write is one transaction; e-mail goes
- * out only after it commits, and a mail failure is logged, never undoes the decision.
+ * Expert applications and role changes. Each write is one transaction; the
+ * applicant's e-mail is queued in the outbox inside it and sent after it commits,
+ * so a mail failure delays the message, never undoes the decision.
  */
 
 export type Failure = { ok: false; status: number; message: string; field?: string; code?: string };
@@ -79,7 +79,7 @@ export async function decideExpertApplication(
   applicationId: number,
   decision: 'approve' | 'decline',
   note: string,
-): Promise<{ ok: true; status: 'approved' | 'declined'; role: Role; mailed: boolean } | Failure> {
+): Promise<{ ok: true; status: 'approved' | 'declined'; role: Role } | Failure> {
   const { User, ExpertApplication, Notice } = initModels();
   const approved = decision === 'approve';
   const result = await getSequelize().transaction(async (transaction) => {
@@ -113,18 +113,12 @@ export async function decideExpertApplication(
       },
       { transaction },
     );
+    await notifyExpertDecision(transaction, { applicationId: application.id, applicantId: applicant.id, moderatorId, approved, note });
     return { ok: true as const, applicant: { email: applicant.email, displayName: applicant.displayName, role: applicant.role } };
   });
   if (!result.ok) return result;
 
-  let mailed = true;
-  try {
-    await sendMail(expertDecisionMessage(result.applicant.email, result.applicant.displayName, approved, note));
-  } catch (err) {
-    mailed = false;
-    console.error(`mail to ${result.applicant.email} not sent: ${err instanceof Error ? err.message : String(err)}`);
-  }
-  return { ok: true, status: approved ? 'approved' : 'declined', role: result.applicant.role, mailed };
+  return { ok: true, status: approved ? 'approved' : 'declined', role: result.applicant.role };
 }
 
 const ROLE_WORDS: Record<Role, string> = {

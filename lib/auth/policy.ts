@@ -63,6 +63,8 @@ export const POLICY = {
   'moderation.act': row({ moderator: true, admin: true }),
   /** read the audit log */
   'audit.read': row({ admin: true }),
+  /** see the e-mail outbox (failed messages with their SMTP error) and send a failed one again */
+  'mail.outbox': row({ admin: true }),
   /** see hidden and deleted posts */
   'moderation.seeHidden': row({ moderator: true, admin: true }),
   /** record a field log entry (one test of an installation) */
@@ -111,6 +113,7 @@ export const REFUSAL: Record<Action, string> = {
   'post.flag': 'Sign in to flag a post.',
   'moderation.act': 'Only moderators can use the review queue.',
   'audit.read': 'Only admins can read the audit log.',
+  'mail.outbox': 'Only admins can see the e-mail outbox.',
   'moderation.seeHidden': 'Only moderators can see hidden posts.',
   'fieldLog.create': 'Sign in to record a field log entry.',
   'fieldLog.edit': 'Only its author can change this field log entry.',

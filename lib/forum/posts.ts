@@ -1,4 +1,5 @@
 import type { Transaction } from 'sequelize';
+import { notifyAnswer, notifyFixed, notifyReply } from '@/lib/mail/notify';
 import { getSequelize } from '@/lib/db';
 import { initModels } from '@/models';
 import type { SessionUser } from '@/lib/auth/session';
@@ -96,6 +97,7 @@ export async function postAnswer(user: SessionUser, questionId: number, input: {
       if (n !== input.photoIds.length) throw new ForumError(422, 'photoIds: a photo is not yours or is already attached', 'photoIds');
     }
     await q.update({ answerCount: q.answerCount + 1, lastActivityAt: new Date() }, { transaction });
+    await notifyAnswer(transaction, { answerId: a.id, questionId, authorId: user.id, body: a.body });
     return a;
   });
   return thenIndex(write, (a) => a.questionId);
@@ -146,6 +148,7 @@ export async function postReply(user: SessionUser, questionId: number, input: { 
     );
     await Revision.create({ postType: 'reply', postId: r.id, editorId: user.id, title: null, body: r.body }, { transaction });
     await q.update({ lastActivityAt: new Date() }, { transaction });
+    await notifyReply(transaction, { replyId: r.id, questionId, authorId: user.id, body: r.body, answerId, replyToId: input.replyToId ?? null });
     return r;
   });
   return thenIndex(write, (r) => r.questionId);
@@ -188,7 +191,9 @@ export async function chooseFixed(user: SessionUser, questionId: number, answerI
       const a = await Answer.findOne({ where: { id: answerId, questionId }, transaction });
       if (!a) throw new ForumError(422, 'answerId: no such answer on this question', 'answerId');
     }
+    const before = q.fixedAnswerId;
     await q.update({ fixedAnswerId: answerId }, { transaction });
+    if (answerId !== null && answerId !== before) await notifyFixed(transaction, { questionId, answerId, askerId: user.id });
     return q;
   });
   return thenIndex(write, (q) => q.id);

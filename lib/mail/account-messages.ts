@@ -29,11 +29,3 @@ export function signInLinkMessage(to: string, name: string, link: string): Messa
     text: `Hello ${name},\n\nSign in to Clackwater with this link:\n${link}\n\nIt works once and lasts 15 minutes.${sign}`,
   };
 }
-
-export function expertDecisionMessage(to: string, name: string, approved: boolean, note: string): Message {
-  return {
-    to,
-    subject: approved ? 'You are now an expert on Clackwater' : 'Your expert application on Clackwater',
-    text: `Hello ${name},\n\n${approved ? 'Your application for expert standing was approved.' : 'Your application for expert standing was declined this time.'}\n\nThe moderator wrote:\n${note}\n\n${siteUrl()}/settings${sign}`,
-  };
-}

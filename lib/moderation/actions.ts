@@ -4,6 +4,7 @@ import { initModels } from '@/models';
 import { ForumError } from '@/lib/forum/errors';
 import type { SessionUser } from '@/lib/auth/session';
 import { recordAudit } from './audit';
+import { notifyModeration } from '@/lib/mail/notify';
 import { loadPost, type ModeratedType } from './posts';
 import { indexFieldLog, indexThread } from '@/lib/search';
 
@@ -20,6 +21,14 @@ const WORDS: Record<ModerationAction, string> = {
   retag: 'A moderator changed the tags on your question',
   warn: 'A moderator warned you about a post',
   suspend: 'A moderator suspended your account',
+};
+
+const POST_LABEL: Record<ModeratedType, string> = {
+  question: 'your question',
+  answer: 'your answer',
+  reply: 'your reply',
+  photo: 'a photo you added',
+  'field-log': 'your field log entry',
 };
 
 /**
@@ -96,6 +105,12 @@ export async function moderate(
       { userId: post.authorId, kind: 'moderation', message: `${WORDS[input.action]}${untilWords}. Reason: ${input.reason}`, link: questionId ? `/questions/${questionId}` : null, readAt: null },
       { transaction },
     );
+    if (input.action !== 'dismiss') {
+      await notifyModeration(transaction, {
+        auditId: audit.id, authorId: post.authorId, moderatorId: moderator.id, words: WORDS[input.action], reason: input.reason, questionId,
+        postLabel: POST_LABEL[input.postType],
+      });
+    }
     return { auditId: audit.id, questionId };
   });
   // hide, restore, delete and retag change what search shows: the thread is reindexed now

@@ -17,6 +17,15 @@ export const demoUsers = [
   { handle: 'clack_admin', displayName: 'Clackwater admin', email: 'admin@clackwater.example', role: 'admin', region: null },
 ] as const;
 
+/** Each demo member's digest and the tags it follows (the rest keep the defaults: digest off, every notification on). */
+export const demoMailChoices: Record<string, { digest: 'off' | 'daily' | 'weekly'; follows: string[] }> = {
+  ferncombe_tamsin: { digest: 'weekly', follows: ['parallel', 'livestock', 'frost'] },
+  highcrag_shepherd: { digest: 'weekly', follows: ['stall', 'drive-pipe', 'tuning'] },
+  sorrel_cabin: { digest: 'daily', follows: ['drinking-water', 'frost', 'storage'] },
+  ironwheel_builds: { digest: 'weekly', follows: ['drive-pipe', 'tuning', 'stall', 'parallel'] },
+  quarry_lane_valves: { digest: 'weekly', follows: ['tuning', 'staged', 'delivery-line', 'water-rights'] },
+};
+
 export const demoTags = [
   { slug: 'survey', name: 'Survey', description: 'Measuring fall, source flow, lift and pipe runs before you build.' },
   { slug: 'drive-pipe', name: 'Drive pipe', description: 'Length, size, material and fittings of the pipe that feeds the pump.' },

@@ -7,7 +7,7 @@ import { hashPassword } from '@/lib/auth/password';
 import { demoThreads } from './demo-forum-data';
 import { seedPhoto } from './demo-photos';
 import { seedFieldLog } from './demo-field-log';
-import { DEMO_PASSWORD, demoCalculations, demoQuestions, demoSafetyChecks, demoTags, demoUsers } from './demo-data';
+import { DEMO_PASSWORD, demoMailChoices, demoCalculations, demoQuestions, demoSafetyChecks, demoTags, demoUsers } from './demo-data';
 
 const DAY = 86_400_000;
 
@@ -16,7 +16,7 @@ const DAY = 86_400_000;
  * nothing when the database already holds members (a second `npm start`).
  */
 export async function seedDemo(sequelize: Sequelize, now = new Date()): Promise<boolean> {
-  const { User, Tag, Question, Answer, QuestionTag, SafetyCheck, WorkedCalculation, Reply, Revision, HelpfulMark } = initModels(sequelize);
+  const { User, Tag, Question, Answer, QuestionTag, SafetyCheck, WorkedCalculation, Reply, Revision, HelpfulMark, TagFollow } = initModels(sequelize);
   if ((await User.count()) > 0) return false;
 
   const passwordHash = await hashPassword(DEMO_PASSWORD);
@@ -28,6 +28,10 @@ export async function seedDemo(sequelize: Sequelize, now = new Date()): Promise<
     const userId = new Map(users.map((u) => [u.handle, u.id]));
     const tags = await Tag.bulkCreate([...demoTags], { transaction });
     const tagId = new Map(tags.map((t) => [t.slug, t.id]));
+    for (const [handle, choice] of Object.entries(demoMailChoices)) {
+      await User.update({ digestFrequency: choice.digest }, { where: { id: must(userId, handle) }, transaction });
+      await TagFollow.bulkCreate(choice.follows.map((slug) => ({ userId: must(userId, handle), tagId: must(tagId, slug) })), { transaction });
+    }
 
     for (const q of demoQuestions) {
       const createdAt = new Date(now.getTime() - q.daysAgo * DAY);

@@ -5,6 +5,7 @@ export interface CaughtMail {
   to: string[];
   subject: string;
   text: string;
+  html: string;
   headers: Map<string, unknown>;
 }
 
@@ -14,20 +15,37 @@ export class SmtpCatcher {
   private server?: SMTPServer;
   private waiters: (() => void)[] = [];
 
-  constructor(readonly port: number) {}
+  /** `reject`: addresses refused at RCPT TO with a permanent 550, as a real server refuses an unknown mailbox. */
+  constructor(
+    readonly port: number,
+    private readonly opts: { reject?: string[] } = {},
+  ) {}
+
+  /** How many messages reached `address`, whatever their subject. */
+  countTo(address: string): number {
+    return this.messages.filter((m) => m.to.includes(address)).length;
+  }
 
   async start() {
     this.server = new SMTPServer({
       authOptional: true,
       disabledCommands: ['STARTTLS'],
       logger: false,
+      onRcptTo: (address, _session, done) => {
+        if (this.opts.reject?.includes(address.address)) {
+          const err = new Error('5.1.1 mailbox unavailable') as Error & { responseCode: number };
+          err.responseCode = 550;
+          return done(err);
+        }
+        done();
+      },
       onData: (stream, _session, done) => {
         simpleParser(stream)
           .then((mail) => {
             const to = ([] as { value: { address?: string }[] }[])
               .concat((mail.to as never) ?? [])
               .flatMap((a) => a.value.map((v) => v.address ?? ''));
-            this.messages.push({ to, subject: mail.subject ?? '', text: mail.text ?? '', headers: mail.headers });
+            this.messages.push({ to, subject: mail.subject ?? '', text: mail.text ?? '', html: typeof mail.html === 'string' ? mail.html : '', headers: mail.headers });
             this.waiters.splice(0).forEach((w) => w());
             done();
           })

@@ -20,12 +20,7 @@ export async function POST(request: Request, { params }: { params: Promise<{ id:
     if ('response' in body) return body.response;
     const out = await decideExpertApplication(user.id, id, body.data.decision, body.data.note);
     if (!out.ok) return apiError(out.status, out.message, out.field, out.code);
-    return NextResponse.json({
-      id,
-      status: out.status,
-      applicantRole: out.role,
-      ...(out.mailed ? {} : { note: 'The decision is saved, but the e-mail to the applicant could not be sent just now.' }),
-    });
+    return NextResponse.json({ id, status: out.status, applicantRole: out.role });
   } catch (err) {
     return serverError(err);
   }

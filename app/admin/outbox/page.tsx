@@ -1,0 +1,104 @@
+import type { Metadata } from 'next';
+import { fn, col } from 'sequelize';
+import { currentUserInPage } from '@/lib/auth/session';
+import { can, REFUSAL } from '@/lib/auth/policy';
+import { isDatabaseUnavailable } from '@/lib/db/errors';
+import { initModels } from '@/models';
+import { MAIL_STATUSES, type MailStatus } from '@/models/MailMessage';
+import { Refused } from '@/components/account/Refused';
+import { ServiceUnavailable } from '@/components/ServiceUnavailable';
+import { RetryButton } from './RetryButton';
+
+export const metadata: Metadata = { title: 'E-mail outbox' };
+export const dynamic = 'force-dynamic';
+
+const whenFmt = new Intl.DateTimeFormat('en', { day: 'numeric', month: 'short', hour: '2-digit', minute: '2-digit', timeZone: 'UTC', hour12: false });
+const STATUS_WORDS: Record<MailStatus, string> = { pending: 'waiting', sending: 'being sent', sent: 'sent', failed: 'failed' };
+
+/** The outbox for admins: counts by status, then failed messages with the SMTP error, then the newest. */
+export default async function OutboxPage({ searchParams }: { searchParams: Promise<Record<string, string | string[] | undefined>> }) {
+  const sp = await searchParams;
+  const status = MAIL_STATUSES.find((s) => s === sp.status) ?? null;
+  let signedIn = false;
+  let data: { counts: Record<string, number>; rows: InstanceType<ReturnType<typeof initModels>['MailMessage']>[] } | null = null;
+  try {
+    const user = await currentUserInPage();
+    signedIn = user !== null;
+    if (user && can(user, 'mail.outbox')) {
+      const { MailMessage } = initModels();
+      const grouped = (await MailMessage.findAll({ attributes: ['status', [fn('COUNT', col('id')), 'n']], group: ['status'], raw: true })) as unknown as { status: string; n: number }[];
+      const rows = await MailMessage.findAll({
+        where: status ? { status } : {},
+        attributes: ['id', 'toAddress', 'kind', 'subject', 'status', 'attempts', 'nextAttemptAt', 'lastError', 'sentAt', 'createdAt'],
+        order: [['createdAt', 'DESC'], ['id', 'DESC']],
+        limit: 100,
+      });
+      data = { counts: Object.fromEntries(grouped.map((g) => [g.status, Number(g.n)])), rows };
+    }
+  } catch (err) {
+    if (isDatabaseUnavailable(err)) return <ServiceUnavailable what="the e-mail outbox" />;
+    throw err;
+  }
+  if (!data) return <Refused title="E-mail outbox" message={REFUSAL['mail.outbox']} signedIn={signedIn} signInTo="/admin/outbox" />;
+
+  return (
+    <div className="flex flex-col gap-4">
+      <h1 className="font-serif text-3xl font-semibold">E-mail outbox</h1>
+      <p className="cw-muted max-w-2xl font-sans text-sm">
+        Every message is written here with the event that causes it and sent by the worker, with longer waits after each failure. A message still refused
+        after its last attempt shows as failed, with what the mail server said.
+      </p>
+      <nav aria-label="Outbox by status" className="flex flex-wrap gap-3 font-sans text-sm">
+        <a href="/admin/outbox" className={status ? 'cw-link' : 'font-semibold'}>
+          all
+        </a>
+        {MAIL_STATUSES.map((s) => (
+          <a key={s} href={`/admin/outbox?status=${s}`} className={status === s ? 'font-semibold' : 'cw-link'}>
+            {STATUS_WORDS[s]} ({data.counts[s] ?? 0})
+          </a>
+        ))}
+      </nav>
+      {data.rows.length === 0 ? (
+        <p className="cw-card font-sans">No messages{status ? ` ${STATUS_WORDS[status]}` : ''}.</p>
+      ) : (
+        <div className="overflow-x-auto">
+          <table className="w-full border-collapse font-sans text-sm">
+            <thead>
+              <tr className="border-b border-limestone-400 text-left dark:border-creek-500">
+                <th className="p-2">Queued (UTC)</th>
+                <th className="p-2">To</th>
+                <th className="p-2">What</th>
+                <th className="p-2">Status</th>
+                <th className="p-2">Attempts</th>
+                <th className="p-2">Server said</th>
+              </tr>
+            </thead>
+            <tbody>
+              {data.rows.map((m) => (
+                <tr key={m.id} className="border-b border-limestone-300 align-top dark:border-creek-600" data-outbox-status={m.status}>
+                  <td className="p-2 whitespace-nowrap">{whenFmt.format(m.createdAt)}</td>
+                  <td className="p-2">{m.toAddress}</td>
+                  <td className="p-2">
+                    <span className="cw-muted">{m.kind}</span>
+                    <br />
+                    {m.subject}
+                  </td>
+                  <td className="p-2">
+                    {STATUS_WORDS[m.status as MailStatus]}
+                    {m.status === 'sent' && m.sentAt ? <span className="cw-muted"> {whenFmt.format(m.sentAt)}</span> : null}
+                    {m.status === 'pending' && m.attempts > 0 ? <span className="cw-muted"> — next try {whenFmt.format(m.nextAttemptAt)}</span> : null}
+                  </td>
+                  <td className="p-2">{m.attempts}</td>
+                  <td className="p-2">
+                    {m.lastError ? <code className="break-all">{m.lastError}</code> : null}
+                    {m.status === 'failed' ? <RetryButton id={m.id} /> : null}
+                  </td>
+                </tr>
+              ))}
+            </tbody>
+          </table>
+        </div>
+      )}
+    </div>
+  );
+}

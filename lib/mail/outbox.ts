@@ -1,0 +1,197 @@
+import { createHash } from 'node:crypto';
+import { Op, QueryTypes, type Transaction } from 'sequelize';
+import { getSequelize } from '@/lib/db';
+import { initModels } from '@/models';
+import { getTransport, mailFrom } from './transport';
+
+/**
+ * The outbox. Every message is written here in the same transaction as the event
+ * that causes it, under a key naming the event and the recipient, so a retried
+ * request or a second digest run cannot queue it twice. A worker then sends what is
+ * due, with exponential backoff after a failure; after the last attempt the message
+ * is marked failed with the SMTP error, for admins to see at /admin/outbox.
+ */
+export interface OutgoingMail {
+  /** the event and the recipient: "answer:12:to:7" */
+  key: string;
+  userId: number | null;
+  to: string;
+  kind: string;
+  subject: string;
+  text: string;
+  html?: string;
+  headers?: Record<string, string>;
+}
+
+export function maxAttempts(): number {
+  const n = Number(process.env.MAIL_MAX_ATTEMPTS ?? 10);
+  return Number.isInteger(n) && n >= 1 && n <= 50 ? n : 10;
+}
+
+/** Wait before attempt n+1 after n failed ones: 30 s, 1 min, 2 min, … capped at 6 hours. */
+export function backoffMs(failedAttempts: number): number {
+  return Math.min(30_000 * 2 ** Math.max(0, failedAttempts - 1), 6 * 3_600_000);
+}
+
+/** How long a worker's claim on a message lasts before another worker may take it over. */
+const CLAIM_MS = 2 * 60_000;
+
+/** Queues messages inside the caller's transaction; a key already queued is left as it is. Returns how many are new. */
+export async function enqueue(mails: OutgoingMail[], transaction: Transaction): Promise<number> {
+  if (mails.length === 0) return 0;
+  const { MailMessage } = initModels();
+  const keys = mails.map((m) => m.key);
+  const before = await MailMessage.count({ where: { dedupeKey: { [Op.in]: keys } }, transaction });
+  const now = new Date();
+  // INSERT IGNORE: a concurrent transaction queuing the same key waits on the unique
+  // index, then its row is skipped; neither request fails.
+  await MailMessage.bulkCreate(
+    mails.map((m) => ({
+      dedupeKey: m.key,
+      userId: m.userId,
+      toAddress: m.to,
+      kind: m.kind,
+      subject: m.subject.slice(0, 300),
+      textBody: m.text,
+      htmlBody: m.html ?? null,
+      headers: m.headers ?? null,
+      nextAttemptAt: now,
+    })),
+    { transaction, ignoreDuplicates: true },
+  );
+  const after = await MailMessage.count({ where: { dedupeKey: { [Op.in]: keys } }, transaction });
+  if (after > before) transaction.afterCommit(() => kickOutbox());
+  return after - before;
+}
+
+export interface FlushResult {
+  sent: number;
+  retrying: number;
+  failed: number;
+}
+
+/** Whether this process runs the outbox worker (the scheduler and the kick after each commit). */
+export function mailWorkerEnabled(): boolean {
+  return process.env.MAIL_WORKER !== 'off';
+}
+
+const g = globalThis as unknown as { __clackwaterKick?: { timer: NodeJS.Timeout | null; running: Promise<unknown> | null } };
+
+/** Sends what was just queued soon after its transaction commits, without waiting for the next scheduled run. */
+export function kickOutbox(): void {
+  if (!mailWorkerEnabled()) return;
+  const k = (g.__clackwaterKick ??= { timer: null, running: null });
+  if (k.timer) return;
+  k.timer = setTimeout(() => {
+    k.timer = null;
+    flushOutbox().catch((err) => console.error(`mail: the outbox worker stopped: ${err instanceof Error ? err.message : err}`));
+  }, 200);
+  k.timer.unref?.();
+}
+
+/** Claims up to `limit` due messages for this worker; rows another worker holds are skipped, not waited for. */
+async function claim(limit: number, now: Date): Promise<number[]> {
+  return getSequelize().transaction(async (transaction) => {
+    const rows = await getSequelize().query<{ id: number }>(
+      `SELECT id FROM mail_outbox
+        WHERE (status = 'pending' AND next_attempt_at <= :now) OR (status = 'sending' AND locked_until < :now)
+        ORDER BY next_attempt_at, id LIMIT :limit FOR UPDATE SKIP LOCKED`,
+      { replacements: { now, limit }, type: QueryTypes.SELECT, transaction },
+    );
+    const ids = rows.map((r) => r.id);
+    if (ids.length) {
+      const { MailMessage } = initModels();
+      await MailMessage.update({ status: 'sending', lockedUntil: new Date(now.getTime() + CLAIM_MS) }, { where: { id: { [Op.in]: ids } }, transaction });
+    }
+    return ids;
+  });
+}
+
+function smtpError(err: unknown): string {
+  if (!(err instanceof Error)) return String(err);
+  const e = err as Error & { code?: string; responseCode?: number; response?: string };
+  return [e.code, e.responseCode, e.response ?? e.message].filter(Boolean).join(' ').slice(0, 2000);
+}
+
+/** A failure of the connection rather than of this one message: the rest of the batch would fail the same way. */
+function connectionDown(err: unknown): boolean {
+  const code = (err as { code?: string })?.code;
+  return code === 'ECONNECTION' || code === 'ETIMEDOUT' || code === 'ESOCKET' || code === 'EDNS' || code === 'ECONNREFUSED';
+}
+
+let running: Promise<FlushResult> | null = null;
+
+/**
+ * Sends every due message, a batch at a time. Safe to run in several processes at
+ * once: each message is claimed by one worker (SELECT … FOR UPDATE SKIP LOCKED) and
+ * marked sent by the worker that sent it. In one process, overlapping calls share a run.
+ */
+export function flushOutbox(opts: { limit?: number; now?: () => Date; /** run as a worker of its own, as another process would */ separate?: boolean } = {}): Promise<FlushResult> {
+  if (opts.separate) return flushOnce(opts);
+  if (running) return running;
+  running = flushOnce(opts).finally(() => {
+    running = null;
+  });
+  return running;
+}
+
+async function flushOnce({ limit = 50, now = () => new Date() }: { limit?: number; now?: () => Date }): Promise<FlushResult> {
+  const { MailMessage } = initModels();
+  const result: FlushResult = { sent: 0, retrying: 0, failed: 0 };
+  const max = maxAttempts();
+  for (;;) {
+    const ids = await claim(limit, now());
+    if (ids.length === 0) return result;
+    const rows = await MailMessage.findAll({ where: { id: { [Op.in]: ids } }, order: [['id', 'ASC']] });
+    for (let i = 0; i < rows.length; i++) {
+      const m = rows[i];
+      try {
+        await getTransport().sendMail({
+          from: mailFrom(),
+          to: m.toAddress,
+          subject: m.subject,
+          text: m.textBody,
+          html: m.htmlBody ?? undefined,
+          headers: m.headers ?? undefined,
+          // the same id on every attempt, so a receiving server can drop a repeat
+          messageId: `<${createHash('sha256').update(m.dedupeKey).digest('hex').slice(0, 32)}@clackwater.mail>`,
+        });
+        await m.update({ status: 'sent', sentAt: now(), attempts: m.attempts + 1, lockedUntil: null, lastError: null });
+        result.sent++;
+      } catch (err) {
+        const attempts = m.attempts + 1;
+        const message = smtpError(err);
+        if (attempts >= max) {
+          await m.update({ status: 'failed', attempts, lockedUntil: null, lastError: message });
+          result.failed++;
+          console.error(`mail: gave up on message ${m.id} to ${m.toAddress} after ${attempts} attempts: ${message}`);
+        } else {
+          const next = new Date(now().getTime() + backoffMs(attempts));
+          await m.update({ status: 'pending', attempts, nextAttemptAt: next, lockedUntil: null, lastError: message });
+          result.retrying++;
+        }
+        if (connectionDown(err)) {
+          // Hand the rest of the batch back untouched: they wait for the server, and
+          // keep their attempts for when it answers.
+          const rest = rows.slice(i + 1).map((r) => r.id);
+          if (rest.length) {
+            await MailMessage.update(
+              { status: 'pending', lockedUntil: null, nextAttemptAt: new Date(now().getTime() + backoffMs(attempts)) },
+              { where: { id: { [Op.in]: rest }, status: 'sending' } },
+            );
+            result.retrying += rest.length;
+          }
+          return result;
+        }
+      }
+    }
+  }
+}
+
+/** Puts a failed message back in the queue for one more round of attempts (admins, from /admin/outbox). */
+export async function retryFailed(id: number): Promise<boolean> {
+  const { MailMessage } = initModels();
+  const [n] = await MailMessage.update({ status: 'pending', attempts: 0, nextAttemptAt: new Date(), lockedUntil: null }, { where: { id, status: 'failed' } });
+  if (n > 0) kickOutbox();
+  return n > 0;
+}
