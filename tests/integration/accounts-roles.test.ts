@@ -151,6 +151,7 @@ describe('expert applications', () => {
     expect((await ExpertApplication.findByPk(applicationId))?.status).toBe('pending');
     expect((await userByHandle('ferncombe_tamsin')).role).toBe('member');
     expect(sent.messages).toHaveLength(0);
+    expect(await initModels().MailMessage.count({ where: { kind: 'expert-decision' } })).toBe(0);
   });
 
   it('lets the moderator approve: expert role, a notice and an e-mail', async () => {
@@ -171,8 +172,11 @@ describe('expert applications', () => {
     const notices = await Notice.findAll({ where: { userId: tamsin.id, kind: 'expert-decision' } });
     expect(notices).toHaveLength(1);
     expect(notices[0].message).toContain('frost damage');
-    expect(sent.messages).toHaveLength(1);
-    expect(sent.messages[0]).toMatchObject({ to: 'tamsin@ferncombe.example', subject: 'You are now an expert on Clackwater' });
+    // the e-mail is queued in the outbox with the decision, and sent by the worker after it commits
+    const mail = await initModels().MailMessage.findAll({ where: { userId: tamsin.id, kind: 'expert-decision' } });
+    expect(mail).toHaveLength(1);
+    expect(mail[0]).toMatchObject({ toAddress: 'tamsin@ferncombe.example', subject: 'You are now an expert on Clackwater', status: 'pending' });
+    expect(mail[0].textBody).toContain('Your answers on frost damage were spot on.');
   });
 
   it('answers 409 to a second decision on the same application', async () => {
@@ -184,7 +188,7 @@ describe('expert applications', () => {
     expect(again.status).toBe(409);
   });
 
-  it('keeps a decline when the e-mail cannot be sent', async () => {
+  it('keeps a decline, its e-mail waiting in the outbox, when mail cannot be sent', async () => {
     const applied = await call(apply, 'POST', '/api/expert-applications', { as: 'sorrel_cabin', body: application });
     expect(applied.status).toBe(201);
     sent.fail = true;
@@ -197,6 +201,8 @@ describe('expert applications', () => {
     expect(res.status).toBe(200);
     expect(res.body.status).toBe('declined');
     expect((await userByHandle('sorrel_cabin')).role).toBe('member');
+    const cabin = await userByHandle('sorrel_cabin');
+    expect(await initModels().MailMessage.count({ where: { userId: cabin.id, kind: 'expert-decision', status: 'pending' } })).toBe(1);
   });
 
   it('does not let a moderator decide their own application', async () => {

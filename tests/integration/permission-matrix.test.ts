@@ -78,6 +78,10 @@ const SAMPLES: Record<string, (ids: Record<string, number>) => Sample> = {
   'GET /api/review': () => ({}),
   'POST /api/review/actions': (ids) => ({ body: { action: 'warn', postType: 'answer', postId: ids.ownerAnswer, reason: 'checking the matrix' } }),
   'GET /api/admin/audit': () => ({}),
+  // no failed message 999999: an allowed caller gets 404, never 401/403
+  'POST /api/admin/outbox/[id]/retry': () => ({ params: { id: '999999' } }),
+  'GET /api/account/mail': () => ({}),
+  'PUT /api/account/mail': () => ({ body: { digest: 'weekly', tags: ['tuning'], notify: { answers: true, replies: true, fixed: true, moderation: true, expert: true } } }),
   'POST /api/field-log': () => ({
     body: {
       siteName: 'Matrix test spring', testedOn: '2026-06-01', pumpSize: '1', fall: '2 m', lift: '10 m', driveLength: '12 m', driveSize: '1',
@@ -90,7 +94,7 @@ const SAMPLES: Record<string, (ids: Record<string, number>) => Sample> = {
 };
 
 /** Routes that only ever act on the caller's own account: every signed-in persona is the owner. */
-const SELF_ONLY = new Set(['GET /api/account/settings', 'PUT /api/account/settings']);
+const SELF_ONLY = new Set(['GET /api/account/settings', 'PUT /api/account/settings', 'GET /api/account/mail', 'PUT /api/account/mail']);
 
 async function cookieFor(persona: Persona): Promise<string | undefined> {
   if (persona === 'anonymous') return undefined;

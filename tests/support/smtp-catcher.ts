@@ -7,6 +7,8 @@ export interface CaughtMail {
   text: string;
   html: string;
   headers: Map<string, unknown>;
+  /** each header as sent, by lower-case name (mailparser folds List-* headers into one object) */
+  raw: Map<string, string>;
 }
 
 /** An in-process SMTP server that keeps every message it is given, for tests. */
@@ -45,7 +47,7 @@ export class SmtpCatcher {
             const to = ([] as { value: { address?: string }[] }[])
               .concat((mail.to as never) ?? [])
               .flatMap((a) => a.value.map((v) => v.address ?? ''));
-            this.messages.push({ to, subject: mail.subject ?? '', text: mail.text ?? '', html: typeof mail.html === 'string' ? mail.html : '', headers: mail.headers });
+            this.messages.push({ to, subject: mail.subject ?? '', text: mail.text ?? '', html: typeof mail.html === 'string' ? mail.html : '', headers: mail.headers, raw: new Map(mail.headerLines.map((h) => [h.key, h.line.slice(h.line.indexOf(':') + 1).trim()])) });
             this.waiters.splice(0).forEach((w) => w());
             done();
           })
