@@ -2,6 +2,7 @@
 
 import Link from 'next/link';
 import useSWR from 'swr';
+import { useSession } from 'next-auth/react';
 import { MemberText } from '@/components/posts/MemberText';
 import { CalculatorById } from '@/components/calculators/Calculators';
 import { can } from '@/lib/auth/policy';
@@ -15,6 +16,14 @@ import { FlagButton } from '@/components/moderation/FlagButton';
 import { PostMarks } from '@/components/moderation/PostMarks';
 
 type Viewer = { id: number; handle: string; role: 'member' | 'expert' | 'moderator' | 'admin' } | null;
+
+/** The signed-in reader from the session (null while it loads, and when signed out). */
+export function useViewer(): Viewer {
+  const { data } = useSession();
+  const u = data?.user as { id?: number; handle?: string; role?: string } | undefined;
+  if (!u?.id || !u.handle || !u.role) return null;
+  return { id: u.id, handle: u.handle, role: u.role as NonNullable<Viewer>['role'] };
+}
 const fetcher = (url: string) => fetch(url).then((r) => (r.ok ? r.json() : Promise.reject(new Error(String(r.status)))));
 const when = (iso: string) => new Date(iso).toUTCString().slice(5, 16);
 
@@ -34,9 +43,12 @@ function Byline({ person, at }: { person: { handle: string; displayName: string;
  * it current, and every action (answer, reply, helpful, fixed it, follow) goes
  * through the route handlers and refreshes it — marks change at once (optimistic).
  */
-export function Thread({ initial, viewer }: { initial: ThreadView; viewer: Viewer }) {
+export function Thread({ initial }: { initial: ThreadView }) {
   const key = `/api/questions/${initial.id}`;
-  const { data, mutate } = useSWR<ThreadView>(key, fetcher, { fallbackData: initial, revalidateOnMount: false, revalidateOnFocus: false });
+  const viewer = useViewer();
+  // The page arrives as every signed-out reader sees it; a signed-in reader's own
+  // marks and follows (and, for moderators, hidden posts) are fetched once the session is known.
+  const { data, mutate } = useSWR<ThreadView>(viewer ? key : null, fetcher, { fallbackData: initial, revalidateOnMount: true, revalidateOnFocus: false });
   const t = data ?? initial;
   const refresh = () => void mutate();
   const isAsker = can(viewer, 'question.markFixed', t.author.id);

@@ -8,10 +8,12 @@ import { attachPhotos } from '@/lib/photos/store';
 import { ForumError } from './errors';
 import { validateSiteSheet } from './site-sheet';
 import { indexThread } from '@/lib/search';
+import { threadChanged } from './page-cache';
 
-/** Runs a write, then brings the thread's search documents up to date (same request). */
+/** Runs a write, then brings the thread's search documents and its cached page up to date (same request). */
 async function thenIndex<T>(write: Promise<T>, questionId: (result: T) => number): Promise<T> {
   const result = await write;
+  threadChanged(questionId(result));
   await indexThread(questionId(result));
   return result;
 }
@@ -167,7 +169,7 @@ async function postOwner(postType: PostType, postId: number, transaction: Transa
 /** One helpful mark per member per post, never on one's own post; the post's count follows. */
 export async function markHelpful(user: SessionUser, postType: PostType, postId: number, on: boolean) {
   const { HelpfulMark } = initModels();
-  return getSequelize().transaction(async (transaction) => {
+  const out = await getSequelize().transaction(async (transaction) => {
     const post = await postOwner(postType, postId, transaction);
     if (post.authorId === user.id) throw new ForumError(403, 'You cannot mark your own post helpful.');
     const existing = await HelpfulMark.findOne({ where: { postType, postId, userId: user.id }, transaction });
@@ -177,8 +179,10 @@ export async function markHelpful(user: SessionUser, postType: PostType, postId:
     else await existing!.destroy({ transaction });
     const count = await HelpfulMark.count({ where: { postType, postId }, transaction });
     await post.update({ helpfulCount: count }, { transaction });
-    return count;
+    return { count, questionId: postType === 'question' ? post.id : (post as unknown as { questionId: number }).questionId };
   });
+  threadChanged(out.questionId);
+  return out.count;
 }
 
 /** The asker's choice of the answer that fixed it (or none). */

@@ -120,6 +120,7 @@ function connectionDown(err: unknown): boolean {
 }
 
 let running: Promise<FlushResult> | null = null;
+let again = false;
 
 /**
  * Sends every due message, a batch at a time. Safe to run in several processes at
@@ -128,8 +129,22 @@ let running: Promise<FlushResult> | null = null;
  */
 export function flushOutbox(opts: { limit?: number; now?: () => Date; /** run as a worker of its own, as another process would */ separate?: boolean } = {}): Promise<FlushResult> {
   if (opts.separate) return flushOnce(opts);
-  if (running) return running;
-  running = flushOnce(opts).finally(() => {
+  if (running) {
+    // a message queued after the running pass looked: go round once more when it ends
+    again = true;
+    return running;
+  }
+  running = (async () => {
+    const total: FlushResult = { sent: 0, retrying: 0, failed: 0 };
+    do {
+      again = false;
+      const r = await flushOnce(opts);
+      total.sent += r.sent;
+      total.retrying += r.retrying;
+      total.failed += r.failed;
+    } while (again);
+    return total;
+  })().finally(() => {
     running = null;
   });
   return running;

@@ -5,6 +5,7 @@ import { ForumError } from '@/lib/forum/errors';
 import type { SessionUser } from '@/lib/auth/session';
 import { recordAudit } from './audit';
 import { notifyModeration } from '@/lib/mail/notify';
+import { threadChanged } from '@/lib/forum/page-cache';
 import { loadPost, type ModeratedType } from './posts';
 import { indexFieldLog, indexThread } from '@/lib/search';
 
@@ -114,6 +115,7 @@ export async function moderate(
     return { auditId: audit.id, questionId };
   });
   // hide, restore, delete and retag change what search shows: the thread is reindexed now
+  threadChanged(done.questionId);
   if (done.questionId) await indexThread(done.questionId);
   if (input.postType === 'field-log') await indexFieldLog([input.postId]);
   return { auditId: done.auditId };

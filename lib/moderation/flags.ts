@@ -1,3 +1,5 @@
+import { threadChanged } from '@/lib/forum/page-cache';
+import { indexFieldLog, indexThread } from '@/lib/search';
 import { getSequelize } from '@/lib/db';
 import { initModels } from '@/models';
 import { ForumError } from '@/lib/forum/errors';
@@ -19,8 +21,8 @@ export function hideThreshold(): number {
  */
 export async function flagPost(user: SessionUser, input: { postType: ModeratedType; postId: number; reason: FlagReason; note?: string }) {
   const { Flag } = initModels();
-  return getSequelize().transaction(async (transaction) => {
-    const { post } = await loadPost(input.postType, input.postId, transaction);
+  const out = await getSequelize().transaction(async (transaction) => {
+    const { post, questionId } = await loadPost(input.postType, input.postId, transaction);
     if (post.authorId === user.id) throw new ForumError(403, 'You cannot flag your own post.');
     const mine = await Flag.findOne({ where: { postType: input.postType, postId: input.postId, flaggerId: user.id, status: 'open' }, transaction });
     if (mine) throw new ForumError(409, 'You have already flagged this post; a moderator will look at it.');
@@ -34,6 +36,11 @@ export async function flagPost(user: SessionUser, input: { postType: ModeratedTy
       await recordAudit({ actorId: null, action: 'auto-hide', targetType: input.postType, targetId: input.postId, reason: why, details: { flagId: flag.id, openFlags: open } }, transaction);
       hidden = true;
     }
-    return { flagId: flag.id, hidden };
+    return { flagId: flag.id, hidden, questionId };
   });
+  // an open unsafe flag shows readers a caution, and a post hidden by flags leaves search
+  threadChanged(out.questionId);
+  if (out.hidden && out.questionId) await indexThread(out.questionId);
+  if (out.hidden && input.postType === 'field-log') await indexFieldLog([input.postId]);
+  return { flagId: out.flagId, hidden: out.hidden };
 }

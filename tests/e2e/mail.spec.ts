@@ -17,6 +17,7 @@ async function signIn(page: Page, email: string) {
 }
 
 test('an answer in the browser reaches the asker’s inbox within a minute; its unsubscribe link works signed out', async ({ page, browser }) => {
+  test.setTimeout(120_000);
   const title = `Mail check: ram slows every afternoon ${Date.now() % 100000}`;
   await signIn(page, 'tamsin@ferncombe.example');
   await page.goto('/questions/ask');

@@ -6,6 +6,7 @@ import { POST as answerPOST } from '@/app/api/questions/[id]/answers/route';
 import { POST as replyPOST } from '@/app/api/questions/[id]/replies/route';
 import { PUT as answerPUT } from '@/app/api/answers/[id]/route';
 import { POST as actionPOST } from '@/app/api/review/actions/route';
+import { POST as flagPOST } from '@/app/api/flags/route';
 import { GET as similarGET } from '@/app/api/questions/similar/route';
 import { POST as fieldLogPOST } from '@/app/api/field-log/route';
 import { rebuildIndex, searchEngine } from '@/lib/search';
@@ -90,6 +91,14 @@ describe('search follows every write (real MariaDB, in-process engine)', () => {
     expect(forModerator?.hidden).toBe(true);
     expect((await moderate({ action: 'restore', postType: 'answer', postId: aid, reason: 'back' })).status).toBe(200);
     expect(await ids('baffle board eddy')).toContain(`answer-${aid}`);
+  });
+
+  it('an answer hidden by flags (an expert’s unsafe flag) leaves members’ results at once', async () => {
+    const res = await call(flagPOST, 'POST', '/api/flags', 'quarry_lane_valves', { postType: 'answer', postId: aid, reason: 'unsafe', note: 'checking search' });
+    expect(res.status).toBe(201);
+    expect(res.body.hidden).toBe(true);
+    expect(await ids('baffle board eddy')).not.toContain(`answer-${aid}`);
+    expect(await ids('baffle board eddy', 'moss_moderator')).toContain(`answer-${aid}`);
   });
 
   it('a deleted question takes its answers and replies out of everyone’s results but moderators’', async () => {
