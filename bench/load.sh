@@ -10,8 +10,11 @@ cd "$ROOT"
 export NEXTAUTH_URL="http://127.0.0.1:$PORT" SITE_URL="http://127.0.0.1:$PORT" NEXT_TELEMETRY_DISABLED=1
 bash scripts/db.sh start
 mariadb --no-defaults --socket="$DB_DATA_DIR/sock" -uroot -e "CREATE DATABASE IF NOT EXISTS \`$DB_NAME\` CHARACTER SET utf8mb4 COLLATE utf8mb4_unicode_ci"
-log "seeding 400,000 posts and 20,000 members into $DB_NAME"
-npx tsx bench/seed-posts.ts "${POSTS:-400000}" "${MEMBERS:-20000}"
+# SKIP_SEED=1 reuses the posts a previous run seeded (the server and the runs only)
+if [ -z "${SKIP_SEED:-}" ]; then
+  log "seeding 400,000 posts and 20,000 members into $DB_NAME"
+  npx tsx bench/seed-posts.ts "${POSTS:-400000}" "${MEMBERS:-20000}"
+fi
 [ -f .next/BUILD_ID ] || npx next build
 node node_modules/next/dist/bin/next start -p "$PORT" -H 127.0.0.1 >.data/bench-load-server.log 2>&1 &
 server=$!

@@ -1,4 +1,5 @@
 import { revalidatePath } from 'next/cache';
+import { forgetListCounts } from '@/lib/questions/list';
 
 /**
  * Thread pages are rendered once for every reader (signed-out view) and kept by
@@ -8,6 +9,7 @@ import { revalidatePath } from 'next/cache';
  * `revalidate` period is the backstop for writes made on another app instance.
  */
 export function threadChanged(questionId: number | null | undefined): void {
+  forgetListCounts();
   if (!questionId) return;
   try {
     revalidatePath(`/questions/${questionId}`);

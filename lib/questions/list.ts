@@ -52,12 +52,37 @@ async function filterWhere(filter: ListFilter): Promise<WhereOptions> {
   }
 }
 
+/**
+ * How many questions each public list holds, kept for a few seconds: counting every
+ * visible question scans an index of all of them, and every list page shows the
+ * count. Any write to a thread in this process forgets them at once
+ * (lib/forum/page-cache.ts); other instances' counts catch up within the TTL.
+ */
+const COUNT_TTL_MS = 10_000;
+const counts = new Map<string, { value: number; until: number }>();
+
+export function forgetListCounts(): void {
+  counts.clear();
+}
+
+async function countOf(filter: ListFilter, where: WhereOptions): Promise<number> {
+  const { Question } = initModels();
+  // a member's own and followed lists are small and on their own indexes: counted each time
+  if (filter.kind === 'mine' || filter.kind === 'followed') return Question.count({ where });
+  const key = JSON.stringify(filter);
+  const hit = counts.get(key);
+  if (hit && hit.until > Date.now()) return hit.value;
+  const value = await Question.count({ where });
+  counts.set(key, { value, until: Date.now() + COUNT_TTL_MS });
+  return value;
+}
+
 /** Newest questions first, one page at a time (index questions_created_at_id), optionally filtered. */
 export async function listQuestions({ page, perPage }: Pagination, filter: ListFilter = { kind: 'newest' }): Promise<QuestionPage> {
   const { Question, User, Tag } = initModels();
   // hidden and deleted questions never appear in lists
   const where = { ...(await filterWhere(filter)), hiddenAt: null, deletedAt: null } as WhereOptions;
-  const total = await Question.count({ where });
+  const total = await countOf(filter, where);
   const ids = await Question.findAll({
     where,
     attributes: ['id'],
