@@ -1,15 +1,5 @@
-import { test, expect, type Page } from '@playwright/test';
-
-const PASSWORD = 'lift-with-falling-water';
-
-async function signIn(page: Page, email: string) {
-  await page.goto('/sign-in');
-  const form = page.getByRole('form', { name: 'Sign in with a password' });
-  await form.getByLabel('E-mail').fill(email);
-  await form.getByLabel('Password').fill(PASSWORD);
-  await form.getByRole('button', { name: 'Sign in' }).click();
-  await expect(page).toHaveURL(/\/$/);
-}
+import { test, expect } from '@playwright/test';
+import { signIn } from './support/session';
 
 test('the community page shows the demo entries on the chart and in the table', async ({ page, request }) => {
   const api = await (await request.get('/api/field-log?perPage=100')).json();

@@ -1,22 +1,8 @@
-import { test, expect, type Page } from '@playwright/test';
+import { test, expect } from '@playwright/test';
 import sharp from 'sharp';
+import { settled, signIn } from './support/session';
 
-const PASSWORD = 'lift-with-falling-water';
 const TITLE = `Pump stops after a few beats since the creek dropped ${Date.now() % 100000}`;
-
-/** Waits until streamed content has replaced its loading fallback (no hidden copies left). */
-async function settled(page: Page) {
-  await page.waitForFunction(() => !document.querySelector('div[hidden][id^="S:"]'));
-}
-
-async function signIn(page: Page, email: string) {
-  await page.goto('/sign-in');
-  const form = page.getByRole('form', { name: 'Sign in with a password' });
-  await form.getByLabel('E-mail').fill(email);
-  await form.getByLabel('Password').fill(PASSWORD);
-  await form.getByRole('button', { name: 'Sign in' }).click();
-  await expect(page).toHaveURL(/\/$/);
-}
 
 test.describe.serial('the forum', () => {
   let questionUrl = '';

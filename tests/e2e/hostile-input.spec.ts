@@ -1,19 +1,8 @@
-import { test, expect, type Browser, type Page } from '@playwright/test';
+import { test, expect, type Page } from '@playwright/test';
 import { XSS_HOST, XSS_PAYLOADS, XSS_TEXT } from './fixtures/xss-payloads';
+import { signedIn } from './support/session';
 
-const PASSWORD = 'lift-with-falling-water';
 const STAMP = Date.now() % 100000;
-
-async function signedIn(browser: Browser, email: string): Promise<Page> {
-  const page = await (await browser.newContext()).newPage();
-  await page.goto('/sign-in');
-  const form = page.getByRole('form', { name: 'Sign in with a password' });
-  await form.getByLabel('E-mail').fill(email);
-  await form.getByLabel('Password').fill(PASSWORD);
-  await form.getByRole('button', { name: 'Sign in' }).click();
-  await expect(page).toHaveURL(/\/$/);
-  return page;
-}
 
 /**
  * Opens a page and fails on any sign that injected code ran or reached out: a dialog

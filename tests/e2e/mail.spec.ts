@@ -1,20 +1,11 @@
-import { test, expect, type Page } from '@playwright/test';
+import { test, expect } from '@playwright/test';
 import { SmtpCatcher } from '../support/smtp-catcher';
 import { E2E_SMTP_PORT } from '../../playwright.config';
+import { signIn } from './support/session';
 
-const PASSWORD = 'lift-with-falling-water';
 const catcher = new SmtpCatcher(E2E_SMTP_PORT);
 test.beforeAll(() => catcher.start());
 test.afterAll(() => catcher.stop());
-
-async function signIn(page: Page, email: string) {
-  await page.goto('/sign-in');
-  const form = page.getByRole('form', { name: 'Sign in with a password' });
-  await form.getByLabel('E-mail').fill(email);
-  await form.getByLabel('Password').fill(PASSWORD);
-  await form.getByRole('button', { name: 'Sign in' }).click();
-  await expect(page).toHaveURL(/\/$/);
-}
 
 test('an answer in the browser reaches the asker’s inbox within a minute; its unsubscribe link works signed out', async ({ page, browser }) => {
   test.setTimeout(120_000);

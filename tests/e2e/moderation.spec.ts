@@ -1,4 +1,5 @@
 import { test, expect, type Browser, type Page } from '@playwright/test';
+import { settled, signIn } from './support/session';
 
 /**
  * The moderator's journey on the seeded demo: a member flags an answer as unsafe
@@ -7,24 +8,9 @@ import { test, expect, type Browser, type Page } from '@playwright/test';
  * in the audit log. Needs a freshly seeded database (scripts/reset-db.ts): the flag
  * and the hide happen once.
  */
-const PASSWORD = 'lift-with-falling-water';
 const QUESTION = 'Creek only runs March to October — how do I drain the pump for winter?';
 const ANSWER_TEXT = 'Drain the drive pipe, the pump body and the lowest run of the delivery line';
 const HIDE_REASON = `Leaves water in the air chamber over winter; see the frost guide (${Date.now() % 100000})`;
-
-/** Waits until streamed content has replaced its loading fallback (no hidden copies left). */
-async function settled(page: Page) {
-  await page.waitForFunction(() => !document.querySelector('div[hidden][id^="S:"]'));
-}
-
-async function signIn(page: Page, email: string) {
-  await page.goto('/sign-in');
-  const form = page.getByRole('form', { name: 'Sign in with a password' });
-  await form.getByLabel('E-mail').fill(email);
-  await form.getByLabel('Password').fill(PASSWORD);
-  await form.getByRole('button', { name: 'Sign in' }).click();
-  await expect(page).toHaveURL(/\/$/);
-}
 
 /** A fresh, signed-out browser context on the thread. */
 async function asVisitor(browser: Browser, url: string, check: (page: Page) => Promise<void>) {

@@ -1,19 +1,7 @@
-import { test, expect, type Browser, type Page } from '@playwright/test';
+import { test, expect, type Page } from '@playwright/test';
+import { signedIn } from './support/session';
 
-const PASSWORD = 'lift-with-falling-water';
 const TITLE = 'Second pump added, delivery only went up a little';
-
-async function signedIn(browser: Browser, email: string): Promise<Page> {
-  const context = await browser.newContext();
-  const page = await context.newPage();
-  await page.goto('/sign-in');
-  const form = page.getByRole('form', { name: 'Sign in with a password' });
-  await form.getByLabel('E-mail').fill(email);
-  await form.getByLabel('Password').fill(PASSWORD);
-  await form.getByRole('button', { name: 'Sign in' }).click();
-  await expect(page).toHaveURL(/\/$/);
-  return page;
-}
 
 async function questionId(page: Page, title: string): Promise<number> {
   const res = await page.request.get(`/api/search?${new URLSearchParams({ q: title, kind: 'question', limit: '1' })}`);
