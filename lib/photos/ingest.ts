@@ -1,5 +1,5 @@
 import { randomBytes } from 'node:crypto';
-import { open } from 'node:fs/promises';
+import { open, stat } from 'node:fs/promises';
 import type { IncomingHttpHeaders } from 'node:http';
 import { Readable } from 'node:stream';
 import type { ReadableStream as NodeWebStream } from 'node:stream/web';
@@ -145,12 +145,27 @@ async function receive(request: Request, tmpDir: string): Promise<{ files: Formi
     filename: () => randomBytes(12).toString('hex'),
     filter: (part) => part.name === 'photos',
   });
+  // A temp file that cannot be written (disk full) errors on the file, and formidable
+  // may still resolve the parse with what it had: the first such error wins.
+  let writeError: unknown = null;
   form.on('fileBegin', (_name, file) => {
     current = file.originalFilename;
+    (file as unknown as NodeJS.EventEmitter).on('error', (err: unknown) => {
+      writeError ??= err;
+    });
   });
   try {
     const [fields, files] = await form.parse(body as unknown as Parameters<typeof form.parse>[0]);
-    return { files: files.photos ?? [], alts: fields.alt ?? [] };
+    const received = files.photos ?? [];
+    // The write stream reports a full disk after its end callback, so the parse can
+    // finish first: a temp file shorter than what arrived is a write that failed.
+    for (const f of received) {
+      if (writeError) break;
+      const onDisk = (await stat(f.filepath)).size;
+      if (onDisk < f.size) writeError = Object.assign(new Error(`ENOSPC: ${onDisk} of ${f.size} bytes written`), { code: 'ENOSPC' });
+    }
+    if (writeError) throw writeError;
+    return { files: received, alts: fields.alt ?? [] };
   } catch (err) {
     body.destroy();
     throw formidableRefusal(err, current);
