@@ -1,13 +1,15 @@
 import { randomBytes } from 'node:crypto';
 import { mkdir, mkdtemp, readFile, rm, unlink, writeFile } from 'node:fs/promises';
 import path from 'node:path';
+import { deleteObject, getObject, isObjectStoreUnavailable, putObject, S3_HANDLE, s3Configured } from './s3';
 
 /**
  * Where photos live on disk: `UPLOAD_DIR` (default `<cwd>/.data/uploads`, ignored by
  * git), never under public/, so every byte a visitor receives goes through the
  * route handlers that set the content type and nosniff. Two re-encoded WebP files
  * per photo, both named by the photo's random public id; the original upload is
- * never kept (it may carry EXIF/GPS).
+ * never kept (it may carry EXIF/GPS). With S3_BUCKET set the two copies go to
+ * S3-compatible object storage instead (lib/photos/s3.ts); scratch files stay local.
  */
 export function uploadRoot(): string {
   return path.resolve(/* turbopackIgnore: true */ process.env.UPLOAD_DIR || path.join(/* turbopackIgnore: true */ process.cwd(), '.data', 'uploads'));
@@ -44,9 +46,13 @@ export function isPhotoId(id: unknown): id is string {
 }
 
 /** The file for one variant of one photo; refuses anything that is not one of our ids. */
-export function photoPath(publicId: string, variant: PhotoVariant): string {
+function photoName(publicId: string, variant: PhotoVariant): string {
   if (!isPhotoId(publicId)) throw new Error('not a photo id');
-  return path.join(/* turbopackIgnore: true */ uploadRoot(), variant === 'thumb' ? `${publicId}-thumb.webp` : `${publicId}.webp`);
+  return variant === 'thumb' ? `${publicId}-thumb.webp` : `${publicId}.webp`;
+}
+
+export function photoPath(publicId: string, variant: PhotoVariant): string {
+  return path.join(/* turbopackIgnore: true */ uploadRoot(), photoName(publicId, variant));
 }
 
 export function photoUrl(publicId: string, variant: PhotoVariant = 'web'): string {
@@ -65,6 +71,7 @@ export async function removeDir(dir: string): Promise<void> {
 
 /** Writes one variant; 'wx' so a (vanishingly unlikely) id collision fails instead of overwriting. */
 export async function writeVariant(publicId: string, variant: PhotoVariant, data: Buffer): Promise<string> {
+  if (s3Configured()) return putObject(photoName(publicId, variant), data);
   await mkdir(uploadRoot(), { recursive: true });
   const file = photoPath(publicId, variant);
   await writeFile(file, data, { flag: 'wx' });
@@ -73,12 +80,13 @@ export async function writeVariant(publicId: string, variant: PhotoVariant, data
 
 /** Best-effort removal of files written for a request that did not complete. */
 export async function removeFiles(files: string[]): Promise<void> {
-  await Promise.all(files.map((f) => unlink(f).catch(() => undefined)));
+  await Promise.all(files.map((f) => (f.startsWith(S3_HANDLE) ? deleteObject(f) : unlink(f)).catch(() => undefined)));
 }
 
 /** The stored bytes of one variant, or null when there is no such photo. */
 export async function readVariant(publicId: string, variant: PhotoVariant): Promise<Buffer | null> {
   if (!isPhotoId(publicId)) return null;
+  if (s3Configured()) return getObject(photoName(publicId, variant));
   try {
     return await readFile(/* turbopackIgnore: true */ photoPath(publicId, variant));
   } catch (err) {
@@ -91,5 +99,5 @@ export async function readVariant(publicId: string, variant: PhotoVariant): Prom
 const STORAGE_CODES = new Set(['ENOSPC', 'EDQUOT', 'EACCES', 'EPERM', 'EROFS']);
 export function isStorageUnavailable(err: unknown): boolean {
   const code = (err as NodeJS.ErrnoException | null)?.code;
-  return typeof code === 'string' && STORAGE_CODES.has(code);
+  return (typeof code === 'string' && STORAGE_CODES.has(code)) || isObjectStoreUnavailable(err);
 }
