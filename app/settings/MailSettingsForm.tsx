@@ -1,7 +1,7 @@
 'use client';
 
 import { useState, type FormEvent } from 'react';
-import { FieldError, labelClass, sendJson, type FormError } from '@/components/forms/api';
+import { FieldError, labelClass, SaveRow, sendJson, type FormError } from '@/components/forms/api';
 import type { MailSettings } from '@/lib/validation/mail';
 
 const SWITCHES: { key: keyof MailSettings['notify']; label: string }[] = [
@@ -75,16 +75,7 @@ export function MailSettingsForm({ initial, tagChoices, expert }: { initial: Mai
         <FieldError error={error} field="notify" />
       </fieldset>
       <FieldError error={error} />
-      <div className="flex items-center gap-3">
-        <button type="submit" className="cw-button" disabled={busy}>
-          {busy ? 'Saving…' : 'Save e-mail settings'}
-        </button>
-        {saved ? (
-          <span role="status" className="text-sm text-moss-600 dark:text-moss-300">
-            Saved.
-          </span>
-        ) : null}
-      </div>
+      <SaveRow busy={busy} saved={saved} label="Save e-mail settings" />
     </form>
   );
 }

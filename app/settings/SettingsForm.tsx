@@ -2,7 +2,7 @@
 
 import { useState, type FormEvent } from 'react';
 import { useUnits } from '@/components/units/UnitsProvider';
-import { FieldError, inputClass, labelClass, sendJson, type FormError } from '@/components/forms/api';
+import { FieldError, inputClass, labelClass, SaveRow, sendJson, type FormError } from '@/components/forms/api';
 
 export interface SettingsValues {
   displayName: string;
@@ -74,16 +74,7 @@ export function SettingsForm({ initial }: { initial: SettingsValues }) {
         <FieldError error={error} field="units" />
       </fieldset>
       <FieldError error={error} />
-      <div className="flex items-center gap-3">
-        <button type="submit" className="cw-button" disabled={busy}>
-          {busy ? 'Saving…' : 'Save settings'}
-        </button>
-        {saved ? (
-          <span role="status" className="text-sm text-moss-600 dark:text-moss-300">
-            Saved.
-          </span>
-        ) : null}
-      </div>
+      <SaveRow busy={busy} saved={saved} label="Save settings" />
     </form>
   );
 }

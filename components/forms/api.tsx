@@ -36,3 +36,19 @@ export function FieldError({ error, field, id }: { error: FormError | null; fiel
 export const inputClass =
   'mt-1 w-full rounded-md border border-limestone-400 bg-limestone-50 px-3 py-2 font-sans text-creek dark:border-creek-500 dark:bg-creek-950 dark:text-limestone-100';
 export const labelClass = 'block font-sans text-sm font-semibold';
+
+/** A settings form's submit button, with "Saved." beside it once the server has taken the change. */
+export function SaveRow({ busy, saved, label }: { busy: boolean; saved: boolean; label: string }) {
+  return (
+    <div className="flex items-center gap-3">
+      <button type="submit" className="cw-button" disabled={busy}>
+        {busy ? 'Saving…' : label}
+      </button>
+      {saved ? (
+        <span role="status" className="text-sm text-moss-600 dark:text-moss-300">
+          Saved.
+        </span>
+      ) : null}
+    </div>
+  );
+}

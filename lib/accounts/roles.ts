@@ -114,11 +114,11 @@ export async function decideExpertApplication(
       { transaction },
     );
     await notifyExpertDecision(transaction, { applicationId: application.id, applicantId: applicant.id, moderatorId, approved, note });
-    return { ok: true as const, applicant: { email: applicant.email, displayName: applicant.displayName, role: applicant.role } };
+    return { ok: true as const, role: applicant.role };
   });
   if (!result.ok) return result;
 
-  return { ok: true, status: approved ? 'approved' : 'declined', role: result.applicant.role };
+  return { ok: true, status: approved ? 'approved' : 'declined', role: result.role };
 }
 
 const ROLE_WORDS: Record<Role, string> = {

@@ -7,14 +7,12 @@ import { can, REFUSAL } from '@/lib/auth/policy';
 import { attachPhotos } from '@/lib/photos/store';
 import { ForumError } from './errors';
 import { validateSiteSheet } from './site-sheet';
-import { indexThread } from '@/lib/search';
-import { threadChanged } from './page-cache';
+import { postsChanged, threadChanged } from './after-write';
 
 /** Runs a write, then brings the thread's search documents and its cached page up to date (same request). */
 async function thenIndex<T>(write: Promise<T>, questionId: (result: T) => number): Promise<T> {
   const result = await write;
-  threadChanged(questionId(result));
-  await indexThread(questionId(result));
+  await postsChanged({ questionId: questionId(result) });
   return result;
 }
 

@@ -44,28 +44,21 @@ interface QuestionRow {
 
 const VISIBLE = 'q.hidden_at IS NULL AND q.deleted_at IS NULL';
 
-async function newQuestions(userId: number, start: Date, end: Date): Promise<QuestionRow[]> {
+/**
+ * Visible questions by others in the tags a member follows, asked in [since, until):
+ * the new ones newest first, or those with no visible answer yet oldest first.
+ */
+async function questionsInTags(userId: number, o: { since: Date; until: Date; unanswered: boolean; limit: number }): Promise<QuestionRow[]> {
+  const order = o.unanswered ? 'ASC' : 'DESC';
   return getSequelize().query<QuestionRow>(
     `SELECT DISTINCT q.id, q.title, q.created_at, q.answer_count, q.fixed_answer_id
        FROM tag_follows tf
        JOIN question_tags qt ON qt.tag_id = tf.tag_id
        JOIN questions q ON q.id = qt.question_id
-      WHERE tf.user_id = :userId AND q.created_at >= :start AND q.created_at < :end AND ${VISIBLE} AND q.author_id <> :userId
-      ORDER BY q.created_at DESC, q.id DESC LIMIT ${NEW_QUESTIONS_MAX}`,
-    { replacements: { userId, start, end }, type: QueryTypes.SELECT },
-  );
-}
-
-async function unansweredQuestions(userId: number, end: Date): Promise<QuestionRow[]> {
-  return getSequelize().query<QuestionRow>(
-    `SELECT DISTINCT q.id, q.title, q.created_at, q.answer_count, q.fixed_answer_id
-       FROM tag_follows tf
-       JOIN question_tags qt ON qt.tag_id = tf.tag_id
-       JOIN questions q ON q.id = qt.question_id
-      WHERE tf.user_id = :userId AND q.created_at >= :since AND q.created_at < :end AND ${VISIBLE} AND q.author_id <> :userId
-        AND NOT EXISTS (SELECT 1 FROM answers a WHERE a.question_id = q.id AND a.hidden_at IS NULL AND a.deleted_at IS NULL)
-      ORDER BY q.created_at ASC, q.id ASC LIMIT ${UNANSWERED_MAX}`,
-    { replacements: { userId, since: new Date(end.getTime() - UNANSWERED_DAYS * DAY), end }, type: QueryTypes.SELECT },
+      WHERE tf.user_id = :userId AND q.created_at >= :since AND q.created_at < :until AND ${VISIBLE} AND q.author_id <> :userId
+        ${o.unanswered ? 'AND NOT EXISTS (SELECT 1 FROM answers a WHERE a.question_id = q.id AND a.hidden_at IS NULL AND a.deleted_at IS NULL)' : ''}
+      ORDER BY q.created_at ${order}, q.id ${order} LIMIT ${o.limit}`,
+    { replacements: { userId, since: o.since, until: o.until }, type: QueryTypes.SELECT },
   );
 }
 
@@ -102,30 +95,29 @@ async function staleGuides(guides: ReturnType<typeof listGuides>): Promise<MailI
     .map((g) => ({ title: g.meta.title, url: `${siteUrl()}/guides/${g.slug}`, meta: `last checked ${dayFmt.format(newest.get(g.slug)!.createdAt)}, on an earlier wording` }));
 }
 
-export interface DigestContent {
-  sections: MailSection[];
+/** What is the same in every member's digest of one run. */
+interface RunContext {
+  now: Date;
+  start: Date;
+  /** guides whose `updated` date falls in the period */
+  changedGuides: MailItem[];
+  /** guides whose newest safety check was made on an earlier wording (experts only) */
+  stale: MailItem[];
 }
 
-/** What one member's digest holds for the period ending `now` (empty sections left out). */
-export async function digestFor(user: Pick<User, 'id' | 'role'>, frequency: DigestFrequency, now: Date, shared?: { guides: ReturnType<typeof listGuides>; stale: MailItem[] }): Promise<DigestContent> {
-  const start = new Date(now.getTime() - (frequency === 'weekly' ? 7 : 1) * DAY);
-  const guides = shared?.guides ?? listGuides();
-  const fresh = await newQuestions(user.id, start, now);
+/** The sections of one member's digest (empty ones left out). */
+async function digestSections(user: Pick<User, 'id' | 'role'>, run: RunContext): Promise<MailSection[]> {
   const expert = EXPERT_ROLES.has(user.role);
-  const waiting = expert ? await unansweredQuestions(user.id, now) : [];
+  const fresh = await questionsInTags(user.id, { since: run.start, until: run.now, unanswered: false, limit: NEW_QUESTIONS_MAX });
+  const waiting = expert ? await questionsInTags(user.id, { since: new Date(run.now.getTime() - UNANSWERED_DAYS * DAY), until: run.now, unanswered: true, limit: UNANSWERED_MAX }) : [];
   const tags = await tagNames([...fresh, ...waiting].map((q) => q.id));
-  const startDay = start.toISOString().slice(0, 10);
-  const changedGuides = guides.filter((g) => g.meta.updated >= startDay);
-  const stale = expert ? (shared?.stale ?? (await staleGuides(guides))) : [];
 
   const sections: MailSection[] = [];
-  if (fresh.length) sections.push({ title: 'New questions in your tags', items: questionItems(fresh, tags, now) });
-  if (waiting.length) sections.push({ title: 'Still waiting for an answer', note: 'Questions in your tags that nobody has answered yet, oldest first.', items: questionItems(waiting, tags, now) });
-  if (changedGuides.length) {
-    sections.push({ title: 'Guides added or changed', items: changedGuides.map((g) => ({ title: g.meta.title, url: `${siteUrl()}/guides/${g.slug}`, meta: `updated ${g.meta.updated} · ${g.meta.level}` })) });
-  }
-  if (stale.length) sections.push({ title: 'Safety checks out of date', note: 'These guides changed after their last safety check. An expert’s fresh read keeps the cautions honest.', items: stale });
-  return { sections };
+  if (fresh.length) sections.push({ title: 'New questions in your tags', items: questionItems(fresh, tags, run.now) });
+  if (waiting.length) sections.push({ title: 'Still waiting for an answer', note: 'Questions in your tags that nobody has answered yet, oldest first.', items: questionItems(waiting, tags, run.now) });
+  if (run.changedGuides.length) sections.push({ title: 'Guides added or changed', items: run.changedGuides });
+  if (expert && run.stale.length) sections.push({ title: 'Safety checks out of date', note: 'These guides changed after their last safety check. An expert’s fresh read keeps the cautions honest.', items: run.stale });
+  return sections;
 }
 
 export interface DigestRunResult {
@@ -144,9 +136,15 @@ export async function runDigests(frequency: DigestFrequency, now = new Date()): 
   const { User } = initModels();
   const period = periodKey(frequency, now);
   const guides = listGuides();
-  const stale = await staleGuides(guides);
+  const start = new Date(now.getTime() - (frequency === 'weekly' ? 7 : 1) * DAY);
+  const startDay = start.toISOString().slice(0, 10);
+  const run: RunContext = {
+    now,
+    start,
+    changedGuides: guides.filter((g) => g.meta.updated >= startDay).map((g) => ({ title: g.meta.title, url: `${siteUrl()}/guides/${g.slug}`, meta: `updated ${g.meta.updated} · ${g.meta.level}` })),
+    stale: await staleGuides(guides),
+  };
   const result: DigestRunResult = { frequency, period, members: 0, queued: 0, nothingNew: 0, alreadyQueued: 0 };
-  const label = frequency === 'weekly' ? 'weekly' : 'daily';
   let afterId = 0;
   for (;;) {
     const members = await User.findAll({
@@ -160,21 +158,21 @@ export async function runDigests(frequency: DigestFrequency, now = new Date()): 
     result.members += members.length;
     const mails: OutgoingMail[] = [];
     for (const m of members) {
-      const { sections } = await digestFor(m, frequency, now, { guides, stale });
+      const sections = await digestSections(m, run);
       if (sections.length === 0) {
         result.nothingNew++;
         continue;
       }
       const count = sections.reduce((n, s) => n + s.items.length, 0);
       const mail = await renderMail({
-        subject: `Your ${label} Clackwater digest: ${count} thing${count === 1 ? '' : 's'} to read`,
+        subject: `Your ${frequency} Clackwater digest: ${count} thing${count === 1 ? '' : 's'} to read`,
         preview: sections.map((s) => `${s.title} (${s.items.length})`).join(' · '),
-        heading: `Your ${label} digest`,
+        heading: `Your ${frequency} digest`,
         paragraphs: [`Hello ${m.displayName}, here is what happened on Clackwater in the ${frequency === 'weekly' ? 'last seven days' : 'last day'}.`],
         sections,
         action: { label: 'Ask a question', url: `${siteUrl()}/questions/ask` },
         footer: {
-          reason: `You get this ${label} because you chose a ${label} digest in your settings. Follow or unfollow tags there to change what it holds.`,
+          reason: `You get this ${frequency} because you chose a ${frequency} digest in your settings. Follow or unfollow tags there to change what it holds.`,
           settingsUrl: `${siteUrl()}/settings#email`,
           unsubscribe: { label: 'Stop the digest', url: unsubscribePageUrl(m.id, 'digest') },
         },

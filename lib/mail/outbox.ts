@@ -1,5 +1,6 @@
 import { createHash } from 'node:crypto';
-import { Op, QueryTypes, type Transaction } from 'sequelize';
+import { col, fn, Op, QueryTypes, type Transaction } from 'sequelize';
+import type { MailStatus } from '@/models/MailMessage';
 import { getSequelize } from '@/lib/db';
 import { initModels } from '@/models';
 import { getTransport, mailFrom } from './transport';
@@ -75,18 +76,16 @@ export function mailWorkerEnabled(): boolean {
   return process.env.MAIL_WORKER !== 'off';
 }
 
-const g = globalThis as unknown as { __clackwaterKick?: { timer: NodeJS.Timeout | null; running: Promise<unknown> | null } };
+let kick: NodeJS.Timeout | null = null;
 
 /** Sends what was just queued soon after its transaction commits, without waiting for the next scheduled run. */
 export function kickOutbox(): void {
-  if (!mailWorkerEnabled()) return;
-  const k = (g.__clackwaterKick ??= { timer: null, running: null });
-  if (k.timer) return;
-  k.timer = setTimeout(() => {
-    k.timer = null;
+  if (!mailWorkerEnabled() || kick) return;
+  kick = setTimeout(() => {
+    kick = null;
     flushOutbox().catch((err) => console.error(`mail: the outbox worker stopped: ${err instanceof Error ? err.message : err}`));
   }, 200);
-  k.timer.unref?.();
+  kick.unref?.();
 }
 
 /** Claims up to `limit` due messages for this worker; rows another worker holds are skipped, not waited for. */
@@ -209,4 +208,17 @@ export async function retryFailed(id: number): Promise<boolean> {
   const [n] = await MailMessage.update({ status: 'pending', attempts: 0, nextAttemptAt: new Date(), lockedUntil: null }, { where: { id, status: 'failed' } });
   if (n > 0) kickOutbox();
   return n > 0;
+}
+
+/** For /admin/outbox: how many messages in each status, and the newest 100 (of one status, or all). */
+export async function outboxView(status: MailStatus | null) {
+  const { MailMessage } = initModels();
+  const grouped = (await MailMessage.findAll({ attributes: ['status', [fn('COUNT', col('id')), 'n']], group: ['status'], raw: true })) as unknown as { status: string; n: number }[];
+  const rows = await MailMessage.findAll({
+    where: status ? { status } : {},
+    attributes: ['id', 'toAddress', 'kind', 'subject', 'status', 'attempts', 'nextAttemptAt', 'lastError', 'sentAt', 'createdAt'],
+    order: [['createdAt', 'DESC'], ['id', 'DESC']],
+    limit: 100,
+  });
+  return { counts: Object.fromEntries(grouped.map((g) => [g.status, Number(g.n)])) as Record<string, number>, rows };
 }

@@ -1,6 +1,7 @@
 import { createHmac, timingSafeEqual } from 'node:crypto';
 import { authSecret } from '@/lib/auth/secret';
 import { siteUrl } from '@/lib/site';
+import { idParam } from '@/lib/http/guard';
 
 /**
  * One-click unsubscribe links. A link names the member, what to stop and an HMAC of
@@ -45,8 +46,8 @@ export type UnsubscribeCheck = { ok: true; userId: number; scope: UnsubscribeSco
 
 /** Checks a link's three parameters; any change to any of them is refused. */
 export function verifyUnsubscribe(params: { u?: string | null; s?: string | null; t?: string | null }): UnsubscribeCheck {
-  const userId = Number(params.u);
-  if (!params.u || !/^\d{1,10}$/.test(params.u) || !Number.isSafeInteger(userId) || userId < 1) return { ok: false, field: 'u', message: 'This unsubscribe link is damaged: the member number is missing or wrong.' };
+  const userId = idParam(params.u ?? '');
+  if (!userId) return { ok: false, field: 'u', message: 'This unsubscribe link is damaged: the member number is missing or wrong.' };
   const scope = params.s as UnsubscribeScope;
   if (!UNSUBSCRIBE_SCOPES.includes(scope)) return { ok: false, field: 's', message: 'This unsubscribe link is damaged: it does not say which e-mail to stop.' };
   const given = Buffer.from(params.t ?? '');

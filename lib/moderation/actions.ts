@@ -5,9 +5,8 @@ import { ForumError } from '@/lib/forum/errors';
 import type { SessionUser } from '@/lib/auth/session';
 import { recordAudit } from './audit';
 import { notifyModeration } from '@/lib/mail/notify';
-import { threadChanged } from '@/lib/forum/page-cache';
+import { postsChanged } from '@/lib/forum/after-write';
 import { loadPost, type ModeratedType } from './posts';
-import { indexFieldLog, indexThread } from '@/lib/search';
 
 export const MODERATION_ACTIONS = ['dismiss', 'hide', 'restore', 'delete', 'lock', 'unlock', 'retag', 'warn', 'suspend'] as const;
 export type ModerationAction = (typeof MODERATION_ACTIONS)[number];
@@ -115,8 +114,6 @@ export async function moderate(
     return { auditId: audit.id, questionId };
   });
   // hide, restore, delete and retag change what search shows: the thread is reindexed now
-  threadChanged(done.questionId);
-  if (done.questionId) await indexThread(done.questionId);
-  if (input.postType === 'field-log') await indexFieldLog([input.postId]);
+  await postsChanged({ questionId: done.questionId, fieldLogEntryId: input.postType === 'field-log' ? input.postId : null });
   return { auditId: done.auditId };
 }

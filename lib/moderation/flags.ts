@@ -1,5 +1,4 @@
-import { threadChanged } from '@/lib/forum/page-cache';
-import { indexFieldLog, indexThread } from '@/lib/search';
+import { postsChanged } from '@/lib/forum/after-write';
 import { getSequelize } from '@/lib/db';
 import { initModels } from '@/models';
 import { ForumError } from '@/lib/forum/errors';
@@ -39,8 +38,6 @@ export async function flagPost(user: SessionUser, input: { postType: ModeratedTy
     return { flagId: flag.id, hidden, questionId };
   });
   // an open unsafe flag shows readers a caution, and a post hidden by flags leaves search
-  threadChanged(out.questionId);
-  if (out.hidden && out.questionId) await indexThread(out.questionId);
-  if (out.hidden && input.postType === 'field-log') await indexFieldLog([input.postId]);
+  await postsChanged({ questionId: out.questionId, fieldLogEntryId: input.postType === 'field-log' ? input.postId : null, reindex: out.hidden });
   return { flagId: out.flagId, hidden: out.hidden };
 }

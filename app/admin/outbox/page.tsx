@@ -1,9 +1,8 @@
 import type { Metadata } from 'next';
-import { fn, col } from 'sequelize';
 import { currentUserInPage } from '@/lib/auth/session';
 import { can, REFUSAL } from '@/lib/auth/policy';
 import { isDatabaseUnavailable } from '@/lib/db/errors';
-import { initModels } from '@/models';
+import { outboxView } from '@/lib/mail/outbox';
 import { MAIL_STATUSES, type MailStatus } from '@/models/MailMessage';
 import { Refused } from '@/components/account/Refused';
 import { ServiceUnavailable } from '@/components/ServiceUnavailable';
@@ -20,20 +19,12 @@ export default async function OutboxPage({ searchParams }: { searchParams: Promi
   const sp = await searchParams;
   const status = MAIL_STATUSES.find((s) => s === sp.status) ?? null;
   let signedIn = false;
-  let data: { counts: Record<string, number>; rows: InstanceType<ReturnType<typeof initModels>['MailMessage']>[] } | null = null;
+  let data: Awaited<ReturnType<typeof outboxView>> | null = null;
   try {
     const user = await currentUserInPage();
     signedIn = user !== null;
     if (user && can(user, 'mail.outbox')) {
-      const { MailMessage } = initModels();
-      const grouped = (await MailMessage.findAll({ attributes: ['status', [fn('COUNT', col('id')), 'n']], group: ['status'], raw: true })) as unknown as { status: string; n: number }[];
-      const rows = await MailMessage.findAll({
-        where: status ? { status } : {},
-        attributes: ['id', 'toAddress', 'kind', 'subject', 'status', 'attempts', 'nextAttemptAt', 'lastError', 'sentAt', 'createdAt'],
-        order: [['createdAt', 'DESC'], ['id', 'DESC']],
-        limit: 100,
-      });
-      data = { counts: Object.fromEntries(grouped.map((g) => [g.status, Number(g.n)])), rows };
+      data = await outboxView(status);
     }
   } catch (err) {
     if (isDatabaseUnavailable(err)) return <ServiceUnavailable what="the e-mail outbox" />;

@@ -1,6 +1,7 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
 import { notFound } from 'next/navigation';
+import { cache } from 'react';
 import 'katex/dist/katex.min.css';
 import { loadThread, type ThreadView } from '@/lib/forum/thread';
 import { ForumError } from '@/lib/forum/errors';
@@ -13,7 +14,7 @@ type Params = Promise<{ id: string }>;
 
 /**
  * The page is the same for every reader, so Next keeps it (ISR): rendered on the first
- * visit, marked stale by every write to the thread (lib/forum/page-cache.ts), and
+ * visit, marked stale by every write to the thread (lib/forum/after-write.ts), and
  * re-rendered at least once a minute. It reads no cookie; the reader's units and
  * session are applied in the browser.
  */
@@ -23,14 +24,15 @@ export function generateStaticParams(): { id: string }[] {
   return [];
 }
 
-async function load(id: number): Promise<ThreadView | null> {
+/** One load per render: the metadata and the page share it. */
+const load = cache(async (id: number): Promise<ThreadView | null> => {
   try {
     return await loadThread(id, null);
   } catch (err) {
     if (err instanceof ForumError && err.status === 404) return null;
     throw err;
   }
-}
+});
 
 export async function generateMetadata({ params }: { params: Params }): Promise<Metadata> {
   const id = idParam((await params).id);
