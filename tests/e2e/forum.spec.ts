@@ -66,7 +66,10 @@ test.describe.serial('the forum', () => {
     await signIn(askerPage, 'cabin@sorrelcreek.example');
     await askerPage.goto(questionUrl);
     await settled(askerPage);
+    // the mark shows at once (optimistic): wait for the server to save it before closing the context
+    const saved = askerPage.waitForResponse((r) => r.request().method() !== 'GET' && r.url().endsWith('/fixed'));
     await askerPage.locator('[data-answer]').filter({ hasText: 'Twelve feet is short' }).getByRole('button', { name: 'This fixed it' }).click();
+    expect((await saved).ok()).toBe(true);
     await expect(askerPage.locator('[data-answer]').first()).toContainText('fixed it');
     await asker.close();
 

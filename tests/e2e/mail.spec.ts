@@ -2,6 +2,7 @@ import { test, expect } from '@playwright/test';
 import { SmtpCatcher } from '../support/smtp-catcher';
 import { E2E_SMTP_PORT } from '../../playwright.config';
 import { signIn } from './support/session';
+import { outboxFor } from './support/outbox';
 
 const catcher = new SmtpCatcher(E2E_SMTP_PORT);
 test.beforeAll(() => catcher.start());
@@ -25,12 +26,18 @@ test('an answer in the browser reaches the asker’s inbox within a minute; its 
   await ep.goto(questionUrl);
   const composer = ep.getByRole('form', { name: 'Your answer' });
   await composer.getByLabel('Answer (Markdown; math between $ signs)').fill('Warm water in the afternoon holds less air; check the snifter and the air chamber cushion.');
+  // wait for the answer to be saved and shown in the thread: the words alone also match
+  // the composer's own textarea, and closing the context too soon would abort the post
+  const saved = ep.waitForResponse((r) => r.request().method() === 'POST' && r.url().endsWith(`/answers`));
   await composer.getByRole('button', { name: 'Post the answer' }).click();
-  await expect(ep.getByText('check the snifter and the air chamber cushion')).toBeVisible();
+  expect((await saved).status()).toBe(201);
+  await expect(ep.locator('[data-answer]').filter({ hasText: 'check the snifter and the air chamber cushion' })).toBeVisible();
   await expert.close();
 
   // the server's worker sends it after the answer commits: no script run by hand
-  const mail = await catcher.waitFor('tamsin@ferncombe.example', new RegExp(`^New answer: ${title}$`), 60_000);
+  const mail = await catcher.waitFor('tamsin@ferncombe.example', new RegExp(`^New answer: ${title}$`), 60_000).catch(async (err: Error) => {
+    throw new Error(`${err.message}\nthe outbox for this address at ${new Date().toISOString()}:\n${await outboxFor('tamsin@ferncombe.example')}\ncaught: ${catcher.messages.map((m) => `${m.to.join(',')} ${m.subject}`).join('; ') || 'nothing'}`);
+  });
   expect(mail.text).toContain('Quarry Lane Valves wrote:');
   expect(mail.html).toContain('check the snifter and the air chamber cushion');
   const unsubscribe = /Stop these e-mails: (\S+)/.exec(mail.text)![1];
@@ -62,5 +69,8 @@ test('an admin sees the outbox, with what was sent', async ({ page }) => {
   await signIn(page, 'admin@clackwater.example');
   await page.goto('/admin/outbox?status=sent');
   await expect(page.getByRole('heading', { level: 1, name: 'E-mail outbox' })).toBeVisible();
-  await expect(page.locator('[data-outbox-status="sent"]').filter({ hasText: 'tamsin@ferncombe.example' }).first()).toBeVisible();
+  const sent = page.locator('[data-outbox-status="sent"]').filter({ hasText: 'tamsin@ferncombe.example' }).first();
+  await expect(sent).toBeVisible().catch(async (err: Error) => {
+    throw new Error(`${err.message}\nthe outbox for this address:\n${await outboxFor('tamsin@ferncombe.example')}`);
+  });
 });
