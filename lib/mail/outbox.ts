@@ -183,18 +183,20 @@ async function flushOnce({ limit = 50, now = () => new Date() }: { limit?: numbe
           const next = new Date(now().getTime() + backoffMs(attempts));
           await m.update({ status: 'pending', attempts, nextAttemptAt: next, lockedUntil: null, lastError: message });
           result.retrying++;
+          console.error(`mail: message ${m.id} to ${m.toAddress} not sent (attempt ${attempts} of ${max}), next try ${next.toISOString()}: ${message}`);
         }
         if (connectionDown(err)) {
-          // Hand the rest of the batch back untouched: they wait for the server, and
-          // keep their attempts for when it answers.
-          const rest = rows.slice(i + 1).map((r) => r.id);
-          if (rest.length) {
+          // Hand the rest of the batch back untried: they wait for the server, keep their
+          // attempts for when it answers, and each waits as its own attempts say (a message
+          // queued a moment ago waits the first interval, not this one's longer one).
+          const rest = rows.slice(i + 1);
+          for (const r of rest) {
             await MailMessage.update(
-              { status: 'pending', lockedUntil: null, nextAttemptAt: new Date(now().getTime() + backoffMs(attempts)) },
-              { where: { id: { [Op.in]: rest }, status: 'sending' } },
+              { status: 'pending', lockedUntil: null, nextAttemptAt: new Date(now().getTime() + backoffMs(Math.max(1, r.attempts))) },
+              { where: { id: r.id, status: 'sending' } },
             );
-            result.retrying += rest.length;
           }
+          result.retrying += rest.length;
           return result;
         }
       }

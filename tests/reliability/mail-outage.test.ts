@@ -101,4 +101,25 @@ describe('SMTP down: events commit, messages wait in the outbox, each goes out o
     const again = await call(retryPOST, 'POST', `/api/admin/outbox/${row.id}/retry`, 'clack_admin', {}, { id: String(row.id) });
     expect(again.status).toBe(404);
   });
+
+  it('a message queued a moment ago does not inherit the long wait of an older one tried first while the server is down', async () => {
+    await catcher?.stop();
+    catcher = null;
+    const { MailMessage } = initModels();
+    await MailMessage.destroy({ where: {} });
+    const base = { userId: null, kind: 'answer', subject: 'Backoff check', textBody: 'x', htmlBody: null, headers: null };
+    const old = await MailMessage.create({ ...base, dedupeKey: 'check:old', toAddress: 'old@nowhere.example', attempts: 4, nextAttemptAt: new Date(Date.now() - 60_000) });
+    const fresh = await MailMessage.create({ ...base, dedupeKey: 'check:fresh', toAddress: 'fresh@nowhere.example', nextAttemptAt: new Date() });
+    const t0 = Date.now();
+    expect(await flushOutbox()).toEqual({ sent: 0, retrying: 2, failed: 0 });
+    await old.reload();
+    await fresh.reload();
+    // the older one was tried (the first in the batch) and waits its fifth interval
+    expect(old.attempts).toBe(5);
+    expect(old.nextAttemptAt.getTime()).toBeGreaterThanOrEqual(t0 + backoffMs(5) - 1_000);
+    // the fresh one was handed back untried and waits only the first interval
+    expect(fresh.attempts).toBe(0);
+    expect(fresh.nextAttemptAt.getTime()).toBeLessThanOrEqual(Date.now() + backoffMs(1) + 1_000);
+    expect(backoffMs(5)).toBeGreaterThan(backoffMs(1) * 4);
+  });
 });
