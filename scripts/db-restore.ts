@@ -10,6 +10,7 @@ import { createGunzip } from 'node:zlib';
 import { QueryTypes } from 'sequelize';
 import { readDbConfig, type DbConfig } from '@/lib/db/config';
 import { createSequelize } from '@/lib/db';
+import { forgetSavedPages } from '@/lib/forum/saved-pages';
 
 export async function restoreDatabase(file: string, cfg: DbConfig = readDbConfig(), opts: { force?: boolean } = {}): Promise<void> {
   if (!existsSync(file)) throw new Error(`no backup file at ${file}`);
@@ -44,7 +45,10 @@ if (require.main === module) {
     process.exit(2);
   }
   restoreDatabase(file, readDbConfig(), { force: args.includes('--force') })
-    .then(() => console.log(`restored ${file} into ${readDbConfig().database}`))
+    .then(() => {
+      forgetSavedPages();
+      console.log(`restored ${file} into ${readDbConfig().database}; restart the app so no page from before is served`);
+    })
     .catch((err) => {
       console.error(`restore failed: ${err instanceof Error ? err.message : String(err)}`);
       process.exit(1);
