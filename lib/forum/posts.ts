@@ -11,6 +11,7 @@ import { ForumError } from './errors';
 import { validateSiteSheet } from './site-sheet';
 import { postsChanged, threadChanged } from './after-write';
 import { findWritablePost, namedInBody, type PostType } from './visibility';
+import { checkPostText } from './post-text';
 
 /** Runs a write, then brings the thread's search documents and its cached page up to date (same request). */
 async function thenIndex<T>(write: Promise<T>, questionId: (result: T) => number): Promise<T> {
@@ -34,6 +35,7 @@ export async function askQuestion(
   user: SessionUser,
   input: { title: string; body: string; tags: string[]; siteSheet?: Record<string, string | undefined>; photoIds: string[]; guide?: string; fieldLogEntryId?: number },
 ) {
+  checkPostText(user, 'question', input);
   const siteSheet = validateSiteSheet(input.siteSheet);
   const { Question, QuestionTag, Revision, QuestionFollow, FieldLogEntry } = initModels();
   const write = getSequelize().transaction(async (transaction) => {
@@ -59,6 +61,15 @@ export async function askQuestion(
   return thenIndex(write, (q) => q.id);
 }
 
+/**
+ * A locked thread is closed to its authors too: an edit could otherwise rewrite the
+ * words a moderator locked it over. The lock binds moderators' own posts as well;
+ * they unlock the thread first, so the change shows in the audit log.
+ */
+function refuseEditWhenLocked(q: { lockedAt?: Date | null }) {
+  if (q.lockedAt) throw new ForumError(409, 'This thread is locked: its posts cannot be edited.');
+}
+
 /** The thread a write goes to, locked: not found for one who cannot see it, refused (409) when hidden. */
 async function writableQuestion(user: SessionUser, id: number, transaction: Transaction) {
   return (await findWritablePost(user, 'question', id, { transaction, lock: 'question' })).question;
@@ -70,6 +81,8 @@ export async function editQuestion(user: SessionUser, id: number, input: { title
   const write = getSequelize().transaction(async (transaction) => {
     const q = await writableQuestion(user, id, transaction);
     if (!can(user, 'question.edit', q.authorId)) throw new ForumError(403, REFUSAL['question.edit']);
+    refuseEditWhenLocked(q);
+    checkPostText(user, 'question', input);
     const ids = await tagIds([...new Set(input.tags)], transaction);
     await q.update({ title: input.title, body: input.body, siteSheet }, { transaction });
     await QuestionTag.destroy({ where: { questionId: id }, transaction });
@@ -81,6 +94,7 @@ export async function editQuestion(user: SessionUser, id: number, input: { title
 }
 
 export async function postAnswer(user: SessionUser, questionId: number, input: { body: string; calculationId?: string; photoIds: string[] }) {
+  checkPostText(user, 'answer', input);
   const { Answer, WorkedCalculation, Revision } = initModels();
   const write = getSequelize().transaction(async (transaction) => {
     const q = await writableQuestion(user, questionId, transaction);
@@ -107,9 +121,12 @@ export async function postAnswer(user: SessionUser, questionId: number, input: {
 export async function editPostBody(user: SessionUser, postType: 'answer' | 'reply', id: number, body: string) {
   const { Revision } = initModels();
   const write = getSequelize().transaction(async (transaction) => {
-    const post = (await findWritablePost(user, postType, id, { transaction, lock: 'post', field: 'id' })).post as Answer | Reply;
+    const found = await findWritablePost(user, postType, id, { transaction, lock: 'post', field: 'id' });
+    const post = found.post as Answer | Reply;
     const action = postType === 'answer' ? 'answer.edit' : 'reply.edit';
     if (!can(user, action, post.authorId)) throw new ForumError(403, REFUSAL[action]);
+    refuseEditWhenLocked(found.question);
+    checkPostText(user, postType, { body });
     post.body = body;
     await post.save({ transaction });
     await Revision.create({ postType, postId: id, editorId: user.id, title: null, body }, { transaction });
@@ -119,6 +136,7 @@ export async function editPostBody(user: SessionUser, postType: 'answer' | 'repl
 }
 
 export async function postReply(user: SessionUser, questionId: number, input: { body: string; answerId?: number; replyToId?: number }) {
+  checkPostText(user, 'reply', input);
   const { Answer, Reply, Revision } = initModels();
   const write = getSequelize().transaction(async (transaction) => {
     const q = await writableQuestion(user, questionId, transaction);

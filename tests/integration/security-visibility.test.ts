@@ -103,6 +103,12 @@ describe('revision history follows the visibility of its post and its thread (is
     expect(res.body.revisions).toHaveLength(2);
     expect(res.body.revisions[1].body).toContain('nobody may read');
     expect((await revisions(hiddenQ, 'clack_admin', `?postType=answer&postId=${answerInHiddenQ}`)).status).toBe(200);
+    // a moderator's view of hidden words is never for a shared cache
+    for (const [handler, url] of [[revisionsGET, `/api/questions/${hiddenQ}/revisions`], [threadGET, `/api/questions/${hiddenQ}`]] as const) {
+      const res = await raw(handler, 'GET', url, MOD, undefined, p(hiddenQ));
+      expect(res.status).toBe(200);
+      expect(res.headers.get('cache-control')).toBe('private, no-store');
+    }
   });
 
   it('hidden answers and deleted replies in an open thread: not found but for moderators', async () => {
