@@ -2,12 +2,16 @@ import type { Transaction } from 'sequelize';
 import { notifyAnswer, notifyFixed, notifyReply } from '@/lib/mail/notify';
 import { getSequelize } from '@/lib/db';
 import { initModels } from '@/models';
+import type { Answer } from '@/models/Answer';
+import type { Reply } from '@/models/Reply';
 import type { SessionUser } from '@/lib/auth/session';
 import { can, REFUSAL } from '@/lib/auth/policy';
 import { attachPhotos } from '@/lib/photos/store';
 import { ForumError } from './errors';
 import { validateSiteSheet } from './site-sheet';
 import { postsChanged, threadChanged } from './after-write';
+import { findWritablePost, namedInBody, type PostType } from './visibility';
+import { checkPostText } from './post-text';
 
 /** Runs a write, then brings the thread's search documents and its cached page up to date (same request). */
 async function thenIndex<T>(write: Promise<T>, questionId: (result: T) => number): Promise<T> {
@@ -31,6 +35,7 @@ export async function askQuestion(
   user: SessionUser,
   input: { title: string; body: string; tags: string[]; siteSheet?: Record<string, string | undefined>; photoIds: string[]; guide?: string; fieldLogEntryId?: number },
 ) {
+  checkPostText(user, 'question', input);
   const siteSheet = validateSiteSheet(input.siteSheet);
   const { Question, QuestionTag, Revision, QuestionFollow, FieldLogEntry } = initModels();
   const write = getSequelize().transaction(async (transaction) => {
@@ -56,19 +61,28 @@ export async function askQuestion(
   return thenIndex(write, (q) => q.id);
 }
 
-async function loadQuestion(id: number, transaction?: Transaction) {
-  const { Question } = initModels();
-  const q = await Question.findByPk(id, { transaction, lock: transaction ? transaction.LOCK.UPDATE : undefined });
-  if (!q) throw new ForumError(404, 'no such question', 'id');
-  return q;
+/**
+ * A locked thread is closed to its authors too: an edit could otherwise rewrite the
+ * words a moderator locked it over. The lock binds moderators' own posts as well;
+ * they unlock the thread first, so the change shows in the audit log.
+ */
+function refuseEditWhenLocked(q: { lockedAt?: Date | null }) {
+  if (q.lockedAt) throw new ForumError(409, 'This thread is locked: its posts cannot be edited.');
+}
+
+/** The thread a write goes to, locked: not found for one who cannot see it, refused (409) when hidden. */
+async function writableQuestion(user: SessionUser, id: number, transaction: Transaction) {
+  return (await findWritablePost(user, 'question', id, { transaction, lock: 'question' })).question;
 }
 
 export async function editQuestion(user: SessionUser, id: number, input: { title: string; body: string; tags: string[]; siteSheet?: Record<string, string | undefined> }) {
   const siteSheet = validateSiteSheet(input.siteSheet);
   const { QuestionTag, Revision } = initModels();
   const write = getSequelize().transaction(async (transaction) => {
-    const q = await loadQuestion(id, transaction);
+    const q = await writableQuestion(user, id, transaction);
     if (!can(user, 'question.edit', q.authorId)) throw new ForumError(403, REFUSAL['question.edit']);
+    refuseEditWhenLocked(q);
+    checkPostText(user, 'question', input);
     const ids = await tagIds([...new Set(input.tags)], transaction);
     await q.update({ title: input.title, body: input.body, siteSheet }, { transaction });
     await QuestionTag.destroy({ where: { questionId: id }, transaction });
@@ -80,9 +94,10 @@ export async function editQuestion(user: SessionUser, id: number, input: { title
 }
 
 export async function postAnswer(user: SessionUser, questionId: number, input: { body: string; calculationId?: string; photoIds: string[] }) {
+  checkPostText(user, 'answer', input);
   const { Answer, WorkedCalculation, Revision } = initModels();
   const write = getSequelize().transaction(async (transaction) => {
-    const q = await loadQuestion(questionId, transaction);
+    const q = await writableQuestion(user, questionId, transaction);
     if (q.lockedAt) throw new ForumError(409, 'This thread is locked: no new answers or replies.');
     let calculationId: number | null = null;
     if (input.calculationId) {
@@ -104,12 +119,14 @@ export async function postAnswer(user: SessionUser, questionId: number, input: {
 }
 
 export async function editPostBody(user: SessionUser, postType: 'answer' | 'reply', id: number, body: string) {
-  const { Answer, Reply, Revision } = initModels();
+  const { Revision } = initModels();
   const write = getSequelize().transaction(async (transaction) => {
-    const post = postType === 'answer' ? await Answer.findByPk(id, { transaction }) : await Reply.findByPk(id, { transaction });
-    if (!post) throw new ForumError(404, `no such ${postType}`, 'id');
+    const found = await findWritablePost(user, postType, id, { transaction, lock: 'post', field: 'id' });
+    const post = found.post as Answer | Reply;
     const action = postType === 'answer' ? 'answer.edit' : 'reply.edit';
     if (!can(user, action, post.authorId)) throw new ForumError(403, REFUSAL[action]);
+    refuseEditWhenLocked(found.question);
+    checkPostText(user, postType, { body });
     post.body = body;
     await post.save({ transaction });
     await Revision.create({ postType, postId: id, editorId: user.id, title: null, body }, { transaction });
@@ -119,16 +136,16 @@ export async function editPostBody(user: SessionUser, postType: 'answer' | 'repl
 }
 
 export async function postReply(user: SessionUser, questionId: number, input: { body: string; answerId?: number; replyToId?: number }) {
+  checkPostText(user, 'reply', input);
   const { Answer, Reply, Revision } = initModels();
   const write = getSequelize().transaction(async (transaction) => {
-    const q = await loadQuestion(questionId, transaction);
+    const q = await writableQuestion(user, questionId, transaction);
     if (q.lockedAt) throw new ForumError(409, 'This thread is locked: no new answers or replies.');
     let answerId: number | null = input.answerId ?? null;
     let depth = 0;
     let replyToId: number | null = null;
     if (input.replyToId) {
-      const parent = await Reply.findOne({ where: { id: input.replyToId, questionId }, transaction });
-      if (!parent) throw new ForumError(422, 'replyToId: no such reply in this thread', 'replyToId');
+      const parent = namedInBody(user, await Reply.findOne({ where: { id: input.replyToId, questionId }, transaction }), 'replyToId', 'replyToId: no such reply in this thread');
       answerId = parent.answerId;
       // Nesting is capped; past the cap a reply joins its parent's level (flattened).
       if (parent.depth + 1 > MAX_REPLY_DEPTH) {
@@ -139,8 +156,7 @@ export async function postReply(user: SessionUser, questionId: number, input: { 
         replyToId = parent.id;
       }
     } else if (answerId) {
-      const a = await Answer.findOne({ where: { id: answerId, questionId }, transaction });
-      if (!a) throw new ForumError(422, 'answerId: no such answer on this question', 'answerId');
+      namedInBody(user, await Answer.findOne({ where: { id: answerId, questionId }, transaction }), 'answerId', 'answerId: no such answer on this question');
     }
     const r = await Reply.create(
       { questionId, parentType: answerId ? 'answer' : 'question', answerId, replyToId, depth, authorId: user.id, body: input.body },
@@ -154,21 +170,11 @@ export async function postReply(user: SessionUser, questionId: number, input: { 
   return thenIndex(write, (r) => r.questionId);
 }
 
-type PostType = 'question' | 'answer' | 'reply';
-
-async function postOwner(postType: PostType, postId: number, transaction: Transaction) {
-  const { Question, Answer, Reply } = initModels();
-  const model = { question: Question, answer: Answer, reply: Reply }[postType] as typeof Answer;
-  const post = await model.findByPk(postId, { transaction, lock: transaction.LOCK.UPDATE });
-  if (!post) throw new ForumError(404, `no such ${postType}`, 'postId');
-  return post;
-}
-
 /** One helpful mark per member per post, never on one's own post; the post's count follows. */
 export async function markHelpful(user: SessionUser, postType: PostType, postId: number, on: boolean) {
   const { HelpfulMark } = initModels();
   const out = await getSequelize().transaction(async (transaction) => {
-    const post = await postOwner(postType, postId, transaction);
+    const { post, question } = await findWritablePost(user, postType, postId, { transaction, lock: 'post' });
     if (post.authorId === user.id) throw new ForumError(403, 'You cannot mark your own post helpful.');
     const existing = await HelpfulMark.findOne({ where: { postType, postId, userId: user.id }, transaction });
     if (on && existing) throw new ForumError(409, 'You have already marked this helpful.');
@@ -176,8 +182,9 @@ export async function markHelpful(user: SessionUser, postType: PostType, postId:
     if (on) await HelpfulMark.create({ postType, postId, userId: user.id }, { transaction });
     else await existing!.destroy({ transaction });
     const count = await HelpfulMark.count({ where: { postType, postId }, transaction });
-    await post.update({ helpfulCount: count }, { transaction });
-    return { count, questionId: postType === 'question' ? post.id : (post as unknown as { questionId: number }).questionId };
+    post.helpfulCount = count;
+    await post.save({ transaction });
+    return { count, questionId: question.id };
   });
   threadChanged(out.questionId);
   return out.count;
@@ -187,11 +194,10 @@ export async function markHelpful(user: SessionUser, postType: PostType, postId:
 export async function chooseFixed(user: SessionUser, questionId: number, answerId: number | null) {
   const { Answer } = initModels();
   const write = getSequelize().transaction(async (transaction) => {
-    const q = await loadQuestion(questionId, transaction);
+    const q = await writableQuestion(user, questionId, transaction);
     if (!can(user, 'question.markFixed', q.authorId)) throw new ForumError(403, REFUSAL['question.markFixed']);
     if (answerId !== null) {
-      const a = await Answer.findOne({ where: { id: answerId, questionId }, transaction });
-      if (!a) throw new ForumError(422, 'answerId: no such answer on this question', 'answerId');
+      namedInBody(user, await Answer.findOne({ where: { id: answerId, questionId }, transaction }), 'answerId', 'answerId: no such answer on this question');
     }
     const before = q.fixedAnswerId;
     await q.update({ fixedAnswerId: answerId }, { transaction });
@@ -203,7 +209,7 @@ export async function chooseFixed(user: SessionUser, questionId: number, answerI
 
 export async function setFollow(user: SessionUser, questionId: number, on: boolean) {
   const { QuestionFollow } = initModels();
-  await loadQuestion(questionId);
+  await findWritablePost(user, 'question', questionId);
   if (on) await QuestionFollow.findOrCreate({ where: { questionId, userId: user.id } });
   else await QuestionFollow.destroy({ where: { questionId, userId: user.id } });
   return on;

@@ -2,6 +2,7 @@ import { Op } from 'sequelize';
 import { initModels } from '@/models';
 import { ForumError } from './errors';
 import { can, type Actor } from '@/lib/auth/policy';
+import { findVisiblePost, type PostType } from './visibility';
 
 /** A photo with a post; `ref` is what a flag names, `hidden` only ever true for moderators. */
 export interface PhotoView {
@@ -188,7 +189,13 @@ export async function loadThread(id: number, viewer: Actor | null): Promise<Thre
   };
 }
 
-export async function listRevisions(postType: 'question' | 'answer' | 'reply', postId: number) {
+/**
+ * Every version of a post, oldest first, for a reader who may see the post itself
+ * (`findVisiblePost`: hidden and deleted posts, or any post of a hidden thread, are
+ * not found but for moderators); an answer or reply must belong to `questionId`.
+ */
+export async function listRevisions(viewer: Actor | null, questionId: number, postType: PostType, postId: number) {
+  await findVisiblePost(viewer, postType, postId, { questionId });
   const { Revision, User } = initModels();
   const rows = await Revision.findAll({
     where: { postType, postId },

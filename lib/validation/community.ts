@@ -2,6 +2,7 @@ import { z } from 'zod';
 import { ROLES } from '@/models/User';
 import { SAFETY_VERDICTS } from '@/models/SafetyCheck';
 import { UNIT_SYSTEMS } from '@/lib/units/preference';
+import { displayNameSchema } from './account';
 
 /** Schemas for expert applications, roles, account settings and safety checks: shared by forms and handlers. */
 
@@ -53,7 +54,8 @@ export const roleChangeSchema = z.object({
 });
 
 export const accountSettingsSchema = z.object({
-  displayName: text('displayName', 2, 80),
+  // the strictest (a member's); the settings handler passes the caller's role
+  displayName: displayNameSchema(),
   region: optionalText('region', 80),
   bio: optionalText('bio', 2000),
   units: z.enum(UNIT_SYSTEMS, { error: "units must be 'US' or 'metric'" }),

@@ -70,7 +70,7 @@ describe('every list query uses an index (EXPLAIN on 20,000 posts, real MariaDB)
     ['a member’s questions', () => listQuestions({ page: 1, perPage: 20 }, { kind: 'mine', userId: member })],
     ['questions a member follows', () => listQuestions({ page: 1, perPage: 20 }, { kind: 'followed', userId: member })],
     ['a thread with its answers and replies', () => loadThread(bigThread, null)],
-    ['a post’s revisions', () => listRevisions('question', 1)],
+    ['a post’s revisions', () => listRevisions(null, 1, 'question', 1)],
     ['the review queue', () => reviewQueue({})],
     ['the audit log', () => listAudit({})],
     ['the members list', () => listMembersPage(3)],

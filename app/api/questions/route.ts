@@ -1,11 +1,10 @@
-import { apiError } from '@/lib/http/errors';
 import { NextResponse, type NextRequest } from 'next/server';
 import { paginationSchema } from '@/lib/validation/pagination';
 import { queryObject, serverError, validationError } from '@/lib/http/errors';
 import { listQuestions } from '@/lib/questions/list';
 import { askQuestionSchema } from '@/lib/validation/question';
 import { readJson } from '@/lib/http/body';
-import { countLinks, isNewMember, NEW_MEMBER_MAX_LINKS, guarded } from '@/lib/http/guard';
+import { guarded } from '@/lib/http/guard';
 import { askQuestion } from '@/lib/forum/posts';
 
 export const dynamic = 'force-dynamic';
@@ -26,9 +25,6 @@ export async function POST(request: Request) {
   return guarded(request, 'question.ask', async (user) => {
     const body = await readJson(request, askQuestionSchema);
     if ('response' in body) return body.response;
-    if (isNewMember(user) && countLinks(body.data.body) > NEW_MEMBER_MAX_LINKS) {
-      return apiError(422, `body: new members can include at most ${NEW_MEMBER_MAX_LINKS} links in a post`, 'body');
-    }
     const q = await askQuestion(user, body.data);
     return NextResponse.json({ id: q.id, url: `/questions/${q.id}` }, { status: 201 });
   }, { flood: 'post' });

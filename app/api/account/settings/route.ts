@@ -7,6 +7,7 @@ import { apiError, serverError } from '@/lib/http/errors';
 import { currentUser } from '@/lib/auth/session';
 import { can, REFUSAL } from '@/lib/auth/policy';
 import { accountSettingsSchema } from '@/lib/validation/community';
+import { displayNameSchema } from '@/lib/validation/account';
 import { UNITS_COOKIE } from '@/lib/units/preference';
 
 export const dynamic = 'force-dynamic';
@@ -40,7 +41,8 @@ export async function PUT(request: Request) {
     const user = await currentUser(request);
     if (!user) return apiError(401, 'Sign in to change your settings.', undefined, 'unauthenticated');
     if (!can(user, 'profile.edit', user.id)) return apiError(403, REFUSAL['profile.edit'], undefined, 'forbidden');
-    const body = await readJson(request, accountSettingsSchema);
+    // role words in a display name are the holder's own role's only
+    const body = await readJson(request, accountSettingsSchema.extend({ displayName: displayNameSchema(user.role) }));
     if ('response' in body) return body.response;
     const { displayName, region, bio, units } = body.data;
     const { User } = initModels();

@@ -17,7 +17,8 @@ export async function GET(request: NextRequest, { params }: Ctx) {
   if (!id) return apiError(400, 'id must be a question number', 'id');
   try {
     const viewer = await currentUser(request);
-    return NextResponse.json(await loadThread(id, viewer));
+    // the reader's own marks, and for moderators hidden posts: never for a shared cache
+    return NextResponse.json(await loadThread(id, viewer), { headers: { 'Cache-Control': 'private, no-store' } });
   } catch (err) {
     if (err instanceof ForumError) return apiError(err.status, err.message, err.field);
     return serverError(err);

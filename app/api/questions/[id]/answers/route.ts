@@ -1,7 +1,7 @@
 import { NextResponse } from 'next/server';
 import { apiError } from '@/lib/http/errors';
 import { readJson } from '@/lib/http/body';
-import { countLinks, isNewMember, NEW_MEMBER_MAX_LINKS, guarded, idParam } from '@/lib/http/guard';
+import { guarded, idParam } from '@/lib/http/guard';
 import { postAnswer } from '@/lib/forum/posts';
 import { answerSchema } from '@/lib/validation/question';
 
@@ -14,9 +14,6 @@ export async function POST(request: Request, { params }: { params: Promise<{ id:
     if (!id) return apiError(400, 'id must be a question number', 'id');
     const body = await readJson(request, answerSchema);
     if ('response' in body) return body.response;
-    if (isNewMember(user) && countLinks(body.data.body) > NEW_MEMBER_MAX_LINKS) {
-      return apiError(422, `body: new members can include at most ${NEW_MEMBER_MAX_LINKS} links in a post`, 'body');
-    }
     const a = await postAnswer(user, id, body.data);
     return NextResponse.json({ id: a.id }, { status: 201 });
   }, { flood: 'post' });
