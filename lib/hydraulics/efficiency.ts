@@ -34,7 +34,8 @@ export interface EfficiencyBandRow {
 
 export interface EfficiencyBand {
   label: string;
-  rows: readonly EfficiencyBandRow[];
+  /** sorted by ratio; never empty */
+  rows: readonly [EfficiencyBandRow, ...EfficiencyBandRow[]];
   source: string;
 }
 
@@ -91,19 +92,28 @@ export interface BandAtRatio {
  */
 export function efficiencyBand(pumpType: PumpType, liftRatio: number): BandAtRatio {
   const rows = EFFICIENCY_BANDS[pumpType].rows;
-  if (liftRatio <= rows[0].ratio) return { low: rows[0].low, typical: rows[0].typical, high: rows[0].high };
-  const last = rows[rows.length - 1];
+  const first = rows[0];
+  if (liftRatio <= first.ratio) return { low: first.low, typical: first.typical, high: first.high };
+  const last = lastRow(rows);
   if (liftRatio >= last.ratio) return { low: 0, typical: 0, high: last.high };
-  let i = 0;
-  while (rows[i + 1].ratio < liftRatio) i++;
-  const a = rows[i];
-  const b = rows[i + 1];
-  const w = (liftRatio - a.ratio) / (b.ratio - a.ratio);
-  return {
-    low: a.low + (b.low - a.low) * w,
-    typical: a.typical + (b.typical - a.typical) * w,
-    high: a.high + (b.high - a.high) * w,
-  };
+  // first.ratio < liftRatio < last.ratio: interpolate in the first pair whose upper row reaches it
+  let a = first;
+  for (const b of rows) {
+    if (b.ratio >= liftRatio) {
+      const w = (liftRatio - a.ratio) / (b.ratio - a.ratio);
+      return {
+        low: a.low + (b.low - a.low) * w,
+        typical: a.typical + (b.typical - a.typical) * w,
+        high: a.high + (b.high - a.high) * w,
+      };
+    }
+    a = b;
+  }
+  return { low: 0, typical: 0, high: last.high };
+}
+
+function lastRow(rows: EfficiencyBand['rows']): EfficiencyBandRow {
+  return rows[rows.length - 1] ?? rows[0];
 }
 
 /**
@@ -111,8 +121,7 @@ export function efficiencyBand(pumpType: PumpType, liftRatio: number): BandAtRat
  * Example: homemade → 40, so at a 4 ft fall the ceiling is 160 ft. Reference: EFFICIENCY_BANDS (from memory).
  */
 export function maxLiftRatio(pumpType: PumpType): number {
-  const rows = EFFICIENCY_BANDS[pumpType].rows;
-  return rows[rows.length - 1].ratio;
+  return lastRow(EFFICIENCY_BANDS[pumpType].rows).ratio;
 }
 
 /**

@@ -30,11 +30,12 @@ export class EngineInputError extends Error {
   readonly issues: FieldIssue[];
 
   constructor(issues: FieldIssue[]) {
-    const list = issues.length > 0 ? issues : [{ field: '(input)', message: 'invalid input' }];
+    const first: FieldIssue = issues[0] ?? { field: '(input)', message: 'invalid input' };
+    const list = issues.length > 0 ? issues : [first];
     super(list.map((i) => `${i.field}: ${i.message}`).join('; '));
     this.name = 'EngineInputError';
-    this.field = list[0].field;
-    this.range = list[0].range;
+    this.field = first.field;
+    this.range = first.range;
     this.issues = list;
   }
 }

@@ -143,13 +143,27 @@ export function lineLoss(line: LineSpec, flowM3s: number, nu: number): PipeLoss 
   return pipeLoss(flowM3s, line.lengthM, line.insideDiameterM, line.roughnessM, nu, line.sumK);
 }
 
+/** One pump of a solution, at the head the solution settled on. */
+export interface PumpAtHead {
+  pump: PreparedPump;
+  /** delivery of one copy of the pump, m³/s */
+  deliveredFlowM3s: number;
+  /** efficiency used (0 when the pump does not run) */
+  efficiency: number;
+}
+
+/** One pump's delivery and efficiency against head hp (see {@link pumpDelivery}). */
+export function pumpAtHead(p: PreparedPump, hp: number, fallM: number): PumpAtHead {
+  return { pump: p, deliveredFlowM3s: pumpDelivery(p, hp, fallM), efficiency: pumpRuns(p, fallM) ? pumpEfficiency(p, hp) : 0 };
+}
+
 export interface ParallelSolution {
   combinedFlowM3s: number;
   pumpHeadM: number;
   frictionHeadM: number;
   minorHeadM: number;
-  deliveries: number[];
-  efficiencies: number[];
+  /** the pumps in input order */
+  pumps: PumpAtHead[];
   loss: PipeLoss;
 }
 
@@ -166,7 +180,8 @@ export function solveParallel(
 ): ParallelSolution {
   const total = (hp: number) => {
     let s = 0;
-    for (let i = 0; i < pumps.length; i++) s += (copies?.[i] ?? 1) * pumpDelivery(pumps[i], hp, fallM);
+    let i = 0;
+    for (const p of pumps) s += (copies?.[i++] ?? 1) * pumpDelivery(p, hp, fallM);
     return s;
   };
   const headAt = (S: number) => liftM + pipeHeadLoss(S, line.lengthM, line.insideDiameterM, line.roughnessM, nu, line.sumK);
@@ -199,14 +214,13 @@ export function solveParallel(
   }
   const loss = lineLoss(line, S, nu);
   const hp = liftM + loss.frictionHeadM + loss.minorHeadM;
-  const deliveries = pumps.map((p) => pumpDelivery(p, hp, fallM));
+  const atHead = pumps.map((p) => pumpAtHead(p, hp, fallM));
   return {
-    combinedFlowM3s: deliveries.reduce((x, y, i) => x + (copies?.[i] ?? 1) * y, 0),
+    combinedFlowM3s: atHead.reduce((x, y, i) => x + (copies?.[i] ?? 1) * y.deliveredFlowM3s, 0),
     pumpHeadM: hp,
     frictionHeadM: loss.frictionHeadM,
     minorHeadM: loss.minorHeadM,
-    deliveries,
-    efficiencies: pumps.map((p) => (pumpRuns(p, fallM) ? pumpEfficiency(p, hp) : 0)),
+    pumps: atHead,
     loss,
   };
 }

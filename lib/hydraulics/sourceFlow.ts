@@ -114,7 +114,7 @@ export function measureSourceFlow(input: SourceFlowInput): CalcOutput<SourceFlow
 
   if (v.method === 'bucket') {
     const q = v.trials.map((t) => t.volumeM3 / t.timeS);
-    v.trials.forEach((t, i) => steps.push(step(`Trial ${i + 1}`, 'q_i = \\frac{V_i}{t_i}', `q_{${i + 1}} = \\frac{${tq(t.volumeM3, 'm³')}}{${tq(t.timeS, 's')}}`, q[i], 'm³/s', 'flow')));
+    v.trials.forEach((t, i) => steps.push(step(`Trial ${i + 1}`, 'q_i = \\frac{V_i}{t_i}', `q_{${i + 1}} = \\frac{${tq(t.volumeM3, 'm³')}}{${tq(t.timeS, 's')}}`, t.volumeM3 / t.timeS, 'm³/s', 'flow')));
     const s = stats(q);
     steps.push(step('Mean of the trials', '\\bar q = \\frac{1}{n}\\sum q_i', `\\bar q = \\frac{${q.map((x) => tq(x)).join(' + ')}}{${s.n}}`, s.meanM3s, 'm³/s', 'flow'));
     steps.push(step('Spread (sample standard deviation)', 's = \\sqrt{\\frac{\\sum (q_i - \\bar q)^2}{n - 1}}', `s,\\; n = ${s.n}`, s.sdM3s, 'm³/s', 'flow'));

@@ -182,7 +182,9 @@ function correctionTable(): Record<string, number> {
   };
   const table: Record<string, number> = {};
   for (const [name, def] of Object.entries(EXACT_DEFINITIONS)) {
-    table[name] = Qty(def).baseScalar / Qty(1, unitOf[name]).baseScalar;
+    const unit = unitOf[name];
+    if (unit === undefined) throw new Error(`units.ts: no js-quantities unit listed for ${name}`);
+    table[name] = Qty(def).baseScalar / Qty(1, unit).baseScalar;
   }
   corrections = table;
   return table;
@@ -281,11 +283,11 @@ function splitNumber(text: string): { value: number; unit: string } | undefined 
   if (/^\d{1,3}(,\d{3})+(\.\d+)?/.test(s)) s = s.replace(/(\d),(?=\d{3})/g, '$1');
   else s = s.replace(/^(\d+),(\d+)/, '$1.$2');
   let m = /^(\d+)(?:\s+|-)(\d+)\/(\d+)\s*(.*)$/.exec(s);
-  if (m) return { value: Number(m[1]) + Number(m[2]) / Number(m[3]), unit: m[4] };
+  if (m) return { value: Number(m[1]) + Number(m[2]) / Number(m[3]), unit: m[4] ?? '' };
   m = /^(\d+)\/(\d+)\s*(.*)$/.exec(s);
-  if (m) return { value: Number(m[1]) / Number(m[2]), unit: m[3] };
+  if (m) return { value: Number(m[1]) / Number(m[2]), unit: m[3] ?? '' };
   m = /^([+-]?(?:\d+\.?\d*|\.\d+)(?:e[+-]?\d+)?)\s*(.*)$/i.exec(s);
-  if (m) return { value: Number(m[1]), unit: m[2] };
+  if (m) return { value: Number(m[1]), unit: m[2] ?? '' };
   return undefined;
 }
 

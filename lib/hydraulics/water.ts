@@ -10,11 +10,13 @@
  * Wylie & Streeter, "Fluid Transients" use for water (from memory).
  */
 
+import { bracketRows, type Table } from './tables';
+
 /** Standard acceleration of gravity, m/s² (exact; NIST SP 811, 2008, and NIST SP 330). */
 export const G = 9.80665;
 
 /** [°C, ρ kg/m³, ν m²/s, c m/s] — Munson/Young/Okiishi Table B.2 (from memory). */
-const TABLE: readonly (readonly [number, number, number, number])[] = [
+const TABLE: Table<readonly [number, number, number, number]> = [
   [0, 999.9, 1.787e-6, 1403],
   [5, 1000.0, 1.519e-6, 1427],
   [10, 999.7, 1.306e-6, 1447],
@@ -52,10 +54,7 @@ export function waterProperties(temperatureC = 10): WaterProperties {
   const t = Math.min(40, Math.max(0, Number.isFinite(temperatureC) ? temperatureC : 10));
   const hit = cache.get(t);
   if (hit) return hit;
-  let i = 0;
-  while (i < TABLE.length - 2 && TABLE[i + 1][0] < t) i++;
-  const a = TABLE[i];
-  const b = TABLE[i + 1];
+  const [a, b] = bracketRows(TABLE, t);
   const w = (t - a[0]) / (b[0] - a[0]);
   const lerp = (k: 1 | 2 | 3) => a[k] + (b[k] - a[k]) * w;
   const rho = lerp(1);

@@ -15,10 +15,11 @@
  * 0.2 ft ≤ h₁ ≤ 1.25 ft; full contraction needs h₁/P ≤ 0.4, h₁/B ≤ 0.2,
  * P ≥ 1.5 ft and B ≥ 3 ft (P crest height above the approach bed, B approach width).
  */
+import { bracketRows, type Table } from './tables';
 import { toSI } from './units';
 
 /** [θ degrees, Ce, k_h ft] — readings of USBR WMM figure 7-6 (from memory). */
-const CE_KH: readonly (readonly [number, number, number])[] = [
+const CE_KH: Table<readonly [number, number, number]> = [
   [25, 0.595, 0.0075],
   [30, 0.59, 0.0065],
   [40, 0.583, 0.0052],
@@ -54,10 +55,7 @@ export function fromFeet(ft: number): number {
 /** Ce and k_h (ft) at a notch angle, interpolated linearly in the table. Example: 90° → 0.578, 0.0029 ft. */
 export function weirCoefficients(angleDeg: number): { ce: number; khFt: number } {
   const a = Math.min(100, Math.max(25, angleDeg));
-  let i = 0;
-  while (i < CE_KH.length - 2 && CE_KH[i + 1][0] < a) i++;
-  const p = CE_KH[i];
-  const q = CE_KH[i + 1];
+  const [p, q] = bracketRows(CE_KH, a);
   const w = (a - p[0]) / (q[0] - p[0]);
   return { ce: p[1] + (q[1] - p[1]) * w, khFt: p[2] + (q[2] - p[2]) * w };
 }
