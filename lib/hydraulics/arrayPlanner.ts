@@ -120,13 +120,20 @@ export interface ArrayPlannerResults {
  * Lower pumps needed: the smallest n copies of the first pump whose combined
  * delivery reaches Q_u.
  * Units: SI (m, m³/s). Range: 1–20 pumps; H ≤ 100 m; h ≤ 1000 m.
- * Worked example: a sheep farm's two ½" rams, 2 US gal/min each, 4 ft fall,
- * 29 ft lift, one with an extra threaded 90° elbow (K = 1.5) in its drive
- * pipe: v_c ≈ 1.12 m/s → ΔH = 1.5 × 1.12²/19.61 ≈ 0.097 m of the 1.219 m
- * fall (8 %); its lift ratio against H_eff rises, so its typical efficiency
- * falls too, and it gives ≈ 0.89 of the other's delivery — the pair ≈ 1.89 × one pump.
  * Reference: D'Aubuisson relation; Darcy-Weisbach/Colebrook; fitting K from
- * Munson, Young & Okiishi Table 8.2 (from memory).
+ * Munson, Young & Okiishi, Table 8.2.
+ * @example a sheep farm's two ½" rams, 2 US gal/min each, 4 ft fall, 29 ft lift, into 100 ft of ½" PVC; one has an extra threaded 90° elbow (K = 1.5) in its drive pipe
+ * const D = resolvePipe('pvc-sch40', '1/2').insideDiameterM
+ * const straight = { driveFlowM3s: toSI(2, 'gal/min', 'flow'), drivePipe: { lengthM: 6.096, insideDiameterM: D, material: 'pvc' } }
+ * const elbow = { ...straight, drivePipe: { ...straight.drivePipe, fittings: [{ kind: 'elbow-90-threaded' }] } }
+ * const r = planArray({ fallM: 1.2192, liftM: 8.8392, pumps: [straight, elbow], deliveryLine: { lengthM: 30.48, insideDiameterM: D, material: 'pvc' } }).results
+ * r.pumps[1].closureVelocityMs  // ≈ 1.12
+ * // ΔH = 1.5 × 1.12²/19.61 of the 1.219 m fall (8 %)
+ * r.pumps[1].fittingHeadLossM  // ≈ 0.097
+ * r.pumps[1].fittingHeadLossM / 1.2192  // ≈ 0.08
+ * // its lift ratio against H_eff rises, so its typical efficiency falls too
+ * r.pumps[1].deliveredFlowM3s / r.pumps[0].deliveredFlowM3s  // ≈ 0.89
+ * r.gainOverFirstPump  // ≈ 1.89
  */
 export function planArray(input: ArrayPlannerInput): CalcOutput<ArrayPlannerResults> {
   const v = parseInput(arrayPlannerSchema, input);

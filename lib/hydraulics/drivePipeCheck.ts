@@ -98,12 +98,27 @@ export interface DrivePipeCheckResults {
  * full flow, the worst case — a float valve that shuts the delivery line does
  * this); peak = ρ·g·H + Δp against the rating; round trip 2L/c.
  * Units: SI. Range: H ≤ 100 m, L ≤ 500 m.
- * Worked example: a cabin's seasonal creek, 4 ft (1.2192 m) fall, 20 ft
- * (6.096 m) of 1" sch 40 PVC (D = 26.64 mm, e = 3.378 mm, 450 psi): L/H = 5.0,
- * L/D = 229; v₀ ≈ 1.57 m/s; at 10 °C K = 2.093 GPa, ρ = 999.7 → c ≈ 548 m/s;
- * Δp = 999.7 × 548 × 1.57 ≈ 0.86 MPa (124 psi); peak ≈ 0.87 MPa; margin 3.10 MPa/0.87 MPa ≈ 3.6.
- * Reference: Korteweg (1878) and Joukowsky (1900) as in Wylie & Streeter,
+ * Reference: Korteweg (1878) and Joukowsky (1900) as in Wylie, Streeter & Suo,
  * Fluid Transients in Systems (1993); guidance sources in DRIVE_PIPE_GUIDES.
+ * @example a cabin's seasonal creek, 4 ft (1.2192 m) fall, 20 ft (6.096 m) of 1" sch 40 PVC (D = 26.64 mm, e = 3.378 mm, 450 psi)
+ * const p = resolvePipe('pvc-sch40', '1')
+ * const r = checkDrivePipe({
+ *   fallM: 1.2192,
+ *   drivePipe: { lengthM: 6.096, insideDiameterM: p.insideDiameterM, wallThicknessM: p.wallThicknessM, pressureRatingPa: p.pressureRatingPa, material: 'pvc' },
+ * }).results
+ * r.lengthToFall  // ≈ 5.0
+ * r.lengthToDiameter  // ≈ 229
+ * r.fullFlowVelocityMs  // ≈ 1.57
+ * // at 10 °C K = 2.093 GPa, ρ = 999.7
+ * waterProperties(10).bulkModulusPa  // ≈ 2.093e9
+ * r.waveSpeedMs  // ≈ 548
+ * // Δp = 999.7 × 548 × 1.57
+ * r.surgePa  // ≈ 0.86e6
+ * fromSI(r.surgePa, 'psi', 'pressure')  // ≈ 124 ±1
+ * r.peakPressurePa  // ≈ 0.87e6
+ * // margin 3.10 MPa / 0.87 MPa
+ * r.pressureRatingPa  // ≈ 3.10e6
+ * r.ratingMargin  // ≈ 3.6
  */
 export function checkDrivePipe(input: DrivePipeCheckInput): CalcOutput<DrivePipeCheckResults> {
   const v = parseInput(drivePipeCheckSchema, input);

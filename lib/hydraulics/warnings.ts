@@ -96,11 +96,6 @@ const SAFETY: ReadonlySet<WarningCode> = new Set<WarningCode>([
   'air-chamber-safety',
 ]);
 
-/** True for warnings that must defer to local codes and licensed plumbers or engineers. */
-export function isSafetyWarning(code: WarningCode): boolean {
-  return SAFETY.has(code);
-}
-
 /** Builds a warning; safety warnings get the deferral sentence appended. Example: warn('frost-risk', 'Drain it.') → { code, severity: 'caution', guide: 'care-frost-floods-and-water-rights', message: 'Drain it. Follow local codes …' }. */
 export function warn(code: WarningCode, message: string): Warning {
   const info = WARNING_INFO[code];

@@ -46,9 +46,12 @@ const cache = new Map<number, WaterProperties>();
  *
  * Formula: p(T) = p₁ + (p₂ − p₁)(T − T₁)/(T₂ − T₁) between table rows; K = ρ·c²; γ = ρ·g.
  * Parameters: temperatureC in °C, 0 ≤ T ≤ 40 (clamped to that range).
- * Worked example: T = 15 °C lies halfway between 10 and 20 °C, so
- * ρ = (999.7 + 998.2)/2 = 998.95 kg/m³ and ν = (1.306 + 1.004)/2 × 10⁻⁶ = 1.155 × 10⁻⁶ m²/s.
  * Reference: Munson, Young & Okiishi, Fundamentals of Fluid Mechanics, Table B.2 (from memory).
+ * @example 15 °C lies halfway between the 10 and 20 °C rows
+ * waterProperties(15).densityKgM3  // ≈ 998.95
+ * waterProperties(15).kinematicViscosityM2s  // ≈ 1.155e-6
+ * // at 20 °C, K = ρc² = 998.2 × 1481² — the 2.19 GPa of Wylie & Streeter
+ * waterProperties(20).bulkModulusPa  // ≈ 2.19e9
  */
 export function waterProperties(temperatureC = 10): WaterProperties {
   const t = Math.min(40, Math.max(0, Number.isFinite(temperatureC) ? temperatureC : 10));
