@@ -36,28 +36,6 @@ export const FITTING_K = {
 export type FittingKind = keyof typeof FITTING_K;
 export const FITTING_KINDS = Object.keys(FITTING_K) as [FittingKind, ...FittingKind[]];
 
-/** Plain-words labels for pickers. */
-export const FITTING_LABELS: Record<FittingKind, string> = {
-  'entrance-reentrant': 'pipe end sticking into the pool (re-entrant inlet)',
-  'entrance-sharp': 'square-edged inlet, flush with the wall',
-  'entrance-rounded': 'slightly rounded inlet',
-  'entrance-well-rounded': 'bell-mouth inlet',
-  exit: 'free outlet (velocity head lost)',
-  'elbow-90-threaded': '90° elbow, threaded or glued',
-  'elbow-90-long-radius-threaded': '90° long-radius (sweep) elbow',
-  'elbow-90-flanged': '90° flanged elbow',
-  'elbow-45-threaded': '45° elbow',
-  'return-bend-threaded': '180° return bend',
-  'tee-line-threaded': 'tee, flow straight through',
-  'tee-branch-threaded': 'tee, flow through the branch',
-  'union-threaded': 'union',
-  'gate-valve-open': 'gate valve, fully open',
-  'ball-valve-open': 'ball valve, fully open',
-  'globe-valve-open': 'globe valve, fully open',
-  'angle-valve-open': 'angle valve, fully open',
-  'swing-check-valve': 'swing check valve',
-};
-
 /** A fitting in a pipe: a kind from the table, or a custom K. */
 export const fittingSchema = z.object({
   kind: z.optional(z.enum(FITTING_KINDS)),

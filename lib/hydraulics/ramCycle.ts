@@ -122,7 +122,7 @@ export function fullFlowVelocity(input: RamCycleInput): { v0: number; f: number;
  * c.deliveryTimeS  // ≈ 0.08
  * c.beatsPerMinute  // ≈ 76
  * c.driveFlowM3s  // ≈ 1.1e-4
- * c.driveFlowM3s / (boreArea(0.0158) * c.fullFlowVelocityMs)  // ≈ 0.46
+ * c.driveFlowM3s / (((Math.PI * 0.0158 ** 2) / 4) * c.fullFlowVelocityMs)  // ≈ 0.46
  * fromSI(c.driveFlowM3s, 'gal/min', 'flow')  // ≈ 1.8
  */
 export function estimateDriveFlow(input: RamCycleInput): RamCycle {
