@@ -7,6 +7,7 @@ import * as z from 'zod/mini';
 import { sumK, type Fitting } from './fittings';
 import { MATERIAL_PROPS } from './pipes';
 import { drivePipeSchema, roughnessOf } from './pipeSchemas';
+import { EngineInputError } from './errors';
 import { DEFAULT_ENTRANCE_K, DEFAULT_PUMP_LOSS_K, fullFlowVelocity } from './ramCycle';
 import { addRangeIssue, fallM, flowM3s, liftM, parseInput, siNumber, waterTempC } from './schemaKit';
 import { finish, step, tq, type CalcOutput, type Step, type Warning } from './steps';
@@ -20,6 +21,8 @@ import { G, waterProperties } from './water';
  * L/H 3–12: the range given across US extension publications on ram pumps (from memory).
  * L/H 5–12: the narrower range in several ram handbooks (from memory).
  * L/D 150–1000: Calvert's drive-pipe tests as cited in ram handbooks (from memory).
+ * None of the three was found in the published references searched, so each stays
+ * "from memory" until a reader can cite it.
  */
 export const DRIVE_PIPE_GUIDES = [
   { id: 'length-to-fall-extension', ratio: 'L/H', min: 3, max: 12, source: 'US extension publications on ram pumps (from memory)' },
@@ -128,8 +131,12 @@ export function checkDrivePipe(input: DrivePipeCheckInput): CalcOutput<DrivePipe
   const H = v.fallM;
   const L = dp.lengthM;
   const D = dp.insideDiameterM;
-  const e = dp.wallThicknessM!;
-  const rating = dp.pressureRatingPa!;
+  const e = dp.wallThicknessM;
+  const rating = dp.pressureRatingPa;
+  // the schema's refinement already refuses both; this keeps the types honest
+  if (e === undefined || rating === undefined) {
+    throw new EngineInputError([{ field: e === undefined ? 'drivePipe.wallThicknessM' : 'drivePipe.pressureRatingPa', message: 'is needed' }]);
+  }
   const mat = MATERIAL_PROPS[dp.material];
   const steps: Step[] = [];
   const warnings: Warning[] = [];

@@ -207,7 +207,8 @@ export function runStallCheck(input: StallCheckInput): CalcOutput<StallCheckResu
 
   const bpmModel = actual.beatsPerMinute;
   steps.push(step('Beat rate the model expects', 'n = \\frac{60}{t_a + t_d}', `n = \\frac{60}{${tq(actual.cycleTimeS, 's')}}`, bpmModel, ''));
-  const sizeRange = s.pumpSize ? typicalDriveFlow(s.pumpSize) : undefined;
+  const size = s.pumpSize;
+  const sizeRange = size ? typicalDriveFlow(size) : undefined;
   if (s.beatsPerMinute !== undefined) {
     const out = s.beatsPerMinute < BPM_RANGE[0] || s.beatsPerMinute > BPM_RANGE[1];
     const fast = s.beatsPerMinute > BPM_RANGE[1];
@@ -216,10 +217,10 @@ export function runStallCheck(input: StallCheckInput): CalcOutput<StallCheckResu
       strength: 0.7,
       reason: `It beats ${s.beatsPerMinute.toFixed(0)} times a minute (usual ${BPM_RANGE[0]}–${BPM_RANGE[1]}; the model expects about ${bpmModel.toFixed(0)} for this fall and drive pipe)${out ? (fast ? ': a short stroke or light valve shuts before the water gains speed' : ': a long stroke or heavy valve wastes water between beats') : ''}.`,
     };
-  } else if (sizeRange && s.driveFlowM3s !== undefined && (s.driveFlowM3s > sizeRange.highM3s || s.driveFlowM3s < sizeRange.lowM3s)) {
+  } else if (size && sizeRange && s.driveFlowM3s !== undefined && (s.driveFlowM3s > sizeRange.highM3s || s.driveFlowM3s < sizeRange.lowM3s)) {
     ev['waste-valve-setting'] = {
       state: 'problem', strength: 0.5,
-      reason: `The measured drive flow, ${lpm(s.driveFlowM3s)}, is outside the ${lpm(sizeRange.lowM3s)}–${lpm(sizeRange.highM3s)} typical of a ${NOMINAL_LABELS[s.pumpSize!]} pump (from memory); the waste valve's stroke or weight sets it.`,
+      reason: `The measured drive flow, ${lpm(s.driveFlowM3s)}, is outside the ${lpm(sizeRange.lowM3s)}–${lpm(sizeRange.highM3s)} typical of a ${NOMINAL_LABELS[size]} pump (from memory); the waste valve's stroke or weight sets it.`,
     };
   } else {
     ev['waste-valve-setting'] = { state: 'unknown', reason: `Count the beats per minute: the model expects about ${bpmModel.toFixed(0)} for this fall and drive pipe; far off that, reset the stroke and weight.` };

@@ -4,8 +4,13 @@
  * Table values (density, kinematic viscosity, speed of sound) follow
  * Munson, Young & Okiishi, "Fundamentals of Fluid Mechanics", Table B.2
  * "Physical properties of water (SI units)"; the values are recalled
- * (from memory), not copied from a scan, and agree with other standard
- * tables to the digits shown. The bulk modulus is derived from the table's
+ * (from memory), not copied from a scan. As a check found in print: the
+ * density and kinematic viscosity rows agree with Venard, J.K. & Street, R.L.
+ * (1975), Elementary Fluid Mechanics, 5th ed., Wiley, as tabulated in
+ * Crittenden et al. (2012), MWH's Water Treatment: Principles and Design,
+ * 3rd ed., Table C-1 (e.g. 10 °C: 999.7 kg/m³, 1.306e-6 m²/s; 20 °C: 998.2,
+ * 1.003e-6 against our 1.004e-6); other tables give 1.307–1.308e-6 at 10 °C,
+ * so the last digit is uncertain. The bulk modulus is derived from the table's
  * speed of sound, K = ρ·c², which gives 2.19 GPa at 20 °C — the value
  * Wylie & Streeter, "Fluid Transients" use for water (from memory).
  */
