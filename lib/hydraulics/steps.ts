@@ -100,7 +100,11 @@ export function tq(x: number, unit = '', sig = 4): string {
   return `${texNum(x, sig)}${texUnit(unit)}`;
 }
 
-/** Builds a step. Example: step('Lift ratio', 'r = h/H', 'r = 8.839/1.219', 7.25, '') → { title, formula, substituted, result: { value: 7.25, unit: '' } }. */
+/**
+ * Builds a step.
+ * @example
+ * step('Lift ratio', 'r = h/H', 'r = 8.839/1.219', 7.25, '')  // → { title: 'Lift ratio', formula: 'r = h/H', substituted: 'r = 8.839/1.219', result: { value: 7.25, unit: '' } }
+ */
 export function step(
   title: string,
   formula: string,
@@ -134,6 +138,9 @@ function assertFinite(v: unknown, path: string): void {
  * Wraps results into the common output and checks that no NaN or Infinity
  * escapes (a non-finite number here is an engine bug, never the user's input,
  * because inputs are validated first).
+ * @example
+ * finish({ q: 1 }, [], []).engineVersion  // → ENGINE_VERSION
+ * finish({ q: 0 / 0 }, [], [])  // throws Error
  */
 export function finish<R>(results: R, steps: Step[], warnings: Warning[]): CalcOutput<R> {
   assertFinite(results, 'results');

@@ -42,7 +42,7 @@ describe('engine doc-comment examples', () => {
  */
 const NO_NUMBER: Record<string, string> = {
   siNumber: 'builds a zod schema',
-  addRangeIssue: 'adds a zod issue',
+  addRangeIssue: 'adds a zod issue inside a refinement',
   parseInput: 'parses against a schema (errors.test.ts)',
   step: 'wraps a step object',
   finish: 'wraps the calculator output',
