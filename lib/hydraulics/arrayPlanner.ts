@@ -122,11 +122,13 @@ export interface ArrayPlannerResults {
  * Units: SI (m, m³/s). Range: 1–20 pumps; H ≤ 100 m; h ≤ 1000 m.
  * Reference: D'Aubuisson relation; Darcy-Weisbach/Colebrook; fitting K from
  * Munson, Young & Okiishi, Table 8.2.
- * @example a sheep farm's two ½" rams, 2 US gal/min each, 4 ft fall, 29 ft lift, into 100 ft of ½" PVC; one has an extra threaded 90° elbow (K = 1.5) in its drive pipe
+ * @example a sheep farm's two ½" rams, 2 US gal/min each, 4 ft fall, 29 ft lift, into 100 ft of ½" PVC
+ * // one has an extra threaded 90° elbow (K = 1.5) in its drive pipe
  * const D = resolvePipe('pvc-sch40', '1/2').insideDiameterM
  * const straight = { driveFlowM3s: toSI(2, 'gal/min', 'flow'), drivePipe: { lengthM: 6.096, insideDiameterM: D, material: 'pvc' } }
  * const elbow = { ...straight, drivePipe: { ...straight.drivePipe, fittings: [{ kind: 'elbow-90-threaded' }] } }
- * const r = planArray({ fallM: 1.2192, liftM: 8.8392, pumps: [straight, elbow], deliveryLine: { lengthM: 30.48, insideDiameterM: D, material: 'pvc' } }).results
+ * const deliveryLine = { lengthM: 30.48, insideDiameterM: D, material: 'pvc' }
+ * const r = planArray({ fallM: 1.2192, liftM: 8.8392, pumps: [straight, elbow], deliveryLine }).results
  * r.pumps[1].closureVelocityMs  // ≈ 1.12
  * // ΔH = 1.5 × 1.12²/19.61 of the 1.219 m fall (8 %)
  * r.pumps[1].fittingHeadLossM  // ≈ 0.097

@@ -62,7 +62,8 @@ export interface DemandAndStorageResults {
  * ≤ 30 livestock lines, reserve 0–60 days).
  * Reference: rates in demandRates.ts (USGS; extension livestock tables; from memory).
  * @example a neighbouring sheep farm waters 40 ewes from a ram giving 1 L/min
- * const r = planDemandAndStorage({ deliveredFlowM3s: toSI(1, 'L/min', 'flow'), livestock: [{ kind: 'sheep', count: 40 }] }).results
+ * const input = { deliveredFlowM3s: toSI(1, 'L/min', 'flow'), livestock: [{ kind: 'sheep', count: 40 }] }
+ * const r = planDemandAndStorage(input).results
  * // 40 × 2 US gal
  * r.livestockM3PerDay  // ≈ 0.3028
  * r.deliveryM3PerDay  // ≈ 1.44

@@ -103,12 +103,14 @@ export interface DrivePipeCheckResults {
  * Units: SI. Range: H ≤ 100 m, L ≤ 500 m.
  * Reference: Korteweg (1878) and Joukowsky (1900) as in Wylie, Streeter & Suo,
  * Fluid Transients in Systems (1993); guidance sources in DRIVE_PIPE_GUIDES.
- * @example a cabin's seasonal creek, 4 ft (1.2192 m) fall, 20 ft (6.096 m) of 1" sch 40 PVC (D = 26.64 mm, e = 3.378 mm, 450 psi)
+ * @example a cabin's seasonal creek, 4 ft (1.2192 m) fall, 20 ft (6.096 m) of 1" sch 40 PVC
+ * // D = 26.64 mm, e = 3.378 mm, rated 450 psi
  * const p = resolvePipe('pvc-sch40', '1')
- * const r = checkDrivePipe({
- *   fallM: 1.2192,
- *   drivePipe: { lengthM: 6.096, insideDiameterM: p.insideDiameterM, wallThicknessM: p.wallThicknessM, pressureRatingPa: p.pressureRatingPa, material: 'pvc' },
- * }).results
+ * const drivePipe = {
+ *   lengthM: 6.096, insideDiameterM: p.insideDiameterM, wallThicknessM: p.wallThicknessM,
+ *   pressureRatingPa: p.pressureRatingPa, material: 'pvc',
+ * }
+ * const r = checkDrivePipe({ fallM: 1.2192, drivePipe }).results
  * r.lengthToFall  // ≈ 5.0
  * r.lengthToDiameter  // ≈ 229
  * r.fullFlowVelocityMs  // ≈ 1.57
@@ -135,7 +137,8 @@ export function checkDrivePipe(input: DrivePipeCheckInput): CalcOutput<DrivePipe
   const rating = dp.pressureRatingPa;
   // the schema's refinement already refuses both; this keeps the types honest
   if (e === undefined || rating === undefined) {
-    throw new EngineInputError([{ field: e === undefined ? 'drivePipe.wallThicknessM' : 'drivePipe.pressureRatingPa', message: 'is needed' }]);
+    const field = e === undefined ? 'drivePipe.wallThicknessM' : 'drivePipe.pressureRatingPa';
+    throw new EngineInputError([{ field, message: 'is needed' }]);
   }
   const mat = MATERIAL_PROPS[dp.material];
   const steps: Step[] = [];

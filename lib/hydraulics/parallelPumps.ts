@@ -53,8 +53,13 @@ export interface PreparedPump {
  * Units: fallM, liftM m; nu m²/s; closureRatio α dimensionless (0.3–0.98).
  * Reference: see the module comment; K from Munson, Young & Okiishi, Table 8.2.
  * @example ½" sch 40 PVC, 20 ft, Q = 2 US gal/min (1.2618e-4 m³/s), one threaded elbow (K = 1.5), 4 ft fall, 29 ft lift
- * const drivePipe = { lengthM: 6.096, insideDiameterM: resolvePipe('pvc-sch40', '1/2').insideDiameterM, material: 'pvc', fittings: [{ kind: 'elbow-90-threaded', count: 1 }] }
- * const p = preparePump({ pumpType: 'homemade', driveFlowM3s: toSI(2, 'gal/min', 'flow'), drivePipe }, 0, 1.2192, 8.8392, 1.306e-6, 0.8)
+ * const drivePipe = {
+ *   lengthM: 6.096, insideDiameterM: resolvePipe('pvc-sch40', '1/2').insideDiameterM, material: 'pvc',
+ *   fittings: [{ kind: 'elbow-90-threaded', count: 1 }],
+ * }
+ * const input = { pumpType: 'homemade', driveFlowM3s: toSI(2, 'gal/min', 'flow'), drivePipe }
+ * // pump 0 at a 4 ft fall and 29 ft lift, ν = 1.306e-6 m²/s, α = 0.8
+ * const p = preparePump(input, 0, 1.2192, 8.8392, 1.306e-6, 0.8)
  * // model Q = 1.128e-4, v_c = 1.005 × 1.2618/1.128
  * p.closureVelocityMs  // ≈ 1.124
  * // ΔH = 1.5 × 1.124²/19.613
@@ -91,7 +96,10 @@ const MIN_EFFECTIVE_FALL_SHARE = 0.05;
  * Whether a pump still beats: H_eff > 0.05·H (fittings that eat 95 % of the fall stop it).
  * Units: m. Reference: engineering judgement, no source.
  * @example H = 1.2192 m: H_eff = 1.1226 m runs, H_eff = 0.05 m does not
- * const pump = { label: 'a', pumpType: 'homemade', driveFlowM3s: 1.2618e-4, driveFlowEstimated: false, closureVelocityMs: 1.124, fittingsK: 1.5, fittingHeadLossM: 0.0966, effectiveFallM: 1.1226 }
+ * const pump = {
+ *   label: 'a', pumpType: 'homemade', driveFlowM3s: 1.2618e-4, driveFlowEstimated: false,
+ *   closureVelocityMs: 1.124, fittingsK: 1.5, fittingHeadLossM: 0.0966, effectiveFallM: 1.1226,
+ * }
  * pumpRuns(pump, 1.2192)  // → true
  * pumpRuns({ ...pump, effectiveFallM: 0.05 }, 1.2192)  // → false
  */
@@ -104,7 +112,10 @@ export function pumpRuns(p: PreparedPump, fallM: number): boolean {
  * band value at hp/H_eff (efficiency.ts). Units: hp m; result dimensionless.
  * Reference: EFFICIENCY_BANDS (from memory).
  * @example homemade, hp = 8.884 m, H_eff = 1.2192 m → r = 7.29
- * const pump = { label: 'a', pumpType: 'homemade', driveFlowM3s: 1.2618e-4, driveFlowEstimated: false, closureVelocityMs: 1.124, fittingsK: 0, fittingHeadLossM: 0, effectiveFallM: 1.2192 }
+ * const pump = {
+ *   label: 'a', pumpType: 'homemade', driveFlowM3s: 1.2618e-4, driveFlowEstimated: false,
+ *   closureVelocityMs: 1.124, fittingsK: 0, fittingHeadLossM: 0, effectiveFallM: 1.2192,
+ * }
  * pumpEfficiency(pump, 8.884)  // ≈ 0.513
  * pumpEfficiency({ ...pump, givenEfficiency: 0.6 }, 8.884)  // ≈ 0.6
  */
@@ -118,7 +129,10 @@ export function pumpEfficiency(p: PreparedPump, hp: number): number {
  * Units: hp, fallM m; result m³/s.
  * Reference: D'Aubuisson relation.
  * @example η = 0.513 (typical at r = 7.29), Q = 1.2618e-4 m³/s, H_eff = 1.2192 m, hp = 8.884 m
- * const pump = { label: 'a', pumpType: 'homemade', driveFlowM3s: 1.2618e-4, driveFlowEstimated: false, closureVelocityMs: 1.124, fittingsK: 0, fittingHeadLossM: 0, effectiveFallM: 1.2192 }
+ * const pump = {
+ *   label: 'a', pumpType: 'homemade', driveFlowM3s: 1.2618e-4, driveFlowEstimated: false,
+ *   closureVelocityMs: 1.124, fittingsK: 0, fittingHeadLossM: 0, effectiveFallM: 1.2192,
+ * }
  * pumpDelivery(pump, 8.884, 1.2192)  // ≈ 8.89e-6
  * fromSI(pumpDelivery(pump, 8.884, 1.2192), 'mL/min', 'flow')  // ≈ 533
  */
@@ -139,7 +153,8 @@ export interface LineSpec {
  * table) and ΣK. Units: m.
  * Reference: MATERIAL_PROPS (Munson Table 8.1, from memory).
  * @example 100 ft of ½" sch 40 PVC
- * lineSpec({ lengthM: 30.48, insideDiameterM: 0.0158, material: 'pvc', fittings: [] })  // → { lengthM: 30.48, insideDiameterM: 0.0158, roughnessM: 1.5e-6, sumK: 0 }
+ * const spec = lineSpec({ lengthM: 30.48, insideDiameterM: 0.0158, material: 'pvc', fittings: [] })
+ * spec  // → { lengthM: 30.48, insideDiameterM: 0.0158, roughnessM: 1.5e-6, sumK: 0 }
  */
 export function lineSpec(line: PipeRun): LineSpec {
   return {
@@ -155,7 +170,8 @@ export function lineSpec(line: PipeRun): LineSpec {
  * Units: flow m³/s, ν m²/s; heads m.
  * Reference: White, Fluid Mechanics, ch. 6.
  * @example 1.78e-5 m³/s (1.07 L/min) in 30.48 m of ½" PVC at 10 °C
- * const loss = lineLoss({ lengthM: 30.48, insideDiameterM: resolvePipe('pvc-sch40', '1/2').insideDiameterM, roughnessM: 1.5e-6, sumK: 0 }, 1.78e-5, 1.306e-6)
+ * const line = { lengthM: 30.48, insideDiameterM: resolvePipe('pvc-sch40', '1/2').insideDiameterM, roughnessM: 1.5e-6, sumK: 0 }
+ * const loss = lineLoss(line, 1.78e-5, 1.306e-6)
  * loss.velocityMs  // ≈ 0.0908
  * loss.reynolds  // ≈ 1098
  * loss.friction.f  // ≈ 0.0583
@@ -178,13 +194,17 @@ export interface PumpAtHead {
  * One pump's delivery and efficiency against head hp (see {@link pumpDelivery}, {@link pumpEfficiency});
  * the efficiency is 0 for a pump that does not run.
  * @example as pumpDelivery
- * const pump = { label: 'a', pumpType: 'homemade', driveFlowM3s: 1.2618e-4, driveFlowEstimated: false, closureVelocityMs: 1.124, fittingsK: 0, fittingHeadLossM: 0, effectiveFallM: 1.2192 }
+ * const pump = {
+ *   label: 'a', pumpType: 'homemade', driveFlowM3s: 1.2618e-4, driveFlowEstimated: false,
+ *   closureVelocityMs: 1.124, fittingsK: 0, fittingHeadLossM: 0, effectiveFallM: 1.2192,
+ * }
  * pumpAtHead(pump, 8.884, 1.2192).deliveredFlowM3s  // ≈ 8.89e-6
  * pumpAtHead(pump, 8.884, 1.2192).efficiency  // ≈ 0.513
  * pumpAtHead({ ...pump, effectiveFallM: 0.05 }, 8.884, 1.2192).efficiency  // → 0
  */
 export function pumpAtHead(p: PreparedPump, hp: number, fallM: number): PumpAtHead {
-  return { pump: p, deliveredFlowM3s: pumpDelivery(p, hp, fallM), efficiency: pumpRuns(p, fallM) ? pumpEfficiency(p, hp) : 0 };
+  const efficiency = pumpRuns(p, fallM) ? pumpEfficiency(p, hp) : 0;
+  return { pump: p, deliveredFlowM3s: pumpDelivery(p, hp, fallM), efficiency };
 }
 
 export interface ParallelSolution {
@@ -215,7 +235,8 @@ export interface ParallelSolution {
  * regula falsi method for computing the root of an equation", BIT 11, 168–174.
  * @example two ½" rams (2 US gal/min each, H = 1.2192 m) into 100 ft of ½" PVC, h = 8.8392 m
  * const drivePipe = { lengthM: 6.096, insideDiameterM: 0.0158, material: 'pvc', fittings: [] }
- * const pump = preparePump({ pumpType: 'homemade', driveFlowM3s: toSI(2, 'gal/min', 'flow'), drivePipe }, 0, 1.2192, 8.8392, 1.306e-6, 0.8)
+ * const input = { pumpType: 'homemade', driveFlowM3s: toSI(2, 'gal/min', 'flow'), drivePipe }
+ * const pump = preparePump(input, 0, 1.2192, 8.8392, 1.306e-6, 0.8)
  * const line = { lengthM: 30.48, insideDiameterM: 0.0158, roughnessM: 1.5e-6, sumK: 0 }
  * const s = solveParallel([pump, pump], 1.2192, 8.8392, line, 1.306e-6)
  * // friction at the combined ≈ 1.1 L/min is a few cm (see lineLoss) …
@@ -281,7 +302,10 @@ export function solveParallel(
  * running pumps. Parallel pumps add flow, not height, so this never grows with
  * the number of pumps. Reference: EFFICIENCY_BANDS (from memory).
  * @example homemade pumps (r_max = 40) with H_eff = 1.2192 m and 1.1226 m: 40 × 1.2192
- * const pump = { label: 'a', pumpType: 'homemade', driveFlowM3s: 1.2618e-4, driveFlowEstimated: false, closureVelocityMs: 1.124, fittingsK: 0, fittingHeadLossM: 0, effectiveFallM: 1.2192 }
+ * const pump = {
+ *   label: 'a', pumpType: 'homemade', driveFlowM3s: 1.2618e-4, driveFlowEstimated: false,
+ *   closureVelocityMs: 1.124, fittingsK: 0, fittingHeadLossM: 0, effectiveFallM: 1.2192,
+ * }
  * arrayMaxLift([pump, { ...pump, effectiveFallM: 1.1226 }], 1.2192)  // ≈ 48.768
  * arrayMaxLift([pump, pump, pump], 1.2192)  // ≈ 48.768
  */

@@ -81,7 +81,9 @@ function issueRange(issue: z.core.$ZodIssue): FieldRange | undefined {
  * @example a fall of 0 is refused, naming the field and its range (0, 100] m
  * const input = { driveFlowM3s: 1e-4, fallM: 0, liftM: 8 }
  * parseInput(yieldEstimateSchema, input)  // throws EngineInputError
- * (() => { try { parseInput(yieldEstimateSchema, input) } catch (e) { return [e.field, e.range] } })()  // → ['fallM', { min: 0, minExclusive: true, max: 100, maxExclusive: undefined, unit: 'm' }]
+ * const refused = (() => { try { parseInput(yieldEstimateSchema, input) } catch (e) { return e } })()
+ * refused.field  // → 'fallM'
+ * [refused.range.min, refused.range.minExclusive, refused.range.max, refused.range.unit]  // → [0, true, 100, 'm']
  */
 export function parseInput<S extends z.ZodMiniType>(schema: S, input: unknown): z.output<S> {
   const r = schema.safeParse(input);

@@ -104,7 +104,8 @@ function stats(values: readonly number[]): SampleStats {
  * head ≤ 1 m at 25°–100°; float 1–50 runs, coefficient 0.5–1).
  * Reference: as above.
  * @example a hill brook caught in a 5-US-gallon bucket (0.018927 m³) in 12.0, 12.6 and 11.4 s
- * const r = measureSourceFlow({ method: 'bucket', trials: [12, 12.6, 11.4].map((timeS) => ({ volumeM3: 0.018927, timeS })) })
+ * const trials = [12, 12.6, 11.4].map((timeS) => ({ volumeM3: 0.018927, timeS }))
+ * const r = measureSourceFlow({ method: 'bucket', trials })
  * // qᵢ = Vᵢ/tᵢ in L/s
  * r.steps[0].result.value * 1000  // ≈ 1.5773 ±0.0001
  * r.steps[1].result.value * 1000  // ≈ 1.5021

@@ -126,7 +126,8 @@ const lpm = (q: number) => `${(q * 6e4).toFixed(2)} L/min`;
  * Reference: as listed above; causes, symptom weights and guides in stallCauses.ts.
  * @example a cabin's ram on a seasonal creek, 4 ft fall, 29 ft lift, 20 ft of ½" HDPE DR 11 drive pipe, "weak delivery"
  * const p = resolvePipe('hdpe-dr11', '1/2')
- * const site = { fallM: 1.2192, liftM: 8.8392, drivePipe: { lengthM: 6.096, insideDiameterM: p.insideDiameterM, wallThicknessM: p.wallThicknessM, material: 'hdpe' } }
+ * const drivePipe = { lengthM: 6.096, insideDiameterM: p.insideDiameterM, wallThicknessM: p.wallThicknessM, material: 'hdpe' }
+ * const site = { fallM: 1.2192, liftM: 8.8392, drivePipe }
  * const r = runStallCheck({ site, symptoms: ['weak-delivery'] }).results
  * // the flexible pipe ranks first: a problem (strength 1) with weight 0.6 for weak delivery, 0.4 × 1 + 0.6 × 0.6
  * r.causes[0].code  // → 'flexible-drive-pipe'

@@ -103,7 +103,9 @@ export function tq(x: number, unit = '', sig = 4): string {
 /**
  * Builds a step.
  * @example
- * step('Lift ratio', 'r = h/H', 'r = 8.839/1.219', 7.25, '')  // → { title: 'Lift ratio', formula: 'r = h/H', substituted: 'r = 8.839/1.219', result: { value: 7.25, unit: '' } }
+ * const s = step('Lift ratio', 'r = h/H', 'r = 8.839/1.219', 7.25, '')
+ * [s.title, s.formula, s.substituted]  // → ['Lift ratio', 'r = h/H', 'r = 8.839/1.219']
+ * s.result  // → { value: 7.25, unit: '' }
  */
 export function step(
   title: string,
