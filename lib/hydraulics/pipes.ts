@@ -9,7 +9,8 @@
  * PVC, schedule 40 and 80: ASTM D1785, "PVC Plastic Pipe, Schedules 40, 80
  * and 120", which uses the same outside diameters and (minimum) walls as
  * steel pipe of the same schedule for these sizes. Pressure ratings for
- * PVC 1120 at 73 °F (23 °C) from the D1785 appendix table (from memory).
+ * PVC 1120 at 73 °F (23 °C) from the D1785 appendix table (Appendix X1 of
+ * ASTM D1785-15; the values from memory).
  * HDPE, IPS DR series: outside diameter per ASTM D3035 (IPS sizes, same
  * ODs as steel pipe); minimum wall = OD/DR; inside diameter computed as
  * average OD − 2 × minimum wall. Pressure class for PE4710 at 73 °F from
