@@ -4,10 +4,11 @@
  */
 import * as z from 'zod/mini';
 import { PUMP_TYPES } from './efficiency';
+import { EngineInputError } from './errors';
 import { drivePipeSchema, pipeRunSchema } from './pipeSchemas';
 import {
-  arrayMaxLift, lineSpec, preparePump, pumpRuns, solveParallel,
-  type ParallelSolution, type PreparedPump, type PumpInput,
+  arrayMaxLift, lineSpec, preparePump, pumpAtHead, pumpRuns, solveParallel,
+  type ParallelSolution, type PumpAtHead, type PumpInput,
 } from './parallelPumps';
 import { DEFAULT_CLOSURE_RATIO } from './ramCycle';
 import { addRangeIssue, efficiency, fallM, flowM3s, liftM, parseInput, siNumber, waterTempC } from './schemaKit';
@@ -119,13 +120,22 @@ export interface ArrayPlannerResults {
  * Lower pumps needed: the smallest n copies of the first pump whose combined
  * delivery reaches Q_u.
  * Units: SI (m, m³/s). Range: 1–20 pumps; H ≤ 100 m; h ≤ 1000 m.
- * Worked example: a sheep farm's two ½" rams, 2 US gal/min each, 4 ft fall,
- * 29 ft lift, one with an extra threaded 90° elbow (K = 1.5) in its drive
- * pipe: v_c ≈ 1.12 m/s → ΔH = 1.5 × 1.12²/19.61 ≈ 0.097 m of the 1.219 m
- * fall (8 %); its lift ratio against H_eff rises, so its typical efficiency
- * falls too, and it gives ≈ 0.89 of the other's delivery — the pair ≈ 1.89 × one pump.
  * Reference: D'Aubuisson relation; Darcy-Weisbach/Colebrook; fitting K from
- * Munson, Young & Okiishi Table 8.2 (from memory).
+ * Munson, Young & Okiishi, Table 8.2.
+ * @example a sheep farm's two ½" rams, 2 US gal/min each, 4 ft fall, 29 ft lift, into 100 ft of ½" PVC
+ * // one has an extra threaded 90° elbow (K = 1.5) in its drive pipe
+ * const D = resolvePipe('pvc-sch40', '1/2').insideDiameterM
+ * const straight = { driveFlowM3s: toSI(2, 'gal/min', 'flow'), drivePipe: { lengthM: 6.096, insideDiameterM: D, material: 'pvc' } }
+ * const elbow = { ...straight, drivePipe: { ...straight.drivePipe, fittings: [{ kind: 'elbow-90-threaded' }] } }
+ * const deliveryLine = { lengthM: 30.48, insideDiameterM: D, material: 'pvc' }
+ * const r = planArray({ fallM: 1.2192, liftM: 8.8392, pumps: [straight, elbow], deliveryLine }).results
+ * r.pumps[1].closureVelocityMs  // ≈ 1.12
+ * // ΔH = 1.5 × 1.12²/19.61 of the 1.219 m fall (8 %)
+ * r.pumps[1].fittingHeadLossM  // ≈ 0.097
+ * r.pumps[1].fittingHeadLossM / 1.2192  // ≈ 0.08
+ * // its lift ratio against H_eff rises, so its typical efficiency falls too
+ * r.pumps[1].deliveredFlowM3s / r.pumps[0].deliveredFlowM3s  // ≈ 0.89
+ * r.gainOverFirstPump  // ≈ 1.89
  */
 export function planArray(input: ArrayPlannerInput): CalcOutput<ArrayPlannerResults> {
   const v = parseInput(arrayPlannerSchema, input);
@@ -138,6 +148,9 @@ export function planArray(input: ArrayPlannerInput): CalcOutput<ArrayPlannerResu
 
   const prepared = v.pumps.map((p, i) => preparePump(p as PumpInput, i, H, h, nu, v.closureRatio));
   const sol = solveParallel(prepared, H, h, line, nu);
+  const [first] = sol.pumps;
+  // the schema asks for at least one pump; this keeps the type honest
+  if (!first) throw new EngineInputError([{ field: 'pumps', message: 'needs at least one pump' }]);
 
   prepared.forEach((p) => {
     if (p.driveFlowEstimated) {
@@ -165,14 +178,14 @@ export function planArray(input: ArrayPlannerInput): CalcOutput<ArrayPlannerResu
     `h_f = ${tq(sol.loss.friction.f)} \\times \\frac{${tq(line.lengthM, 'm')}}{${tq(line.insideDiameterM, 'm')}} \\times \\frac{(${tq(sol.loss.velocityMs, 'm/s')})^2}{2g} + ${tq(line.sumK)}\\,\\frac{v^2}{2g}`,
     sol.frictionHeadM + sol.minorHeadM, 'm', 'length'));
   steps.push(step('Head at each pump', 'h_p = h + h_f', `h_p = ${tq(h, 'm')} + ${tq(sol.frictionHeadM + sol.minorHeadM, 'm')}`, sol.pumpHeadM, 'm', 'length'));
-  prepared.forEach((p, i) => {
+  sol.pumps.forEach(({ pump: p, efficiency: eta, deliveredFlowM3s: q }) => {
     steps.push(step(`${p.label}: delivery`, 'q_i = \\eta_i\\,Q_i\\,\\frac{H_{eff,i}}{h_p}',
-      `q_i = ${tq(sol.efficiencies[i])} \\times ${tq(p.driveFlowM3s, 'm³/s')} \\times \\frac{${tq(p.effectiveFallM, 'm')}}{${tq(sol.pumpHeadM, 'm')}}`,
-      sol.deliveries[i], 'm³/s', 'flow'));
+      `q_i = ${tq(eta)} \\times ${tq(p.driveFlowM3s, 'm³/s')} \\times \\frac{${tq(p.effectiveFallM, 'm')}}{${tq(sol.pumpHeadM, 'm')}}`,
+      q, 'm³/s', 'flow'));
   });
-  steps.push(step('Combined delivery', 'S = \\sum_i q_i', `S = ${sol.deliveries.map((d) => tq(d, 'm³/s')).join(' + ')}`, sol.combinedFlowM3s, 'm³/s', 'flow'));
+  steps.push(step('Combined delivery', 'S = \\sum_i q_i', `S = ${sol.pumps.map((x) => tq(x.deliveredFlowM3s, 'm³/s')).join(' + ')}`, sol.combinedFlowM3s, 'm³/s', 'flow'));
 
-  const alone = prepared.length === 1 ? sol : solveParallel([prepared[0]], H, h, line, nu);
+  const alone = prepared.length === 1 ? sol : solveParallel([first.pump], H, h, line, nu);
   const gain = alone.combinedFlowM3s > 0 ? sol.combinedFlowM3s / alone.combinedFlowM3s : 0;
   const totalDrive = prepared.reduce((s, p) => s + (pumpRuns(p, H) ? p.driveFlowM3s : 0), 0);
   const maxLift = arrayMaxLift(prepared, H);
@@ -198,7 +211,7 @@ export function planArray(input: ArrayPlannerInput): CalcOutput<ArrayPlannerResu
   }
 
   const results: ArrayPlannerResults = {
-    pumps: prepared.map((p, i) => ({
+    pumps: sol.pumps.map(({ pump: p, efficiency: eta, deliveredFlowM3s: q }) => ({
       label: p.label,
       driveFlowM3s: p.driveFlowM3s,
       driveFlowEstimated: p.driveFlowEstimated,
@@ -206,8 +219,8 @@ export function planArray(input: ArrayPlannerInput): CalcOutput<ArrayPlannerResu
       fittingsK: p.fittingsK,
       fittingHeadLossM: p.fittingHeadLossM,
       effectiveFallM: p.effectiveFallM,
-      efficiency: sol.efficiencies[i],
-      deliveredFlowM3s: sol.deliveries[i],
+      efficiency: eta,
+      deliveredFlowM3s: q,
       runs: pumpRuns(p, H),
     })),
     combinedDeliveryM3s: sol.combinedFlowM3s,
@@ -221,29 +234,30 @@ export function planArray(input: ArrayPlannerInput): CalcOutput<ArrayPlannerResu
     maxLiftM: maxLift,
   };
   if (sourceShare !== undefined) results.sourceShare = sourceShare;
-  if (v.staged) results.staged = planStage(v, prepared, sol, nu, line, steps, warnings);
+  if (v.staged) results.staged = planStage(v, v.staged, sol, first, nu, line, steps, warnings);
   return finish(results, steps, warnings);
 }
 
 type Parsed = z.output<typeof arrayPlannerSchema>;
 
+/** The upper stage; `lower` is the first lower pump as it runs in the array. */
 function planStage(
-  v: Parsed, lower: PreparedPump[], sol: ParallelSolution, nu: number,
+  v: Parsed, st: NonNullable<Parsed['staged']>, sol: ParallelSolution, lower: PumpAtHead, nu: number,
   line: ReturnType<typeof lineSpec>, steps: Step[], warnings: Warning[],
 ): StagedResult {
-  const st = v.staged!;
   const upper = preparePump(st.upperPump as PumpInput, 0, st.upperFallM, st.upperLiftM, nu, v.closureRatio);
   upper.label = st.upperPump.label ?? 'upper pump';
   const upperLine = st.upperDeliveryLine
     ? lineSpec(st.upperDeliveryLine)
     : { lengthM: 1, insideDiameterM: 0.3, roughnessM: 0, sumK: 0 };
   const up = solveParallel([upper], st.upperFallM, st.upperLiftM, upperLine, nu);
+  const upperAt = pumpAtHead(upper, up.pumpHeadM, st.upperFallM);
   const Qu = upper.driveFlowM3s;
   const S = sol.combinedFlowM3s;
   const duty = Math.min(1, S / Qu);
   const top = up.combinedFlowM3s * duty;
   steps.push(step('Upper pump: delivery while running', 'q_u = \\eta_u\\,Q_u\\,\\frac{H_u}{h_u}',
-    `q_u = ${tq(up.efficiencies[0])} \\times ${tq(Qu, 'm³/s')} \\times \\frac{${tq(upper.effectiveFallM, 'm')}}{${tq(up.pumpHeadM, 'm')}}`,
+    `q_u = ${tq(upperAt.efficiency)} \\times ${tq(Qu, 'm³/s')} \\times \\frac{${tq(upper.effectiveFallM, 'm')}}{${tq(up.pumpHeadM, 'm')}}`,
     up.combinedFlowM3s, 'm³/s', 'flow'));
   steps.push(step('Share of the day the upper pump can run', 'd = \\min\\left(1, \\frac{S}{Q_u}\\right)',
     `d = \\min\\left(1, \\frac{${tq(S, 'm³/s')}}{${tq(Qu, 'm³/s')}}\\right)`, duty, ''));
@@ -251,19 +265,19 @@ function planStage(
 
   // n copies deliver at most n × one pump alone, so start the search there.
   let needed = 0;
-  const one = solveParallel([lower[0]], v.fallM, v.liftM, line, nu).combinedFlowM3s;
+  const one = solveParallel([lower.pump], v.fallM, v.liftM, line, nu).combinedFlowM3s;
   const start = one > 0 ? Math.max(1, Math.ceil(Qu / one - 1e-9)) : 51;
   for (let n = start; n <= 50; n++) {
-    if (solveParallel([lower[0]], v.fallM, v.liftM, line, nu, [n]).combinedFlowM3s >= Qu * (1 - 1e-12)) {
+    if (solveParallel([lower.pump], v.fallM, v.liftM, line, nu, [n]).combinedFlowM3s >= Qu * (1 - 1e-12)) {
       needed = n;
       break;
     }
   }
   steps.push(step('Lower pumps needed to run the upper pump around the clock', 'n = \\min\\{n : S(n) \\ge Q_u\\}',
     `S(n) \\ge ${tq(Qu, 'm³/s')}`, needed, '', undefined,
-    `Copies of ${lower[0].label}, each delivering ${(sol.deliveries[0] * 6e4).toFixed(3)} L/min here, into the same line.`));
+    `Copies of ${lower.pump.label}, each delivering ${(lower.deliveredFlowM3s * 6e4).toFixed(3)} L/min here, into the same line.`));
   if (S < Qu) {
-    warnings.push(warn('upper-pump-part-time', `The lower pumps fill the tank at ${(S * 6e4).toFixed(2)} L/min but the upper pump uses ${(Qu * 6e4).toFixed(2)} L/min; it can run only about ${(duty * 100).toFixed(0)} % of the time${needed > 0 ? `. About ${needed} lower pumps like ${lower[0].label} would keep it running around the clock` : ''}.`));
+    warnings.push(warn('upper-pump-part-time', `The lower pumps fill the tank at ${(S * 6e4).toFixed(2)} L/min but the upper pump uses ${(Qu * 6e4).toFixed(2)} L/min; it can run only about ${(duty * 100).toFixed(0)} % of the time${needed > 0 ? `. About ${needed} lower pumps like ${lower.pump.label} would keep it running around the clock` : ''}.`));
   }
   if (needed === 0) {
     warnings.push(warn('lower-stage-limit', 'Even 50 lower pumps like the first cannot supply the upper pump through this delivery line; its friction limits the stage. Use a larger line or a smaller upper pump.'));

@@ -66,12 +66,21 @@ const HIGH_VELOCITY = 1.5;
  * Hazen-Williams h_f = 10.67·L·Q^1.852/(C^1.852·D^4.87) as a second opinion;
  * h_m = ΣK·v²/(2g); total head at the pump h_p = h + h_f + h_m; pressure p = ρ·g·h_p.
  * Units: SI. Range: Q ≤ 0.1 m³/s, L ≤ 10 km, D 5–300 mm.
- * Worked example: a far paddock's trough 30 m above its ram, 1 L/min
- * (1.667e-5 m³/s) through 300 m of ¾" sch 40 PVC (D = 20.93 mm): v = 0.0484 m/s,
- * Re = 776 (laminar, 10 °C), f = 64/776 = 0.0825, h_f = 0.0825 × 14,333 ×
- * 0.0484²/19.61 = 0.141 m; h_p = 30.14 m; p = 295.5 kPa.
  * Reference: White, Fluid Mechanics, ch. 6; Colebrook (1939); Swamee & Jain (1976);
- * Hazen-Williams; K values Munson Table 8.2 (from memory).
+ * Williams & Hazen (1920); K values Munson, Young & Okiishi, Table 8.2.
+ * @example a far paddock's trough 30 m above its ram, 1 L/min through 300 m of ¾" sch 40 PVC (D = 20.93 mm)
+ * const r = checkDeliveryLine({
+ *   flowM3s: toSI(1, 'L/min', 'flow'), liftM: 30,
+ *   line: { lengthM: 300, insideDiameterM: resolvePipe('pvc-sch40', '3/4').insideDiameterM, material: 'pvc' },
+ * }).results
+ * r.velocityMs  // ≈ 0.0484
+ * // laminar at 10 °C: f = 64/Re
+ * r.reynolds  // ≈ 776
+ * r.frictionFactor  // ≈ 0.0824
+ * // h_f = 0.0824 × 14,334 × 0.0484²/19.61
+ * r.frictionHeadM  // ≈ 0.141
+ * r.totalHeadM  // ≈ 30.14
+ * r.pumpPressurePa / 1000  // ≈ 295.5
  */
 export function checkDeliveryLine(input: DeliveryLineInput): CalcOutput<DeliveryLineResults> {
   const v = parseInput(deliveryLineSchema, input);

@@ -58,11 +58,20 @@ export interface DemandAndStorageResults {
  * Formulas: household = people × rate; garden = area × depth/week ÷ 7;
  * livestock = Σ countᵢ × rateᵢ; demand D = sum; delivery V = q × 86,400 s;
  * surplus V − D; reserve tank = days × D; refill time = tank ÷ (surplus/86,400 s).
- * Units: m³/day, m³, s. Range: as the schema.
- * Worked example: a neighbouring sheep farm waters 40 ewes (40 × 2 US gal =
- * 0.3028 m³/day) from a ram giving 1 L/min (1.44 m³/day): surplus 1.137 m³/day;
- * a 3-day reserve needs 0.908 m³, refilled from empty in 0.908/1.137 = 0.80 day (69,000 s).
+ * Units: m³/day, m³, s. Range: as the schema (0–100 people, garden ≤ 100,000 m²,
+ * ≤ 30 livestock lines, reserve 0–60 days).
  * Reference: rates in demandRates.ts (USGS; extension livestock tables; from memory).
+ * @example a neighbouring sheep farm waters 40 ewes from a ram giving 1 L/min
+ * const input = { deliveredFlowM3s: toSI(1, 'L/min', 'flow'), livestock: [{ kind: 'sheep', count: 40 }] }
+ * const r = planDemandAndStorage(input).results
+ * // 40 × 2 US gal
+ * r.livestockM3PerDay  // ≈ 0.3028
+ * r.deliveryM3PerDay  // ≈ 1.44
+ * r.surplusM3PerDay  // ≈ 1.137
+ * // the default 3-day reserve, refilled from empty in 0.908/1.137 day
+ * r.reserveTankM3  // ≈ 0.908
+ * r.reserveRefillTimeS / 86400  // ≈ 0.80
+ * r.reserveRefillTimeS  // ≈ 6.90e4
  */
 export function planDemandAndStorage(input: DemandAndStorageInput): CalcOutput<DemandAndStorageResults> {
   const v = parseInput(demandAndStorageSchema, input);

@@ -3,14 +3,17 @@
  *
  * Household: the U.S. Geological Survey puts home use at about 80–100 US
  * gallons per person per day (USGS Water Science School, "How much water do
- * I use at home each day?"), and domestic per-capita use in 2015 at 82
- * gal/day (Dieter et al., 2018, "Estimated Use of Water in the United States
- * in 2015", USGS Circular 1441) — both from memory. A frugal off-grid home
- * uses far less; the rate is an input.
+ * I use at home each day?" — from memory), and average domestic use in 2015
+ * at 82 gal per person per day (Dieter, C.A. & Maupin, M.A. (2017), "Public
+ * Supply and Domestic Water Use in the United States, 2015", USGS Open-File
+ * Report 2017–1131; also in Dieter et al. (2018), USGS Circular 1441). A
+ * frugal off-grid home uses far less; the rate is an input.
  * Livestock: typical drinking water per head per day in warm weather, in
- * line with the tables in US extension publications (e.g. North Dakota
- * State University Extension, "Livestock Water Requirements", AS-954) —
- * values from memory; needs rise steeply with heat and lactation.
+ * line with the tables in US extension publications, e.g. Meehan, M.A.,
+ * Stokka, G. & Mostrom, M. (2021), "Livestock Water Requirements", North
+ * Dakota State University Extension AS1763 (earlier AS-954; its beef-cow
+ * figures are 14–16.5 US gal at 88 °F) — our values are from memory, not
+ * copied from its tables; needs rise steeply with heat and lactation.
  * Garden: about 1 inch (25.4 mm) of water a week in the growing season —
  * common practice, no source.
  */
@@ -38,16 +41,6 @@ const LIVESTOCK_GAL: Record<LivestockKind, readonly [number, number, number]> = 
   'chickens-per-100': [9, 5, 10],
 };
 
-export const LIVESTOCK_LABELS: Record<LivestockKind, string> = {
-  'beef-cow': 'beef cow',
-  'dairy-cow': 'dairy cow (milking)',
-  horse: 'horse',
-  sheep: 'sheep (ewe)',
-  goat: 'goat',
-  pig: 'pig (growing–finishing)',
-  'chickens-per-100': 'chickens, per 100 laying hens',
-};
-
 export interface Rate {
   typicalM3PerDay: number;
   lowM3PerDay: number;
@@ -57,7 +50,11 @@ export interface Rate {
 
 let livestockSI: Record<LivestockKind, Rate> | undefined;
 
-/** Livestock rates in m³/day. Example: beef cow 15 US gal/day = 0.05678 m³/day. */
+/**
+ * Livestock rates in m³/day (1 US gal = 231 in³). Reference: module comment (from memory).
+ * @example beef cow 15 US gal/day
+ * livestockRates()['beef-cow'].typicalM3PerDay  // ≈ 0.05678
+ */
 export function livestockRates(): Record<LivestockKind, Rate> {
   if (livestockSI) return livestockSI;
   const gal = (x: number) => toSI(x, 'gal', 'volume');
@@ -72,7 +69,12 @@ export function livestockRates(): Record<LivestockKind, Rate> {
 
 let household: Rate | undefined;
 
-/** Household use per person, m³/day: 80 (80–100) US gal = 0.3028 m³/day. USGS (from memory). */
+/**
+ * Household use per person, m³/day: 80 (80–100) US gal. Reference: USGS (module comment).
+ * @example
+ * householdRate().typicalM3PerDay  // ≈ 0.3028
+ * householdRate().highM3PerDay  // ≈ 0.3785
+ */
 export function householdRate(): Rate {
   household ??= {
     typicalM3PerDay: toSI(80, 'gal', 'volume'),

@@ -7,6 +7,7 @@ import * as z from 'zod/mini';
 import { sumK, type Fitting } from './fittings';
 import { MATERIAL_PROPS } from './pipes';
 import { drivePipeSchema, roughnessOf } from './pipeSchemas';
+import { EngineInputError } from './errors';
 import { DEFAULT_ENTRANCE_K, DEFAULT_PUMP_LOSS_K, fullFlowVelocity } from './ramCycle';
 import { addRangeIssue, fallM, flowM3s, liftM, parseInput, siNumber, waterTempC } from './schemaKit';
 import { finish, step, tq, type CalcOutput, type Step, type Warning } from './steps';
@@ -20,6 +21,8 @@ import { G, waterProperties } from './water';
  * L/H 3–12: the range given across US extension publications on ram pumps (from memory).
  * L/H 5–12: the narrower range in several ram handbooks (from memory).
  * L/D 150–1000: Calvert's drive-pipe tests as cited in ram handbooks (from memory).
+ * None of the three was found in the published references searched, so each stays
+ * "from memory" until a reader can cite it.
  */
 export const DRIVE_PIPE_GUIDES = [
   { id: 'length-to-fall-extension', ratio: 'L/H', min: 3, max: 12, source: 'US extension publications on ram pumps (from memory)' },
@@ -98,12 +101,29 @@ export interface DrivePipeCheckResults {
  * full flow, the worst case — a float valve that shuts the delivery line does
  * this); peak = ρ·g·H + Δp against the rating; round trip 2L/c.
  * Units: SI. Range: H ≤ 100 m, L ≤ 500 m.
- * Worked example: a cabin's seasonal creek, 4 ft (1.2192 m) fall, 20 ft
- * (6.096 m) of 1" sch 40 PVC (D = 26.64 mm, e = 3.378 mm, 450 psi): L/H = 5.0,
- * L/D = 229; v₀ ≈ 1.57 m/s; at 10 °C K = 2.093 GPa, ρ = 999.7 → c ≈ 548 m/s;
- * Δp = 999.7 × 548 × 1.57 ≈ 0.86 MPa (124 psi); peak ≈ 0.87 MPa; margin 3.10 MPa/0.87 MPa ≈ 3.6.
- * Reference: Korteweg (1878) and Joukowsky (1900) as in Wylie & Streeter,
+ * Reference: Korteweg (1878) and Joukowsky (1900) as in Wylie, Streeter & Suo,
  * Fluid Transients in Systems (1993); guidance sources in DRIVE_PIPE_GUIDES.
+ * @example a cabin's seasonal creek, 4 ft (1.2192 m) fall, 20 ft (6.096 m) of 1" sch 40 PVC
+ * // D = 26.64 mm, e = 3.378 mm, rated 450 psi
+ * const p = resolvePipe('pvc-sch40', '1')
+ * const drivePipe = {
+ *   lengthM: 6.096, insideDiameterM: p.insideDiameterM, wallThicknessM: p.wallThicknessM,
+ *   pressureRatingPa: p.pressureRatingPa, material: 'pvc',
+ * }
+ * const r = checkDrivePipe({ fallM: 1.2192, drivePipe }).results
+ * r.lengthToFall  // ≈ 5.0
+ * r.lengthToDiameter  // ≈ 229
+ * r.fullFlowVelocityMs  // ≈ 1.57
+ * // at 10 °C K = 2.093 GPa, ρ = 999.7
+ * waterProperties(10).bulkModulusPa  // ≈ 2.093e9
+ * r.waveSpeedMs  // ≈ 548
+ * // Δp = 999.7 × 548 × 1.57
+ * r.surgePa  // ≈ 0.86e6
+ * fromSI(r.surgePa, 'psi', 'pressure')  // ≈ 124 ±1
+ * r.peakPressurePa  // ≈ 0.87e6
+ * // margin 3.10 MPa / 0.87 MPa
+ * r.pressureRatingPa  // ≈ 3.10e6
+ * r.ratingMargin  // ≈ 3.6
  */
 export function checkDrivePipe(input: DrivePipeCheckInput): CalcOutput<DrivePipeCheckResults> {
   const v = parseInput(drivePipeCheckSchema, input);
@@ -113,8 +133,13 @@ export function checkDrivePipe(input: DrivePipeCheckInput): CalcOutput<DrivePipe
   const H = v.fallM;
   const L = dp.lengthM;
   const D = dp.insideDiameterM;
-  const e = dp.wallThicknessM!;
-  const rating = dp.pressureRatingPa!;
+  const e = dp.wallThicknessM;
+  const rating = dp.pressureRatingPa;
+  // the schema's refinement already refuses both; this keeps the types honest
+  if (e === undefined || rating === undefined) {
+    const field = e === undefined ? 'drivePipe.wallThicknessM' : 'drivePipe.pressureRatingPa';
+    throw new EngineInputError([{ field, message: 'is needed' }]);
+  }
   const mat = MATERIAL_PROPS[dp.material];
   const steps: Step[] = [];
   const warnings: Warning[] = [];

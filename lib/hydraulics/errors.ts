@@ -30,33 +30,25 @@ export class EngineInputError extends Error {
   readonly issues: FieldIssue[];
 
   constructor(issues: FieldIssue[]) {
-    const list = issues.length > 0 ? issues : [{ field: '(input)', message: 'invalid input' }];
+    const first: FieldIssue = issues[0] ?? { field: '(input)', message: 'invalid input' };
+    const list = issues.length > 0 ? issues : [first];
     super(list.map((i) => `${i.field}: ${i.message}`).join('; '));
     this.name = 'EngineInputError';
-    this.field = list[0].field;
-    this.range = list[0].range;
+    this.field = first.field;
+    this.range = first.range;
     this.issues = list;
   }
 }
 
-/** Describes a range in words. Example: { min: 0, minExclusive: true, max: 100, unit: 'm' } → "greater than 0 and at most 100 m". */
+/**
+ * Describes a range in words.
+ * @example
+ * describeRange({ min: 0, minExclusive: true, max: 100, unit: 'm' })  // → 'greater than 0 and at most 100 m'
+ */
 export function describeRange(r: FieldRange): string {
   const u = r.unit ? ` ${r.unit}` : '';
   const lo = r.min === undefined ? '' : `${r.minExclusive ? 'greater than' : 'at least'} ${r.min}`;
   const hi = r.max === undefined ? '' : `${r.maxExclusive ? 'less than' : 'at most'} ${r.max}`;
   if (lo && hi) return `${lo} and ${hi}${u}`;
   return `${lo || hi}${u}`;
-}
-
-/** Collects cross-field issues found after schema parsing, then throws them together. */
-export class IssueCollector {
-  private readonly list: FieldIssue[] = [];
-
-  add(field: string, message: string, range?: FieldRange): void {
-    this.list.push({ field, message, range });
-  }
-
-  throwIfAny(): void {
-    if (this.list.length > 0) throw new EngineInputError(this.list);
-  }
 }

@@ -1,11 +1,13 @@
 /**
  * Loss coefficients K of pipe fittings, h = K·v²/(2g).
  *
- * Values from Munson, Young & Okiishi, "Fundamentals of Fluid Mechanics",
- * Table 8.2 "Loss coefficients for pipe components" (data after the
- * Hydraulic Institute; recalled, from memory). Threaded values are used for
- * the small screwed and solvent-welded fittings of ram installations; they
- * are the conservative (larger) column.
+ * Values from Munson, B.R., Young, D.F. & Okiishi, T.H., "Fundamentals of
+ * Fluid Mechanics" (Wiley), Table 8.2 "Loss Coefficients for Pipe
+ * Components" (checked against a copy of the table; edition not recorded).
+ * The four entrances and the exit are not in that table but in the same
+ * chapter's figures on inlets and exits (from memory). Threaded values are
+ * used for the small screwed and solvent-welded fittings of ram
+ * installations; they are the conservative (larger) column.
  */
 import * as z from 'zod/mini';
 import { siNumber } from './schemaKit';
@@ -34,28 +36,6 @@ export const FITTING_K = {
 export type FittingKind = keyof typeof FITTING_K;
 export const FITTING_KINDS = Object.keys(FITTING_K) as [FittingKind, ...FittingKind[]];
 
-/** Plain-words labels for pickers. */
-export const FITTING_LABELS: Record<FittingKind, string> = {
-  'entrance-reentrant': 'pipe end sticking into the pool (re-entrant inlet)',
-  'entrance-sharp': 'square-edged inlet, flush with the wall',
-  'entrance-rounded': 'slightly rounded inlet',
-  'entrance-well-rounded': 'bell-mouth inlet',
-  exit: 'free outlet (velocity head lost)',
-  'elbow-90-threaded': '90° elbow, threaded or glued',
-  'elbow-90-long-radius-threaded': '90° long-radius (sweep) elbow',
-  'elbow-90-flanged': '90° flanged elbow',
-  'elbow-45-threaded': '45° elbow',
-  'return-bend-threaded': '180° return bend',
-  'tee-line-threaded': 'tee, flow straight through',
-  'tee-branch-threaded': 'tee, flow through the branch',
-  'union-threaded': 'union',
-  'gate-valve-open': 'gate valve, fully open',
-  'ball-valve-open': 'ball valve, fully open',
-  'globe-valve-open': 'globe valve, fully open',
-  'angle-valve-open': 'angle valve, fully open',
-  'swing-check-valve': 'swing check valve',
-};
-
 /** A fitting in a pipe: a kind from the table, or a custom K. */
 export const fittingSchema = z.object({
   kind: z.optional(z.enum(FITTING_KINDS)),
@@ -66,9 +46,11 @@ export const fittingSchema = z.object({
 export type Fitting = z.output<typeof fittingSchema>;
 
 /**
- * Sum of loss coefficients, ΣK = Σ countᵢ·Kᵢ (dimensionless).
- * Worked example: two threaded 90° elbows and an open gate valve:
- * 2 × 1.5 + 0.15 = 3.15. Reference: Munson, Young & Okiishi, Table 8.2 (from memory).
+ * Sum of loss coefficients, ΣK = Σ countᵢ·Kᵢ (dimensionless); a fitting
+ * without a kind counts its own K. Range: K 0–1000, count 1–100.
+ * Reference: Munson, Young & Okiishi, Table 8.2 (see the module comment).
+ * @example two threaded 90° elbows and an open gate valve: 2 × 1.5 + 0.15
+ * sumK([{ kind: 'elbow-90-threaded', count: 2 }, { kind: 'gate-valve-open', count: 1 }])  // ≈ 3.15
  */
 export function sumK(fittings: readonly Fitting[] | undefined): number {
   if (!fittings) return 0;

@@ -1,31 +1,54 @@
 /**
  * Clackwater's hydraulics engine: every calculation the ram-pump job needs,
  * in SI units, with worked steps and warnings. Framework-free.
+ *
+ * The public API, listed by name: what the app, the views, lib/ and the tests
+ * use. Anything else in this folder is a building block of the calculators;
+ * import it from its module only inside the engine.
  */
+
+// What every calculator returns, and the error a bad input throws.
 export { ENGINE_VERSION } from './version';
-export * from './errors';
-export * from './steps';
-export * from './warnings';
-export * from './units';
-export * from './water';
-export * from './pipes';
-export * from './fittings';
-export * from './pipeSchemas';
-export * from './friction';
-export * from './transients';
-export * from './efficiency';
-export * from './ramCycle';
-export * from './pumpSizes';
-export * from './weirs';
-export * from './demandRates';
-export * from './stallCauses';
-export { parseInput, siNumber } from './schemaKit';
-export * from './yieldEstimate';
-export * from './arrayPlanner';
-export * from './parallelPumps';
-export * from './drivePipeCheck';
-export * from './deliveryLine';
-export * from './sourceFlow';
-export * from './demandAndStorage';
-export * from './stallCheck';
-export * from './registry';
+export { EngineInputError } from './errors';
+export { texNum, type CalcOutput, type Step } from './steps';
+export { WARNING_CODES } from './warnings';
+
+// Units at the edges: what people type → SI, SI → the reader's units.
+export {
+  DISPLAY_UNITS, UNIT_CHOICES, fieldFromDisplay, fieldToDisplay, fromDisplay, fromSI, kindOfField, parseQuantity,
+  toDisplay, toSI, unitLabel, type QuantityKind, type UnitSystem,
+} from './units';
+
+// Water, pipes and fittings: property tables and schedule sizes.
+export { G, waterProperties } from './water';
+export {
+  NOMINAL_LABELS, NOMINAL_SIZES, PIPE_SERIES, defaultSeries, parseNominalSize, resolvePipe,
+  type NominalSize, type PipeMaterial, type PipeSeries,
+} from './pipes';
+export { FITTING_K, sumK } from './fittings';
+
+// Formulas the calculators are built from, checked on their own by the tests.
+export { colebrook, darcyHeadLoss, frictionFactor, hazenWilliamsHeadLoss, swameeJain } from './friction';
+export { joukowskyHead, joukowskySurge, slowClosureSurge, waveRoundTrip, waveSpeed } from './transients';
+export {
+  EFFICIENCY_BANDS, dAubuissonEfficiency, efficiencyBand, rankineEfficiency, type BandAtRatio, type PumpType,
+} from './efficiency';
+export { estimateDriveFlow } from './ramCycle';
+export { typicalDriveFlow } from './pumpSizes';
+export { vNotch90Usbr, vNotchFlow, weirCoefficients } from './weirs';
+export { householdRate, livestockRates, type LivestockKind } from './demandRates';
+
+// The seven calculators: input schema, run function and results.
+export { estimateYield, yieldEstimateSchema, type YieldEstimateResults } from './yieldEstimate';
+export { planArray, arrayPlannerSchema, type ArrayPlannerResults } from './arrayPlanner';
+export { DRIVE_PIPE_GUIDES, checkDrivePipe, drivePipeCheckSchema, type DrivePipeCheckResults } from './drivePipeCheck';
+export { checkDeliveryLine, deliveryLineSchema, type DeliveryLineResults } from './deliveryLine';
+export { measureSourceFlow, sourceFlowSchema, type SourceFlowResults } from './sourceFlow';
+export { planDemandAndStorage, demandAndStorageSchema, type DemandAndStorageResults } from './demandAndStorage';
+export { runStallCheck, stallCheckSchema, type StallCheckInput, type StallCheckResults } from './stallCheck';
+export {
+  STALL_CAUSE_CODES, SYMPTOMS, SYMPTOM_LABELS, type StallCauseCode, type Symptom,
+} from './stallCauses';
+
+// The calculators by id — goes when registry.ts gives way to lib/calculators (issue 18).
+export { CALCULATOR_IDS, calculators, getCalculator, runCalculator } from './registry';

@@ -51,10 +51,20 @@ export interface PreparedPump {
  * Formula: Q = given or estimateDriveFlow(straight pipe); v_c = α·v₀·(Q/Q_model);
  * ΔH = ΣK·v_c²/(2g); H_eff = max(0, H − ΔH).
  * Units: fallM, liftM m; nu m²/s; closureRatio α dimensionless (0.3–0.98).
- * Worked example: ½" sch 40 PVC, 20 ft, Q = 2 US gal/min (1.2618e-4 m³/s), one
- * threaded elbow (K = 1.5): model Q = 1.128e-4, v_c = 1.005 × 1.2618/1.128 =
- * 1.124 m/s → ΔH = 1.5 × 1.124²/19.613 = 0.0966 m; H_eff = 1.2192 − 0.0966 = 1.1226 m.
- * Reference: see the module comment; K from Munson Table 8.2 (from memory).
+ * Reference: see the module comment; K from Munson, Young & Okiishi, Table 8.2.
+ * @example ½" sch 40 PVC, 20 ft, Q = 2 US gal/min (1.2618e-4 m³/s), one threaded elbow (K = 1.5), 4 ft fall, 29 ft lift
+ * const drivePipe = {
+ *   lengthM: 6.096, insideDiameterM: resolvePipe('pvc-sch40', '1/2').insideDiameterM, material: 'pvc',
+ *   fittings: [{ kind: 'elbow-90-threaded', count: 1 }],
+ * }
+ * const input = { pumpType: 'homemade', driveFlowM3s: toSI(2, 'gal/min', 'flow'), drivePipe }
+ * // pump 0 at a 4 ft fall and 29 ft lift, ν = 1.306e-6 m²/s, α = 0.8
+ * const p = preparePump(input, 0, 1.2192, 8.8392, 1.306e-6, 0.8)
+ * // model Q = 1.128e-4, v_c = 1.005 × 1.2618/1.128
+ * p.closureVelocityMs  // ≈ 1.124
+ * // ΔH = 1.5 × 1.124²/19.613
+ * p.fittingHeadLossM  // ≈ 0.0966
+ * p.effectiveFallM  // ≈ 1.1226
  */
 export function preparePump(p: PumpInput, index: number, fallM: number, liftM: number, nu: number, closureRatio: number): PreparedPump {
   const dp = p.drivePipe;
@@ -84,7 +94,14 @@ const MIN_EFFECTIVE_FALL_SHARE = 0.05;
 
 /**
  * Whether a pump still beats: H_eff > 0.05·H (fittings that eat 95 % of the fall stop it).
- * Units: m. Worked example: H = 1.2192 m, H_eff = 1.1226 m → runs. Reference: engineering judgement, no source.
+ * Units: m. Reference: engineering judgement, no source.
+ * @example H = 1.2192 m: H_eff = 1.1226 m runs, H_eff = 0.05 m does not
+ * const pump = {
+ *   label: 'a', pumpType: 'homemade', driveFlowM3s: 1.2618e-4, driveFlowEstimated: false,
+ *   closureVelocityMs: 1.124, fittingsK: 1.5, fittingHeadLossM: 0.0966, effectiveFallM: 1.1226,
+ * }
+ * pumpRuns(pump, 1.2192)  // → true
+ * pumpRuns({ ...pump, effectiveFallM: 0.05 }, 1.2192)  // → false
  */
 export function pumpRuns(p: PreparedPump, fallM: number): boolean {
   return p.effectiveFallM > MIN_EFFECTIVE_FALL_SHARE * fallM;
@@ -93,8 +110,14 @@ export function pumpRuns(p: PreparedPump, fallM: number): boolean {
 /**
  * Efficiency of a pump working against head hp: the given η, else the typical
  * band value at hp/H_eff (efficiency.ts). Units: hp m; result dimensionless.
- * Worked example: homemade, hp = 8.884 m, H_eff = 1.2192 m → r = 7.29 → η = 0.513.
  * Reference: EFFICIENCY_BANDS (from memory).
+ * @example homemade, hp = 8.884 m, H_eff = 1.2192 m → r = 7.29
+ * const pump = {
+ *   label: 'a', pumpType: 'homemade', driveFlowM3s: 1.2618e-4, driveFlowEstimated: false,
+ *   closureVelocityMs: 1.124, fittingsK: 0, fittingHeadLossM: 0, effectiveFallM: 1.2192,
+ * }
+ * pumpEfficiency(pump, 8.884)  // ≈ 0.513
+ * pumpEfficiency({ ...pump, givenEfficiency: 0.6 }, 8.884)  // ≈ 0.6
  */
 export function pumpEfficiency(p: PreparedPump, hp: number): number {
   if (p.givenEfficiency !== undefined) return p.givenEfficiency;
@@ -104,8 +127,14 @@ export function pumpEfficiency(p: PreparedPump, hp: number): number {
 /**
  * Delivery of one pump against head hp: q = η·Q·H_eff/hp, m³/s (0 when stopped or hp ≤ H_eff).
  * Units: hp, fallM m; result m³/s.
- * Worked example: η = 0.513, Q = 1.2618e-4 m³/s, H_eff = 1.2192 m, hp = 8.884 m → 8.89e-6 m³/s (533 mL/min).
  * Reference: D'Aubuisson relation.
+ * @example η = 0.513 (typical at r = 7.29), Q = 1.2618e-4 m³/s, H_eff = 1.2192 m, hp = 8.884 m
+ * const pump = {
+ *   label: 'a', pumpType: 'homemade', driveFlowM3s: 1.2618e-4, driveFlowEstimated: false,
+ *   closureVelocityMs: 1.124, fittingsK: 0, fittingHeadLossM: 0, effectiveFallM: 1.2192,
+ * }
+ * pumpDelivery(pump, 8.884, 1.2192)  // ≈ 8.89e-6
+ * fromSI(pumpDelivery(pump, 8.884, 1.2192), 'mL/min', 'flow')  // ≈ 533
  */
 export function pumpDelivery(p: PreparedPump, hp: number, fallM: number): number {
   if (!pumpRuns(p, fallM) || hp <= p.effectiveFallM) return 0;
@@ -121,8 +150,11 @@ export interface LineSpec {
 
 /**
  * A delivery line reduced to what the solver needs: L, D, ε (input or material
- * table) and ΣK. Units: m. Example: 100 ft of ½" sch 40 PVC → { 30.48, 0.0158, 1.5e-6, 0 }.
+ * table) and ΣK. Units: m.
  * Reference: MATERIAL_PROPS (Munson Table 8.1, from memory).
+ * @example 100 ft of ½" sch 40 PVC
+ * const spec = lineSpec({ lengthM: 30.48, insideDiameterM: 0.0158, material: 'pvc', fittings: [] })
+ * spec  // → { lengthM: 30.48, insideDiameterM: 0.0158, roughnessM: 1.5e-6, sumK: 0 }
  */
 export function lineSpec(line: PipeRun): LineSpec {
   return {
@@ -135,12 +167,44 @@ export function lineSpec(line: PipeRun): LineSpec {
 
 /**
  * Losses in a line at a flow: Darcy-Weisbach with Colebrook plus ΣK·v²/(2g) (see pipeLoss).
- * Units: flow m³/s, ν m²/s; heads m. Example: 1.78e-5 m³/s (1.07 L/min) in 30.48 m of ½" PVC at 10 °C:
- * v = 0.0908 m/s, Re = 1098, f = 0.0583, h_f = 0.047 m.
+ * Units: flow m³/s, ν m²/s; heads m.
  * Reference: White, Fluid Mechanics, ch. 6.
+ * @example 1.78e-5 m³/s (1.07 L/min) in 30.48 m of ½" PVC at 10 °C
+ * const line = { lengthM: 30.48, insideDiameterM: resolvePipe('pvc-sch40', '1/2').insideDiameterM, roughnessM: 1.5e-6, sumK: 0 }
+ * const loss = lineLoss(line, 1.78e-5, 1.306e-6)
+ * loss.velocityMs  // ≈ 0.0908
+ * loss.reynolds  // ≈ 1098
+ * loss.friction.f  // ≈ 0.0583
+ * loss.frictionHeadM  // ≈ 0.047
  */
 export function lineLoss(line: LineSpec, flowM3s: number, nu: number): PipeLoss {
   return pipeLoss(flowM3s, line.lengthM, line.insideDiameterM, line.roughnessM, nu, line.sumK);
+}
+
+/** One pump of a solution, at the head the solution settled on. */
+export interface PumpAtHead {
+  pump: PreparedPump;
+  /** delivery of one copy of the pump, m³/s */
+  deliveredFlowM3s: number;
+  /** efficiency used (0 when the pump does not run) */
+  efficiency: number;
+}
+
+/**
+ * One pump's delivery and efficiency against head hp (see {@link pumpDelivery}, {@link pumpEfficiency});
+ * the efficiency is 0 for a pump that does not run.
+ * @example as pumpDelivery
+ * const pump = {
+ *   label: 'a', pumpType: 'homemade', driveFlowM3s: 1.2618e-4, driveFlowEstimated: false,
+ *   closureVelocityMs: 1.124, fittingsK: 0, fittingHeadLossM: 0, effectiveFallM: 1.2192,
+ * }
+ * pumpAtHead(pump, 8.884, 1.2192).deliveredFlowM3s  // ≈ 8.89e-6
+ * pumpAtHead(pump, 8.884, 1.2192).efficiency  // ≈ 0.513
+ * pumpAtHead({ ...pump, effectiveFallM: 0.05 }, 8.884, 1.2192).efficiency  // → 0
+ */
+export function pumpAtHead(p: PreparedPump, hp: number, fallM: number): PumpAtHead {
+  const efficiency = pumpRuns(p, fallM) ? pumpEfficiency(p, hp) : 0;
+  return { pump: p, deliveredFlowM3s: pumpDelivery(p, hp, fallM), efficiency };
 }
 
 export interface ParallelSolution {
@@ -148,17 +212,39 @@ export interface ParallelSolution {
   pumpHeadM: number;
   frictionHeadM: number;
   minorHeadM: number;
-  deliveries: number[];
-  efficiencies: number[];
+  /** the pumps in input order */
+  pumps: PumpAtHead[];
   loss: PipeLoss;
 }
 
 /**
- * Combined delivery of prepared pumps into one line against lift h, m³/s.
- * `copies[i]` (default 1) runs that many identical copies of pump i.
- * Worked example: two ½" rams (2 US gal/min each, H = 1.2192 m) into 30 m of
- * ½" PVC, h = 8.8392 m: friction at the combined ≈ 1.1 L/min is a few cm, so
- * S ≈ 2 × 537 mL/min.
+ * Combined delivery of prepared pumps into one shared line against lift h.
+ *
+ * Formula: the combined flow S solves F(S) = Σᵢ cᵢ·qᵢ(h_p(S)) − S = 0, with
+ * h_p(S) = h + h_f(S) + h_m(S) the head at the pumps (Darcy-Weisbach with
+ * Colebrook plus ΣK·v²/(2g) in the line at S) and qᵢ(h_p) = ηᵢ·Qᵢ·H_eff,ᵢ/h_p
+ * ({@link pumpDelivery}); cᵢ = `copies[i]` (default 1) identical copies of pump i.
+ * F(0) ≥ 0 and F falls as S grows (more flow, more loss, less delivery), so
+ * the root is unique; it is bracketed by [0, Σ cᵢ·qᵢ(h)] and found by regula
+ * falsi (Illinois variant) to |F(S)| ≤ 1e-14 + 1e-10·S, at most 100 steps.
+ * Units: fallM, liftM m; ν m²/s; returns flows in m³/s and heads in m.
+ * Range: 1–20 pumps (copies up to 50 in the staged search), H ≤ 100 m,
+ * h ≤ 1000 m; a pump delivers nothing when h_p ≤ H_eff or it does not run.
+ * Reference: D'Aubuisson relation; Darcy-Weisbach/Colebrook (White, Fluid
+ * Mechanics, ch. 6); root finding: Dowell, M. & Jarratt, P. (1971), "A modified
+ * regula falsi method for computing the root of an equation", BIT 11, 168–174.
+ * @example two ½" rams (2 US gal/min each, H = 1.2192 m) into 100 ft of ½" PVC, h = 8.8392 m
+ * const drivePipe = { lengthM: 6.096, insideDiameterM: 0.0158, material: 'pvc', fittings: [] }
+ * const input = { pumpType: 'homemade', driveFlowM3s: toSI(2, 'gal/min', 'flow'), drivePipe }
+ * const pump = preparePump(input, 0, 1.2192, 8.8392, 1.306e-6, 0.8)
+ * const line = { lengthM: 30.48, insideDiameterM: 0.0158, roughnessM: 1.5e-6, sumK: 0 }
+ * const s = solveParallel([pump, pump], 1.2192, 8.8392, line, 1.306e-6)
+ * // friction at the combined ≈ 1.1 L/min is a few cm (see lineLoss) …
+ * s.frictionHeadM  // ≈ 0.045 ±0.005
+ * // … so S ≈ 2 × 537 mL/min, the single pump against the bare lift (estimateYield), a little less
+ * fromSI(s.combinedFlowM3s, 'mL/min', 'flow')  // ≈ 1074 ±1%
+ * // two copies of one pump are the same as the pump twice
+ * solveParallel([pump], 1.2192, 8.8392, line, 1.306e-6, [2]).combinedFlowM3s / s.combinedFlowM3s  // ≈ 1 ±1e-9
  */
 export function solveParallel(
   pumps: readonly PreparedPump[], fallM: number, liftM: number, line: LineSpec, nu: number,
@@ -166,7 +252,8 @@ export function solveParallel(
 ): ParallelSolution {
   const total = (hp: number) => {
     let s = 0;
-    for (let i = 0; i < pumps.length; i++) s += (copies?.[i] ?? 1) * pumpDelivery(pumps[i], hp, fallM);
+    let i = 0;
+    for (const p of pumps) s += (copies?.[i++] ?? 1) * pumpDelivery(p, hp, fallM);
     return s;
   };
   const headAt = (S: number) => liftM + pipeHeadLoss(S, line.lengthM, line.insideDiameterM, line.roughnessM, nu, line.sumK);
@@ -199,22 +286,28 @@ export function solveParallel(
   }
   const loss = lineLoss(line, S, nu);
   const hp = liftM + loss.frictionHeadM + loss.minorHeadM;
-  const deliveries = pumps.map((p) => pumpDelivery(p, hp, fallM));
+  const atHead = pumps.map((p) => pumpAtHead(p, hp, fallM));
   return {
-    combinedFlowM3s: deliveries.reduce((x, y, i) => x + (copies?.[i] ?? 1) * y, 0),
+    combinedFlowM3s: atHead.reduce((x, y, i) => x + (copies?.[i] ?? 1) * y.deliveredFlowM3s, 0),
     pumpHeadM: hp,
     frictionHeadM: loss.frictionHeadM,
     minorHeadM: loss.minorHeadM,
-    deliveries,
-    efficiencies: pumps.map((p) => (pumpRuns(p, fallM) ? pumpEfficiency(p, hp) : 0)),
+    pumps: atHead,
     loss,
   };
 }
 
 /**
  * Highest lift the array can reach, m: the largest maxLiftRatio·H_eff over its
- * pumps. Parallel pumps add flow, not height, so this never grows with the
- * number of pumps.
+ * running pumps. Parallel pumps add flow, not height, so this never grows with
+ * the number of pumps. Reference: EFFICIENCY_BANDS (from memory).
+ * @example homemade pumps (r_max = 40) with H_eff = 1.2192 m and 1.1226 m: 40 × 1.2192
+ * const pump = {
+ *   label: 'a', pumpType: 'homemade', driveFlowM3s: 1.2618e-4, driveFlowEstimated: false,
+ *   closureVelocityMs: 1.124, fittingsK: 0, fittingHeadLossM: 0, effectiveFallM: 1.2192,
+ * }
+ * arrayMaxLift([pump, { ...pump, effectiveFallM: 1.1226 }], 1.2192)  // ≈ 48.768
+ * arrayMaxLift([pump, pump, pump], 1.2192)  // ≈ 48.768
  */
 export function arrayMaxLift(pumps: readonly PreparedPump[], fallM: number): number {
   let best = 0;

@@ -35,12 +35,21 @@ export const drivePipeSchema = z.extend(pipeRunSchema, {
 });
 export type DrivePipe = z.output<typeof drivePipeSchema>;
 
-/** Roughness of a run, from the input or the material table, m. */
+/**
+ * Roughness of a run, from the input or the material table, m.
+ * @example PVC takes drawn tubing's 0.0015 mm (Munson Table 8.1, from memory)
+ * roughnessOf({ material: 'pvc' })  // ≈ 1.5e-6
+ * roughnessOf({ material: 'pvc', roughnessM: 1e-5 })  // ≈ 1e-5
+ */
 export function roughnessOf(p: { roughnessM?: number; material: PipeMaterial }): number {
   return p.roughnessM ?? MATERIAL_PROPS[p.material].roughnessM;
 }
 
-/** Hazen-Williams C of a run, from the input or the material table. */
+/**
+ * Hazen-Williams C of a run, from the input or the material table.
+ * @example
+ * hazenCOf({ material: 'pvc' })  // ≈ 150
+ */
 export function hazenCOf(p: { hazenWilliamsC?: number; material: PipeMaterial }): number {
   return p.hazenWilliamsC ?? MATERIAL_PROPS[p.material].hazenWilliamsC;
 }

@@ -9,7 +9,8 @@
  * PVC, schedule 40 and 80: ASTM D1785, "PVC Plastic Pipe, Schedules 40, 80
  * and 120", which uses the same outside diameters and (minimum) walls as
  * steel pipe of the same schedule for these sizes. Pressure ratings for
- * PVC 1120 at 73 °F (23 °C) from the D1785 appendix table (from memory).
+ * PVC 1120 at 73 °F (23 °C) from the D1785 appendix table (Appendix X1 of
+ * ASTM D1785-15; the values from memory).
  * HDPE, IPS DR series: outside diameter per ASTM D3035 (IPS sizes, same
  * ODs as steel pipe); minimum wall = OD/DR; inside diameter computed as
  * average OD − 2 × minimum wall. Pressure class for PE4710 at 73 °F from
@@ -127,9 +128,13 @@ const psi = (x: number) => toSI(x, 'psi', 'pressure');
  *
  * Formula: steel/PVC ID = OD − 2·wall (table wall); HDPE DR: wall = OD/DR, ID = OD − 2·OD/DR.
  * Units: returns metres and pascals. Range: ½" to 4".
- * Worked example: 1" sch 40 PVC: OD 1.315 in, wall 0.133 in → ID = 1.049 in = 26.64 mm, 450 psi.
- * 1¼" HDPE DR 11: OD 1.660 in, wall 0.1509 in → ID = 1.358 in = 34.50 mm, 200 psi.
  * Reference: ASME B36.10M; ASTM D1785; ASTM D3035 (table values from memory).
+ * @example 1" sch 40 PVC: OD 1.315 in, wall 0.133 in → ID = 1.049 in, 450 psi
+ * fromSI(resolvePipe('pvc-sch40', '1').insideDiameterM, 'mm', 'smallLength')  // ≈ 26.64
+ * fromSI(resolvePipe('pvc-sch40', '1').pressureRatingPa, 'psi', 'pressure')  // ≈ 450
+ * @example 1¼" HDPE DR 11: OD 1.660 in, wall 1.660/11 = 0.1509 in → ID = 1.358 in, 2 × 1000/(11 − 1) = 200 psi
+ * fromSI(resolvePipe('hdpe-dr11', '1-1/4').insideDiameterM, 'mm', 'smallLength')  // ≈ 34.50
+ * fromSI(resolvePipe('hdpe-dr11', '1-1/4').pressureRatingPa, 'psi', 'pressure')  // ≈ 200
  */
 export function resolvePipe(series: PipeSeries, nominal: NominalSize, material?: PipeMaterial): PipeSpec {
   const key = `${series}|${nominal}|${material ?? ''}`;
@@ -174,7 +179,12 @@ function computePipe(series: PipeSeries, nominal: NominalSize, material?: PipeMa
   };
 }
 
-/** The series to size a pipe of this material in, when none is named. Example: 'pvc' → 'pvc-sch40', 'hdpe' → 'hdpe-dr11'. */
+/**
+ * The series to size a pipe of this material in, when none is named (common practice, no source).
+ * @example
+ * defaultSeries('pvc')  // → 'pvc-sch40'
+ * defaultSeries('hdpe')  // → 'hdpe-dr11'
+ */
 export function defaultSeries(material: PipeMaterial): PipeSeries {
   if (material === 'pvc') return 'pvc-sch40';
   if (material === 'hdpe' || material === 'hose') return 'hdpe-dr11';
@@ -196,6 +206,10 @@ const NOMINAL_WORDS: Record<string, NominalSize> = {
 /**
  * Reads a nominal size as people write it: "½", "3/4\"", "1¼ in", "1-1/4", "1.25", "2 inch".
  * Returns undefined when it is not one of ½" to 4".
+ * @example
+ * parseNominalSize('1¼ in')  // → '1-1/4'
+ * parseNominalSize('3/4"')  // → '3/4'
+ * parseNominalSize('5 in')  // → undefined
  */
 export function parseNominalSize(text: string): NominalSize | undefined {
   let s = text.trim().toLowerCase();

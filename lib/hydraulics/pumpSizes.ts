@@ -33,7 +33,12 @@ export interface DriveFlowRange {
 
 let table: Record<NominalSize, DriveFlowRange> | undefined;
 
-/** Typical drive flow range for each pump size, m³/s. Example: 1¼" → 5–14 US gal/min = 3.15e-4–8.83e-4 m³/s. */
+/**
+ * Typical drive flow range for each pump size, m³/s (1 US gal = 231 in³). Reference: module comment (from memory).
+ * @example 1¼" → 5–14 US gal/min
+ * pumpSizeTable()['1-1/4'].lowM3s  // ≈ 3.15e-4
+ * pumpSizeTable()['1-1/4'].highM3s  // ≈ 8.83e-4
+ */
 export function pumpSizeTable(): Record<NominalSize, DriveFlowRange> {
   if (table) return table;
   const t = {} as Record<NominalSize, DriveFlowRange>;
@@ -44,7 +49,12 @@ export function pumpSizeTable(): Record<NominalSize, DriveFlowRange> {
   return t;
 }
 
-/** Typical drive flow range of one size. */
+/**
+ * Typical drive flow range of one size, m³/s. Reference: module comment (from memory).
+ * @example ½" → 1–3 US gal/min
+ * typicalDriveFlow('1/2').lowM3s  // ≈ 6.309e-5
+ * typicalDriveFlow('1/2').highM3s  // ≈ 1.893e-4
+ */
 export function typicalDriveFlow(size: NominalSize): DriveFlowRange {
   return pumpSizeTable()[size];
 }

@@ -19,14 +19,17 @@
  * low-to-high depending on the pause; the model is for estimates, not
  * for efficiency (take that from the typical bands).
  *
- * Framing in terms of α follows "An Analysis of the Hydraulic Ram", ASME
- * Journal of Fluids Engineering 97(2):191 (1975), which expresses ram
- * performance through the ratio of the drive velocity at valve closure to
- * the open-valve steady velocity, "always less than one". α = 0.8 as a
+ * Framing in terms of α follows Iversen, H.W. (1975), "An Analysis of the
+ * Hydraulic Ram", ASME Journal of Fluids Engineering 97(2), 191–196
+ * (doi:10.1115/1.3447251), which expresses ram performance through the ratio
+ * of the drive velocity at valve closure to the open-valve steady velocity,
+ * "always less than one". α = 0.8 as a
  * default is from memory (a valve tuned for a steady beat closes well
  * before the column reaches full flow). K_pump = 2.9: the waste valve as a
  * swing check (K = 2) plus the pump body as a threaded tee run (K = 0.9),
- * Munson, Young & Okiishi Table 8.2 (from memory).
+ * Munson, Young & Okiishi, Fundamentals of Fluid Mechanics, Table 8.2 "Loss
+ * Coefficients for Pipe Components" (values checked against a copy of the
+ * table); treating the ram's body as those two fittings is our assumption.
  */
 import { boreArea, darcyF, reynolds } from './friction';
 import { G } from './water';
@@ -72,11 +75,15 @@ export interface RamCycle {
 /**
  * Full-flow velocity of the drive pipe, v₀ = √(2gH/R), R = 1 + K_e + K_p + ΣK + f·L/D,
  * solved by fixed-point iteration because f depends on v₀ through Re.
- * Units: H, L, D, ε in m; ν m²/s; returns m/s.
- * Worked example: H = 1.2192 m (4 ft), 20 ft (6.096 m) of ½" sch 40 PVC
- * (D = 15.80 mm), ν = 1.306e-6, K_e = 0.5, K_p = 2.9: f ≈ 0.0280,
- * R ≈ 15.2 → v₀ ≈ 1.26 m/s.
- * Reference: energy equation with Darcy-Weisbach losses (Munson §8.4).
+ * Units: H, L, D, ε in m; ν m²/s; returns m/s. Range: as {@link estimateDriveFlow}.
+ * Reference: energy equation with Darcy-Weisbach losses (Munson, Young & Okiishi, §8.4).
+ * @example H = 1.2192 m (4 ft), 20 ft (6.096 m) of ½" sch 40 PVC (D = 15.80 mm), ν = 1.306e-6, K_e = 0.5, K_p = 2.9
+ * const ff = fullFlowVelocity({
+ *   fallM: 1.2192, pumpHeadM: 8.8392, lengthM: 6.096, insideDiameterM: 0.0158, roughnessM: 1.5e-6, nu: 1.306e-6,
+ * })
+ * ff.f  // ≈ 0.0279
+ * ff.R  // ≈ 15.2
+ * ff.v0  // ≈ 1.26
  */
 export function fullFlowVelocity(input: RamCycleInput): { v0: number; f: number; R: number } {
   const { fallM, lengthM, insideDiameterM: D, roughnessM, nu } = input;
@@ -104,12 +111,19 @@ export function fullFlowVelocity(input: RamCycleInput): { v0: number; f: number;
  *
  * Formula: see the module comment; Q = A·(x_a + x_d)/(t_a + t_d).
  * Units: metres, seconds, m³/s. Range: H 0.1–100 m, pumpHead > H, α 0.3–0.98.
- * Worked example: fall 4 ft (1.2192 m), head 29 ft (8.8392 m), 20 ft of ½"
- * sch 40 PVC, α = 0.8: v₀ ≈ 1.26 m/s, τ = L·v₀/(gH) ≈ 0.64 s,
- * t_a = τ·atanh 0.8 ≈ 0.70 s, t_d ≈ 0.08 s → ≈ 76 beats/min and
- * Q ≈ 0.46·A·v₀ ≈ 1.1e-4 m³/s (≈ 1.8 US gal/min).
- * Reference: rigid-column momentum balance, as in the 1975 ASME analysis
- * cited in the module comment.
+ * Reference: rigid-column momentum balance, as in Iversen (1975), cited in the
+ * module comment.
+ * @example fall 4 ft (1.2192 m), head 29 ft (8.8392 m), 20 ft of ½" sch 40 PVC, α = 0.8
+ * // v₀ ≈ 1.26 m/s, τ = L·v₀/(gH) ≈ 0.64 s, t_a = τ·atanh 0.8, Q ≈ 0.46·A·v₀
+ * const c = estimateDriveFlow({
+ *   fallM: 1.2192, pumpHeadM: 8.8392, lengthM: 6.096, insideDiameterM: 0.0158, roughnessM: 1.5e-6, nu: 1.306e-6,
+ * })
+ * c.accelerationTimeS  // ≈ 0.70
+ * c.deliveryTimeS  // ≈ 0.08
+ * c.beatsPerMinute  // ≈ 76
+ * c.driveFlowM3s  // ≈ 1.1e-4
+ * c.driveFlowM3s / (((Math.PI * 0.0158 ** 2) / 4) * c.fullFlowVelocityMs)  // ≈ 0.46
+ * fromSI(c.driveFlowM3s, 'gal/min', 'flow')  // ≈ 1.8
  */
 export function estimateDriveFlow(input: RamCycleInput): RamCycle {
   const alpha = input.closureRatio ?? DEFAULT_CLOSURE_RATIO;

@@ -18,8 +18,11 @@ export interface NumberSpec extends FieldRange {
  * rejects NaN and ±Infinity for z.number(); the same message is used for a
  * wrong type, a missing value and an out-of-range value so the form always
  * shows the range.
- * Example: siNumber({ min: 0, minExclusive: true, max: 100, unit: 'm' }) rejects 0, −1, NaN and 101
- * with "must be a number greater than 0 and at most 100 m".
+ * @example a fall: rejects 0, −1, NaN and 101 with the range in words
+ * const fall = siNumber({ min: 0, minExclusive: true, max: 100, unit: 'm' })
+ * [0, -1, NaN, 101].map((x) => fall.safeParse(x).success)  // → [false, false, false, false]
+ * fall.safeParse(101).error.issues[0].message  // → 'must be a number greater than 0 and at most 100 m'
+ * fall.safeParse(1.2192).success  // → true
  */
 export function siNumber(spec: NumberSpec): z.ZodMiniNumber<number> {
   const range: FieldRange = {
@@ -75,7 +78,12 @@ function issueRange(issue: z.core.$ZodIssue): FieldRange | undefined {
 
 /**
  * Parses input against a schema; throws EngineInputError listing every failing field with its range.
- * Example: parseInput(yieldEstimateSchema, { fallM: 0, … }) throws field "fallM", range (0, 100] m.
+ * @example a fall of 0 is refused, naming the field and its range (0, 100] m
+ * const input = { driveFlowM3s: 1e-4, fallM: 0, liftM: 8 }
+ * parseInput(yieldEstimateSchema, input)  // throws EngineInputError
+ * const refused = (() => { try { parseInput(yieldEstimateSchema, input) } catch (e) { return e } })()
+ * refused.field  // → 'fallM'
+ * [refused.range.min, refused.range.minExclusive, refused.range.max, refused.range.unit]  // → [0, true, 100, 'm']
  */
 export function parseInput<S extends z.ZodMiniType>(schema: S, input: unknown): z.output<S> {
   const r = schema.safeParse(input);

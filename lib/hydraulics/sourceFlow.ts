@@ -95,15 +95,25 @@ function stats(values: readonly number[]): SampleStats {
  * V-notch: Kindsvater-Shen, Q = 4.28·Ce·tan(θ/2)·(h₁ + k_h)^2.5 (ft, ft³/s), with
  * the USBR 90° equation Q = 2.49·h₁^2.48 as a cross-check (weirs.ts).
  * Float: Q = k·v_s·w·d̄ with v_s the mean of L/tᵢ and k = 0.85 typical — the
- * ratio of mean to surface velocity. Reference for k: USGS, Rantz et al. (1982),
- * "Measurement and Computation of Streamflow", WSP 2175, vol. 1, ch. 6 (float
- * measurements; coefficient about 0.85), and the USBR Water Measurement
- * Manual's float method (from memory).
- * Units: SI. Range: as the schema.
- * Worked example: a hill brook caught in a 5-US-gallon bucket (0.018927 m³) in
- * 12.0, 12.6 and 11.4 s: qᵢ = 1.5773, 1.5022, 1.6603 L/s; mean 1.580 L/s;
- * s = 0.0791 L/s; min 1.502, max 1.660 L/s.
+ * ratio of mean to surface velocity. Reference for k: Rantz, S.E. and others
+ * (1982), "Measurement and Computation of Streamflow, Volume 1: Measurement of
+ * Stage and Discharge", USGS Water-Supply Paper 2175 (the float-measurement
+ * section and its coefficient of about 0.85 are from memory), and the USBR
+ * Water Measurement Manual's float method (from memory).
+ * Units: SI. Range: as the schema (bucket 1–50 trials of 0.5–3600 s; notch
+ * head ≤ 1 m at 25°–100°; float 1–50 runs, coefficient 0.5–1).
  * Reference: as above.
+ * @example a hill brook caught in a 5-US-gallon bucket (0.018927 m³) in 12.0, 12.6 and 11.4 s
+ * const trials = [12, 12.6, 11.4].map((timeS) => ({ volumeM3: 0.018927, timeS }))
+ * const r = measureSourceFlow({ method: 'bucket', trials })
+ * // qᵢ = Vᵢ/tᵢ in L/s
+ * r.steps[0].result.value * 1000  // ≈ 1.5773 ±0.0001
+ * r.steps[1].result.value * 1000  // ≈ 1.5021
+ * r.steps[2].result.value * 1000  // ≈ 1.6603
+ * r.results.flowM3s * 1000  // ≈ 1.580
+ * r.results.stats.sdM3s * 1000  // ≈ 0.0791
+ * r.results.stats.minM3s * 1000  // ≈ 1.502
+ * r.results.stats.maxM3s * 1000  // ≈ 1.660
  */
 export function measureSourceFlow(input: SourceFlowInput): CalcOutput<SourceFlowResults> {
   const v = parseInput(sourceFlowSchema, input);
@@ -114,7 +124,7 @@ export function measureSourceFlow(input: SourceFlowInput): CalcOutput<SourceFlow
 
   if (v.method === 'bucket') {
     const q = v.trials.map((t) => t.volumeM3 / t.timeS);
-    v.trials.forEach((t, i) => steps.push(step(`Trial ${i + 1}`, 'q_i = \\frac{V_i}{t_i}', `q_{${i + 1}} = \\frac{${tq(t.volumeM3, 'm³')}}{${tq(t.timeS, 's')}}`, q[i], 'm³/s', 'flow')));
+    v.trials.forEach((t, i) => steps.push(step(`Trial ${i + 1}`, 'q_i = \\frac{V_i}{t_i}', `q_{${i + 1}} = \\frac{${tq(t.volumeM3, 'm³')}}{${tq(t.timeS, 's')}}`, t.volumeM3 / t.timeS, 'm³/s', 'flow')));
     const s = stats(q);
     steps.push(step('Mean of the trials', '\\bar q = \\frac{1}{n}\\sum q_i', `\\bar q = \\frac{${q.map((x) => tq(x)).join(' + ')}}{${s.n}}`, s.meanM3s, 'm³/s', 'flow'));
     steps.push(step('Spread (sample standard deviation)', 's = \\sqrt{\\frac{\\sum (q_i - \\bar q)^2}{n - 1}}', `s,\\; n = ${s.n}`, s.sdM3s, 'm³/s', 'flow'));
@@ -172,6 +182,3 @@ export function measureSourceFlow(input: SourceFlowInput): CalcOutput<SourceFlow
   }
   return finish(results as SourceFlowResults, steps, warnings);
 }
-
-/** Same calculator under the other name the design uses. */
-export const estimateSourceFlow = measureSourceFlow;

@@ -98,19 +98,46 @@ const lpm = (q: number) => `${(q * 6e4).toFixed(2)} L/min`;
 /**
  * Ranks the likely causes of a stall or weak delivery.
  *
- * Computed evidence: L/H and L/D against DRIVE_PIPE_GUIDES; total drive flow
- * (measured, or estimated with estimateDriveFlow) against the source's spare
- * flow; lift ratio h/H against the pump type's band; material stiffness
- * (Korteweg wave speed); beat rate against 40–120 per minute and the model's
- * rate; measured efficiency q·h/(Q·H) against the band; intake submergence
- * against S = D(1 + 2.3·Fr), Fr = v/√(gD) (Hydraulic Institute ANSI/HI 9.8
- * intake rule, from memory); fittings' head ΣK·v_c²/(2g); delivery-line loss.
- * Score = 0.4·strength + 0.6·symptom weight when the numbers show a problem,
- * 0.15·weight when they rule it out, 0.5·weight when unknown (0–1, sorted).
- * Units: SI. Worked example: a cabin's ram on a seasonal creek, 4 ft fall,
- * 29 ft lift, 20 ft of ½" HDPE drive pipe, "weak delivery": the flexible pipe
- * (wave speed ≈ 310 m/s against ≈ 1450 m/s rigid) ranks first.
- * Reference: as listed above; causes and guides in stallCauses.ts.
+ * Evidence worked out from the site sheet, each cause marked a problem, ruled
+ * out (ok) or unknown:
+ *  - drive pipe: L/H against 3–12 and L/D against 150–1000 (DRIVE_PIPE_GUIDES);
+ *  - drive flow: n·Q₁ (Q₁ measured, or {@link estimateDriveFlow} with the
+ *    fittings) against the source's spare flow — a problem above 90 %;
+ *  - lift: r = h/H against the pump type's band — a problem when the typical
+ *    efficiency is 0 or r > r_max/2;
+ *  - stiffness: Korteweg wave speed c = √((K/ρ)/(1 + K·D/(E·e))) for a
+ *    flexible material against √(K/ρ) for a rigid one;
+ *  - beat: the counted rate against 40–120 per minute (common practice, no
+ *    source) and the model's 60/(t_a + t_d);
+ *  - delivery: measured η_D = q·h/(Q·H) against the band's low edge; a q·h above
+ *    Q·H with a measured Q is refused as impossible (EngineInputError);
+ *  - intake: submergence against S = D·(1 + 2.3·Fr), Fr = v₀/√(gD) (ANSI/HI
+ *    9.8-1998, Pump Intake Design, Hydraulic Institute — the formula from memory);
+ *  - fittings: ΔH = ΣK·v_c²/(2g) of the fall, strength min(1, 5·ΔH/H);
+ *  - delivery line: h_f + h_m at the measured or expected delivery against
+ *    10 % of the lift (common practice, no source).
+ * Score of a cause, with w the largest weight of the reported symptoms for it
+ * plus 0.1 for each further matching symptom (stallCauses.ts):
+ *   problem: 0.4·strength + 0.6·w (strength 0–1, default 1); ok: 0.15·w;
+ *   unknown: 0.5·w; capped at 1 and rounded to 0.001. Causes scoring 0 are
+ *   left out; the rest are sorted by score, then by code.
+ * Units: SI (m, m³/s, Pa). Range: as the site-sheet schema (H ≤ 100 m,
+ * H < h ≤ 1000 m, drive pipe ≤ 500 m, 1–20 pumps, 1–400 beats/min, 0–40 °C).
+ * Reference: as listed above; causes, symptom weights and guides in stallCauses.ts.
+ * @example a cabin's ram on a seasonal creek, 4 ft fall, 29 ft lift, 20 ft of ½" HDPE DR 11 drive pipe, "weak delivery"
+ * const p = resolvePipe('hdpe-dr11', '1/2')
+ * const drivePipe = { lengthM: 6.096, insideDiameterM: p.insideDiameterM, wallThicknessM: p.wallThicknessM, material: 'hdpe' }
+ * const site = { fallM: 1.2192, liftM: 8.8392, drivePipe }
+ * const r = runStallCheck({ site, symptoms: ['weak-delivery'] }).results
+ * // the flexible pipe ranks first: a problem (strength 1) with weight 0.6 for weak delivery, 0.4 × 1 + 0.6 × 0.6
+ * r.causes[0].code  // → 'flexible-drive-pipe'
+ * r.causes[0].score  // ≈ 0.76
+ * // wave speed ≈ 310 m/s (E = 0.9 GPa) against ≈ 1450 m/s rigid, water at 10 °C
+ * const w = waterProperties(10)
+ * waveSpeed(w.bulkModulusPa, w.densityKgM3, p.insideDiameterM, 0.9e9, p.wallThicknessM)  // ≈ 310 ±1%
+ * Math.sqrt(w.bulkModulusPa / w.densityKgM3)  // ≈ 1450 ±1%
+ * r.liftRatio  // ≈ 7.25
+ * r.lengthToFall  // ≈ 5.0
  */
 export function runStallCheck(input: StallCheckInput): CalcOutput<StallCheckResults> {
   const v = parseInput(stallCheckSchema, input);
@@ -181,7 +208,8 @@ export function runStallCheck(input: StallCheckInput): CalcOutput<StallCheckResu
 
   const bpmModel = actual.beatsPerMinute;
   steps.push(step('Beat rate the model expects', 'n = \\frac{60}{t_a + t_d}', `n = \\frac{60}{${tq(actual.cycleTimeS, 's')}}`, bpmModel, ''));
-  const sizeRange = s.pumpSize ? typicalDriveFlow(s.pumpSize) : undefined;
+  const size = s.pumpSize;
+  const sizeRange = size ? typicalDriveFlow(size) : undefined;
   if (s.beatsPerMinute !== undefined) {
     const out = s.beatsPerMinute < BPM_RANGE[0] || s.beatsPerMinute > BPM_RANGE[1];
     const fast = s.beatsPerMinute > BPM_RANGE[1];
@@ -190,10 +218,10 @@ export function runStallCheck(input: StallCheckInput): CalcOutput<StallCheckResu
       strength: 0.7,
       reason: `It beats ${s.beatsPerMinute.toFixed(0)} times a minute (usual ${BPM_RANGE[0]}–${BPM_RANGE[1]}; the model expects about ${bpmModel.toFixed(0)} for this fall and drive pipe)${out ? (fast ? ': a short stroke or light valve shuts before the water gains speed' : ': a long stroke or heavy valve wastes water between beats') : ''}.`,
     };
-  } else if (sizeRange && s.driveFlowM3s !== undefined && (s.driveFlowM3s > sizeRange.highM3s || s.driveFlowM3s < sizeRange.lowM3s)) {
+  } else if (size && sizeRange && s.driveFlowM3s !== undefined && (s.driveFlowM3s > sizeRange.highM3s || s.driveFlowM3s < sizeRange.lowM3s)) {
     ev['waste-valve-setting'] = {
       state: 'problem', strength: 0.5,
-      reason: `The measured drive flow, ${lpm(s.driveFlowM3s)}, is outside the ${lpm(sizeRange.lowM3s)}–${lpm(sizeRange.highM3s)} typical of a ${NOMINAL_LABELS[s.pumpSize!]} pump (from memory); the waste valve's stroke or weight sets it.`,
+      reason: `The measured drive flow, ${lpm(s.driveFlowM3s)}, is outside the ${lpm(sizeRange.lowM3s)}–${lpm(sizeRange.highM3s)} typical of a ${NOMINAL_LABELS[size]} pump (from memory); the waste valve's stroke or weight sets it.`,
     };
   } else {
     ev['waste-valve-setting'] = { state: 'unknown', reason: `Count the beats per minute: the model expects about ${bpmModel.toFixed(0)} for this fall and drive pipe; far off that, reset the stroke and weight.` };

@@ -46,7 +46,11 @@ export interface CalcOutput<R> {
 
 const unitTexCache = new Map<string, string>();
 
-/** TeX for a unit, e.g. "m³/s" → "\,\mathrm{m^{3}/s}". */
+/**
+ * TeX for a unit.
+ * @example
+ * texUnit('m³/s')  // → '\\,\\mathrm{m^{3}/s}'
+ */
 export function texUnit(unit: string): string {
   if (!unit) return '';
   const hit = unitTexCache.get(unit);
@@ -61,6 +65,9 @@ export function texUnit(unit: string): string {
  * A number in TeX with `sig` significant figures; scientific form below 0.001
  * or from 10⁶ up. (Rounded by arithmetic rather than toPrecision, which is
  * several times slower in V8 and this runs dozens of times per calculation.)
+ * @example
+ * texNum(1.2192)  // → '1.219'
+ * texNum(8.948e-6)  // → '8.948\\times10^{-6}'
  */
 export function texNum(x: number, sig = 4): string {
   if (x === 0 || !Number.isFinite(x)) return x === 0 ? '0' : String(x);
@@ -84,12 +91,22 @@ export function texNum(x: number, sig = 4): string {
   return String(Math.round(x * p) / p);
 }
 
-/** A value with its unit in TeX. Example: tq(1.2192, 'm') → "1.219\,\mathrm{m}". */
+/**
+ * A value with its unit in TeX.
+ * @example
+ * tq(1.2192, 'm')  // → '1.219\\,\\mathrm{m}'
+ */
 export function tq(x: number, unit = '', sig = 4): string {
   return `${texNum(x, sig)}${texUnit(unit)}`;
 }
 
-/** Builds a step. Example: step('Lift ratio', 'r = h/H', 'r = 8.839/1.219', 7.25, '') → { title, formula, substituted, result: { value: 7.25, unit: '' } }. */
+/**
+ * Builds a step.
+ * @example
+ * const s = step('Lift ratio', 'r = h/H', 'r = 8.839/1.219', 7.25, '')
+ * [s.title, s.formula, s.substituted]  // → ['Lift ratio', 'r = h/H', 'r = 8.839/1.219']
+ * s.result  // → { value: 7.25, unit: '' }
+ */
 export function step(
   title: string,
   formula: string,
@@ -123,6 +140,9 @@ function assertFinite(v: unknown, path: string): void {
  * Wraps results into the common output and checks that no NaN or Infinity
  * escapes (a non-finite number here is an engine bug, never the user's input,
  * because inputs are validated first).
+ * @example
+ * finish({ q: 1 }, [], []).engineVersion  // → ENGINE_VERSION
+ * finish({ q: 0 / 0 }, [], [])  // throws Error
  */
 export function finish<R>(results: R, steps: Step[], warnings: Warning[]): CalcOutput<R> {
   assertFinite(results, 'results');

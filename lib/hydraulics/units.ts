@@ -112,7 +112,12 @@ const LABELS: Record<string, string> = {
   tempF: '°F',
 };
 
-/** A unit as a reader should see it, e.g. "m^3/s" → "m³/s", "gal/min" → "US gal/min". */
+/**
+ * A unit as a reader should see it.
+ * @example
+ * unitLabel('m^3/s')  // → 'm³/s'
+ * unitLabel('gal/min')  // → 'US gal/min'
+ */
 export function unitLabel(unit: string): string {
   return LABELS[unit] ?? unit;
 }
@@ -182,7 +187,9 @@ function correctionTable(): Record<string, number> {
   };
   const table: Record<string, number> = {};
   for (const [name, def] of Object.entries(EXACT_DEFINITIONS)) {
-    table[name] = Qty(def).baseScalar / Qty(1, unitOf[name]).baseScalar;
+    const unit = unitOf[name];
+    if (unit === undefined) throw new Error(`units.ts: no js-quantities unit listed for ${name}`);
+    table[name] = Qty(def).baseScalar / Qty(1, unit).baseScalar;
   }
   corrections = table;
   return table;
@@ -244,8 +251,11 @@ function checkKind(unit: string, kind: QuantityKind): boolean {
 
 /**
  * Converts `value` in `unit` to the SI unit of `kind`.
- * Example: toSI(2, 'gal/min', 'flow') = 2 × 231 × 0.0254³ / 60 = 1.26180394e-4 m³/s.
  * Throws EngineInputError (field "unit") if the unit is unknown or of another kind.
+ * Reference: NIST SP 811 (2008), Appendix B (1 US gal = 231 in³, 1 in = 0.0254 m).
+ * @example 2 × 231 × 0.0254³ / 60
+ * toSI(2, 'gal/min', 'flow')  // ≈ 1.261803928e-4
+ * toSI(2, 'gpm', 'length')  // throws EngineInputError
  */
 export function toSI(value: number, unit: string, kind: QuantityKind, field = 'unit'): number {
   const u = canonicalUnit(unit);
@@ -256,7 +266,11 @@ export function toSI(value: number, unit: string, kind: QuantityKind, field = 'u
   return (value * baseFactor(u)) / baseFactor(SI_UNIT[kind]);
 }
 
-/** Converts an SI value of `kind` to `unit`. Example: fromSI(0.3048, 'ft', 'length') = 1. */
+/**
+ * Converts an SI value of `kind` to `unit` (the inverse of {@link toSI}).
+ * @example
+ * fromSI(0.3048, 'ft', 'length')  // ≈ 1 ±1e-12
+ */
 export function fromSI(si: number, unit: string, kind: QuantityKind): number {
   const u = canonicalUnit(unit);
   if (!checkKind(u, kind)) throw new Error(`"${unit}" is not a unit of ${kindWords(kind)}`);
@@ -281,11 +295,11 @@ function splitNumber(text: string): { value: number; unit: string } | undefined 
   if (/^\d{1,3}(,\d{3})+(\.\d+)?/.test(s)) s = s.replace(/(\d),(?=\d{3})/g, '$1');
   else s = s.replace(/^(\d+),(\d+)/, '$1.$2');
   let m = /^(\d+)(?:\s+|-)(\d+)\/(\d+)\s*(.*)$/.exec(s);
-  if (m) return { value: Number(m[1]) + Number(m[2]) / Number(m[3]), unit: m[4] };
+  if (m) return { value: Number(m[1]) + Number(m[2]) / Number(m[3]), unit: m[4] ?? '' };
   m = /^(\d+)\/(\d+)\s*(.*)$/.exec(s);
-  if (m) return { value: Number(m[1]) / Number(m[2]), unit: m[3] };
+  if (m) return { value: Number(m[1]) / Number(m[2]), unit: m[3] ?? '' };
   m = /^([+-]?(?:\d+\.?\d*|\.\d+)(?:e[+-]?\d+)?)\s*(.*)$/i.exec(s);
-  if (m) return { value: Number(m[1]), unit: m[2] };
+  if (m) return { value: Number(m[1]), unit: m[2] ?? '' };
   return undefined;
 }
 
@@ -297,9 +311,12 @@ export type QuantityInput = string | number | { value: number; unit: string };
  *
  * Accepts "4 ft", "1.2 m", "2 gpm", "500 mL/min", "3 cups/min", "40 psi",
  * "3/4 in", "¾\"", "1 1/4 in", "4'" or { value: 2, unit: 'gal/min' }.
- * Worked example: parseQuantity('4 ft', 'length', 'fallM') = 4 × 0.3048 = 1.2192 m.
  * Throws EngineInputError naming `field` when the text is not a finite
  * number with a unit of that kind.
+ * @example 4 × 0.3048, ¾ in × 25.4 mm
+ * parseQuantity('4 ft', 'length', 'fallM')  // ≈ 1.2192 ±1e-12
+ * parseQuantity('¾"', 'smallLength')  // ≈ 0.01905 ±1e-12
+ * parseQuantity('4', 'length')  // throws EngineInputError
  */
 export function parseQuantity(input: QuantityInput, kind: QuantityKind, field = 'value'): number {
   let value: number;
@@ -343,13 +360,22 @@ export interface DisplayValue {
   label: string;
 }
 
-/** SI → display. Example: toDisplay('flow', 1.26180394e-4, 'US') → { value: 2, unit: 'gal/min', label: 'US gal/min' }. */
+/**
+ * SI → display.
+ * @example
+ * toDisplay('flow', 1.261803928e-4, 'US').value  // ≈ 2 ±1e-8
+ * toDisplay('flow', 1.261803928e-4, 'US').label  // → 'US gal/min'
+ */
 export function toDisplay(kind: QuantityKind, si: number, system: UnitSystem): DisplayValue {
   const unit = DISPLAY_UNITS[kind][system];
   return { value: fromSI(si, unit, kind), unit, label: unitLabel(unit) };
 }
 
-/** Display → SI. Example: fromDisplay('pressure', 40, 'US') = 40 × 6894.757 = 275790.3 Pa. */
+/**
+ * Display → SI. Reference: 1 psi = 1 lbf/in² = 0.45359237 kg × 9.80665 m/s² / 0.0254² m² (NIST SP 811).
+ * @example 40 × 6894.757
+ * fromDisplay('pressure', 40, 'US')  // ≈ 275790.3
+ */
 export function fromDisplay(kind: QuantityKind, value: number, system: UnitSystem): number {
   return toSI(value, DISPLAY_UNITS[kind][system], kind);
 }
@@ -362,6 +388,10 @@ const SMALL_LENGTH_FIELD = /(Diameter|WallThickness|Roughness|NotchHead|Depth|De
  * …M3s flow, …M3PerDay daily volume, …M3 volume, …M2 area, …Pa pressure, …Ms velocity,
  * …DiameterM / …WallThicknessM / …RoughnessM / …NotchHeadM / …DepthM small length, …M length,
  * …S time, …W power, …TempC temperature. Unknown suffix → undefined.
+ * @example
+ * kindOfField('drivePipe.insideDiameterM')  // → 'smallLength'
+ * kindOfField('fallM')  // → 'length'
+ * kindOfField('pumpType')  // → undefined
  */
 export function kindOfField(field: string): QuantityKind | undefined {
   const leaf = field.split('.').pop() ?? field;
@@ -380,12 +410,20 @@ export function kindOfField(field: string): QuantityKind | undefined {
   return undefined;
 }
 
-/** Shows a field's SI value in a system's units; dimensionless when the field has no known kind. */
+/**
+ * Shows a field's SI value in a system's units; dimensionless when the field has no known kind.
+ * @example 1.2192 m of fall is 4 ft
+ * fieldToDisplay('fallM', 1.2192, 'US').value  // ≈ 4 ±1e-12
+ */
 export function fieldToDisplay(field: string, si: number, system: UnitSystem): DisplayValue {
   return toDisplay(kindOfField(field) ?? 'dimensionless', si, system);
 }
 
-/** Reads a field's display value back to SI. */
+/**
+ * Reads a field's display value back to SI.
+ * @example 29 ft of lift
+ * fieldFromDisplay('liftM', 29, 'US')  // ≈ 8.8392 ±1e-12
+ */
 export function fieldFromDisplay(field: string, value: number, system: UnitSystem): number {
   return fromDisplay(kindOfField(field) ?? 'dimensionless', value, system);
 }

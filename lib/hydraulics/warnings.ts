@@ -96,12 +96,14 @@ const SAFETY: ReadonlySet<WarningCode> = new Set<WarningCode>([
   'air-chamber-safety',
 ]);
 
-/** True for warnings that must defer to local codes and licensed plumbers or engineers. */
-export function isSafetyWarning(code: WarningCode): boolean {
-  return SAFETY.has(code);
-}
-
-/** Builds a warning; safety warnings get the deferral sentence appended. Example: warn('frost-risk', 'Drain it.') → { code, severity: 'caution', guide: 'care-frost-floods-and-water-rights', message: 'Drain it. Follow local codes …' }. */
+/**
+ * Builds a warning; safety warnings get the deferral sentence appended.
+ * @example
+ * warn('frost-risk', 'Drain it.').severity  // → 'caution'
+ * warn('frost-risk', 'Drain it.').guide  // → 'care-frost-floods-and-water-rights'
+ * warn('frost-risk', 'Drain it.').message  // → `Drain it. ${DEFER}`
+ * warn('few-trials', 'Time three fills.').message  // → 'Time three fills.'
+ */
 export function warn(code: WarningCode, message: string): Warning {
   const info = WARNING_INFO[code];
   const text = SAFETY.has(code) ? `${message} ${DEFER}` : message;

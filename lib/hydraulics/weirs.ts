@@ -1,7 +1,9 @@
 /**
  * Thin-plate V-notch weirs, after the U.S. Bureau of Reclamation, "Water
- * Measurement Manual" (3rd ed., revised 1997/2001), chapter 7, §7 (V-notch
- * weirs of any angle) and the 90° rating equation.
+ * Measurement Manual" (3rd ed., revised 1997/2001), chapter 7, §7 "V-Notch
+ * Weirs of Any Angle" (eq. 7-3; k_h and Ce from figures 7-6a and 7-6b, after
+ * Kulin & Compton, National Bureau of Standards, 1975) and the 90° rating
+ * equation.
  *
  * Kindsvater-Shen (USBR WMM eq. 7-3), foot-second units:
  *   Q = 4.28 · Ce · tan(θ/2) · (h₁ + k_h)^2.5   (Q ft³/s, h₁ and k_h ft)
@@ -15,10 +17,11 @@
  * 0.2 ft ≤ h₁ ≤ 1.25 ft; full contraction needs h₁/P ≤ 0.4, h₁/B ≤ 0.2,
  * P ≥ 1.5 ft and B ≥ 3 ft (P crest height above the approach bed, B approach width).
  */
+import { bracketRows, type Table } from './tables';
 import { toSI } from './units';
 
 /** [θ degrees, Ce, k_h ft] — readings of USBR WMM figure 7-6 (from memory). */
-const CE_KH: readonly (readonly [number, number, number])[] = [
+const CE_KH: Table<readonly [number, number, number]> = [
   [25, 0.595, 0.0075],
   [30, 0.59, 0.0065],
   [40, 0.583, 0.0052],
@@ -41,23 +44,34 @@ function ftUnits(): { ft: number; cfs: number } {
   return { ft: FT, cfs: CFS };
 }
 
-/** Metres → feet through the units module: ft = m/0.3048 (NIST SP 811). Example: 0.1524 m → 0.5 ft. */
+/**
+ * Metres → feet through the units module: ft = m/0.3048 (NIST SP 811).
+ * @example
+ * toFeet(0.1524)  // ≈ 0.5
+ */
 export function toFeet(m: number): number {
   return m / ftUnits().ft;
 }
 
-/** Feet → metres through the units module: m = ft × 0.3048 (NIST SP 811). Example: 0.0029 ft → 0.000884 m. */
+/**
+ * Feet → metres through the units module: m = ft × 0.3048 (NIST SP 811).
+ * @example k_h of a 90° notch
+ * fromFeet(0.0029)  // ≈ 0.000884
+ */
 export function fromFeet(ft: number): number {
   return ft * ftUnits().ft;
 }
 
-/** Ce and k_h (ft) at a notch angle, interpolated linearly in the table. Example: 90° → 0.578, 0.0029 ft. */
+/**
+ * Ce and k_h (ft) at a notch angle, interpolated linearly in the table; angles clamped to 25°–100°.
+ * Reference: USBR WMM figures 7-6a and 7-6b (readings from memory; the 90° values are the ones quoted with the manual).
+ * @example
+ * weirCoefficients(90).ce  // ≈ 0.578
+ * weirCoefficients(90).khFt  // ≈ 0.0029
+ */
 export function weirCoefficients(angleDeg: number): { ce: number; khFt: number } {
   const a = Math.min(100, Math.max(25, angleDeg));
-  let i = 0;
-  while (i < CE_KH.length - 2 && CE_KH[i + 1][0] < a) i++;
-  const p = CE_KH[i];
-  const q = CE_KH[i + 1];
+  const [p, q] = bracketRows(CE_KH, a);
   const w = (a - p[0]) / (q[0] - p[0]);
   return { ce: p[1] + (q[1] - p[1]) * w, khFt: p[2] + (q[2] - p[2]) * w };
 }
@@ -66,9 +80,11 @@ export function weirCoefficients(angleDeg: number): { ce: number; khFt: number }
  * V-notch discharge by Kindsvater-Shen.
  * Formula: Q = 4.28·Ce·tan(θ/2)·(h₁ + k_h)^2.5 in ft and ft³/s, converted to SI.
  * Units: head m, angle degrees; returns m³/s. Range: 25°–100°, 0.2–1.25 ft head.
- * Worked example: 90°, h₁ = 0.5 ft (0.1524 m): 4.28 × 0.578 × 1 × 0.5029^2.5 =
- * 0.4437 ft³/s = 0.012565 m³/s (754 L/min).
  * Reference: USBR Water Measurement Manual, ch. 7, eq. 7-3 (Kulin & Compton 1975).
+ * @example 90°, h₁ = 0.5 ft (0.1524 m): 4.28 × 0.578 × 1 × 0.5029^2.5
+ * fromSI(vNotchFlow(0.1524, 90), 'ft^3/s', 'flow')  // ≈ 0.4437
+ * vNotchFlow(0.1524, 90)  // ≈ 0.012564
+ * vNotchFlow(0.1524, 90) * 60000  // ≈ 754
  */
 export function vNotchFlow(headM: number, angleDeg = 90): number {
   const { ft, cfs } = ftUnits();
@@ -80,8 +96,11 @@ export function vNotchFlow(headM: number, angleDeg = 90): number {
 
 /**
  * 90° V-notch by the USBR simplified rating (Cone's formula): Q = 2.49·h₁^2.48 ft³/s.
- * Worked example: h₁ = 1 ft → 2.49 ft³/s (0.07051 m³/s); h₁ = 0.5 ft → 0.4452 ft³/s.
+ * Units: head m; returns m³/s. Range: as {@link vNotchFlow}.
  * Reference: USBR Water Measurement Manual, ch. 7 (90° V-notch equation).
+ * @example h₁ = 1 ft and 0.5 ft
+ * vNotch90Usbr(0.3048)  // ≈ 0.07051
+ * fromSI(vNotch90Usbr(0.1524), 'ft^3/s', 'flow')  // ≈ 0.4463
  */
 export function vNotch90Usbr(headM: number): number {
   const { ft, cfs } = ftUnits();
@@ -89,8 +108,13 @@ export function vNotch90Usbr(headM: number): number {
 }
 
 /**
- * Head limits and full-contraction limits in metres, converted from the foot values in the module comment:
- * 0.2 ft = 0.061 m, 1.25 ft = 0.381 m, P ≥ 1.5 ft = 0.457 m, B ≥ 3 ft = 0.914 m. Reference: USBR WMM ch. 7 (from memory).
+ * Head limits and full-contraction limits in metres, converted from the foot values in the module comment.
+ * Reference: USBR WMM ch. 7 §7 (head limits; the contraction limits from memory).
+ * @example 0.2 ft, 1.25 ft, P ≥ 1.5 ft, B ≥ 3 ft
+ * weirLimits().minHeadM  // ≈ 0.061
+ * weirLimits().maxHeadM  // ≈ 0.381
+ * weirLimits().minCrestM  // ≈ 0.457
+ * weirLimits().minWidthM  // ≈ 0.914
  */
 export function weirLimits(): { minHeadM: number; maxHeadM: number; minCrestM: number; minWidthM: number } {
   const { ft } = ftUnits();

@@ -107,12 +107,19 @@ function deliveryCurve(
  * D'Aubuisson q·h/(Q·H) and Rankine q·(h−H)/((Q−q)·H).
  * Units: Q, q m³/s; H, h m (both measured from the pump); η dimensionless; power W.
  * Range: 0 < H ≤ 100 m, H < h ≤ 1000 m, 0 < Q ≤ 0.1 m³/s, 0 < η ≤ 1.
- * Worked example: a smallholding's ½-inch ram on a spring-fed brook, Q = 2 US
- * gal/min (1.2618e-4 m³/s), H = 4 ft (1.2192 m), h = 29 ft (8.8392 m): h/H = 7.25,
- * typical homemade η = 0.514 → q = 0.514 × 1.2618e-4 × 1.2192/8.8392 =
- * 8.95e-6 m³/s (537 mL/min, 773 L/day); power in = 999.7 × 9.80665 × 1.2618e-4 × 1.2192 = 1.51 W.
  * Reference: D'Aubuisson relation as used by e.g. Water for the World RWS.4.D.5,
- * D = S·F·E/L; efficiency bands in efficiency.ts (from memory).
+ * D = S·F·E/L (from memory); efficiency bands in efficiency.ts (from memory).
+ * @example a smallholding's ½-inch ram on a spring-fed brook
+ * // Q = 2 US gal/min (1.2618e-4 m³/s), H = 4 ft (1.2192 m), h = 29 ft (8.8392 m): h/H = 7.25,
+ * // typical homemade η = 0.514 → q = 0.514 × 1.2618e-4 × 1.2192/8.8392 (537 mL/min, 773 L/day)
+ * const r = estimateYield({ driveFlowM3s: toSI(2, 'gal/min', 'flow'), fallM: 1.2192, liftM: 8.8392 }).results
+ * r.liftRatio  // ≈ 7.25
+ * r.efficiencyUsed  // ≈ 0.514
+ * r.deliveredFlowM3s  // ≈ 8.95e-6
+ * fromSI(r.deliveredFlowM3s, 'mL/min', 'flow')  // ≈ 537
+ * r.deliveredPerDayM3PerDay * 1000  // ≈ 773
+ * // power in = 999.7 × 9.80665 × 1.2618e-4 × 1.2192
+ * r.powerInW  // ≈ 1.51
  */
 export function estimateYield(input: YieldEstimateInput): CalcOutput<YieldEstimateResults> {
   const v = parseInput(yieldEstimateSchema, input);
