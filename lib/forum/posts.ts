@@ -6,7 +6,7 @@ import type { SessionUser } from '@/lib/auth/session';
 import { can, REFUSAL } from '@/lib/auth/policy';
 import { attachPhotos } from '@/lib/photos/store';
 import { ForumError } from './errors';
-import { validateSiteSheet } from './site-sheet';
+import { validateSiteSheet } from '@/lib/calculators/site-sheet';
 import { postsChanged, threadChanged } from './after-write';
 
 /** Runs a write, then brings the thread's search documents and its cached page up to date (same request). */

@@ -28,4 +28,3 @@ export * from './deliveryLine';
 export * from './sourceFlow';
 export * from './demandAndStorage';
 export * from './stallCheck';
-export * from './registry';
