@@ -4,14 +4,13 @@
  *   npx vitest bench --run bench/keystroke.bench.ts
  */
 import { bench, describe } from 'vitest';
-import { calculatorDefs } from '@/components/calculators/defs';
-import { initialState, readForm } from '@/components/calculators/kit/state';
+import { CALCULATOR_LIST, initialState, readForm, visibleFields } from '@/lib/calculators';
 
 describe('one keystroke: read the form and recompute', () => {
-  for (const [id, def] of Object.entries(calculatorDefs)) {
+  for (const def of CALCULATOR_LIST) {
     const state = initialState(def.fields, {}, def.defaults, 'US');
-    const fields = def.visible ? def.fields.filter((f) => def.visible!(f.name, state)) : def.fields;
-    bench(id, () => {
+    const fields = visibleFields(def, state);
+    bench(def.id, () => {
       const { values } = readForm(fields, state);
       def.run(def.toInput ? def.toInput(values) : values);
     });

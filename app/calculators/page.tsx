@@ -1,6 +1,6 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
-import { CALCULATOR_CATALOGUE } from '@/lib/calculators-catalogue';
+import { CALCULATOR_LIST } from '@/lib/calculators';
 
 export const metadata: Metadata = {
   title: 'Calculators',
@@ -16,7 +16,7 @@ export default function CalculatorsPage() {
         substitute for local codes or a licensed plumber or engineer.
       </p>
       <ul className="grid gap-3 sm:grid-cols-2">
-        {CALCULATOR_CATALOGUE.map((c) => (
+        {CALCULATOR_LIST.map((c) => (
           <li key={c.id}>
             <Link href={`/calculators/${c.id}`} className="cw-card block h-full no-underline hover:border-clay">
               <h2 className="font-semibold text-clay-600 dark:text-clay-300">{c.name}</h2>

@@ -2,11 +2,8 @@
 
 import { useCallback, useState } from 'react';
 import { CalculatorCard } from '@/components/calculators/kit/CalculatorCard';
-import { calculatorDefs } from '@/components/calculators/defs';
-import { shareQuery } from '@/components/calculators/kit/state';
-import type { FormState } from '@/components/calculators/kit/types';
-import { CALCULATOR_CATALOGUE } from '@/lib/calculators-catalogue';
-import { calculatorPropsFromSiteSheet } from './site-sheet';
+import { CALCULATOR_LIST, getCalculator, shareQuery, type FormState } from '@/lib/calculators';
+import { calculatorPropsFromSiteSheet } from '@/lib/calculators/site-sheet';
 import { call } from './api';
 
 /**
@@ -22,6 +19,7 @@ export function AnswerComposer({ questionId, siteSheet, onPosted }: { questionId
   const [error, setError] = useState<{ field?: string; message: string } | null>(null);
   const [busy, setBusy] = useState(false);
   const onOutput = useCallback((state: FormState) => setForm(state), []);
+  const def = getCalculator(tool);
 
   return (
     <form
@@ -57,15 +55,15 @@ export function AnswerComposer({ questionId, siteSheet, onPosted }: { questionId
         </label>
         <select id="answer-tool" value={tool} onChange={(e) => { setTool(e.target.value); setAttached(null); }} className="rounded-md border border-limestone-400 bg-limestone-50 p-2 dark:bg-creek-950">
           <option value="">None</option>
-          {CALCULATOR_CATALOGUE.map((c) => (
+          {CALCULATOR_LIST.map((c) => (
             <option key={c.id} value={c.id}>
               {c.name}
             </option>
           ))}
         </select>
-        {tool && calculatorDefs[tool] ? (
+        {def ? (
           <>
-            <CalculatorCard key={tool} def={calculatorDefs[tool]} props={calculatorPropsFromSiteSheet(tool, siteSheet)} onOutput={onOutput} />
+            <CalculatorCard key={tool} def={def} props={calculatorPropsFromSiteSheet(def.id, siteSheet)} onOutput={onOutput} />
             {attached ? (
               <p role="status" className="text-sm text-moss-600 dark:text-moss-300" data-testid="calculation-attached">
                 Worked calculation attached. Change it and attach again to replace it.
@@ -77,7 +75,7 @@ export function AnswerComposer({ questionId, siteSheet, onPosted }: { questionId
               disabled={!form}
               onClick={async () => {
                 if (!form) return;
-                const r = await call<{ id: string }>('POST', '/api/calculations', { tool, inputs: Object.fromEntries(shareQuery(calculatorDefs[tool].fields, form).entries()) });
+                const r = await call<{ id: string }>('POST', '/api/calculations', { tool, inputs: Object.fromEntries(shareQuery(def.fields, form).entries()) });
                 if (r.ok) setAttached({ id: r.data.id, tool });
                 else setError(r);
               }}

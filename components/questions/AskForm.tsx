@@ -6,9 +6,8 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import type { z } from 'zod';
 import { SYMPTOM_LABELS, SYMPTOMS } from '@/lib/hydraulics';
 import { askQuestionSchema, SITE_SHEET_FIELDS, type SiteSheetField } from '@/lib/validation/question';
-import { computeFromForm } from '@/components/calculators/recompute';
-import { stallCheckDef } from '@/components/calculators/defs/stallCheck';
-import { seriesOptions, sizeOptions } from '@/components/calculators/defs/shared';
+import { CALCULATORS, recompute, seriesOptions, sizeOptions } from '@/lib/calculators';
+import { CALCULATOR_VIEWS } from '@/components/calculators/views';
 import { inputClass, labelClass, sendJson } from '@/components/forms/api';
 import { MemberText } from '@/components/posts/MemberText';
 import { PhotoPicker } from '@/components/photos/PhotoPicker';
@@ -62,11 +61,11 @@ function runStall(sheet: SiteSheet): StallView {
   try {
     // With a box still empty, check what the member did type: stand-ins fill the gaps only so the
     // engine can read the rest, and only its complaints about the member's own numbers are shown.
-    const probe = missing.length ? { ...props, ...Object.fromEntries(missing.map((k) => [k, stallCheckDef.defaults[k] ?? ''])) } : props;
-    const r = computeFromForm('stall-check', probe);
+    const probe = missing.length ? { ...props, ...Object.fromEntries(missing.map((k) => [k, CALCULATORS['stall-check'].defaults[k] ?? ''])) } : props;
+    const r = recompute(CALCULATORS['stall-check'], probe);
     if (!r.ok) return r.field && (missing as readonly string[]).includes(r.field) ? needs(missing) : { kind: 'refused', field: r.field, message: r.message };
     if (missing.length) return needs(missing);
-    return { kind: 'causes', node: stallCheckDef.extra?.(r.output.results as never, 'US') };
+    return { kind: 'causes', node: CALCULATOR_VIEWS['stall-check']?.extra?.(r.output.results, 'US') };
   } catch {
     return missing.length ? needs(missing) : { kind: 'idle' };
   }

@@ -2,7 +2,7 @@
 
 import Link from 'next/link';
 import { useUnits } from '@/components/units/UnitsProvider';
-import { siteSheetRows } from './site-sheet';
+import { siteSheetRows } from '@/lib/calculators/site-sheet';
 
 /** A question's site sheet in the reader's units (the page is the same for every reader; the units are the reader's own). */
 export function SiteSheetCard({ sheet, fieldLogEntryId }: { sheet: Record<string, string> | null; fieldLogEntryId: number | null }) {

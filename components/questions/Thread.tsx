@@ -7,7 +7,7 @@ import { MemberText } from '@/components/posts/MemberText';
 import { CalculatorById } from '@/components/calculators/Calculators';
 import { can } from '@/lib/auth/policy';
 import type { AnswerView, ReplyView, ThreadView } from '@/lib/forum/thread';
-import { catalogueEntry } from '@/lib/calculators-catalogue';
+import { getCalculator } from '@/lib/calculators';
 import { PhotoGallery } from '@/components/photos/PhotoGallery';
 import { EditBody, HelpfulButton, RevisionHistory } from './PostControls';
 import { AnswerComposer, ReplyComposer } from './AnswerComposer';
@@ -151,7 +151,7 @@ function Answer({
       {a.calculation ? (
         <div className="flex flex-col gap-1" data-testid="answer-calculation">
           <p className="text-sm font-semibold">
-            Worked calculation: {catalogueEntry(a.calculation.tool)?.name ?? a.calculation.tool} —{' '}
+            Worked calculation: {getCalculator(a.calculation.tool)?.name ?? a.calculation.tool} —{' '}
             <Link href={`/calculations/${a.calculation.id}`} className="cw-link">
               permalink
             </Link>

@@ -1,5 +1,6 @@
 import { randomBytes } from 'node:crypto';
 import type { Transaction } from 'sequelize';
+import type { CalculatorId } from '@/lib/calculators';
 import { initModels } from '@/models';
 
 /** A permalink id: 10 characters of base62 from 8 random bytes — not guessable, short enough to share. */
@@ -15,7 +16,7 @@ export function newPublicId(): string {
 }
 
 export interface NewWorkedCalculation {
-  tool: string;
+  tool: CalculatorId;
   /** the inputs as typed, each with its unit */
   form: Record<string, string>;
   results: unknown;

@@ -8,7 +8,7 @@ import type { SessionUser } from '@/lib/auth/session';
 import { can, REFUSAL } from '@/lib/auth/policy';
 import { attachPhotos } from '@/lib/photos/store';
 import { ForumError } from './errors';
-import { validateSiteSheet } from './site-sheet';
+import { validateSiteSheet } from '@/lib/calculators/site-sheet';
 import { postsChanged, threadChanged } from './after-write';
 import { findWritablePost, namedInBody, type PostType } from './visibility';
 import { checkPostText } from './post-text';

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { CALCULATOR_IDS } from '@/lib/hydraulics/registry';
+import { CALCULATOR_IDS } from '@/lib/calculators/ids';
 
 export const GUIDE_LEVELS = ['first build', 'working system', 'advanced'] as const;
 export type GuideLevel = (typeof GUIDE_LEVELS)[number];

@@ -50,5 +50,3 @@ export {
   STALL_CAUSE_CODES, SYMPTOMS, SYMPTOM_LABELS, type StallCauseCode, type Symptom,
 } from './stallCauses';
 
-// The calculators by id — goes when registry.ts gives way to lib/calculators (issue 18).
-export { CALCULATOR_IDS, calculators, getCalculator, runCalculator } from './registry';

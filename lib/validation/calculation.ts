@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { CALCULATOR_IDS } from '@/lib/hydraulics/registry';
+import { CALCULATOR_IDS } from '@/lib/calculators/ids';
 
 /** POST /api/calculations: the tool and its inputs as typed (share-link form). */
 export const saveCalculationSchema = z.object({

@@ -4,6 +4,8 @@
  * watering its far paddock; and a cabin on seasonal Sorrel Creek. No real people,
  * places or products. Numbers are plausible, not measured.
  */
+import type { CalculatorId } from '@/lib/calculators';
+
 /** Every demo account signs in with this password (README lists the accounts). Demo only. */
 export const DEMO_PASSWORD = 'lift-with-falling-water';
 
@@ -187,7 +189,7 @@ export const demoSafetyChecks: {
 ];
 
 /** Saved worked calculations; fixed ids so README and tests can link to them. */
-export const demoCalculations: { publicId?: string; tool: string; title: string; author: string; daysAgo: number; inputs: Record<string, string> }[] = [
+export const demoCalculations: { publicId?: string; tool: CalculatorId; title: string; author: string; daysAgo: number; inputs: Record<string, string> }[] = [
   {
     publicId: 'FerncombeY1',
     tool: 'yield-estimate',

@@ -1,7 +1,7 @@
 import type { Sequelize } from 'sequelize';
 import { initModels } from '@/models';
 import { contentHash, readGuideFile } from '@/lib/guides/content';
-import { computeFromForm } from '@/components/calculators/recompute';
+import { computeFromForm } from '@/lib/calculators';
 import { newPublicId } from '@/lib/calculations/store';
 import { hashPassword } from '@/lib/auth/password';
 import { demoThreads } from './demo-forum-data';

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { CALCULATOR_IDS, ENGINE_VERSION, calculators, getCalculator, runCalculator } from '@/lib/hydraulics';
+import { ENGINE_VERSION } from '@/lib/hydraulics';
+import { CALCULATOR_IDS, CALCULATORS as calculators, getCalculator, runCalculator } from '@/lib/calculators';
 import { FALL, LIFT, deliveryLine, drivePipe, gpm } from './fixtures';
 
 const samples: Record<(typeof CALCULATOR_IDS)[number], unknown> = {

@@ -11,7 +11,7 @@ import { POST as flag } from '@/app/api/flags/route';
 import { GET as queue } from '@/app/api/review/route';
 import { estimateYield, toSI } from '@/lib/hydraulics';
 import { getComparison, getEntry } from '@/lib/field-log/store';
-import { entrySiteSheet } from '@/lib/field-log/site-sheet';
+import { entrySiteSheet } from '@/lib/calculators/site-sheet';
 import { POST as ask } from '@/app/api/questions/route';
 import { demoFieldLog } from '@/migrations/seed/demo-field-log';
 import { initModels } from '@/models';

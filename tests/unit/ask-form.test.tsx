@@ -49,7 +49,7 @@ describe('AskForm', () => {
 
   it('lists likely causes, with guide links, for a sensible site sheet that stops after some beats', () => {
     render(<AskForm tags={TAGS} />);
-    // the stall check card's own defaults (components/calculators/defs/stallCheck.tsx): invented demo site
+    // the stall check card's own defaults (lib/calculators/defs/stallCheck.ts): invented demo site
     type('Fall', '4 ft');
     type('Lift', '29 ft');
     type('Drive pipe length', '24 ft');

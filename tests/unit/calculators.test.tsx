@@ -1,10 +1,8 @@
 // @vitest-environment happy-dom
 import { afterEach, describe, expect, it } from 'vitest';
 import { cleanup, fireEvent, render, screen, within } from '@testing-library/react';
-import { calculatorDefs } from '@/components/calculators/defs';
+import { CALCULATOR_IDS, CALCULATORS as calculatorDefs, computeFromForm, convertState, initialState, readForm, shareQuery } from '@/lib/calculators';
 import { CalculatorCard } from '@/components/calculators/kit/CalculatorCard';
-import { initialState, readForm, shareQuery, convertState } from '@/components/calculators/kit/state';
-import { computeFromForm } from '@/components/calculators/recompute';
 
 afterEach(cleanup);
 
@@ -20,7 +18,7 @@ const EDIT: Record<string, { label: RegExp; value: string }> = {
 };
 
 describe('calculator cards', () => {
-  it.each(Object.keys(calculatorDefs))('%s mounts with its defaults and recomputes when an input changes', (id) => {
+  it.each(CALCULATOR_IDS)('%s mounts with its defaults and recomputes when an input changes', (id) => {
     const def = calculatorDefs[id];
     render(<CalculatorCard def={def} />);
     const results = screen.getByTestId(`${id}-results`);
@@ -50,7 +48,7 @@ describe('calculator cards', () => {
 });
 
 describe('share links', () => {
-  it.each(Object.keys(calculatorDefs))('%s: a share link reopens the same inputs and the same result', (id) => {
+  it.each(CALCULATOR_IDS)('%s: a share link reopens the same inputs and the same result', (id) => {
     const def = calculatorDefs[id];
     const state = initialState(def.fields, {}, def.defaults, 'US');
     const q = shareQuery(def.fields, state);

@@ -4,7 +4,7 @@ import { apiError, serverError, validationError } from '@/lib/http/errors';
 import { currentUser } from '@/lib/auth/session';
 import { can, REFUSAL } from '@/lib/auth/policy';
 import { saveWorkedCalculation } from '@/lib/calculations/store';
-import { computeFromForm } from '@/components/calculators/recompute';
+import { computeFromForm } from '@/lib/calculators';
 
 export const dynamic = 'force-dynamic';
 

@@ -3,9 +3,8 @@ import Link from 'next/link';
 import { notFound } from 'next/navigation';
 import 'katex/dist/katex.min.css';
 import { findWorkedCalculation } from '@/lib/calculations/store';
-import { catalogueEntry } from '@/lib/calculators-catalogue';
 import { isDatabaseUnavailable } from '@/lib/db/errors';
-import { computeFromForm, resultsDiffer } from '@/components/calculators/recompute';
+import { computeFromForm, getCalculator, resultsDiffer } from '@/lib/calculators';
 import { CalculatorById } from '@/components/calculators/Calculators';
 import { ServiceUnavailable } from '@/components/ServiceUnavailable';
 
@@ -23,7 +22,7 @@ export default async function WorkedCalculationPage({ params }: { params: Promis
     throw err;
   }
   if (!saved) notFound();
-  const entry = catalogueEntry(saved.tool);
+  const entry = getCalculator(saved.tool);
   const form = saved.inputs as Record<string, string>;
   const now = computeFromForm(saved.tool, form);
   const changed = !now.ok || resultsDiffer(saved.results, now.output.results);

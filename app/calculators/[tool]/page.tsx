@@ -2,7 +2,7 @@ import type { Metadata } from 'next';
 import Link from 'next/link';
 import { notFound } from 'next/navigation';
 import 'katex/dist/katex.min.css';
-import { CALCULATOR_CATALOGUE, catalogueEntry } from '@/lib/calculators-catalogue';
+import { CALCULATOR_LIST, getCalculator } from '@/lib/calculators';
 import { CalculatorById } from '@/components/calculators/Calculators';
 import { Caution } from '@/components/Caution';
 
@@ -10,13 +10,13 @@ type Params = Promise<{ tool: string }>;
 type SP = Promise<Record<string, string | string[] | undefined>>;
 
 export async function generateMetadata({ params }: { params: Params }): Promise<Metadata> {
-  const entry = catalogueEntry((await params).tool);
+  const entry = getCalculator((await params).tool);
   return entry ? { title: entry.name, description: entry.line } : {};
 }
 
 export default async function CalculatorPage({ params, searchParams }: { params: Params; searchParams: SP }) {
   const { tool } = await params;
-  const entry = catalogueEntry(tool);
+  const entry = getCalculator(tool);
   if (!entry) notFound();
   const sp = await searchParams;
   // The share link's inputs, as typed (with their units).
@@ -43,7 +43,7 @@ export default async function CalculatorPage({ params, searchParams }: { params:
         moving water can hurt people: follow local codes and ask a licensed plumber or engineer where it matters.
       </Caution>
       <nav aria-label="Other calculators" className="flex flex-wrap gap-3 text-sm" data-print-hide>
-        {CALCULATOR_CATALOGUE.filter((c) => c.id !== tool).map((c) => (
+        {CALCULATOR_LIST.filter((c) => c.id !== tool).map((c) => (
           <Link key={c.id} href={`/calculators/${c.id}`} className="cw-link">
             {c.name}
           </Link>

@@ -5,7 +5,7 @@ import { cache } from 'react';
 import { initModels } from '@/models';
 import type { Role } from '@/models/User';
 import { isDatabaseUnavailable } from '@/lib/db/errors';
-import { catalogueEntry } from '@/lib/calculators-catalogue';
+import { getCalculator } from '@/lib/calculators';
 import { ServiceUnavailable } from '@/components/ServiceUnavailable';
 
 export const dynamic = 'force-dynamic';
@@ -88,10 +88,10 @@ export default async function PersonPage({ params }: { params: Promise<{ handle:
             {calculations.map((c) => (
               <li key={c.publicId} className="cw-card py-3">
                 <Link href={`/calculations/${c.publicId}`} className="cw-link font-semibold">
-                  {c.title ?? `${catalogueEntry(c.tool)?.name ?? c.tool}: worked calculation`}
+                  {c.title ?? `${getCalculator(c.tool)?.name ?? c.tool}: worked calculation`}
                 </Link>
                 <p className="cw-muted text-sm">
-                  {catalogueEntry(c.tool)?.name ?? c.tool} · {dateFmt.format(c.createdAt)}
+                  {getCalculator(c.tool)?.name ?? c.tool} · {dateFmt.format(c.createdAt)}
                 </p>
               </li>
             ))}

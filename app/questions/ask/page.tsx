@@ -8,7 +8,7 @@ import { initModels } from '@/models';
 import { ServiceUnavailable } from '@/components/ServiceUnavailable';
 import { AskForm } from '@/components/questions/AskForm';
 import { getEntry } from '@/lib/field-log/store';
-import { entrySiteSheet } from '@/lib/field-log/site-sheet';
+import { entrySiteSheet } from '@/lib/calculators/site-sheet';
 import { idParam } from '@/lib/http/guard';
 
 export const metadata: Metadata = { title: 'Ask a question' };

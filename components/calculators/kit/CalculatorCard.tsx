@@ -1,58 +1,27 @@
 'use client';
 
 import { useEffect, useMemo, useRef, useState } from 'react';
-import { EngineInputError } from '@/lib/hydraulics';
 import { UNIT_CHOICES, unitLabel } from '@/lib/hydraulics';
 import type { CalcOutput } from '@/lib/hydraulics';
+import { computeForm, convertState, displayQuantity, formatNumber, initialState, shareQuery, visibleFields, type Calculator, type FieldDef, type FormState } from '@/lib/calculators';
 import { useUnits } from '@/components/units/UnitsProvider';
-import { convertState, initialState, readForm, shareQuery } from './state';
-import { displayQuantity, formatNumber } from './format';
+import { calculatorView } from '../views';
 import { Working } from './Working';
 import { SaveCalculation } from './SaveCalculation';
-import type { CalculatorDef, FieldDef, FormState } from './types';
-
-type Outcome<R> = { ok: true; output: CalcOutput<R> } | { ok: false; fieldErrors: Record<string, string>; general?: string };
-
-type Computed<R> = Outcome<R> & { input?: Record<string, unknown> };
-
-function visibleFields<R>(def: CalculatorDef<R>, state: FormState) {
-  return def.visible ? def.fields.filter((f) => def.visible!(f.name, state)) : def.fields;
-}
-
-function compute<R>(def: CalculatorDef<R>, state: FormState): Computed<R> {
-  const { values, errors } = readForm(visibleFields(def, state), state);
-  if (Object.keys(errors).length > 0) return { ok: false, fieldErrors: errors };
-  try {
-    return { ok: true, output: def.run(def.toInput ? def.toInput(values) : values), input: values };
-  } catch (err) {
-    if (err instanceof EngineInputError) {
-      const fieldErrors: Record<string, string> = {};
-      const known = new Set(def.fields.map((f) => f.name));
-      const general: string[] = [];
-      for (const issue of err.issues) {
-        const field = [...known].find((k) => issue.field === k || issue.field.startsWith(`${k}.`));
-        if (field) fieldErrors[field] ??= issue.message;
-        else general.push(`${issue.field}: ${issue.message}`);
-      }
-      return { ok: false, fieldErrors, general: general.join('; ') || undefined };
-    }
-    return { ok: false, fieldErrors: {}, general: 'This calculation could not be done with these numbers.' };
-  }
-}
 
 /**
  * A live calculator: inputs with unit pickers on one side, large results with units
  * on the other, warnings in amber, the working in KaTeX, a chart where a curve says
  * more, and a share link that reopens the same inputs.
  */
-export function CalculatorCard<R>({
+export function CalculatorCard({
   def,
   props = {},
   onOutput,
 }: {
-  def: CalculatorDef<R>;
+  def: Calculator;
   props?: Record<string, string | undefined>;
-  onOutput?: (state: FormState, output: CalcOutput<R> | null) => void;
+  onOutput?: (state: FormState, output: CalcOutput<unknown> | null) => void;
 }) {
   const { units } = useUnits();
   const [state, setState] = useState<FormState>(() => initialState(def.fields, props, def.defaults, units));
@@ -67,7 +36,7 @@ export function CalculatorCard<R>({
     }
   }, [units, def.fields]);
 
-  const outcome = useMemo(() => compute(def, state), [def, state]);
+  const outcome = useMemo(() => computeForm(def, state), [def, state]);
   useEffect(() => {
     onOutput?.(state, outcome.ok ? outcome.output : null);
   }, [state, outcome, onOutput]);
@@ -80,19 +49,19 @@ export function CalculatorCard<R>({
     <section className="cw-card my-6 min-w-0 max-w-full overflow-hidden font-sans not-prose" data-calculator={def.id} aria-labelledby={`${def.id}-title`}>
       <header className="mb-3 flex flex-wrap items-baseline justify-between gap-2">
         <h3 id={`${def.id}-title`} className="text-lg font-semibold">
-          {def.title}
+          {def.name}
         </h3>
         <p className="cw-muted text-xs">{def.blurb}</p>
       </header>
       <div className="grid gap-6 md:grid-cols-2">
-        <form className="flex min-w-0 flex-col gap-3" onSubmit={(e) => e.preventDefault()} aria-label={`${def.title} inputs`}>
+        <form className="flex min-w-0 flex-col gap-3" onSubmit={(e) => e.preventDefault()} aria-label={`${def.name} inputs`}>
           {visibleFields(def, state).map((f) => (
             <Field key={f.name} id={`${def.id}-${f.name}`} field={f} state={state[f.name]} error={outcome.ok ? undefined : outcome.fieldErrors[f.name]} onChange={(p) => set(f.name, p)} />
           ))}
         </form>
         <div className="min-w-0" aria-live="polite" data-testid={`${def.id}-results`}>
           {outcome.ok ? (
-            <Results def={def} output={outcome.output} units={units} input={outcome.input ?? {}} />
+            <Results def={def} output={outcome.output} units={units} input={outcome.input} />
           ) : (
             <p className="rounded-md border border-signal bg-signal-100 p-3 text-sm text-creek-900 dark:bg-signal-900 dark:text-signal-100" role="status">
               {outcome.general ?? 'Fix the fields marked in amber to see the result.'}
@@ -216,18 +185,19 @@ function Field({
   );
 }
 
-function Results<R>({
+function Results({
   def,
   output,
   units,
   input,
 }: {
-  def: CalculatorDef<R>;
-  output: CalcOutput<R>;
+  def: Calculator;
+  output: CalcOutput<unknown>;
   units: 'US' | 'metric';
   input: Record<string, unknown>;
 }) {
   const rows = def.rows(output.results);
+  const view = calculatorView(def.id);
   return (
     <div className="flex flex-col gap-3">
       <dl className="grid grid-cols-1 gap-2">
@@ -261,8 +231,8 @@ function Results<R>({
           ))}
         </ul>
       ) : null}
-      {def.extra ? def.extra(output.results, units) : null}
-      {def.chart ? <div className="h-56">{def.chart(output.results, units, input)}</div> : null}
+      {view.extra ? view.extra(output.results, units) : null}
+      {view.chart ? <div className="h-56">{view.chart(output.results, units, input)}</div> : null}
       <Working steps={output.steps} />
       <p className="cw-muted text-xs">Engine {output.engineVersion}</p>
     </div>

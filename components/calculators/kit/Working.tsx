@@ -2,7 +2,7 @@
 
 import { useEffect, useState } from 'react';
 import type { Step } from '@/lib/hydraulics';
-import { formatNumber } from './format';
+import { formatNumber } from '@/lib/calculators';
 
 type Katex = Pick<typeof import('katex'), 'renderToString'>;
 

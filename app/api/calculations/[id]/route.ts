@@ -1,7 +1,7 @@
 import { NextResponse } from 'next/server';
 import { apiError, serverError } from '@/lib/http/errors';
 import { findWorkedCalculation } from '@/lib/calculations/store';
-import { computeFromForm, resultsDiffer } from '@/components/calculators/recompute';
+import { computeFromForm, resultsDiffer } from '@/lib/calculators';
 
 export const dynamic = 'force-dynamic';
 

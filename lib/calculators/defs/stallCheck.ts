@@ -1,11 +1,10 @@
-import { NOMINAL_LABELS, NOMINAL_SIZES, runStallCheck, SYMPTOM_LABELS, SYMPTOMS, type StallCheckResults } from '@/lib/hydraulics';
-import type { CalculatorDef } from '../kit/types';
-import { RelatedThreads } from '@/components/search/RelatedThreads';
-import { normalizeSeries, normalizeSize, resolvePipeRun, seriesOptions, sizeOptions } from './shared';
+import { NOMINAL_LABELS, NOMINAL_SIZES, runStallCheck, stallCheckSchema, SYMPTOM_LABELS, SYMPTOMS } from '@/lib/hydraulics';
+import { defineCalculator } from '../types';
+import { normalizeSeries, normalizeSize, resolvePipeRun, seriesOptions, sizeOptions } from '../pipes';
 
 /** Words people and older links use for a symptom → the engine's code. */
 const SYMPTOM_ALIASES: Record<string, string> = { 'frost-stopped': 'delivery-stops-in-frost' };
-const normalizeSymptoms = (raw: string) =>
+export const normalizeSymptoms = (raw: string) =>
   raw
     .split(',')
     .map((s) => s.trim())
@@ -19,11 +18,13 @@ const triState = [
   { value: 'no', label: 'no' },
 ];
 
-export const stallCheckDef: CalculatorDef<StallCheckResults> = {
+export const stallCheck = defineCalculator(runStallCheck, {
   id: 'stall-check',
-  title: 'Stall check',
+  name: 'Stall check',
+  line: 'Why it stopped beating: likely causes from your site sheet.',
   blurb: 'Why a ram stops cycling or delivers less: likely causes, worked from your site sheet.',
   guide: 'when-it-stops-cycling',
+  schema: stallCheckSchema,
   fields: [
     { type: 'checks', name: 'symptoms', prop: 'symptoms', label: 'What it does', options: SYMPTOMS.map((s) => ({ value: s, label: SYMPTOM_LABELS[s] })), normalize: normalizeSymptoms },
     { type: 'quantity', name: 'site.fallM', prop: 'fall', label: 'Fall', qty: 'length' },
@@ -53,7 +54,6 @@ export const stallCheckDef: CalculatorDef<StallCheckResults> = {
     const symptoms = normalizeSymptoms(((v.symptoms as string[] | undefined) ?? []).join(','));
     return { site, symptoms: symptoms ? symptoms.split(',') : [] };
   },
-  run: (input) => runStallCheck(input as never),
   rows: (r) => [
     { label: 'Expected delivery', value: r.expectedDeliveryM3s, qty: 'smallFlow' },
     { label: `Drive flow of all pumps${r.driveFlowEstimated ? ' (estimated)' : ''}`, value: r.totalDriveFlowM3s, qty: 'flow' },
@@ -61,32 +61,4 @@ export const stallCheckDef: CalculatorDef<StallCheckResults> = {
     { label: 'Drive pipe L/H', value: r.lengthToFall },
     { label: 'Expected beats per minute', value: r.expectedBeatsPerMinute },
   ],
-  extra: (r) =>
-    r.causes.length === 0 ? (
-      <p className="text-sm">Nothing in these numbers points to a cause. Tick what the pump does to rank the likely ones.</p>
-    ) : (
-      <>
-      <ol className="flex list-none flex-col gap-2 pl-0" aria-label="Likely causes" data-testid="stall-causes">
-        {r.causes.slice(0, 6).map((c, i) => (
-          <li key={c.code} className="rounded-md border border-limestone-300 p-2 text-sm dark:border-creek-600" data-cause={c.code}>
-            <p className="font-semibold">
-              {i + 1}. {c.title} <span className="cw-muted text-xs">({strength(c.score)})</span>
-            </p>
-            <p className="cw-muted">{c.reason}</p>
-            <a href={`/guides/${c.guide}`} className="cw-link text-xs">
-              How to fix it
-            </a>
-          </li>
-        ))}
-      </ol>
-      <RelatedThreads query={r.causes.slice(0, 2).map((c) => c.title).join(' ')} />
-      </>
-    ),
-};
-
-/** How strongly the numbers and symptoms point at a cause, in words rather than a number to chase. */
-function strength(score: number) {
-  return score >= 0.6 ? 'strong sign' : score >= 0.3 ? 'some sign' : 'faint sign';
-}
-
-export { normalizeSymptoms };
+});

@@ -1,5 +1,5 @@
-import { measureSourceFlow, parseQuantity, EngineInputError, type SourceFlowResults } from '@/lib/hydraulics';
-import type { CalculatorDef, FormState } from '../kit/types';
+import { measureSourceFlow, parseQuantity, EngineInputError, sourceFlowSchema } from '@/lib/hydraulics';
+import { defineCalculator, type FormState } from '../types';
 
 const BY_METHOD: Record<string, string[]> = {
   bucket: ['trials'],
@@ -29,11 +29,13 @@ function parseTimes(text: string) {
     .map((t) => parseQuantity(/[a-z]/i.test(t) ? t : `${t} s`, 'time', 'times'));
 }
 
-export const sourceFlowDef: CalculatorDef<SourceFlowResults> = {
+export const sourceFlow = defineCalculator(measureSourceFlow, {
   id: 'source-flow',
-  title: 'Source flow',
+  name: 'Source flow',
+  line: 'Bucket and stopwatch, V-notch weir or float.',
   blurb: 'What the stream or spring gives, by bucket, V-notch weir or float.',
   guide: 'surveying-fall-and-flow',
+  schema: sourceFlowSchema,
   fields: [
     {
       type: 'select',
@@ -63,7 +65,6 @@ export const sourceFlowDef: CalculatorDef<SourceFlowResults> = {
     if (v.method === 'float') return { ...rest, timesS: parseTimes(String(times ?? '')) };
     return rest;
   },
-  run: (input) => measureSourceFlow(input as never),
   rows: (r) => [
     { label: 'Flow', value: r.flowM3s, qty: 'flow', emphasis: true },
     { label: 'Per day', value: r.flowPerDayM3PerDay, qty: 'dailyVolume' },
@@ -78,4 +79,4 @@ export const sourceFlowDef: CalculatorDef<SourceFlowResults> = {
     ...(r.surfaceVelocityMs !== undefined ? [{ label: 'Surface velocity', value: r.surfaceVelocityMs, qty: 'velocity' as const }] : []),
     ...(r.planShare !== undefined ? [{ label: 'Share of the flow the plan takes', value: r.planShare * 100, unit: '%' }] : []),
   ],
-};
+});

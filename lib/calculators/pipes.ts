@@ -7,7 +7,7 @@ import {
   type NominalSize,
   type PipeSeries,
 } from '@/lib/hydraulics';
-import type { FieldDef } from '../kit/types';
+import type { FieldDef } from './types';
 
 export const SERIES_LABELS: Record<PipeSeries, string> = {
   'steel-sch40': 'Steel, schedule 40',

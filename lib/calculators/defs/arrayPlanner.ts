@@ -1,7 +1,6 @@
-import { planArray, type ArrayPlannerResults } from '@/lib/hydraulics';
-import type { CalculatorDef, FormState } from '../kit/types';
-import { displayQuantity } from '../kit/format';
-import { pipeFields, resolvePipeRun, yesNo } from './shared';
+import { arrayPlannerSchema, planArray } from '@/lib/hydraulics';
+import { defineCalculator, type FormState } from '../types';
+import { pipeFields, resolvePipeRun, yesNo } from '../pipes';
 
 const STAGED_ONLY = new Set(['staged.upperFallM', 'staged.upperLiftM']);
 
@@ -10,11 +9,13 @@ const STAGED_ONLY = new Set(['staged.upperFallM', 'staged.upperLiftM']);
  * optionally feeding a tank that drives an upper pump. The first pump's drive pipe
  * may carry extra 90° elbows, which cost that pump delivery.
  */
-export const arrayPlannerDef: CalculatorDef<ArrayPlannerResults> = {
+export const arrayPlanner = defineCalculator(planArray, {
   id: 'array-planner',
-  title: 'Array planner',
+  name: 'Array planner',
+  line: 'Several pumps in parallel, or in stages to reach higher.',
   blurb: 'Pumps in parallel add flow, not height; pumps in stages add height.',
   guide: 'pumps-in-parallel-and-in-stages',
+  schema: arrayPlannerSchema,
   fields: [
     {
       type: 'select',
@@ -78,7 +79,6 @@ export const arrayPlannerDef: CalculatorDef<ArrayPlannerResults> = {
         : {}),
     };
   },
-  run: (input) => planArray(input as never),
   rows: (r) => [
     { label: 'Combined delivery', value: r.combinedDeliveryM3s, qty: 'smallFlow', emphasis: true },
     { label: 'Per day', value: r.combinedPerDayM3PerDay, qty: 'dailyVolume', emphasis: !r.staged },
@@ -96,25 +96,4 @@ export const arrayPlannerDef: CalculatorDef<ArrayPlannerResults> = {
         ]
       : []),
   ],
-  extra: (r, units) => (
-    <table className="w-full text-sm">
-      <caption className="cw-muted text-left text-xs">Each pump on the shared line</caption>
-      <thead>
-        <tr className="text-left text-xs">
-          <th scope="col">Pump</th>
-          <th scope="col">Fittings K</th>
-          <th scope="col">Delivers</th>
-        </tr>
-      </thead>
-      <tbody className="cw-num">
-        {r.pumps.map((p) => (
-          <tr key={p.label}>
-            <td>{p.label}</td>
-            <td>{p.fittingsK.toFixed(1)}</td>
-            <td>{p.runs ? Object.values(displayQuantity('smallFlow', p.deliveredFlowM3s, units)).join(' ') : 'does not run'}</td>
-          </tr>
-        ))}
-      </tbody>
-    </table>
-  ),
-};
+});

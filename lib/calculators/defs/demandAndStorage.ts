@@ -1,6 +1,6 @@
 import Qty from 'js-quantities';
-import { EngineInputError, livestockRates, planDemandAndStorage, type DemandAndStorageResults, type LivestockKind } from '@/lib/hydraulics';
-import type { CalculatorDef, FieldDef } from '../kit/types';
+import { demandAndStorageSchema, EngineInputError, livestockRates, planDemandAndStorage, type LivestockKind } from '@/lib/hydraulics';
+import { defineCalculator, type FieldDef } from '../types';
 
 /** MDX prop → livestock kind; chickens are counted per bird and the table is per 100 birds. */
 const ANIMALS: { prop: string; kind: LivestockKind; label: string; perHundred?: boolean }[] = [
@@ -29,11 +29,13 @@ export function parseArea(text: string): number {
 
 const count = (v: unknown) => Math.max(0, Math.round(Number(v ?? 0)));
 
-export const demandAndStorageDef: CalculatorDef<DemandAndStorageResults> = {
+export const demandAndStorage = defineCalculator(planDemandAndStorage, {
   id: 'demand-and-storage',
-  title: 'Demand and storage',
+  name: 'Demand and storage',
+  line: 'House, garden and stock against 24 hours of delivery; the tank.',
   blurb: 'Household, garden and stock against what the ram delivers in 24 hours, and the tank to carry you over.',
   guide: 'storage-overflow-and-float-valves',
+  schema: demandAndStorageSchema,
   fields: [
     { type: 'quantity', name: 'deliveryPerDay', prop: 'delivery', label: 'Ram delivery per day', qty: 'dailyVolume' },
     { type: 'number', name: 'people', prop: 'people', label: 'People', min: 0, step: 1 },
@@ -60,7 +62,6 @@ export const demandAndStorageDef: CalculatorDef<DemandAndStorageResults> = {
       ...(v.tankVolumeM3 !== undefined ? { tankVolumeM3: v.tankVolumeM3 } : {}),
     };
   },
-  run: (input) => planDemandAndStorage(input as never),
   rows: (r) => [
     { label: 'Demand per day', value: r.totalDemandM3PerDay, qty: 'dailyVolume', emphasis: true },
     { label: 'Delivery per day', value: r.deliveryM3PerDay, qty: 'dailyVolume', emphasis: true },
@@ -72,4 +73,4 @@ export const demandAndStorageDef: CalculatorDef<DemandAndStorageResults> = {
     ...(r.reserveRefillTimeS !== undefined ? [{ label: 'Refill from empty', value: r.reserveRefillTimeS / 3600, unit: 'hours' }] : []),
     ...(r.tankDaysOfReserve !== undefined ? [{ label: 'Your tank carries', value: r.tankDaysOfReserve, unit: 'days' }] : []),
   ],
-};
+});

@@ -1,12 +1,13 @@
-import { estimateYield, fromSI, DISPLAY_UNITS, unitLabel, type YieldEstimateResults } from '@/lib/hydraulics';
-import { LineChartCard } from '../charts';
-import type { CalculatorDef } from '../kit/types';
+import { estimateYield, yieldEstimateSchema } from '@/lib/hydraulics';
+import { defineCalculator } from '../types';
 
-export const yieldEstimateDef: CalculatorDef<YieldEstimateResults> = {
+export const yieldEstimate = defineCalculator(estimateYield, {
   id: 'yield-estimate',
-  title: 'Yield estimate',
+  name: 'Yield estimate',
+  line: 'How much a ram delivers at your fall and lift, and what it uses.',
   blurb: 'How much a ram delivers at your fall and lift.',
   guide: 'will-a-ram-meet-my-demand',
+  schema: yieldEstimateSchema,
   fields: [
     { type: 'quantity', name: 'fallM', prop: 'fall', label: 'Fall (supply head)', qty: 'length', help: 'From the intake’s water surface down to the pump.' },
     { type: 'quantity', name: 'liftM', prop: 'lift', label: 'Lift (delivery head)', qty: 'length', help: 'From the pump up to where the delivery pipe empties.' },
@@ -25,7 +26,6 @@ export const yieldEstimateDef: CalculatorDef<YieldEstimateResults> = {
     { type: 'quantity', name: 'measuredDeliveredFlowM3s', prop: 'measured', label: 'Measured delivery (optional)', qty: 'smallFlow', help: 'From a cup and a stopwatch, to work out your pump’s own efficiency.' },
   ],
   defaults: { fall: '4 ft', lift: '29 ft', driveFlow: '2 gal/min', pumpType: 'homemade' },
-  run: (input) => estimateYield(input as never),
   rows: (r) => [
     { label: 'Delivered', value: r.deliveredFlowM3s, qty: 'smallFlow', emphasis: true },
     { label: 'Per day', value: r.deliveredPerDayM3PerDay, qty: 'dailyVolume', emphasis: true },
@@ -42,18 +42,4 @@ export const yieldEstimateDef: CalculatorDef<YieldEstimateResults> = {
     { label: 'Power in / out', value: `${r.powerInW.toFixed(2)} / ${r.powerOutW.toFixed(2)}`, unit: 'W' },
     { label: 'Highest lift expected at this fall', value: r.maxLiftM, qty: 'length' },
   ],
-  chart: (r, units, input) => {
-    const lu = DISPLAY_UNITS.length[units];
-    const fu = DISPLAY_UNITS.smallFlow[units];
-    const lift = Number(input.liftM);
-    return (
-      <LineChartCard
-        ariaLabel="Delivery against lift"
-        xLabel={`lift (${unitLabel(lu)})`}
-        yLabel={`delivery (${unitLabel(fu)})`}
-        points={r.curve.map((p) => ({ x: fromSI(p.liftM, lu, 'length'), y: fromSI(p.deliveryM3s, fu, 'smallFlow') }))}
-        mark={Number.isFinite(lift) ? { x: fromSI(lift, lu, 'length'), y: fromSI(r.deliveredFlowM3s, fu, 'smallFlow') } : undefined}
-      />
-    );
-  },
-};
+});

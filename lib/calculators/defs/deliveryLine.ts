@@ -1,13 +1,14 @@
-import { checkDeliveryLine, DISPLAY_UNITS, fromSI, NOMINAL_LABELS, unitLabel, type DeliveryLineResults } from '@/lib/hydraulics';
-import { LineChartCard } from '../charts';
-import type { CalculatorDef } from '../kit/types';
-import { pipeFields, resolvePipeRun, SERIES_LABELS, yesNo } from './shared';
+import { checkDeliveryLine, deliveryLineSchema, NOMINAL_LABELS } from '@/lib/hydraulics';
+import { defineCalculator } from '../types';
+import { pipeFields, resolvePipeRun, SERIES_LABELS, yesNo } from '../pipes';
 
-export const deliveryLineDef: CalculatorDef<DeliveryLineResults> = {
+export const deliveryLine = defineCalculator(checkDeliveryLine, {
   id: 'delivery-line',
-  title: 'Delivery line',
+  name: 'Delivery line',
+  line: 'Friction up to the tank and the smallest pipe that will do.',
   blurb: 'Friction and pressure in the pipe up to the tank, and the smallest pipe that will do.',
   guide: 'the-delivery-line',
+  schema: deliveryLineSchema,
   fields: [
     { type: 'quantity', name: 'flowM3s', prop: 'flow', label: 'Delivered flow', qty: 'flow' },
     { type: 'quantity', name: 'liftM', prop: 'lift', label: 'Lift', qty: 'length' },
@@ -16,7 +17,6 @@ export const deliveryLineDef: CalculatorDef<DeliveryLineResults> = {
   ],
   defaults: { flow: '0.5 L/min', lift: '29 ft', length: '150 ft', size: '3/4', material: 'hdpe-dr11' },
   toInput: (v) => ({ ...v, line: resolvePipeRun(v.line) }),
-  run: (input) => checkDeliveryLine(input as never),
   rows: (r) => [
     { label: 'Total head at the pump', value: r.totalHeadM, qty: 'length', emphasis: true },
     { label: 'Pressure at the pump', value: r.pumpPressurePa, qty: 'pressure', emphasis: true },
@@ -32,29 +32,24 @@ export const deliveryLineDef: CalculatorDef<DeliveryLineResults> = {
       value: r.smallestPipe ? `${NOMINAL_LABELS[r.smallestPipe.nominal]} ${SERIES_LABELS[r.smallestPipe.series]}` : 'none from ½" to 4"',
     },
   ],
-  // Friction loss against flow in this pipe, from a third of the flow to three times it.
-  chart: (r, units, input) => {
-    const q0 = Number(input.flowM3s);
-    const fu = DISPLAY_UNITS.flow[units];
-    const lu = DISPLAY_UNITS.length[units];
-    const points = [];
-    for (let i = 0; i <= 20; i++) {
-      const q = q0 * (1 / 3 + (i / 20) * (3 - 1 / 3));
-      try {
-        const out = checkDeliveryLine({ ...(input as Record<string, unknown>), flowM3s: q, line: resolvePipeRun(input.line) } as never);
-        points.push({ x: fromSI(q, fu, 'flow'), y: fromSI(out.results.frictionHeadM + out.results.minorHeadM, lu, 'length') });
-      } catch {
-        /* past the engine's range */
-      }
+});
+
+/**
+ * Friction and fittings loss in the reader's pipe from a third of their flow to
+ * three times it (21 points), for the chart; `values` are the form's fields as
+ * read (SI). Flows past the engine's range are left out.
+ */
+export function lossAgainstFlow(values: Record<string, unknown>): { flowM3s: number; lossM: number }[] {
+  const q0 = Number(values.flowM3s);
+  const points = [];
+  for (let i = 0; i <= 20; i++) {
+    const q = q0 * (1 / 3 + (i / 20) * (3 - 1 / 3));
+    try {
+      const out = deliveryLine.run({ ...values, flowM3s: q, line: resolvePipeRun(values.line) });
+      points.push({ flowM3s: q, lossM: out.results.frictionHeadM + out.results.minorHeadM });
+    } catch {
+      /* past the engine's range */
     }
-    return (
-      <LineChartCard
-        ariaLabel="Friction loss against flow"
-        xLabel={`flow (${unitLabel(fu)})`}
-        yLabel={`loss (${unitLabel(lu)})`}
-        points={points}
-        mark={{ x: fromSI(q0, fu, 'flow'), y: fromSI(r.frictionHeadM + r.minorHeadM, lu, 'length') }}
-      />
-    );
-  },
-};
+  }
+  return points;
+}

@@ -1,0 +1,26 @@
+import { DISPLAY_UNITS, fromSI, unitLabel, type DrivePipeCheckResults } from '@/lib/hydraulics';
+import { SERIES_LABELS, surgeByMaterial } from '@/lib/calculators';
+import { BarChartCard } from '../charts';
+import type { CalculatorView } from './types';
+
+export const drivePipeCheckView: CalculatorView<DrivePipeCheckResults> = {
+  extra: (r) => (
+    <ul className="flex flex-col gap-1 text-xs">
+      {r.guides.map((g) => (
+        <li key={g.id} className={g.within ? '' : 'font-semibold text-signal-700 dark:text-signal-300'}>
+          {`${g.ratio} ${g.min}–${g.max}: yours ${g.value.toFixed(0)} ${g.within ? '(within)' : '(outside)'} — ${g.source}`}
+        </li>
+      ))}
+    </ul>
+  ),
+  // Surge against pipe material: the same size, fall and length in each series.
+  chart: (_r, units, input) => {
+    const pu = DISPLAY_UNITS.pressure[units];
+    const bars = surgeByMaterial(input).map((b) => ({
+      name: SERIES_LABELS[b.series].replace('schedule ', 'sch '),
+      value: fromSI(b.surgePa, pu, 'pressure'),
+      highlight: b.current,
+    }));
+    return <BarChartCard ariaLabel="Surge against pipe material" yLabel={`surge (${unitLabel(pu)})`} bars={bars} />;
+  },
+};

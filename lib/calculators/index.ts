@@ -1,0 +1,18 @@
+/**
+ * The calculators without their looks: ids, definitions (fields with units and
+ * ranges, MDX prop names, form → engine input, the engine call, result rows),
+ * the form's state, the server's recompute and the site sheet. No React, Next or
+ * database here; components/calculators draws them.
+ */
+export { CALCULATOR_IDS, isCalculatorId, type CalculatorId } from './ids';
+export { defineCalculator, type Calculator, type CalculatorDef, type FieldDef, type FieldState, type FormState, type ResultRow } from './types';
+export { CALCULATORS, CALCULATOR_LIST, calculatorFields, calculatorInputNames, getCalculator, runCalculator, type ResultsOf } from './registry';
+export { computeForm, computeFromForm, recompute, resultsDiffer, visibleFields, type FormOutcome, type Recomputed } from './recompute';
+export { convertState, hasOwnUnit, initialState, readForm, shareQuery, splitTyped } from './state';
+export { displayQuantity, formatNumber, inputNumber } from './format';
+export { SERIES_LABELS, seriesOptions, sizeOptions } from './pipes';
+export { lossAgainstFlow } from './defs/deliveryLine';
+export { surgeByMaterial } from './defs/drivePipeCheck';
+export { normalizeSymptoms } from './defs/stallCheck';
+export { parseTrials } from './defs/sourceFlow';
+export { parseArea } from './defs/demandAndStorage';
