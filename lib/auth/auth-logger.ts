@@ -29,7 +29,7 @@ export const authLogger: Partial<LoggerInstance> = {
       console.warn(err?.name === 'SessionRevoked' ? `next-auth: ${err.message}` : `next-auth: a session cookie that does not verify was ignored (${text})`);
       return;
     }
-    console.error(`next-auth ${code}: ${text}`, err?.stack ?? '');
+    console.error(`next-auth ${code}: ${text}`, ...(err?.stack ? [err.stack] : []));
   },
   warn(code) {
     console.warn(`next-auth warning ${code}`);
