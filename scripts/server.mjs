@@ -40,15 +40,16 @@ function arg(flag, long, fallback) {
 
 async function main() {
   const port = Number(arg('-p', '--port', process.env.PORT ?? 3000));
-  const hostname = arg('-H', '--hostname', process.env.HOSTNAME ?? '0.0.0.0');
+  // like `next start`: every interface unless -H names one
+  const hostname = arg('-H', '--hostname', undefined);
   process.env.NODE_ENV = 'production';
   const { default: next } = await import('next');
   const dir = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..');
-  const app = next({ dev: false, dir, hostname, port });
+  const app = next({ dev: false, dir, hostname: hostname ?? 'localhost', port });
   await app.prepare();
   const handle = app.getRequestHandler();
   const server = peerAwareServer((req, res) => handle(req, res));
-  server.listen(port, hostname, () => console.log(`Clackwater listening on http://${hostname}:${port}`));
+  server.listen(port, hostname, () => console.log(`Clackwater listening on http://${hostname ?? 'localhost'}:${port}`));
   const stop = () => {
     server.close(() => process.exit(0));
     // keep-alive sockets would hold close() open
