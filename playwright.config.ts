@@ -45,7 +45,8 @@ export default defineConfig({
   webServer: process.env.E2E_BASE_URL
     ? undefined
     : {
-        command: `npx next start -p ${port} -H 127.0.0.1`,
+        // the production server (scripts/server.mjs), which appends the peer address as a proxy does
+        command: `node scripts/server.mjs -p ${port} -H 127.0.0.1`,
         url: `http://127.0.0.1:${port}/api/health`,
         reuseExistingServer: false,
         timeout: 60_000,

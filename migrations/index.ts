@@ -9,6 +9,7 @@ import * as fieldLog from './007-field-log';
 import * as mail from './008-mail';
 import * as listIndexes from './009-list-indexes';
 import * as rateLimits from './010-rate-limits';
+import * as sessionVersion from './011-session-version';
 
 type Step = (params: { context: QueryInterface }) => Promise<void>;
 
@@ -27,4 +28,5 @@ export const migrations: { name: string; up: Step; down: Step }[] = [
   { name: '008-mail', ...mail },
   { name: '009-list-indexes', ...listIndexes },
   { name: '010-rate-limits', ...rateLimits },
+  { name: '011-session-version', ...sessionVersion },
 ];

@@ -17,6 +17,8 @@ export class User extends Model<InferAttributes<User>, InferCreationAttributes<U
   declare emailVerifiedAt: CreationOptional<Date | null>;
   declare units: CreationOptional<'US' | 'metric'>;
   declare suspendedUntil: CreationOptional<Date | null>;
+  /** carried in session tokens; bumping it ends every session signed in before (lib/auth/session-version.ts) */
+  declare sessionVersion: CreationOptional<number>;
   declare digestFrequency: CreationOptional<DigestFrequency>;
   declare notifyAnswers: CreationOptional<boolean>;
   declare notifyReplies: CreationOptional<boolean>;
@@ -40,6 +42,7 @@ export class User extends Model<InferAttributes<User>, InferCreationAttributes<U
         emailVerifiedAt: { type: DataTypes.DATE, allowNull: true },
         units: { type: DataTypes.ENUM('US', 'metric'), allowNull: false, defaultValue: 'US' },
         suspendedUntil: { type: DataTypes.DATE, allowNull: true },
+        sessionVersion: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false, defaultValue: 0 },
         digestFrequency: { type: DataTypes.ENUM(...DIGEST_FREQUENCIES), allowNull: false, defaultValue: 'off' },
         notifyAnswers: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: true },
         notifyReplies: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: true },

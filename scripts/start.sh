@@ -37,7 +37,9 @@ if [ "$SMTP_HOST" = "127.0.0.1" ] && ! (exec 3<>"/dev/tcp/127.0.0.1/$SMTP_PORT")
 fi
 
 log "Clackwater is starting on http://localhost:$PORT (Ctrl-C stops it and the database)"
-npx next start -p "$PORT" &
+# our own server, not `next start`: it hands the route handlers the real peer address
+# (scripts/server.mjs; TRUST_PROXY_HOPS when a proxy stands in front)
+node scripts/server.mjs -p "$PORT" &
 APP_PID=$!
 for _ in $(seq 1 60); do
   curl -fs "http://127.0.0.1:$PORT/api/health" >/dev/null 2>&1 && break

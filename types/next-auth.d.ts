@@ -12,5 +12,7 @@ declare module 'next-auth/jwt' {
     uid?: number;
     role?: string;
     handle?: string;
+    /** the account's session version at sign-in (lib/auth/session-version.ts) */
+    sv?: number;
   }
 }

@@ -7,6 +7,7 @@ import { initModels } from '@/models';
 import { ServiceUnavailable } from '@/components/ServiceUnavailable';
 import { SettingsForm, type SettingsValues } from './SettingsForm';
 import { MailSettingsForm } from './MailSettingsForm';
+import { SignOutEverywhere } from '@/components/account/SignOutEverywhere';
 import { loadMailSettings } from '@/lib/mail/settings';
 import type { MailSettings } from '@/lib/validation/mail';
 
@@ -95,6 +96,7 @@ export default async function SettingsPage() {
         </h2>
         <MailSettingsForm initial={loaded.mail.settings} tagChoices={loaded.mail.tagChoices} expert={loaded.expert} />
       </section>
+      <SignOutEverywhere />
       {loaded.canApply ? (
         <p className="font-sans text-sm">
           Built and tuned ram pumps for others?{' '}

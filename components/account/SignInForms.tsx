@@ -4,9 +4,12 @@ import { useState } from 'react';
 import Link from 'next/link';
 import { signIn } from 'next-auth/react';
 import { Field } from './Field';
+import { safeReturnPath } from '@/lib/auth/return-path';
 
 /** Password sign-in, and a passwordless link by e-mail. */
-export function SignInForms({ callbackUrl = '/' }: { callbackUrl?: string }) {
+export function SignInForms({ callbackUrl: asked = '/' }: { callbackUrl?: string }) {
+  // checked again here: whatever renders this form, the browser only ever goes to a path on this site
+  const callbackUrl = safeReturnPath(asked);
   const [error, setError] = useState<string | null>(null);
   const [busy, setBusy] = useState(false);
   const [linkNote, setLinkNote] = useState<string | null>(null);

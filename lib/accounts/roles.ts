@@ -1,4 +1,5 @@
 import { recordAudit } from '@/lib/moderation/audit';
+import { bumpSessionVersion } from '@/lib/auth/session-version';
 import { getSequelize } from '@/lib/db';
 import { initModels } from '@/models';
 import type { Role } from '@/models/User';
@@ -138,6 +139,8 @@ export async function changeRole(adminId: number, userId: number, role: Role): P
     if (user.role === role) return { ok: true as const, role, changed: false };
     const before = user.role;
     await user.update({ role }, { transaction });
+    // a demoted moderator's open sessions end with the old powers
+    await bumpSessionVersion(userId, transaction);
     await recordAudit({ actorId: adminId, action: 'role-change', targetType: 'member', targetId: userId, reason: `role changed from ${before} to ${role}`, details: { before, after: role } }, transaction);
     await Notice.create(
       { userId, kind: 'role-change', message: `An admin changed your role: you are now ${ROLE_WORDS[role]} on Clackwater.`, link: '/settings', readAt: null },

@@ -7,8 +7,13 @@ import { mailFrom, sendMail } from '@/lib/mail/transport';
 import { signInLinkMessage } from '@/lib/mail/account-messages';
 import { clackwaterAdapter } from './adapter';
 import { verifyPassword } from './password';
-import { clientIp, forgive, limitMessage, spend } from './rate-limit';
+import { clientIp, forgive, limitMessage, refund, spend } from './rate-limit';
+import { accountLimitKey, sameAddress } from './account-key';
 import { authSecret } from './secret';
+import { sameSiteRedirect } from './return-path';
+import { tokenVersion } from './session-version';
+import { authLogger, SessionRevoked } from './auth-logger';
+import { inBackground } from '@/lib/accounts/background';
 
 /** Errors sign-in forms show; next-auth passes the message through as `error`. */
 export const SIGN_IN_ERRORS = {
@@ -42,18 +47,23 @@ export const authOptions: NextAuthOptions = {
         const email = String(credentials?.email ?? '').trim().toLowerCase();
         const password = String(credentials?.password ?? '');
         const ip = clientIp((req?.headers ?? {}) as Record<string, string>);
+        // every spelling the collation folds onto one account spends that account's tries
+        const account = await accountLimitKey(email);
         const limited = await spend([
           ['signInIp', ip],
-          ['signInAccount', email || '(none)'],
+          ['signInAccount', account],
         ]);
         if (!limited.ok) throw new Error(limitMessage(limited.retryAfterS));
         const { User } = initModels();
-        const user = await User.unscoped().findOne({ where: { email } });
+        const found = await User.unscoped().findOne({ where: { email } });
+        // Only the address as registered signs in, not one the collation merely folds onto it.
+        const user = found && sameAddress(email, found.email) ? found : null;
         // Verify even when there is no such account, so timing does not tell.
         const good = await verifyPassword(user?.passwordHash ?? DUMMY_HASH, password);
         if (!user || !good) throw new Error(SIGN_IN_ERRORS.wrong);
         if (!user.emailVerifiedAt) throw new Error(SIGN_IN_ERRORS.unverified);
-        await forgive('signInAccount', email);
+        await forgive('signInAccount', account);
+        await refund('signInIp', ip);
         return toAuthed(user);
       },
     }),
@@ -64,31 +74,41 @@ export const authOptions: NextAuthOptions = {
       from: mailFrom(),
       maxAge: 15 * 60,
       async sendVerificationRequest({ identifier, url }) {
-        const { User } = initModels();
-        const user = await User.findOne({ where: { email: identifier.trim().toLowerCase() } });
-        if (!user) return;
-        try {
+        // Answered at once whether or not the address has an account: the look-up and
+        // the SMTP wait happen after, so the time taken does not tell either.
+        inBackground(`sign-in link for ${identifier}`, async () => {
+          const { User } = initModels();
+          const user = await User.findOne({ where: { email: identifier.trim().toLowerCase() } });
+          if (!user || !sameAddress(identifier, user.email)) return;
           await sendMail(signInLinkMessage(user.email, user.displayName, url));
-        } catch (err) {
-          // The same answer either way; the failure is for the server log.
-          console.error(`sign-in link to ${user.email} not sent: ${err instanceof Error ? err.message : String(err)}`);
-        }
+        });
       },
     }),
   ],
+  logger: authLogger,
   callbacks: {
     async jwt({ token, user }) {
+      const { User } = initModels();
       if (user) {
         // A link sign-in hands us the adapter's view of the user; read role and handle from ours.
-        const { User } = initModels();
-        const u = await User.findByPk(Number(user.id), { attributes: ['id', 'role', 'handle'] });
+        const u = await User.findByPk(Number(user.id), { attributes: ['id', 'role', 'handle', 'sessionVersion'] });
         if (u) {
           token.uid = u.id;
           token.role = u.role;
           token.handle = u.handle;
+          token.sv = u.sessionVersion;
         }
+        return token;
       }
+      // Every later read of the session (the browser's /api/auth/session, getServerSession):
+      // a token behind the account's session version is over, and next-auth clears its cookie.
+      const uid = Number(token.uid);
+      const u = Number.isInteger(uid) && uid > 0 ? await User.findByPk(uid, { attributes: ['id', 'sessionVersion'] }) : null;
+      if (!u || u.sessionVersion !== tokenVersion(token)) throw new SessionRevoked();
       return token;
+    },
+    redirect({ url, baseUrl }) {
+      return sameSiteRedirect(url, baseUrl);
     },
     async session({ session, token }) {
       session.user = { ...session.user, id: Number(token.uid), role: String(token.role), handle: String(token.handle) } as typeof session.user;

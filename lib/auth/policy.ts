@@ -35,6 +35,7 @@ export const POLICY = {
   'user.changeRole': row({ admin: true }),
   /** edit display name, units and the like: one's own only */
   'profile.edit': signedIn('own'),
+  /** end every session of one's own account ("sign out everywhere"); suspended members too */ 'session.revokeAll': signedIn(),
   /** one's own notices */
   'notice.read': signedIn('own'),
   /** ask a question (with a site sheet and photos) */
@@ -99,6 +100,7 @@ export const REFUSAL: Record<Action, string> = {
   'expertApplication.decide': 'Only moderators can decide expert applications.',
   'user.changeRole': 'Only admins can change roles.',
   'profile.edit': 'You can only change your own profile.',
+  'session.revokeAll': 'Sign in to sign out everywhere.',
   'notice.read': 'You can only read your own notices.',
   'question.ask': 'Sign in to ask a question.',
   'question.edit': 'Only the asker can edit this question.',

@@ -58,14 +58,55 @@ export async function forgive(name: LimitName, key: string) {
   await limits()[name].delete(key.toLowerCase());
 }
 
+/**
+ * Gives back the point a request spent: a successful sign-in is not an attempt on
+ * anyone's password, and many members may share one address (a household, an office).
+ */
+export async function refund(name: LimitName, key: string) {
+  await limits()[name].reward(key.toLowerCase(), 1);
+}
+
 export function limitMessage(retryAfterS: number): string {
   const mins = Math.ceil(retryAfterS / 60);
   return `Too many attempts. Please wait ${mins} minute${mins === 1 ? '' : 's'} and try again.`;
 }
 
-/** The client's address as the proxy in front reports it, or the direct peer. */
+/**
+ * How many proxies in front of the app append to X-Forwarded-For (TRUST_PROXY_HOPS,
+ * default 0). The app's own server (scripts/server.mjs) appends the socket's peer
+ * address last, as a proxy does, so the list always ends with the address that really
+ * connected; each trusted hop vouches for the entry before its own.
+ */
+export function trustedProxyHops(): number {
+  const n = Number(process.env.TRUST_PROXY_HOPS ?? 0);
+  return Number.isInteger(n) && n >= 0 && n <= 10 ? n : 0;
+}
+
+/**
+ * The client's address for the per-address limits: counted from the right of
+ * X-Forwarded-For, never the left, since anything left of the trusted hops is
+ * whatever the client chose to write. IPv6 clients are keyed by their /64, which one
+ * household or one server holds whole.
+ */
 export function clientIp(headers: Headers | Record<string, string | string[] | undefined>): string {
-  const get = (n: string) => (headers instanceof Headers ? headers.get(n) : (headers[n] as string | undefined)) ?? undefined;
-  const fwd = get('x-forwarded-for');
-  return (fwd?.split(',')[0] ?? get('x-real-ip') ?? 'local').trim();
+  const raw = headers instanceof Headers ? headers.get('x-forwarded-for') : headers['x-forwarded-for'];
+  const list = (Array.isArray(raw) ? raw.join(',') : (raw ?? ''))
+    .split(',')
+    .map((s) => s.trim())
+    .filter(Boolean);
+  if (list.length === 0) return 'local';
+  return addressKey(list[Math.max(0, list.length - 1 - trustedProxyHops())]);
+}
+
+function addressKey(address: string): string {
+  const a = address.toLowerCase().replace(/^\[|\](:\d+)?$/g, '');
+  const mapped = /^::ffff:(\d+\.\d+\.\d+\.\d+)$/.exec(a);
+  if (mapped) return mapped[1];
+  if (!a.includes(':')) return a.replace(/:\d+$/, '');
+  // expand "::" and keep the first four groups
+  const [head, tail = ''] = a.split('::');
+  const h = head ? head.split(':') : [];
+  const t = a.includes('::') && tail ? tail.split(':') : [];
+  const groups = a.includes('::') ? [...h, ...Array(Math.max(0, 8 - h.length - t.length)).fill('0'), ...t] : h;
+  return `${groups.slice(0, 4).map((g) => g.replace(/^0+(?=.)/, '')).join(':')}::/64`;
 }

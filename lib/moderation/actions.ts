@@ -7,6 +7,7 @@ import { recordAudit } from './audit';
 import { notifyModeration } from '@/lib/mail/notify';
 import { postsChanged } from '@/lib/forum/after-write';
 import { loadPost, type ModeratedType } from './posts';
+import { bumpSessionVersion } from '@/lib/auth/session-version';
 
 export const MODERATION_ACTIONS = ['dismiss', 'hide', 'restore', 'delete', 'lock', 'unlock', 'retag', 'warn', 'suspend'] as const;
 export type ModerationAction = (typeof MODERATION_ACTIONS)[number];
@@ -92,6 +93,7 @@ export async function moderate(
         const until = input.until ? new Date(`${input.until}T23:59:59Z`) : null;
         if (!until || Number.isNaN(until.getTime()) || until <= now) throw new ForumError(422, 'until: the suspension must end on a date after today', 'until');
         await User.update({ suspendedUntil: until }, { where: { id: post.authorId }, transaction });
+        await bumpSessionVersion(post.authorId, transaction);
         details.until = until.toISOString();
         break;
       }

@@ -8,7 +8,7 @@ let server: ChildProcess | null = null;
 
 test.beforeAll(async () => {
   test.setTimeout(90_000);
-  server = spawn('node', ['node_modules/next/dist/bin/next', 'start', '-p', String(PORT_B), '-H', '127.0.0.1'], { env: serverEnv(B) as NodeJS.ProcessEnv, stdio: 'ignore' });
+  server = spawn('node', ['scripts/server.mjs', '-p', String(PORT_B), '-H', '127.0.0.1'], { env: serverEnv(B) as NodeJS.ProcessEnv, stdio: 'ignore' });
   for (let i = 0; i < 120; i++) {
     const ok = await fetch(`${B}/api/health`).then((r) => r.ok, () => false);
     if (ok) return;

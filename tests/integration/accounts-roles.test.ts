@@ -33,7 +33,7 @@ async function userByHandle(handle: Handle) {
 /** A next-auth session cookie for a seeded member, as the browser would send it. */
 async function cookieFor(handle: Handle) {
   const user = await userByHandle(handle);
-  const token = await encode({ token: { uid: user.id, role: user.role, handle: user.handle }, secret: authSecret() });
+  const token = await encode({ token: { uid: user.id, role: user.role, handle: user.handle, sv: user.sessionVersion }, secret: authSecret() });
   return `next-auth.session-token=${token}`;
 }
 

@@ -6,10 +6,10 @@ import { initModels } from '@/models';
 // eslint-disable-next-line @typescript-eslint/no-explicit-any -- handlers differ in their context types
 export type Handler = (r: any, ctx: any) => Promise<Response>;
 
-/** A next-auth session cookie for a demo member, as the app would set it. */
+/** A next-auth session cookie for a demo member, as the app would set it at a sign-in now (with the account's session version). */
 export async function sessionCookie(handle: string): Promise<string> {
   const u = (await initModels().User.findOne({ where: { handle } }))!;
-  return `next-auth.session-token=${await encode({ token: { uid: u.id, role: u.role, handle }, secret: authSecret() })}`;
+  return `next-auth.session-token=${await encode({ token: { uid: u.id, role: u.role, handle, sv: u.sessionVersion }, secret: authSecret() })}`;
 }
 
 /**

@@ -56,6 +56,7 @@ const SAMPLES: Record<string, (ids: Record<string, number>) => Sample> = {
   'PUT /api/admin/users/[id]/role': (ids) => ({ params: { id: String(ids.member) }, body: { role: 'member' } }),
   'GET /api/account/settings': () => ({}),
   'PUT /api/account/settings': () => ({ body: { displayName: 'Same Name', region: '', bio: '', units: 'US' } }),
+  'POST /api/account/sign-out-everywhere': () => ({}),
   // multipart cannot be sent as JSON: an allowed caller gets 400 for the JSON body, never 401/403
   'POST /api/photos': () => ({ body: {} }),
   'POST /api/questions': () => ({
@@ -100,7 +101,7 @@ async function cookieFor(persona: Persona): Promise<string | undefined> {
   if (persona === 'anonymous') return undefined;
   const { User } = initModels();
   const u = (await User.findOne({ where: { handle: PERSONA_HANDLE[persona] } }))!;
-  const token = await encode({ token: { uid: u.id, role: u.role, handle: u.handle }, secret: authSecret() });
+  const token = await encode({ token: { uid: u.id, role: u.role, handle: u.handle, sv: u.sessionVersion }, secret: authSecret() });
   return `next-auth.session-token=${token}`;
 }
 

@@ -17,10 +17,13 @@ export class SmtpCatcher {
   private server?: SMTPServer;
   private waiters: (() => void)[] = [];
 
-  /** `reject`: addresses refused at RCPT TO with a permanent 550, as a real server refuses an unknown mailbox. */
+  /**
+   * `reject`: addresses refused at RCPT TO with a permanent 550, as a real server refuses an unknown mailbox.
+   * `delayMs`: how long the server takes to accept each message, as a slow relay does.
+   */
   constructor(
     readonly port: number,
-    private readonly opts: { reject?: string[] } = {},
+    private readonly opts: { reject?: string[]; delayMs?: number } = {},
   ) {}
 
   /** How many messages reached `address`, whatever their subject. */
@@ -43,6 +46,10 @@ export class SmtpCatcher {
       },
       onData: (stream, _session, done) => {
         simpleParser(stream)
+          .then(async (mail) => {
+            if (this.opts.delayMs) await new Promise((r) => setTimeout(r, this.opts.delayMs));
+            return mail;
+          })
           .then((mail) => {
             const to = ([] as { value: { address?: string }[] }[])
               .concat((mail.to as never) ?? [])

@@ -3,6 +3,7 @@ import { emailOnlySchema } from '@/lib/validation/account';
 import { readJson } from '@/lib/http/body';
 import { apiError, serverError } from '@/lib/http/errors';
 import { clientIp, limitMessage, spend } from '@/lib/auth/rate-limit';
+import { accountLimitKey } from '@/lib/auth/account-key';
 import { requestPasswordReset } from '@/lib/accounts/service';
 
 export const dynamic = 'force-dynamic';
@@ -13,13 +14,14 @@ const SENT = 'If that address has an account, a link to reset its password is on
 export async function POST(request: Request) {
   const body = await readJson(request, emailOnlySchema);
   if ('response' in body) return body.response;
-  const limited = await spend([
-    ['resetIp', clientIp(request.headers)],
-    ['resetAccount', body.data.email],
-  ]);
-  if (!limited.ok) return apiError(429, limitMessage(limited.retryAfterS), undefined, 'rate_limited');
   try {
-    await requestPasswordReset(body.data.email);
+    const limited = await spend([
+      ['resetIp', clientIp(request.headers)],
+      ['resetAccount', await accountLimitKey(body.data.email)],
+    ]);
+    if (!limited.ok) return apiError(429, limitMessage(limited.retryAfterS), undefined, 'rate_limited');
+    // answered before the look-up: the time taken says nothing about the account
+    requestPasswordReset(body.data.email);
     return NextResponse.json({ message: SENT }, { status: 202 });
   } catch (err) {
     return serverError(err);

@@ -16,13 +16,8 @@ export async function POST(request: Request) {
   try {
     const out = await signUp(body.data);
     if (!out.ok) return apiError(out.status, out.message, out.field);
-    return NextResponse.json(
-      {
-        message: 'Check your e-mail for a link to confirm your address.',
-        ...(out.mailed ? {} : { note: 'The e-mail could not be sent just now; ask for a new link in a few minutes.' }),
-      },
-      { status: 202 },
-    );
+    // the same words whether the address is new or taken; the mail goes out after this answer
+    return NextResponse.json({ message: 'Check your e-mail for a link to confirm your address.' }, { status: 202 });
   } catch (err) {
     return serverError(err);
   }

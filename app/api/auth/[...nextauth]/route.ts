@@ -2,6 +2,7 @@ import NextAuth from 'next-auth';
 import { NextResponse } from 'next/server';
 import { authOptions } from '@/lib/auth/options';
 import { clientIp, limitMessage, spend } from '@/lib/auth/rate-limit';
+import { accountLimitKey } from '@/lib/auth/account-key';
 
 const handler = NextAuth(authOptions);
 type Ctx = { params: Promise<{ nextauth: string[] }> };
@@ -18,7 +19,8 @@ async function POST(request: Request, ctx: Ctx) {
     const email = String(form?.get('email') ?? '').trim().toLowerCase();
     const limited = await spend([
       ['linkIp', clientIp(request.headers)],
-      ['linkAccount', email || '(none)'],
+      // one count per account however the address is spelt (lib/auth/account-key.ts)
+      ['linkAccount', await accountLimitKey(email)],
     ]);
     if (!limited.ok) {
       // next-auth's client reads `error` from the returned url's query
