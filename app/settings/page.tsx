@@ -27,7 +27,7 @@ export default async function SettingsPage() {
   let refusal: string | null = null;
   try {
     const user = await currentUserInPage();
-    if (user && can(user, 'profile.edit', user.id)) {
+    if (user && can(user, 'profile.read', user.id)) {
       const { User, Notice } = initModels();
       const row = await User.findByPk(user.id);
       const notices = can(user, 'notice.read', user.id)
@@ -52,7 +52,7 @@ export default async function SettingsPage() {
         };
       }
     } else if (user) {
-      refusal = REFUSAL['profile.edit'];
+      refusal = REFUSAL['profile.read'];
     }
   } catch (err) {
     if (isDatabaseUnavailable(err)) return <ServiceUnavailable what="your settings" />;

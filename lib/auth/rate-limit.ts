@@ -30,6 +30,9 @@ function makeLimits() {
     flagIp: limiter(60, 60 * 60, 'flag-ip'),
     uploadAccount: limiter(30, 60 * 60, 'upload-account'),
     uploadIp: limiter(90, 60 * 60, 'upload-ip'),
+    // worked calculations: an answer's calculation is saved before the answer, so a separate allowance
+    calculationAccount: limiter(60, 60 * 60, 'calculation-account'),
+    calculationIp: limiter(240, 60 * 60, 'calculation-ip'),
   };
 }
 export function limits() {
@@ -51,6 +54,11 @@ export async function spend(checks: [LimitName, string][]): Promise<LimitResult>
     }
   }
   return { ok: true };
+}
+
+/** Gives back the points `spend` took, for a request that was then refused: only work that passes validation and policy uses an allowance. */
+export async function refund(checks: [LimitName, string][]): Promise<void> {
+  for (const [name, key] of checks) await limits()[name].reward(key.toLowerCase(), 1);
 }
 
 /** Clears an account's sign-in count after a successful sign-in. */
