@@ -79,8 +79,10 @@ export const POLICY = {
   'moderation.actOnAdmin': row({}),
   /** an "unsafe advice" flag that hides a member's post pending review at once */
   'flag.hideUnsafeAtOnce': row({ expert: true }),
-  /** the author's posts stay up when flagged, waiting in the queue for a moderator */
-  'post.staysUpWhenFlagged': row({ expert: true, moderator: true, admin: true }),
+  /** the author's posts stay up however many members flag them, waiting in the queue for a moderator */
+  'post.staysUpUnderMemberFlags': row({ expert: true, moderator: true, admin: true }),
+  /** the author's posts stay up even under an expert's unsafe-advice flag (experts check each other; moderators are checked by admins) */
+  'post.staysUpUnderExpertFlag': row({ moderator: true, admin: true }),
   /** read the audit log */
   'audit.read': row({ admin: true }),
   /** see the e-mail outbox (failed messages with their SMTP error) and send a failed one again */
@@ -168,7 +170,8 @@ export const REFUSAL: Record<Action, string> = {
   'moderation.actOnModerator': 'Only an admin can act on a moderator’s post or account.',
   'moderation.actOnAdmin': 'Nobody acts on an admin’s post or account here; another admin changes their role first.',
   'flag.hideUnsafeAtOnce': 'Only an expert’s unsafe-advice flag hides a post at once.',
-  'post.staysUpWhenFlagged': 'Members’ posts are hidden pending review when enough flags count.',
+  'post.staysUpUnderMemberFlags': 'Members’ posts are hidden pending review when enough flags count.',
+  'post.staysUpUnderExpertFlag': 'Members’ and experts’ posts are hidden pending review under an expert’s unsafe-advice flag.',
   'audit.read': 'Only admins can read the audit log.',
   'mail.outbox': 'Only admins can see the e-mail outbox.',
   'moderation.seeHidden': 'Only moderators can see hidden posts.',

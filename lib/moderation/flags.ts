@@ -27,8 +27,9 @@ export const FLAG_COUNTS_AFTER_DAYS = NEW_MEMBER_DAYS;
  * One open flag per member per post. A post reaching the threshold of open flags
  * from established accounts (confirmed, older than FLAG_COUNTS_AFTER_DAYS), or
  * flagged unsafe by an expert, is hidden pending review — in the same
- * transaction, with its audit row. Experts', moderators' and admins' posts are
- * never hidden by flags: they wait in the queue, visible, for a moderator.
+ * transaction, with its audit row. Members' flags never hide an expert's,
+ * moderator's or admin's post, and an expert's never a moderator's or admin's:
+ * those wait in the queue, visible, for a moderator.
  */
 export async function flagPost(user: SessionUser, input: { postType: ModeratedType; postId: number; reason: FlagReason; note?: string }) {
   const { Flag, User } = initModels();
@@ -47,10 +48,10 @@ export async function flagPost(user: SessionUser, input: { postType: ModeratedTy
       transaction,
     });
     const author = await User.findByPk(post.authorId, { attributes: ['id', 'role', 'suspendedUntil'], transaction });
-    const staysUp = author !== null && can(author, 'post.staysUpWhenFlagged');
-    const byExpert = input.reason === 'unsafe' && can(user, 'flag.hideUnsafeAtOnce');
+    const byCount = open >= hideThreshold() && !(author && can(author, 'post.staysUpUnderMemberFlags'));
+    const byExpert = input.reason === 'unsafe' && can(user, 'flag.hideUnsafeAtOnce') && !(author && can(author, 'post.staysUpUnderExpertFlag'));
     let hidden = false;
-    if (!staysUp && !post.hiddenAt && !post.deletedAt && (open >= hideThreshold() || byExpert)) {
+    if (!post.hiddenAt && !post.deletedAt && (byCount || byExpert)) {
       const why = byExpert ? 'flagged as unsafe advice by an expert; hidden pending review' : `${open} flags; hidden pending review`;
       await post.update({ hiddenAt: new Date(), hiddenReason: why }, { transaction });
       await recordAudit({ actorId: null, action: 'auto-hide', targetType: input.postType, targetId: input.postId, reason: why, details: { flagId: flag.id, openFlags: open } }, transaction);
