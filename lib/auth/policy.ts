@@ -109,6 +109,18 @@ export interface Actor {
   suspendedUntil?: Date | null;
 }
 
+const ROLES: readonly Role[] = ['member', 'expert', 'moderator', 'admin'];
+
+/**
+ * The actor a browser's session names, for `can()` in client components (which links
+ * to show). The session knows no suspension; the server refuses what it takes away.
+ */
+export function sessionActor(user: { id?: unknown; role?: unknown } | null | undefined): Actor | null {
+  const id = Number(user?.id);
+  const role = ROLES.find((r) => r === user?.role);
+  return Number.isInteger(id) && id > 0 && role ? { id, role } : null;
+}
+
 export function isSuspended(actor: Actor | null, now = Date.now()): boolean {
   return !!actor?.suspendedUntil && actor.suspendedUntil.getTime() > now;
 }
