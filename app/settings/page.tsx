@@ -43,7 +43,7 @@ export default async function SettingsPage() {
       const mail = await loadMailSettings(user.id);
       if (row && mail) {
         loaded = {
-          expert: row.role !== 'member',
+          expert: can(row, 'digest.expertSections'),
           mail,
           handle: row.handle,
           canApply: can(user, 'expertApplication.submit'),

@@ -83,6 +83,8 @@ export const POLICY = {
   'post.staysUpUnderMemberFlags': row({ expert: true, moderator: true, admin: true }),
   /** the author's posts stay up even under an expert's unsafe-advice flag (experts check each other; moderators are checked by admins) */
   'post.staysUpUnderExpertFlag': row({ moderator: true, admin: true }),
+  /** the digest's sections for those who answer: questions still waiting in one's tags, guides whose safety check is stale */
+  'digest.expertSections': read(row({ expert: true, moderator: true, admin: true })),
   /** read the audit log */
   'audit.read': row({ admin: true }),
   /** see the e-mail outbox (failed messages with their SMTP error) and send a failed one again */
@@ -184,6 +186,7 @@ export const REFUSAL: Record<Action, string> = {
   'flag.hideUnsafeAtOnce': 'Only an expert’s unsafe-advice flag hides a post at once.',
   'post.staysUpUnderMemberFlags': 'Members’ posts are hidden pending review when enough flags count.',
   'post.staysUpUnderExpertFlag': 'Members’ and experts’ posts are hidden pending review under an expert’s unsafe-advice flag.',
+  'digest.expertSections': 'Only experts, moderators and admins get the digest’s unanswered questions and stale safety checks.',
   'audit.read': 'Only admins can read the audit log.',
   'mail.outbox': 'Only admins can see the e-mail outbox.',
   'moderation.seeHidden': 'Only moderators can see hidden posts.',
