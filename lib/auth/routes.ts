@@ -3,7 +3,10 @@ import type { Action } from './policy';
 /**
  * Every API route handler and the policy action it checks ('public' when anyone
  * may call it, 'session' for next-auth's own endpoints). The permission matrix test
- * walks app/api and fails when a handler has no entry here.
+ * walks app/api and fails when a handler has no entry here, when a protected
+ * handler does not call `guarded(request, '<its action>', …)` or reads the session
+ * itself, and when any persona (suspended ones included) gets other than the
+ * policy table says.
  */
 export const API_ROUTES: Record<string, Action | 'public' | 'session'> = {
   'GET /api/health': 'public',
