@@ -37,7 +37,7 @@ export default async function ReviewPage() {
         </Link>
         .
       </p>
-      <ReviewQueue viewer={{ id: user.id, handle: user.handle }} />
+      <ReviewQueue viewer={{ id: user.id, handle: user.handle, role: user.role }} />
       <SuspendedMembers />
     </div>
   );
