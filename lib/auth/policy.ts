@@ -75,8 +75,8 @@ export const POLICY = {
   'moderation.act': row({ moderator: true, admin: true }),
   /** the same actions on a moderator's post or account: admins only */
   'moderation.actOnModerator': row({ admin: true }),
-  /** the same actions on an admin's post or account: nobody (another admin changes their role first) */
-  'moderation.actOnAdmin': row({}),
+  /** the same actions on an admin's post or account: another admin only (who could change their role anyway; never on oneself, checked per post) */
+  'moderation.actOnAdmin': row({ admin: true }),
   /** an "unsafe advice" flag that hides a member's post pending review at once */
   'flag.hideUnsafeAtOnce': row({ expert: true }),
   /** the author's posts stay up however many members flag them, waiting in the queue for a moderator */
@@ -182,7 +182,7 @@ export const REFUSAL: Record<Action, string> = {
   'post.flag': 'Sign in to flag a post.',
   'moderation.act': 'Only moderators can use the review queue.',
   'moderation.actOnModerator': 'Only an admin can act on a moderator’s post or account.',
-  'moderation.actOnAdmin': 'Nobody acts on an admin’s post or account here; another admin changes their role first.',
+  'moderation.actOnAdmin': 'Only another admin can act on an admin’s post or account.',
   'flag.hideUnsafeAtOnce': 'Only an expert’s unsafe-advice flag hides a post at once.',
   'post.staysUpUnderMemberFlags': 'Members’ posts are hidden pending review when enough flags count.',
   'post.staysUpUnderExpertFlag': 'Members’ and experts’ posts are hidden pending review under an expert’s unsafe-advice flag.',

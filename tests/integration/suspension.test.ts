@@ -133,7 +133,7 @@ describe('lift suspension: a reason, an audit row, a notice and an e-mail, all o
     expect((await call(calcPOST, 'POST', '/api/calculations', 'ferncombe_tamsin', calc)).status).toBe(201);
   });
 
-  it('a moderator cannot lift an admin’s suspension, nor a suspended moderator anyone’s', async () => {
+  it('a moderator cannot lift an admin’s suspension, nor a suspended moderator anyone’s; another admin can', async () => {
     const { User } = initModels();
     const admin = (await User.findOne({ where: { handle: 'susp_admin' } }))!;
     expect((await call(liftPOST, 'POST', `/api/review/suspensions/${admin.id}/lift`, 'moss_moderator', { reason: 'rank test' }, { id: String(admin.id) })).status).toBe(403);
@@ -143,5 +143,8 @@ describe('lift suspension: a reason, an audit row, a notice and an e-mail, all o
     const self = (await User.findOne({ where: { handle: 'susp_moderator' } }))!;
     expect((await call(liftPOST, 'POST', `/api/review/suspensions/${self.id}/lift`, 'susp_moderator', { reason: 'lifting myself' }, { id: String(self.id) })).status).toBe(403);
     expect((await self.reload()).suspendedUntil).not.toBeNull();
+    // another admin can
+    expect((await call(liftPOST, 'POST', `/api/review/suspensions/${admin.id}/lift`, 'clack_admin', { reason: 'settled between admins' }, { id: String(admin.id) })).status).toBe(200);
+    expect((await admin.reload()).suspendedUntil).toBeNull();
   });
 });
