@@ -1,11 +1,12 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
 import { currentUserInPage, type SessionUser } from '@/lib/auth/session';
-import { can, REFUSAL } from '@/lib/auth/policy';
+import { can, refusedBySuspension, REFUSAL } from '@/lib/auth/policy';
 import { isDatabaseUnavailable } from '@/lib/db/errors';
 import { Refused } from '@/components/account/Refused';
 import { ServiceUnavailable } from '@/components/ServiceUnavailable';
 import { ReviewQueue } from '@/components/moderation/ReviewQueue';
+import { SuspendedMembers } from '@/components/moderation/SuspendedMembers';
 
 export const metadata: Metadata = { title: 'Review queue' };
 export const dynamic = 'force-dynamic';
@@ -21,7 +22,8 @@ export default async function ReviewPage() {
   }
 
   if (!user || !can(user, 'moderation.act')) {
-    return <Refused title="Review queue" message={REFUSAL['moderation.act']} signedIn={user !== null} signInTo="/review" />;
+    const message = user && refusedBySuspension(user, 'moderation.act') ? 'Your account is suspended: the review queue is closed to you until the suspension ends.' : REFUSAL['moderation.act'];
+    return <Refused title="Review queue" message={message} signedIn={user !== null} signInTo="/review" />;
   }
 
   return (
@@ -35,7 +37,8 @@ export default async function ReviewPage() {
         </Link>
         .
       </p>
-      <ReviewQueue viewer={{ id: user.id, handle: user.handle }} />
+      <ReviewQueue viewer={{ id: user.id, handle: user.handle, role: user.role }} />
+      <SuspendedMembers />
     </div>
   );
 }

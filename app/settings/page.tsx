@@ -28,7 +28,7 @@ export default async function SettingsPage() {
   let refusal: string | null = null;
   try {
     const user = await currentUserInPage();
-    if (user && can(user, 'profile.edit', user.id)) {
+    if (user && can(user, 'profile.read', user.id)) {
       const { User, Notice } = initModels();
       const row = await User.findByPk(user.id);
       const notices = can(user, 'notice.read', user.id)
@@ -44,7 +44,7 @@ export default async function SettingsPage() {
       const mail = await loadMailSettings(user.id);
       if (row && mail) {
         loaded = {
-          expert: row.role !== 'member',
+          expert: can(row, 'digest.expertSections'),
           mail,
           handle: row.handle,
           canApply: can(user, 'expertApplication.submit'),
@@ -53,7 +53,7 @@ export default async function SettingsPage() {
         };
       }
     } else if (user) {
-      refusal = REFUSAL['profile.edit'];
+      refusal = REFUSAL['profile.read'];
     }
   } catch (err) {
     if (isDatabaseUnavailable(err)) return <ServiceUnavailable what="your settings" />;

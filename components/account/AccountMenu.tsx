@@ -2,10 +2,12 @@
 
 import Link from 'next/link';
 import { signOut, useSession } from 'next-auth/react';
+import { can, sessionActor } from '@/lib/auth/policy';
 
 /** Sign in, or the member's name with settings and sign out. */
 export function AccountMenu() {
   const { data, status } = useSession();
+  const actor = sessionActor(data?.user);
   if (status === 'loading') return <span className="w-16" aria-hidden="true" />;
   if (!data?.user) {
     return (
@@ -24,12 +26,12 @@ export function AccountMenu() {
         <Link href="/settings" className="no-underline hover:underline">
           Settings
         </Link>
-        {data.user.role === 'moderator' || data.user.role === 'admin' ? (
+        {can(actor, 'expertApplication.decide') ? (
           <Link href="/review/experts" className="no-underline hover:underline">
             Expert applications
           </Link>
         ) : null}
-        {data.user.role === 'admin' ? (
+        {can(actor, 'user.changeRole') ? (
           <>
             <Link href="/admin/users" className="no-underline hover:underline">
               Members and roles

@@ -4,6 +4,7 @@ import useSWR from 'swr';
 import { useSession } from 'next-auth/react';
 import { RecordSafetyCheck } from './RecordSafetyCheck';
 import type { SafetyCheckView, SafetyStatus } from '@/lib/guides/safety';
+import { can, sessionActor } from '@/lib/auth/policy';
 
 interface Payload {
   status: SafetyStatus;
@@ -26,7 +27,7 @@ const day = (iso: string) => dateFmt.format(new Date(iso));
 export function SafetyCheckStatus({ slug }: { slug: string }) {
   const { data, error, isLoading, mutate } = useSWR(`/api/guides/${slug}/safety-checks`, fetcher, { revalidateOnFocus: false });
   const { data: session } = useSession();
-  const isExpert = session?.user?.role === 'expert';
+  const isExpert = can(sessionActor(session?.user), 'safetyCheck.record');
 
   if (isLoading) return <p className="cw-muted text-sm">Looking up safety checks…</p>;
   if (error || !data) return <p className="cw-muted text-sm">Safety checks could not be loaded just now.</p>;

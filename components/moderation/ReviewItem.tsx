@@ -4,6 +4,7 @@ import Link from 'next/link';
 import { MemberText } from '@/components/posts/MemberText';
 import { FLAG_REASON_WORDS, type FlagReason, type PostType } from './words';
 import { ActionPanel } from './ActionPanel';
+import { can, MODERATING, REFUSAL, type Role } from '@/lib/auth/policy';
 
 /** One entry of GET /api/review. */
 export interface ReviewItemView {
@@ -13,7 +14,7 @@ export interface ReviewItemView {
     questionId: number;
     questionTitle: string;
     body: string;
-    author: { id: number; handle: string; displayName: string } | null;
+    author: { id: number; handle: string; displayName: string; role: Role } | null;
     hiddenAt: string | null;
     deletedAt: string | null;
     createdAt: string;
@@ -28,11 +29,13 @@ export interface ReviewItemView {
 const when = (iso: string) => new Date(iso).toUTCString().slice(5, 22);
 
 /** A flagged post in context: where it sits, who wrote it, who flagged it and why, how it changed. */
-export function ReviewItem({ item, viewer, onDone }: { item: ReviewItemView; viewer: { id: number; handle: string }; onDone: (message: string) => void }) {
+export function ReviewItem({ item, viewer, onDone }: { item: ReviewItemView; viewer: { id: number; handle: string; role: Role }; onDone: (message: string) => void }) {
   const { post, flags, revisions } = item;
   const authorName = post.author?.displayName ?? 'a removed member';
   const own = post.author?.id === viewer.id;
   const flaggedByMe = flags.some((f) => f.flagger.handle === viewer.handle);
+  // the server refuses the same; saying so here spares a moderator a form that cannot succeed
+  const outranked = post.author ? !can(viewer, MODERATING[post.author.role]) : false;
   const where = { question: 'Question', answer: 'Answer on', reply: 'Reply on', photo: 'Photo on', 'field-log': 'Field log entry' }[post.type];
 
   return (
@@ -117,6 +120,8 @@ export function ReviewItem({ item, viewer, onDone }: { item: ReviewItemView; vie
         <p className="cw-muted font-sans text-sm">This is your own post: another moderator decides it.</p>
       ) : flaggedByMe ? (
         <p className="cw-muted font-sans text-sm">You flagged this post yourself: another moderator decides it.</p>
+      ) : outranked && post.author ? (
+        <p className="cw-muted font-sans text-sm">{REFUSAL[MODERATING[post.author.role]]}</p>
       ) : (
         <ActionPanel post={post} authorName={authorName} onDone={onDone} />
       )}

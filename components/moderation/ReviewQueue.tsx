@@ -4,6 +4,7 @@ import { useId, useState } from 'react';
 import useSWR from 'swr';
 import { FLAG_REASON_WORDS, type FlagReason } from './words';
 import { ReviewItem, type ReviewItemView } from './ReviewItem';
+import type { Role } from '@/lib/auth/policy';
 
 const REASONS = Object.keys(FLAG_REASON_WORDS) as FlagReason[];
 const AGES = [
@@ -24,7 +25,7 @@ async function fetcher(url: string): Promise<{ items: ReviewItemView[] }> {
  * flags and history and an action panel. After an action the list reloads, so a
  * settled post drops out.
  */
-export function ReviewQueue({ viewer }: { viewer: { id: number; handle: string } }) {
+export function ReviewQueue({ viewer }: { viewer: { id: number; handle: string; role: Role } }) {
   const id = useId();
   const [reason, setReason] = useState<FlagReason | ''>('');
   const [age, setAge] = useState('');

@@ -34,6 +34,7 @@ export const AUDIT_ACTION_WORDS: Record<string, string> = {
   retag: 'changed tags',
   warn: 'warned',
   suspend: 'suspended',
+  'lift-suspension': 'lifted the suspension of',
   'auto-hide': 'hid automatically',
 };
 

@@ -4,6 +4,7 @@ import { usePathname } from 'next/navigation';
 import useSWR from 'swr';
 import { Thread, useViewer } from './Thread';
 import type { ThreadView } from '@/lib/forum/thread';
+import { can, sessionActor } from '@/lib/auth/policy';
 
 const fetcher = (url: string) => fetch(url).then((r) => (r.ok ? (r.json() as Promise<ThreadView>) : null));
 
@@ -15,7 +16,7 @@ const fetcher = (url: string) => fetch(url).then((r) => (r.ok ? (r.json() as Pro
 export function ModeratorThread({ children }: { children: React.ReactNode }) {
   const viewer = useViewer();
   const id = /^\/questions\/(\d{1,10})$/.exec(usePathname() ?? '')?.[1];
-  const moderator = viewer && (viewer.role === 'moderator' || viewer.role === 'admin');
+  const moderator = can(sessionActor(viewer), 'moderation.seeHidden');
   const { data } = useSWR(moderator && id ? `/api/questions/${id}` : null, fetcher);
   if (!data) return <>{children}</>;
   return (

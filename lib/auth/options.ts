@@ -63,7 +63,7 @@ export const authOptions: NextAuthOptions = {
         if (!user || !good) throw new Error(SIGN_IN_ERRORS.wrong);
         if (!user.emailVerifiedAt) throw new Error(SIGN_IN_ERRORS.unverified);
         await forgive('signInAccount', account);
-        await refund('signInIp', ip);
+        await refund([['signInIp', ip]]);
         return toAuthed(user);
       },
     }),

@@ -4,11 +4,15 @@
  *
  * A rule is true (allowed), false (refused) or 'own' (allowed on the actor's own
  * resource only, e.g. editing their own profile).
+ *
+ * Each row also says whether a suspended account keeps it. Only `read()` rows do:
+ * a new action is refused to suspended accounts unless its row says otherwise, so
+ * a forgotten entry in some list of writes cannot let one through.
  */
 export const ACTOR_ROLES = ['anonymous', 'member', 'expert', 'moderator', 'admin'] as const;
 export type ActorRole = (typeof ACTOR_ROLES)[number];
 type Rule = boolean | 'own';
-type Row = Record<ActorRole, Rule>;
+type Row = Record<ActorRole, Rule> & { keptWhenSuspended: boolean };
 
 const row = (allowed: Partial<Record<ActorRole, Rule>>): Row => ({
   anonymous: false,
@@ -17,12 +21,15 @@ const row = (allowed: Partial<Record<ActorRole, Rule>>): Row => ({
   moderator: false,
   admin: false,
   ...allowed,
+  keptWhenSuspended: false,
 });
+/** A read that changes nothing: a suspended account keeps it. */
+const read = (r: Row): Row => ({ ...r, keptWhenSuspended: true });
 const signedIn = (rule: Rule = true) => row({ member: rule, expert: rule, moderator: rule, admin: rule });
 
 export const POLICY = {
   /** read guides, questions, field logs; use every calculator */
-  'content.read': row({ anonymous: true, member: true, expert: true, moderator: true, admin: true }),
+  'content.read': read(row({ anonymous: true, member: true, expert: true, moderator: true, admin: true })),
   /** save a worked calculation */
   'calculation.save': signedIn(),
   /** record a safety check on a guide version: experts only */
@@ -33,11 +40,14 @@ export const POLICY = {
   'expertApplication.decide': row({ moderator: true, admin: true }),
   /** change any member's role */
   'user.changeRole': row({ admin: true }),
-  /** edit display name, units and the like: one's own only */
+  /** see one's own settings (profile, units, e-mail choices) */
+  'profile.read': read(signedIn('own')),
+  /** edit display name, units, e-mail choices and the like: one's own only */
   'profile.edit': signedIn('own'),
-  /** end every session of one's own account ("sign out everywhere"); suspended members too */ 'session.revokeAll': signedIn(),
+  /** end every session of one's own account ("sign out everywhere"): it only takes power away, so suspended members keep it */
+  'session.revokeAll': { ...signedIn(), keptWhenSuspended: true },
   /** one's own notices */
-  'notice.read': signedIn('own'),
+  'notice.read': read(signedIn('own')),
   /** ask a question (with a site sheet and photos) */
   'question.ask': signedIn(),
   /** edit a question: the asker's own */
@@ -60,8 +70,23 @@ export const POLICY = {
   'photo.upload': signedIn(),
   /** flag a post for the review queue */
   'post.flag': signedIn(),
-  /** the review queue and its actions (never on one's own posts or flags: checked per post) */
+  /**
+   * the review queue and its actions on members' and experts' posts and accounts
+   * (never on one's own posts or flags: checked per post); lifting a suspension
+   */
   'moderation.act': row({ moderator: true, admin: true }),
+  /** the same actions on a moderator's post or account: admins only */
+  'moderation.actOnModerator': row({ admin: true }),
+  /** the same actions on an admin's post or account: another admin only (who could change their role anyway; never on oneself, checked per post) */
+  'moderation.actOnAdmin': row({ admin: true }),
+  /** an "unsafe advice" flag that hides a member's post pending review at once */
+  'flag.hideUnsafeAtOnce': row({ expert: true }),
+  /** the author's posts stay up however many members flag them, waiting in the queue for a moderator */
+  'post.staysUpUnderMemberFlags': row({ expert: true, moderator: true, admin: true }),
+  /** the author's posts stay up even under an expert's unsafe-advice flag (experts check each other; moderators are checked by admins) */
+  'post.staysUpUnderExpertFlag': row({ moderator: true, admin: true }),
+  /** the digest's sections for those who answer: questions still waiting in one's tags, guides whose safety check is stale */
+  'digest.expertSections': read(row({ expert: true, moderator: true, admin: true })),
   /** read the audit log */
   'audit.read': row({ admin: true }),
   /** see the e-mail outbox (failed messages with their SMTP error) and send a failed one again */
@@ -79,17 +104,61 @@ export const POLICY = {
 export type Action = keyof typeof POLICY;
 export const ACTIONS = Object.keys(POLICY) as Action[];
 
+export type Role = Exclude<ActorRole, 'anonymous'>;
+
 export interface Actor {
   id: number;
-  role: Exclude<ActorRole, 'anonymous'>;
+  role: Role;
+  /** a suspended account keeps only the rows marked as reads (unknown in the browser's session: the server decides) */
+  suspendedUntil?: Date | null;
+}
+
+const ROLES: readonly Role[] = ['member', 'expert', 'moderator', 'admin'];
+
+/**
+ * The actor a browser's session names, for `can()` in client components (which links
+ * to show). The session knows no suspension; the server refuses what it takes away.
+ */
+export function sessionActor(user: { id?: unknown; role?: unknown } | null | undefined): Actor | null {
+  const id = Number(user?.id);
+  const role = ROLES.find((r) => r === user?.role);
+  return Number.isInteger(id) && id > 0 && role ? { id, role } : null;
+}
+
+export function isSuspended(actor: Actor | null, now = Date.now()): boolean {
+  return !!actor?.suspendedUntil && actor.suspendedUntil.getTime() > now;
+}
+
+/** Whether the policy leaves this action open to the actor's role at all ('own' rules pass here and are checked once the owner is known). */
+export function roleMayTry(actor: Actor | null, action: Action): boolean {
+  return POLICY[action][actor ? actor.role : 'anonymous'] !== false;
+}
+
+/** Refused only because the account is suspended: the role would allow it. */
+export function refusedBySuspension(actor: Actor | null, action: Action): boolean {
+  return roleMayTry(actor, action) && !POLICY[action].keptWhenSuspended && isSuspended(actor);
+}
+
+/** May this actor try this action, leaving an 'own' rule for the work to check against the resource? */
+export function mayTry(actor: Actor | null, action: Action): boolean {
+  return roleMayTry(actor, action) && !refusedBySuspension(actor, action);
 }
 
 /** May this actor (null = signed out) take this action, on a resource owned by `ownerId` where that matters? */
 export function can(actor: Actor | null, action: Action, ownerId?: number | null): boolean {
+  if (!mayTry(actor, action)) return false;
   const rule = POLICY[action][actor ? actor.role : 'anonymous'];
   if (rule === 'own') return actor !== null && ownerId !== undefined && ownerId !== null && ownerId === actor.id;
   return rule;
 }
+
+/** The action that moderating a post or account of this role needs: rank decides, through the rows above. */
+export const MODERATING: Record<Role, Action> = {
+  member: 'moderation.act',
+  expert: 'moderation.act',
+  moderator: 'moderation.actOnModerator',
+  admin: 'moderation.actOnAdmin',
+};
 
 /** Plain words for a refusal, so a 403 says what would be needed. */
 export const REFUSAL: Record<Action, string> = {
@@ -99,6 +168,7 @@ export const REFUSAL: Record<Action, string> = {
   'expertApplication.submit': 'Only members who are not yet experts can apply for expert standing.',
   'expertApplication.decide': 'Only moderators can decide expert applications.',
   'user.changeRole': 'Only admins can change roles.',
+  'profile.read': 'You can only see your own settings.',
   'profile.edit': 'You can only change your own profile.',
   'session.revokeAll': 'Sign in to sign out everywhere.',
   'notice.read': 'You can only read your own notices.',
@@ -114,6 +184,12 @@ export const REFUSAL: Record<Action, string> = {
   'photo.upload': 'Sign in to add photos.',
   'post.flag': 'Sign in to flag a post.',
   'moderation.act': 'Only moderators can use the review queue.',
+  'moderation.actOnModerator': 'Only an admin can act on a moderator’s post or account.',
+  'moderation.actOnAdmin': 'Only another admin can act on an admin’s post or account.',
+  'flag.hideUnsafeAtOnce': 'Only an expert’s unsafe-advice flag hides a post at once.',
+  'post.staysUpUnderMemberFlags': 'Members’ posts are hidden pending review when enough flags count.',
+  'post.staysUpUnderExpertFlag': 'Members’ and experts’ posts are hidden pending review under an expert’s unsafe-advice flag.',
+  'digest.expertSections': 'Only experts, moderators and admins get the digest’s unanswered questions and stale safety checks.',
   'audit.read': 'Only admins can read the audit log.',
   'mail.outbox': 'Only admins can see the e-mail outbox.',
   'moderation.seeHidden': 'Only moderators can see hidden posts.',

@@ -30,6 +30,9 @@ function makeLimits() {
     flagIp: limiter(60, 60 * 60, 'flag-ip'),
     uploadAccount: limiter(30, 60 * 60, 'upload-account'),
     uploadIp: limiter(90, 60 * 60, 'upload-ip'),
+    // worked calculations: an answer's calculation is saved before the answer, so a separate allowance
+    calculationAccount: limiter(60, 60 * 60, 'calculation-account'),
+    calculationIp: limiter(240, 60 * 60, 'calculation-ip'),
   };
 }
 export function limits() {
@@ -53,17 +56,18 @@ export async function spend(checks: [LimitName, string][]): Promise<LimitResult>
   return { ok: true };
 }
 
+/**
+ * Gives back the points `spend` took: a request the work then refused uses no
+ * allowance, and a successful sign-in is not an attempt on anyone's password (many
+ * members may share one address: a household, an office).
+ */
+export async function refund(checks: [LimitName, string][]): Promise<void> {
+  for (const [name, key] of checks) await limits()[name].reward(key.toLowerCase(), 1);
+}
+
 /** Clears an account's sign-in count after a successful sign-in. */
 export async function forgive(name: LimitName, key: string) {
   await limits()[name].delete(key.toLowerCase());
-}
-
-/**
- * Gives back the point a request spent: a successful sign-in is not an attempt on
- * anyone's password, and many members may share one address (a household, an office).
- */
-export async function refund(name: LimitName, key: string) {
-  await limits()[name].reward(key.toLowerCase(), 1);
 }
 
 export function limitMessage(retryAfterS: number): string {

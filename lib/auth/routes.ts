@@ -3,7 +3,10 @@ import type { Action } from './policy';
 /**
  * Every API route handler and the policy action it checks ('public' when anyone
  * may call it, 'session' for next-auth's own endpoints). The permission matrix test
- * walks app/api and fails when a handler has no entry here.
+ * walks app/api and fails when a handler has no entry here, when a protected
+ * handler does not call `guarded(request, '<its action>', …)` or reads the session
+ * itself, and when any persona (suspended ones included) gets other than the
+ * policy table says.
  */
 export const API_ROUTES: Record<string, Action | 'public' | 'session'> = {
   'GET /api/health': 'public',
@@ -16,7 +19,7 @@ export const API_ROUTES: Record<string, Action | 'public' | 'session'> = {
   'POST /api/expert-applications': 'expertApplication.submit',
   'POST /api/expert-applications/[id]/decision': 'expertApplication.decide',
   'PUT /api/admin/users/[id]/role': 'user.changeRole',
-  'GET /api/account/settings': 'profile.edit',
+  'GET /api/account/settings': 'profile.read',
   'PUT /api/account/settings': 'profile.edit',
   'POST /api/account/sign-out-everywhere': 'session.revokeAll',
   'GET /api/auth/[...nextauth]': 'session',
@@ -46,9 +49,11 @@ export const API_ROUTES: Record<string, Action | 'public' | 'session'> = {
   'POST /api/flags': 'post.flag',
   'GET /api/review': 'moderation.act',
   'POST /api/review/actions': 'moderation.act',
+  'GET /api/review/suspensions': 'moderation.act',
+  'POST /api/review/suspensions/[id]/lift': 'moderation.act',
   'GET /api/admin/audit': 'audit.read',
   'POST /api/admin/outbox/[id]/retry': 'mail.outbox',
-  'GET /api/account/mail': 'profile.edit',
+  'GET /api/account/mail': 'profile.read',
   'PUT /api/account/mail': 'profile.edit',
   'POST /api/unsubscribe': 'public',
   'GET /api/unsubscribe': 'public',

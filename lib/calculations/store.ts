@@ -25,6 +25,17 @@ export interface NewWorkedCalculation {
   title?: string | null;
 }
 
+/**
+ * The inputs limited to the tool's own fields, in the field order, on an object with
+ * no prototype: anything else a client sends ("__proto__", a stray "results") is not
+ * stored and never reaches a reader's "try with my numbers".
+ */
+export function keepToolFields(form: Record<string, string>, fields: readonly string[]): Record<string, string> {
+  const kept: Record<string, string> = Object.create(null);
+  for (const f of fields) if (Object.prototype.hasOwnProperty.call(form, f) && typeof form[f] === 'string') kept[f] = form[f];
+  return kept;
+}
+
 export async function saveWorkedCalculation(c: NewWorkedCalculation, transaction?: Transaction) {
   const { WorkedCalculation } = initModels();
   return WorkedCalculation.create(

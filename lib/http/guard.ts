@@ -1,15 +1,12 @@
 import { apiError, serverError } from './errors';
 import { currentUser, type SessionUser } from '@/lib/auth/session';
-import { can, POLICY, REFUSAL, type Action } from '@/lib/auth/policy';
+import { refusedBySuspension, REFUSAL, roleMayTry, type Action } from '@/lib/auth/policy';
 import { ForumError } from '@/lib/forum/errors';
-import { clientIp, limitMessage, spend, type LimitName } from '@/lib/auth/rate-limit';
+import { clientIp, limitMessage, refund, spend, type LimitName } from '@/lib/auth/rate-limit';
 
 /** Members younger than this are "new": fewer posts an hour and fewer links a post. */
 export const NEW_MEMBER_DAYS = 7;
 export const NEW_MEMBER_MAX_LINKS = 2;
-
-/** Actions a suspended member cannot take. */
-const WRITES = new Set<Action>(['calculation.save', 'question.ask', 'question.edit', 'answer.post', 'answer.edit', 'reply.post', 'reply.edit', 'post.markHelpful', 'question.markFixed', 'post.flag', 'photo.upload', 'expertApplication.submit', 'fieldLog.create', 'fieldLog.edit', 'fieldLog.import']);
 
 export function isNewMember(user: SessionUser, now = Date.now()): boolean {
   return now - user.memberSince.getTime() < NEW_MEMBER_DAYS * 86_400_000;
@@ -20,17 +17,22 @@ export function countLinks(text: string): number {
   return (text.match(/https?:\/\/[^\s)]+/g) ?? []).length;
 }
 
+export type FloodKind = 'post' | 'flag' | 'upload' | 'calculation';
+
 /**
- * The common shape of a write: who is asking (401 when signed out), may their role
- * take this action at all (403 with the policy's words), then the work, with a
- * ForumError turned into its status and field. 'own' rules are checked again by the
- * work itself once it knows the owner.
+ * The one way a route handler reaches a protected action: who is asking (401 when
+ * signed out), may their role take this action at all and does a suspension leave
+ * it to them (403 with the policy's words), then the work, with a ForumError turned
+ * into its status and field. 'own' rules are checked again by the work itself once
+ * it knows the owner. A flood allowance is spent before the work, so two requests
+ * at once cannot both slip under it, and given back when the work refuses the
+ * request: only accepted writes use it up.
  */
 export async function guarded(
   request: Request,
   action: Action,
   work: (user: SessionUser) => Promise<Response>,
-  options: { flood?: 'post' | 'flag' | 'upload' } = {},
+  options: { flood?: FloodKind } = {},
 ): Promise<Response> {
   let user: SessionUser | null;
   try {
@@ -39,17 +41,18 @@ export async function guarded(
     return serverError(err);
   }
   if (!user) return apiError(401, REFUSAL[action], undefined, 'unauthenticated');
-  const rule = POLICY[action][user.role];
-  if (!(rule === 'own' || can(user, action))) return apiError(403, REFUSAL[action], undefined, 'forbidden');
-  if (WRITES.has(action) && user.suspendedUntil && user.suspendedUntil.getTime() > Date.now()) {
-    return apiError(403, `Your account is suspended until ${user.suspendedUntil.toUTCString().slice(5, 16)}. See your notices in Settings for the reason.`, undefined, 'suspended');
+  if (!roleMayTry(user, action)) return apiError(403, REFUSAL[action], undefined, 'forbidden');
+  if (refusedBySuspension(user, action)) {
+    return apiError(403, `Your account is suspended until ${user.suspendedUntil!.toUTCString().slice(5, 16)}. See your notices in Settings for the reason.`, undefined, 'suspended');
   }
+  let spent: [LimitName, string][] = [];
   if (options.flood) {
     const ip = clientIp(request.headers);
-    const checks: Record<typeof options.flood, [LimitName, string][]> = {
+    const checks: Record<FloodKind, [LimitName, string][]> = {
       flag: [['flagIp', ip], ['flagAccount', String(user.id)]],
       upload: [['uploadIp', ip], ['uploadAccount', String(user.id)]],
       post: [['postIp', ip], [isNewMember(user) ? 'postNewAccount' : 'postAccount', String(user.id)]],
+      calculation: [['calculationIp', ip], ['calculationAccount', String(user.id)]],
     };
     try {
       const limited = await spend(checks[options.flood]);
@@ -58,16 +61,26 @@ export async function guarded(
         res.headers.set('Retry-After', String(limited.retryAfterS));
         return res;
       }
+      spent = checks[options.flood];
     } catch (err) {
       return serverError(err);
     }
   }
+  let res: Response;
   try {
-    return await work(user);
+    res = await work(user);
   } catch (err) {
-    if (err instanceof ForumError) return apiError(err.status, err.message, err.field);
-    return serverError(err);
+    res = err instanceof ForumError ? apiError(err.status, err.message, err.field) : serverError(err);
   }
+  if (!res.ok && spent.length) {
+    try {
+      await refund(spent);
+    } catch (err) {
+      // the refusal stands whatever the limiter's store says; a lost refund only costs the member one point
+      console.error('could not give back a flood allowance', err);
+    }
+  }
+  return res;
 }
 
 /** Reads a numeric route id, or undefined. */

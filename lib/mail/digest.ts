@@ -7,6 +7,7 @@ import { siteUrl } from '@/lib/site';
 import { enqueue, type OutgoingMail } from './outbox';
 import { renderMail, type MailItem, type MailSection } from './templates';
 import { unsubscribeHeaders, unsubscribePageUrl } from './unsubscribe';
+import { can } from '@/lib/auth/policy';
 
 /**
  * Digests. A run for one frequency builds each member's message from what changed
@@ -21,7 +22,6 @@ const NEW_QUESTIONS_MAX = 20;
 const UNANSWERED_MAX = 10;
 /** Unanswered questions older than this drop out of an expert's digest. */
 const UNANSWERED_DAYS = 60;
-const EXPERT_ROLES = new Set(['expert', 'moderator', 'admin']);
 
 /** "2026-W49" for weekly digests (ISO 8601 week, UTC), "2026-12-02" for daily ones. */
 export function periodKey(frequency: DigestFrequency, now: Date): string {
@@ -107,7 +107,7 @@ interface RunContext {
 
 /** The sections of one member's digest (empty ones left out). */
 async function digestSections(user: Pick<User, 'id' | 'role'>, run: RunContext): Promise<MailSection[]> {
-  const expert = EXPERT_ROLES.has(user.role);
+  const expert = can(user, 'digest.expertSections');
   const fresh = await questionsInTags(user.id, { since: run.start, until: run.now, unanswered: false, limit: NEW_QUESTIONS_MAX });
   const waiting = expert ? await questionsInTags(user.id, { since: new Date(run.now.getTime() - UNANSWERED_DAYS * DAY), until: run.now, unanswered: true, limit: UNANSWERED_MAX }) : [];
   const tags = await tagNames([...fresh, ...waiting].map((q) => q.id));

@@ -3,6 +3,7 @@ import { getSequelize } from '@/lib/db';
 import { initModels } from '@/models';
 import { ForumError } from '@/lib/forum/errors';
 import type { SessionUser } from '@/lib/auth/session';
+import { can, MODERATING, REFUSAL, type Actor, type Role } from '@/lib/auth/policy';
 import { recordAudit } from './audit';
 import { notifyModeration } from '@/lib/mail/notify';
 import { postsChanged } from '@/lib/forum/after-write';
@@ -32,6 +33,12 @@ const POST_LABEL: Record<ModeratedType, string> = {
   'field-log': 'your field log entry',
 };
 
+/** Refuses acting on an account of equal or higher rank (a moderator on a moderator or an admin, anyone on an admin). */
+export function checkRank(actor: Actor, targetRole: Role): void {
+  const action = MODERATING[targetRole];
+  if (!can(actor, action)) throw new ForumError(403, REFUSAL[action]);
+}
+
 /**
  * Takes one moderation action. The change, the flags it settles, its audit row and
  * the author's notice are one transaction: no action without its audit row.
@@ -44,6 +51,8 @@ export async function moderate(
   const done = await getSequelize().transaction(async (transaction) => {
     const { post, questionId } = await loadPost(input.postType, input.postId, transaction);
     if (post.authorId === moderator.id) throw new ForumError(403, 'Moderators cannot act on their own posts.');
+    const author = await User.findByPk(post.authorId, { attributes: ['id', 'role'], transaction });
+    if (author) checkRank(moderator, author.role);
     const ownFlag = await Flag.findOne({ where: { postType: input.postType, postId: input.postId, flaggerId: moderator.id, status: 'open' }, transaction });
     if (ownFlag) throw new ForumError(403, 'Moderators cannot act on a post they flagged themselves; another moderator will.');
     const now = new Date();

@@ -1,6 +1,7 @@
 import { Op } from 'sequelize';
 import { initModels } from '@/models';
 import type { FlagReason } from '@/models/Flag';
+import type { Role } from '@/lib/auth/policy';
 import { photoQuestionId } from './posts';
 
 /** Posts with open flags, oldest flag first, each with its context, the flaggers' notes and its revisions. */
@@ -19,23 +20,23 @@ export async function reviewQueue(filter: { reason?: FlagReason; olderThanHours?
   for (const [k, fs] of groups) {
     const [type, idText] = k.split(':') as ['question' | 'answer' | 'reply' | 'photo' | 'field-log', string];
     const id = Number(idText);
-    type QueuedPost = { id: number; body: string; questionId?: number | null; hiddenAt: Date | null; deletedAt: Date | null; createdAt: Date; author?: { id: number; handle: string; displayName: string }; photoId?: string };
+    type QueuedPost = { id: number; body: string; questionId?: number | null; hiddenAt: Date | null; deletedAt: Date | null; createdAt: Date; author?: { id: number; handle: string; displayName: string; role: Role }; photoId?: string };
     let post: QueuedPost | null;
     if (type === 'field-log') {
       const entry = await FieldLogEntry.findByPk(id);
-      const author = entry ? await User.findByPk(entry.authorId, { attributes: ['id', 'handle', 'displayName'] }) : null;
+      const author = entry ? await User.findByPk(entry.authorId, { attributes: ['id', 'handle', 'displayName', 'role'] }) : null;
       post = entry
         ? { id: entry.id, body: `Field log: ${entry.siteName} (${entry.testedOn}). ${entry.notes}`.trim(), questionId: null, hiddenAt: entry.hiddenAt ?? null, deletedAt: entry.deletedAt ?? null, createdAt: entry.createdAt, author: author ?? undefined }
         : null;
     } else if (type === 'photo') {
       const photo = await Photo.findByPk(id);
-      const owner = photo ? await User.findByPk(photo.ownerId, { attributes: ['id', 'handle', 'displayName'] }) : null;
+      const owner = photo ? await User.findByPk(photo.ownerId, { attributes: ['id', 'handle', 'displayName', 'role'] }) : null;
       post = photo
         ? { id: photo.id, body: photo.alt ?? '', questionId: await photoQuestionId(photo), hiddenAt: photo.hiddenAt ?? null, deletedAt: photo.deletedAt ?? null, createdAt: photo.createdAt, author: owner ?? undefined, photoId: photo.publicId }
         : null;
     } else {
       const model = { question: Question, answer: Answer, reply: Reply }[type] as unknown as typeof Answer;
-      post = (await model.findByPk(id, { include: [{ model: User, as: 'author', attributes: ['id', 'handle', 'displayName'] }] })) as unknown as QueuedPost | null;
+      post = (await model.findByPk(id, { include: [{ model: User, as: 'author', attributes: ['id', 'handle', 'displayName', 'role'] }] })) as unknown as QueuedPost | null;
     }
     if (!post) continue;
     const questionId = type === 'question' ? post.id : (post.questionId ?? 0);
@@ -48,7 +49,7 @@ export async function reviewQueue(filter: { reason?: FlagReason; olderThanHours?
         questionId,
         questionTitle: q?.title ?? '',
         body: post.body,
-        author: post.author ? { id: post.author.id, handle: post.author.handle, displayName: post.author.displayName } : null,
+        author: post.author ? { id: post.author.id, handle: post.author.handle, displayName: post.author.displayName, role: post.author.role } : null,
         hiddenAt: post.hiddenAt?.toISOString() ?? null,
         deletedAt: post.deletedAt?.toISOString() ?? null,
         createdAt: post.createdAt.toISOString(),

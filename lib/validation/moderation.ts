@@ -31,3 +31,7 @@ export const auditFilterSchema = z.object({
   to: z.string().regex(/^\d{4}-\d{2}-\d{2}$/, 'to must be a date like 2026-11-30').optional(),
   page: z.string().regex(/^\d{1,6}$/, 'page must be a whole number').transform(Number).optional(),
 });
+
+export const liftSuspensionSchema = z.object({
+  reason: z.string({ error: 'reason is required' }).trim().min(3, 'reason: lifting a suspension needs a reason (at least 3 characters)').max(1000, 'reason must be at most 1,000 characters'),
+});

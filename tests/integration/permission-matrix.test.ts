@@ -1,10 +1,11 @@
-import { readdirSync, statSync } from 'node:fs';
+import { readdirSync, readFileSync, statSync } from 'node:fs';
 import path from 'node:path';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { NextRequest } from 'next/server';
 import { encode } from 'next-auth/jwt';
 import { API_ROUTES } from '@/lib/auth/routes';
 import { POLICY, type Action } from '@/lib/auth/policy';
+import { POST as actionPOST } from '@/app/api/review/actions/route';
 import { authSecret } from '@/lib/auth/secret';
 import { initModels } from '@/models';
 import { freshDemoDatabase } from './db';
@@ -32,14 +33,20 @@ async function discoverHandlers(): Promise<{ key: string; file: string; method: 
   return out;
 }
 
-type Persona = 'anonymous' | 'member' | 'owner' | 'expert' | 'moderator' | 'admin';
+type Persona = 'anonymous' | 'member' | 'owner' | 'expert' | 'moderator' | 'admin' | 'suspendedMember' | 'suspendedExpert' | 'suspendedAdmin';
+const PERSONAS: Persona[] = ['anonymous', 'member', 'owner', 'expert', 'moderator', 'admin', 'suspendedMember', 'suspendedExpert', 'suspendedAdmin'];
 const PERSONA_HANDLE: Record<Exclude<Persona, 'anonymous'>, string> = {
   member: 'highcrag_shepherd',
   owner: 'ferncombe_tamsin',
   expert: 'ironwheel_builds',
   moderator: 'moss_moderator',
   admin: 'clack_admin',
+  // accounts the matrix creates, suspended until 2099
+  suspendedMember: 'matrix_suspended_member',
+  suspendedExpert: 'matrix_suspended_expert',
+  suspendedAdmin: 'matrix_suspended_admin',
 };
+const SUSPENDED: Partial<Record<Persona, 'member' | 'expert' | 'admin'>> = { suspendedMember: 'member', suspendedExpert: 'expert', suspendedAdmin: 'admin' };
 
 /**
  * A request each protected route accepts when the caller is allowed: the matrix
@@ -78,6 +85,9 @@ const SAMPLES: Record<string, (ids: Record<string, number>) => Sample> = {
   'POST /api/flags': (ids) => ({ body: { postType: 'answer', postId: ids.flagTarget, reason: 'spam' } }),
   'GET /api/review': () => ({}),
   'POST /api/review/actions': (ids) => ({ body: { action: 'warn', postType: 'answer', postId: ids.ownerAnswer, reason: 'checking the matrix' } }),
+  'GET /api/review/suspensions': () => ({}),
+  // no member 999999: an allowed caller gets 404, never 401/403
+  'POST /api/review/suspensions/[id]/lift': () => ({ params: { id: '999999' }, body: { reason: 'served the time' } }),
   'GET /api/admin/audit': () => ({}),
   // no failed message 999999: an allowed caller gets 404, never 401/403
   'POST /api/admin/outbox/[id]/retry': () => ({ params: { id: '999999' } }),
@@ -106,19 +116,93 @@ async function cookieFor(persona: Persona): Promise<string | undefined> {
 }
 
 function allowed(action: Action, persona: Persona, selfOnly: boolean): boolean {
-  const roleOf: Record<Persona, keyof (typeof POLICY)[Action]> = {
+  const roleOf: Record<Persona, 'anonymous' | 'member' | 'expert' | 'moderator' | 'admin'> = {
     anonymous: 'anonymous', member: 'member', owner: 'member', expert: 'expert', moderator: 'moderator', admin: 'admin',
+    suspendedMember: 'member', suspendedExpert: 'expert', suspendedAdmin: 'admin',
   };
+  // a suspended account keeps only the rows the table marks as kept (reads)
+  if (SUSPENDED[persona] && !POLICY[action].keptWhenSuspended) return false;
   const rule = POLICY[action][roleOf[persona]];
   // 'own' rules: the samples act on the owner's own resource
   return rule === 'own' ? persona === 'owner' || (selfOnly && persona !== 'anonymous') : rule;
+}
+
+/** The text of the function `name` in `text`, from its declaration to the next top-level declaration. */
+function functionText(text: string, name: string): string | null {
+  const start = text.search(new RegExp(`^(export\\s+)?(async\\s+)?function\\s+${name}\\b`, 'm'));
+  if (start < 0) return null;
+  const next = text.slice(start + 1).search(/\n(export|async|function|const|let)\s/);
+  return next < 0 ? text.slice(start) : text.slice(start, start + 1 + next);
+}
+
+/**
+ * The source of one exported handler: `export async function METHOD`, or
+ * `export const METHOD = (…) => helper(…)` with the helper's own text.
+ */
+function handlerSource(file: string, method: string): string | null {
+  const text = readFileSync(file, 'utf8');
+  const direct = functionText(text, method);
+  if (direct) return direct;
+  const arrow = text.match(new RegExp(`^export\\s+const\\s+${method}\\s*=\\s*\\([^)]*\\)\\s*=>\\s*(\\w+)\\(`, 'm'));
+  return arrow ? functionText(text, arrow[1]) : null;
 }
 
 describe('permission matrix: every API route × every persona, against the policy table', () => {
   let handlers: Awaited<ReturnType<typeof discoverHandlers>>;
   beforeAll(async () => {
     await freshDemoDatabase();
+    const { User } = initModels();
+    for (const [persona, role] of Object.entries(SUSPENDED)) {
+      const handle = PERSONA_HANDLE[persona as Exclude<Persona, 'anonymous'>];
+      await User.create({ handle, displayName: handle, email: `${handle}@matrix.example`, role, region: null, bio: null, emailVerifiedAt: new Date(), suspendedUntil: new Date('2099-01-31T23:59:59Z') });
+    }
     handlers = await discoverHandlers();
+  });
+
+  it('every protected handler goes through guarded() with the action lib/auth/routes.ts names; the rest are listed public', () => {
+    const failures: string[] = [];
+    for (const h of handlers) {
+      const action = API_ROUTES[h.key];
+      if (!action || action === 'session') continue;
+      const src = handlerSource(h.file, h.method);
+      if (src === null) {
+        failures.push(`${h.key}: write it as \`export async function ${h.method}\` (or \`export const ${h.method} = (…) => helper(…)\`) so this check can read it`);
+        continue;
+      }
+      if (action === 'public') continue;
+      const calls = [...src.matchAll(/guarded\(\s*\w+\s*,\s*'([\w.]+)'/g)].map((m) => m[1]);
+      if (calls.length === 0) failures.push(`${h.key}: protected (${action}) but never calls guarded()`);
+      else if (!calls.includes(action)) failures.push(`${h.key}: routes.ts says ${action}, guarded() is called with ${calls.join(', ')}`);
+      if (/\bcurrentUser\(/.test(src)) failures.push(`${h.key}: reads the session itself; guarded() hands the work its user`);
+    }
+    expect(failures).toEqual([]);
+  });
+
+  it('rank: a moderator cannot act on an admin’s or another moderator’s post; an admin acts on a moderator’s or another admin’s, never on their own', async () => {
+    const { User, Question, Answer } = initModels();
+    const admin = (await User.findOne({ where: { handle: 'clack_admin' } }))!;
+    const moderator = (await User.findOne({ where: { handle: 'moss_moderator' } }))!;
+    const q = (await Question.findOne({ order: [['id', 'ASC']] }))!;
+    const otherAdmin = await User.create({ handle: 'matrix_second_admin', displayName: 'Second admin', email: 'second-admin@matrix.example', role: 'admin', region: null, bio: null, emailVerifiedAt: new Date() });
+    const otherModerator = await User.create({ handle: 'matrix_second_mod', displayName: 'Second moderator', email: 'second-mod@matrix.example', role: 'moderator', region: null, bio: null, emailVerifiedAt: new Date() });
+    const post = async (authorId: number) => (await Answer.create({ questionId: q.id, authorId, body: 'Keep the drive pipe straight and rigid.' })).id;
+    const act = async (persona: Persona, body: Record<string, unknown>) => {
+      const cookie = (await cookieFor(persona))!;
+      const req = new NextRequest('http://localhost/api/review/actions', { method: 'POST', headers: { 'content-type': 'application/json', cookie }, body: JSON.stringify(body) });
+      return actionPOST(req);
+    };
+    const adminPost = await post(admin.id);
+    expect((await act('moderator', { action: 'hide', postType: 'answer', postId: adminPost, reason: 'testing rank' })).status).toBe(403);
+    expect((await act('moderator', { action: 'suspend', postType: 'answer', postId: adminPost, reason: 'testing rank', until: '2099-01-31' })).status).toBe(403);
+    expect((await Answer.findByPk(adminPost))!.hiddenAt).toBeNull();
+    expect((await admin.reload()).suspendedUntil).toBeNull();
+    const modPost = await post(otherModerator.id);
+    expect((await act('moderator', { action: 'hide', postType: 'answer', postId: modPost, reason: 'testing rank' })).status).toBe(403);
+    expect((await act('admin', { action: 'hide', postType: 'answer', postId: modPost, reason: 'testing rank' })).status).toBe(200);
+    // another admin, never oneself
+    expect((await act('admin', { action: 'hide', postType: 'answer', postId: await post(otherAdmin.id), reason: 'testing rank' })).status).toBe(200);
+    expect((await act('admin', { action: 'hide', postType: 'answer', postId: await post(admin.id), reason: 'testing rank' })).status).toBe(403);
+    expect((await act('admin', { action: 'hide', postType: 'answer', postId: await post(moderator.id), reason: 'testing rank' })).status).toBe(200);
   });
 
   it('finds the route handlers, and every one has an entry in lib/auth/routes.ts', () => {
@@ -154,7 +238,7 @@ describe('permission matrix: every API route × every persona, against the polic
     for (const h of handlers) {
       const action = API_ROUTES[h.key];
       if (!action || action === 'public' || action === 'session') continue;
-      for (const persona of ['anonymous', 'member', 'owner', 'expert', 'moderator', 'admin'] as Persona[]) {
+      for (const persona of PERSONAS) {
         const sample = SAMPLES[h.key](ids);
         const routePath = h.key.split(' ')[1].replace(/\[(\w+)\]/g, (_, k: string) => sample.params?.[k] ?? 'x');
         const cookie = await cookieFor(persona);
@@ -177,5 +261,5 @@ describe('permission matrix: every API route × every persona, against the polic
       }
     }
     expect(failures).toEqual([]);
-  }, 120_000);
+  }, 180_000);
 });

@@ -3,9 +3,8 @@ import { getSequelize } from '@/lib/db';
 import { initModels } from '@/models';
 import type { User } from '@/models/User';
 import { readJson } from '@/lib/http/body';
-import { apiError, serverError } from '@/lib/http/errors';
-import { currentUser } from '@/lib/auth/session';
-import { can, REFUSAL } from '@/lib/auth/policy';
+import { apiError } from '@/lib/http/errors';
+import { guarded } from '@/lib/http/guard';
 import { accountSettingsSchema } from '@/lib/validation/community';
 import { displayNameSchema } from '@/lib/validation/account';
 import { UNITS_COOKIE } from '@/lib/units/preference';
@@ -20,16 +19,11 @@ function settingsView(u: User) {
 
 /** GET /api/account/settings — the signed-in member's own settings. */
 export async function GET(request: Request) {
-  try {
-    const user = await currentUser(request);
-    if (!user) return apiError(401, 'Sign in to see your settings.', undefined, 'unauthenticated');
-    if (!can(user, 'profile.edit', user.id)) return apiError(403, REFUSAL['profile.edit'], undefined, 'forbidden');
+  return guarded(request, 'profile.read', async (user) => {
     const row = await initModels().User.findByPk(user.id);
     if (!row) return apiError(401, 'Sign in to see your settings.', undefined, 'unauthenticated');
     return NextResponse.json(settingsView(row));
-  } catch (err) {
-    return serverError(err);
-  }
+  });
 }
 
 /**
@@ -37,10 +31,7 @@ export async function GET(request: Request) {
  * the row changed is always the session's own, never one named in the body.
  */
 export async function PUT(request: Request) {
-  try {
-    const user = await currentUser(request);
-    if (!user) return apiError(401, 'Sign in to change your settings.', undefined, 'unauthenticated');
-    if (!can(user, 'profile.edit', user.id)) return apiError(403, REFUSAL['profile.edit'], undefined, 'forbidden');
+  return guarded(request, 'profile.edit', async (user) => {
     // role words in a display name are the holder's own role's only
     const body = await readJson(request, accountSettingsSchema.extend({ displayName: displayNameSchema(user.role) }));
     if ('response' in body) return body.response;
@@ -56,7 +47,5 @@ export async function PUT(request: Request) {
     // Not httpOnly: the header's unit switch reads and writes the same cookie in the browser.
     res.cookies.set(UNITS_COOKIE, units, { path: '/', maxAge: ONE_YEAR_S, sameSite: 'lax' });
     return res;
-  } catch (err) {
-    return serverError(err);
-  }
+  });
 }

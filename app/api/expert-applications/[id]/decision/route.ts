@@ -1,8 +1,7 @@
 import { NextResponse } from 'next/server';
 import { readJson } from '@/lib/http/body';
-import { apiError, serverError } from '@/lib/http/errors';
-import { currentUser } from '@/lib/auth/session';
-import { can, REFUSAL } from '@/lib/auth/policy';
+import { apiError } from '@/lib/http/errors';
+import { guarded } from '@/lib/http/guard';
 import { expertDecisionSchema, routeId } from '@/lib/validation/community';
 import { decideExpertApplication } from '@/lib/accounts/roles';
 
@@ -10,10 +9,7 @@ export const dynamic = 'force-dynamic';
 
 /** POST /api/expert-applications/:id/decision — a moderator approves or declines, with a note to the applicant. */
 export async function POST(request: Request, { params }: { params: Promise<{ id: string }> }) {
-  try {
-    const user = await currentUser(request);
-    if (!user) return apiError(401, 'Sign in to decide expert applications.', undefined, 'unauthenticated');
-    if (!can(user, 'expertApplication.decide')) return apiError(403, REFUSAL['expertApplication.decide'], undefined, 'forbidden');
+  return guarded(request, 'expertApplication.decide', async (user) => {
     const id = routeId((await params).id);
     if (id === null) return apiError(404, 'There is no such expert application.', 'id', 'not_found');
     const body = await readJson(request, expertDecisionSchema);
@@ -21,7 +17,5 @@ export async function POST(request: Request, { params }: { params: Promise<{ id:
     const out = await decideExpertApplication(user.id, id, body.data.decision, body.data.note);
     if (!out.ok) return apiError(out.status, out.message, out.field, out.code);
     return NextResponse.json({ id, status: out.status, applicantRole: out.role });
-  } catch (err) {
-    return serverError(err);
-  }
+  });
 }

@@ -5,8 +5,7 @@ import { readGuideFile } from '@/lib/guides/content';
 import { listSafetyChecks, safetyStatus } from '@/lib/guides/safety';
 import { readJson } from '@/lib/http/body';
 import { apiError, serverError } from '@/lib/http/errors';
-import { currentUser } from '@/lib/auth/session';
-import { can, REFUSAL } from '@/lib/auth/policy';
+import { guarded } from '@/lib/http/guard';
 import { safetyCheckSchema } from '@/lib/validation/community';
 
 export const dynamic = 'force-dynamic';
@@ -31,10 +30,7 @@ export async function GET(_req: Request, { params }: { params: Promise<{ slug: s
  */
 export async function POST(request: Request, { params }: { params: Promise<{ slug: string }> }) {
   const { slug } = await params;
-  try {
-    const user = await currentUser(request);
-    if (!user) return apiError(401, 'Sign in as an expert to record a safety check.', undefined, 'unauthenticated');
-    if (!can(user, 'safetyCheck.record')) return apiError(403, REFUSAL['safetyCheck.record'], undefined, 'forbidden');
+  return guarded(request, 'safetyCheck.record', async (user) => {
     const guide = readGuideFile(slug);
     if (!guide) return apiError(404, `no guide called ${slug}`, 'slug', 'not_found');
     const body = await readJson(request, safetyCheckSchema);
@@ -57,7 +53,5 @@ export async function POST(request: Request, { params }: { params: Promise<{ slu
       },
       { status: 201 },
     );
-  } catch (err) {
-    return serverError(err);
-  }
+  });
 }

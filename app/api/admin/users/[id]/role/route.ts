@@ -1,8 +1,7 @@
 import { NextResponse } from 'next/server';
 import { readJson } from '@/lib/http/body';
-import { apiError, serverError } from '@/lib/http/errors';
-import { currentUser } from '@/lib/auth/session';
-import { can, REFUSAL } from '@/lib/auth/policy';
+import { apiError } from '@/lib/http/errors';
+import { guarded } from '@/lib/http/guard';
 import { roleChangeSchema, routeId } from '@/lib/validation/community';
 import { changeRole } from '@/lib/accounts/roles';
 
@@ -10,10 +9,7 @@ export const dynamic = 'force-dynamic';
 
 /** PUT /api/admin/users/:id/role — an admin sets another member's role. */
 export async function PUT(request: Request, { params }: { params: Promise<{ id: string }> }) {
-  try {
-    const user = await currentUser(request);
-    if (!user) return apiError(401, 'Sign in to change roles.', undefined, 'unauthenticated');
-    if (!can(user, 'user.changeRole')) return apiError(403, REFUSAL['user.changeRole'], undefined, 'forbidden');
+  return guarded(request, 'user.changeRole', async (user) => {
     const id = routeId((await params).id);
     if (id === null) return apiError(404, 'There is no such member.', 'id', 'not_found');
     const body = await readJson(request, roleChangeSchema);
@@ -21,7 +17,5 @@ export async function PUT(request: Request, { params }: { params: Promise<{ id: 
     const out = await changeRole(user.id, id, body.data.role);
     if (!out.ok) return apiError(out.status, out.message, out.field, out.code);
     return NextResponse.json({ id, role: out.role, changed: out.changed });
-  } catch (err) {
-    return serverError(err);
-  }
+  });
 }
