@@ -154,7 +154,7 @@ export async function postReply(user: SessionUser, questionId: number, input: { 
   return thenIndex(write, (r) => r.questionId);
 }
 
-type PostType = 'question' | 'answer' | 'reply';
+import type { PostType } from '@/lib/vocabulary';
 
 async function postOwner(postType: PostType, postId: number, transaction: Transaction) {
   const { Question, Answer, Reply } = initModels();

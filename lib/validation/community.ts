@@ -1,6 +1,5 @@
 import { z } from 'zod';
-import { ROLES } from '@/models/User';
-import { SAFETY_VERDICTS } from '@/models/SafetyCheck';
+import { ROLES, SAFETY_VERDICTS } from '@/lib/vocabulary';
 import { UNIT_SYSTEMS } from '@/lib/units/preference';
 
 /** Schemas for expert applications, roles, account settings and safety checks: shared by forms and handlers. */
