@@ -1,3 +1,4 @@
+import 'server-only';
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
 
 import { DIGEST_FREQUENCIES, ROLES, type DigestFrequency, type Role } from '@/lib/vocabulary';

@@ -1,3 +1,4 @@
+import 'server-only';
 import { getToken } from 'next-auth/jwt';
 import { getServerSession } from 'next-auth';
 import type { NextRequest } from 'next/server';
