@@ -4,10 +4,8 @@ import { notFound } from 'next/navigation';
 import 'katex/dist/katex.min.css';
 import { findWorkedCalculation } from '@/lib/calculations/store';
 import { catalogueEntry } from '@/lib/calculators-catalogue';
-import { isDatabaseUnavailable } from '@/lib/db/errors';
 import { computeFromForm, resultsDiffer } from '@/components/calculators/recompute';
 import { CalculatorById } from '@/components/calculators/Calculators';
-import { ServiceUnavailable } from '@/components/ServiceUnavailable';
 
 export const metadata: Metadata = { title: 'Worked calculation' };
 
@@ -15,13 +13,7 @@ const dateFmt = new Intl.DateTimeFormat('en', { day: 'numeric', month: 'long', y
 
 export default async function WorkedCalculationPage({ params }: { params: Promise<{ id: string }> }) {
   const { id } = await params;
-  let saved: Awaited<ReturnType<typeof findWorkedCalculation>>;
-  try {
-    saved = await findWorkedCalculation(id);
-  } catch (err) {
-    if (isDatabaseUnavailable(err)) return <ServiceUnavailable what="this worked calculation" />;
-    throw err;
-  }
+  const saved: Awaited<ReturnType<typeof findWorkedCalculation>> = await findWorkedCalculation(id);
   if (!saved) notFound();
   const entry = catalogueEntry(saved.tool);
   const form = saved.inputs as Record<string, string>;
