@@ -2,6 +2,7 @@
 
 import { useEffect, useState } from 'react';
 import { ServiceUnavailable } from '@/components/ServiceUnavailable';
+import { sendJson } from '@/components/forms/api';
 
 /**
  * App-wide error boundary: plain words and a retry, never a stack trace. Pages let a
@@ -15,9 +16,7 @@ export default function ErrorPage({ error, retry }: { error: Error & { digest?: 
   useEffect(() => {
     console.error(error);
     let live = true;
-    fetch('/api/health', { cache: 'no-store' })
-      .then((res) => live && setDatabase(res.status === 503 ? 'down' : 'up'))
-      .catch(() => live && setDatabase('up'));
+    sendJson('/api/health', 'GET').then((r) => live && setDatabase(r.status === 503 ? 'down' : 'up'));
     return () => {
       live = false;
     };

@@ -2,10 +2,9 @@
 
 import { usePathname } from 'next/navigation';
 import useSWR from 'swr';
+import { getJsonOrNull } from '@/components/forms/api';
 import { Thread, useViewer } from './Thread';
 import type { ThreadView } from '@/lib/forum/thread';
-
-const fetcher = (url: string) => fetch(url).then((r) => (r.ok ? (r.json() as Promise<ThreadView>) : null));
 
 /**
  * On a question's "not found" page: a hidden or deleted question is not found for
@@ -16,7 +15,7 @@ export function ModeratorThread({ children }: { children: React.ReactNode }) {
   const viewer = useViewer();
   const id = /^\/questions\/(\d{1,10})$/.exec(usePathname() ?? '')?.[1];
   const moderator = viewer && (viewer.role === 'moderator' || viewer.role === 'admin');
-  const { data } = useSWR(moderator && id ? `/api/questions/${id}` : null, fetcher);
+  const { data } = useSWR(moderator && id ? `/api/questions/${id}` : null, getJsonOrNull<ThreadView>);
   if (!data) return <>{children}</>;
   return (
     <article className="flex flex-col gap-5">
