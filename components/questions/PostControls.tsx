@@ -4,6 +4,7 @@ import { useState } from 'react';
 import { MemberText } from '@/components/posts/MemberText';
 import { RevisionDiff } from '@/components/posts/RevisionDiff';
 import { sendJson } from '@/components/forms/api';
+import type { PostType } from '@/lib/vocabulary';
 
 /** "Helpful": one per member, never on one's own post; the count moves at once and settles on the server's. */
 export function HelpfulButton({
@@ -14,7 +15,7 @@ export function HelpfulButton({
   disabled,
   onChanged,
 }: {
-  postType: 'question' | 'answer' | 'reply';
+  postType: PostType;
   postId: number;
   count: number;
   marked: boolean;

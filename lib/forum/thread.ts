@@ -2,6 +2,7 @@ import { Op } from 'sequelize';
 import { initModels } from '@/models';
 import { ForumError } from './errors';
 import { can, type Actor } from '@/lib/auth/policy';
+import type { PostType } from '@/lib/vocabulary';
 
 /** A photo with a post; `ref` is what a flag names, `hidden` only ever true for moderators. */
 export interface PhotoView {
@@ -188,7 +189,7 @@ export async function loadThread(id: number, viewer: Actor | null): Promise<Thre
   };
 }
 
-export async function listRevisions(postType: 'question' | 'answer' | 'reply', postId: number) {
+export async function listRevisions(postType: PostType, postId: number) {
   const { Revision, User } = initModels();
   const rows = await Revision.findAll({
     where: { postType, postId },
