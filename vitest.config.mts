@@ -2,7 +2,13 @@ import { defineConfig } from 'vitest/config';
 import { fileURLToPath } from 'node:url';
 
 export default defineConfig({
-  resolve: { alias: { '@': fileURLToPath(new URL('.', import.meta.url)).replace(/\/$/, '') } },
+  resolve: {
+    alias: {
+      '@': fileURLToPath(new URL('.', import.meta.url)).replace(/\/$/, ''),
+      // Next resolves 'server-only' in its bundles (an error in a client one); tests are server code
+      'server-only': 'next/dist/compiled/server-only/empty.js',
+    },
+  },
   test: {
     include: ['tests/{unit,hydraulics,integration,reliability}/**/*.test.{ts,tsx}'],
     environment: 'node',

@@ -6,7 +6,7 @@
  */
 import { QueryTypes, type Sequelize } from 'sequelize';
 import { getSequelize } from '@/lib/db';
-import { resetDatabase } from '../tests/integration/reset';
+import { resetDatabase } from '../tests/support/reset';
 import { generatePosts, type BenchPost } from './generate';
 
 /**

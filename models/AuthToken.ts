@@ -1,3 +1,4 @@
+import 'server-only';
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
 
 export const TOKEN_PURPOSES = ['verify-email', 'reset-password', 'sign-in-link'] as const;

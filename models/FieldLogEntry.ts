@@ -1,4 +1,6 @@
+import 'server-only';
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type NonAttribute, type Sequelize } from 'sequelize';
+import { PUMP_TYPES, type PumpType } from '@/lib/vocabulary';
 import type { User } from './User';
 import type { FieldLogTrial } from './FieldLogTrial';
 
@@ -8,7 +10,7 @@ export class FieldLogEntry extends Model<InferAttributes<FieldLogEntry>, InferCr
   declare authorId: number;
   declare siteName: string;
   declare testedOn: string;
-  declare pumpType: 'homemade' | 'commercial';
+  declare pumpType: PumpType;
   declare pumpSize: string;
   declare pumpCount: number;
   declare arrangement: 'single' | 'parallel' | 'staged';
@@ -46,7 +48,7 @@ export class FieldLogEntry extends Model<InferAttributes<FieldLogEntry>, InferCr
         authorId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false },
         siteName: { type: DataTypes.STRING(80), allowNull: false },
         testedOn: { type: DataTypes.DATEONLY, allowNull: false },
-        pumpType: { type: DataTypes.ENUM('homemade', 'commercial'), allowNull: false },
+        pumpType: { type: DataTypes.ENUM(...PUMP_TYPES), allowNull: false },
         pumpSize: { type: DataTypes.STRING(8), allowNull: false },
         pumpCount: { type: DataTypes.TINYINT.UNSIGNED, allowNull: false },
         arrangement: { type: DataTypes.ENUM('single', 'parallel', 'staged'), allowNull: false },

@@ -1,10 +1,10 @@
+import 'server-only';
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type NonAttribute, type Sequelize } from 'sequelize';
 import type { User } from './User';
 
-export const FLAG_POST_TYPES = ['question', 'answer', 'reply', 'photo', 'field-log'] as const;
-export type FlagPostType = (typeof FLAG_POST_TYPES)[number];
-export const FLAG_REASONS = ['spam', 'unsafe', 'rude', 'off-topic', 'other'] as const;
-export type FlagReason = (typeof FLAG_REASONS)[number];
+import { FLAG_REASONS, MODERATED_TYPES as FLAG_POST_TYPES, type FlagReason, type ModeratedType as FlagPostType } from '@/lib/vocabulary';
+
+export { FLAG_POST_TYPES, FLAG_REASONS, type FlagPostType, type FlagReason };
 
 /** A member's flag on a post, open until a moderator dismisses or upholds it. */
 export class Flag extends Model<InferAttributes<Flag>, InferCreationAttributes<Flag>> {

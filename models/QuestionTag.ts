@@ -1,3 +1,4 @@
+import 'server-only';
 import { DataTypes, Model, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
 
 export class QuestionTag extends Model<InferAttributes<QuestionTag>, InferCreationAttributes<QuestionTag>> {

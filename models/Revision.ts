@@ -1,8 +1,10 @@
+import 'server-only';
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type NonAttribute, type Sequelize } from 'sequelize';
 import type { User } from './User';
 
-export const POST_TYPES = ['question', 'answer', 'reply'] as const;
-export type PostType = (typeof POST_TYPES)[number];
+import { POST_TYPES, type PostType } from '@/lib/vocabulary';
+
+export { POST_TYPES, type PostType };
 
 /** The text of a post as it was before an edit (or as first posted). */
 export class Revision extends Model<InferAttributes<Revision>, InferCreationAttributes<Revision>> {

@@ -1,3 +1,4 @@
+import 'server-only';
 import {
   DataTypes,
   Model,
@@ -10,8 +11,9 @@ import {
 } from 'sequelize';
 import type { User } from './User';
 
-export const SAFETY_VERDICTS = ['sound', 'needs changes'] as const;
-export type SafetyVerdict = (typeof SAFETY_VERDICTS)[number];
+import { SAFETY_VERDICTS, type SafetyVerdict } from '@/lib/vocabulary';
+
+export { SAFETY_VERDICTS, type SafetyVerdict };
 
 /** An expert's sign-off on one version (content hash) of one guide. */
 export class SafetyCheck extends Model<InferAttributes<SafetyCheck>, InferCreationAttributes<SafetyCheck>> {

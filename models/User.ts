@@ -1,9 +1,9 @@
+import 'server-only';
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
 
-export const ROLES = ['member', 'expert', 'moderator', 'admin'] as const;
-export type Role = (typeof ROLES)[number];
-export const DIGEST_FREQUENCIES = ['off', 'daily', 'weekly'] as const;
-export type DigestFrequency = (typeof DIGEST_FREQUENCIES)[number];
+import { DIGEST_FREQUENCIES, ROLES, type DigestFrequency, type Role } from '@/lib/vocabulary';
+
+export { DIGEST_FREQUENCIES, ROLES, type DigestFrequency, type Role };
 
 export class User extends Model<InferAttributes<User>, InferCreationAttributes<User>> {
   declare id: CreationOptional<number>;

@@ -1,3 +1,4 @@
+import 'server-only';
 import type { Sequelize } from 'sequelize';
 import { getSequelize } from '@/lib/db';
 import { User } from './User';

@@ -1,7 +1,7 @@
 /** Empties the database (every migration down), migrates up, seeds the demo and drops the saved thread pages. Tests only. */
 import { getSequelize } from '@/lib/db';
 import { forgetSavedPages } from '@/lib/forum/saved-pages';
-import { resetDatabase } from '@/tests/integration/reset';
+import { resetDatabase } from '@/tests/support/reset';
 
 resetDatabase(getSequelize())
   .then(() => getSequelize().close())

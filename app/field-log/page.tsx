@@ -2,12 +2,10 @@ import type { Metadata } from 'next';
 import Link from 'next/link';
 import { notFound } from 'next/navigation';
 import { currentUserInPage } from '@/lib/auth/session';
-import { isDatabaseUnavailable } from '@/lib/db/errors';
 import { NOMINAL_SIZES } from '@/lib/hydraulics';
 import { ForumError } from '@/lib/forum/errors';
 import { fieldLogFilterSchema, PIPE_MATERIAL_CHOICES, type FieldLogFilter } from '@/lib/validation/field-log';
 import { filteredEntries, sortAndPage, type EntryView } from '@/lib/field-log/store';
-import { ServiceUnavailable } from '@/components/ServiceUnavailable';
 import { Pager } from '@/components/QuestionList';
 import { EfficiencyChart } from '@/components/field-log/EfficiencyChart';
 import { material, pumpsWords, shown, shownValue, size, unitOf } from '@/components/field-log/format';
@@ -44,7 +42,6 @@ export default async function FieldLogPage({ searchParams }: { searchParams: Pro
     viewerId = viewer?.id ?? null;
     entries = await filteredEntries(f, viewer);
   } catch (err) {
-    if (isDatabaseUnavailable(err)) return <ServiceUnavailable what="the field log" />;
     if (err instanceof ForumError) notFound();
     throw err;
   }

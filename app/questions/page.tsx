@@ -2,11 +2,9 @@ import type { Metadata } from 'next';
 import { notFound } from 'next/navigation';
 import { paginationSchema } from '@/lib/validation/pagination';
 import Link from 'next/link';
-import { listQuestions, type ListFilter, type QuestionPage } from '@/lib/questions/list';
+import { listQuestions, type ListFilter } from '@/lib/questions/list';
 import { currentUserInPage } from '@/lib/auth/session';
-import { isDatabaseUnavailable } from '@/lib/db/errors';
 import { QuestionList, Pager } from '@/components/QuestionList';
-import { ServiceUnavailable } from '@/components/ServiceUnavailable';
 
 export const metadata: Metadata = {
   title: 'Questions',
@@ -20,24 +18,17 @@ export default async function QuestionsPage({ searchParams }: { searchParams: Pr
   if (!parsed.success) notFound();
 
   const show = one(sp.show) ?? 'newest';
-  let data: QuestionPage;
-  let signedIn = false;
-  try {
-    const viewer = await currentUserInPage();
-    signedIn = viewer !== null;
-    const filter: ListFilter =
-      show === 'unanswered'
-        ? { kind: 'unanswered' }
-        : show === 'mine' && viewer
-          ? { kind: 'mine', userId: viewer.id }
-          : show === 'followed' && viewer
-            ? { kind: 'followed', userId: viewer.id }
-            : { kind: 'newest' };
-    data = await listQuestions(parsed.data, filter);
-  } catch (err) {
-    if (isDatabaseUnavailable(err)) return <ServiceUnavailable what="the questions" />;
-    throw err;
-  }
+  const viewer = await currentUserInPage();
+  const signedIn = viewer !== null;
+  const filter: ListFilter =
+    show === 'unanswered'
+      ? { kind: 'unanswered' }
+      : show === 'mine' && viewer
+        ? { kind: 'mine', userId: viewer.id }
+        : show === 'followed' && viewer
+          ? { kind: 'followed', userId: viewer.id }
+          : { kind: 'newest' };
+  const data = await listQuestions(parsed.data, filter);
   if (parsed.data.page > data.totalPages) notFound();
 
   return (

@@ -6,8 +6,6 @@ import { listGuides } from '@/lib/guides/content';
 import { currentUserInPage } from '@/lib/auth/session';
 import { can } from '@/lib/auth/policy';
 import { initModels } from '@/models';
-import { isDatabaseUnavailable } from '@/lib/db/errors';
-import { ServiceUnavailable } from '@/components/ServiceUnavailable';
 import { SearchResults, type SearchState } from '@/components/search/SearchResults';
 
 export const metadata: Metadata = { title: 'Search', robots: { index: false } };
@@ -23,22 +21,17 @@ export default async function SearchPage({ searchParams }: { searchParams: Promi
   let result: SearchResult | null = null;
   let unavailable: string | null = null;
   let tags: { slug: string; name: string }[] = [];
-  try {
-    const viewer = await currentUserInPage();
-    tags = (await initModels().Tag.findAll({ attributes: ['slug', 'name'], order: [['name', 'ASC']] })).map((t) => ({ slug: t.slug, name: t.name }));
-    if (query.q) {
-      const { q, kind, ...rest } = query;
-      result = await search({ q, kinds: kind, ...rest }, { seeHidden: can(viewer, 'moderation.seeHidden') }).catch((err) => {
-        if (err instanceof SearchUnavailableError) {
-          unavailable = err.message;
-          return null;
-        }
-        throw err;
-      });
-    }
-  } catch (err) {
-    if (isDatabaseUnavailable(err)) return <ServiceUnavailable what="search" />;
-    throw err;
+  const viewer = await currentUserInPage();
+  tags = (await initModels().Tag.findAll({ attributes: ['slug', 'name'], order: [['name', 'ASC']] })).map((t) => ({ slug: t.slug, name: t.name }));
+  if (query.q) {
+    const { q, kind, ...rest } = query;
+    result = await search({ q, kinds: kind, ...rest }, { seeHidden: can(viewer, 'moderation.seeHidden') }).catch((err) => {
+      if (err instanceof SearchUnavailableError) {
+        unavailable = err.message;
+        return null;
+      }
+      throw err;
+    });
   }
   const initial: SearchState = {
     q: query.q,

@@ -4,6 +4,7 @@ import { useState } from 'react';
 import { useRouter } from 'next/navigation';
 import { NOMINAL_LABELS, NOMINAL_SIZES } from '@/lib/hydraulics/pipes';
 import { PIPE_MATERIAL_CHOICES } from '@/lib/validation/field-log';
+import { PUMP_TYPES } from '@/lib/vocabulary';
 import { FieldError, inputClass, labelClass, sendJson, type FormError } from '@/components/forms/api';
 import { PhotoPicker } from '@/components/photos/PhotoPicker';
 import { MATERIAL_LABELS } from './format';
@@ -76,7 +77,7 @@ export function EntryForm() {
         <legend className="mb-2 font-serif text-lg font-semibold">The test</legend>
         {text('siteName', 'Site name', 'the same name links tests of one installation')}
         {text('testedOn', 'Date of the test', undefined, 'date')}
-        {select('pumpType', 'Pump type', [{ value: 'homemade', label: 'homemade' }, { value: 'commercial', label: 'commercial' }])}
+        {select('pumpType', 'Pump type', PUMP_TYPES.map((t) => ({ value: t, label: t })))}
         {select('pumpSize', 'Pump size', sizes)}
         {text('pumpCount', 'Number of pumps', undefined, 'number')}
         {select('arrangement', 'Arrangement', [{ value: 'single', label: 'single pump' }, { value: 'parallel', label: 'in parallel' }, { value: 'staged', label: 'staged' }])}

@@ -1,7 +1,7 @@
 'use client';
 
 import { useState } from 'react';
-import { inputClass, labelClass } from '@/components/forms/api';
+import { inputClass, labelClass, sendJson } from '@/components/forms/api';
 
 interface RowError { line: number; column: string; message: string }
 type Outcome = { kind: 'done'; imported: number; skipped: number; errors: RowError[] } | { kind: 'refused'; message: string; errors: RowError[] };
@@ -16,13 +16,9 @@ export function ImportForm() {
   async function submit(ev: React.FormEvent) {
     ev.preventDefault();
     setBusy(true);
-    try {
-      const res = await fetch('/api/field-log/import', { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ csv, mode }) });
-      const body = (await res.json().catch(() => ({}))) as { imported?: number; skipped?: number; errors?: RowError[]; error?: { message: string } };
-      setOutcome(res.ok ? { kind: 'done', imported: body.imported ?? 0, skipped: body.skipped ?? 0, errors: body.errors ?? [] } : { kind: 'refused', message: body.error?.message ?? `Something went wrong (${res.status}).`, errors: body.errors ?? [] });
-    } catch {
-      setOutcome({ kind: 'refused', message: 'Clackwater could not be reached. Check your connection and try again.', errors: [] });
-    }
+    const r = await sendJson<{ imported?: number; skipped?: number; errors?: RowError[] }>('/api/field-log/import', 'POST', { csv, mode });
+    if (r.ok) setOutcome({ kind: 'done', imported: r.data?.imported ?? 0, skipped: r.data?.skipped ?? 0, errors: r.data?.errors ?? [] });
+    else setOutcome({ kind: 'refused', message: r.error.message, errors: (r.body as { errors?: RowError[] } | null)?.errors ?? [] });
     setBusy(false);
   }
 

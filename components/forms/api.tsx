@@ -1,25 +1,7 @@
-/**
- * What the forms share: send JSON to a route handler and get back either the
- * answer or the API's `{ error: { field, message } }`, shown beside its field.
- */
-export interface FormError {
-  field?: string;
-  message: string;
-}
+import type { FormError } from '@/lib/http/client';
 
-export type Sent<T> = { ok: true; data: T } | { ok: false; error: FormError };
-
-export async function sendJson<T = unknown>(url: string, method: 'POST' | 'PUT', body: unknown): Promise<Sent<T>> {
-  let res: Response;
-  try {
-    res = await fetch(url, { method, headers: { 'content-type': 'application/json' }, body: JSON.stringify(body) });
-  } catch {
-    return { ok: false, error: { message: 'Clackwater could not be reached. Check your connection and try again.' } };
-  }
-  const json = (await res.json().catch(() => null)) as { error?: FormError } | null;
-  if (res.ok) return { ok: true, data: json as T };
-  return { ok: false, error: { field: json?.error?.field, message: json?.error?.message ?? `Something went wrong (${res.status}).` } };
-}
+/* What the forms share: the one JSON client (lib/http/client.ts) and the error shown beside its field. */
+export { getJson, getJsonOrNull, sendJson, type FormError, type Sent } from '@/lib/http/client';
 
 /** The message for one field, or for the form as a whole when `field` is omitted. */
 export function FieldError({ error, field, id }: { error: FormError | null; field?: string; id?: string }) {

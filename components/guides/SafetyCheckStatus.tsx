@@ -1,6 +1,7 @@
 'use client';
 
 import useSWR from 'swr';
+import { getJson } from '@/components/forms/api';
 import { useSession } from 'next-auth/react';
 import { RecordSafetyCheck } from './RecordSafetyCheck';
 import type { SafetyCheckView, SafetyStatus } from '@/lib/guides/safety';
@@ -11,12 +12,6 @@ interface Payload {
   checks: SafetyCheckView[];
 }
 
-const fetcher = async (url: string): Promise<Payload> => {
-  const res = await fetch(url);
-  if (!res.ok) throw new Error(String(res.status));
-  return res.json();
-};
-
 const dateFmt = new Intl.DateTimeFormat('en', { day: 'numeric', month: 'long', year: 'numeric', timeZone: 'UTC' });
 const day = (iso: string) => dateFmt.format(new Date(iso));
 
@@ -25,7 +20,7 @@ const day = (iso: string) => dateFmt.format(new Date(iso));
  * live so a new check, or an edit that makes the last one stale, shows at once.
  */
 export function SafetyCheckStatus({ slug }: { slug: string }) {
-  const { data, error, isLoading, mutate } = useSWR(`/api/guides/${slug}/safety-checks`, fetcher, { revalidateOnFocus: false });
+  const { data, error, isLoading, mutate } = useSWR(`/api/guides/${slug}/safety-checks`, getJson<Payload>, { revalidateOnFocus: false });
   const { data: session } = useSession();
   const isExpert = can(sessionActor(session?.user), 'safetyCheck.record');
 

@@ -1,11 +1,12 @@
 import { Caution } from '@/components/Caution';
+import type { PostType } from '@/lib/vocabulary';
 
 /**
  * What a thread shows about a post's review state, above its text: an amber caution
  * while an "unsafe advice" flag is open, and — for moderators, the only readers who
  * receive such posts — whether it is hidden or deleted.
  */
-export function PostMarks({ post, kind }: { post: { cautionUnsafe: boolean; hiddenAt: string | null; deletedAt: string | null }; kind: 'question' | 'answer' | 'reply' }) {
+export function PostMarks({ post, kind }: { post: { cautionUnsafe: boolean; hiddenAt: string | null; deletedAt: string | null }; kind: PostType }) {
   if (!post.cautionUnsafe && !post.hiddenAt && !post.deletedAt) return null;
   return (
     <>

@@ -2,6 +2,7 @@
 
 import { useId, useState } from 'react';
 import useSWR from 'swr';
+import { getJson } from '@/components/forms/api';
 import { FLAG_REASON_WORDS, type FlagReason } from './words';
 import { ReviewItem, type ReviewItemView } from './ReviewItem';
 import type { Role } from '@/lib/auth/policy';
@@ -12,13 +13,6 @@ const AGES = [
   { value: '24', label: 'older than 24 h' },
   { value: '168', label: 'older than 7 days' },
 ];
-
-async function fetcher(url: string): Promise<{ items: ReviewItemView[] }> {
-  const res = await fetch(url);
-  const json = await res.json().catch(() => null);
-  if (!res.ok) throw new Error(json?.error?.message ?? `The review queue could not be loaded (${res.status}).`);
-  return json;
-}
 
 /**
  * The review queue: flagged posts, oldest flag first, each read in context with its
@@ -31,7 +25,7 @@ export function ReviewQueue({ viewer }: { viewer: { id: number; handle: string; 
   const [age, setAge] = useState('');
   const [lastDone, setLastDone] = useState<string | null>(null);
   const query = new URLSearchParams({ ...(reason ? { reason } : {}), ...(age ? { olderThanHours: age } : {}) }).toString();
-  const { data, error, isLoading, mutate } = useSWR(`/api/review${query ? `?${query}` : ''}`, fetcher, { revalidateOnFocus: false });
+  const { data, error, isLoading, mutate } = useSWR(`/api/review${query ? `?${query}` : ''}`, getJson<{ items: ReviewItemView[] }>, { revalidateOnFocus: false });
 
   return (
     <div className="flex flex-col gap-4">

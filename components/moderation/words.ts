@@ -1,7 +1,7 @@
 /** The review queue's plain words, shared by the flag form, the queue and the audit log. */
-export type PostType = 'question' | 'answer' | 'reply' | 'photo' | 'field-log';
-export type FlagReason = 'spam' | 'unsafe' | 'rude' | 'off-topic' | 'other';
-export type ModerationAction = 'dismiss' | 'hide' | 'restore' | 'delete' | 'lock' | 'unlock' | 'retag' | 'warn' | 'suspend';
+import { QUESTION_ONLY_ACTIONS, type FlagReason, type ModeratedType as PostType, type ModerationAction } from '@/lib/vocabulary';
+
+export type { FlagReason, ModerationAction, PostType };
 
 export const FLAG_REASON_WORDS: Record<FlagReason, string> = {
   spam: 'spam',
@@ -38,5 +38,4 @@ export const AUDIT_ACTION_WORDS: Record<string, string> = {
   'auto-hide': 'hid automatically',
 };
 
-/** Actions that only make sense on a question (the thread as a whole). */
-export const QUESTION_ONLY: ModerationAction[] = ['lock', 'unlock', 'retag'];
+export const QUESTION_ONLY = QUESTION_ONLY_ACTIONS;

@@ -4,7 +4,7 @@ import { useCallback, useState } from 'react';
 import { CalculatorCard } from '@/components/calculators/kit/CalculatorCard';
 import { CALCULATOR_LIST, getCalculator, shareQuery, type FormState } from '@/lib/calculators';
 import { calculatorPropsFromSiteSheet } from '@/lib/calculators/site-sheet';
-import { call } from './api';
+import { sendJson } from '@/components/forms/api';
 
 /**
  * Answer, optionally with a worked calculation: pick a calculator, it opens filled
@@ -29,14 +29,14 @@ export function AnswerComposer({ questionId, siteSheet, onPosted }: { questionId
         e.preventDefault();
         setBusy(true);
         setError(null);
-        const r = await call('POST', `/api/questions/${questionId}/answers`, { body, ...(attached ? { calculationId: attached.id } : {}) });
+        const r = await sendJson(`/api/questions/${questionId}/answers`, 'POST', { body, ...(attached ? { calculationId: attached.id } : {}) });
         setBusy(false);
         if (r.ok) {
           setBody('');
           setTool('');
           setAttached(null);
           onPosted();
-        } else setError(r);
+        } else setError(r.error);
       }}
     >
       <h2 className="font-serif text-xl font-semibold">Your answer</h2>
@@ -75,9 +75,9 @@ export function AnswerComposer({ questionId, siteSheet, onPosted }: { questionId
               disabled={!form}
               onClick={async () => {
                 if (!form) return;
-                const r = await call<{ id: string }>('POST', '/api/calculations', { tool, inputs: Object.fromEntries(shareQuery(def.fields, form).entries()) });
+                const r = await sendJson<{ id: string }>('/api/calculations', 'POST', { tool, inputs: Object.fromEntries(shareQuery(def.fields, form).entries()) });
                 if (r.ok) setAttached({ id: r.data.id, tool });
-                else setError(r);
+                else setError(r.error);
               }}
             >
               Attach this calculation
@@ -109,12 +109,12 @@ export function ReplyComposer({ questionId, answerId, replyToId, onPosted, label
       className="mt-2 flex flex-col gap-2"
       onSubmit={async (e) => {
         e.preventDefault();
-        const r = await call('POST', `/api/questions/${questionId}/replies`, { body: text, ...(answerId ? { answerId } : {}), ...(replyToId ? { replyToId } : {}) });
+        const r = await sendJson(`/api/questions/${questionId}/replies`, 'POST', { body: text, ...(answerId ? { answerId } : {}), ...(replyToId ? { replyToId } : {}) });
         if (r.ok) {
           setText('');
           setOpen(false);
           onPosted();
-        } else setError(r.message);
+        } else setError(r.error.message);
       }}
     >
       <label htmlFor={id} className="text-xs font-semibold">

@@ -104,13 +104,8 @@ function useSimilarQuestions(title: string, tags: string[], fall: string, lift: 
     const ctl = new AbortController();
     // wait for a pause in typing rather than asking on every keystroke — common practice, no source
     const timer = setTimeout(async () => {
-      try {
-        const res = await fetch(`/api/questions/similar?${q}`, { signal: ctl.signal });
-        const json = res.ok ? ((await res.json()) as { items?: SimilarQuestion[] }) : null;
-        if (!ctl.signal.aborted) setItems(Array.isArray(json?.items) ? json.items.slice(0, 5) : []);
-      } catch {
-        if (!ctl.signal.aborted) setItems([]);
-      }
+      const r = await sendJson<{ items?: SimilarQuestion[] }>(`/api/questions/similar?${q}`, 'GET', undefined, { signal: ctl.signal });
+      if (!ctl.signal.aborted) setItems(r.ok && Array.isArray(r.data?.items) ? r.data.items.slice(0, 5) : []);
     }, 400);
     return () => {
       clearTimeout(timer);

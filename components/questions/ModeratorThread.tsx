@@ -2,11 +2,10 @@
 
 import { usePathname } from 'next/navigation';
 import useSWR from 'swr';
+import { getJsonOrNull } from '@/components/forms/api';
 import { Thread, useViewer } from './Thread';
 import type { ThreadView } from '@/lib/forum/thread';
 import { can, sessionActor } from '@/lib/auth/policy';
-
-const fetcher = (url: string) => fetch(url).then((r) => (r.ok ? (r.json() as Promise<ThreadView>) : null));
 
 /**
  * On a question's "not found" page: a hidden or deleted question is not found for
@@ -17,7 +16,7 @@ export function ModeratorThread({ children }: { children: React.ReactNode }) {
   const viewer = useViewer();
   const id = /^\/questions\/(\d{1,10})$/.exec(usePathname() ?? '')?.[1];
   const moderator = can(sessionActor(viewer), 'moderation.seeHidden');
-  const { data } = useSWR(moderator && id ? `/api/questions/${id}` : null, fetcher);
+  const { data } = useSWR(moderator && id ? `/api/questions/${id}` : null, getJsonOrNull<ThreadView>);
   if (!data) return <>{children}</>;
   return (
     <article className="flex flex-col gap-5">

@@ -3,7 +3,8 @@
 import { useState } from 'react';
 import { MemberText } from '@/components/posts/MemberText';
 import { RevisionDiff } from '@/components/posts/RevisionDiff';
-import { call } from './api';
+import { sendJson } from '@/components/forms/api';
+import type { PostType } from '@/lib/vocabulary';
 
 /** "Helpful": one per member, never on one's own post; the count moves at once and settles on the server's. */
 export function HelpfulButton({
@@ -14,7 +15,7 @@ export function HelpfulButton({
   disabled,
   onChanged,
 }: {
-  postType: 'question' | 'answer' | 'reply';
+  postType: PostType;
   postId: number;
   count: number;
   marked: boolean;
@@ -31,8 +32,8 @@ export function HelpfulButton({
         className={`rounded-full border px-3 py-0.5 text-xs font-semibold ${marked ? 'border-moss bg-moss text-limestone-50' : 'border-creek-300 hover:border-moss'} disabled:opacity-60`}
         onClick={() => {
           setError(null);
-          const settle = call(marked ? 'DELETE' : 'POST', '/api/helpful', { postType, postId }).then((r) => {
-            if (!r.ok) setError(r.message);
+          const settle = sendJson('/api/helpful', marked ? 'DELETE' : 'POST', { postType, postId }).then((r) => {
+            if (!r.ok) setError(r.error.message);
           });
           onChanged({ count: count + (marked ? -1 : 1), marked: !marked }, settle);
         }}
@@ -64,11 +65,11 @@ export function EditBody({ url, initial, onSaved, extra }: { url: string; initia
       className="mt-2 flex w-full flex-col gap-2"
       onSubmit={async (e) => {
         e.preventDefault();
-        const r = await call('PUT', url, { ...extra, body: text });
+        const r = await sendJson(url, 'PUT', { ...extra, body: text });
         if (r.ok) {
           setOpen(false);
           onSaved();
-        } else setError(r.message);
+        } else setError(r.error.message);
       }}
     >
       <label className="text-xs font-semibold" htmlFor={`${url}-edit`}>
@@ -100,7 +101,7 @@ export function RevisionHistory({ questionId, postType, postId }: { questionId: 
       className="text-xs"
       onToggle={async (e) => {
         if ((e.target as HTMLDetailsElement).open && !revisions) {
-          const r = await call<{ revisions: { id: number; body: string; editor: string; at: string }[] }>('GET', `/api/questions/${questionId}/revisions?postType=${postType}&postId=${postId}`);
+          const r = await sendJson<{ revisions: { id: number; body: string; editor: string; at: string }[] }>(`/api/questions/${questionId}/revisions?postType=${postType}&postId=${postId}`, 'GET');
           setRevisions(r.ok ? r.data.revisions : []);
         }
       }}

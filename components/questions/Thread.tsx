@@ -11,7 +11,7 @@ import { getCalculator } from '@/lib/calculators';
 import { PhotoGallery } from '@/components/photos/PhotoGallery';
 import { EditBody, HelpfulButton, RevisionHistory } from './PostControls';
 import { AnswerComposer, ReplyComposer } from './AnswerComposer';
-import { call } from './api';
+import { getJson, sendJson } from '@/components/forms/api';
 import { FlagButton } from '@/components/moderation/FlagButton';
 import { PostMarks } from '@/components/moderation/PostMarks';
 
@@ -24,7 +24,6 @@ export function useViewer(): Viewer {
   if (!u?.id || !u.handle || !u.role) return null;
   return { id: u.id, handle: u.handle, role: u.role as NonNullable<Viewer>['role'] };
 }
-const fetcher = (url: string) => fetch(url).then((r) => (r.ok ? r.json() : Promise.reject(new Error(String(r.status)))));
 const when = (iso: string) => new Date(iso).toUTCString().slice(5, 16);
 
 function Byline({ person, at }: { person: { handle: string; displayName: string; expert: boolean }; at: string }) {
@@ -48,7 +47,7 @@ export function Thread({ initial }: { initial: ThreadView }) {
   const viewer = useViewer();
   // The page arrives as every signed-out reader sees it; a signed-in reader's own
   // marks and follows (and, for moderators, hidden posts) are fetched once the session is known.
-  const { data, mutate } = useSWR<ThreadView>(viewer ? key : null, fetcher, { fallbackData: initial, revalidateOnMount: true, revalidateOnFocus: false });
+  const { data, mutate } = useSWR<ThreadView>(viewer ? key : null, getJson<ThreadView>, { fallbackData: initial, revalidateOnMount: true, revalidateOnFocus: false });
   const t = data ?? initial;
   const refresh = () => void mutate();
   const isAsker = can(viewer, 'question.markFixed', t.author.id);
@@ -85,7 +84,7 @@ export function Thread({ initial }: { initial: ThreadView }) {
               type="button"
               className="cw-link text-xs"
               onClick={async () => {
-                await call(t.followedByViewer ? 'DELETE' : 'POST', `${key}/follow`);
+                await sendJson(`${key}/follow`, t.followedByViewer ? 'DELETE' : 'POST');
                 refresh();
               }}
             >
@@ -177,7 +176,7 @@ function Answer({
             type="button"
             className="rounded-full border border-moss px-3 py-0.5 text-xs font-semibold text-moss-600 hover:bg-moss hover:text-limestone-50 dark:text-moss-300"
             onClick={async () => {
-              await call('PUT', `/api/questions/${t.id}/fixed`, { answerId: a.fixed ? null : a.id });
+              await sendJson(`/api/questions/${t.id}/fixed`, 'PUT', { answerId: a.fixed ? null : a.id });
               onChange();
             }}
           >

@@ -2,17 +2,13 @@
 
 import Link from 'next/link';
 import useSWR from 'swr';
+import { getJsonOrNull } from '@/components/forms/api';
 import type { SearchResult } from '@/lib/search';
-
-const fetcher = async (url: string): Promise<SearchResult | null> => {
-  const res = await fetch(url);
-  return res.ok ? ((await res.json()) as SearchResult) : null;
-};
 
 /** Threads about the same trouble, from search: shown under the stall check's likely causes. */
 export function RelatedThreads({ query, limit = 3 }: { query: string; limit?: number }) {
   const q = query.trim().slice(0, 200);
-  const { data } = useSWR(q ? `/api/search?${new URLSearchParams({ q, kind: 'question', limit: String(limit) })}` : null, fetcher, {
+  const { data } = useSWR(q ? `/api/search?${new URLSearchParams({ q, kind: 'question', limit: String(limit) })}` : null, getJsonOrNull<SearchResult>, {
     revalidateOnFocus: false,
   });
   const items = data?.items ?? [];

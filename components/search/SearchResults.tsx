@@ -5,6 +5,7 @@ import { useRouter } from 'next/navigation';
 import { useCallback, useEffect, useId, useRef, useState } from 'react';
 import type { SearchItem, SearchResult, Segment } from '@/lib/search';
 import { KIND_FILTERS, KIND_LABEL } from './kinds';
+import { sendJson } from '@/components/forms/api';
 
 export interface SearchState {
   q: string;
@@ -111,19 +112,15 @@ export function SearchResults({
     pending.current.ctl = ctl;
     setStatus({ kind: 'loading' });
     pending.current.timer = setTimeout(async () => {
-      try {
-        const res = await fetch(`/api/search?${query}&limit=20`, { signal: ctl.signal });
-        const body = await res.json();
-        if (!res.ok) {
-          setStatus({ kind: 'error', message: body?.error?.message ?? 'Search is not answering just now.' });
-          return;
-        }
-        setResult(body as SearchResult);
-        setActive(-1);
-        setStatus({ kind: 'idle' });
-      } catch (err) {
-        if ((err as Error).name !== 'AbortError') setStatus({ kind: 'error', message: 'Search is not answering just now. Check your connection and try again.' });
+      const r = await sendJson<SearchResult>(`/api/search?${query}&limit=20`, 'GET', undefined, { signal: ctl.signal });
+      if (ctl.signal.aborted) return;
+      if (!r.ok) {
+        setStatus({ kind: 'error', message: r.status === 0 ? 'Search is not answering just now. Check your connection and try again.' : r.error.message });
+        return;
       }
+      setResult(r.data);
+      setActive(-1);
+      setStatus({ kind: 'idle' });
     }, 120);
   }, []);
 

@@ -1,3 +1,4 @@
+import 'server-only';
 import SequelizeAdapter, { models as adapterModels } from '@next-auth/sequelize-adapter';
 import { DataTypes, type Sequelize } from 'sequelize';
 

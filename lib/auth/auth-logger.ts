@@ -1,3 +1,4 @@
+import 'server-only';
 import type { LoggerInstance } from 'next-auth';
 
 /** Thrown by the jwt callback for a token the account's session version has left behind. */

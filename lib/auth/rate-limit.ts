@@ -1,3 +1,4 @@
+import 'server-only';
 import { RateLimiterMemory, RateLimiterRes } from 'rate-limiter-flexible';
 import { getSequelize } from '@/lib/db';
 import { RateLimiterMariaDB } from './rate-limit-store';

@@ -1,3 +1,4 @@
+import 'server-only';
 import type { Transaction } from 'sequelize';
 import { getSequelize } from '@/lib/db';
 import { initModels } from '@/models';

@@ -1,3 +1,4 @@
+import 'server-only';
 import { getToken, type JWT } from 'next-auth/jwt';
 import { cookies, headers } from 'next/headers';
 import type { NextRequest } from 'next/server';

@@ -1,3 +1,4 @@
+import 'server-only';
 import { createHash, randomBytes } from 'node:crypto';
 import { Op, type Transaction } from 'sequelize';
 import { initModels } from '@/models';

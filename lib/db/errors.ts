@@ -1,3 +1,4 @@
+import 'server-only';
 /**
  * Recognises "the database is not reachable" among the errors Sequelize and the
  * mariadb driver throw, so routes can answer 503 with a readable message instead of

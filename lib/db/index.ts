@@ -1,3 +1,4 @@
+import 'server-only';
 import { QueryTypes, Sequelize } from 'sequelize';
 import * as mariadb from 'mariadb';
 import { readDbConfig } from './config';

@@ -1,3 +1,4 @@
+import 'server-only';
 import { Umzug, SequelizeStorage } from 'umzug';
 import type { Sequelize } from 'sequelize';
 import { migrations } from '@/migrations';

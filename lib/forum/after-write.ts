@@ -1,4 +1,3 @@
-import { revalidatePath } from 'next/cache';
 import { forgetListCounts } from '@/lib/questions/list';
 import { indexFieldLog, indexThread } from '@/lib/search';
 
@@ -15,11 +14,33 @@ import { indexFieldLog, indexThread } from '@/lib/search';
  */
 export function threadChanged(questionId: number | null | undefined): void {
   forgetListCounts();
-  if (!questionId) return;
+  if (questionId) pageStale(`/questions/${questionId}`);
+}
+
+type PageStaleHook = (path: string) => void;
+
+/*
+ * Kept on globalThis, not in this module: the hook is set from instrumentation.ts,
+ * which Next bundles apart from the route handlers, so each bundle has its own copy of
+ * this module but all share the process.
+ */
+const PAGE_STALE = Symbol.for('clackwater.pageStale');
+const hooks = globalThis as { [PAGE_STALE]?: PageStaleHook };
+
+/**
+ * The app layer says how to mark a page stale (Next's `revalidatePath`, set in
+ * instrumentation.ts), so lib/ stays free of the framework. Without a hook (scripts,
+ * tests) there is no page cache to mark and nothing happens.
+ */
+export function onPageStale(hook: PageStaleHook | undefined): void {
+  hooks[PAGE_STALE] = hook;
+}
+
+function pageStale(path: string): void {
   try {
-    revalidatePath(`/questions/${questionId}`);
+    hooks[PAGE_STALE]?.(path);
   } catch {
-    // outside a Next request (scripts, tests): there is no page cache to mark
+    // outside a request's render or handler there is no page cache to mark
   }
 }
 

@@ -2,7 +2,8 @@ import { Op } from 'sequelize';
 import { initModels } from '@/models';
 import { ForumError } from './errors';
 import { can, type Actor } from '@/lib/auth/policy';
-import { findVisiblePost, type PostType } from './visibility';
+import { findVisiblePost } from './visibility';
+import type { PostType } from '@/lib/vocabulary';
 
 /** A photo with a post; `ref` is what a flag names, `hidden` only ever true for moderators. */
 export interface PhotoView {

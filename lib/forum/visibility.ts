@@ -6,7 +6,8 @@ import type { Reply } from '@/models/Reply';
 import { can, type Actor } from '@/lib/auth/policy';
 import { ForumError } from './errors';
 
-export type PostType = 'question' | 'answer' | 'reply';
+import type { PostType } from '@/lib/vocabulary';
+export type { PostType };
 type Hideable = { hiddenAt?: Date | null; deletedAt?: Date | null };
 
 /** Hidden (by a moderator or by flags) or soft-deleted: gone for all but moderators. */

@@ -25,8 +25,9 @@
  * to deliver at all.
  */
 
-export const PUMP_TYPES = ['homemade', 'commercial'] as const;
-export type PumpType = (typeof PUMP_TYPES)[number];
+import { PUMP_TYPES, type PumpType } from '../vocabulary';
+
+export { PUMP_TYPES, type PumpType };
 
 export interface EfficiencyBandRow {
   /** lift ratio h/H */

@@ -32,8 +32,9 @@ export const PIPE_SERIES = [
 ] as const;
 export type PipeSeries = (typeof PIPE_SERIES)[number];
 
-export const MATERIALS = ['steel', 'galvanized-steel', 'pvc', 'hdpe', 'hose'] as const;
-export type PipeMaterial = (typeof MATERIALS)[number];
+import { PIPE_MATERIALS as MATERIALS, type PipeMaterial } from '../vocabulary';
+
+export { MATERIALS, type PipeMaterial };
 
 export interface MaterialProps {
   label: string;

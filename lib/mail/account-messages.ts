@@ -1,3 +1,4 @@
+import 'server-only';
 import { siteUrl } from '@/lib/site';
 import type { Message } from './transport';
 

@@ -1,3 +1,4 @@
+import 'server-only';
 import type { Transaction } from 'sequelize';
 import { initModels } from '@/models';
 import type { User } from '@/models/User';

@@ -1,3 +1,4 @@
+import 'server-only';
 import { createHash } from 'node:crypto';
 import { col, fn, Op, QueryTypes, type Transaction } from 'sequelize';
 import type { MailStatus } from '@/models/MailMessage';

@@ -1,3 +1,4 @@
+import 'server-only';
 import cron, { type ScheduledTask } from 'node-cron';
 import { flushOutbox, mailWorkerEnabled } from './outbox';
 import { runDigests, type DigestFrequency } from './digest';

@@ -1,3 +1,4 @@
+import 'server-only';
 import { Body, Container, Head, Heading, Hr, Html, Link, Preview, Section, Text } from '@react-email/components';
 import { render } from '@react-email/render';
 import { palette } from '@/tailwind.config';

@@ -1,3 +1,4 @@
+import 'server-only';
 import { initModels } from '@/models';
 import { columnsFor, SCOPE_WORDS, verifyUnsubscribe, type UnsubscribeScope } from './unsubscribe';
 

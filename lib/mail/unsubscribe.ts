@@ -1,3 +1,4 @@
+import 'server-only';
 import { createHmac, timingSafeEqual } from 'node:crypto';
 import { authSecret } from '@/lib/auth/secret';
 import { siteUrl } from '@/lib/site';

@@ -10,8 +10,8 @@ import { postsChanged } from '@/lib/forum/after-write';
 import { loadPost, type ModeratedType } from './posts';
 import { bumpSessionVersion } from '@/lib/auth/session-version';
 
-export const MODERATION_ACTIONS = ['dismiss', 'hide', 'restore', 'delete', 'lock', 'unlock', 'retag', 'warn', 'suspend'] as const;
-export type ModerationAction = (typeof MODERATION_ACTIONS)[number];
+export { MODERATION_ACTIONS, type ModerationAction } from '@/lib/vocabulary';
+import type { ModerationAction } from '@/lib/vocabulary';
 
 const WORDS: Record<ModerationAction, string> = {
   dismiss: 'The flags on your post were reviewed and dismissed',

@@ -2,7 +2,8 @@ import type { Transaction } from 'sequelize';
 import { initModels } from '@/models';
 import { ForumError } from '@/lib/forum/errors';
 
-export type ModeratedType = 'question' | 'answer' | 'reply' | 'photo' | 'field-log';
+export type { ModeratedType } from '@/lib/vocabulary';
+import type { ModeratedType } from '@/lib/vocabulary';
 
 /** What moderation needs of any post: its author, its words and its visibility. */
 export interface ModeratedPost {

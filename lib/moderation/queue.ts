@@ -1,13 +1,13 @@
 import { Op } from 'sequelize';
 import { initModels } from '@/models';
-import type { FlagReason } from '@/models/Flag';
+import { MODERATED_TYPES, type FlagReason, type ModeratedType } from '@/lib/vocabulary';
 import type { Role } from '@/lib/auth/policy';
 import { photoQuestionId } from './posts';
 
 /** Posts with open flags, oldest flag first, each with its context, the flaggers' notes and its revisions. */
 export async function reviewQueue(filter: { reason?: FlagReason; olderThanHours?: number }) {
   const { Flag, User, Question, Answer, Reply, Revision, Tag, Photo, FieldLogEntry } = initModels();
-  const where: Record<string | symbol, unknown> = { status: 'open', postType: { [Op.in]: ['question', 'answer', 'reply', 'photo', 'field-log'] } };
+  const where: Record<string | symbol, unknown> = { status: 'open', postType: { [Op.in]: [...MODERATED_TYPES] } };
   if (filter.reason) where.reason = filter.reason;
   if (filter.olderThanHours) where.createdAt = { [Op.lte]: new Date(Date.now() - filter.olderThanHours * 3_600_000) };
   const flags = await Flag.findAll({ where, include: [{ model: User, as: 'flagger', attributes: ['handle', 'displayName', 'role'] }], order: [['createdAt', 'ASC']], limit: 500 });
@@ -18,7 +18,7 @@ export async function reviewQueue(filter: { reason?: FlagReason; olderThanHours?
   }
   const items = [];
   for (const [k, fs] of groups) {
-    const [type, idText] = k.split(':') as ['question' | 'answer' | 'reply' | 'photo' | 'field-log', string];
+    const [type, idText] = k.split(':') as [ModeratedType, string];
     const id = Number(idText);
     type QueuedPost = { id: number; body: string; questionId?: number | null; hiddenAt: Date | null; deletedAt: Date | null; createdAt: Date; author?: { id: number; handle: string; displayName: string; role: Role }; photoId?: string };
     let post: QueuedPost | null;

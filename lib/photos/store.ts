@@ -1,6 +1,6 @@
 import { Op, type Transaction } from 'sequelize';
 import { initModels } from '@/models';
-import { isPhotoId, photoUrl } from './storage';
+import { isPhotoId } from './storage';
 
 export interface PhotoTarget {
   questionId?: number;
@@ -27,22 +27,4 @@ export async function attachPhotos(publicIds: string[], ownerId: number, target:
     { where: { publicId: { [Op.in]: ids }, ownerId, questionId: null, answerId: null, fieldLogEntryId: null }, transaction },
   );
   return moved;
-}
-
-export interface PhotoView {
-  id: string;
-  width: number;
-  height: number;
-  alt: string | null;
-  url: string;
-  thumbUrl: string;
-}
-
-/** The photos shown with a question or an answer, oldest first (the order they were added). */
-export async function photosFor(target: PhotoTarget, transaction?: Transaction): Promise<PhotoView[]> {
-  const { Photo } = initModels();
-  const where =
-    target.fieldLogEntryId !== undefined ? { fieldLogEntryId: target.fieldLogEntryId } : target.answerId !== undefined ? { answerId: target.answerId } : { questionId: target.questionId ?? -1, answerId: null };
-  const rows = await Photo.findAll({ where, order: [['id', 'ASC']], transaction });
-  return rows.map((p) => ({ id: p.publicId, width: p.width, height: p.height, alt: p.alt, url: photoUrl(p.publicId), thumbUrl: photoUrl(p.publicId, 'thumb') }));
 }

@@ -1,3 +1,4 @@
+import 'server-only';
 import GithubSlugger from 'github-slugger';
 import { Op } from 'sequelize';
 import { listGuides, type GuideFile } from '@/lib/guides/content';

@@ -1,3 +1,4 @@
+import 'server-only';
 import type { SearchDoc, SearchKind } from './documents';
 
 export interface SearchFilters {

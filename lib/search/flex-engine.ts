@@ -1,3 +1,4 @@
+import 'server-only';
 import { Index } from 'flexsearch';
 import type { SearchDoc } from './documents';
 import { CANDIDATES, passes, type EngineResult, type SearchEngine, type SearchFilters } from './engine';

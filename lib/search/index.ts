@@ -1,3 +1,4 @@
+import 'server-only';
 import { mkdirSync, statSync, writeFileSync } from 'node:fs';
 import path from 'node:path';
 import { allGuideDocs, allThreadDocs, fieldLogDocs, threadDocs, type SearchKind } from './documents';

@@ -1,3 +1,4 @@
+import 'server-only';
 import { Meilisearch, type Index as MeiliIndex } from 'meilisearch';
 import type { SearchDoc } from './documents';
 import { CANDIDATES, type EngineResult, type SearchEngine, type SearchFilters } from './engine';

@@ -1,3 +1,4 @@
+import 'server-only';
 import { plain, search } from './index';
 
 export interface SimilarQuestion {

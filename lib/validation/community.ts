@@ -1,6 +1,5 @@
 import { z } from 'zod';
-import { ROLES } from '@/models/User';
-import { SAFETY_VERDICTS } from '@/models/SafetyCheck';
+import { ROLES, SAFETY_VERDICTS } from '@/lib/vocabulary';
 import { UNIT_SYSTEMS } from '@/lib/units/preference';
 import { displayNameSchema } from './account';
 

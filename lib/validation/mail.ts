@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { DIGEST_FREQUENCIES } from '@/models/User';
+import { DIGEST_FREQUENCIES } from '@/lib/vocabulary';
 
 /** PUT /api/account/mail: the digest, the tags it follows, and each notification switch. */
 export const mailSettingsSchema = z.object({

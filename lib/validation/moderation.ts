@@ -1,9 +1,8 @@
 import { z } from 'zod';
-import { FLAG_REASONS } from '@/models/Flag';
-import { MODERATION_ACTIONS } from '@/lib/moderation/actions';
+import { FLAG_REASONS, MODERATED_TYPES, MODERATION_ACTIONS } from '@/lib/vocabulary';
 
 const postRef = {
-  postType: z.enum(['question', 'answer', 'reply', 'photo', 'field-log'], { error: 'postType must be question, answer, reply, photo or field-log' }),
+  postType: z.enum(MODERATED_TYPES, { error: 'postType must be question, answer, reply, photo or field-log' }),
   postId: z.number({ error: 'postId must be a number' }).int().positive(),
 };
 

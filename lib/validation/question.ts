@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { POST_TYPES } from '@/lib/vocabulary';
 
 /**
  * Shared by the ask form (react-hook-form's zod resolver) and POST /api/questions.
@@ -60,6 +61,6 @@ export const replySchema = z.object({
 });
 
 export const helpfulSchema = z.object({
-  postType: z.enum(['question', 'answer', 'reply']),
+  postType: z.enum(POST_TYPES),
   postId: z.number({ error: 'postId must be a number' }).int().positive(),
 });

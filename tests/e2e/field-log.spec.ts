@@ -1,5 +1,5 @@
 import { test, expect } from '@playwright/test';
-import { signIn } from './support/session';
+import { signIn } from '../support/session';
 
 test('the community page shows the demo entries on the chart and in the table', async ({ page, request }) => {
   const api = await (await request.get('/api/field-log?perPage=100')).json();

@@ -1,6 +1,6 @@
 import { test, expect } from '@playwright/test';
 import sharp from 'sharp';
-import { settled, signIn } from './support/session';
+import { settled, signIn } from '../support/session';
 
 const TITLE = `Pump stops after a few beats since the creek dropped ${Date.now() % 100000}`;
 

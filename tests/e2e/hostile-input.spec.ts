@@ -1,6 +1,6 @@
 import { test, expect, type Page } from '@playwright/test';
-import { XSS_HOST, XSS_PAYLOADS, XSS_TEXT } from './fixtures/xss-payloads';
-import { signedIn } from './support/session';
+import { XSS_HOST, XSS_PAYLOADS, XSS_TEXT } from '../support/fixtures/xss-payloads';
+import { signedIn } from '../support/session';
 
 const STAMP = Date.now() % 100000;
 

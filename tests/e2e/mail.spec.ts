@@ -1,8 +1,8 @@
 import { test, expect } from '@playwright/test';
 import { SmtpCatcher } from '../support/smtp-catcher';
 import { E2E_SMTP_PORT } from '../../playwright.config';
-import { signIn } from './support/session';
-import { outboxFor } from './support/outbox';
+import { signIn } from '../support/session';
+import { outboxFor } from '../support/outbox';
 
 const catcher = new SmtpCatcher(E2E_SMTP_PORT);
 test.beforeAll(() => catcher.start());

@@ -1,5 +1,5 @@
 import { test, expect, type Browser, type Page } from '@playwright/test';
-import { settled, signIn } from './support/session';
+import { settled, signIn } from '../support/session';
 
 /**
  * The moderator's journey on the seeded demo: a member flags an answer as unsafe

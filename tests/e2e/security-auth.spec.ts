@@ -1,7 +1,7 @@
 import { spawn, type ChildProcess } from 'node:child_process';
 import { test, expect, request as apiRequest } from '@playwright/test';
 import { serverEnv } from '../../playwright.config';
-import { signIn, signedIn } from './support/session';
+import { signIn, signedIn } from '../support/session';
 
 /**
  * Issue 17 against the real server (scripts/server.mjs in front of Next's handler):

@@ -1,5 +1,5 @@
 import { test, expect, type Page } from '@playwright/test';
-import { signedIn } from './support/session';
+import { signedIn } from '../support/session';
 
 const TITLE = 'Second pump added, delivery only went up a little';
 

@@ -3,7 +3,7 @@ import { NextRequest } from 'next/server';
 import { encode } from 'next-auth/jwt';
 import { authSecret } from '@/lib/auth/secret';
 import { initModels } from '@/models';
-import { freshDemoDatabase } from './db';
+import { freshDemoDatabase } from '../support/db';
 
 // No SMTP server in the tests: record what would be sent.
 const sent = vi.hoisted(() => ({ messages: [] as { to: string; subject: string; text: string }[], fail: false }));

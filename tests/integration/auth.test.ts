@@ -11,7 +11,7 @@ import { getSequelize } from '@/lib/db';
 import { initModels } from '@/models';
 import { DEMO_PASSWORD } from '@/migrations/seed/demo-data';
 import { SmtpCatcher, linkIn } from '../support/smtp-catcher';
-import { freshDemoDatabase } from './db';
+import { freshDemoDatabase } from '../support/db';
 
 const catcher = new SmtpCatcher(Number(process.env.SMTP_PORT));
 let ip = 0;

@@ -6,8 +6,8 @@ import { initModels } from '@/models';
 import { POST as calcPOST } from '@/app/api/calculations/route';
 import { POST as askPOST } from '@/app/api/questions/route';
 import { calculatorInputNames } from '@/lib/calculators';
-import { freshDemoDatabase } from './db';
-import { actAs, sessionCookie } from './act-as';
+import { freshDemoDatabase } from '../support/db';
+import { actAs, sessionCookie } from '../support/act-as';
 
 const { call, raw } = actAs('10.13.1');
 

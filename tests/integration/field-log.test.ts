@@ -16,11 +16,11 @@ import { POST as ask } from '@/app/api/questions/route';
 import { demoFieldLog } from '@/migrations/seed/demo-field-log';
 import { initModels } from '@/models';
 import { newPhotoId } from '@/lib/photos/storage';
-import { actAs } from './act-as';
-import { freshDemoDatabase } from './db';
+import { actAs } from '../support/act-as';
+import { freshDemoDatabase } from '../support/db';
 
 const { raw, call } = actAs('10.41');
-const fixture = readFileSync(path.join(__dirname, 'fixtures/field-log-import.csv'), 'utf8');
+const fixture = readFileSync(path.join(__dirname, '../support/fixtures/field-log-import.csv'), 'utf8');
 
 /** 2 US gal/min of drive water, 4 ft of fall, 29 ft of lift, three bucket trials averaging 500 mL a minute. */
 const entry = {

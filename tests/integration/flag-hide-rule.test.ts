@@ -4,8 +4,8 @@ import type { Role } from '@/lib/auth/policy';
 import { POST as flagPOST } from '@/app/api/flags/route';
 import { GET as reviewGET } from '@/app/api/review/route';
 import { FLAG_COUNTS_AFTER_DAYS, hideThreshold } from '@/lib/moderation/flags';
-import { freshDemoDatabase } from './db';
-import { actAs } from './act-as';
+import { freshDemoDatabase } from '../support/db';
+import { actAs } from '../support/act-as';
 
 const { call } = actAs('10.12.3');
 const DAY = 86_400_000;

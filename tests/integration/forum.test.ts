@@ -13,7 +13,7 @@ import { GET as similarGET } from '@/app/api/questions/similar/route';
 import { PUT as answerPUT } from '@/app/api/answers/[id]/route';
 import { POST as helpfulPOST, DELETE as helpfulDELETE } from '@/app/api/helpful/route';
 import { MAX_REPLY_DEPTH } from '@/lib/forum/posts';
-import { freshDemoDatabase } from './db';
+import { freshDemoDatabase } from '../support/db';
 
 // eslint-disable-next-line @typescript-eslint/no-explicit-any -- route handlers differ in their request and context types
 type Handler = (r: any, ctx: any) => Promise<Response>;

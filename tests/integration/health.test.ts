@@ -1,6 +1,6 @@
 import { afterAll, describe, expect, it } from 'vitest';
 import { GET } from '@/app/api/health/route';
-import { testDb } from './db';
+import { testDb } from '../support/db';
 
 describe('GET /api/health', () => {
   afterAll(() => testDb('start'));

@@ -6,8 +6,8 @@ import { initModels } from '@/models';
 import { periodKey, runDigests } from '@/lib/mail/digest';
 import { flushOutbox } from '@/lib/mail/outbox';
 import { SmtpCatcher } from '../support/smtp-catcher';
-import { freshDemoDatabase } from './db';
-import { actAs } from './act-as';
+import { freshDemoDatabase } from '../support/db';
+import { actAs } from '../support/act-as';
 
 const { call } = actAs('10.52');
 const catcher = new SmtpCatcher(Number(process.env.SMTP_PORT));

@@ -8,8 +8,8 @@ import { GET as mailGET, PUT as mailPUT } from '@/app/api/account/mail/route';
 import { GET as unsubGET, POST as unsubPOST } from '@/app/api/unsubscribe/route';
 import { initModels } from '@/models';
 import { unsubscribeQuery } from '@/lib/mail/unsubscribe';
-import { freshDemoDatabase } from './db';
-import { actAs } from './act-as';
+import { freshDemoDatabase } from '../support/db';
+import { actAs } from '../support/act-as';
 
 const { call, raw } = actAs('10.54');
 const { MailMessage, User } = initModels();

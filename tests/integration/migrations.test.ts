@@ -8,7 +8,7 @@ import { demoQuestions, demoUsers } from '@/migrations/seed/demo-data';
 import { demoThreads } from '@/migrations/seed/demo-forum-data';
 import { demoFieldLog } from '@/migrations/seed/demo-field-log';
 import { initModels } from '@/models';
-import { assertTestDatabase } from './reset';
+import { assertTestDatabase } from '../support/reset';
 
 const sequelize = getSequelize();
 const migrator = createMigrator(sequelize);

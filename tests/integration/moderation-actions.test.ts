@@ -6,8 +6,8 @@ import { GET as reviewGET } from '@/app/api/review/route';
 import { GET as threadGET } from '@/app/api/questions/[id]/route';
 import { GET as photoGET } from '@/app/api/photos/[id]/route';
 import { GET as thumbGET } from '@/app/api/photos/[id]/thumb/route';
-import { freshDemoDatabase } from './db';
-import { actAs } from './act-as';
+import { freshDemoDatabase } from '../support/db';
+import { actAs } from '../support/act-as';
 
 const { raw, call } = actAs('10.5.0');
 const act = (body: Record<string, unknown>) => call(actionPOST, 'POST', '/api/review/actions', 'moss_moderator', body);

@@ -11,8 +11,8 @@ import { POST as answerPOST } from '@/app/api/questions/[id]/answers/route';
 import { GET as listGET } from '@/app/api/questions/route';
 import { changeRole } from '@/lib/accounts/roles';
 import { hideThreshold } from '@/lib/moderation/flags';
-import { freshDemoDatabase } from './db';
-import { actAs } from './act-as';
+import { freshDemoDatabase } from '../support/db';
+import { actAs } from '../support/act-as';
 
 const { call } = actAs('10.4.0');
 const answerBy = async (handle: string, questionTitle: string) => {

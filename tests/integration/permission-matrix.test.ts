@@ -8,7 +8,7 @@ import { POLICY, type Action } from '@/lib/auth/policy';
 import { POST as actionPOST } from '@/app/api/review/actions/route';
 import { authSecret } from '@/lib/auth/secret';
 import { initModels } from '@/models';
-import { freshDemoDatabase } from './db';
+import { freshDemoDatabase } from '../support/db';
 
 const API_DIR = path.resolve(__dirname, '../../app/api');
 const METHODS = ['GET', 'POST', 'PUT', 'PATCH', 'DELETE'] as const;

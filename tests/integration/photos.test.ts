@@ -13,9 +13,9 @@ import { ingestUpload } from '@/lib/photos/ingest';
 import { attachPhotos } from '@/lib/photos/store';
 import { isStorageUnavailable, photoPath } from '@/lib/photos/storage';
 import { initModels } from '@/models';
-import { freshDemoDatabase } from './db';
+import { freshDemoDatabase } from '../support/db';
 import { upload as uploadAs, type Part } from '../support/photo-upload';
-import { sessionCookie } from './act-as';
+import { sessionCookie } from '../support/act-as';
 
 // A fresh upload directory for this file; the storage module reads UPLOAD_DIR on every call.
 const uploadDir = mkdtempSync(path.join(os.tmpdir(), 'clackwater-photos-'));

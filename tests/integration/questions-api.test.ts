@@ -5,7 +5,7 @@ import { demoQuestions as baseQuestions } from '@/migrations/seed/demo-data';
 import { demoThreads } from '@/migrations/seed/demo-forum-data';
 
 const demoQuestions = [...baseQuestions, ...demoThreads];
-import { freshDemoDatabase } from './db';
+import { freshDemoDatabase } from '../support/db';
 
 const get = (qs: string) => GET(new NextRequest(`http://localhost/api/questions${qs}`));
 

@@ -7,8 +7,8 @@ import { MeiliEngine } from '@/lib/search/meili-engine';
 import type { SearchParams } from '@/lib/search';
 import { initModels } from '@/models';
 import { startFakeMeilisearch, type FakeMeili } from '../support/fake-meilisearch';
-import { freshDemoDatabase } from './db';
-import { actAs } from './act-as';
+import { freshDemoDatabase } from '../support/db';
+import { actAs } from '../support/act-as';
 
 const { call } = actAs('10.8.1');
 

@@ -10,8 +10,8 @@ import { POST as flagPOST } from '@/app/api/flags/route';
 import { GET as similarGET } from '@/app/api/questions/similar/route';
 import { POST as fieldLogPOST } from '@/app/api/field-log/route';
 import { rebuildIndex, searchEngine } from '@/lib/search';
-import { freshDemoDatabase } from './db';
-import { actAs } from './act-as';
+import { freshDemoDatabase } from '../support/db';
+import { actAs } from '../support/act-as';
 
 const { call } = actAs('10.8.0');
 type Hit = { id: string; kind: string; url: string; hidden: boolean };

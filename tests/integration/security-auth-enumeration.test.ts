@@ -5,7 +5,7 @@ import { POST as resetPOST } from '@/app/api/account/password-reset/route';
 import { backgroundSettled } from '@/lib/accounts/background';
 import { initModels } from '@/models';
 import { SmtpCatcher } from '../support/smtp-catcher';
-import { freshDemoDatabase } from './db';
+import { freshDemoDatabase } from '../support/db';
 
 /**
  * Issue 17, item 6: neither the answers nor their timing may tell whether an

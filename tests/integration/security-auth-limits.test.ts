@@ -12,7 +12,7 @@ import { DEMO_PASSWORD } from '@/migrations/seed/demo-data';
 // the production server's own code (plain JavaScript, run by node)
 import { peerAwareServer } from '@/scripts/server.mjs';
 import { SmtpCatcher } from '../support/smtp-catcher';
-import { freshDemoDatabase } from './db';
+import { freshDemoDatabase } from '../support/db';
 
 /**
  * Issue 17, item 2: the per-address limits keyed on the first X-Forwarded-For entry,

@@ -19,7 +19,7 @@ import { POST as signOutEverywherePOST } from '@/app/api/account/sign-out-everyw
 import { POST as resetConfirmPOST } from '@/app/api/account/password-reset/confirm/route';
 import { POST as reviewPOST } from '@/app/api/review/actions/route';
 import { POST as answerPOST } from '@/app/api/questions/[id]/answers/route';
-import SignInPage from '@/app/sign-in/page';
+import SignInPage from '@/app/(account)/sign-in/page';
 import { authOptions } from '@/lib/auth/options';
 import { authSecret } from '@/lib/auth/secret';
 import { currentUser, currentUserInPage } from '@/lib/auth/session';
@@ -28,7 +28,7 @@ import { issueToken } from '@/lib/auth/tokens';
 import { changeRole } from '@/lib/accounts/roles';
 import { getSequelize } from '@/lib/db';
 import { initModels } from '@/models';
-import { freshDemoDatabase } from './db';
+import { freshDemoDatabase } from '../support/db';
 
 /**
  * Issue 17, items 4, 5 and 18: sessions that outlive a reset, a suspension or a

@@ -8,8 +8,8 @@ import { PUT as replyPUT } from '@/app/api/replies/[id]/route';
 import { PUT as settingsPUT } from '@/app/api/account/settings/route';
 import { POST as signUpPOST } from '@/app/api/account/sign-up/route';
 import { initModels } from '@/models';
-import { freshDemoDatabase } from './db';
-import { actAs } from './act-as';
+import { freshDemoDatabase } from '../support/db';
+import { actAs } from '../support/act-as';
 
 const { call } = actAs('10.72');
 const { User, Question, Answer, Reply, Revision } = initModels();

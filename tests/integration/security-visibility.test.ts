@@ -18,8 +18,8 @@ import { GET as photoGET } from '@/app/api/photos/[id]/route';
 import { GET as thumbGET } from '@/app/api/photos/[id]/thumb/route';
 import { newPhotoId, writeVariant } from '@/lib/photos/storage';
 import { initModels } from '@/models';
-import { freshDemoDatabase } from './db';
-import { actAs } from './act-as';
+import { freshDemoDatabase } from '../support/db';
+import { actAs } from '../support/act-as';
 
 // Photos for this file go to a directory of its own; storage reads UPLOAD_DIR on every call.
 process.env.UPLOAD_DIR = mkdtempSync(path.join(os.tmpdir(), 'clackwater-visibility-'));

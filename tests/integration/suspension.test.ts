@@ -12,8 +12,8 @@ import { GET as settingsGET, PUT as settingsPUT } from '@/app/api/account/settin
 import { PUT as rolePUT } from '@/app/api/admin/users/[id]/role/route';
 import { GET as auditGET } from '@/app/api/admin/audit/route';
 import { GET as threadGET } from '@/app/api/questions/[id]/route';
-import { freshDemoDatabase } from './db';
-import { actAs } from './act-as';
+import { freshDemoDatabase } from '../support/db';
+import { actAs } from '../support/act-as';
 
 const { call } = actAs('10.17.7');
 const FAR = new Date('2099-01-31T23:59:59Z');

@@ -9,7 +9,7 @@ import { readDbConfig } from '@/lib/db/config';
 import { backupDatabase } from '@/scripts/db-backup';
 import { restoreDatabase } from '@/scripts/db-restore';
 import { initModels } from '@/models';
-import { freshDemoDatabase } from '../integration/db';
+import { freshDemoDatabase } from '../support/db';
 
 /** Row count of every table, and a sha256 over every post's id, title and body in order. */
 async function fingerprint(db: Sequelize) {

@@ -5,9 +5,9 @@ import { POST as askPOST } from '@/app/api/questions/route';
 import { GET as listGET } from '@/app/api/questions/route';
 import { DB_UNAVAILABLE_MESSAGE } from '@/lib/db/errors';
 import { initModels } from '@/models';
-import { freshDemoDatabase } from '../integration/db';
+import { freshDemoDatabase } from '../support/db';
 import { NextRequest } from 'next/server';
-import { sessionCookie } from '../integration/act-as';
+import { sessionCookie } from '../support/act-as';
 
 const ROOT = path.resolve(__dirname, '../..');
 const db = (action: 'kill' | 'start' | 'status') =>

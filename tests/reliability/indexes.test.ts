@@ -8,7 +8,7 @@ import { listAudit } from '@/lib/moderation/audit';
 import { listMembersPage } from '@/lib/accounts/roles';
 import { initModels } from '@/models';
 import { insertBenchPosts } from '../../bench/seed-posts';
-import { freshDemoDatabase } from '../integration/db';
+import { freshDemoDatabase } from '../support/db';
 
 // 20,000 posts: enough that the optimiser prefers an index wherever one fits (common practice, no source)
 const POSTS = 20_000;

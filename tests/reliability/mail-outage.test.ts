@@ -6,8 +6,8 @@ import { POST as retryPOST } from '@/app/api/admin/outbox/[id]/retry/route';
 import { initModels } from '@/models';
 import { backoffMs, flushOutbox, maxAttempts } from '@/lib/mail/outbox';
 import { SmtpCatcher } from '../support/smtp-catcher';
-import { freshDemoDatabase } from '../integration/db';
-import { actAs } from '../integration/act-as';
+import { freshDemoDatabase } from '../support/db';
+import { actAs } from '../support/act-as';
 
 const { call } = actAs('10.53');
 const port = Number(process.env.SMTP_PORT);

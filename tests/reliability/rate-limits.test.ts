@@ -2,7 +2,7 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import { RateLimiterRes } from 'rate-limiter-flexible';
 import { createSequelize } from '@/lib/db';
 import { RateLimiterMariaDB } from '@/lib/auth/rate-limit-store';
-import { freshDemoDatabase } from '../integration/db';
+import { freshDemoDatabase } from '../support/db';
 
 /** What one app instance holds: its own pool and its own limiter object, on the shared database. */
 const instance = (points: number, duration: number) => new RateLimiterMariaDB({ points, duration, keyPrefix: 'post-account', sequelize: createSequelize() });

@@ -3,8 +3,8 @@ import { POST as askPOST } from '@/app/api/questions/route';
 import { GET as threadGET } from '@/app/api/questions/[id]/route';
 import { POST as answerPOST } from '@/app/api/questions/[id]/answers/route';
 import { PUT as settingsPUT, GET as settingsGET } from '@/app/api/account/settings/route';
-import { freshDemoDatabase } from '../integration/db';
-import { actAs } from '../integration/act-as';
+import { freshDemoDatabase } from '../support/db';
+import { actAs } from '../support/act-as';
 
 const { call } = actAs('10.9.5');
 

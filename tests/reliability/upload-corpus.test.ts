@@ -4,7 +4,7 @@ import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import sharp from 'sharp';
 import { initModels } from '@/models';
-import { freshDemoDatabase } from '../integration/db';
+import { freshDemoDatabase } from '../support/db';
 import { upload, type Part } from '../support/photo-upload';
 
 const uploadDir = mkdtempSync(path.join(os.tmpdir(), 'clackwater-corpus-'));

@@ -10,7 +10,7 @@ import { initModels } from '@/models';
 import { ingestUpload } from '@/lib/photos/ingest';
 import { upload } from '../support/photo-upload';
 import { startFakeS3, type FakeS3 } from '../support/fake-s3';
-import { freshDemoDatabase } from '../integration/db';
+import { freshDemoDatabase } from '../support/db';
 
 const BUCKET = 'clackwater-photos-test';
 const scratch = mkdtempSync(path.join(os.tmpdir(), 'clackwater-s3-scratch-'));

@@ -7,7 +7,7 @@ import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
 import sharp from 'sharp';
 import { initModels } from '@/models';
 import { upload } from '../support/photo-upload';
-import { freshDemoDatabase } from '../integration/db';
+import { freshDemoDatabase } from '../support/db';
 
 // A switch on the real fs: after `allow` more writes, writeFile fails as a full disk does.
 const disk = vi.hoisted(() => ({ allow: Infinity }));

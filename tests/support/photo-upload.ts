@@ -1,6 +1,6 @@
 import { NextRequest } from 'next/server';
 import { POST } from '@/app/api/photos/route';
-import { sessionCookie } from '../integration/act-as';
+import { sessionCookie } from './act-as';
 
 export type Part = { name: string; data: Buffer | string; type?: string };
 

@@ -3,10 +3,8 @@ import Link from 'next/link';
 import { notFound } from 'next/navigation';
 import 'katex/dist/katex.min.css';
 import { findWorkedCalculation } from '@/lib/calculations/store';
-import { isDatabaseUnavailable } from '@/lib/db/errors';
 import { computeFromForm, getCalculator, resultsDiffer } from '@/lib/calculators';
 import { CalculatorById } from '@/components/calculators/Calculators';
-import { ServiceUnavailable } from '@/components/ServiceUnavailable';
 
 export const metadata: Metadata = { title: 'Worked calculation' };
 
@@ -14,13 +12,7 @@ const dateFmt = new Intl.DateTimeFormat('en', { day: 'numeric', month: 'long', y
 
 export default async function WorkedCalculationPage({ params }: { params: Promise<{ id: string }> }) {
   const { id } = await params;
-  let saved: Awaited<ReturnType<typeof findWorkedCalculation>>;
-  try {
-    saved = await findWorkedCalculation(id);
-  } catch (err) {
-    if (isDatabaseUnavailable(err)) return <ServiceUnavailable what="this worked calculation" />;
-    throw err;
-  }
+  const saved: Awaited<ReturnType<typeof findWorkedCalculation>> = await findWorkedCalculation(id);
   if (!saved) notFound();
   const entry = getCalculator(saved.tool);
   const form = saved.inputs as Record<string, string>;

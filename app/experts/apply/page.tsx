@@ -2,10 +2,8 @@ import type { Metadata } from 'next';
 import Link from 'next/link';
 import { currentUserInPage } from '@/lib/auth/session';
 import { can, REFUSAL } from '@/lib/auth/policy';
-import { isDatabaseUnavailable } from '@/lib/db/errors';
 import { initModels } from '@/models';
 import { hasPendingApplication } from '@/lib/accounts/roles';
-import { ServiceUnavailable } from '@/components/ServiceUnavailable';
 import { ApplyForm } from './ApplyForm';
 
 export const metadata: Metadata = { title: 'Apply to be an expert' };
@@ -13,18 +11,13 @@ export const dynamic = 'force-dynamic';
 
 export default async function ApplyForExpertPage() {
   let state: { kind: 'signed-out' } | { kind: 'refused' } | { kind: 'pending' } | { kind: 'form'; region: string };
-  try {
-    const user = await currentUserInPage();
-    if (!user) state = { kind: 'signed-out' };
-    else if (!can(user, 'expertApplication.submit')) state = { kind: 'refused' };
-    else if (await hasPendingApplication(user.id)) state = { kind: 'pending' };
-    else {
-      const row = await initModels().User.findByPk(user.id, { attributes: ['region'] });
-      state = { kind: 'form', region: row?.region ?? '' };
-    }
-  } catch (err) {
-    if (isDatabaseUnavailable(err)) return <ServiceUnavailable what="the expert application" />;
-    throw err;
+  const user = await currentUserInPage();
+  if (!user) state = { kind: 'signed-out' };
+  else if (!can(user, 'expertApplication.submit')) state = { kind: 'refused' };
+  else if (await hasPendingApplication(user.id)) state = { kind: 'pending' };
+  else {
+    const row = await initModels().User.findByPk(user.id, { attributes: ['region'] });
+    state = { kind: 'form', region: row?.region ?? '' };
   }
 
   return (

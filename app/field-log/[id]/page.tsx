@@ -1,16 +1,12 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
 import { notFound } from 'next/navigation';
-import { Op } from 'sequelize';
 import { currentUserInPage } from '@/lib/auth/session';
-import { can } from '@/lib/auth/policy';
-import { isDatabaseUnavailable } from '@/lib/db/errors';
 import { idParam } from '@/lib/http/guard';
-import { getEntry, linksOf, type EntryView } from '@/lib/field-log/store';
+import { getEntry } from '@/lib/field-log/store';
+import { loadEntryPage } from '@/lib/field-log/entry-page';
 import { trialFlowM3s } from '@/lib/field-log/measure';
-import { initModels } from '@/models';
 import { photoUrl } from '@/lib/photos/storage';
-import { ServiceUnavailable } from '@/components/ServiceUnavailable';
 import { Caution } from '@/components/Caution';
 import { LinkForm } from '@/components/field-log/LinkForm';
 import { material, pumpsWords, shown, size } from '@/components/field-log/format';
@@ -37,34 +33,10 @@ function Row({ label, children }: { label: string; children: React.ReactNode }) 
 export default async function FieldLogEntryPage({ params }: { params: Params }) {
   const id = idParam((await params).id);
   if (!id) notFound();
-  let e: EntryView | null;
-  let links: Awaited<ReturnType<typeof linksOf>> = [];
-  let candidates: { id: number; label: string }[] = [];
-  let mayLink = false;
-  let mayAsk = false;
-  let photos: { id: string; alt: string | null; width: number; height: number }[] = [];
-  try {
-    const viewer = await currentUserInPage();
-    e = await getEntry(id, viewer);
-    if (!e) notFound();
-    links = await linksOf(id);
-    const photoRows = await initModels().Photo.findAll({ where: { fieldLogEntryId: id, ...(can(viewer, 'moderation.seeHidden') ? {} : { hiddenAt: null, deletedAt: null }) }, order: [['id', 'ASC']] });
-    photos = photoRows.map((r) => ({ id: r.publicId, alt: r.alt, width: r.width, height: r.height }));
-    mayLink = can(viewer, 'fieldLog.edit', e.authorId);
-    mayAsk = can(viewer, 'question.ask');
-    if (mayLink) {
-      const rows = await initModels().FieldLogEntry.findAll({
-        where: { authorId: e.authorId, siteName: e.siteName, id: { [Op.ne]: id }, deletedAt: null },
-        order: [['testedOn', 'DESC']],
-        attributes: ['id', 'testedOn', 'pumpCount', 'arrangement', 'pumpSize'],
-      });
-      const linked = new Set(links.filter((l) => l.afterId === id).map((l) => l.beforeId));
-      candidates = rows.filter((r) => !linked.has(r.id)).map((r) => ({ id: r.id, label: `${r.testedOn}: ${pumpsWords(r.pumpCount, r.arrangement, r.pumpSize)} (entry ${r.id})` }));
-    }
-  } catch (err) {
-    if (isDatabaseUnavailable(err)) return <ServiceUnavailable what="this field log entry" />;
-    throw err;
-  }
+  const loaded = await loadEntryPage(id, await currentUserInPage());
+  if (!loaded) notFound();
+  const { entry: e, links, photos, mayLink, mayAsk } = loaded;
+  const candidates = loaded.linkCandidates.map((r) => ({ id: r.id, label: `${r.testedOn}: ${pumpsWords(r.pumpCount, r.arrangement, r.pumpSize)} (entry ${r.id})` }));
   const p = e.performance;
   const units = await readUnitPreference();
   const flow = (si: number) => shown('flow', si, units);

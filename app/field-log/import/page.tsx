@@ -1,22 +1,14 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
 import { currentUserInPage } from '@/lib/auth/session';
-import { isDatabaseUnavailable } from '@/lib/db/errors';
 import { CSV_COLUMNS, CSV_COMPUTED_COLUMNS, MAX_IMPORT_ROWS } from '@/lib/field-log/csv';
-import { ServiceUnavailable } from '@/components/ServiceUnavailable';
 import { ImportForm } from '@/components/field-log/ImportForm';
 
 export const metadata: Metadata = { title: 'Import field log CSV' };
 export const dynamic = 'force-dynamic';
 
 export default async function ImportPage() {
-  let signedIn: boolean;
-  try {
-    signedIn = (await currentUserInPage()) !== null;
-  } catch (err) {
-    if (isDatabaseUnavailable(err)) return <ServiceUnavailable what="the import page" />;
-    throw err;
-  }
+  const signedIn: boolean = (await currentUserInPage()) !== null;
   return (
     <div className="flex flex-col gap-4">
       <p className="font-sans text-sm"><Link href="/field-log" className="cw-link">Field log</Link></p>

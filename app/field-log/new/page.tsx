@@ -2,8 +2,6 @@ import type { Metadata } from 'next';
 import Link from 'next/link';
 import { currentUserInPage } from '@/lib/auth/session';
 import { can, REFUSAL } from '@/lib/auth/policy';
-import { isDatabaseUnavailable } from '@/lib/db/errors';
-import { ServiceUnavailable } from '@/components/ServiceUnavailable';
 import { Caution } from '@/components/Caution';
 import { EntryForm } from '@/components/field-log/EntryForm';
 
@@ -11,14 +9,8 @@ export const metadata: Metadata = { title: 'Record a test' };
 export const dynamic = 'force-dynamic';
 
 export default async function NewFieldLogEntryPage() {
-  let state: 'signed-out' | 'refused' | 'form';
-  try {
-    const user = await currentUserInPage();
-    state = !user ? 'signed-out' : can(user, 'fieldLog.create') ? 'form' : 'refused';
-  } catch (err) {
-    if (isDatabaseUnavailable(err)) return <ServiceUnavailable what="the field log form" />;
-    throw err;
-  }
+  const user = await currentUserInPage();
+  const state: 'signed-out' | 'refused' | 'form' = !user ? 'signed-out' : can(user, 'fieldLog.create') ? 'form' : 'refused';
   return (
     <div className="flex flex-col gap-4">
       <h1 className="font-serif text-3xl font-semibold">Record a test</h1>

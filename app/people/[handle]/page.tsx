@@ -2,34 +2,17 @@ import type { Metadata } from 'next';
 import Link from 'next/link';
 import { notFound } from 'next/navigation';
 import { cache } from 'react';
-import { initModels } from '@/models';
+import { publicProfile } from '@/lib/accounts/profile';
 import type { Role } from '@/models/User';
-import { isDatabaseUnavailable } from '@/lib/db/errors';
 import { getCalculator } from '@/lib/calculators';
-import { ServiceUnavailable } from '@/components/ServiceUnavailable';
 
 export const dynamic = 'force-dynamic';
 
 const dateFmt = new Intl.DateTimeFormat('en', { day: 'numeric', month: 'long', year: 'numeric', timeZone: 'UTC' });
 const monthFmt = new Intl.DateTimeFormat('en', { month: 'long', year: 'numeric', timeZone: 'UTC' });
 
-/** Public fields only: never the e-mail or anything from the account's private side. */
-const findPerson = cache(async (handle: string) => {
-  if (!/^[a-z0-9_]{1,40}$/.test(handle)) return null;
-  const { User, WorkedCalculation } = initModels();
-  const person = await User.findOne({ where: { handle }, attributes: ['id', 'handle', 'displayName', 'role', 'region', 'bio', 'createdAt'] });
-  if (!person) return null;
-  const calculations = await WorkedCalculation.findAll({
-    where: { authorId: person.id },
-    attributes: ['publicId', 'tool', 'title', 'createdAt'],
-    order: [
-      ['createdAt', 'DESC'],
-      ['id', 'DESC'],
-    ],
-    limit: 100,
-  });
-  return { person, calculations };
-});
+// one query for the metadata and the page of a render
+const findPerson = cache(publicProfile);
 
 export async function generateMetadata({ params }: { params: Promise<{ handle: string }> }): Promise<Metadata> {
   const { handle } = await params;
@@ -46,13 +29,7 @@ const ROLE_LABEL: Record<Role, 'expert' | 'moderator' | null> = { expert: 'exper
 
 export default async function PersonPage({ params }: { params: Promise<{ handle: string }> }) {
   const { handle } = await params;
-  let found: Awaited<ReturnType<typeof findPerson>>;
-  try {
-    found = await findPerson(handle);
-  } catch (err) {
-    if (isDatabaseUnavailable(err)) return <ServiceUnavailable what="this profile" />;
-    throw err;
-  }
+  const found = await findPerson(handle);
   if (!found) notFound();
   const { person, calculations } = found;
   const label = ROLE_LABEL[person.role as Role];

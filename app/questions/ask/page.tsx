@@ -3,9 +3,7 @@ import Link from 'next/link';
 import 'katex/dist/katex.min.css';
 import { currentUserInPage } from '@/lib/auth/session';
 import { can, REFUSAL } from '@/lib/auth/policy';
-import { isDatabaseUnavailable } from '@/lib/db/errors';
 import { initModels } from '@/models';
-import { ServiceUnavailable } from '@/components/ServiceUnavailable';
 import { AskForm } from '@/components/questions/AskForm';
 import { getEntry } from '@/lib/field-log/store';
 import { entrySiteSheet } from '@/lib/calculators/site-sheet';
@@ -23,19 +21,14 @@ export default async function AskQuestionPage({ searchParams }: { searchParams: 
   const fieldLogId = typeof sp.fieldLog === 'string' ? idParam(sp.fieldLog) : undefined;
   let fromFieldLog: { id: number; siteSheet: ReturnType<typeof entrySiteSheet> } | undefined;
   let state: { kind: 'signed-out' } | { kind: 'refused' } | { kind: 'form'; tags: { slug: string; name: string }[] };
-  try {
-    const user = await currentUserInPage();
-    if (!user) state = { kind: 'signed-out' };
-    else if (!can(user, 'question.ask')) state = { kind: 'refused' };
-    else {
-      const rows = await initModels().Tag.findAll({ attributes: ['slug', 'name'], order: [['name', 'ASC']] });
-      state = { kind: 'form', tags: rows.map((t) => ({ slug: t.slug, name: t.name })) };
-      const entry = fieldLogId ? await getEntry(fieldLogId, user) : null;
-      if (entry && !entry.hidden && !entry.deleted) fromFieldLog = { id: entry.id, siteSheet: entrySiteSheet(entry) };
-    }
-  } catch (err) {
-    if (isDatabaseUnavailable(err)) return <ServiceUnavailable what="the question form" />;
-    throw err;
+  const user = await currentUserInPage();
+  if (!user) state = { kind: 'signed-out' };
+  else if (!can(user, 'question.ask')) state = { kind: 'refused' };
+  else {
+    const rows = await initModels().Tag.findAll({ attributes: ['slug', 'name'], order: [['name', 'ASC']] });
+    state = { kind: 'form', tags: rows.map((t) => ({ slug: t.slug, name: t.name })) };
+    const entry = fieldLogId ? await getEntry(fieldLogId, user) : null;
+    if (entry && !entry.hidden && !entry.deleted) fromFieldLog = { id: entry.id, siteSheet: entrySiteSheet(entry) };
   }
 
   const tag = one(sp.tag);

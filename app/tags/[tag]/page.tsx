@@ -1,11 +1,8 @@
 import type { Metadata } from 'next';
 import { notFound } from 'next/navigation';
-import { initModels } from '@/models';
-import { listQuestions } from '@/lib/questions/list';
+import { tagPage } from '@/lib/questions/tags';
 import { paginationSchema } from '@/lib/validation/pagination';
-import { isDatabaseUnavailable } from '@/lib/db/errors';
 import { QuestionList, Pager } from '@/components/QuestionList';
-import { ServiceUnavailable } from '@/components/ServiceUnavailable';
 
 type Props = { params: Promise<{ tag: string }>; searchParams: Promise<Record<string, string | string[] | undefined>> };
 
@@ -18,16 +15,9 @@ export default async function TagPage({ params, searchParams }: Props) {
   const sp = await searchParams;
   const parsed = paginationSchema.safeParse({ page: typeof sp.page === 'string' ? sp.page : undefined });
   if (!parsed.success || !/^[a-z0-9-]{2,40}$/.test(tag)) notFound();
-  let loaded;
-  try {
-    const t = await initModels().Tag.findOne({ where: { slug: tag } });
-    loaded = t ? { t, data: await listQuestions(parsed.data, { kind: 'tag', tag }) } : null;
-  } catch (err) {
-    if (isDatabaseUnavailable(err)) return <ServiceUnavailable what="these questions" />;
-    throw err;
-  }
+  const loaded = await tagPage(tag, parsed.data);
   if (!loaded) notFound();
-  const { t, data } = loaded;
+  const { tag: t, questions: data } = loaded;
   return (
     <div className="flex flex-col gap-4">
       <h1 className="font-serif text-3xl font-semibold">{t.name}</h1>

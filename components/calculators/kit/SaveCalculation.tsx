@@ -4,6 +4,7 @@ import { useContext, useState } from 'react';
 import Link from 'next/link';
 import { SessionContext } from 'next-auth/react';
 import { can } from '@/lib/auth/policy';
+import { sendJson } from '@/components/forms/api';
 
 /**
  * "Save as a worked calculation": posts the inputs as typed; the server recomputes
@@ -37,17 +38,8 @@ export function SaveCalculation({ tool, inputs }: { tool: string; inputs: URLSea
         disabled={state.busy}
         onClick={async () => {
           setState({ busy: true });
-          try {
-            const res = await fetch('/api/calculations', {
-              method: 'POST',
-              headers: { 'content-type': 'application/json' },
-              body: JSON.stringify({ tool, inputs: Object.fromEntries(inputs.entries()) }),
-            });
-            const body = await res.json();
-            setState(res.ok ? { url: body.url } : { error: body.error?.message ?? 'Could not save.' });
-          } catch {
-            setState({ error: 'Could not reach Clackwater; try again.' });
-          }
+          const r = await sendJson<{ url: string }>('/api/calculations', 'POST', { tool, inputs: Object.fromEntries(inputs.entries()) });
+          setState(r.ok ? { url: r.data.url } : { error: r.error.message });
         }}
       >
         Save as a worked calculation

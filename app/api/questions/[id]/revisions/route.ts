@@ -1,5 +1,6 @@
 import { NextResponse, type NextRequest } from 'next/server';
 import { z } from 'zod';
+import { POST_TYPES } from '@/lib/vocabulary';
 import { apiError, queryObject, serverError, validationError } from '@/lib/http/errors';
 import { idParam } from '@/lib/http/guard';
 import { currentUser } from '@/lib/auth/session';
@@ -8,7 +9,7 @@ import { ForumError } from '@/lib/forum/errors';
 
 export const dynamic = 'force-dynamic';
 const schema = z.object({
-  postType: z.enum(['question', 'answer', 'reply'], { error: 'postType must be question, answer or reply' }).default('question'),
+  postType: z.enum(POST_TYPES, { error: 'postType must be question, answer or reply' }).default('question'),
   postId: z.string().regex(/^\d{1,10}$/, 'postId must be a number').transform(Number).optional(),
 });
 

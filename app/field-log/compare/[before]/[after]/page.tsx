@@ -2,10 +2,8 @@ import type { Metadata } from 'next';
 import Link from 'next/link';
 import { notFound } from 'next/navigation';
 import { currentUserInPage } from '@/lib/auth/session';
-import { isDatabaseUnavailable } from '@/lib/db/errors';
 import { idParam } from '@/lib/http/guard';
 import { getComparison, type Comparison } from '@/lib/field-log/store';
-import { ServiceUnavailable } from '@/components/ServiceUnavailable';
 import { pumpsWords, shown } from '@/components/field-log/format';
 import { readUnitPreference } from '@/lib/units/server';
 
@@ -17,13 +15,7 @@ export default async function ComparePage({ params }: { params: Promise<{ before
   const beforeId = idParam(p.before);
   const afterId = idParam(p.after);
   if (!beforeId || !afterId) notFound();
-  let c: Comparison | null;
-  try {
-    c = await getComparison(beforeId, afterId, await currentUserInPage());
-  } catch (err) {
-    if (isDatabaseUnavailable(err)) return <ServiceUnavailable what="this comparison" />;
-    throw err;
-  }
+  const c: Comparison | null = await getComparison(beforeId, afterId, await currentUserInPage());
   if (!c) notFound();
   const units = await readUnitPreference();
   const flow = (si: number) => shown('flow', si, units);

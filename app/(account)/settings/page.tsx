@@ -2,63 +2,21 @@ import type { Metadata } from 'next';
 import Link from 'next/link';
 import { currentUserInPage } from '@/lib/auth/session';
 import { can, REFUSAL } from '@/lib/auth/policy';
-import { isDatabaseUnavailable } from '@/lib/db/errors';
-import { initModels } from '@/models';
-import { ServiceUnavailable } from '@/components/ServiceUnavailable';
-import { SettingsForm, type SettingsValues } from './SettingsForm';
+import { loadSettingsPage } from '@/lib/accounts/settings-page';
+import { SettingsForm } from './SettingsForm';
 import { MailSettingsForm } from './MailSettingsForm';
 import { SignOutEverywhere } from '@/components/account/SignOutEverywhere';
-import { loadMailSettings } from '@/lib/mail/settings';
-import type { MailSettings } from '@/lib/validation/mail';
 
 export const metadata: Metadata = { title: 'Settings' };
 export const dynamic = 'force-dynamic';
 
 const dateFmt = new Intl.DateTimeFormat('en', { day: 'numeric', month: 'long', year: 'numeric', timeZone: 'UTC' });
 
-interface NoticeView {
-  id: number;
-  message: string;
-  link: string | null;
-  createdAt: Date;
-}
-
 export default async function SettingsPage() {
-  let loaded: { handle: string; canApply: boolean; expert: boolean; values: SettingsValues; mail: { settings: MailSettings; tagChoices: { slug: string; name: string }[] }; notices: NoticeView[] } | null = null;
-  let refusal: string | null = null;
-  try {
-    const user = await currentUserInPage();
-    if (user && can(user, 'profile.read', user.id)) {
-      const { User, Notice } = initModels();
-      const row = await User.findByPk(user.id);
-      const notices = can(user, 'notice.read', user.id)
-        ? await Notice.findAll({
-            where: { userId: user.id },
-            order: [
-              ['createdAt', 'DESC'],
-              ['id', 'DESC'],
-            ],
-            limit: 50,
-          })
-        : [];
-      const mail = await loadMailSettings(user.id);
-      if (row && mail) {
-        loaded = {
-          expert: can(row, 'digest.expertSections'),
-          mail,
-          handle: row.handle,
-          canApply: can(user, 'expertApplication.submit'),
-          values: { displayName: row.displayName, region: row.region ?? '', bio: row.bio ?? '', units: row.units },
-          notices: notices.map((n) => ({ id: n.id, message: n.message, link: n.link, createdAt: n.createdAt })),
-        };
-      }
-    } else if (user) {
-      refusal = REFUSAL['profile.read'];
-    }
-  } catch (err) {
-    if (isDatabaseUnavailable(err)) return <ServiceUnavailable what="your settings" />;
-    throw err;
-  }
+  const user = await currentUserInPage();
+  const mayRead = user !== null && can(user, 'profile.read', user.id);
+  const loaded = user && mayRead ? await loadSettingsPage(user) : null;
+  const refusal = user && !mayRead ? REFUSAL['profile.read'] : null;
 
   if (!loaded) {
     return (

@@ -2,9 +2,7 @@ import type { Metadata } from 'next';
 import Link from 'next/link';
 import { currentUserInPage, type SessionUser } from '@/lib/auth/session';
 import { can, refusedBySuspension, REFUSAL } from '@/lib/auth/policy';
-import { isDatabaseUnavailable } from '@/lib/db/errors';
 import { Refused } from '@/components/account/Refused';
-import { ServiceUnavailable } from '@/components/ServiceUnavailable';
 import { ReviewQueue } from '@/components/moderation/ReviewQueue';
 import { SuspendedMembers } from '@/components/moderation/SuspendedMembers';
 
@@ -13,13 +11,7 @@ export const dynamic = 'force-dynamic';
 
 /** The moderators' review queue; the list itself loads in the browser so it can refresh after each action. */
 export default async function ReviewPage() {
-  let user: SessionUser | null;
-  try {
-    user = await currentUserInPage();
-  } catch (err) {
-    if (isDatabaseUnavailable(err)) return <ServiceUnavailable what="the review queue" />;
-    throw err;
-  }
+  const user: SessionUser | null = await currentUserInPage();
 
   if (!user || !can(user, 'moderation.act')) {
     const message = user && refusedBySuspension(user, 'moderation.act') ? 'Your account is suspended: the review queue is closed to you until the suspension ends.' : REFUSAL['moderation.act'];

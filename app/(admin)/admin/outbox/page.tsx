@@ -1,11 +1,9 @@
 import type { Metadata } from 'next';
 import { currentUserInPage } from '@/lib/auth/session';
 import { can, REFUSAL } from '@/lib/auth/policy';
-import { isDatabaseUnavailable } from '@/lib/db/errors';
 import { outboxView } from '@/lib/mail/outbox';
 import { MAIL_STATUSES, type MailStatus } from '@/models/MailMessage';
 import { Refused } from '@/components/account/Refused';
-import { ServiceUnavailable } from '@/components/ServiceUnavailable';
 import { RetryButton } from './RetryButton';
 
 export const metadata: Metadata = { title: 'E-mail outbox' };
@@ -20,15 +18,10 @@ export default async function OutboxPage({ searchParams }: { searchParams: Promi
   const status = MAIL_STATUSES.find((s) => s === sp.status) ?? null;
   let signedIn = false;
   let data: Awaited<ReturnType<typeof outboxView>> | null = null;
-  try {
-    const user = await currentUserInPage();
-    signedIn = user !== null;
-    if (user && can(user, 'mail.outbox')) {
-      data = await outboxView(status);
-    }
-  } catch (err) {
-    if (isDatabaseUnavailable(err)) return <ServiceUnavailable what="the e-mail outbox" />;
-    throw err;
+  const user = await currentUserInPage();
+  signedIn = user !== null;
+  if (user && can(user, 'mail.outbox')) {
+    data = await outboxView(status);
   }
   if (!data) return <Refused title="E-mail outbox" message={REFUSAL['mail.outbox']} signedIn={signedIn} signInTo="/admin/outbox" />;
 

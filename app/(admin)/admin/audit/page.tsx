@@ -2,11 +2,9 @@ import type { Metadata } from 'next';
 import Link from 'next/link';
 import { currentUserInPage } from '@/lib/auth/session';
 import { can, REFUSAL } from '@/lib/auth/policy';
-import { isDatabaseUnavailable } from '@/lib/db/errors';
 import { auditFilterSchema } from '@/lib/validation/moderation';
 import { listAudit } from '@/lib/moderation/audit';
 import { Refused } from '@/components/account/Refused';
-import { ServiceUnavailable } from '@/components/ServiceUnavailable';
 import { AUDIT_ACTION_WORDS } from '@/components/moderation/words';
 import { inputClass, labelClass } from '@/components/forms/api';
 
@@ -52,14 +50,9 @@ export default async function AuditPage({ searchParams }: { searchParams: Search
 
   let data: AuditPage | null = null;
   let signedIn = false;
-  try {
-    const user = await currentUserInPage();
-    signedIn = user !== null;
-    if (user && can(user, 'audit.read')) data = await listAudit(filter);
-  } catch (err) {
-    if (isDatabaseUnavailable(err)) return <ServiceUnavailable what="the audit log" />;
-    throw err;
-  }
+  const user = await currentUserInPage();
+  signedIn = user !== null;
+  if (user && can(user, 'audit.read')) data = await listAudit(filter);
 
   if (!data) {
     return <Refused title="Audit log" message={REFUSAL['audit.read']} signedIn={signedIn} signInTo="/admin/audit" />;

@@ -2,10 +2,8 @@ import type { Metadata } from 'next';
 import Link from 'next/link';
 import { currentUserInPage } from '@/lib/auth/session';
 import { can, REFUSAL } from '@/lib/auth/policy';
-import { isDatabaseUnavailable } from '@/lib/db/errors';
 import { listPendingApplications, type PendingApplicationView } from '@/lib/accounts/roles';
 import { Refused } from '@/components/account/Refused';
-import { ServiceUnavailable } from '@/components/ServiceUnavailable';
 import { DecisionForm } from './DecisionForm';
 
 export const metadata: Metadata = { title: 'Expert applications' };
@@ -17,16 +15,11 @@ export default async function ReviewExpertsPage() {
   let applications: PendingApplicationView[] | null = null;
   let viewerId = 0;
   let signedIn = false;
-  try {
-    const user = await currentUserInPage();
-    signedIn = user !== null;
-    if (user && can(user, 'expertApplication.decide')) {
-      viewerId = user.id;
-      applications = await listPendingApplications();
-    }
-  } catch (err) {
-    if (isDatabaseUnavailable(err)) return <ServiceUnavailable what="the expert applications" />;
-    throw err;
+  const user = await currentUserInPage();
+  signedIn = user !== null;
+  if (user && can(user, 'expertApplication.decide')) {
+    viewerId = user.id;
+    applications = await listPendingApplications();
   }
 
   if (!applications) {
