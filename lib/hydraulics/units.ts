@@ -253,8 +253,18 @@ export function toSI(value: number, unit: string, kind: QuantityKind, field = 'u
     throw new EngineInputError([{ field, message: `"${unit}" is not a unit of ${kindWords(kind)}; try ${UNIT_CHOICES[kind].filter(Boolean).join(', ')}` }]);
   }
   if (kind === 'temperature') return Qty(value, u).to('tempC').scalar;
-  return (value * baseFactor(u)) / baseFactor(SI_UNIT[kind]);
+  const si = (value * baseFactor(u)) / baseFactor(SI_UNIT[kind]);
+  if (!Number.isFinite(si)) throw new EngineInputError([{ field, message: 'is too large to use' }]);
+  // A value this close to zero divides out to Infinity (1e-320 m of fall gives an
+  // infinite lift ratio); no measurement on a ram site is that small in SI.
+  if (si !== 0 && Math.abs(si) < MIN_SI_MAGNITUDE) {
+    throw new EngineInputError([{ field, message: 'is too close to zero to use' }]);
+  }
+  return si;
 }
+
+/** Smallest non-zero SI magnitude an input may have (1e-12 m³/s is 0.00006 mL/min). */
+export const MIN_SI_MAGNITUDE = 1e-12;
 
 /** Converts an SI value of `kind` to `unit`. Example: fromSI(0.3048, 'ft', 'length') = 1. */
 export function fromSI(si: number, unit: string, kind: QuantityKind): number {

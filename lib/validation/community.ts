@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { BROKEN_TEXT_MESSAGE, isWellFormedText } from './text';
 import { ROLES } from '@/models/User';
 import { SAFETY_VERDICTS } from '@/models/SafetyCheck';
 import { UNIT_SYSTEMS } from '@/lib/units/preference';
@@ -31,6 +32,7 @@ const link = z
   .string({ error: 'each link must be a web address' })
   .trim()
   .max(500, 'each link must be at most 500 characters')
+  .refine(isWellFormedText, BROKEN_TEXT_MESSAGE)
   .pipe(z.url({ protocol: /^https?$/, error: 'each link must be a web address starting with http:// or https://' }));
 
 export const expertApplicationSchema = z.object({
