@@ -197,13 +197,23 @@ function exactBase(q: Qty): number {
   return v;
 }
 
+/**
+ * Unit strings come from readers (a share link, a request body), so every cache keyed
+ * by them is bounded: past the bound a unit is simply worked out again.
+ */
+export const UNIT_CACHE_LIMIT = 2048;
+
+function remember<V>(cache: Map<string, V>, key: string, value: V): void {
+  if (cache.size < UNIT_CACHE_LIMIT) cache.set(key, value);
+}
+
 const canonicalCache = new Map<string, string>();
 
 function canonicalUnit(raw: string): string {
   const hit = canonicalCache.get(raw);
   if (hit !== undefined) return hit;
   const u = canonicalise(raw);
-  if (canonicalCache.size < 2048) canonicalCache.set(raw, u);
+  remember(canonicalCache, raw, u);
   return u;
 }
 
@@ -220,7 +230,7 @@ function baseFactor(unit: string): number {
   const hit = factorCache.get(unit);
   if (hit !== undefined) return hit;
   const f = unit === '' ? 1 : exactBase(Qty(1, unit));
-  factorCache.set(unit, f);
+  remember(factorCache, unit, f);
   return f;
 }
 
@@ -238,7 +248,7 @@ function checkKind(unit: string, kind: QuantityKind): boolean {
   } catch {
     ok = false;
   }
-  if (kindCache.size < 2048) kindCache.set(key, ok);
+  remember(kindCache, key, ok);
   return ok;
 }
 
@@ -272,6 +282,11 @@ export function fromSI(si: number, unit: string, kind: QuantityKind): number {
   if (!checkKind(u, kind)) throw new Error(`"${unit}" is not a unit of ${kindWords(kind)}`);
   if (kind === 'temperature') return Qty(si, 'tempC').to(u).scalar;
   return (si * baseFactor(SI_UNIT[kind])) / baseFactor(u);
+}
+
+/** Entries held by the unit caches, for tests that check they stay bounded. */
+export function unitCacheSizes(): { canonical: number; kind: number; factor: number } {
+  return { canonical: canonicalCache.size, kind: kindCache.size, factor: factorCache.size };
 }
 
 function kindWords(kind: QuantityKind): string {
