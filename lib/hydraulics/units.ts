@@ -273,8 +273,12 @@ export function toSI(value: number, unit: string, kind: QuantityKind, field = 'u
   return si;
 }
 
-/** Smallest non-zero SI magnitude an input may have (1e-12 m³/s is 0.00006 mL/min). */
-export const MIN_SI_MAGNITUDE = 1e-12;
+/**
+ * Smallest non-zero SI magnitude an input may have: far below any reading a person
+ * could type in a picker unit (a millionth of a mL/min is 1.7e-14 m³/s), yet large
+ * enough that dividing by it stays finite (subnormals such as 1e-320 do not).
+ */
+export const MIN_SI_MAGNITUDE = 1e-30;
 
 /** Converts an SI value of `kind` to `unit`. Example: fromSI(0.3048, 'ft', 'length') = 1. */
 export function fromSI(si: number, unit: string, kind: QuantityKind): number {
