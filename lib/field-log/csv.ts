@@ -194,9 +194,10 @@ export async function importCsv(user: { id: number }, text: string, mode: 'all-o
 const num = (x: number | null | undefined) => (x === null || x === undefined ? '' : String(Number(x.toPrecision(10))));
 const lmin = (m3s: number) => num(m3s * 60_000);
 
-/** The entries as CSV, with our columns then the computed ones. */
-export function exportCsv(entries: EntryView[]): string {
-  const rows = entries.map((e) => ({
+const EXPORT_COLUMNS = [...COLUMN_NAMES, ...CSV_COMPUTED_COLUMNS];
+
+function exportRow(e: EntryView): string[] {
+  const r: Record<string, string> = {
     site_name: e.siteName, tested_on: e.testedOn, pump_type: e.pumpType, pump_size_in: e.pumpSize, pump_count: String(e.pumpCount),
     arrangement: e.arrangement, fall_m: num(e.fallM), lift_m: num(e.liftM), drive_length_m: num(e.driveLengthM), drive_size_in: e.driveSize,
     drive_material: e.driveMaterial, delivery_length_m: num(e.deliveryLengthM), delivery_size_in: e.deliverySize ?? '',
@@ -207,6 +208,23 @@ export function exportCsv(entries: EntryView[]): string {
     delivered_flow_l_min: lmin(e.deliveredFlowM3s), efficiency_daubuisson: num(e.performance.dAubuisson),
     efficiency_rankine: num(e.performance.rankine), predicted_flow_l_min: lmin(e.performance.predictedDeliveredFlowM3s),
     lift_ratio: num(e.performance.liftRatio),
-  }));
-  return Papa.unparse({ fields: [...COLUMN_NAMES, ...CSV_COMPUTED_COLUMNS], data: rows.map((r) => [...COLUMN_NAMES, ...CSV_COMPUTED_COLUMNS].map((c) => r[c as keyof typeof r])) }, { newline: '\r\n', escapeFormulae: true });
+  };
+  return EXPORT_COLUMNS.map((c) => r[c]);
+}
+
+const UNPARSE = { newline: '\r\n', escapeFormulae: true } as const;
+
+/** The export's header line, with its line break. */
+export function exportCsvHeader(): string {
+  return `${Papa.unparse([EXPORT_COLUMNS], UNPARSE)}\r\n`;
+}
+
+/** Export lines for some entries, each ending in a line break (streamed a chunk at a time). */
+export function exportCsvRows(entries: EntryView[]): string {
+  return entries.length ? `${Papa.unparse(entries.map(exportRow), UNPARSE)}\r\n` : '';
+}
+
+/** The entries as CSV, with our columns then the computed ones. */
+export function exportCsv(entries: EntryView[]): string {
+  return Papa.unparse({ fields: EXPORT_COLUMNS, data: entries.map(exportRow) }, UNPARSE);
 }

@@ -130,6 +130,55 @@ export async function filteredEntries(filter: Pick<FieldLogFilter, 'pumpSize' | 
   return rows.map(toView);
 }
 
+/** The visible entries with these ids, as views, in the order of `ids` (the export reads them a chunk at a time). */
+export async function entryViewsByIds(ids: number[], viewer: Actor | null): Promise<EntryView[]> {
+  if (ids.length === 0) return [];
+  const { FieldLogEntry } = initModels();
+  const rows = await FieldLogEntry.findAll({ where: { id: ids, ...visibleWhere(viewer) }, include });
+  const byId = new Map(rows.map((r) => [r.id, toView(r)]));
+  return ids.flatMap((id) => byId.get(id) ?? []);
+}
+
+/**
+ * The ids of every visible entry matching the filter, in the view's order. Stored
+ * columns sort in one light query (no trials); the computed orders (efficiency, lift
+ * ratio) need each entry's working, read a chunk at a time and kept only as keys.
+ */
+export async function filteredIdsInOrder(
+  filter: Pick<FieldLogFilter, 'pumpSize' | 'material' | 'sort' | 'dir'>,
+  viewer: Actor | null,
+  chunk: (ids: number[]) => Promise<EntryView[]>,
+  gate: <T>(work: () => Promise<T>) => Promise<T> = (work) => work(),
+): Promise<number[]> {
+  const { FieldLogEntry } = initModels();
+  const where: Record<string, unknown> = { ...visibleWhere(viewer) };
+  if (filter.pumpSize) {
+    const n = parseNominalSize(filter.pumpSize);
+    if (!n) throw new ForumError(400, `pumpSize: "${filter.pumpSize}" is not a pipe size from ½" to 4"`, 'pumpSize');
+    where.pumpSize = n;
+  }
+  if (filter.material) where.driveMaterial = filter.material;
+  const light = await gate(() => FieldLogEntry.findAll({ where, attributes: ['id', 'testedOn', 'siteName', 'deliveredFlowM3s'], raw: true }));
+  let keyed: { id: number; key: number | string }[];
+  if (filter.sort === 'efficiency' || filter.sort === 'liftRatio') {
+    keyed = [];
+    for (let i = 0; i < light.length; i += EXPORT_CHUNK) {
+      for (const v of await chunk(light.slice(i, i + EXPORT_CHUNK).map((r) => r.id))) keyed.push({ id: v.id, key: SORT_KEY[filter.sort](v) });
+    }
+  } else {
+    const key = SORT_KEY[filter.sort];
+    keyed = light.map((r) => ({ id: r.id, key: key({ ...r, testedOn: String(r.testedOn) } as unknown as EntryView) }));
+  }
+  keyed.sort((a, b) => {
+    const c = a.key < b.key ? -1 : a.key > b.key ? 1 : a.id - b.id;
+    return filter.dir === 'asc' ? c : -c;
+  });
+  return keyed.map((k) => k.id);
+}
+
+/** Entries read per query by the export. */
+export const EXPORT_CHUNK = 200;
+
 const SORT_KEY: Record<FieldLogFilter['sort'], (e: EntryView) => number | string> = {
   testedOn: (e) => `${e.testedOn}|${String(e.id).padStart(10, '0')}`,
   efficiency: (e) => e.performance.dAubuisson,

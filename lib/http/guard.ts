@@ -1,4 +1,5 @@
 import { apiError, serverError } from './errors';
+import { crossSiteRefusal } from './request-checks';
 import { currentUser, type SessionUser } from '@/lib/auth/session';
 import { refusedBySuspension, REFUSAL, roleMayTry, type Action } from '@/lib/auth/policy';
 import { ForumError } from '@/lib/forum/errors';
@@ -34,6 +35,8 @@ export async function guarded(
   work: (user: SessionUser) => Promise<Response>,
   options: { flood?: FloodKind } = {},
 ): Promise<Response> {
+  const crossSite = crossSiteRefusal(request);
+  if (crossSite) return crossSite;
   let user: SessionUser | null;
   try {
     user = await currentUser(request);

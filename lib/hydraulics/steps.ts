@@ -4,6 +4,7 @@
  */
 import type { QuantityKind } from './units';
 import { ENGINE_VERSION } from './version';
+import { EngineInputError } from './errors';
 
 export interface StepResult {
   value: number;
@@ -124,7 +125,9 @@ export function step(
 
 function assertFinite(v: unknown, path: string): void {
   if (typeof v === 'number') {
-    if (!Number.isFinite(v)) throw new Error(`hydraulics engine produced a non-finite number at ${path}`);
+    if (!Number.isFinite(v)) {
+      throw new EngineInputError([{ field: '(input)', message: `these values are outside what the calculation can handle (${path} came out infinite); check each value and its unit` }]);
+    }
     return;
   }
   if (Array.isArray(v)) {
@@ -138,11 +141,11 @@ function assertFinite(v: unknown, path: string): void {
 
 /**
  * Wraps results into the common output and checks that no NaN or Infinity
- * escapes (a non-finite number here is an engine bug, never the user's input,
- * because inputs are validated first).
+ * escapes. Inputs are validated first, but extreme valid values can still
+ * overflow in between; that is refused as bad input (a 4xx), never a crash.
  * @example
  * finish({ q: 1 }, [], []).engineVersion  // → ENGINE_VERSION
- * finish({ q: 0 / 0 }, [], [])  // throws Error
+ * finish({ q: 0 / 0 }, [], [])  // throws EngineInputError
  */
 export function finish<R>(results: R, steps: Step[], warnings: Warning[]): CalcOutput<R> {
   assertFinite(results, 'results');

@@ -204,13 +204,23 @@ function exactBase(q: Qty): number {
   return v;
 }
 
+/**
+ * Unit strings come from readers (a share link, a request body), so every cache keyed
+ * by them is bounded: past the bound a unit is simply worked out again.
+ */
+export const UNIT_CACHE_LIMIT = 2048;
+
+function remember<V>(cache: Map<string, V>, key: string, value: V): void {
+  if (cache.size < UNIT_CACHE_LIMIT) cache.set(key, value);
+}
+
 const canonicalCache = new Map<string, string>();
 
 function canonicalUnit(raw: string): string {
   const hit = canonicalCache.get(raw);
   if (hit !== undefined) return hit;
   const u = canonicalise(raw);
-  if (canonicalCache.size < 2048) canonicalCache.set(raw, u);
+  remember(canonicalCache, raw, u);
   return u;
 }
 
@@ -227,7 +237,7 @@ function baseFactor(unit: string): number {
   const hit = factorCache.get(unit);
   if (hit !== undefined) return hit;
   const f = unit === '' ? 1 : exactBase(Qty(1, unit));
-  factorCache.set(unit, f);
+  remember(factorCache, unit, f);
   return f;
 }
 
@@ -245,7 +255,7 @@ function checkKind(unit: string, kind: QuantityKind): boolean {
   } catch {
     ok = false;
   }
-  if (kindCache.size < 2048) kindCache.set(key, ok);
+  remember(kindCache, key, ok);
   return ok;
 }
 
@@ -263,8 +273,22 @@ export function toSI(value: number, unit: string, kind: QuantityKind, field = 'u
     throw new EngineInputError([{ field, message: `"${unit}" is not a unit of ${kindWords(kind)}; try ${UNIT_CHOICES[kind].filter(Boolean).join(', ')}` }]);
   }
   if (kind === 'temperature') return Qty(value, u).to('tempC').scalar;
-  return (value * baseFactor(u)) / baseFactor(SI_UNIT[kind]);
+  const si = (value * baseFactor(u)) / baseFactor(SI_UNIT[kind]);
+  if (!Number.isFinite(si)) throw new EngineInputError([{ field, message: 'is too large to use' }]);
+  // A value this close to zero divides out to Infinity (1e-320 m of fall gives an
+  // infinite lift ratio); no measurement on a ram site is that small in SI.
+  if (si !== 0 && Math.abs(si) < MIN_SI_MAGNITUDE) {
+    throw new EngineInputError([{ field, message: 'is too close to zero to use' }]);
+  }
+  return si;
 }
+
+/**
+ * Smallest non-zero SI magnitude an input may have: far below any reading a person
+ * could type in a picker unit (a millionth of a mL/min is 1.7e-14 m³/s), yet large
+ * enough that dividing by it stays finite (subnormals such as 1e-320 do not).
+ */
+export const MIN_SI_MAGNITUDE = 1e-30;
 
 /**
  * Converts an SI value of `kind` to `unit` (the inverse of {@link toSI}).
@@ -276,6 +300,15 @@ export function fromSI(si: number, unit: string, kind: QuantityKind): number {
   if (!checkKind(u, kind)) throw new Error(`"${unit}" is not a unit of ${kindWords(kind)}`);
   if (kind === 'temperature') return Qty(si, 'tempC').to(u).scalar;
   return (si * baseFactor(SI_UNIT[kind])) / baseFactor(u);
+}
+
+/**
+ * Entries held by the unit caches, for tests that check they stay bounded.
+ * @example
+ * unitCacheSizes().factor <= 2048  // → true
+ */
+export function unitCacheSizes(): { canonical: number; kind: number; factor: number } {
+  return { canonical: canonicalCache.size, kind: kindCache.size, factor: factorCache.size };
 }
 
 function kindWords(kind: QuantityKind): string {

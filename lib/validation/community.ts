@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { ROLES, SAFETY_VERDICTS } from '@/lib/vocabulary';
+import { BROKEN_TEXT_MESSAGE, isWellFormedText } from './text';
 import { UNIT_SYSTEMS } from '@/lib/units/preference';
 import { displayNameSchema } from './account';
 
@@ -31,6 +32,7 @@ const link = z
   .string({ error: 'each link must be a web address' })
   .trim()
   .max(500, 'each link must be at most 500 characters')
+  .refine(isWellFormedText, BROKEN_TEXT_MESSAGE)
   .pipe(z.url({ protocol: /^https?$/, error: 'each link must be a web address starting with http:// or https://' }));
 
 export const expertApplicationSchema = z.object({

@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { PUMP_TYPES, type PipeMaterial } from '@/lib/vocabulary';
+import { calendarDate } from './text';
 
 /**
  * Shared by the field log form, POST /api/field-log and the CSV import. Lengths and
@@ -21,7 +22,7 @@ export const trialSchema = z.object({
 
 export const fieldLogEntrySchema = z.object({
   siteName: z.string({ error: 'siteName is required' }).trim().min(2, 'siteName must be at least 2 characters').max(80, 'siteName must be at most 80 characters'),
-  testedOn: z.string({ error: 'testedOn is required' }).regex(/^\d{4}-\d{2}-\d{2}$/, 'testedOn must be a date like 2026-05-14'),
+  testedOn: calendarDate('testedOn'),
   pumpType: z.enum(PUMP_TYPES, { error: 'pumpType must be homemade or commercial' }).default('homemade'),
   pumpSize: z.string({ error: 'pumpSize is required' }).trim().min(1, 'pumpSize is required').max(12),
   pumpCount: z.number({ error: 'pumpCount must be a number' }).int('pumpCount must be a whole number').min(1, 'pumpCount must be at least 1').max(20, 'pumpCount must be at most 20').default(1),

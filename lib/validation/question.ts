@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { POST_TYPES } from '@/lib/vocabulary';
+import { BROKEN_TEXT_MESSAGE, isWellFormedText } from './text';
 
 /**
  * Shared by the ask form (react-hook-form's zod resolver) and POST /api/questions.
@@ -27,7 +28,7 @@ export const SITE_SHEET_FIELDS = [
 export type SiteSheetField = (typeof SITE_SHEET_FIELDS)[number];
 
 export const siteSheetSchema = z
-  .partialRecord(z.enum(SITE_SHEET_FIELDS), z.string().trim().max(200, 'each site sheet value must be at most 200 characters'))
+  .partialRecord(z.enum(SITE_SHEET_FIELDS), z.string().trim().max(200, 'each site sheet value must be at most 200 characters').refine(isWellFormedText, BROKEN_TEXT_MESSAGE))
   .optional();
 
 export const askQuestionSchema = z.object({

@@ -2,6 +2,7 @@ import { NextRequest } from 'next/server';
 import { encode } from 'next-auth/jwt';
 import { authSecret } from '@/lib/auth/secret';
 import { initModels } from '@/models';
+import { siteUrl } from '@/lib/site';
 
 // eslint-disable-next-line @typescript-eslint/no-explicit-any -- handlers differ in their context types
 export type Handler = (r: any, ctx: any) => Promise<Response>;
@@ -19,7 +20,8 @@ export async function sessionCookie(handle: string): Promise<string> {
 export function actAs(subnet: string) {
   let ip = 0;
   async function raw(handler: Handler, method: string, url: string, who: string | null, body?: unknown, params: Record<string, string> = {}) {
-    const headers: Record<string, string> = { 'content-type': 'application/json', 'x-forwarded-for': `${subnet}.${++ip}` };
+    // as the site's own pages send it: JSON, from the site's origin (lib/http/request-checks.ts)
+    const headers: Record<string, string> = { 'content-type': 'application/json', origin: new URL(siteUrl()).origin, 'x-forwarded-for': `${subnet}.${++ip}` };
     if (who) headers.cookie = await sessionCookie(who);
     return handler(new NextRequest(`http://localhost${url}`, { method, headers, body: body === undefined ? undefined : JSON.stringify(body) }), { params: Promise.resolve(params) });
   }

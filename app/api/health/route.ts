@@ -1,13 +1,16 @@
 import { NextResponse } from 'next/server';
-import { pingDatabase } from '@/lib/db';
+import { pingDatabaseDirect } from '@/lib/db/health';
 import { DB_UNAVAILABLE_MESSAGE } from '@/lib/db/errors';
 
 export const dynamic = 'force-dynamic';
 
-/** GET /api/health — 200 when the database answers, 503 with a readable body when not. */
+/**
+ * GET /api/health — 200 when the database answers, 503 with a readable body when not.
+ * It pings on its own connection, so a busy pool cannot make it slow (lib/db/health.ts).
+ */
 export async function GET() {
   try {
-    const { latencyMs } = await pingDatabase();
+    const { latencyMs } = await pingDatabaseDirect();
     return NextResponse.json({ status: 'ok', database: { state: 'up', latencyMs } });
   } catch (err) {
     const detail = err instanceof Error ? err.message.split('\n')[0] : String(err);
