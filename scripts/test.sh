@@ -17,7 +17,7 @@ failed=0
 step() { log "$1"; shift; "$@" || { failed=1; log "FAILED: $*"; }; }
 
 step "typecheck" npx tsc --noEmit
-step "typecheck the engine (noUncheckedIndexedAccess)" npx tsc -p lib/hydraulics --noEmit
+step "typecheck lib/ (noUncheckedIndexedAccess)" npx tsc -p lib --noEmit
 step "lint" npx eslint . --max-warnings=0
 step "reset test database" npx tsx scripts/reset-db.ts
 step "unit and integration tests (vitest)" npx vitest run --reporter=default --reporter=json --outputFile=.data/reports/vitest.json

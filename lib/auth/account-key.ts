@@ -41,6 +41,7 @@ export async function accountLimitKey(email: string): Promise<string> {
     replacements: [typed],
     type: QueryTypes.SELECT,
   });
+  if (!row) throw new Error('accountLimitKey: the database returned no row for SELECT SHA2(...)');
   return `account:${row.k}`;
 }
 

@@ -99,14 +99,14 @@ export function clientIp(headers: Headers | Record<string, string | string[] | u
     .split(',')
     .map((s) => s.trim())
     .filter(Boolean);
-  if (list.length === 0) return 'local';
-  return addressKey(list[Math.max(0, list.length - 1 - trustedProxyHops())]);
+  const client = list[Math.max(0, list.length - 1 - trustedProxyHops())];
+  return client === undefined ? 'local' : addressKey(client);
 }
 
 function addressKey(address: string): string {
   const a = address.toLowerCase().replace(/^\[|\](:\d+)?$/g, '');
   const mapped = /^::ffff:(\d+\.\d+\.\d+\.\d+)$/.exec(a);
-  if (mapped) return mapped[1];
+  if (mapped?.[1]) return mapped[1];
   if (!a.includes(':')) return a.replace(/:\d+$/, '');
   // expand "::" and keep the first four groups
   const [head, tail = ''] = a.split('::');

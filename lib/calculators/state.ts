@@ -13,8 +13,9 @@ import type { FieldDef, FieldState, FormState } from './types';
 /** Splits "4 ft" into { text: '4', unit: 'ft' }; a bare number keeps `unit` undefined. */
 export function splitTyped(value: string): { text: string; unit?: string } {
   const m = /^\s*([+-]?(?:\d+(?:\.\d*)?|\.\d+)(?:e[+-]?\d+)?)\s*(.*?)\s*$/i.exec(value);
-  if (!m) return { text: value.trim() };
-  return { text: m[1], unit: m[2] || undefined };
+  const [, text, unit] = m ?? [];
+  if (text === undefined) return { text: value.trim() };
+  return { text, unit: unit || undefined };
 }
 
 /** Does the text carry its own unit ("4 ft", "3/4 in", "¾\"") rather than a bare number? */
@@ -83,12 +84,14 @@ function readQuantity(qty: QuantityKind, s: FieldState, field: string): number {
 
 function setPath(obj: Record<string, unknown>, dotted: string, value: unknown) {
   const parts = dotted.split('.');
+  // split always gives at least one part: the last is the key, the rest the objects on the way
+  const last = parts.pop() ?? dotted;
   let cur = obj;
-  for (const p of parts.slice(0, -1)) {
+  for (const p of parts) {
     if (typeof cur[p] !== 'object' || cur[p] === null) cur[p] = {};
     cur = cur[p] as Record<string, unknown>;
   }
-  cur[parts[parts.length - 1]] = value;
+  cur[last] = value;
 }
 
 /** Reads the form into SI values keyed by engine field, with a message per field that does not read. */

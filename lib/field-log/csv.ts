@@ -61,7 +61,7 @@ const FIELD_TO_COLUMN: Record<string, Column> = {
 
 function columnOf(field: string | undefined): Column | '(row)' {
   if (!field) return '(row)';
-  const [head, , sub] = field.split('.');
+  const [head = '', , sub] = field.split('.');
   if (head === 'trials') return sub === 'seconds' ? 'trial_seconds' : 'trial_volumes_l';
   return FIELD_TO_COLUMN[head] ?? '(row)';
 }
@@ -99,10 +99,11 @@ export function rowToInput(row: Record<string, string>, line: number): { data: F
   if (volumes.length === 0) return fail('trial_volumes_l', 'trial_volumes_l: give at least one trial volume');
   if (volumes.length !== seconds.length) return fail('trial_seconds', `trial_seconds: ${seconds.length} times for ${volumes.length} volumes; give one time for each volume`);
   const trials = [];
-  for (let i = 0; i < volumes.length; i++) {
-    if (!NUMBER.test(volumes[i])) return fail('trial_volumes_l', `trial_volumes_l: "${volumes[i]}" (trial ${i + 1}) is not a number`);
-    if (!NUMBER.test(seconds[i])) return fail('trial_seconds', `trial_seconds: "${seconds[i]}" (trial ${i + 1}) is not a number`);
-    trials.push({ volume: `${volumes[i]} L`, seconds: Number(seconds[i]) });
+  for (const [i, volume] of volumes.entries()) {
+    const second = seconds[i] ?? ''; // as many as the volumes, checked above
+    if (!NUMBER.test(volume)) return fail('trial_volumes_l', `trial_volumes_l: "${volume}" (trial ${i + 1}) is not a number`);
+    if (!NUMBER.test(second)) return fail('trial_seconds', `trial_seconds: "${second}" (trial ${i + 1}) is not a number`);
+    trials.push({ volume: `${volume} L`, seconds: Number(second) });
   }
   const input = {
     siteName: cell('site_name'),
@@ -131,8 +132,9 @@ export function rowToInput(row: Record<string, string>, line: number): { data: F
   const parsed = fieldLogEntrySchema.safeParse(input);
   if (!parsed.success) {
     const issue = parsed.error.issues[0];
-    const column = columnOf(issue.path.join('.'));
-    return fail(column, column === '(row)' ? issue.message : `${column}: ${issue.message.replace(/^\w+(\.\d+\.\w+)?:? /, '')}`);
+    const column = columnOf(issue?.path.join('.'));
+    const message = issue?.message ?? 'this row could not be read';
+    return fail(column, column === '(row)' ? message : `${column}: ${message.replace(/^\w+(\.\d+\.\w+)?:? /, '')}`);
   }
   try {
     readEntry(parsed.data);

@@ -27,11 +27,12 @@ export interface FieldIssue {
 export class EngineInputError extends Error {
   readonly field: string;
   readonly range?: FieldRange;
-  readonly issues: FieldIssue[];
+  /** never empty, so `issues[0]` is always there */
+  readonly issues: [FieldIssue, ...FieldIssue[]];
 
   constructor(issues: FieldIssue[]) {
-    const first: FieldIssue = issues[0] ?? { field: '(input)', message: 'invalid input' };
-    const list = issues.length > 0 ? issues : [first];
+    const [first = { field: '(input)', message: 'invalid input' }, ...rest] = issues;
+    const list: [FieldIssue, ...FieldIssue[]] = [first, ...rest];
     super(list.map((i) => `${i.field}: ${i.message}`).join('; '));
     this.name = 'EngineInputError';
     this.field = first.field;

@@ -154,8 +154,9 @@ export async function runDigests(frequency: DigestFrequency, now = new Date()): 
       order: [['id', 'ASC']],
       limit: BATCH,
     });
-    if (members.length === 0) break;
-    afterId = members[members.length - 1].id;
+    const last = members.at(-1);
+    if (!last) break;
+    afterId = last.id;
     result.members += members.length;
     const mails: OutgoingMail[] = [];
     for (const m of members) {

@@ -158,8 +158,7 @@ async function flushOnce({ limit = 50, now = () => new Date() }: { limit?: numbe
     const ids = await claim(limit, now());
     if (ids.length === 0) return result;
     const rows = await MailMessage.findAll({ where: { id: { [Op.in]: ids } }, order: [['id', 'ASC']] });
-    for (let i = 0; i < rows.length; i++) {
-      const m = rows[i];
+    for (const [i, m] of rows.entries()) {
       try {
         await getTransport().sendMail({
           from: mailFrom(),

@@ -51,7 +51,8 @@ export function displayName(original: string | null | undefined): string {
   return base ? `“${base.length > 80 ? `${base.slice(0, 77)}…` : base}”` : 'a file with no name';
 }
 
-const altSchema = z.array(z.string().trim().max(PHOTO_LIMITS.maxAltChars, `Describe each photo in ${PHOTO_LIMITS.maxAltChars} characters or fewer.`));
+const ALT_TOO_LONG = `Describe each photo in ${PHOTO_LIMITS.maxAltChars} characters or fewer.`;
+const altSchema = z.array(z.string().trim().max(PHOTO_LIMITS.maxAltChars, ALT_TOO_LONG));
 
 /**
  * Reads a multipart upload (field `photos`, optional `alt` per photo, in order),
@@ -81,7 +82,7 @@ export async function ingestUpload(request: Request, ownerId: number): Promise<I
     const { files, alts } = await receive(request, tmpDir);
     if (files.length === 0) throw new UploadRefused(400, 'Choose at least one photo (JPEG, PNG or WebP).', 'no_file');
     const altParsed = altSchema.safeParse(alts);
-    if (!altParsed.success) throw new UploadRefused(400, altParsed.error.issues[0].message, 'invalid_alt', 'alt');
+    if (!altParsed.success) throw new UploadRefused(400, altParsed.error.issues[0]?.message ?? ALT_TOO_LONG, 'invalid_alt', 'alt');
 
     // Check every file before encoding any, so a refusal costs no decoding.
     for (const f of files) await inspect(f);

@@ -55,15 +55,17 @@ export function mdxToText(mdx: string): string {
 /** A guide cut at its h2/h3 headings; anchors as rehype-slug makes them (github-slugger). */
 export function guideSections(guide: GuideFile): SearchDoc[] {
   const slugger = new GithubSlugger();
-  const sections: { heading: string | null; anchor: string | null; lines: string[] }[] = [{ heading: null, anchor: null, lines: [] }];
+  let current: { heading: string | null; anchor: string | null; lines: string[] } = { heading: null, anchor: null, lines: [] };
+  const sections = [current];
   let inFence = false;
   for (const line of guide.body.split('\n')) {
     if (/^```/.test(line)) inFence = !inFence;
-    const h = !inFence && /^(#{2,3})\s+(.+?)\s*#*$/.exec(line);
-    if (h) {
-      const heading = mdxToText(h[2]);
-      sections.push({ heading, anchor: slugger.slug(heading), lines: [] });
-    } else sections[sections.length - 1].lines.push(line);
+    const title = inFence ? undefined : /^(#{2,3})\s+(.+?)\s*#*$/.exec(line)?.[2];
+    if (title !== undefined) {
+      const heading = mdxToText(title);
+      current = { heading, anchor: slugger.slug(heading), lines: [] };
+      sections.push(current);
+    } else current.lines.push(line);
   }
   return sections
     .map((s) => ({ ...s, text: mdxToText(s.lines.join('\n')) }))
@@ -230,8 +232,9 @@ export async function* allThreadDocs(batch = 2000): AsyncGenerator<SearchDoc[]> 
   let after = 0;
   for (;;) {
     const ids = (await Question.findAll({ attributes: ['id'], where: { id: { [Op.gt]: after } }, order: [['id', 'ASC']], limit: batch, raw: true })).map((r) => r.id);
-    if (ids.length === 0) return;
+    const last = ids.at(-1);
+    if (last === undefined) return;
     yield await threadDocs(ids);
-    after = ids[ids.length - 1];
+    after = last;
   }
 }

@@ -6,6 +6,9 @@ import { indexTerms } from './normalize';
 
 const newIndex = () => new Index({ tokenize: 'strict', resolution: 9, encode: (s: string) => s.split(' ').filter(Boolean) });
 
+/** A scratch array's slot; grow() keeps every document's number inside, so the 0 is never used. */
+const at = (a: Float64Array, n: number): number => a[n] ?? 0;
+
 /** Most query terms looked up (a pasted paragraph is cut here). */
 const MAX_TERMS = 12;
 
@@ -105,32 +108,32 @@ export class FlexEngine implements SearchEngine {
         if (lastTerm[n] === t) return;
         if (words[n] === 0) touched.push(n);
         lastTerm[n] = t;
-        words[n]++;
-        rarity[n] += rare;
+        words[n] = at(words, n) + 1;
+        rarity[n] = at(rarity, n) + rare;
       };
       for (const n of head) {
         mark(n);
-        inHead[n]++;
+        inHead[n] = at(inHead, n) + 1;
       }
-      for (let k = 0; k < body.length; k++) {
-        mark(body[k]);
-        position[body[k]] += k / body.length;
+      for (const [k, n] of body.entries()) {
+        mark(n);
+        position[n] = at(position, n) + k / body.length;
       }
     });
     // the four keys packed in one number, the candidate's place in the low bits: one numeric sort
     const SHIFT = 131072; // 2^17 > the most candidates (MAX_TERMS × 2 × CANDIDATES)
     const keys = new Float64Array(touched.length);
-    for (let i = 0; i < touched.length; i++) {
-      const n = touched[i];
+    for (const [i, n] of touched.entries()) {
       // words ≤ 12 (× 10^6), head ≤ 12 (× 10^4), rarity ≤ 12 × 11.6 (× 50 < 10^4), earlier-ness ≤ 12 (× 3 < 50)
-      const score = words[n] * 1e6 + inHead[n] * 1e4 + Math.round(rarity[n] * 50) + Math.round((used.length - position[n]) * 3);
+      const score =
+        at(words, n) * 1e6 + at(inHead, n) * 1e4 + Math.round(at(rarity, n) * 50) + Math.round((used.length - at(position, n)) * 3);
       keys[i] = -(score * SHIFT) + i;
     }
     keys.sort();
     const matched: SearchDoc[] = [];
-    for (let k = 0; k < keys.length; k++) {
-      const i = ((keys[k] % SHIFT) + SHIFT) % SHIFT;
-      const d = this.docAt[touched[i]];
+    for (const key of keys) {
+      const n = touched[((key % SHIFT) + SHIFT) % SHIFT];
+      const d = n === undefined ? undefined : this.docAt[n];
       if (d && passes(d, filters) && matched.push(d) >= CANDIDATES) break;
     }
     for (const n of touched) {

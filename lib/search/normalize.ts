@@ -101,19 +101,35 @@ const RULES: Rule[] = [
   // DN20, DN 20
   { re: /\bdn\s?(\d{1,3})\b/y, make: (m) => (NOMINAL_SIZES.some((s) => s.dn === Number(m[1])) ? tok(`dn${Number(m[1])}`, m) : null) },
   // 1 1/4", 1-1/4 inch, 1¼", ¾ inch
-  { re: new RegExp(String.raw`(?:(\d+)[\s-]+)?(\d)\/(\d{1,2})${INCH}`, 'y'), make: (m) => sizeOrLength((m[1] ? Number(m[1]) : 0) + Number(m[2]) / Number(m[3]), m) },
-  { re: new RegExp(String.raw`(\d+)?\s?([¼½¾⅛⅜⅝⅞])${INCH}`, 'y'), make: (m) => sizeOrLength((m[1] ? Number(m[1]) : 0) + VULGAR[m[2]], m) },
+  { re: new RegExp(String.raw`(?:(\d+)[\s-]+)?(\d)\/(\d{1,2})${INCH}`, 'y'), make: (m) => {
+    const [, whole, top, bottom] = m;
+    return top && bottom ? sizeOrLength((whole ? Number(whole) : 0) + Number(top) / Number(bottom), m) : null;
+  } },
+  { re: new RegExp(String.raw`(\d+)?\s?([¼½¾⅛⅜⅝⅞])${INCH}`, 'y'), make: (m) => {
+    const [, whole, vulgar] = m;
+    const fraction = vulgar && VULGAR[vulgar];
+    return fraction ? sizeOrLength((whole ? Number(whole) : 0) + fraction, m) : null;
+  } },
   // 0.75 in, 1-inch, 2"
-  { re: new RegExp(String.raw`${NUM}${INCH}`, 'y'), make: (m) => sizeOrLength(num(m[1]), m) },
+  { re: new RegExp(String.raw`${NUM}${INCH}`, 'y'), make: (m) => (m[1] ? sizeOrLength(num(m[1]), m) : null) },
   // 19 mm
   { re: new RegExp(String.raw`${NUM}\s?mm\b`, 'y'), make: (m) => {
+    if (!m[1]) return null;
     const dn = dnForMillimetres(num(m[1]));
     return dn ? tok(`dn${dn}`, m) : quantityToken('len', num(m[1]) / 1000, m.index, m.index + m[0].length);
   } },
-  { re: new RegExp(String.raw`${NUM}\s?(${unitAlt(FLOW)})(?![a-z])`, 'y'), make: (m) => quantityToken('flow', num(m[1]) * FLOW[m[2].toLowerCase().replace(/\s+/g, ' ')], m.index, m.index + m[0].length) },
-  { re: new RegExp(String.raw`${NUM}\s?(${unitAlt(PRESSURE)})(?![a-z])`, 'y'), make: (m) => quantityToken('kpa', num(m[1]) * PRESSURE[m[2].toLowerCase()], m.index, m.index + m[0].length) },
-  { re: new RegExp(String.raw`${NUM}\s?(${unitAlt(LENGTH)})(?![a-z])`, 'y'), make: (m) => quantityToken('len', num(m[1]) * LENGTH[m[2].toLowerCase()], m.index, m.index + m[0].length) },
+  { re: new RegExp(String.raw`${NUM}\s?(${unitAlt(FLOW)})(?![a-z])`, 'y'), make: (m) => withUnit('flow', FLOW, m, (u) => u.replace(/\s+/g, ' ')) },
+  { re: new RegExp(String.raw`${NUM}\s?(${unitAlt(PRESSURE)})(?![a-z])`, 'y'), make: (m) => withUnit('kpa', PRESSURE, m) },
+  { re: new RegExp(String.raw`${NUM}\s?(${unitAlt(LENGTH)})(?![a-z])`, 'y'), make: (m) => withUnit('len', LENGTH, m) },
 ];
+
+/** A number and a unit from `units` (groups 1 and 2), as a quantity token in SI; null when the unit is not in the table. */
+function withUnit(kind: string, units: Record<string, number>, m: RegExpExecArray, key = (u: string) => u): Token | null {
+  const [, value, unit] = m;
+  if (!value || !unit) return null;
+  const factor = units[key(unit.toLowerCase())];
+  return factor === undefined ? null : quantityToken(kind, num(value) * factor, m.index, m.index + m[0].length);
+}
 
 function tok(term: string, m: RegExpExecArray): Token {
   return { term, start: m.index, end: m.index + m[0].length };
@@ -161,12 +177,12 @@ export function tokenize(input: string): Token[] {
   const out: Token[] = [];
   let i = 0;
   while (i < text.length) {
-    const ch = text[i];
+    const ch = text.charAt(i);
     if (!START_RE.test(ch)) {
       i++;
       continue;
     }
-    const atWordStart = i === 0 || !/[\p{L}\p{N}]/u.test(text[i - 1]);
+    const atWordStart = i === 0 || !/[\p{L}\p{N}]/u.test(text.charAt(i - 1));
     let matched: Token | null = null;
     WORD_RE.lastIndex = i;
     const w = WORD_RE.exec(text);
@@ -185,7 +201,8 @@ export function tokenize(input: string): Token[] {
       if (!matched && w && SYNONYM_FIRST_WORDS.has(w[0])) {
         SYNONYM_RE.lastIndex = i;
         const m = SYNONYM_RE.exec(text);
-        if (m) matched = { term: SYNONYM_OF.get(m[1].replace(/[-\s]+/g, ' ')) ?? m[1], start: i, end: i + m[0].length };
+        const phrase = m?.[1];
+        if (m && phrase) matched = { term: SYNONYM_OF.get(phrase.replace(/[-\s]+/g, ' ')) ?? phrase, start: i, end: i + m[0].length };
       }
     }
     if (matched) {

@@ -41,18 +41,19 @@ export function snippet(text: string, terms: Set<string>, width = 200): Segment[
   let best = 0;
   let bestCount = 0;
   const inWindow = new Map<string, number>();
-  const word = (k: number) => flat.slice(spans[k].start, spans[k].end).toLowerCase();
-  for (let i = 0, j = 0; i < spans.length; i++) {
-    while (j < spans.length && spans[j].end - spans[i].start <= width) {
-      const w = word(j++);
+  const word = (s: { start: number; end: number }) => flat.slice(s.start, s.end).toLowerCase();
+  let j = 0;
+  for (const [i, span] of spans.entries()) {
+    for (let next = spans[j]; next && next.end - span.start <= width; next = spans[++j]) {
+      const w = word(next);
       inWindow.set(w, (inWindow.get(w) ?? 0) + 1);
     }
     if (inWindow.size > bestCount) {
       bestCount = inWindow.size;
-      best = spans[i].start;
+      best = span.start;
     }
     if (j > i) {
-      const w = word(i);
+      const w = word(span);
       const c = inWindow.get(w)! - 1;
       if (c === 0) inWindow.delete(w);
       else inWindow.set(w, c);

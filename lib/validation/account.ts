@@ -49,7 +49,7 @@ export function cleanDisplayName(raw: string): string {
   return chars
     .filter((c, i) => {
       if (!c.match(INVISIBLE)) return true;
-      return JOINERS.has(c) && i > 0 && i < chars.length - 1 && !chars[i - 1].match(INVISIBLE) && !chars[i + 1].match(INVISIBLE);
+      return JOINERS.has(c) && i > 0 && i < chars.length - 1 && !chars[i - 1]?.match(INVISIBLE) && !chars[i + 1]?.match(INVISIBLE);
     })
     .join('')
     .trim();

@@ -15,9 +15,11 @@ export function parseTrials(text: string) {
     .map((t) => t.trim())
     .filter(Boolean)
     .map((t, i) => {
-      const m = /^(.+?)\s+in\s+(.+)$/i.exec(t);
-      if (!m) throw new EngineInputError([{ field: 'trials', message: `trial ${i + 1} ("${t}") should read like "5 L in 12 s"` }]);
-      return { volumeM3: parseQuantity(m[1], 'volume', 'trials'), timeS: parseQuantity(m[2], 'time', 'trials') };
+      const [, volume, time] = /^(.+?)\s+in\s+(.+)$/i.exec(t) ?? [];
+      if (volume === undefined || time === undefined) {
+        throw new EngineInputError([{ field: 'trials', message: `trial ${i + 1} ("${t}") should read like "5 L in 12 s"` }]);
+      }
+      return { volumeM3: parseQuantity(volume, 'volume', 'trials'), timeS: parseQuantity(time, 'time', 'trials') };
     });
 }
 
