@@ -1,12 +1,12 @@
 /**
  * Runs once when a server starts (Next's instrumentation hook): writes in lib/ mark
- * thread pages stale through Next's page cache (lib/forum/after-write.ts), search builds its
+ * thread pages stale through Next's page cache (lib/questions/after-write.ts), search builds its
  * index in the background so the first search does not wait for it, and the mail
  * scheduler starts the outbox worker and the digests (MAIL_WORKER=off skips it).
  */
 export async function register() {
   if (process.env.NEXT_RUNTIME !== 'nodejs') return;
-  const [{ revalidatePath }, { onPageStale }] = await Promise.all([import('next/cache'), import('@/lib/forum/after-write')]);
+  const [{ revalidatePath }, { onPageStale }] = await Promise.all([import('next/cache'), import('@/lib/questions/after-write')]);
   onPageStale((path) => revalidatePath(path));
   if (process.env.MAIL_WORKER !== 'off') {
     const { startMailScheduler } = await import('@/lib/mail/scheduler');

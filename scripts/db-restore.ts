@@ -10,7 +10,7 @@ import { createGunzip } from 'node:zlib';
 import { QueryTypes } from 'sequelize';
 import { readDbConfig, type DbConfig } from '@/lib/db/config';
 import { createSequelize } from '@/lib/db';
-import { forgetSavedPages } from '@/lib/forum/saved-pages';
+import { forgetSavedPages } from '@/lib/questions/saved-pages';
 
 export async function restoreDatabase(file: string, cfg: DbConfig = readDbConfig(), opts: { force?: boolean } = {}): Promise<void> {
   if (!existsSync(file)) throw new Error(`no backup file at ${file}`);

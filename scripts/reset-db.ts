@@ -1,6 +1,6 @@
 /** Empties the database (every migration down), migrates up, seeds the demo and drops the saved thread pages. Tests only. */
 import { getSequelize } from '@/lib/db';
-import { forgetSavedPages } from '@/lib/forum/saved-pages';
+import { forgetSavedPages } from '@/lib/questions/saved-pages';
 import { resetDatabase } from '@/tests/support/reset';
 
 resetDatabase(getSequelize())

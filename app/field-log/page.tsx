@@ -3,7 +3,7 @@ import Link from 'next/link';
 import { notFound } from 'next/navigation';
 import { currentUserInPage } from '@/lib/auth/session';
 import { NOMINAL_SIZES } from '@/lib/hydraulics';
-import { ForumError } from '@/lib/forum/errors';
+import { ForumError } from '@/lib/questions/errors';
 import { fieldLogFilterSchema, PIPE_MATERIAL_CHOICES, type FieldLogFilter } from '@/lib/validation/field-log';
 import { filteredEntries, sortAndPage, type EntryView } from '@/lib/field-log/store';
 import { Pager } from '@/components/QuestionList';

@@ -4,7 +4,7 @@ import { usePathname } from 'next/navigation';
 import useSWR from 'swr';
 import { getJsonOrNull } from '@/components/forms/api';
 import { Thread, useViewer } from './Thread';
-import type { ThreadView } from '@/lib/forum/thread';
+import type { ThreadView } from '@/lib/questions/thread';
 import { can, sessionActor } from '@/lib/auth/policy';
 
 /**

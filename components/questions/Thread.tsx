@@ -6,7 +6,7 @@ import { useSession } from 'next-auth/react';
 import { MemberText } from '@/components/posts/MemberText';
 import { CalculatorById } from '@/components/calculators/Calculators';
 import { can } from '@/lib/auth/policy';
-import type { AnswerView, ReplyView, ThreadView } from '@/lib/forum/thread';
+import type { AnswerView, ReplyView, ThreadView } from '@/lib/questions/thread';
 import { getCalculator } from '@/lib/calculators';
 import { PhotoGallery } from '@/components/photos/PhotoGallery';
 import { EditBody, HelpfulButton, RevisionHistory } from './PostControls';

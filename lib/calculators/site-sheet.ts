@@ -5,7 +5,7 @@
  * any calculator prefilled from it. Pure, so the browser and the server share it.
  */
 import { defaultSeries, NOMINAL_LABELS, SYMPTOM_LABELS, type NominalSize, type PipeMaterial, type Symptom, type UnitSystem } from '@/lib/hydraulics';
-import { ForumError } from '@/lib/forum/errors';
+import { ForumError } from '@/lib/questions/errors';
 import { DEFAULT_UNITS } from '@/lib/units/preference';
 import type { SiteSheetField } from '@/lib/validation/question';
 import { displayQuantity } from './format';

@@ -5,7 +5,7 @@
  */
 import Papa from 'papaparse';
 import { getSequelize } from '@/lib/db';
-import { ForumError } from '@/lib/forum/errors';
+import { ForumError } from '@/lib/questions/errors';
 import { fieldLogEntrySchema, type FieldLogEntryData } from '@/lib/validation/field-log';
 import { readEntry } from './measure';
 import { createEntry, type EntryView } from './store';

@@ -17,7 +17,7 @@ import {
   type NominalSize,
   type PumpType,
 } from '@/lib/hydraulics';
-import { ForumError } from '@/lib/forum/errors';
+import { ForumError } from '@/lib/questions/errors';
 import type { FieldLogEntryData } from '@/lib/validation/field-log';
 
 export interface TrialSI {

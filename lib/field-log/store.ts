@@ -8,7 +8,7 @@ import { initModels } from '@/models';
 import type { FieldLogEntry } from '@/models/FieldLogEntry';
 import type { SessionUser } from '@/lib/auth/session';
 import { can, type Actor } from '@/lib/auth/policy';
-import { ForumError } from '@/lib/forum/errors';
+import { ForumError } from '@/lib/questions/errors';
 import { parseNominalSize } from '@/lib/hydraulics';
 import { attachPhotos } from '@/lib/photos/store';
 import type { FieldLogEntryData, FieldLogFilter } from '@/lib/validation/field-log';

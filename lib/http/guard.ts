@@ -2,7 +2,7 @@ import { apiError, serverError } from './errors';
 import { crossSiteRefusal } from './request-checks';
 import { currentUser, type SessionUser } from '@/lib/auth/session';
 import { refusedBySuspension, REFUSAL, roleMayTry, type Action } from '@/lib/auth/policy';
-import { ForumError } from '@/lib/forum/errors';
+import { ForumError } from '@/lib/questions/errors';
 import { clientIp, limitMessage, refund, spend, type LimitName } from '@/lib/auth/rate-limit';
 
 /** Members younger than this are "new": fewer posts an hour and fewer links a post. */

@@ -1,12 +1,12 @@
 import { Op } from 'sequelize';
 import { getSequelize } from '@/lib/db';
 import { initModels } from '@/models';
-import { ForumError } from '@/lib/forum/errors';
+import { ForumError } from '@/lib/questions/errors';
 import type { SessionUser } from '@/lib/auth/session';
 import { can, MODERATING, REFUSAL, type Actor, type Role } from '@/lib/auth/policy';
 import { recordAudit } from './audit';
 import { notifyModeration } from '@/lib/mail/notify';
-import { postsChanged } from '@/lib/forum/after-write';
+import { postsChanged } from '@/lib/questions/after-write';
 import { loadPost, type ModeratedType } from './posts';
 import { bumpSessionVersion } from '@/lib/auth/session-version';
 

@@ -1,8 +1,8 @@
 import { Op } from 'sequelize';
-import { postsChanged } from '@/lib/forum/after-write';
+import { postsChanged } from '@/lib/questions/after-write';
 import { getSequelize } from '@/lib/db';
 import { initModels } from '@/models';
-import { ForumError } from '@/lib/forum/errors';
+import { ForumError } from '@/lib/questions/errors';
 import type { SessionUser } from '@/lib/auth/session';
 import { can } from '@/lib/auth/policy';
 import { NEW_MEMBER_DAYS } from '@/lib/http/guard';

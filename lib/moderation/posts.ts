@@ -1,6 +1,6 @@
 import type { Transaction } from 'sequelize';
 import { initModels } from '@/models';
-import { ForumError } from '@/lib/forum/errors';
+import { ForumError } from '@/lib/questions/errors';
 
 export type { ModeratedType } from '@/lib/vocabulary';
 import type { ModeratedType } from '@/lib/vocabulary';

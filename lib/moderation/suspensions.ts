@@ -1,7 +1,7 @@
 import { Op } from 'sequelize';
 import { getSequelize } from '@/lib/db';
 import { initModels } from '@/models';
-import { ForumError } from '@/lib/forum/errors';
+import { ForumError } from '@/lib/questions/errors';
 import type { SessionUser } from '@/lib/auth/session';
 import { notifyModeration } from '@/lib/mail/notify';
 import { recordAudit } from './audit';

@@ -1,7 +1,7 @@
 import { apiError, serverError } from '@/lib/http/errors';
 import { currentUser } from '@/lib/auth/session';
 import { can } from '@/lib/auth/policy';
-import { isTakenDown } from '@/lib/forum/visibility';
+import { isTakenDown } from '@/lib/questions/visibility';
 import { initModels } from '@/models';
 import type { Photo } from '@/models/Photo';
 import { isPhotoId, readVariant, type PhotoVariant } from './storage';

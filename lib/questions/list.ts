@@ -56,7 +56,7 @@ async function filterWhere(filter: ListFilter): Promise<WhereOptions> {
  * How many questions each public list holds, kept for a few seconds: counting every
  * visible question scans an index of all of them, and every list page shows the
  * count. Any write to a thread in this process forgets them at once
- * (lib/forum/after-write.ts); other instances' counts catch up within the TTL.
+ * (lib/questions/after-write.ts); other instances' counts catch up within the TTL.
  */
 const COUNT_TTL_MS = 10_000;
 const counts = new Map<string, { value: number; until: number }>();

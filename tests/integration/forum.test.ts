@@ -12,7 +12,7 @@ import { GET as revisionsGET } from '@/app/api/questions/[id]/revisions/route';
 import { GET as similarGET } from '@/app/api/questions/similar/route';
 import { PUT as answerPUT } from '@/app/api/answers/[id]/route';
 import { POST as helpfulPOST, DELETE as helpfulDELETE } from '@/app/api/helpful/route';
-import { MAX_REPLY_DEPTH } from '@/lib/forum/posts';
+import { MAX_REPLY_DEPTH } from '@/lib/questions/posts';
 import { freshDemoDatabase } from '../support/db';
 
 // eslint-disable-next-line @typescript-eslint/no-explicit-any -- route handlers differ in their request and context types

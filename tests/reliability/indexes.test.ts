@@ -2,7 +2,7 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import { QueryTypes } from 'sequelize';
 import { getSequelize } from '@/lib/db';
 import { listQuestions } from '@/lib/questions/list';
-import { loadThread, listRevisions } from '@/lib/forum/thread';
+import { loadThread, listRevisions } from '@/lib/questions/thread';
 import { reviewQueue } from '@/lib/moderation/queue';
 import { listAudit } from '@/lib/moderation/audit';
 import { listMembersPage } from '@/lib/accounts/roles';

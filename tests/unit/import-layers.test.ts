@@ -6,7 +6,7 @@ const root = path.resolve(__dirname, '../..');
 
 describe('layers of the code', () => {
   it('asking a question on the server pulls in no component, no client module, no chart or SWR code', () => {
-    const { files, packages, client } = importClosure(root, 'lib/forum/posts.ts');
+    const { files, packages, client } = importClosure(root, 'lib/questions/posts.ts');
     expect(files.filter((f) => f.startsWith('components/') || f.startsWith('app/'))).toEqual([]);
     expect(client).toEqual([]);
     expect(packages).not.toContain('recharts');

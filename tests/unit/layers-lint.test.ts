@@ -15,9 +15,9 @@ async function restrictedImports(filePath: string, code: string): Promise<string
 }
 
 const forbidden: [string, string][] = [
-  ['lib/forum/example.ts', "import { Thread } from '@/components/questions/Thread';"],
-  ['lib/forum/example.ts', "import Page from '@/app/questions/page';"],
-  ['lib/forum/example.ts', "import { Thread } from '../../components/questions/Thread';"],
+  ['lib/questions/example.ts', "import { Thread } from '@/components/questions/Thread';"],
+  ['lib/questions/example.ts', "import Page from '@/app/questions/page';"],
+  ['lib/questions/example.ts', "import { Thread } from '../../components/questions/Thread';"],
   ['lib/example.ts', "export { Thread } from '../components/questions/Thread';"],
   ['lib/hydraulics/example.ts', "import { getSequelize } from '@/lib/db';"],
   ['lib/hydraulics/example.ts', "import { useState } from 'react';"],
@@ -32,8 +32,8 @@ const forbidden: [string, string][] = [
 ];
 
 const allowed: [string, string][] = [
-  ['lib/forum/example.ts', "import { initModels } from '@/models';"],
-  ['lib/forum/example.ts', "import { render } from '@react-email/components';"],
+  ['lib/questions/example.ts', "import { initModels } from '@/models';"],
+  ['lib/questions/example.ts', "import { render } from '@react-email/components';"],
   ['lib/hydraulics/example.ts', "import * as z from 'zod/mini';"],
   ['lib/hydraulics/example.ts', "import { PUMP_TYPES } from '../vocabulary';"],
   ['lib/hydraulics/example.ts', "import { toSI } from './units';"],

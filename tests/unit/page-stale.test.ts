@@ -1,5 +1,5 @@
 import { afterEach, describe, expect, it, vi } from 'vitest';
-import { onPageStale, threadChanged } from '@/lib/forum/after-write';
+import { onPageStale, threadChanged } from '@/lib/questions/after-write';
 
 // lib/ marks pages stale only through the hook the app layer sets (instrumentation.ts).
 describe('page stale hook', () => {

@@ -12,7 +12,7 @@ const ROOT = path.resolve(__dirname, '../..');
 const NOT_PERMISSIONS: { file: string; text: string; why: string }[] = [
   { file: 'lib/accounts/roles.ts', text: "applicant.role === 'member'", why: 'approving an application moves a member to expert, never demotes a moderator' },
   { file: 'components/moderation/ReviewItem.tsx', text: "f.flagger.role !== 'member'", why: 'shows the flagger’s role beside the flag' },
-  { file: 'lib/forum/thread.ts', text: "u?.role === 'expert'", why: 'labels an expert’s post; owner of lib/forum to move it to a policy row' },
+  { file: 'lib/questions/thread.ts', text: "u?.role === 'expert'", why: 'labels an expert’s post; owner of lib/questions to move it to a policy row' },
 ];
 
 function sources(dir: string, out: string[] = []): string[] {

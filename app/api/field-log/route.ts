@@ -3,7 +3,7 @@ import { apiError, queryObject, serverError, validationError } from '@/lib/http/
 import { readJson } from '@/lib/http/body';
 import { guarded } from '@/lib/http/guard';
 import { currentUser } from '@/lib/auth/session';
-import { ForumError } from '@/lib/forum/errors';
+import { ForumError } from '@/lib/questions/errors';
 import { fieldLogEntrySchema, fieldLogFilterSchema } from '@/lib/validation/field-log';
 import { createEntry, filteredEntries, sortAndPage } from '@/lib/field-log/store';
 import { indexFieldLog } from '@/lib/search';

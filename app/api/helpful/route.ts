@@ -1,7 +1,7 @@
 import { NextResponse } from 'next/server';
 import { readJson } from '@/lib/http/body';
 import { guarded } from '@/lib/http/guard';
-import { markHelpful } from '@/lib/forum/posts';
+import { markHelpful } from '@/lib/questions/posts';
 import { helpfulSchema } from '@/lib/validation/question';
 
 export const dynamic = 'force-dynamic';

@@ -5,7 +5,7 @@ import { listQuestions } from '@/lib/questions/list';
 import { askQuestionSchema } from '@/lib/validation/question';
 import { readJson } from '@/lib/http/body';
 import { guarded } from '@/lib/http/guard';
-import { askQuestion } from '@/lib/forum/posts';
+import { askQuestion } from '@/lib/questions/posts';
 
 export const dynamic = 'force-dynamic';
 

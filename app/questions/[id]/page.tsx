@@ -3,8 +3,8 @@ import Link from 'next/link';
 import { notFound } from 'next/navigation';
 import { cache } from 'react';
 import 'katex/dist/katex.min.css';
-import { loadThread, type ThreadView } from '@/lib/forum/thread';
-import { ForumError } from '@/lib/forum/errors';
+import { loadThread, type ThreadView } from '@/lib/questions/thread';
+import { ForumError } from '@/lib/questions/errors';
 import { idParam } from '@/lib/http/guard';
 import { SiteSheetCard } from '@/components/questions/SiteSheetCard';
 import { Thread } from '@/components/questions/Thread';
@@ -14,7 +14,7 @@ type Params = Promise<{ id: string }>;
 
 /**
  * The page is the same for every reader, so Next keeps it (ISR): rendered on the first
- * visit, marked stale by every write to the thread (lib/forum/after-write.ts), and
+ * visit, marked stale by every write to the thread (lib/questions/after-write.ts), and
  * re-rendered at least once a minute. It reads no cookie; the reader's units and
  * session are applied in the browser.
  */

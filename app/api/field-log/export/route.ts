@@ -1,7 +1,7 @@
 import { type NextRequest } from 'next/server';
 import { apiError, queryObject, serverError, validationError } from '@/lib/http/errors';
 import { currentUser, type SessionUser } from '@/lib/auth/session';
-import { ForumError } from '@/lib/forum/errors';
+import { ForumError } from '@/lib/questions/errors';
 import { fieldLogFilterSchema } from '@/lib/validation/field-log';
 import { EXPORT_CHUNK, entryViewsByIds, filteredIdsInOrder } from '@/lib/field-log/store';
 import { exportCsvHeader, exportCsvRows } from '@/lib/field-log/csv';

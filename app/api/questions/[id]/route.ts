@@ -3,9 +3,9 @@ import { apiError, serverError } from '@/lib/http/errors';
 import { readJson } from '@/lib/http/body';
 import { guarded, idParam } from '@/lib/http/guard';
 import { currentUser } from '@/lib/auth/session';
-import { loadThread } from '@/lib/forum/thread';
-import { editQuestion } from '@/lib/forum/posts';
-import { ForumError } from '@/lib/forum/errors';
+import { loadThread } from '@/lib/questions/thread';
+import { editQuestion } from '@/lib/questions/posts';
+import { ForumError } from '@/lib/questions/errors';
 import { editQuestionSchema } from '@/lib/validation/question';
 
 export const dynamic = 'force-dynamic';

@@ -3,7 +3,7 @@ import { z } from 'zod';
 import { apiError } from '@/lib/http/errors';
 import { readJson } from '@/lib/http/body';
 import { guarded, idParam } from '@/lib/http/guard';
-import { chooseFixed } from '@/lib/forum/posts';
+import { chooseFixed } from '@/lib/questions/posts';
 
 export const dynamic = 'force-dynamic';
 const schema = z.object({ answerId: z.number({ error: 'answerId must be a number or null' }).int().positive().nullable() });

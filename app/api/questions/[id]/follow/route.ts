@@ -1,7 +1,7 @@
 import { NextResponse } from 'next/server';
 import { apiError } from '@/lib/http/errors';
 import { guarded, idParam } from '@/lib/http/guard';
-import { setFollow } from '@/lib/forum/posts';
+import { setFollow } from '@/lib/questions/posts';
 
 export const dynamic = 'force-dynamic';
 type Ctx = { params: Promise<{ id: string }> };

@@ -2,7 +2,7 @@ import { NextResponse } from 'next/server';
 import { apiError } from '@/lib/http/errors';
 import { readJson } from '@/lib/http/body';
 import { guarded, idParam } from '@/lib/http/guard';
-import { postReply } from '@/lib/forum/posts';
+import { postReply } from '@/lib/questions/posts';
 import { replySchema } from '@/lib/validation/question';
 
 export const dynamic = 'force-dynamic';

@@ -4,8 +4,8 @@ import { POST_TYPES } from '@/lib/vocabulary';
 import { apiError, queryObject, serverError, validationError } from '@/lib/http/errors';
 import { idParam } from '@/lib/http/guard';
 import { currentUser } from '@/lib/auth/session';
-import { listRevisions } from '@/lib/forum/thread';
-import { ForumError } from '@/lib/forum/errors';
+import { listRevisions } from '@/lib/questions/thread';
+import { ForumError } from '@/lib/questions/errors';
 
 export const dynamic = 'force-dynamic';
 const schema = z.object({
