@@ -17,18 +17,36 @@ const noModels = {
   message: 'lib/validation is shared with the browser: take the words from lib/vocabulary.ts, not from a model.',
 };
 const engineOnly = [
-  { regex: '^@/', message: 'The engine (lib/hydraulics) is self-contained: no @/ imports (the shared words are in ../vocabulary).' },
-  { regex: '^\\.\\./(?!vocabulary$)', message: 'The engine (lib/hydraulics) imports nothing outside itself but ../vocabulary.' },
-  { regex: '^(react|react-dom|next|next-auth|sequelize|swr)(/|$)', message: 'The engine (lib/hydraulics) imports no framework, React or database code.' },
+  {
+    regex: '^@/',
+    message: 'The engine (lib/hydraulics) is self-contained: no @/ imports (the shared words are in ../vocabulary).',
+  },
+  {
+    regex: '^\\.\\./(?!vocabulary$)',
+    message: 'The engine (lib/hydraulics) imports nothing outside itself but ../vocabulary.',
+  },
+  {
+    regex: '^(react|react-dom|next|next-auth|sequelize|swr)(/|$)',
+    message: 'The engine (lib/hydraulics) imports no framework, React or database code.',
+  },
 ];
 
 const config = [
   ...nextCoreWebVitals,
   ...nextTypescript,
   { ignores: ['.next/**', 'node_modules/**', '.data/**', 'test-results/**', 'playwright-report/**', 'next-env.d.ts'] },
-  { files: ['lib/**/*.{ts,tsx}', 'models/**/*.{ts,tsx}'], rules: { 'no-restricted-imports': ['error', { patterns: [noAppOrComponents] }] } },
-  { files: ['lib/validation/**/*.{ts,tsx}'], rules: { 'no-restricted-imports': ['error', { patterns: [noAppOrComponents, noModels] }] } },
-  { files: ['lib/hydraulics/**/*.{ts,tsx}'], rules: { 'no-restricted-imports': ['error', { patterns: [noAppOrComponents, ...engineOnly] }] } },
+  {
+    files: ['lib/**/*.{ts,tsx}', 'models/**/*.{ts,tsx}'],
+    rules: { 'no-restricted-imports': ['error', { patterns: [noAppOrComponents] }] },
+  },
+  {
+    files: ['lib/validation/**/*.{ts,tsx}'],
+    rules: { 'no-restricted-imports': ['error', { patterns: [noAppOrComponents, noModels] }] },
+  },
+  {
+    files: ['lib/hydraulics/**/*.{ts,tsx}'],
+    rules: { 'no-restricted-imports': ['error', { patterns: [noAppOrComponents, ...engineOnly] }] },
+  },
 ];
 
 export default config;

@@ -6,7 +6,10 @@
  */
 export async function register() {
   if (process.env.NEXT_RUNTIME !== 'nodejs') return;
-  const [{ revalidatePath }, { onPageStale }] = await Promise.all([import('next/cache'), import('@/lib/questions/after-write')]);
+  const [{ revalidatePath }, { onPageStale }] = await Promise.all([
+    import('next/cache'),
+    import('@/lib/questions/after-write'),
+  ]);
   onPageStale((path) => revalidatePath(path));
   if (process.env.MAIL_WORKER !== 'off') {
     const { startMailScheduler } = await import('@/lib/mail/scheduler');
@@ -14,5 +17,7 @@ export async function register() {
   }
   if (process.env.SEARCH_WARM_ON_START === 'off') return;
   const { ensureIndex } = await import('@/lib/search');
-  ensureIndex().catch((err) => console.error(`search: the index will be built on the first search (${err instanceof Error ? err.message : err})`));
+  ensureIndex().catch((err) =>
+    console.error(`search: the index will be built on the first search (${err instanceof Error ? err.message : err})`),
+  );
 }

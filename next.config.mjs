@@ -18,7 +18,15 @@ const nextConfig = {
   poweredByHeader: false,
   // Sequelize loads its dialect at run time; keep it and the driver out of the bundle.
   // The e-mail renderer uses react-dom/server, which the server-component bundle refuses.
-  serverExternalPackages: ['sequelize', 'mariadb', '@react-email/render', '@react-email/components', 'nodemailer', 'node-cron', '@aws-sdk/client-s3'],
+  serverExternalPackages: [
+    'sequelize',
+    'mariadb',
+    '@react-email/render',
+    '@react-email/components',
+    'nodemailer',
+    'node-cron',
+    '@aws-sdk/client-s3',
+  ],
   typedRoutes: false,
   async headers() {
     return [

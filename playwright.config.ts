@@ -23,7 +23,14 @@ export const CHROMIUM_ARGS = [
  * across instances.
  */
 export function serverEnv(at: string): Record<string, string> {
-  return { ...(process.env as Record<string, string>), SMTP_HOST: '127.0.0.1', SMTP_PORT: String(E2E_SMTP_PORT), NEXTAUTH_URL: at, SITE_URL: at, RATE_LIMIT_STORE: 'mariadb' };
+  return {
+    ...(process.env as Record<string, string>),
+    SMTP_HOST: '127.0.0.1',
+    SMTP_PORT: String(E2E_SMTP_PORT),
+    NEXTAUTH_URL: at,
+    SITE_URL: at,
+    RATE_LIMIT_STORE: 'mariadb',
+  };
 }
 
 export default defineConfig({
@@ -38,9 +45,7 @@ export default defineConfig({
     launchOptions: { executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium', args: CHROMIUM_ARGS },
     trace: 'off',
   },
-  projects: [
-    { name: 'desktop', use: { viewport: { width: 1280, height: 900 } } },
-  ],
+  projects: [{ name: 'desktop', use: { viewport: { width: 1280, height: 900 } } }],
   // scripts/test.sh builds the app first; this only serves the build.
   webServer: process.env.E2E_BASE_URL
     ? undefined

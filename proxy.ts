@@ -34,7 +34,8 @@ export const config = {
     {
       // pages only: the API answers JSON (its headers come from next.config.mjs), and
       // matching it would make Next buffer every request body for the proxy
-      source: '/((?!api/|_next/static|_next/image|favicon\\.ico|icon|apple-icon|robots\\.txt|sitemap\\.xml|manifest\\.webmanifest).*)',
+      source:
+        '/((?!api/|_next/static|_next/image|favicon\\.ico|icon|apple-icon|robots\\.txt|sitemap\\.xml|manifest\\.webmanifest).*)',
       missing: [
         { type: 'header', key: 'next-router-prefetch' },
         { type: 'header', key: 'purpose', value: 'prefetch' },

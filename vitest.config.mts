@@ -13,7 +13,14 @@ export default defineConfig({
     include: ['tests/{unit,hydraulics,integration,reliability}/**/*.test.{ts,tsx}'],
     environment: 'node',
     // Never the development database: settings default to the test server (scripts/env.sh).
-    env: { CLACKWATER_ENV: 'test', MAIL_WORKER: 'off', SMTP_PORT: process.env.VITEST_SMTP_PORT ?? '2525', NEXTAUTH_SECRET: 'vitest-only-secret-not-for-use-anywhere-else', SITE_URL: 'http://127.0.0.1:3100', NEXTAUTH_URL: 'http://127.0.0.1:3100' },
+    env: {
+      CLACKWATER_ENV: 'test',
+      MAIL_WORKER: 'off',
+      SMTP_PORT: process.env.VITEST_SMTP_PORT ?? '2525',
+      NEXTAUTH_SECRET: 'vitest-only-secret-not-for-use-anywhere-else',
+      SITE_URL: 'http://127.0.0.1:3100',
+      NEXTAUTH_URL: 'http://127.0.0.1:3100',
+    },
     // integration tests share one MariaDB database: run files one at a time
     fileParallelism: false,
     testTimeout: 30_000,

@@ -22,7 +22,12 @@ export default function ErrorPage({ error, retry }: { error: Error & { digest?: 
     };
   }, [error]);
 
-  if (database === 'checking') return <p className="cw-muted" aria-busy="true">Loading…</p>;
+  if (database === 'checking')
+    return (
+      <p className="cw-muted" aria-busy="true">
+        Loading…
+      </p>
+    );
   return (
     <div className="mx-auto flex max-w-prose flex-col gap-4">
       {database === 'down' ? (

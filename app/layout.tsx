@@ -32,17 +32,20 @@ export default function RootLayout({ children }: { children: ReactNode }) {
   return (
     <html lang="en">
       <body>
-        <a href="#main" className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:z-50 focus:rounded focus:bg-limestone-50 focus:px-3 focus:py-2">
+        <a
+          href="#main"
+          className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:z-50 focus:rounded focus:bg-limestone-50 focus:px-3 focus:py-2"
+        >
           Skip to content
         </a>
         <Providers>
-        <UnitsProvider>
-          <SiteHeader />
-          <main id="main" className="mx-auto w-full max-w-5xl flex-1 px-4 py-6">
-            {children}
-          </main>
-          <SiteFooter />
-        </UnitsProvider>
+          <UnitsProvider>
+            <SiteHeader />
+            <main id="main" className="mx-auto w-full max-w-5xl flex-1 px-4 py-6">
+              {children}
+            </main>
+            <SiteFooter />
+          </UnitsProvider>
         </Providers>
       </body>
     </html>

@@ -9,9 +9,21 @@ export const dynamic = 'force-dynamic';
 
 const PATHS = [
   { href: '/guides', title: 'Read a guide', text: 'From “is there enough fall here?” to a tuned, beating pump.' },
-  { href: '/calculators', title: 'Run the numbers', text: 'Yield, drive pipe, delivery line, source flow, demand and the stall check.' },
-  { href: '/questions', title: 'Ask the builders', text: 'Bring your site’s measurements; get answers with the working shown.' },
-  { href: '/field-log', title: 'Read the field log', text: 'Measured installations: what real pumps delivered on real falls.' },
+  {
+    href: '/calculators',
+    title: 'Run the numbers',
+    text: 'Yield, drive pipe, delivery line, source flow, demand and the stall check.',
+  },
+  {
+    href: '/questions',
+    title: 'Ask the builders',
+    text: 'Bring your site’s measurements; get answers with the working shown.',
+  },
+  {
+    href: '/field-log',
+    title: 'Read the field log',
+    text: 'Measured installations: what real pumps delivered on real falls.',
+  },
 ];
 
 export default async function HomePage() {
@@ -29,8 +41,8 @@ export default async function HomePage() {
         <h1 className="font-serif text-3xl font-semibold leading-tight sm:text-4xl">Lift water with falling water.</h1>
         <p className="cw-prose mt-3">
           A hydraulic ram uses a few feet of fall in a rigid drive pipe to push part of a stream much higher — no fuel,
-          no electricity, just the clack of the waste valve. Clackwater is where homesteaders, graziers, cabin owners and
-          the builders who help them work out whether a ram will do, build it, tune it and keep it beating.
+          no electricity, just the clack of the waste valve. Clackwater is where homesteaders, graziers, cabin owners
+          and the builders who help them work out whether a ram will do, build it, tune it and keep it beating.
         </p>
       </section>
       <section className="grid gap-3 sm:grid-cols-2">
@@ -42,8 +54,8 @@ export default async function HomePage() {
         ))}
       </section>
       <Caution title="Before you work at the water">
-        Streams rise fast and banks are slippery: never work alone in high water. Ram-pumped surface water is untreated —
-        test and treat it before anyone drinks it. See the{' '}
+        Streams rise fast and banks are slippery: never work alone in high water. Ram-pumped surface water is untreated
+        — test and treat it before anyone drinks it. See the{' '}
         <Link href="/safety" className="cw-link">
           safety notice
         </Link>

@@ -23,7 +23,9 @@ async function main() {
   for (const m of html.matchAll(/<script([^>]+)src="([^"]+)"([^>]*)>/g)) {
     if (!/nomodule/i.test(m[1] + m[3])) named.add(new URL(m[2], url).toString());
   }
-  for (const m of html.matchAll(/<link[^>]+rel="preload"[^>]+as="script"[^>]*href="([^"]+)"|<link[^>]+href="([^"]+\.js)"[^>]+rel="preload"/g)) {
+  for (const m of html.matchAll(
+    /<link[^>]+rel="preload"[^>]+as="script"[^>]*href="([^"]+)"|<link[^>]+href="([^"]+\.js)"[^>]+rel="preload"/g,
+  )) {
     named.add(new URL(m[1] ?? m[2], url).toString());
   }
   const firstSizes = await Promise.all([...named].map(async (u) => [u, await gz(u)] as const));
@@ -38,7 +40,10 @@ async function main() {
   await page.goto(url, { waitUntil: 'networkidle' });
   const calculators = await page.locator('[data-calculator]').count();
   const afterIdle = [...seen].filter((u) => !named.has(u));
-  await page.locator('details:has(> summary:text("Show the working"))').first().evaluate((d: HTMLDetailsElement) => (d.open = true));
+  await page
+    .locator('details:has(> summary:text("Show the working"))')
+    .first()
+    .evaluate((d: HTMLDetailsElement) => (d.open = true));
   await page.waitForLoadState('networkidle');
   await page.waitForTimeout(500);
   const onWorking = [...seen].filter((u) => !named.has(u) && !afterIdle.includes(u));
@@ -49,8 +54,11 @@ async function main() {
   console.log(`${url} (${calculators} calculators)`);
   console.log(`first-load JS (scripts the HTML names): ${kb(first)} kB gzipped in ${named.size} files`);
   console.log(`loaded after hydration (charts): ${kb(await sum(afterIdle))} kB gzipped in ${afterIdle.length} files`);
-  console.log(`loaded on "show the working" (KaTeX): ${kb(await sum(onWorking))} kB gzipped in ${onWorking.length} files`);
-  if (process.argv.includes('--files')) for (const [u, n] of firstSizes.sort((a, b) => b[1] - a[1])) console.log(`  ${kb(n)} kB  ${new URL(u).pathname}`);
+  console.log(
+    `loaded on "show the working" (KaTeX): ${kb(await sum(onWorking))} kB gzipped in ${onWorking.length} files`,
+  );
+  if (process.argv.includes('--files'))
+    for (const [u, n] of firstSizes.sort((a, b) => b[1] - a[1])) console.log(`  ${kb(n)} kB  ${new URL(u).pathname}`);
 }
 
 main().catch((e) => {

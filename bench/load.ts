@@ -32,15 +32,27 @@ async function main() {
   const rows: { name: string; rps: number; p50: number; p99: number; errors: number; non2xx: number }[] = [];
   for (const t of targets) {
     const r = await run({ url: base + t.path, connections: 20, duration: SECONDS });
-    rows.push({ name: t.name, rps: r.requests.average, p50: r.latency.p50, p99: r.latency.p99, errors: r.errors + r.timeouts, non2xx: r.non2xx });
+    rows.push({
+      name: t.name,
+      rps: r.requests.average,
+      p50: r.latency.p50,
+      p99: r.latency.p99,
+      errors: r.errors + r.timeouts,
+      non2xx: r.non2xx,
+    });
   }
   const baseline = rows[0].rps;
   console.log(`\n20 connections, ${SECONDS} s each, ${base}`);
   console.log('| target | req/s | × static | p50 ms | p99 ms | errors | non-2xx |');
   console.log('|---|---|---|---|---|---|---|');
-  for (const r of rows) console.log(`| ${r.name} | ${r.rps.toFixed(0)} | ${(r.rps / baseline).toFixed(2)} | ${r.p50} | ${r.p99} | ${r.errors} | ${r.non2xx} |`);
+  for (const r of rows)
+    console.log(
+      `| ${r.name} | ${r.rps.toFixed(0)} | ${(r.rps / baseline).toFixed(2)} | ${r.p50} | ${r.p99} | ${r.errors} | ${r.non2xx} |`,
+    );
   const threadRow = rows[1];
-  console.log(`thread page: ${((threadRow.rps / baseline) * 100).toFixed(0)}% of the static file's rate (target ≥ 20%), p99 ${threadRow.p99} ms (target < 100 ms)`);
+  console.log(
+    `thread page: ${((threadRow.rps / baseline) * 100).toFixed(0)}% of the static file's rate (target ≥ 20%), p99 ${threadRow.p99} ms (target < 100 ms)`,
+  );
 
   const soak = await run({
     url: base,
@@ -48,7 +60,9 @@ async function main() {
     duration: SOAK_SECONDS,
     requests: targets.slice(1).map((t) => ({ method: 'GET', path: t.path })),
   });
-  console.log(`\n100 connections for ${SOAK_SECONDS} s over the four pages in turn: ${soak.requests.total} requests, ${soak.requests.average.toFixed(0)} req/s, p50 ${soak.latency.p50} ms, p99 ${soak.latency.p99} ms, errors ${soak.errors}, timeouts ${soak.timeouts}, non-2xx ${soak.non2xx} (target: 0, 0, 0)`);
+  console.log(
+    `\n100 connections for ${SOAK_SECONDS} s over the four pages in turn: ${soak.requests.total} requests, ${soak.requests.average.toFixed(0)} req/s, p50 ${soak.latency.p50} ms, p99 ${soak.latency.p99} ms, errors ${soak.errors}, timeouts ${soak.timeouts}, non-2xx ${soak.non2xx} (target: 0, 0, 0)`,
+  );
   if (soak.errors || soak.timeouts || soak.non2xx) process.exitCode = 1;
 }
 

@@ -13,7 +13,11 @@ import { benchQueries, generatePosts, type BenchPost } from './generate';
 const QUERIES = 1000;
 
 function toDoc(p: BenchPost): SearchDoc {
-  const sheet = p.siteSheet ? Object.entries(p.siteSheet).map(([k, v]) => `${k} ${v}`).join('; ') : '';
+  const sheet = p.siteSheet
+    ? Object.entries(p.siteSheet)
+        .map(([k, v]) => `${k} ${v}`)
+        .join('; ')
+    : '';
   return {
     id: `${p.kind}-${p.id}`,
     kind: p.kind,
@@ -39,7 +43,9 @@ const ms = (n: number) => `${n.toFixed(2)} ms`;
 const gc = () => (globalThis as { gc?: () => void }).gc?.();
 
 function report(label: string, times: number[]) {
-  console.log(`${label}: p50 ${ms(pct(times, 50))}, p95 ${ms(pct(times, 95))}, p99 ${ms(pct(times, 99))} over ${times.length} queries`);
+  console.log(
+    `${label}: p50 ${ms(pct(times, 50))}, p95 ${ms(pct(times, 95))}, p99 ${ms(pct(times, 99))} over ${times.length} queries`,
+  );
 }
 
 async function inProcess(count: number) {
@@ -60,8 +66,12 @@ async function inProcess(count: number) {
   const buildMs = performance.now() - t0;
   gc();
   const after = process.memoryUsage();
-  console.log(`index: ${await engine.count()} documents (${count} posts and the guides) built in ${(buildMs / 1000).toFixed(1)} s`);
-  console.log(`memory: resident ${mb(after.rss)} (+${mb(after.rss - before.rss)} for the index), heap used +${mb(after.heapUsed - before.heapUsed)}${(globalThis as { gc?: unknown }).gc ? '' : ' (run with --expose-gc for steadier figures)'}`);
+  console.log(
+    `index: ${await engine.count()} documents (${count} posts and the guides) built in ${(buildMs / 1000).toFixed(1)} s`,
+  );
+  console.log(
+    `memory: resident ${mb(after.rss)} (+${mb(after.rss - before.rss)} for the index), heap used +${mb(after.heapUsed - before.heapUsed)}${(globalThis as { gc?: unknown }).gc ? '' : ' (run with --expose-gc for steadier figures)'}`,
+  );
   setSearchEngine(engine, { filled: true });
   const queries = benchQueries(QUERIES);
   for (const q of queries.slice(0, 50)) await search({ q: q.q, limit: 10, offset: 0 }, { seeHidden: false }); // warm-up
@@ -69,7 +79,17 @@ async function inProcess(count: number) {
   let hits = 0;
   for (const q of queries) {
     const t = performance.now();
-    const r = await search({ q: q.q, kinds: q.kind ? [q.kind as 'question'] : undefined, tag: q.tag, solved: q.solved, limit: 10, offset: 0 }, { seeHidden: false });
+    const r = await search(
+      {
+        q: q.q,
+        kinds: q.kind ? [q.kind as 'question'] : undefined,
+        tag: q.tag,
+        solved: q.solved,
+        limit: 10,
+        offset: 0,
+      },
+      { seeHidden: false },
+    );
     times.push(performance.now() - t);
     if (r.items.length) hits++;
   }
@@ -89,7 +109,9 @@ async function throughApi(base: string) {
   const t0 = performance.now();
   const first = await fetch(url(queries[0])); // the server builds its index on start; this waits for it
   if (!first.ok) throw new Error(`GET /api/search answered ${first.status}: ${await first.text()}`);
-  console.log(`first search (waits for the server's index build from the database): ${((performance.now() - t0) / 1000).toFixed(1)} s`);
+  console.log(
+    `first search (waits for the server's index build from the database): ${((performance.now() - t0) / 1000).toFixed(1)} s`,
+  );
   for (const q of queries.slice(0, 50)) await (await fetch(url(q))).arrayBuffer();
   const times: number[] = [];
   let errors = 0;

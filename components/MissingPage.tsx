@@ -1,7 +1,15 @@
 import Link from 'next/link';
 
 /** A segment's own not-found page: what is missing and where to look instead. */
-export function MissingPage({ title, text, links }: { title: string; text: string; links: { href: string; label: string }[] }) {
+export function MissingPage({
+  title,
+  text,
+  links,
+}: {
+  title: string;
+  text: string;
+  links: { href: string; label: string }[];
+}) {
   return (
     <div className="cw-card mx-auto max-w-prose">
       <h1 className="font-serif text-2xl font-semibold">{title}</h1>

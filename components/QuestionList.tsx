@@ -28,7 +28,11 @@ export function QuestionList({ items }: { items: QuestionSummary[] }) {
           <p className="cw-muted mt-1 font-serif text-sm">{q.excerpt}</p>
           <div className="mt-2 flex flex-wrap items-center gap-2 text-xs">
             {q.tags.map((t) => (
-              <Link key={t.slug} href={`/tags/${t.slug}`} className="rounded-full border border-creek-300 px-2 py-0.5 no-underline dark:border-creek-500">
+              <Link
+                key={t.slug}
+                href={`/tags/${t.slug}`}
+                className="rounded-full border border-creek-300 px-2 py-0.5 no-underline dark:border-creek-500"
+              >
                 {t.name}
               </Link>
             ))}

@@ -22,7 +22,10 @@ export function SiteHeader() {
           <ul className="flex gap-4 overflow-x-auto text-sm font-medium sm:gap-5">
             {NAV.map((item) => (
               <li key={item.href}>
-                <Link href={item.href} className="whitespace-nowrap py-1 no-underline hover:text-clay-200 hover:underline">
+                <Link
+                  href={item.href}
+                  className="whitespace-nowrap py-1 no-underline hover:text-clay-200 hover:underline"
+                >
                   {item.label}
                 </Link>
               </li>
@@ -30,20 +33,20 @@ export function SiteHeader() {
           </ul>
         </nav>
         <div className="ml-auto flex min-w-0 flex-1 items-center justify-end gap-3 sm:flex-none">
-        <UnitSwitch />
-        <AccountMenu />
-        <form action="/search" method="get" role="search" className="flex min-w-0 flex-1 justify-end sm:flex-none">
-          <label htmlFor="site-search" className="sr-only">
-            Search Clackwater
-          </label>
-          <input
-            id="site-search"
-            name="q"
-            type="search"
-            placeholder="Search guides, threads, field logs"
-            className="w-full min-w-0 rounded-md border border-creek-400 bg-creek-800 px-3 py-1.5 text-sm text-limestone-50 placeholder:text-creek-200 sm:w-72"
-          />
-        </form>
+          <UnitSwitch />
+          <AccountMenu />
+          <form action="/search" method="get" role="search" className="flex min-w-0 flex-1 justify-end sm:flex-none">
+            <label htmlFor="site-search" className="sr-only">
+              Search Clackwater
+            </label>
+            <input
+              id="site-search"
+              name="q"
+              type="search"
+              placeholder="Search guides, threads, field logs"
+              className="w-full min-w-0 rounded-md border border-creek-400 bg-creek-800 px-3 py-1.5 text-sm text-limestone-50 placeholder:text-creek-200 sm:w-72"
+            />
+          </form>
         </div>
       </div>
     </header>

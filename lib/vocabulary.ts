@@ -19,7 +19,17 @@ export const FLAG_REASONS = ['spam', 'unsafe', 'rude', 'off-topic', 'other'] as 
 export type FlagReason = (typeof FLAG_REASONS)[number];
 
 /** The review queue's actions (the audit log also records the automatic hide). */
-export const MODERATION_ACTIONS = ['dismiss', 'hide', 'restore', 'delete', 'lock', 'unlock', 'retag', 'warn', 'suspend'] as const;
+export const MODERATION_ACTIONS = [
+  'dismiss',
+  'hide',
+  'restore',
+  'delete',
+  'lock',
+  'unlock',
+  'retag',
+  'warn',
+  'suspend',
+] as const;
 export type ModerationAction = (typeof MODERATION_ACTIONS)[number];
 
 /** Actions that only make sense on a question (the thread as a whole). */

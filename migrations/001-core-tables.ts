@@ -16,7 +16,11 @@ export async function up({ context: qi }: { context: QueryInterface }) {
       handle: { type: DataTypes.STRING(40), allowNull: false, unique: true },
       display_name: { type: DataTypes.STRING(80), allowNull: false },
       email: { type: DataTypes.STRING(254), allowNull: false, unique: true },
-      role: { type: DataTypes.ENUM('member', 'expert', 'moderator', 'admin'), allowNull: false, defaultValue: 'member' },
+      role: {
+        type: DataTypes.ENUM('member', 'expert', 'moderator', 'admin'),
+        allowNull: false,
+        defaultValue: 'member',
+      },
       region: { type: DataTypes.STRING(80), allowNull: true },
       bio: { type: DataTypes.TEXT, allowNull: true },
       ...stamps,

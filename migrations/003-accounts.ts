@@ -75,6 +75,8 @@ export async function down({ context: qi }: { context: QueryInterface }) {
   const present = Object.keys(await qi.describeTable('users'));
   const drop = ['units', 'email_verified_at', 'password_hash'].filter((c) => present.includes(c));
   if (drop.length) {
-    await qi.sequelize.query(`ALTER TABLE users ${drop.map((c) => `DROP COLUMN ${c}`).join(', ')}`, { type: QueryTypes.UPDATE });
+    await qi.sequelize.query(`ALTER TABLE users ${drop.map((c) => `DROP COLUMN ${c}`).join(', ')}`, {
+      type: QueryTypes.UPDATE,
+    });
   }
 }

@@ -7,7 +7,12 @@ import { DataTypes, type QueryInterface } from 'sequelize';
  */
 export async function up({ context: qi }: { context: QueryInterface }) {
   const opts = { charset: 'utf8mb4', collate: 'utf8mb4_unicode_ci' };
-  const userId = { type: DataTypes.INTEGER.UNSIGNED, allowNull: true, references: { model: 'users', key: 'id' }, onDelete: 'CASCADE' };
+  const userId = {
+    type: DataTypes.INTEGER.UNSIGNED,
+    allowNull: true,
+    references: { model: 'users', key: 'id' },
+    onDelete: 'CASCADE',
+  };
   await qi.createTable(
     'verification_tokens',
     {

@@ -16,13 +16,21 @@ export async function up({ context: qi }: { context: QueryInterface }) {
   const POST = DataTypes.ENUM('question', 'answer', 'reply');
 
   await qi.addColumn('questions', 'site_sheet', { type: DataTypes.JSON, allowNull: true });
-  await qi.addColumn('questions', 'helpful_count', { type: DataTypes.INTEGER.UNSIGNED, allowNull: false, defaultValue: 0 });
+  await qi.addColumn('questions', 'helpful_count', {
+    type: DataTypes.INTEGER.UNSIGNED,
+    allowNull: false,
+    defaultValue: 0,
+  });
   await qi.addColumn('questions', 'guide_slug', { type: DataTypes.STRING(80), allowNull: true });
   await qi.addColumn('questions', 'last_activity_at', { type: DataTypes.DATE, allowNull: true });
   await qi.addIndex('questions', ['answer_count', 'created_at'], { name: 'questions_unanswered' });
   await qi.addIndex('questions', ['author_id', 'created_at'], { name: 'questions_author' });
 
-  await qi.addColumn('answers', 'helpful_count', { type: DataTypes.INTEGER.UNSIGNED, allowNull: false, defaultValue: 0 });
+  await qi.addColumn('answers', 'helpful_count', {
+    type: DataTypes.INTEGER.UNSIGNED,
+    allowNull: false,
+    defaultValue: 0,
+  });
   await qi.addColumn('answers', 'calculation_id', { ...ref('worked_calculations', true, 'SET NULL') });
 
   await qi.createTable(
@@ -115,10 +123,14 @@ export async function down({ context: qi }: { context: QueryInterface }) {
         `SELECT CONSTRAINT_NAME AS name FROM information_schema.KEY_COLUMN_USAGE WHERE TABLE_SCHEMA = DATABASE() AND TABLE_NAME = '${table}' AND COLUMN_NAME = '${fk}' AND REFERENCED_TABLE_NAME IS NOT NULL`,
         { type: QueryTypes.SELECT },
       );
-      for (const r of rows) await qi.sequelize.query(`ALTER TABLE ${table} DROP FOREIGN KEY \`${r.name}\``, { type: QueryTypes.UPDATE });
+      for (const r of rows)
+        await qi.sequelize.query(`ALTER TABLE ${table} DROP FOREIGN KEY \`${r.name}\``, { type: QueryTypes.UPDATE });
     }
     const gone = cols.filter((c) => present.includes(c));
-    if (gone.length) await qi.sequelize.query(`ALTER TABLE ${table} ${gone.map((c) => `DROP COLUMN ${c}`).join(', ')}`, { type: QueryTypes.UPDATE });
+    if (gone.length)
+      await qi.sequelize.query(`ALTER TABLE ${table} ${gone.map((c) => `DROP COLUMN ${c}`).join(', ')}`, {
+        type: QueryTypes.UPDATE,
+      });
   };
   await qi.removeIndex('questions', 'questions_unanswered').catch(() => undefined);
   await qi.removeIndex('questions', 'questions_author').catch(() => undefined);

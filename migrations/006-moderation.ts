@@ -6,7 +6,12 @@ import { DataTypes, QueryTypes, type QueryInterface } from 'sequelize';
  */
 export async function up({ context: qi }: { context: QueryInterface }) {
   const opts = { charset: 'utf8mb4', collate: 'utf8mb4_unicode_ci' };
-  const ref = (model: string, allowNull = false) => ({ type: DataTypes.INTEGER.UNSIGNED, allowNull, references: { model, key: 'id' }, onDelete: allowNull ? 'SET NULL' : 'RESTRICT' });
+  const ref = (model: string, allowNull = false) => ({
+    type: DataTypes.INTEGER.UNSIGNED,
+    allowNull,
+    references: { model, key: 'id' },
+    onDelete: allowNull ? 'SET NULL' : 'RESTRICT',
+  });
   for (const table of ['questions', 'answers', 'replies', 'photos']) {
     await qi.addColumn(table, 'hidden_at', { type: DataTypes.DATE, allowNull: true });
     await qi.addColumn(table, 'hidden_reason', { type: DataTypes.STRING(300), allowNull: true });
@@ -52,15 +57,23 @@ export async function up({ context: qi }: { context: QueryInterface }) {
   await qi.addIndex('audit_log', ['action', 'created_at'], { name: 'audit_log_action' });
   await qi.addIndex('audit_log', ['actor_id', 'created_at'], { name: 'audit_log_actor' });
   // Entries cannot be edited or removed, whoever asks.
-  for (const [name, when] of [['audit_log_no_update', 'UPDATE'], ['audit_log_no_delete', 'DELETE']]) {
-    await qi.sequelize.query(
-      `CREATE TRIGGER ${name} BEFORE ${when} ON audit_log FOR EACH ROW SIGNAL SQLSTATE '45000' SET MESSAGE_TEXT = 'audit log entries cannot be changed'`,
-      { type: QueryTypes.RAW, raw: true },
-    ).catch(async (err: Error) => {
-      // the RAW-result quirk of the mariadb driver: the trigger exists if this reads it back
-      const rows = await qi.sequelize.query(`SELECT TRIGGER_NAME FROM information_schema.TRIGGERS WHERE TRIGGER_SCHEMA = DATABASE() AND TRIGGER_NAME = '${name}'`, { type: QueryTypes.SELECT });
-      if (rows.length === 0) throw err;
-    });
+  for (const [name, when] of [
+    ['audit_log_no_update', 'UPDATE'],
+    ['audit_log_no_delete', 'DELETE'],
+  ]) {
+    await qi.sequelize
+      .query(
+        `CREATE TRIGGER ${name} BEFORE ${when} ON audit_log FOR EACH ROW SIGNAL SQLSTATE '45000' SET MESSAGE_TEXT = 'audit log entries cannot be changed'`,
+        { type: QueryTypes.RAW, raw: true },
+      )
+      .catch(async (err: Error) => {
+        // the RAW-result quirk of the mariadb driver: the trigger exists if this reads it back
+        const rows = await qi.sequelize.query(
+          `SELECT TRIGGER_NAME FROM information_schema.TRIGGERS WHERE TRIGGER_SCHEMA = DATABASE() AND TRIGGER_NAME = '${name}'`,
+          { type: QueryTypes.SELECT },
+        );
+        if (rows.length === 0) throw err;
+      });
   }
 }
 
@@ -73,7 +86,10 @@ export async function down({ context: qi }: { context: QueryInterface }) {
   const drop = async (table: string, cols: string[]) => {
     const present = Object.keys(await qi.describeTable(table));
     const gone = cols.filter((c) => present.includes(c));
-    if (gone.length) await qi.sequelize.query(`ALTER TABLE ${table} ${gone.map((c) => `DROP COLUMN ${c}`).join(', ')}`, { type: QueryTypes.UPDATE });
+    if (gone.length)
+      await qi.sequelize.query(`ALTER TABLE ${table} ${gone.map((c) => `DROP COLUMN ${c}`).join(', ')}`, {
+        type: QueryTypes.UPDATE,
+      });
   };
   await drop('users', ['suspended_until']);
   await drop('questions', ['locked_at', 'hidden_at', 'hidden_reason', 'deleted_at']);

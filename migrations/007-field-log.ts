@@ -7,7 +7,12 @@ import { DataTypes, QueryTypes, type QueryInterface } from 'sequelize';
  */
 export async function up({ context: qi }: { context: QueryInterface }) {
   const opts = { charset: 'utf8mb4', collate: 'utf8mb4_unicode_ci' };
-  const ref = (model: string, allowNull = false, onDelete = 'RESTRICT') => ({ type: DataTypes.INTEGER.UNSIGNED, allowNull, references: { model, key: 'id' }, onDelete: allowNull ? 'SET NULL' : onDelete });
+  const ref = (model: string, allowNull = false, onDelete = 'RESTRICT') => ({
+    type: DataTypes.INTEGER.UNSIGNED,
+    allowNull,
+    references: { model, key: 'id' },
+    onDelete: allowNull ? 'SET NULL' : onDelete,
+  });
   const si = (allowNull = false) => ({ type: DataTypes.DOUBLE, allowNull });
   await qi.createTable(
     'field_log_entries',
@@ -51,7 +56,12 @@ export async function up({ context: qi }: { context: QueryInterface }) {
     'field_log_trials',
     {
       id: { type: DataTypes.INTEGER.UNSIGNED, autoIncrement: true, primaryKey: true, allowNull: false },
-      entry_id: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false, references: { model: 'field_log_entries', key: 'id' }, onDelete: 'CASCADE' },
+      entry_id: {
+        type: DataTypes.INTEGER.UNSIGNED,
+        allowNull: false,
+        references: { model: 'field_log_entries', key: 'id' },
+        onDelete: 'CASCADE',
+      },
       position: { type: DataTypes.TINYINT.UNSIGNED, allowNull: false },
       volume_l: si(),
       seconds: si(),
@@ -63,8 +73,18 @@ export async function up({ context: qi }: { context: QueryInterface }) {
     'field_log_links',
     {
       id: { type: DataTypes.INTEGER.UNSIGNED, autoIncrement: true, primaryKey: true, allowNull: false },
-      before_id: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false, references: { model: 'field_log_entries', key: 'id' }, onDelete: 'CASCADE' },
-      after_id: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false, references: { model: 'field_log_entries', key: 'id' }, onDelete: 'CASCADE' },
+      before_id: {
+        type: DataTypes.INTEGER.UNSIGNED,
+        allowNull: false,
+        references: { model: 'field_log_entries', key: 'id' },
+        onDelete: 'CASCADE',
+      },
+      after_id: {
+        type: DataTypes.INTEGER.UNSIGNED,
+        allowNull: false,
+        references: { model: 'field_log_entries', key: 'id' },
+        onDelete: 'CASCADE',
+      },
       what_changed: { type: DataTypes.STRING(300), allowNull: false },
       created_by: ref('users'),
       created_at: { type: DataTypes.DATE, allowNull: false },
@@ -85,7 +105,10 @@ export async function down({ context: qi }: { context: QueryInterface }) {
         { type: QueryTypes.SELECT },
       );
       // plain ALTERs with an UPDATE type: a RAW result trips over the mariadb driver's frozen metadata
-      const drops = [...fks.map((fk) => `DROP FOREIGN KEY \`${fk.CONSTRAINT_NAME}\``), 'DROP COLUMN field_log_entry_id'];
+      const drops = [
+        ...fks.map((fk) => `DROP FOREIGN KEY \`${fk.CONSTRAINT_NAME}\``),
+        'DROP COLUMN field_log_entry_id',
+      ];
       await qi.sequelize.query(`ALTER TABLE ${t} ${drops.join(', ')}`, { type: QueryTypes.UPDATE });
     }
   }

@@ -7,7 +7,11 @@ import { DataTypes, QueryTypes, type QueryInterface } from 'sequelize';
 export async function up({ context: qi }: { context: QueryInterface }) {
   const opts = { charset: 'utf8mb4', collate: 'utf8mb4_unicode_ci' };
   const flag = { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: true };
-  await qi.addColumn('users', 'digest_frequency', { type: DataTypes.ENUM('off', 'daily', 'weekly'), allowNull: false, defaultValue: 'off' });
+  await qi.addColumn('users', 'digest_frequency', {
+    type: DataTypes.ENUM('off', 'daily', 'weekly'),
+    allowNull: false,
+    defaultValue: 'off',
+  });
   await qi.addColumn('users', 'notify_answers', flag);
   await qi.addColumn('users', 'notify_replies', flag);
   await qi.addColumn('users', 'notify_fixed', flag);
@@ -18,8 +22,18 @@ export async function up({ context: qi }: { context: QueryInterface }) {
   await qi.createTable(
     'tag_follows',
     {
-      user_id: { type: DataTypes.INTEGER.UNSIGNED, primaryKey: true, references: { model: 'users', key: 'id' }, onDelete: 'CASCADE' },
-      tag_id: { type: DataTypes.INTEGER.UNSIGNED, primaryKey: true, references: { model: 'tags', key: 'id' }, onDelete: 'CASCADE' },
+      user_id: {
+        type: DataTypes.INTEGER.UNSIGNED,
+        primaryKey: true,
+        references: { model: 'users', key: 'id' },
+        onDelete: 'CASCADE',
+      },
+      tag_id: {
+        type: DataTypes.INTEGER.UNSIGNED,
+        primaryKey: true,
+        references: { model: 'tags', key: 'id' },
+        onDelete: 'CASCADE',
+      },
       created_at: { type: DataTypes.DATE, allowNull: false },
     },
     opts,
@@ -32,14 +46,23 @@ export async function up({ context: qi }: { context: QueryInterface }) {
       id: { type: DataTypes.INTEGER.UNSIGNED, autoIncrement: true, primaryKey: true, allowNull: false },
       // one message per recipient per event: "answer:12:to:7", "digest:weekly:2026-W49:to:7"
       dedupe_key: { type: DataTypes.STRING(160), allowNull: false, unique: true },
-      user_id: { type: DataTypes.INTEGER.UNSIGNED, allowNull: true, references: { model: 'users', key: 'id' }, onDelete: 'SET NULL' },
+      user_id: {
+        type: DataTypes.INTEGER.UNSIGNED,
+        allowNull: true,
+        references: { model: 'users', key: 'id' },
+        onDelete: 'SET NULL',
+      },
       to_address: { type: DataTypes.STRING(254), allowNull: false },
       kind: { type: DataTypes.STRING(40), allowNull: false },
       subject: { type: DataTypes.STRING(300), allowNull: false },
       text_body: { type: DataTypes.TEXT('medium'), allowNull: false },
       html_body: { type: DataTypes.TEXT('medium'), allowNull: true },
       headers: { type: DataTypes.JSON, allowNull: true },
-      status: { type: DataTypes.ENUM('pending', 'sending', 'sent', 'failed'), allowNull: false, defaultValue: 'pending' },
+      status: {
+        type: DataTypes.ENUM('pending', 'sending', 'sent', 'failed'),
+        allowNull: false,
+        defaultValue: 'pending',
+      },
       attempts: { type: DataTypes.TINYINT.UNSIGNED, allowNull: false, defaultValue: 0 },
       next_attempt_at: { type: DataTypes.DATE, allowNull: false },
       // a worker's claim: another worker may take the message over once this has passed
@@ -59,7 +82,18 @@ export async function down({ context: qi }: { context: QueryInterface }) {
   await qi.dropTable('mail_outbox');
   await qi.dropTable('tag_follows');
   const present = Object.keys(await qi.describeTable('users'));
-  const cols = ['digest_frequency', 'notify_answers', 'notify_replies', 'notify_fixed', 'notify_moderation', 'notify_expert'].filter((c) => present.includes(c));
+  const cols = [
+    'digest_frequency',
+    'notify_answers',
+    'notify_replies',
+    'notify_fixed',
+    'notify_moderation',
+    'notify_expert',
+  ].filter((c) => present.includes(c));
   // Plain ALTER TABLE, as in 003: removeColumn trips over the driver's frozen result metadata.
-  if (cols.length) await qi.sequelize.query(`ALTER TABLE users DROP INDEX users_digest, ${cols.map((c) => `DROP COLUMN ${c}`).join(', ')}`, { type: QueryTypes.UPDATE });
+  if (cols.length)
+    await qi.sequelize.query(
+      `ALTER TABLE users DROP INDEX users_digest, ${cols.map((c) => `DROP COLUMN ${c}`).join(', ')}`,
+      { type: QueryTypes.UPDATE },
+    );
 }

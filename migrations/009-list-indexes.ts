@@ -8,8 +8,12 @@ import type { QueryInterface } from 'sequelize';
  */
 export async function up({ context: qi }: { context: QueryInterface }) {
   await qi.addIndex('questions', ['deleted_at', 'hidden_at', 'created_at', 'id'], { name: 'questions_visible_newest' });
-  await qi.addIndex('questions', ['answer_count', 'deleted_at', 'hidden_at', 'created_at'], { name: 'questions_unanswered_visible' });
-  await qi.addIndex('questions', ['author_id', 'deleted_at', 'hidden_at', 'created_at'], { name: 'questions_author_visible' });
+  await qi.addIndex('questions', ['answer_count', 'deleted_at', 'hidden_at', 'created_at'], {
+    name: 'questions_unanswered_visible',
+  });
+  await qi.addIndex('questions', ['author_id', 'deleted_at', 'hidden_at', 'created_at'], {
+    name: 'questions_author_visible',
+  });
   await qi.removeIndex('questions', 'questions_unanswered');
   await qi.removeIndex('questions', 'questions_author');
   // the members list pages by handle: a covering index reads a page in order

@@ -5,7 +5,11 @@ import { DataTypes, QueryTypes, type QueryInterface } from 'sequelize';
  * a suspension or a role change bumps it, and tokens issued before then stop working.
  */
 export async function up({ context: qi }: { context: QueryInterface }) {
-  await qi.addColumn('users', 'session_version', { type: DataTypes.INTEGER.UNSIGNED, allowNull: false, defaultValue: 0 });
+  await qi.addColumn('users', 'session_version', {
+    type: DataTypes.INTEGER.UNSIGNED,
+    allowNull: false,
+    defaultValue: 0,
+  });
 }
 
 export async function down({ context: qi }: { context: QueryInterface }) {

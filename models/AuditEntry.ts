@@ -1,5 +1,13 @@
 import 'server-only';
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type NonAttribute, type Sequelize } from 'sequelize';
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type NonAttribute,
+  type Sequelize,
+} from 'sequelize';
 import type { User } from './User';
 
 /** One moderation action, role change or expert decision: who, when, what and why. Never changed. */
@@ -27,7 +35,12 @@ export class AuditEntry extends Model<InferAttributes<AuditEntry>, InferCreation
         details: { type: DataTypes.JSON, allowNull: true },
         createdAt: DataTypes.DATE,
       },
-      { sequelize, modelName: 'AuditEntry' /* the bundler minifies class names */, tableName: 'audit_log', updatedAt: false },
+      {
+        sequelize,
+        modelName: 'AuditEntry' /* the bundler minifies class names */,
+        tableName: 'audit_log',
+        updatedAt: false,
+      },
     );
   }
 }

@@ -1,5 +1,12 @@
 import 'server-only';
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+} from 'sequelize';
 
 export const TOKEN_PURPOSES = ['verify-email', 'reset-password', 'sign-in-link'] as const;
 export type TokenPurpose = (typeof TOKEN_PURPOSES)[number];
@@ -25,7 +32,12 @@ export class AuthToken extends Model<InferAttributes<AuthToken>, InferCreationAt
         usedAt: { type: DataTypes.DATE, allowNull: true },
         createdAt: DataTypes.DATE,
       },
-      { sequelize, modelName: 'AuthToken' /* the bundler minifies class names */, tableName: 'auth_tokens', updatedAt: false },
+      {
+        sequelize,
+        modelName: 'AuthToken' /* the bundler minifies class names */,
+        tableName: 'auth_tokens',
+        updatedAt: false,
+      },
     );
   }
 }

@@ -14,7 +14,10 @@ export const APPLICATION_STATUSES = ['pending', 'approved', 'declined'] as const
 export type ApplicationStatus = (typeof APPLICATION_STATUSES)[number];
 
 /** A member's request for expert standing, and the moderator's decision on it. */
-export class ExpertApplication extends Model<InferAttributes<ExpertApplication>, InferCreationAttributes<ExpertApplication>> {
+export class ExpertApplication extends Model<
+  InferAttributes<ExpertApplication>,
+  InferCreationAttributes<ExpertApplication>
+> {
   declare id: CreationOptional<number>;
   declare userId: number;
   declare pumpsBuilt: number;
@@ -48,7 +51,11 @@ export class ExpertApplication extends Model<InferAttributes<ExpertApplication>,
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },
-      { sequelize, modelName: 'ExpertApplication' /* the bundler minifies class names */, tableName: 'expert_applications' },
+      {
+        sequelize,
+        modelName: 'ExpertApplication' /* the bundler minifies class names */,
+        tableName: 'expert_applications',
+      },
     );
   }
 }

@@ -1,5 +1,13 @@
 import 'server-only';
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type NonAttribute, type Sequelize } from 'sequelize';
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type NonAttribute,
+  type Sequelize,
+} from 'sequelize';
 import { PUMP_TYPES, type PumpType } from '@/lib/vocabulary';
 import type { User } from './User';
 import type { FieldLogTrial } from './FieldLogTrial';
@@ -75,7 +83,12 @@ export class FieldLogEntry extends Model<InferAttributes<FieldLogEntry>, InferCr
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },
-      { sequelize, modelName: 'FieldLogEntry' /* the bundler minifies class names */, tableName: 'field_log_entries', underscored: true },
+      {
+        sequelize,
+        modelName: 'FieldLogEntry' /* the bundler minifies class names */,
+        tableName: 'field_log_entries',
+        underscored: true,
+      },
     );
   }
 }

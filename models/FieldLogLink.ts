@@ -1,5 +1,12 @@
 import 'server-only';
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+} from 'sequelize';
 
 /** Two entries on one site linked as before and after, with what changed between them. */
 export class FieldLogLink extends Model<InferAttributes<FieldLogLink>, InferCreationAttributes<FieldLogLink>> {

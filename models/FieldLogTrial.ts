@@ -1,5 +1,12 @@
 import 'server-only';
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+} from 'sequelize';
 
 /** One bucket-and-stopwatch trial of a field log entry. */
 export class FieldLogTrial extends Model<InferAttributes<FieldLogTrial>, InferCreationAttributes<FieldLogTrial>> {

@@ -1,8 +1,21 @@
 import 'server-only';
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type NonAttribute, type Sequelize } from 'sequelize';
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type NonAttribute,
+  type Sequelize,
+} from 'sequelize';
 import type { User } from './User';
 
-import { FLAG_REASONS, MODERATED_TYPES as FLAG_POST_TYPES, type FlagReason, type ModeratedType as FlagPostType } from '@/lib/vocabulary';
+import {
+  FLAG_REASONS,
+  MODERATED_TYPES as FLAG_POST_TYPES,
+  type FlagReason,
+  type ModeratedType as FlagPostType,
+} from '@/lib/vocabulary';
 
 export { FLAG_POST_TYPES, FLAG_REASONS, type FlagPostType, type FlagReason };
 

@@ -1,5 +1,12 @@
 import 'server-only';
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+} from 'sequelize';
 import { POST_TYPES, type PostType } from './Revision';
 
 /** One member's "helpful" on one post; the primary key makes it one per member. */
@@ -17,7 +24,12 @@ export class HelpfulMark extends Model<InferAttributes<HelpfulMark>, InferCreati
         userId: { type: DataTypes.INTEGER.UNSIGNED, primaryKey: true },
         createdAt: DataTypes.DATE,
       },
-      { sequelize, modelName: 'HelpfulMark' /* the bundler minifies class names */, tableName: 'helpful_marks', updatedAt: false },
+      {
+        sequelize,
+        modelName: 'HelpfulMark' /* the bundler minifies class names */,
+        tableName: 'helpful_marks',
+        updatedAt: false,
+      },
     );
   }
 }

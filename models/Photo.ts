@@ -1,5 +1,12 @@
 import 'server-only';
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+} from 'sequelize';
 
 /** An uploaded photo: stored outside public/ under `publicId`, metadata stripped. */
 export class Photo extends Model<InferAttributes<Photo>, InferCreationAttributes<Photo>> {

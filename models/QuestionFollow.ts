@@ -1,5 +1,12 @@
 import 'server-only';
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+} from 'sequelize';
 
 export class QuestionFollow extends Model<InferAttributes<QuestionFollow>, InferCreationAttributes<QuestionFollow>> {
   declare questionId: number;
@@ -13,7 +20,12 @@ export class QuestionFollow extends Model<InferAttributes<QuestionFollow>, Infer
         userId: { type: DataTypes.INTEGER.UNSIGNED, primaryKey: true },
         createdAt: DataTypes.DATE,
       },
-      { sequelize, modelName: 'QuestionFollow' /* the bundler minifies class names */, tableName: 'question_follows', updatedAt: false },
+      {
+        sequelize,
+        modelName: 'QuestionFollow' /* the bundler minifies class names */,
+        tableName: 'question_follows',
+        updatedAt: false,
+      },
     );
   }
 }

@@ -11,7 +11,12 @@ export class QuestionTag extends Model<InferAttributes<QuestionTag>, InferCreati
         questionId: { type: DataTypes.INTEGER.UNSIGNED, primaryKey: true },
         tagId: { type: DataTypes.INTEGER.UNSIGNED, primaryKey: true },
       },
-      { sequelize, modelName: 'QuestionTag' /* the bundler minifies class names */, tableName: 'question_tags', timestamps: false },
+      {
+        sequelize,
+        modelName: 'QuestionTag' /* the bundler minifies class names */,
+        tableName: 'question_tags',
+        timestamps: false,
+      },
     );
   }
 }

@@ -1,5 +1,13 @@
 import 'server-only';
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type NonAttribute, type Sequelize } from 'sequelize';
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type NonAttribute,
+  type Sequelize,
+} from 'sequelize';
 import type { User } from './User';
 
 import { POST_TYPES, type PostType } from '@/lib/vocabulary';
@@ -29,7 +37,12 @@ export class Revision extends Model<InferAttributes<Revision>, InferCreationAttr
         body: { type: DataTypes.TEXT('medium'), allowNull: false },
         createdAt: DataTypes.DATE,
       },
-      { sequelize, modelName: 'Revision' /* the bundler minifies class names */, tableName: 'revisions', updatedAt: false },
+      {
+        sequelize,
+        modelName: 'Revision' /* the bundler minifies class names */,
+        tableName: 'revisions',
+        updatedAt: false,
+      },
     );
   }
 }

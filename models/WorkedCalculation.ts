@@ -12,7 +12,10 @@ import {
 import type { User } from './User';
 
 /** Saved calculator inputs and results, with the engine version that produced them. */
-export class WorkedCalculation extends Model<InferAttributes<WorkedCalculation>, InferCreationAttributes<WorkedCalculation>> {
+export class WorkedCalculation extends Model<
+  InferAttributes<WorkedCalculation>,
+  InferCreationAttributes<WorkedCalculation>
+> {
   declare id: CreationOptional<number>;
   declare publicId: string;
   declare tool: string;
@@ -39,7 +42,11 @@ export class WorkedCalculation extends Model<InferAttributes<WorkedCalculation>,
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },
-      { sequelize, modelName: 'WorkedCalculation' /* the bundler minifies class names */, tableName: 'worked_calculations' },
+      {
+        sequelize,
+        modelName: 'WorkedCalculation' /* the bundler minifies class names */,
+        tableName: 'worked_calculations',
+      },
     );
   }
 }

@@ -24,7 +24,30 @@ import { FieldLogLink } from './FieldLogLink';
 import { TagFollow } from './TagFollow';
 import { MailMessage } from './MailMessage';
 
-export { User, Tag, Question, Answer, QuestionTag, SafetyCheck, WorkedCalculation, AuthToken, ExpertApplication, Notice, Reply, Revision, HelpfulMark, QuestionFollow, Photo, Flag, AuditEntry, FieldLogEntry, FieldLogTrial, FieldLogLink, TagFollow, MailMessage };
+export {
+  User,
+  Tag,
+  Question,
+  Answer,
+  QuestionTag,
+  SafetyCheck,
+  WorkedCalculation,
+  AuthToken,
+  ExpertApplication,
+  Notice,
+  Reply,
+  Revision,
+  HelpfulMark,
+  QuestionFollow,
+  Photo,
+  Flag,
+  AuditEntry,
+  FieldLogEntry,
+  FieldLogTrial,
+  FieldLogLink,
+  TagFollow,
+  MailMessage,
+};
 
 const initialised = new WeakSet<Sequelize>();
 
@@ -76,5 +99,29 @@ export function initModels(sequelize: Sequelize = getSequelize()) {
     FieldLogEntry.hasMany(FieldLogTrial, { as: 'trials', foreignKey: 'entryId' });
     initialised.add(sequelize);
   }
-  return { sequelize, User, Tag, Question, Answer, QuestionTag, SafetyCheck, WorkedCalculation, AuthToken, ExpertApplication, Notice, Reply, Revision, HelpfulMark, QuestionFollow, Photo, Flag, AuditEntry, FieldLogEntry, FieldLogTrial, FieldLogLink, TagFollow, MailMessage };
+  return {
+    sequelize,
+    User,
+    Tag,
+    Question,
+    Answer,
+    QuestionTag,
+    SafetyCheck,
+    WorkedCalculation,
+    AuthToken,
+    ExpertApplication,
+    Notice,
+    Reply,
+    Revision,
+    HelpfulMark,
+    QuestionFollow,
+    Photo,
+    Flag,
+    AuditEntry,
+    FieldLogEntry,
+    FieldLogTrial,
+    FieldLogLink,
+    TagFollow,
+    MailMessage,
+  };
 }

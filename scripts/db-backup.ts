@@ -14,7 +14,19 @@ export async function backupDatabase(file: string, cfg = readDbConfig()): Promis
   mkdirSync(path.dirname(file), { recursive: true });
   const dump = spawn(
     'mariadb-dump',
-    ['--no-defaults', '--single-transaction', '--quick', '--routines', '--triggers', '--hex-blob', '--default-character-set=utf8mb4', `--host=${cfg.host}`, `--port=${cfg.port}`, `--user=${cfg.user}`, cfg.database],
+    [
+      '--no-defaults',
+      '--single-transaction',
+      '--quick',
+      '--routines',
+      '--triggers',
+      '--hex-blob',
+      '--default-character-set=utf8mb4',
+      `--host=${cfg.host}`,
+      `--port=${cfg.port}`,
+      `--user=${cfg.user}`,
+      cfg.database,
+    ],
     { env: { ...process.env, MYSQL_PWD: cfg.password }, stdio: ['ignore', 'pipe', 'pipe'] },
   );
   let stderr = '';
@@ -31,7 +43,9 @@ export async function backupDatabase(file: string, cfg = readDbConfig()): Promis
 
 if (require.main === module) {
   const stamp = new Date().toISOString().replace(/[-:]/g, '').replace(/\..*/, '').replace('T', '-');
-  const file = path.resolve(process.argv[2] ?? path.join('.data', 'backups', `${readDbConfig().database}-${stamp}.sql.gz`));
+  const file = path.resolve(
+    process.argv[2] ?? path.join('.data', 'backups', `${readDbConfig().database}-${stamp}.sql.gz`),
+  );
   backupDatabase(file)
     .then((f) => console.log(`backup written: ${f}`))
     .catch((err) => {

@@ -12,20 +12,43 @@ import { readDbConfig, type DbConfig } from '@/lib/db/config';
 import { createSequelize } from '@/lib/db';
 import { forgetSavedPages } from '@/lib/questions/saved-pages';
 
-export async function restoreDatabase(file: string, cfg: DbConfig = readDbConfig(), opts: { force?: boolean } = {}): Promise<void> {
+export async function restoreDatabase(
+  file: string,
+  cfg: DbConfig = readDbConfig(),
+  opts: { force?: boolean } = {},
+): Promise<void> {
   if (!existsSync(file)) throw new Error(`no backup file at ${file}`);
   const admin = createSequelize({ ...cfg, database: '' });
   try {
-    await admin.query(`CREATE DATABASE IF NOT EXISTS \`${cfg.database.replace(/`/g, '')}\` CHARACTER SET utf8mb4 COLLATE utf8mb4_unicode_ci`);
-    const [{ n }] = await admin.query<{ n: number }>('SELECT COUNT(*) AS n FROM information_schema.tables WHERE table_schema = ?', { replacements: [cfg.database], type: QueryTypes.SELECT });
-    if (Number(n) > 0 && !opts.force) throw new Error(`database ${cfg.database} already has ${n} tables: restore replaces them; add --force to go ahead`);
+    await admin.query(
+      `CREATE DATABASE IF NOT EXISTS \`${cfg.database.replace(/`/g, '')}\` CHARACTER SET utf8mb4 COLLATE utf8mb4_unicode_ci`,
+    );
+    const [{ n }] = await admin.query<{ n: number }>(
+      'SELECT COUNT(*) AS n FROM information_schema.tables WHERE table_schema = ?',
+      { replacements: [cfg.database], type: QueryTypes.SELECT },
+    );
+    if (Number(n) > 0 && !opts.force)
+      throw new Error(
+        `database ${cfg.database} already has ${n} tables: restore replaces them; add --force to go ahead`,
+      );
   } finally {
     await admin.close();
   }
-  const client = spawn('mariadb', ['--no-defaults', '--default-character-set=utf8mb4', `--host=${cfg.host}`, `--port=${cfg.port}`, `--user=${cfg.user}`, cfg.database], {
-    env: { ...process.env, MYSQL_PWD: cfg.password },
-    stdio: ['pipe', 'ignore', 'pipe'],
-  });
+  const client = spawn(
+    'mariadb',
+    [
+      '--no-defaults',
+      '--default-character-set=utf8mb4',
+      `--host=${cfg.host}`,
+      `--port=${cfg.port}`,
+      `--user=${cfg.user}`,
+      cfg.database,
+    ],
+    {
+      env: { ...process.env, MYSQL_PWD: cfg.password },
+      stdio: ['pipe', 'ignore', 'pipe'],
+    },
+  );
   let stderr = '';
   client.stderr.on('data', (d) => (stderr += d));
   const exited = new Promise<number>((resolve, reject) => {

@@ -9,11 +9,17 @@ import { flushOutbox } from '@/lib/mail/outbox';
 
 async function main() {
   const args = process.argv.slice(2);
-  const frequencies: DigestFrequency[] = args.includes('--all') ? ['daily', 'weekly'] : args.includes('--daily') ? ['daily'] : ['weekly'];
+  const frequencies: DigestFrequency[] = args.includes('--all')
+    ? ['daily', 'weekly']
+    : args.includes('--daily')
+      ? ['daily']
+      : ['weekly'];
   try {
     for (const f of frequencies) {
       const r = await runDigests(f);
-      console.log(`${r.frequency} digest ${r.period}: ${r.members} members on it, ${r.queued} queued, ${r.nothingNew} with nothing new, ${r.alreadyQueued} already queued earlier`);
+      console.log(
+        `${r.frequency} digest ${r.period}: ${r.members} members on it, ${r.queued} queued, ${r.nothingNew} with nothing new, ${r.alreadyQueued} already queued earlier`,
+      );
     }
     const sent = await flushOutbox();
     console.log(`outbox: ${sent.sent} sent, ${sent.retrying} waiting to retry, ${sent.failed} failed for good`);

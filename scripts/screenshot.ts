@@ -9,7 +9,10 @@ async function main() {
   const [url = 'http://localhost:3000/', prefix = '/tmp/shot', scheme = 'light'] = process.argv.slice(2);
   const browser = await chromium.launch({ executablePath: '/usr/bin/chromium', args: CHROMIUM_ARGS });
   try {
-    for (const [name, width, height] of [['phone', 390, 844], ['desktop', 1280, 900]] as const) {
+    for (const [name, width, height] of [
+      ['phone', 390, 844],
+      ['desktop', 1280, 900],
+    ] as const) {
       const page = await browser.newPage({ viewport: { width, height }, colorScheme: scheme as 'light' | 'dark' });
       await page.goto(url, { waitUntil: 'networkidle' });
       await page.screenshot({ path: `${prefix}-${name}.png`, fullPage: true });

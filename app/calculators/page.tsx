@@ -4,7 +4,8 @@ import { CALCULATOR_LIST } from '@/lib/calculators';
 
 export const metadata: Metadata = {
   title: 'Calculators',
-  description: 'Yield estimate, array planner, drive pipe check, delivery line, source flow, demand and storage, and the stall check.',
+  description:
+    'Yield estimate, array planner, drive pipe check, delivery line, source flow, demand and storage, and the stall check.',
 };
 
 export default function CalculatorsPage() {

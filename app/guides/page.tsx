@@ -13,7 +13,8 @@ type SP = Record<string, string | string[] | undefined>;
 
 export default async function GuidesIndex({ searchParams }: { searchParams: Promise<SP> }) {
   const sp = await searchParams;
-  const level = typeof sp.level === 'string' && (GUIDE_LEVELS as readonly string[]).includes(sp.level) ? sp.level : null;
+  const level =
+    typeof sp.level === 'string' && (GUIDE_LEVELS as readonly string[]).includes(sp.level) ? sp.level : null;
   const tag = typeof sp.tag === 'string' ? sp.tag : null;
   const all = listGuides();
   const tags = [...new Set(all.flatMap((g) => g.meta.tags))].sort();
@@ -35,8 +36,8 @@ export default async function GuidesIndex({ searchParams }: { searchParams: Prom
       <div>
         <h1 className="font-serif text-3xl font-semibold">Guides</h1>
         <p className="cw-prose cw-muted mt-2">
-          From “is there enough fall here?” to a working, tuned pump. Each guide carries the calculator it discusses, set
-          up for the demo site; change the numbers to your own.
+          From “is there enough fall here?” to a working, tuned pump. Each guide carries the calculator it discusses,
+          set up for the demo site; change the numbers to your own.
         </p>
       </div>
       <nav aria-label="Filter guides" className="flex flex-col gap-2 font-sans text-sm">
@@ -46,7 +47,12 @@ export default async function GuidesIndex({ searchParams }: { searchParams: Prom
             all
           </Link>
           {GUIDE_LEVELS.map((l) => (
-            <Link key={l} href={href({ level: l })} className={chip(level === l)} aria-current={level === l ? 'true' : undefined}>
+            <Link
+              key={l}
+              href={href({ level: l })}
+              className={chip(level === l)}
+              aria-current={level === l ? 'true' : undefined}
+            >
               {l}
             </Link>
           ))}
@@ -57,7 +63,12 @@ export default async function GuidesIndex({ searchParams }: { searchParams: Prom
             all
           </Link>
           {tags.map((t) => (
-            <Link key={t} href={href({ tag: t })} className={chip(tag === t)} aria-current={tag === t ? 'true' : undefined}>
+            <Link
+              key={t}
+              href={href({ tag: t })}
+              className={chip(tag === t)}
+              aria-current={tag === t ? 'true' : undefined}
+            >
               {t}
             </Link>
           ))}

@@ -11,7 +11,11 @@ export const metadata: Metadata = {
   description: 'Questions from ram pump builders, with their measurements, and answers with the numbers.',
 };
 
-export default async function QuestionsPage({ searchParams }: { searchParams: Promise<Record<string, string | string[]>> }) {
+export default async function QuestionsPage({
+  searchParams,
+}: {
+  searchParams: Promise<Record<string, string | string[]>>;
+}) {
   const sp = await searchParams;
   const one = (v: string | string[] | undefined) => (typeof v === 'string' ? v : undefined);
   const parsed = paginationSchema.safeParse({ page: one(sp.page), perPage: one(sp.perPage) });
@@ -44,9 +48,19 @@ export default async function QuestionsPage({ searchParams }: { searchParams: Pr
         {[
           ['newest', 'Newest'],
           ['unanswered', 'Unanswered'],
-          ...(signedIn ? [['mine', 'My questions'], ['followed', 'Followed']] : []),
+          ...(signedIn
+            ? [
+                ['mine', 'My questions'],
+                ['followed', 'Followed'],
+              ]
+            : []),
         ].map(([k, label]) => (
-          <Link key={k} href={k === 'newest' ? '/questions' : `/questions?show=${k}`} aria-current={show === k ? 'page' : undefined} className={show === k ? 'font-semibold' : 'cw-link'}>
+          <Link
+            key={k}
+            href={k === 'newest' ? '/questions' : `/questions?show=${k}`}
+            aria-current={show === k ? 'page' : undefined}
+            className={show === k ? 'font-semibold' : 'cw-link'}
+          >
             {label}
           </Link>
         ))}
@@ -56,7 +70,10 @@ export default async function QuestionsPage({ searchParams }: { searchParams: Pr
         page={data.page}
         totalPages={data.totalPages}
         basePath="/questions"
-        query={{ ...(one(sp.perPage) ? { perPage: String(data.perPage) } : {}), ...(show !== 'newest' ? { show } : {}) }}
+        query={{
+          ...(one(sp.perPage) ? { perPage: String(data.perPage) } : {}),
+          ...(show !== 'newest' ? { show } : {}),
+        }}
       />
     </div>
   );

@@ -18,7 +18,9 @@ export function AccountMenu() {
   }
   return (
     <details className="relative text-sm" data-testid="account-menu">
-      <summary className="cursor-pointer list-none whitespace-nowrap font-medium">{data.user.name ?? data.user.handle}</summary>
+      <summary className="cursor-pointer list-none whitespace-nowrap font-medium">
+        {data.user.name ?? data.user.handle}
+      </summary>
       <div className="absolute right-0 z-20 mt-2 flex w-44 flex-col gap-2 rounded-md border border-creek-400 bg-creek-800 p-3 shadow-lg">
         <Link href={`/people/${data.user.handle}`} className="no-underline hover:underline">
           Profile

@@ -1,7 +1,12 @@
 import type { InputHTMLAttributes } from 'react';
 
 /** A labelled form input with its error beside it. */
-export function Field({ label, error, id, ...input }: InputHTMLAttributes<HTMLInputElement> & { label: string; id: string; error?: string }) {
+export function Field({
+  label,
+  error,
+  id,
+  ...input
+}: InputHTMLAttributes<HTMLInputElement> & { label: string; id: string; error?: string }) {
   return (
     <div className="flex flex-col gap-1">
       <label htmlFor={id} className="text-sm font-medium">

@@ -1,7 +1,17 @@
 import Link from 'next/link';
 
 /** A page someone may not see: its title, the policy's plain words, and a sign-in link when signed out. */
-export function Refused({ title, message, signedIn, signInTo }: { title: string; message: string; signedIn: boolean; signInTo?: string }) {
+export function Refused({
+  title,
+  message,
+  signedIn,
+  signInTo,
+}: {
+  title: string;
+  message: string;
+  signedIn: boolean;
+  signInTo?: string;
+}) {
   return (
     <div className="flex max-w-2xl flex-col gap-4">
       <h1 className="font-serif text-3xl font-semibold">{title}</h1>

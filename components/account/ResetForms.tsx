@@ -14,7 +14,9 @@ export function ResetRequestForm() {
       aria-label="Reset password"
       onSubmit={async (e) => {
         e.preventDefault();
-        const res = await sendJson<{ message: string }>('/api/account/password-reset', 'POST', { email: String(new FormData(e.currentTarget).get('email')) });
+        const res = await sendJson<{ message: string }>('/api/account/password-reset', 'POST', {
+          email: String(new FormData(e.currentTarget).get('email')),
+        });
         if (res.ok) setNote(res.data.message);
         else setError(res.error.message);
       }}
@@ -23,7 +25,11 @@ export function ResetRequestForm() {
       <button type="submit" className="cw-button self-start">
         E-mail me a reset link
       </button>
-      {note ? <p role="status" className="text-sm text-moss-600 dark:text-moss-300">{note}</p> : null}
+      {note ? (
+        <p role="status" className="text-sm text-moss-600 dark:text-moss-300">
+          {note}
+        </p>
+      ) : null}
     </form>
   );
 }
@@ -46,14 +52,32 @@ export function NewPasswordForm({ token }: { token: string }) {
       aria-label="Choose a new password"
       onSubmit={async (e) => {
         e.preventDefault();
-        const res = await sendJson<{ message: string }>('/api/account/password-reset/confirm', 'POST', { token, password: String(new FormData(e.currentTarget).get('password')) });
-        setResult(res.ok ? { ok: true, message: res.data.message } : { ok: false, message: res.error.message, field: res.error.field });
+        const res = await sendJson<{ message: string }>('/api/account/password-reset/confirm', 'POST', {
+          token,
+          password: String(new FormData(e.currentTarget).get('password')),
+        });
+        setResult(
+          res.ok
+            ? { ok: true, message: res.data.message }
+            : { ok: false, message: res.error.message, field: res.error.field },
+        );
       }}
     >
-      <Field id="new-password" name="password" type="password" label="New password (10 characters or more)" autoComplete="new-password" required error={result && result.field === 'password' ? result.message : undefined} />
+      <Field
+        id="new-password"
+        name="password"
+        type="password"
+        label="New password (10 characters or more)"
+        autoComplete="new-password"
+        required
+        error={result && result.field === 'password' ? result.message : undefined}
+      />
       {result && result.field !== 'password' ? (
         <p role="alert" className="text-sm font-semibold text-signal-700 dark:text-signal-300">
-          {result.message} <Link href="/reset-password" className="cw-link">Ask for a new link</Link>
+          {result.message}{' '}
+          <Link href="/reset-password" className="cw-link">
+            Ask for a new link
+          </Link>
         </p>
       ) : null}
       <button type="submit" className="cw-button self-start">

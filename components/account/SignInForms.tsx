@@ -25,15 +25,31 @@ export function SignInForms({ callbackUrl: asked = '/' }: { callbackUrl?: string
           const f = new FormData(e.currentTarget);
           setBusy(true);
           setError(null);
-          const res = await signIn('password', { email: String(f.get('email')), password: String(f.get('password')), redirect: false });
+          const res = await signIn('password', {
+            email: String(f.get('email')),
+            password: String(f.get('password')),
+            redirect: false,
+          });
           setBusy(false);
           if (res?.ok && !res.error) window.location.assign(callbackUrl);
-          else setError(res?.error && res.error !== 'CredentialsSignin' ? res.error : 'That e-mail and password do not match an account.');
+          else
+            setError(
+              res?.error && res.error !== 'CredentialsSignin'
+                ? res.error
+                : 'That e-mail and password do not match an account.',
+            );
         }}
       >
         <h2 className="text-lg font-semibold">With your password</h2>
         <Field id="signin-email" name="email" type="email" label="E-mail" autoComplete="email" required />
-        <Field id="signin-password" name="password" type="password" label="Password" autoComplete="current-password" required />
+        <Field
+          id="signin-password"
+          name="password"
+          type="password"
+          label="Password"
+          autoComplete="current-password"
+          required
+        />
         {error ? (
           <p role="alert" className="text-sm font-semibold text-signal-700 dark:text-signal-300">
             {error}
@@ -61,12 +77,25 @@ export function SignInForms({ callbackUrl: asked = '/' }: { callbackUrl?: string
           setLinkError(undefined);
           const res = await signIn('email', { email: String(f.get('email')), redirect: false, callbackUrl });
           if (res?.ok && !res.error) setLinkNote('If that address has an account, a sign-in link is on its way.');
-          else setLinkError(res?.error === 'EmailSignin' || !res?.error ? 'The link could not be sent just now; try again in a minute.' : res.error);
+          else
+            setLinkError(
+              res?.error === 'EmailSignin' || !res?.error
+                ? 'The link could not be sent just now; try again in a minute.'
+                : res.error,
+            );
         }}
       >
         <h2 className="text-lg font-semibold">With a link by e-mail</h2>
         <p className="cw-muted text-sm">No password needed: we e-mail you a link that signs you in once.</p>
-        <Field id="link-email" name="email" type="email" label="E-mail" autoComplete="email" required error={linkError} />
+        <Field
+          id="link-email"
+          name="email"
+          type="email"
+          label="E-mail"
+          autoComplete="email"
+          required
+          error={linkError}
+        />
         <button type="submit" className="cw-button self-start">
           E-mail me a link
         </button>

@@ -12,7 +12,10 @@ export function SignOutEverywhere() {
       <h2 id="sessions" className="font-serif text-xl font-semibold">
         Sessions
       </h2>
-      <p className="text-sm">Signed in on a computer you no longer use, or lost a phone? This signs your account out on every device, this one included.</p>
+      <p className="text-sm">
+        Signed in on a computer you no longer use, or lost a phone? This signs your account out on every device, this
+        one included.
+      </p>
       <button
         type="button"
         className="cw-button self-start"
@@ -20,13 +23,20 @@ export function SignOutEverywhere() {
         onClick={async () => {
           setBusy(true);
           setError(null);
-          const res = await fetch('/api/account/sign-out-everywhere', { method: 'POST', headers: { 'content-type': 'application/json' }, body: '{}' }).catch(() => null);
+          const res = await fetch('/api/account/sign-out-everywhere', {
+            method: 'POST',
+            headers: { 'content-type': 'application/json' },
+            body: '{}',
+          }).catch(() => null);
           if (res?.ok) {
             await signOut({ callbackUrl: '/sign-in' });
             return;
           }
           setBusy(false);
-          setError(((await res?.json().catch(() => null)) as { error?: { message?: string } } | null)?.error?.message ?? 'That did not work just now; try again in a minute.');
+          setError(
+            ((await res?.json().catch(() => null)) as { error?: { message?: string } } | null)?.error?.message ??
+              'That did not work just now; try again in a minute.',
+          );
         }}
       >
         Sign out everywhere

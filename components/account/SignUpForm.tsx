@@ -24,16 +24,51 @@ export function SignUpForm() {
         e.preventDefault();
         const f = new FormData(e.currentTarget);
         setBusy(true);
-        const res = await sendJson<{ message: string; note?: string }>('/api/account/sign-up', 'POST', Object.fromEntries(['email', 'password', 'handle', 'displayName'].map((k) => [k, String(f.get(k) ?? '')])));
+        const res = await sendJson<{ message: string; note?: string }>(
+          '/api/account/sign-up',
+          'POST',
+          Object.fromEntries(['email', 'password', 'handle', 'displayName'].map((k) => [k, String(f.get(k) ?? '')])),
+        );
         setBusy(false);
         if (res.ok) setDone([res.data.message, res.data.note].filter(Boolean).join(' '));
         else setErrors({ [res.error.field ?? 'form']: res.error.message });
       }}
     >
-      <Field id="signup-email" name="email" type="email" label="E-mail" autoComplete="email" required error={errors.email} />
-      <Field id="signup-handle" name="handle" label="Handle (public, lower case)" autoComplete="username" required pattern="[a-z0-9_]{3,30}" error={errors.handle} />
-      <Field id="signup-name" name="displayName" label="Display name" autoComplete="nickname" required error={errors.displayName} />
-      <Field id="signup-password" name="password" type="password" label="Password (10 characters or more)" autoComplete="new-password" required error={errors.password} />
+      <Field
+        id="signup-email"
+        name="email"
+        type="email"
+        label="E-mail"
+        autoComplete="email"
+        required
+        error={errors.email}
+      />
+      <Field
+        id="signup-handle"
+        name="handle"
+        label="Handle (public, lower case)"
+        autoComplete="username"
+        required
+        pattern="[a-z0-9_]{3,30}"
+        error={errors.handle}
+      />
+      <Field
+        id="signup-name"
+        name="displayName"
+        label="Display name"
+        autoComplete="nickname"
+        required
+        error={errors.displayName}
+      />
+      <Field
+        id="signup-password"
+        name="password"
+        type="password"
+        label="Password (10 characters or more)"
+        autoComplete="new-password"
+        required
+        error={errors.password}
+      />
       {errors.form ? (
         <p role="alert" className="text-sm font-semibold text-signal-700 dark:text-signal-300">
           {errors.form}

@@ -14,7 +14,9 @@ export const ArrayPlanner = (props: Props) => <CalculatorCard def={CALCULATORS['
 export const DrivePipeCheck = (props: Props) => <CalculatorCard def={CALCULATORS['drive-pipe-check']} props={props} />;
 export const DeliveryLine = (props: Props) => <CalculatorCard def={CALCULATORS['delivery-line']} props={props} />;
 export const SourceFlow = (props: Props) => <CalculatorCard def={CALCULATORS['source-flow']} props={props} />;
-export const DemandAndStorage = (props: Props) => <CalculatorCard def={CALCULATORS['demand-and-storage']} props={props} />;
+export const DemandAndStorage = (props: Props) => (
+  <CalculatorCard def={CALCULATORS['demand-and-storage']} props={props} />
+);
 export const StallCheck = (props: Props) => <CalculatorCard def={CALCULATORS['stall-check']} props={props} />;
 
 /** A calculator chosen by id, e.g. on /calculators/[tool] with the share link's inputs. */

@@ -23,9 +23,27 @@ const TEXT_FIELDS: { name: string; label: string; hint: string }[] = [
 export function EntryForm() {
   const router = useRouter();
   const [v, setV] = useState<Record<string, string>>({
-    siteName: '', testedOn: new Date().toISOString().slice(0, 10), pumpType: 'homemade', pumpSize: '1', pumpCount: '1', arrangement: 'single',
-    fall: '', lift: '', driveLength: '', driveSize: '1', driveMaterial: 'pvc', deliveryLength: '', deliverySize: '', deliveryMaterial: '',
-    driveFlow: '', driveFlowMethod: 'measured', driveFlowHow: '', bpm: '', wasteValveSetting: '', waterTempC: '', notes: '',
+    siteName: '',
+    testedOn: new Date().toISOString().slice(0, 10),
+    pumpType: 'homemade',
+    pumpSize: '1',
+    pumpCount: '1',
+    arrangement: 'single',
+    fall: '',
+    lift: '',
+    driveLength: '',
+    driveSize: '1',
+    driveMaterial: 'pvc',
+    deliveryLength: '',
+    deliverySize: '',
+    deliveryMaterial: '',
+    driveFlow: '',
+    driveFlowMethod: 'measured',
+    driveFlowHow: '',
+    bpm: '',
+    wasteValveSetting: '',
+    waterTempC: '',
+    notes: '',
   });
   const [trials, setTrials] = useState<Trial[]>([{ volume: '', seconds: '' }]);
   const [photoIds, setPhotoIds] = useState<string[]>([]);
@@ -39,12 +57,32 @@ export function EntryForm() {
     ev.preventDefault();
     setBusy(true);
     const out = await sendJson<{ id: number; url: string }>('/api/field-log', 'POST', {
-      siteName: v.siteName, testedOn: v.testedOn, pumpType: v.pumpType, pumpSize: v.pumpSize, pumpCount: num(v.pumpCount), arrangement: v.arrangement,
-      fall: v.fall, lift: v.lift, driveLength: v.driveLength, driveSize: v.driveSize, driveMaterial: v.driveMaterial,
-      deliveryLength: opt(v.deliveryLength), deliverySize: opt(v.deliverySize), deliveryMaterial: opt(v.deliveryMaterial),
-      driveFlow: v.driveFlow, driveFlowMethod: v.driveFlowMethod, driveFlowHow: v.driveFlowHow,
-      trials: trials.map((t) => ({ volume: /^\s*[\d.]+\s*$/.test(t.volume) ? `${t.volume.trim()} L` : t.volume, seconds: Number(t.seconds) })),
-      bpm: num(v.bpm), wasteValveSetting: v.wasteValveSetting, waterTempC: num(v.waterTempC), notes: v.notes, photoIds,
+      siteName: v.siteName,
+      testedOn: v.testedOn,
+      pumpType: v.pumpType,
+      pumpSize: v.pumpSize,
+      pumpCount: num(v.pumpCount),
+      arrangement: v.arrangement,
+      fall: v.fall,
+      lift: v.lift,
+      driveLength: v.driveLength,
+      driveSize: v.driveSize,
+      driveMaterial: v.driveMaterial,
+      deliveryLength: opt(v.deliveryLength),
+      deliverySize: opt(v.deliverySize),
+      deliveryMaterial: opt(v.deliveryMaterial),
+      driveFlow: v.driveFlow,
+      driveFlowMethod: v.driveFlowMethod,
+      driveFlowHow: v.driveFlowHow,
+      trials: trials.map((t) => ({
+        volume: /^\s*[\d.]+\s*$/.test(t.volume) ? `${t.volume.trim()} L` : t.volume,
+        seconds: Number(t.seconds),
+      })),
+      bpm: num(v.bpm),
+      wasteValveSetting: v.wasteValveSetting,
+      waterTempC: num(v.waterTempC),
+      notes: v.notes,
+      photoIds,
     });
     setBusy(false);
     if (out.ok) router.push(out.data.url);
@@ -53,17 +91,37 @@ export function EntryForm() {
 
   const text = (name: string, label: string, hint?: string, type = 'text') => (
     <div>
-      <label className={labelClass} htmlFor={`fl-${name}`}>{label}</label>
-      <input id={`fl-${name}`} name={name} type={type} className={inputClass} value={v[name]} onChange={set(name)} aria-describedby={hint ? `fl-${name}-hint` : undefined} />
-      {hint ? <p id={`fl-${name}-hint`} className="cw-muted mt-1 text-xs">{hint}</p> : null}
+      <label className={labelClass} htmlFor={`fl-${name}`}>
+        {label}
+      </label>
+      <input
+        id={`fl-${name}`}
+        name={name}
+        type={type}
+        className={inputClass}
+        value={v[name]}
+        onChange={set(name)}
+        aria-describedby={hint ? `fl-${name}-hint` : undefined}
+      />
+      {hint ? (
+        <p id={`fl-${name}-hint`} className="cw-muted mt-1 text-xs">
+          {hint}
+        </p>
+      ) : null}
       <FieldError error={error} field={name} />
     </div>
   );
   const select = (name: string, label: string, options: readonly { value: string; label: string }[]) => (
     <div>
-      <label className={labelClass} htmlFor={`fl-${name}`}>{label}</label>
+      <label className={labelClass} htmlFor={`fl-${name}`}>
+        {label}
+      </label>
       <select id={`fl-${name}`} name={name} className={inputClass} value={v[name]} onChange={set(name)}>
-        {options.map((o) => <option key={o.value} value={o.value}>{o.label}</option>)}
+        {options.map((o) => (
+          <option key={o.value} value={o.value}>
+            {o.label}
+          </option>
+        ))}
       </select>
       <FieldError error={error} field={name} />
     </div>
@@ -72,19 +130,34 @@ export function EntryForm() {
   const materials = PIPE_MATERIAL_CHOICES.map((m) => ({ value: m, label: MATERIAL_LABELS[m] }));
 
   return (
-    <form onSubmit={submit} noValidate className="flex max-w-3xl flex-col gap-5 font-sans" aria-label="Record a field log test">
+    <form
+      onSubmit={submit}
+      noValidate
+      className="flex max-w-3xl flex-col gap-5 font-sans"
+      aria-label="Record a field log test"
+    >
       <fieldset className="grid gap-4 sm:grid-cols-2">
         <legend className="mb-2 font-serif text-lg font-semibold">The test</legend>
         {text('siteName', 'Site name', 'the same name links tests of one installation')}
         {text('testedOn', 'Date of the test', undefined, 'date')}
-        {select('pumpType', 'Pump type', PUMP_TYPES.map((t) => ({ value: t, label: t })))}
+        {select(
+          'pumpType',
+          'Pump type',
+          PUMP_TYPES.map((t) => ({ value: t, label: t })),
+        )}
         {select('pumpSize', 'Pump size', sizes)}
         {text('pumpCount', 'Number of pumps', undefined, 'number')}
-        {select('arrangement', 'Arrangement', [{ value: 'single', label: 'single pump' }, { value: 'parallel', label: 'in parallel' }, { value: 'staged', label: 'staged' }])}
+        {select('arrangement', 'Arrangement', [
+          { value: 'single', label: 'single pump' },
+          { value: 'parallel', label: 'in parallel' },
+          { value: 'staged', label: 'staged' },
+        ])}
       </fieldset>
       <fieldset className="grid gap-4 sm:grid-cols-2">
         <legend className="mb-2 font-serif text-lg font-semibold">Heads and pipes</legend>
-        {TEXT_FIELDS.slice(0, 3).map((f) => <div key={f.name}>{text(f.name, f.label, f.hint)}</div>)}
+        {TEXT_FIELDS.slice(0, 3).map((f) => (
+          <div key={f.name}>{text(f.name, f.label, f.hint)}</div>
+        ))}
         {select('driveSize', 'Drive pipe size', sizes)}
         {select('driveMaterial', 'Drive pipe material', materials)}
         {text('deliveryLength', 'Delivery line length', TEXT_FIELDS[3].hint)}
@@ -94,7 +167,10 @@ export function EntryForm() {
       <fieldset className="grid gap-4 sm:grid-cols-2">
         <legend className="mb-2 font-serif text-lg font-semibold">Drive flow and the pump</legend>
         {text('driveFlow', TEXT_FIELDS[4].label, TEXT_FIELDS[4].hint)}
-        {select('driveFlowMethod', 'Drive flow was', [{ value: 'measured', label: 'measured' }, { value: 'estimated', label: 'estimated' }])}
+        {select('driveFlowMethod', 'Drive flow was', [
+          { value: 'measured', label: 'measured' },
+          { value: 'estimated', label: 'estimated' },
+        ])}
         {text('driveFlowHow', 'How', 'e.g. waste and delivery caught in a bucket, timed')}
         {text('bpm', 'Beats per minute', 'optional', 'number')}
         {text('wasteValveSetting', 'Waste valve setting', 'optional, in words')}
@@ -102,24 +178,58 @@ export function EntryForm() {
       </fieldset>
       <fieldset className="flex flex-col gap-3">
         <legend className="mb-2 font-serif text-lg font-semibold">Bucket trials at the delivery outlet</legend>
-        <p className="cw-muted text-sm">One row a trial: what the bucket caught and how long it took. A bare number is litres; “1.5 gal” works too.</p>
+        <p className="cw-muted text-sm">
+          One row a trial: what the bucket caught and how long it took. A bare number is litres; “1.5 gal” works too.
+        </p>
         {trials.map((t, i) => (
           <div key={i} className="flex flex-wrap items-end gap-3" data-trial={i}>
-            <label className={labelClass}>Trial {i + 1} volume
-              <input name={`trials.${i}.volume`} aria-label={`Trial ${i + 1} volume`} className={inputClass} value={t.volume} onChange={(e) => setTrials((o) => o.map((x, j) => (j === i ? { ...x, volume: e.target.value } : x)))} />
+            <label className={labelClass}>
+              Trial {i + 1} volume
+              <input
+                name={`trials.${i}.volume`}
+                aria-label={`Trial ${i + 1} volume`}
+                className={inputClass}
+                value={t.volume}
+                onChange={(e) => setTrials((o) => o.map((x, j) => (j === i ? { ...x, volume: e.target.value } : x)))}
+              />
             </label>
-            <label className={labelClass}>seconds
-              <input name={`trials.${i}.seconds`} aria-label={`Trial ${i + 1} seconds`} type="number" step="0.1" className={inputClass} value={t.seconds} onChange={(e) => setTrials((o) => o.map((x, j) => (j === i ? { ...x, seconds: e.target.value } : x)))} />
+            <label className={labelClass}>
+              seconds
+              <input
+                name={`trials.${i}.seconds`}
+                aria-label={`Trial ${i + 1} seconds`}
+                type="number"
+                step="0.1"
+                className={inputClass}
+                value={t.seconds}
+                onChange={(e) => setTrials((o) => o.map((x, j) => (j === i ? { ...x, seconds: e.target.value } : x)))}
+              />
             </label>
-            {trials.length > 1 ? <button type="button" className="cw-link text-sm" onClick={() => setTrials((o) => o.filter((_, j) => j !== i))}>Remove</button> : null}
+            {trials.length > 1 ? (
+              <button
+                type="button"
+                className="cw-link text-sm"
+                onClick={() => setTrials((o) => o.filter((_, j) => j !== i))}
+              >
+                Remove
+              </button>
+            ) : null}
             <FieldError error={error} field={`trials.${i}`} />
           </div>
         ))}
         <FieldError error={error} field="trials" />
-        <button type="button" className="cw-link self-start text-sm" onClick={() => setTrials((o) => [...o, { volume: '', seconds: '' }])}>Add a trial</button>
+        <button
+          type="button"
+          className="cw-link self-start text-sm"
+          onClick={() => setTrials((o) => [...o, { volume: '', seconds: '' }])}
+        >
+          Add a trial
+        </button>
       </fieldset>
       <div>
-        <label className={labelClass} htmlFor="fl-notes">Notes</label>
+        <label className={labelClass} htmlFor="fl-notes">
+          Notes
+        </label>
         <textarea id="fl-notes" name="notes" rows={4} className={inputClass} value={v.notes} onChange={set('notes')} />
       </div>
       <section aria-label="Photos" className="flex flex-col gap-2">
@@ -128,7 +238,9 @@ export function EntryForm() {
         <FieldError error={error} field="photoIds" />
       </section>
       <FieldError error={error} />
-      <button type="submit" className="cw-button self-start" disabled={busy}>Save the test</button>
+      <button type="submit" className="cw-button self-start" disabled={busy}>
+        Save the test
+      </button>
     </form>
   );
 }

@@ -2,7 +2,13 @@ import { NOMINAL_LABELS, toDisplay, type NominalSize, type QuantityKind, type Un
 import type { PipeMaterial } from '@/lib/vocabulary';
 
 export const size = (s: string | null) => (s ? (NOMINAL_LABELS[s as NominalSize] ?? s) : '—');
-export const MATERIAL_LABELS: Record<PipeMaterial, string> = { pvc: 'PVC', hdpe: 'HDPE (poly)', 'galvanized-steel': 'galvanized steel', steel: 'steel', hose: 'hose' };
+export const MATERIAL_LABELS: Record<PipeMaterial, string> = {
+  pvc: 'PVC',
+  hdpe: 'HDPE (poly)',
+  'galvanized-steel': 'galvanized steel',
+  steel: 'steel',
+  hose: 'hose',
+};
 export const material = (m: string | null) => (m ? (MATERIAL_LABELS[m as PipeMaterial] ?? m) : '—');
 export const pumpsWords = (count: number, arrangement: string, pumpSize: string) =>
   count === 1 ? `one ${size(pumpSize)} pump` : `${count} × ${size(pumpSize)} pumps, ${arrangement}`;

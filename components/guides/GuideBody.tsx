@@ -16,7 +16,11 @@ export async function renderGuide(body: string) {
       parseFrontmatter: false,
       mdxOptions: {
         remarkPlugins: [remarkGfm, remarkMath],
-        rehypePlugins: [rehypeSlug, [rehypeKatex, { throwOnError: true, strict: 'ignore' }], rehypeCollectHeadings(headings)],
+        rehypePlugins: [
+          rehypeSlug,
+          [rehypeKatex, { throwOnError: true, strict: 'ignore' }],
+          rehypeCollectHeadings(headings),
+        ],
       },
     },
   });

@@ -7,5 +7,7 @@ const STYLE: Record<GuideLevel, string> = {
 };
 
 export function LevelBadge({ level }: { level: GuideLevel }) {
-  return <span className={`rounded-full border px-2 py-0.5 font-sans text-xs font-semibold ${STYLE[level]}`}>{level}</span>;
+  return (
+    <span className={`rounded-full border px-2 py-0.5 font-sans text-xs font-semibold ${STYLE[level]}`}>{level}</span>
+  );
 }

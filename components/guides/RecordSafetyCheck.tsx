@@ -35,7 +35,9 @@ export function RecordSafetyCheck({ slug, onRecorded }: { slug: string; onRecord
     <details className="mt-3" data-testid="record-safety-check">
       <summary className="cw-link cursor-pointer">Record a safety check</summary>
       <form onSubmit={onSubmit} noValidate className="cw-card mt-2 flex flex-col gap-3">
-        <p className="cw-muted">Your check applies to this guide exactly as it reads now; an edit later marks it as changed.</p>
+        <p className="cw-muted">
+          Your check applies to this guide exactly as it reads now; an edit later marks it as changed.
+        </p>
         <fieldset>
           <legend className={labelClass}>Verdict</legend>
           <div className="mt-1 flex flex-wrap gap-4">

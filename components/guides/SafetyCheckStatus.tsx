@@ -20,7 +20,9 @@ const day = (iso: string) => dateFmt.format(new Date(iso));
  * live so a new check, or an edit that makes the last one stale, shows at once.
  */
 export function SafetyCheckStatus({ slug }: { slug: string }) {
-  const { data, error, isLoading, mutate } = useSWR(`/api/guides/${slug}/safety-checks`, getJson<Payload>, { revalidateOnFocus: false });
+  const { data, error, isLoading, mutate } = useSWR(`/api/guides/${slug}/safety-checks`, getJson<Payload>, {
+    revalidateOnFocus: false,
+  });
   const { data: session } = useSession();
   const isExpert = can(sessionActor(session?.user), 'safetyCheck.record');
 
@@ -40,7 +42,9 @@ export function SafetyCheckStatus({ slug }: { slug: string }) {
         </p>
       ) : status.state === 'changed' ? (
         <p className="flex flex-wrap items-center gap-2">
-          <span className="rounded bg-signal px-2 py-0.5 font-semibold text-creek-950">Changed since its last safety check</span>
+          <span className="rounded bg-signal px-2 py-0.5 font-semibold text-creek-950">
+            Changed since its last safety check
+          </span>
           <span>{`last checked by ${status.latest.expert.displayName} on ${day(status.latest.checkedAt)}, before the latest edit`}</span>
         </p>
       ) : (

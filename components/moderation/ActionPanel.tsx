@@ -36,13 +36,16 @@ export function ActionPanel({
   async function onSubmit(e: FormEvent<HTMLFormElement>) {
     e.preventDefault();
     const why = reason.trim();
-    if (why.length < 3) return setError({ field: 'reason', message: 'Every action needs a reason (at least 3 characters).' });
+    if (why.length < 3)
+      return setError({ field: 'reason', message: 'Every action needs a reason (at least 3 characters).' });
     const tagList = tags
       .split(/[\s,]+/)
       .map((t) => t.trim().toLowerCase())
       .filter(Boolean);
-    if (action === 'retag' && tagList.length === 0) return setError({ field: 'tags', message: 'Give one to five tags.' });
-    if (action === 'suspend' && !until) return setError({ field: 'until', message: 'Choose the day the suspension ends.' });
+    if (action === 'retag' && tagList.length === 0)
+      return setError({ field: 'tags', message: 'Give one to five tags.' });
+    if (action === 'suspend' && !until)
+      return setError({ field: 'until', message: 'Choose the day the suspension ends.' });
     setBusy(true);
     setError(null);
     const out = await sendJson<{ auditId: number }>('/api/review/actions', 'POST', {
@@ -56,16 +59,28 @@ export function ActionPanel({
     setBusy(false);
     if (!out.ok) return setError(out.error);
     setReason('');
-    onDone(`${ACTION_WORDS[action]}: done for the ${post.type} by ${authorName}. ${authorName} gets a notice with your reason, and the audit log has it.`);
+    onDone(
+      `${ACTION_WORDS[action]}: done for the ${post.type} by ${authorName}. ${authorName} gets a notice with your reason, and the audit log has it.`,
+    );
   }
 
   return (
-    <form onSubmit={onSubmit} noValidate aria-label={`Act on this ${post.type}`} className="flex flex-col gap-3 border-t border-limestone-300 pt-3 font-sans dark:border-creek-600">
+    <form
+      onSubmit={onSubmit}
+      noValidate
+      aria-label={`Act on this ${post.type}`}
+      className="flex flex-col gap-3 border-t border-limestone-300 pt-3 font-sans dark:border-creek-600"
+    >
       <div>
         <label htmlFor={`${id}-action`} className={labelClass}>
           Action
         </label>
-        <select id={`${id}-action`} value={action} onChange={(e) => setAction(e.target.value as ModerationAction)} className={inputClass}>
+        <select
+          id={`${id}-action`}
+          value={action}
+          onChange={(e) => setAction(e.target.value as ModerationAction)}
+          className={inputClass}
+        >
           {choices.map((a) => (
             <option key={a} value={a}>
               {ACTION_WORDS[a]}
@@ -100,7 +115,13 @@ export function ActionPanel({
           <label htmlFor={`${id}-tags`} className={labelClass}>
             Tags
           </label>
-          <input id={`${id}-tags`} value={tags} onChange={(e) => setTags(e.target.value)} aria-describedby={`${id}-tags-help`} className={inputClass} />
+          <input
+            id={`${id}-tags`}
+            value={tags}
+            onChange={(e) => setTags(e.target.value)}
+            aria-describedby={`${id}-tags-help`}
+            className={inputClass}
+          />
           <p id={`${id}-tags-help`} className="cw-muted mt-1 text-xs">
             One to five tag names as in the address, separated by commas (frost, storage).
           </p>
@@ -112,7 +133,15 @@ export function ActionPanel({
           <label htmlFor={`${id}-until`} className={labelClass}>
             Suspend until
           </label>
-          <input id={`${id}-until`} type="date" min={tomorrow()} value={until} onChange={(e) => setUntil(e.target.value)} required className={inputClass} />
+          <input
+            id={`${id}-until`}
+            type="date"
+            min={tomorrow()}
+            value={until}
+            onChange={(e) => setUntil(e.target.value)}
+            required
+            className={inputClass}
+          />
           <FieldError error={error} field="until" />
         </div>
       ) : null}

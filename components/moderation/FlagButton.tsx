@@ -10,7 +10,15 @@ const REASONS = Object.keys(FLAG_REASON_WORDS) as FlagReason[];
  * "Flag" beside a post: opens a small form asking why, then sends it to the review
  * queue. A note is required only for "other" — the other reasons say enough.
  */
-export function FlagButton({ postType, postId, onFlagged }: { postType: PostType; postId: number; onFlagged?: () => void }) {
+export function FlagButton({
+  postType,
+  postId,
+  onFlagged,
+}: {
+  postType: PostType;
+  postId: number;
+  onFlagged?: () => void;
+}) {
   const id = useId();
   const [open, setOpen] = useState(false);
   const [reason, setReason] = useState<FlagReason | null>(null);
@@ -36,10 +44,16 @@ export function FlagButton({ postType, postId, onFlagged }: { postType: PostType
     e.preventDefault();
     if (!reason) return setError({ field: 'reason', message: 'Choose why you are flagging this post.' });
     const trimmed = note.trim();
-    if (reason === 'other' && trimmed.length < 3) return setError({ field: 'note', message: 'Say what is wrong (at least 3 characters).' });
+    if (reason === 'other' && trimmed.length < 3)
+      return setError({ field: 'note', message: 'Say what is wrong (at least 3 characters).' });
     setBusy(true);
     setError(null);
-    const out = await sendJson<{ flagId: number; hidden: boolean }>('/api/flags', 'POST', { postType, postId, reason, ...(trimmed ? { note: trimmed } : {}) });
+    const out = await sendJson<{ flagId: number; hidden: boolean }>('/api/flags', 'POST', {
+      postType,
+      postId,
+      reason,
+      ...(trimmed ? { note: trimmed } : {}),
+    });
     setBusy(false);
     if (!out.ok) return setError(out.error);
     setDone(true);
@@ -47,7 +61,12 @@ export function FlagButton({ postType, postId, onFlagged }: { postType: PostType
   }
 
   return (
-    <form onSubmit={onSubmit} noValidate aria-label={`Flag this ${postType}`} className="mt-2 flex w-full flex-col gap-2 rounded-md border border-limestone-300 p-3 font-sans text-sm dark:border-creek-600">
+    <form
+      onSubmit={onSubmit}
+      noValidate
+      aria-label={`Flag this ${postType}`}
+      className="mt-2 flex w-full flex-col gap-2 rounded-md border border-limestone-300 p-3 font-sans text-sm dark:border-creek-600"
+    >
       <fieldset className="flex flex-col gap-1">
         <legend className="font-semibold">Why should a moderator look at this {postType}?</legend>
         {REASONS.map((r) => (

@@ -6,20 +6,34 @@ import type { PostType } from '@/lib/vocabulary';
  * while an "unsafe advice" flag is open, and — for moderators, the only readers who
  * receive such posts — whether it is hidden or deleted.
  */
-export function PostMarks({ post, kind }: { post: { cautionUnsafe: boolean; hiddenAt: string | null; deletedAt: string | null }; kind: PostType }) {
+export function PostMarks({
+  post,
+  kind,
+}: {
+  post: { cautionUnsafe: boolean; hiddenAt: string | null; deletedAt: string | null };
+  kind: PostType;
+}) {
   if (!post.cautionUnsafe && !post.hiddenAt && !post.deletedAt) return null;
   return (
     <>
       {post.hiddenAt || post.deletedAt ? (
         <p className="flex gap-2 self-start font-sans text-xs font-semibold" data-testid="moderation-state">
-          {post.hiddenAt ? <span className="rounded bg-signal-100 px-1.5 py-0.5 text-creek-900 dark:bg-signal-900 dark:text-signal-100">hidden — only moderators see this {kind}</span> : null}
-          {post.deletedAt ? <span className="rounded bg-clay-200 px-1.5 py-0.5 text-clay-700 dark:bg-clay-700 dark:text-limestone-50">deleted — only moderators see this {kind}</span> : null}
+          {post.hiddenAt ? (
+            <span className="rounded bg-signal-100 px-1.5 py-0.5 text-creek-900 dark:bg-signal-900 dark:text-signal-100">
+              hidden — only moderators see this {kind}
+            </span>
+          ) : null}
+          {post.deletedAt ? (
+            <span className="rounded bg-clay-200 px-1.5 py-0.5 text-clay-700 dark:bg-clay-700 dark:text-limestone-50">
+              deleted — only moderators see this {kind}
+            </span>
+          ) : null}
         </p>
       ) : null}
       {post.cautionUnsafe ? (
         <Caution title="Flagged as unsafe advice">
-          A member has flagged this {kind} as possibly unsafe, and a moderator will review it. Until then, check it against
-          the guides and local codes, and ask a licensed plumber or engineer before relying on it.
+          A member has flagged this {kind} as possibly unsafe, and a moderator will review it. Until then, check it
+          against the guides and local codes, and ask a licensed plumber or engineer before relying on it.
         </Caution>
       ) : null}
     </>

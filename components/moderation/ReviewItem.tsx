@@ -22,24 +22,48 @@ export interface ReviewItemView {
     /** a flagged photo's public id: the queue shows it even while hidden */
     photoId?: string | null;
   };
-  flags: { id: number; reason: FlagReason; note: string | null; flagger: { handle: string; displayName: string; role: string }; createdAt: string }[];
+  flags: {
+    id: number;
+    reason: FlagReason;
+    note: string | null;
+    flagger: { handle: string; displayName: string; role: string };
+    createdAt: string;
+  }[];
   revisions: { body: string; at: string; editor: string }[];
 }
 
 const when = (iso: string) => new Date(iso).toUTCString().slice(5, 22);
 
 /** A flagged post in context: where it sits, who wrote it, who flagged it and why, how it changed. */
-export function ReviewItem({ item, viewer, onDone }: { item: ReviewItemView; viewer: { id: number; handle: string; role: Role }; onDone: (message: string) => void }) {
+export function ReviewItem({
+  item,
+  viewer,
+  onDone,
+}: {
+  item: ReviewItemView;
+  viewer: { id: number; handle: string; role: Role };
+  onDone: (message: string) => void;
+}) {
   const { post, flags, revisions } = item;
   const authorName = post.author?.displayName ?? 'a removed member';
   const own = post.author?.id === viewer.id;
   const flaggedByMe = flags.some((f) => f.flagger.handle === viewer.handle);
   // the server refuses the same; saying so here spares a moderator a form that cannot succeed
   const outranked = post.author ? !can(viewer, MODERATING[post.author.role]) : false;
-  const where = { question: 'Question', answer: 'Answer on', reply: 'Reply on', photo: 'Photo on', 'field-log': 'Field log entry' }[post.type];
+  const where = {
+    question: 'Question',
+    answer: 'Answer on',
+    reply: 'Reply on',
+    photo: 'Photo on',
+    'field-log': 'Field log entry',
+  }[post.type];
 
   return (
-    <article className="cw-card flex flex-col gap-3" aria-label={`Flagged ${post.type} by ${authorName}`} data-review-item={`${post.type}:${post.id}`}>
+    <article
+      className="cw-card flex flex-col gap-3"
+      aria-label={`Flagged ${post.type} by ${authorName}`}
+      data-review-item={`${post.type}:${post.id}`}
+    >
       <header className="flex flex-col gap-1 font-sans">
         <p className="text-sm">
           {where}{' '}
@@ -66,8 +90,16 @@ export function ReviewItem({ item, viewer, onDone }: { item: ReviewItemView; vie
           {post.tags?.length ? ` · tags: ${post.tags.join(', ')}` : null}
         </p>
         <p className="flex flex-wrap gap-2 text-xs font-semibold">
-          {post.hiddenAt ? <span className="rounded bg-signal-100 px-1.5 py-0.5 text-creek-900 dark:bg-signal-900 dark:text-signal-100">hidden since {when(post.hiddenAt)}</span> : null}
-          {post.deletedAt ? <span className="rounded bg-clay-200 px-1.5 py-0.5 text-clay-700 dark:bg-clay-700 dark:text-limestone-50">deleted {when(post.deletedAt)}</span> : null}
+          {post.hiddenAt ? (
+            <span className="rounded bg-signal-100 px-1.5 py-0.5 text-creek-900 dark:bg-signal-900 dark:text-signal-100">
+              hidden since {when(post.hiddenAt)}
+            </span>
+          ) : null}
+          {post.deletedAt ? (
+            <span className="rounded bg-clay-200 px-1.5 py-0.5 text-clay-700 dark:bg-clay-700 dark:text-limestone-50">
+              deleted {when(post.deletedAt)}
+            </span>
+          ) : null}
           {!post.hiddenAt && !post.deletedAt ? <span className="cw-muted font-normal">shown to readers</span> : null}
         </p>
       </header>
@@ -77,8 +109,14 @@ export function ReviewItem({ item, viewer, onDone }: { item: ReviewItemView; vie
           <figure className="flex flex-col gap-1">
             {/* moderators are served hidden photos too */}
             {/* eslint-disable-next-line @next/next/no-img-element */}
-            <img src={`/api/photos/${post.photoId}`} alt={post.body || 'the flagged photo'} className="max-h-80 w-auto max-w-full rounded-md object-contain" />
-            <figcaption className="cw-muted font-sans text-xs">{post.body ? `Description: ${post.body}` : 'No description given.'}</figcaption>
+            <img
+              src={`/api/photos/${post.photoId}`}
+              alt={post.body || 'the flagged photo'}
+              className="max-h-80 w-auto max-w-full rounded-md object-contain"
+            />
+            <figcaption className="cw-muted font-sans text-xs">
+              {post.body ? `Description: ${post.body}` : 'No description given.'}
+            </figcaption>
           </figure>
         ) : (
           <MemberText>{post.body}</MemberText>

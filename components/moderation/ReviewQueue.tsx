@@ -24,17 +24,34 @@ export function ReviewQueue({ viewer }: { viewer: { id: number; handle: string; 
   const [reason, setReason] = useState<FlagReason | ''>('');
   const [age, setAge] = useState('');
   const [lastDone, setLastDone] = useState<string | null>(null);
-  const query = new URLSearchParams({ ...(reason ? { reason } : {}), ...(age ? { olderThanHours: age } : {}) }).toString();
-  const { data, error, isLoading, mutate } = useSWR(`/api/review${query ? `?${query}` : ''}`, getJson<{ items: ReviewItemView[] }>, { revalidateOnFocus: false });
+  const query = new URLSearchParams({
+    ...(reason ? { reason } : {}),
+    ...(age ? { olderThanHours: age } : {}),
+  }).toString();
+  const { data, error, isLoading, mutate } = useSWR(
+    `/api/review${query ? `?${query}` : ''}`,
+    getJson<{ items: ReviewItemView[] }>,
+    { revalidateOnFocus: false },
+  );
 
   return (
     <div className="flex flex-col gap-4">
-      <form role="search" aria-label="Filter the review queue" className="flex flex-wrap gap-4 font-sans text-sm" onSubmit={(e) => e.preventDefault()}>
+      <form
+        role="search"
+        aria-label="Filter the review queue"
+        className="flex flex-wrap gap-4 font-sans text-sm"
+        onSubmit={(e) => e.preventDefault()}
+      >
         <span className="flex flex-col">
           <label htmlFor={`${id}-reason`} className="font-semibold">
             Flag reason
           </label>
-          <select id={`${id}-reason`} value={reason} onChange={(e) => setReason(e.target.value as FlagReason | '')} className="mt-1 rounded-md border border-limestone-400 bg-limestone-50 px-2 py-1 dark:bg-creek-950">
+          <select
+            id={`${id}-reason`}
+            value={reason}
+            onChange={(e) => setReason(e.target.value as FlagReason | '')}
+            className="mt-1 rounded-md border border-limestone-400 bg-limestone-50 px-2 py-1 dark:bg-creek-950"
+          >
             <option value="">any reason</option>
             {REASONS.map((r) => (
               <option key={r} value={r}>
@@ -47,7 +64,12 @@ export function ReviewQueue({ viewer }: { viewer: { id: number; handle: string; 
           <label htmlFor={`${id}-age`} className="font-semibold">
             Flag age
           </label>
-          <select id={`${id}-age`} value={age} onChange={(e) => setAge(e.target.value)} className="mt-1 rounded-md border border-limestone-400 bg-limestone-50 px-2 py-1 dark:bg-creek-950">
+          <select
+            id={`${id}-age`}
+            value={age}
+            onChange={(e) => setAge(e.target.value)}
+            className="mt-1 rounded-md border border-limestone-400 bg-limestone-50 px-2 py-1 dark:bg-creek-950"
+          >
             {AGES.map((a) => (
               <option key={a.value} value={a.value}>
                 {a.label}
@@ -70,10 +92,14 @@ export function ReviewQueue({ viewer }: { viewer: { id: number; handle: string; 
       ) : isLoading || !data ? (
         <p className="cw-muted font-sans text-sm">Loading the review queue…</p>
       ) : data.items.length === 0 ? (
-        <p className="cw-muted font-sans text-sm">Nothing is waiting{reason || age ? ' that matches these filters' : ''}.</p>
+        <p className="cw-muted font-sans text-sm">
+          Nothing is waiting{reason || age ? ' that matches these filters' : ''}.
+        </p>
       ) : (
         <>
-          <p className="cw-muted font-sans text-sm">{data.items.length === 1 ? '1 post waiting' : `${data.items.length} posts waiting`}, oldest flag first.</p>
+          <p className="cw-muted font-sans text-sm">
+            {data.items.length === 1 ? '1 post waiting' : `${data.items.length} posts waiting`}, oldest flag first.
+          </p>
           <ol className="flex flex-col gap-4">
             {data.items.map((item) => (
               <li key={`${item.post.type}:${item.post.id}`}>

@@ -32,10 +32,13 @@ function LiftForm({ member, onDone }: { member: SuspendedView; onDone: (message:
   async function onSubmit(e: FormEvent<HTMLFormElement>) {
     e.preventDefault();
     const why = reason.trim();
-    if (why.length < 3) return setError({ field: 'reason', message: 'Lifting a suspension needs a reason (at least 3 characters).' });
+    if (why.length < 3)
+      return setError({ field: 'reason', message: 'Lifting a suspension needs a reason (at least 3 characters).' });
     setBusy(true);
     setError(null);
-    const out = await sendJson<{ auditId: number }>(`/api/review/suspensions/${member.id}/lift`, 'POST', { reason: why });
+    const out = await sendJson<{ auditId: number }>(`/api/review/suspensions/${member.id}/lift`, 'POST', {
+      reason: why,
+    });
     setBusy(false);
     if (!out.ok) return setError(out.error);
     setReason('');
@@ -45,16 +48,29 @@ function LiftForm({ member, onDone }: { member: SuspendedView; onDone: (message:
   return (
     <li className="cw-card flex flex-col gap-2 font-sans text-sm">
       <p>
-        <span className="font-semibold">{member.displayName}</span> <span className="cw-muted">@{member.handle}</span>, suspended until{' '}
-        <span className="cw-num">{day(member.until)}</span>
+        <span className="font-semibold">{member.displayName}</span> <span className="cw-muted">@{member.handle}</span>,
+        suspended until <span className="cw-num">{day(member.until)}</span>
         {member.reason ? <> — “{member.reason}”</> : null}
       </p>
-      <form onSubmit={onSubmit} noValidate aria-label={`Lift the suspension of ${member.displayName}`} className="flex flex-col gap-2">
+      <form
+        onSubmit={onSubmit}
+        noValidate
+        aria-label={`Lift the suspension of ${member.displayName}`}
+        className="flex flex-col gap-2"
+      >
         <div>
           <label htmlFor={`${id}-reason`} className={labelClass}>
             Reason for lifting it
           </label>
-          <input id={`${id}-reason`} value={reason} onChange={(e) => setReason(e.target.value)} minLength={3} maxLength={1000} required className={inputClass} />
+          <input
+            id={`${id}-reason`}
+            value={reason}
+            onChange={(e) => setReason(e.target.value)}
+            minLength={3}
+            maxLength={1000}
+            required
+            className={inputClass}
+          />
           <FieldError error={error} field="reason" />
         </div>
         <FieldError error={error} />

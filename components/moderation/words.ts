@@ -1,5 +1,10 @@
 /** The review queue's plain words, shared by the flag form, the queue and the audit log. */
-import { QUESTION_ONLY_ACTIONS, type FlagReason, type ModeratedType as PostType, type ModerationAction } from '@/lib/vocabulary';
+import {
+  QUESTION_ONLY_ACTIONS,
+  type FlagReason,
+  type ModeratedType as PostType,
+  type ModerationAction,
+} from '@/lib/vocabulary';
 
 export type { FlagReason, ModerationAction, PostType };
 

@@ -22,7 +22,15 @@ const webUrl = (id: string) => `/api/photos/${id}`;
  * viewer is a native modal <dialog>: it keeps focus inside, closes on Esc and
  * returns focus to the thumbnail. Arrow keys and buttons step through the photos.
  */
-export function PhotoGallery({ photos, label = 'Photos', canFlag = false }: { photos: GalleryPhoto[]; label?: string; canFlag?: boolean }) {
+export function PhotoGallery({
+  photos,
+  label = 'Photos',
+  canFlag = false,
+}: {
+  photos: GalleryPhoto[];
+  label?: string;
+  canFlag?: boolean;
+}) {
   const dialog = useRef<HTMLDialogElement>(null);
   const [open, setOpen] = useState<number | null>(null);
   const count = photos.length;
@@ -58,10 +66,20 @@ export function PhotoGallery({ photos, label = 'Photos', canFlag = false }: { ph
       <ul className="flex flex-wrap gap-2">
         {photos.map((p, i) => (
           <li key={p.id}>
-            <button type="button" onClick={() => show(i)} className="block rounded-md border border-limestone-300 hover:border-clay dark:border-creek-600" aria-label={`Open ${describe(p, i)}`}>
+            <button
+              type="button"
+              onClick={() => show(i)}
+              className="block rounded-md border border-limestone-300 hover:border-clay dark:border-creek-600"
+              aria-label={`Open ${describe(p, i)}`}
+            >
               {/* our own route serves a sized WebP already; next/image would re-encode it */}
               {/* eslint-disable-next-line @next/next/no-img-element */}
-              <img src={thumbUrl(p.id)} alt="" loading="lazy" className={`h-24 w-24 rounded-md object-cover ${p.hidden ? 'opacity-50' : ''}`} />
+              <img
+                src={thumbUrl(p.id)}
+                alt=""
+                loading="lazy"
+                className={`h-24 w-24 rounded-md object-cover ${p.hidden ? 'opacity-50' : ''}`}
+              />
             </button>
             {p.hidden ? <span className="block text-center font-sans text-xs font-semibold">hidden</span> : null}
           </li>

@@ -19,7 +19,15 @@ const MB = 1024 * 1024;
  * POST /api/photos; the form that owns this picker sends the ids with the post,
  * and the server attaches them when the post is saved.
  */
-export function PhotoPicker({ onChange, initial = [], max = PHOTO_LIMITS.maxFiles }: { onChange: (ids: string[]) => void; initial?: PickedPhoto[]; max?: number }) {
+export function PhotoPicker({
+  onChange,
+  initial = [],
+  max = PHOTO_LIMITS.maxFiles,
+}: {
+  onChange: (ids: string[]) => void;
+  initial?: PickedPhoto[];
+  max?: number;
+}) {
   const id = useId();
   const input = useRef<HTMLInputElement>(null);
   const [photos, setPhotos] = useState<PickedPhoto[]>(initial);
@@ -37,17 +45,23 @@ export function PhotoPicker({ onChange, initial = [], max = PHOTO_LIMITS.maxFile
     e.target.value = '';
     if (chosen.length === 0) return;
     setError(null);
-    if (chosen.length > room) return setError(`You can add ${room} more photo${room === 1 ? '' : 's'} (${max} at most).`);
+    if (chosen.length > room)
+      return setError(`You can add ${room} more photo${room === 1 ? '' : 's'} (${max} at most).`);
     const tooBig = chosen.find((f) => f.size > PHOTO_LIMITS.maxFileBytes);
-    if (tooBig) return setError(`“${tooBig.name}” is larger than ${PHOTO_LIMITS.maxFileBytes / MB} MB, the limit for one photo.`);
+    if (tooBig)
+      return setError(`“${tooBig.name}” is larger than ${PHOTO_LIMITS.maxFileBytes / MB} MB, the limit for one photo.`);
 
     const form = new FormData();
     for (const f of chosen) form.append('photos', f);
     setBusy(true);
     try {
       const res = await fetch('/api/photos', { method: 'POST', body: form });
-      const json = (await res.json().catch(() => null)) as { photos?: PickedPhoto[]; error?: { message?: string } } | null;
-      if (!res.ok || !json?.photos) return setError(json?.error?.message ?? `The photos could not be added (${res.status}).`);
+      const json = (await res.json().catch(() => null)) as {
+        photos?: PickedPhoto[];
+        error?: { message?: string };
+      } | null;
+      if (!res.ok || !json?.photos)
+        return setError(json?.error?.message ?? `The photos could not be added (${res.status}).`);
       update([...photos, ...json.photos]);
     } catch {
       setError('Clackwater could not be reached. Check your connection and try again.');
@@ -62,7 +76,8 @@ export function PhotoPicker({ onChange, initial = [], max = PHOTO_LIMITS.maxFile
         Photos (optional)
       </label>
       <p id={`${id}-hint`} className="cw-muted text-sm">
-        JPEG, PNG or WebP, up to {max} photos of {PHOTO_LIMITS.maxFileBytes / MB} MB each. Location and camera details are removed.
+        JPEG, PNG or WebP, up to {max} photos of {PHOTO_LIMITS.maxFileBytes / MB} MB each. Location and camera details
+        are removed.
       </p>
       <input
         ref={input}
@@ -91,8 +106,16 @@ export function PhotoPicker({ onChange, initial = [], max = PHOTO_LIMITS.maxFile
             <li key={p.id} className="flex flex-col items-start gap-1">
               {/* our own route serves a sized WebP already; next/image would re-encode it */}
               {/* eslint-disable-next-line @next/next/no-img-element */}
-              <img src={p.thumbUrl} alt={`Photo ${i + 1} of ${photos.length}`} className="h-24 w-24 rounded-md border border-limestone-300 object-cover dark:border-creek-600" />
-              <button type="button" className="cw-link text-sm" onClick={() => update(photos.filter((x) => x.id !== p.id))}>
+              <img
+                src={p.thumbUrl}
+                alt={`Photo ${i + 1} of ${photos.length}`}
+                className="h-24 w-24 rounded-md border border-limestone-300 object-cover dark:border-creek-600"
+              />
+              <button
+                type="button"
+                className="cw-link text-sm"
+                onClick={() => update(photos.filter((x) => x.id !== p.id))}
+              >
                 Remove<span className="sr-only"> photo {i + 1}</span>
               </button>
             </li>

@@ -66,7 +66,9 @@ const components: Components = {
       {children}
     </ol>
   ),
-  blockquote: ({ children }) => <blockquote className="border-l-4 border-limestone-300 pl-3 italic dark:border-creek-600">{children}</blockquote>,
+  blockquote: ({ children }) => (
+    <blockquote className="border-l-4 border-limestone-300 pl-3 italic dark:border-creek-600">{children}</blockquote>
+  ),
   table: ({ children }) => (
     <div className="overflow-x-auto">
       <table className="cw-num border-collapse font-sans text-sm">{children}</table>
@@ -82,7 +84,11 @@ const components: Components = {
       {children}
     </td>
   ),
-  pre: ({ children }) => <pre className="overflow-x-auto rounded-md bg-limestone-200 p-3 font-mono text-sm dark:bg-creek-800">{children}</pre>,
+  pre: ({ children }) => (
+    <pre className="overflow-x-auto rounded-md bg-limestone-200 p-3 font-mono text-sm dark:bg-creek-800">
+      {children}
+    </pre>
+  ),
 };
 
 /**
@@ -96,7 +102,10 @@ export function MemberText({ children }: { children: string }) {
       <Markdown
         remarkPlugins={[remarkGfm, remarkMath]}
         // sanitize first, then typeset: KaTeX's markup is ours, the member's HTML is not
-        rehypePlugins={[[rehypeSanitize, memberSchema], [rehypeKatex, { throwOnError: false, strict: 'ignore', trust: false }]]}
+        rehypePlugins={[
+          [rehypeSanitize, memberSchema],
+          [rehypeKatex, { throwOnError: false, strict: 'ignore', trust: false }],
+        ]}
         urlTransform={memberUrlTransform}
         components={components}
       >

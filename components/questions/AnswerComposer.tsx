@@ -11,7 +11,15 @@ import { sendJson } from '@/components/forms/api';
  * from the question's site sheet, adjust it, attach it. The calculation is saved
  * (the server recomputes it) and linked to the answer.
  */
-export function AnswerComposer({ questionId, siteSheet, onPosted }: { questionId: number; siteSheet: Record<string, string> | null; onPosted: () => void }) {
+export function AnswerComposer({
+  questionId,
+  siteSheet,
+  onPosted,
+}: {
+  questionId: number;
+  siteSheet: Record<string, string> | null;
+  onPosted: () => void;
+}) {
   const [body, setBody] = useState('');
   const [tool, setTool] = useState('');
   const [form, setForm] = useState<FormState | null>(null);
@@ -29,7 +37,10 @@ export function AnswerComposer({ questionId, siteSheet, onPosted }: { questionId
         e.preventDefault();
         setBusy(true);
         setError(null);
-        const r = await sendJson(`/api/questions/${questionId}/answers`, 'POST', { body, ...(attached ? { calculationId: attached.id } : {}) });
+        const r = await sendJson(`/api/questions/${questionId}/answers`, 'POST', {
+          body,
+          ...(attached ? { calculationId: attached.id } : {}),
+        });
         setBusy(false);
         if (r.ok) {
           setBody('');
@@ -43,7 +54,13 @@ export function AnswerComposer({ questionId, siteSheet, onPosted }: { questionId
       <label htmlFor="answer-body" className="text-sm font-medium">
         Answer (Markdown; math between $ signs)
       </label>
-      <textarea id="answer-body" value={body} onChange={(e) => setBody(e.target.value)} rows={7} className="rounded-md border border-limestone-400 bg-limestone-50 p-2 font-serif dark:bg-creek-950" />
+      <textarea
+        id="answer-body"
+        value={body}
+        onChange={(e) => setBody(e.target.value)}
+        rows={7}
+        className="rounded-md border border-limestone-400 bg-limestone-50 p-2 font-serif dark:bg-creek-950"
+      />
       {error && (!error.field || error.field === 'body') ? (
         <p role="alert" className="text-sm font-semibold text-signal-700 dark:text-signal-300">
           {error.message}
@@ -53,7 +70,15 @@ export function AnswerComposer({ questionId, siteSheet, onPosted }: { questionId
         <label htmlFor="answer-tool" className="text-sm font-medium">
           Add a worked calculation
         </label>
-        <select id="answer-tool" value={tool} onChange={(e) => { setTool(e.target.value); setAttached(null); }} className="rounded-md border border-limestone-400 bg-limestone-50 p-2 dark:bg-creek-950">
+        <select
+          id="answer-tool"
+          value={tool}
+          onChange={(e) => {
+            setTool(e.target.value);
+            setAttached(null);
+          }}
+          className="rounded-md border border-limestone-400 bg-limestone-50 p-2 dark:bg-creek-950"
+        >
           <option value="">None</option>
           {CALCULATOR_LIST.map((c) => (
             <option key={c.id} value={c.id}>
@@ -63,7 +88,12 @@ export function AnswerComposer({ questionId, siteSheet, onPosted }: { questionId
         </select>
         {def ? (
           <>
-            <CalculatorCard key={tool} def={def} props={calculatorPropsFromSiteSheet(def.id, siteSheet)} onOutput={onOutput} />
+            <CalculatorCard
+              key={tool}
+              def={def}
+              props={calculatorPropsFromSiteSheet(def.id, siteSheet)}
+              onOutput={onOutput}
+            />
             {attached ? (
               <p role="status" className="text-sm text-moss-600 dark:text-moss-300" data-testid="calculation-attached">
                 Worked calculation attached. Change it and attach again to replace it.
@@ -75,7 +105,10 @@ export function AnswerComposer({ questionId, siteSheet, onPosted }: { questionId
               disabled={!form}
               onClick={async () => {
                 if (!form) return;
-                const r = await sendJson<{ id: string }>('/api/calculations', 'POST', { tool, inputs: Object.fromEntries(shareQuery(def.fields, form).entries()) });
+                const r = await sendJson<{ id: string }>('/api/calculations', 'POST', {
+                  tool,
+                  inputs: Object.fromEntries(shareQuery(def.fields, form).entries()),
+                });
                 if (r.ok) setAttached({ id: r.data.id, tool });
                 else setError(r.error);
               }}
@@ -93,7 +126,19 @@ export function AnswerComposer({ questionId, siteSheet, onPosted }: { questionId
 }
 
 /** A short reply box under a post. */
-export function ReplyComposer({ questionId, answerId, replyToId, onPosted, label = 'Reply' }: { questionId: number; answerId?: number | null; replyToId?: number; onPosted: () => void; label?: string }) {
+export function ReplyComposer({
+  questionId,
+  answerId,
+  replyToId,
+  onPosted,
+  label = 'Reply',
+}: {
+  questionId: number;
+  answerId?: number | null;
+  replyToId?: number;
+  onPosted: () => void;
+  label?: string;
+}) {
   const [open, setOpen] = useState(false);
   const [text, setText] = useState('');
   const [error, setError] = useState<string | null>(null);
@@ -109,7 +154,11 @@ export function ReplyComposer({ questionId, answerId, replyToId, onPosted, label
       className="mt-2 flex flex-col gap-2"
       onSubmit={async (e) => {
         e.preventDefault();
-        const r = await sendJson(`/api/questions/${questionId}/replies`, 'POST', { body: text, ...(answerId ? { answerId } : {}), ...(replyToId ? { replyToId } : {}) });
+        const r = await sendJson(`/api/questions/${questionId}/replies`, 'POST', {
+          body: text,
+          ...(answerId ? { answerId } : {}),
+          ...(replyToId ? { replyToId } : {}),
+        });
         if (r.ok) {
           setText('');
           setOpen(false);
@@ -120,7 +169,13 @@ export function ReplyComposer({ questionId, answerId, replyToId, onPosted, label
       <label htmlFor={id} className="text-xs font-semibold">
         Your reply
       </label>
-      <textarea id={id} value={text} onChange={(e) => setText(e.target.value)} rows={3} className="rounded-md border border-limestone-400 bg-limestone-50 p-2 font-serif text-sm dark:bg-creek-950" />
+      <textarea
+        id={id}
+        value={text}
+        onChange={(e) => setText(e.target.value)}
+        rows={3}
+        className="rounded-md border border-limestone-400 bg-limestone-50 p-2 font-serif text-sm dark:bg-creek-950"
+      />
       {error ? (
         <p role="alert" className="text-xs text-signal-700 dark:text-signal-300">
           {error}

@@ -21,25 +21,43 @@ const MEASUREMENTS: { name: SiteSheetField; label: string; hint: string }[] = [
   { name: 'fall', label: 'Fall', hint: 'from the intake’s water surface down to the pump, e.g. “4 ft” or “1.2 m”' },
   { name: 'lift', label: 'Lift', hint: 'from the pump up to the tank’s inlet, e.g. “29 ft”' },
   { name: 'driveLength', label: 'Drive pipe length', hint: 'e.g. “24 ft”' },
-  { name: 'sourceFlow', label: 'Source flow the source can spare', hint: 'in the driest month, e.g. “5 gal/min” or “20 L/min”' },
+  {
+    name: 'sourceFlow',
+    label: 'Source flow the source can spare',
+    hint: 'in the driest month, e.g. “5 gal/min” or “20 L/min”',
+  },
   { name: 'pumps', label: 'Pumps', hint: 'how many rams share the source' },
   { name: 'driveFlow', label: 'Measured drive flow of one pump', hint: 'optional, e.g. “4 gal/min”' },
   { name: 'delivered', label: 'Measured delivery', hint: 'optional, at the tank, e.g. “0.5 gal/min”' },
   { name: 'bpm', label: 'Beats per minute', hint: 'optional, count the waste valve for a minute' },
   { name: 'deliveryLength', label: 'Delivery pipe length', hint: 'optional, e.g. “300 ft”' },
 ];
-const PUMP_AND_PIPES: { name: SiteSheetField; label: string; options: readonly { value: string; label: string }[] }[] = [
-  { name: 'driveSize', label: 'Drive pipe size', options: sizeOptions },
-  { name: 'driveMaterial', label: 'Drive pipe material', options: seriesOptions },
-  { name: 'pumpSize', label: 'Pump size', options: sizeOptions },
-  { name: 'deliverySize', label: 'Delivery pipe size', options: sizeOptions },
-  { name: 'deliveryMaterial', label: 'Delivery pipe material', options: seriesOptions },
-];
+const PUMP_AND_PIPES: { name: SiteSheetField; label: string; options: readonly { value: string; label: string }[] }[] =
+  [
+    { name: 'driveSize', label: 'Drive pipe size', options: sizeOptions },
+    { name: 'driveMaterial', label: 'Drive pipe material', options: seriesOptions },
+    { name: 'pumpSize', label: 'Pump size', options: sizeOptions },
+    { name: 'deliverySize', label: 'Delivery pipe size', options: sizeOptions },
+    { name: 'deliveryMaterial', label: 'Delivery pipe material', options: seriesOptions },
+  ];
 
 /** The stall check cannot run without these; until they are typed it only checks what is there. */
 const STALL_NEEDS = ['fall', 'lift', 'driveLength', 'driveSize', 'driveMaterial'] as const;
 /** The site sheet's names are the stall check card's prop names; the delivery pipe is not one of its inputs. */
-const STALL_PROPS = ['fall', 'lift', 'driveLength', 'driveSize', 'driveMaterial', 'sourceFlow', 'pumpSize', 'pumps', 'driveFlow', 'delivered', 'bpm', 'symptoms'] as const;
+const STALL_PROPS = [
+  'fall',
+  'lift',
+  'driveLength',
+  'driveSize',
+  'driveMaterial',
+  'sourceFlow',
+  'pumpSize',
+  'pumps',
+  'driveFlow',
+  'delivered',
+  'bpm',
+  'symptoms',
+] as const;
 
 const blank = (v: string | undefined) => !v || v.trim() === '';
 
@@ -61,9 +79,14 @@ function runStall(sheet: SiteSheet): StallView {
   try {
     // With a box still empty, check what the member did type: stand-ins fill the gaps only so the
     // engine can read the rest, and only its complaints about the member's own numbers are shown.
-    const probe = missing.length ? { ...props, ...Object.fromEntries(missing.map((k) => [k, CALCULATORS['stall-check'].defaults[k] ?? ''])) } : props;
+    const probe = missing.length
+      ? { ...props, ...Object.fromEntries(missing.map((k) => [k, CALCULATORS['stall-check'].defaults[k] ?? ''])) }
+      : props;
     const r = recompute(CALCULATORS['stall-check'], probe);
-    if (!r.ok) return r.field && (missing as readonly string[]).includes(r.field) ? needs(missing) : { kind: 'refused', field: r.field, message: r.message };
+    if (!r.ok)
+      return r.field && (missing as readonly string[]).includes(r.field)
+        ? needs(missing)
+        : { kind: 'refused', field: r.field, message: r.message };
     if (missing.length) return needs(missing);
     return { kind: 'causes', node: CALCULATOR_VIEWS['stall-check']?.extra?.(r.output.results, 'US') };
   } catch {
@@ -104,7 +127,9 @@ function useSimilarQuestions(title: string, tags: string[], fall: string, lift: 
     const ctl = new AbortController();
     // wait for a pause in typing rather than asking on every keystroke — common practice, no source
     const timer = setTimeout(async () => {
-      const r = await sendJson<{ items?: SimilarQuestion[] }>(`/api/questions/similar?${q}`, 'GET', undefined, { signal: ctl.signal });
+      const r = await sendJson<{ items?: SimilarQuestion[] }>(`/api/questions/similar?${q}`, 'GET', undefined, {
+        signal: ctl.signal,
+      });
       if (!ctl.signal.aborted) setItems(r.ok && Array.isArray(r.data?.items) ? r.data.items.slice(0, 5) : []);
     }, 400);
     return () => {
@@ -116,7 +141,12 @@ function useSimilarQuestions(title: string, tags: string[], fall: string, lift: 
 }
 
 /** Asking a question: title, what happened (Markdown, previewed), tags, the site sheet, photos. */
-export function AskForm({ tags, defaultTag, guide, fromFieldLog }: {
+export function AskForm({
+  tags,
+  defaultTag,
+  guide,
+  fromFieldLog,
+}: {
   tags: { slug: string; name: string }[];
   defaultTag?: string;
   guide?: string;
@@ -150,7 +180,10 @@ export function AskForm({ tags, defaultTag, guide, fromFieldLog }: {
   const title = useDeferredValue(useWatch({ control, name: 'title' }) ?? '');
   // keyed on the values, not the object: the engine runs once per change to the site sheet
   const sheetKey = JSON.stringify(STALL_PROPS.map((k) => sheet[k] ?? ''));
-  const stall = useMemo(() => runStall(Object.fromEntries(STALL_PROPS.map((k, i) => [k, (JSON.parse(sheetKey) as string[])[i]]))), [sheetKey]);
+  const stall = useMemo(
+    () => runStall(Object.fromEntries(STALL_PROPS.map((k, i) => [k, (JSON.parse(sheetKey) as string[])[i]]))),
+    [sheetKey],
+  );
   const similar = useSimilarQuestions(title, chosenTags, sheet.fall ?? '', sheet.lift ?? '');
 
   async function onSubmit(values: AskOutput) {
@@ -164,35 +197,73 @@ export function AskForm({ tags, defaultTag, guide, fromFieldLog }: {
       return;
     }
     const field = out.error.field;
-    const known = field && (['title', 'body', 'tags', 'photoIds', 'guide'].includes(field) || /^siteSheet\.\w+$/.test(field));
-    setError(known ? (field as FieldPath<AskInput>) : 'root.server', { message: out.error.message }, { shouldFocus: true });
+    const known =
+      field && (['title', 'body', 'tags', 'photoIds', 'guide'].includes(field) || /^siteSheet\.\w+$/.test(field));
+    setError(
+      known ? (field as FieldPath<AskInput>) : 'root.server',
+      { message: out.error.message },
+      { shouldFocus: true },
+    );
   }
 
   const describe = (name: string, hint?: boolean) =>
     [hint ? `${id(name)}-hint` : '', errorAt(name) ? `${id(name)}-error` : ''].filter(Boolean).join(' ') || undefined;
   const errorAt = (name: string): string | undefined => {
-    if (name.startsWith('siteSheet.')) return (errors.siteSheet as Record<string, { message?: string } | undefined> | undefined)?.[name.slice(10)]?.message;
+    if (name.startsWith('siteSheet.'))
+      return (errors.siteSheet as Record<string, { message?: string } | undefined> | undefined)?.[name.slice(10)]
+        ?.message;
     return (errors as Record<string, { message?: string } | undefined>)[name]?.message;
   };
 
   return (
-    <form onSubmit={handleSubmit(onSubmit)} noValidate className="flex flex-col gap-4 font-sans lg:grid lg:grid-cols-[minmax(0,1fr)_20rem] lg:items-start">
+    <form
+      onSubmit={handleSubmit(onSubmit)}
+      noValidate
+      className="flex flex-col gap-4 font-sans lg:grid lg:grid-cols-[minmax(0,1fr)_20rem] lg:items-start"
+    >
       <div className="flex flex-col gap-4">
         <section className="cw-card flex flex-col gap-4" aria-labelledby={id('q')}>
-          <h2 id={id('q')} className="font-serif text-xl font-semibold">Your question</h2>
+          <h2 id={id('q')} className="font-serif text-xl font-semibold">
+            Your question
+          </h2>
           <div>
-            <label htmlFor={id('title')} className={labelClass}>Title</label>
-            <input id={id('title')} {...register('title')} maxLength={160} aria-invalid={errorAt('title') ? true : undefined} aria-describedby={describe('title')} className={inputClass} />
+            <label htmlFor={id('title')} className={labelClass}>
+              Title
+            </label>
+            <input
+              id={id('title')}
+              {...register('title')}
+              maxLength={160}
+              aria-invalid={errorAt('title') ? true : undefined}
+              aria-describedby={describe('title')}
+              className={inputClass}
+            />
             <FieldMessage id={`${id('title')}-error`} message={errorAt('title')} />
           </div>
           <div>
-            <label htmlFor={id('body')} className={labelClass}>What happened</label>
-            <p id={`${id('body')}-hint`} className="cw-muted text-sm">What you built, what it does, what you have tried. Markdown works; math in $…$.</p>
-            <textarea id={id('body')} {...register('body')} rows={8} aria-invalid={errorAt('body') ? true : undefined} aria-describedby={describe('body', true)} className={`${inputClass} font-serif`} />
+            <label htmlFor={id('body')} className={labelClass}>
+              What happened
+            </label>
+            <p id={`${id('body')}-hint`} className="cw-muted text-sm">
+              What you built, what it does, what you have tried. Markdown works; math in $…$.
+            </p>
+            <textarea
+              id={id('body')}
+              {...register('body')}
+              rows={8}
+              aria-invalid={errorAt('body') ? true : undefined}
+              aria-describedby={describe('body', true)}
+              className={`${inputClass} font-serif`}
+            />
             <FieldMessage id={`${id('body')}-error`} message={errorAt('body')} />
             {body.trim() ? (
-              <section aria-labelledby={id('preview')} className="mt-2 rounded-md border border-dashed border-limestone-400 p-3 dark:border-creek-500">
-                <h3 id={id('preview')} className="cw-muted text-xs font-semibold uppercase tracking-wide">Preview</h3>
+              <section
+                aria-labelledby={id('preview')}
+                className="mt-2 rounded-md border border-dashed border-limestone-400 p-3 dark:border-creek-500"
+              >
+                <h3 id={id('preview')} className="cw-muted text-xs font-semibold uppercase tracking-wide">
+                  Preview
+                </h3>
                 <MemberText>{body}</MemberText>
               </section>
             ) : null}
@@ -205,12 +276,21 @@ export function AskForm({ tags, defaultTag, guide, fromFieldLog }: {
               render={({ field }) => (
                 <div className="mt-1 flex flex-wrap gap-2">
                   {tags.map((t) => (
-                    <label key={t.slug} className="flex items-center gap-2 rounded-full border border-limestone-400 px-3 py-1 text-sm has-[:checked]:border-creek has-[:checked]:bg-creek-100 dark:border-creek-500 dark:has-[:checked]:bg-creek-700">
+                    <label
+                      key={t.slug}
+                      className="flex items-center gap-2 rounded-full border border-limestone-400 px-3 py-1 text-sm has-[:checked]:border-creek has-[:checked]:bg-creek-100 dark:border-creek-500 dark:has-[:checked]:bg-creek-700"
+                    >
                       <input
                         type="checkbox"
                         value={t.slug}
                         checked={field.value?.includes(t.slug) ?? false}
-                        onChange={(e) => field.onChange(e.target.checked ? [...(field.value ?? []), t.slug] : (field.value ?? []).filter((s) => s !== t.slug))}
+                        onChange={(e) =>
+                          field.onChange(
+                            e.target.checked
+                              ? [...(field.value ?? []), t.slug]
+                              : (field.value ?? []).filter((s) => s !== t.slug),
+                          )
+                        }
                         onBlur={field.onBlur}
                       />
                       {t.name}
@@ -225,17 +305,33 @@ export function AskForm({ tags, defaultTag, guide, fromFieldLog }: {
 
         <section className="cw-card flex flex-col gap-4" aria-labelledby={id('sheet')}>
           <div>
-            <h2 id={id('sheet')} className="font-serif text-xl font-semibold">Site sheet</h2>
-            <p className="cw-muted text-sm">Your measurements, each with its unit. Answerers can rerun them; leave out what you do not know.</p>
+            <h2 id={id('sheet')} className="font-serif text-xl font-semibold">
+              Site sheet
+            </h2>
+            <p className="cw-muted text-sm">
+              Your measurements, each with its unit. Answerers can rerun them; leave out what you do not know.
+            </p>
           </div>
           <div className="grid gap-4 sm:grid-cols-2">
             {MEASUREMENTS.map((m) => {
               const name = `siteSheet.${m.name}` as const;
               return (
                 <div key={m.name}>
-                  <label htmlFor={id(name)} className={labelClass}>{m.label}</label>
-                  <input id={id(name)} {...register(name)} inputMode="text" autoComplete="off" aria-invalid={errorAt(name) ? true : undefined} aria-describedby={describe(name, true)} className={`${inputClass} cw-num`} />
-                  <p id={`${id(name)}-hint`} className="cw-muted mt-1 text-xs">{m.hint}</p>
+                  <label htmlFor={id(name)} className={labelClass}>
+                    {m.label}
+                  </label>
+                  <input
+                    id={id(name)}
+                    {...register(name)}
+                    inputMode="text"
+                    autoComplete="off"
+                    aria-invalid={errorAt(name) ? true : undefined}
+                    aria-describedby={describe(name, true)}
+                    className={`${inputClass} cw-num`}
+                  />
+                  <p id={`${id(name)}-hint`} className="cw-muted mt-1 text-xs">
+                    {m.hint}
+                  </p>
                   <FieldMessage id={`${id(name)}-error`} message={errorAt(name)} />
                 </div>
               );
@@ -244,11 +340,21 @@ export function AskForm({ tags, defaultTag, guide, fromFieldLog }: {
               const name = `siteSheet.${s.name}` as const;
               return (
                 <div key={s.name}>
-                  <label htmlFor={id(name)} className={labelClass}>{s.label}</label>
-                  <select id={id(name)} {...register(name)} aria-invalid={errorAt(name) ? true : undefined} aria-describedby={describe(name)} className={inputClass}>
+                  <label htmlFor={id(name)} className={labelClass}>
+                    {s.label}
+                  </label>
+                  <select
+                    id={id(name)}
+                    {...register(name)}
+                    aria-invalid={errorAt(name) ? true : undefined}
+                    aria-describedby={describe(name)}
+                    className={inputClass}
+                  >
                     <option value="">not known</option>
                     {s.options.map((o) => (
-                      <option key={o.value} value={o.value}>{o.label}</option>
+                      <option key={o.value} value={o.value}>
+                        {o.label}
+                      </option>
                     ))}
                   </select>
                   <FieldMessage id={`${id(name)}-error`} message={errorAt(name)} />
@@ -267,7 +373,14 @@ export function AskForm({ tags, defaultTag, guide, fromFieldLog }: {
                   <div className="mt-1 grid gap-2 sm:grid-cols-2">
                     {SYMPTOMS.map((s) => (
                       <label key={s} className="flex items-center gap-2 text-sm">
-                        <input type="checkbox" checked={on.includes(s)} onBlur={field.onBlur} onChange={(e) => field.onChange((e.target.checked ? [...on, s] : on.filter((x) => x !== s)).join(','))} />
+                        <input
+                          type="checkbox"
+                          checked={on.includes(s)}
+                          onBlur={field.onBlur}
+                          onChange={(e) =>
+                            field.onChange((e.target.checked ? [...on, s] : on.filter((x) => x !== s)).join(','))
+                          }
+                        />
                         {SYMPTOM_LABELS[s]}
                       </label>
                     ))}
@@ -280,22 +393,36 @@ export function AskForm({ tags, defaultTag, guide, fromFieldLog }: {
         </section>
 
         <section className="cw-card flex flex-col gap-2" aria-labelledby={id('photos')}>
-          <h2 id={id('photos')} className="font-serif text-xl font-semibold">Photos</h2>
+          <h2 id={id('photos')} className="font-serif text-xl font-semibold">
+            Photos
+          </h2>
           <p className="cw-muted text-sm">The pump, the waste valve beating, the intake: up to six.</p>
           <PhotoPicker onChange={(ids: string[]) => setValue('photoIds', ids)} />
           <FieldMessage id={`${id('photoIds')}-error`} message={errorAt('photoIds')} />
         </section>
 
-        {guide ? <p className="cw-muted text-sm">Asked from the guide <a href={`/guides/${guide}`} className="cw-link">{guide.replace(/-/g, ' ')}</a>.</p> : null}
+        {guide ? (
+          <p className="cw-muted text-sm">
+            Asked from the guide{' '}
+            <a href={`/guides/${guide}`} className="cw-link">
+              {guide.replace(/-/g, ' ')}
+            </a>
+            .
+          </p>
+        ) : null}
         <FieldMessage id={id('server')} message={errors.root?.server?.message} />
         <div>
-          <button type="submit" className="cw-button" disabled={isSubmitting}>{isSubmitting ? 'Posting…' : 'Post my question'}</button>
+          <button type="submit" className="cw-button" disabled={isSubmitting}>
+            {isSubmitting ? 'Posting…' : 'Post my question'}
+          </button>
         </div>
       </div>
 
       <aside className="flex flex-col gap-4 lg:sticky lg:top-4">
         <section className="cw-card flex flex-col gap-2" aria-labelledby={id('before')} data-testid="before-you-post">
-          <h2 id={id('before')} className="font-serif text-lg font-semibold">Before you post</h2>
+          <h2 id={id('before')} className="font-serif text-lg font-semibold">
+            Before you post
+          </h2>
           <p className="cw-muted text-sm">The stall check, run on your site sheet as you type.</p>
           <div aria-live="polite" className="flex flex-col gap-2">
             {stall.kind === 'idle' ? (
@@ -303,7 +430,10 @@ export function AskForm({ tags, defaultTag, guide, fromFieldLog }: {
             ) : stall.kind === 'needs' ? (
               <p className="text-sm">Add the {stall.missing.join(', ')} to see the likely causes.</p>
             ) : stall.kind === 'refused' ? (
-              <p role="alert" className="rounded-md border-l-4 border-signal bg-signal-100 p-2 text-sm text-signal-900 dark:bg-signal-900 dark:text-signal-100">
+              <p
+                role="alert"
+                className="rounded-md border-l-4 border-signal bg-signal-100 p-2 text-sm text-signal-900 dark:bg-signal-900 dark:text-signal-100"
+              >
                 <span aria-hidden="true">⚠ </span>
                 {stall.message}
               </p>
@@ -314,12 +444,20 @@ export function AskForm({ tags, defaultTag, guide, fromFieldLog }: {
         </section>
         {similar.length ? (
           <section className="cw-card flex flex-col gap-2" aria-labelledby={id('similar')}>
-            <h2 id={id('similar')} className="font-serif text-lg font-semibold">Similar questions</h2>
+            <h2 id={id('similar')} className="font-serif text-lg font-semibold">
+              Similar questions
+            </h2>
             <ul className="flex flex-col gap-1 text-sm">
               {similar.map((q) => (
                 <li key={q.id}>
-                  <a href={`/questions/${q.id}`} className="cw-link">{q.title}</a>
-                  {q.fixed ? <span className="ml-2 rounded-full bg-moss-100 px-2 text-xs text-moss-700 dark:bg-moss-700 dark:text-moss-100">fixed it</span> : null}
+                  <a href={`/questions/${q.id}`} className="cw-link">
+                    {q.title}
+                  </a>
+                  {q.fixed ? (
+                    <span className="ml-2 rounded-full bg-moss-100 px-2 text-xs text-moss-700 dark:bg-moss-700 dark:text-moss-100">
+                      fixed it
+                    </span>
+                  ) : null}
                 </li>
               ))}
             </ul>

@@ -21,7 +21,8 @@ export function ModeratorThread({ children }: { children: React.ReactNode }) {
   return (
     <article className="flex flex-col gap-5">
       <p role="status" className="cw-card font-sans text-sm font-semibold">
-        Members and signed-out readers get “nothing here” for this question: it is {data.deletedAt ? 'deleted' : 'hidden'}. You see it as a moderator.
+        Members and signed-out readers get “nothing here” for this question: it is{' '}
+        {data.deletedAt ? 'deleted' : 'hidden'}. You see it as a moderator.
       </p>
       <h1 className="font-serif text-3xl font-semibold leading-tight">{data.title}</h1>
       <Thread initial={data} />

@@ -50,7 +50,17 @@ export function HelpfulButton({
 }
 
 /** Edits a post's text in place; the server keeps every earlier version. */
-export function EditBody({ url, initial, onSaved, extra }: { url: string; initial: string; onSaved: () => void; extra?: Record<string, unknown> }) {
+export function EditBody({
+  url,
+  initial,
+  onSaved,
+  extra,
+}: {
+  url: string;
+  initial: string;
+  onSaved: () => void;
+  extra?: Record<string, unknown>;
+}) {
   const [open, setOpen] = useState(false);
   const [text, setText] = useState(initial);
   const [error, setError] = useState<string | null>(null);
@@ -75,7 +85,13 @@ export function EditBody({ url, initial, onSaved, extra }: { url: string; initia
       <label className="text-xs font-semibold" htmlFor={`${url}-edit`}>
         Edit the text
       </label>
-      <textarea id={`${url}-edit`} value={text} onChange={(e) => setText(e.target.value)} rows={6} className="rounded-md border border-limestone-400 bg-limestone-50 p-2 font-serif dark:bg-creek-950" />
+      <textarea
+        id={`${url}-edit`}
+        value={text}
+        onChange={(e) => setText(e.target.value)}
+        rows={6}
+        className="rounded-md border border-limestone-400 bg-limestone-50 p-2 font-serif dark:bg-creek-950"
+      />
       {error ? (
         <p role="alert" className="text-xs text-signal-700 dark:text-signal-300">
           {error}
@@ -94,14 +110,25 @@ export function EditBody({ url, initial, onSaved, extra }: { url: string; initia
 }
 
 /** Every version of a post, each with what changed from the one before. */
-export function RevisionHistory({ questionId, postType, postId }: { questionId: number; postType: string; postId: number }) {
+export function RevisionHistory({
+  questionId,
+  postType,
+  postId,
+}: {
+  questionId: number;
+  postType: string;
+  postId: number;
+}) {
   const [revisions, setRevisions] = useState<{ id: number; body: string; editor: string; at: string }[] | null>(null);
   return (
     <details
       className="text-xs"
       onToggle={async (e) => {
         if ((e.target as HTMLDetailsElement).open && !revisions) {
-          const r = await sendJson<{ revisions: { id: number; body: string; editor: string; at: string }[] }>(`/api/questions/${questionId}/revisions?postType=${postType}&postId=${postId}`, 'GET');
+          const r = await sendJson<{ revisions: { id: number; body: string; editor: string; at: string }[] }>(
+            `/api/questions/${questionId}/revisions?postType=${postType}&postId=${postId}`,
+            'GET',
+          );
           setRevisions(r.ok ? r.data.revisions : []);
         }
       }}

@@ -5,7 +5,13 @@ import { useUnits } from '@/components/units/UnitsProvider';
 import { siteSheetRows } from '@/lib/calculators/site-sheet';
 
 /** A question's site sheet in the reader's units (the page is the same for every reader; the units are the reader's own). */
-export function SiteSheetCard({ sheet, fieldLogEntryId }: { sheet: Record<string, string> | null; fieldLogEntryId: number | null }) {
+export function SiteSheetCard({
+  sheet,
+  fieldLogEntryId,
+}: {
+  sheet: Record<string, string> | null;
+  fieldLogEntryId: number | null;
+}) {
   const { units } = useUnits();
   const rows = siteSheetRows(sheet, units);
   if (!rows.length) return null;

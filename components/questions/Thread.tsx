@@ -32,7 +32,10 @@ function Byline({ person, at }: { person: { handle: string; displayName: string;
       <Link href={`/people/${person.handle}`} className="cw-link">
         {person.displayName}
       </Link>
-      {person.expert ? <span className="ml-1 rounded bg-creek px-1.5 py-0.5 font-semibold text-limestone-50">expert</span> : null} · {when(at)}
+      {person.expert ? (
+        <span className="ml-1 rounded bg-creek px-1.5 py-0.5 font-semibold text-limestone-50">expert</span>
+      ) : null}{' '}
+      · {when(at)}
     </span>
   );
 }
@@ -47,7 +50,11 @@ export function Thread({ initial }: { initial: ThreadView }) {
   const viewer = useViewer();
   // The page arrives as every signed-out reader sees it; a signed-in reader's own
   // marks and follows (and, for moderators, hidden posts) are fetched once the session is known.
-  const { data, mutate } = useSWR<ThreadView>(viewer ? key : null, getJson<ThreadView>, { fallbackData: initial, revalidateOnMount: true, revalidateOnFocus: false });
+  const { data, mutate } = useSWR<ThreadView>(viewer ? key : null, getJson<ThreadView>, {
+    fallbackData: initial,
+    revalidateOnMount: true,
+    revalidateOnFocus: false,
+  });
   const t = data ?? initial;
   const refresh = () => void mutate();
   const isAsker = can(viewer, 'question.markFixed', t.author.id);
@@ -77,7 +84,9 @@ export function Thread({ initial }: { initial: ThreadView }) {
             count={t.helpfulCount}
             marked={t.markedByViewer}
             disabled={!viewer || viewer.id === t.author.id}
-            onChanged={(o, settle) => optimistic((v) => ({ ...v, helpfulCount: o.count, markedByViewer: o.marked }))(o, settle)}
+            onChanged={(o, settle) =>
+              optimistic((v) => ({ ...v, helpfulCount: o.count, markedByViewer: o.marked }))(o, settle)
+            }
           />
           {viewer ? (
             <button
@@ -92,13 +101,29 @@ export function Thread({ initial }: { initial: ThreadView }) {
             </button>
           ) : null}
           {can(viewer, 'question.edit', t.author.id) ? (
-            <EditBody url={key} initial={t.body} onSaved={refresh} extra={{ title: t.title, tags: t.tags.map((x) => x.slug), siteSheet: t.siteSheet ?? undefined }} />
+            <EditBody
+              url={key}
+              initial={t.body}
+              onSaved={refresh}
+              extra={{ title: t.title, tags: t.tags.map((x) => x.slug), siteSheet: t.siteSheet ?? undefined }}
+            />
           ) : null}
           {t.edited ? <RevisionHistory questionId={t.id} postType="question" postId={t.id} /> : null}
-          {viewer && viewer.id !== t.author.id ? <FlagButton postType="question" postId={t.id} onFlagged={refresh} /> : null}
+          {viewer && viewer.id !== t.author.id ? (
+            <FlagButton postType="question" postId={t.id} onFlagged={refresh} />
+          ) : null}
         </div>
-        <Replies items={repliesUnder(null)} viewer={viewer} locked={!!t.lockedAt} questionId={t.id} answerId={null} onChange={refresh} />
-        {viewer && !t.lockedAt ? <ReplyComposer questionId={t.id} onPosted={refresh} label="Reply to the question" /> : null}
+        <Replies
+          items={repliesUnder(null)}
+          viewer={viewer}
+          locked={!!t.lockedAt}
+          questionId={t.id}
+          answerId={null}
+          onChange={refresh}
+        />
+        {viewer && !t.lockedAt ? (
+          <ReplyComposer questionId={t.id} onPosted={refresh} label="Reply to the question" />
+        ) : null}
       </section>
 
       <section aria-label="Answers" className="flex flex-col gap-4">
@@ -106,7 +131,16 @@ export function Thread({ initial }: { initial: ThreadView }) {
           {t.answers.length} {t.answers.length === 1 ? 'answer' : 'answers'}
         </h2>
         {t.answers.map((a) => (
-          <Answer key={a.id} a={a} t={t} viewer={viewer} isAsker={isAsker} onChange={refresh} replies={repliesUnder(a.id)} optimistic={optimistic} />
+          <Answer
+            key={a.id}
+            a={a}
+            t={t}
+            viewer={viewer}
+            isAsker={isAsker}
+            onChange={refresh}
+            replies={repliesUnder(a.id)}
+            optimistic={optimistic}
+          />
         ))}
       </section>
 
@@ -142,11 +176,20 @@ function Answer({
   optimistic: (patch: (v: ThreadView) => ThreadView) => (o: unknown, settle: Promise<unknown>) => void;
 }) {
   return (
-    <article className={`cw-card flex flex-col gap-3 ${a.fixed ? 'border-2 border-moss' : ''}`} data-answer={a.id} id={`answer-${a.id}`} aria-label={`Answer by ${a.author.displayName}`}>
-      {a.fixed ? <p className="self-start rounded bg-moss px-2 py-0.5 text-xs font-semibold text-limestone-50">fixed it</p> : null}
+    <article
+      className={`cw-card flex flex-col gap-3 ${a.fixed ? 'border-2 border-moss' : ''}`}
+      data-answer={a.id}
+      id={`answer-${a.id}`}
+      aria-label={`Answer by ${a.author.displayName}`}
+    >
+      {a.fixed ? (
+        <p className="self-start rounded bg-moss px-2 py-0.5 text-xs font-semibold text-limestone-50">fixed it</p>
+      ) : null}
       <PostMarks post={a} kind="answer" />
       <MemberText>{a.body}</MemberText>
-      {a.photos.length ? <PhotoGallery photos={a.photos} canFlag={!!viewer && viewer.handle !== a.author.handle} /> : null}
+      {a.photos.length ? (
+        <PhotoGallery photos={a.photos} canFlag={!!viewer && viewer.handle !== a.author.handle} />
+      ) : null}
       {a.calculation ? (
         <div className="flex flex-col gap-1" data-testid="answer-calculation">
           <p className="text-sm font-semibold">
@@ -168,7 +211,12 @@ function Answer({
           marked={a.markedByViewer}
           disabled={!viewer || viewer.handle === a.author.handle}
           onChanged={(o, settle) =>
-            optimistic((v) => ({ ...v, answers: v.answers.map((x) => (x.id === a.id ? { ...x, helpfulCount: o.count, markedByViewer: o.marked } : x)) }))(o, settle)
+            optimistic((v) => ({
+              ...v,
+              answers: v.answers.map((x) =>
+                x.id === a.id ? { ...x, helpfulCount: o.count, markedByViewer: o.marked } : x,
+              ),
+            }))(o, settle)
           }
         />
         {isAsker ? (
@@ -183,12 +231,25 @@ function Answer({
             {a.fixed ? 'Not the fix after all' : 'This fixed it'}
           </button>
         ) : null}
-        {can(viewer, 'answer.edit', viewer && a.author.handle === viewer.handle ? viewer.id : -1) ? <EditBody url={`/api/answers/${a.id}`} initial={a.body} onSaved={onChange} /> : null}
+        {can(viewer, 'answer.edit', viewer && a.author.handle === viewer.handle ? viewer.id : -1) ? (
+          <EditBody url={`/api/answers/${a.id}`} initial={a.body} onSaved={onChange} />
+        ) : null}
         {a.edited ? <RevisionHistory questionId={t.id} postType="answer" postId={a.id} /> : null}
-        {viewer && viewer.handle !== a.author.handle ? <FlagButton postType="answer" postId={a.id} onFlagged={onChange} /> : null}
+        {viewer && viewer.handle !== a.author.handle ? (
+          <FlagButton postType="answer" postId={a.id} onFlagged={onChange} />
+        ) : null}
       </div>
-      <Replies items={replies} viewer={viewer} locked={!!t.lockedAt} questionId={t.id} answerId={a.id} onChange={onChange} />
-      {viewer && !t.lockedAt ? <ReplyComposer questionId={t.id} answerId={a.id} onPosted={onChange} label="Reply to this answer" /> : null}
+      <Replies
+        items={replies}
+        viewer={viewer}
+        locked={!!t.lockedAt}
+        questionId={t.id}
+        answerId={a.id}
+        onChange={onChange}
+      />
+      {viewer && !t.lockedAt ? (
+        <ReplyComposer questionId={t.id} answerId={a.id} onPosted={onChange} label="Reply to this answer" />
+      ) : null}
     </article>
   );
 }
@@ -213,17 +274,25 @@ function Replies({
     const list = children(parent);
     if (!list.length) return null;
     return (
-      <ul className={`flex flex-col gap-2 ${parent === null ? '' : 'ml-4 border-l border-limestone-300 pl-3 dark:border-creek-600'}`}>
+      <ul
+        className={`flex flex-col gap-2 ${parent === null ? '' : 'ml-4 border-l border-limestone-300 pl-3 dark:border-creek-600'}`}
+      >
         {list.map((r) => (
           <li key={r.id} id={`reply-${r.id}`} data-reply={r.id} data-depth={r.depth} className="text-sm">
             <PostMarks post={r} kind="reply" />
             <MemberText>{r.body}</MemberText>
             <div className="flex flex-wrap items-center gap-3">
               <Byline person={r.author} at={r.createdAt} />
-              {viewer && viewer.handle === r.author.handle ? <EditBody url={`/api/replies/${r.id}`} initial={r.body} onSaved={onChange} /> : null}
-              {viewer && !locked ? <ReplyComposer questionId={questionId} answerId={answerId} replyToId={r.id} onPosted={onChange} /> : null}
+              {viewer && viewer.handle === r.author.handle ? (
+                <EditBody url={`/api/replies/${r.id}`} initial={r.body} onSaved={onChange} />
+              ) : null}
+              {viewer && !locked ? (
+                <ReplyComposer questionId={questionId} answerId={answerId} replyToId={r.id} onPosted={onChange} />
+              ) : null}
               {r.edited ? <RevisionHistory questionId={questionId} postType="reply" postId={r.id} /> : null}
-              {viewer && viewer.handle !== r.author.handle ? <FlagButton postType="reply" postId={r.id} onFlagged={onChange} /> : null}
+              {viewer && viewer.handle !== r.author.handle ? (
+                <FlagButton postType="reply" postId={r.id} onFlagged={onChange} />
+              ) : null}
             </div>
             {render(r.id)}
           </li>

@@ -8,9 +8,13 @@ import type { SearchResult } from '@/lib/search';
 /** Threads about the same trouble, from search: shown under the stall check's likely causes. */
 export function RelatedThreads({ query, limit = 3 }: { query: string; limit?: number }) {
   const q = query.trim().slice(0, 200);
-  const { data } = useSWR(q ? `/api/search?${new URLSearchParams({ q, kind: 'question', limit: String(limit) })}` : null, getJsonOrNull<SearchResult>, {
-    revalidateOnFocus: false,
-  });
+  const { data } = useSWR(
+    q ? `/api/search?${new URLSearchParams({ q, kind: 'question', limit: String(limit) })}` : null,
+    getJsonOrNull<SearchResult>,
+    {
+      revalidateOnFocus: false,
+    },
+  );
   const items = data?.items ?? [];
   if (!items.length) return null;
   return (

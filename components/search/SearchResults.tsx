@@ -38,7 +38,19 @@ const SOLVED_FILTERS = [
 ];
 
 /** One labelled filter of the results. */
-function Filter({ label, name, value, options, onChange }: { label: string; name: Exclude<keyof SearchState, 'q'>; value: string; options: { value: string; label: string }[]; onChange: (patch: Partial<SearchState>) => void }) {
+function Filter({
+  label,
+  name,
+  value,
+  options,
+  onChange,
+}: {
+  label: string;
+  name: Exclude<keyof SearchState, 'q'>;
+  value: string;
+  options: { value: string; label: string }[];
+  onChange: (patch: Partial<SearchState>) => void;
+}) {
   return (
     <label className="flex items-center gap-1">
       <span className="cw-muted">{label}</span>
@@ -115,7 +127,11 @@ export function SearchResults({
       const r = await sendJson<SearchResult>(`/api/search?${query}&limit=20`, 'GET', undefined, { signal: ctl.signal });
       if (ctl.signal.aborted) return;
       if (!r.ok) {
-        setStatus({ kind: 'error', message: r.status === 0 ? 'Search is not answering just now. Check your connection and try again.' : r.error.message });
+        setStatus({
+          kind: 'error',
+          message:
+            r.status === 0 ? 'Search is not answering just now. Check your connection and try again.' : r.error.message,
+        });
         return;
       }
       setResult(r.data);
@@ -124,10 +140,13 @@ export function SearchResults({
     }, 120);
   }, []);
 
-  useEffect(() => () => {
-    clearTimeout(pending.current.timer);
-    pending.current.ctl?.abort();
-  }, []);
+  useEffect(
+    () => () => {
+      clearTimeout(pending.current.timer);
+      pending.current.ctl?.abort();
+    },
+    [],
+  );
 
   const items = result?.items ?? [];
   const open = useCallback((item: SearchItem) => router.push(item.url), [router]);
@@ -149,7 +168,8 @@ export function SearchResults({
   };
 
   useEffect(() => {
-    if (active >= 0) listRef.current?.querySelector<HTMLElement>(`[data-index="${active}"]`)?.scrollIntoView({ block: 'nearest' });
+    if (active >= 0)
+      listRef.current?.querySelector<HTMLElement>(`[data-index="${active}"]`)?.scrollIntoView({ block: 'nearest' });
   }, [active]);
 
   const set = (patch: Partial<SearchState>) => {
@@ -161,7 +181,13 @@ export function SearchResults({
 
   return (
     <div className="flex flex-col gap-4" onKeyDown={onKeyDown}>
-      <form role="search" action="/search" method="get" onSubmit={(e) => e.preventDefault()} className="flex flex-col gap-3">
+      <form
+        role="search"
+        action="/search"
+        method="get"
+        onSubmit={(e) => e.preventDefault()}
+        className="flex flex-col gap-3"
+      >
         <label htmlFor={`${id}-q`} className="sr-only">
           Search
         </label>
@@ -184,9 +210,21 @@ export function SearchResults({
         <fieldset className="flex flex-wrap items-center gap-3 text-sm">
           <legend className="sr-only">Filters</legend>
           <Filter label="Show" name="kind" value={state.kind} onChange={set} options={KIND_FILTERS} />
-          <Filter label="Tag" name="tag" value={state.tag} onChange={set} options={[{ value: '', label: 'any' }, ...tags.map((t) => ({ value: t.slug, label: t.name }))]} />
+          <Filter
+            label="Tag"
+            name="tag"
+            value={state.tag}
+            onChange={set}
+            options={[{ value: '', label: 'any' }, ...tags.map((t) => ({ value: t.slug, label: t.name }))]}
+          />
           <Filter label="Threads" name="solved" value={state.solved} onChange={set} options={SOLVED_FILTERS} />
-          <Filter label="Guide level" name="level" value={state.level} onChange={set} options={[{ value: '', label: 'any' }, ...levels.map((l) => ({ value: l, label: l }))]} />
+          <Filter
+            label="Guide level"
+            name="level"
+            value={state.level}
+            onChange={set}
+            options={[{ value: '', label: 'any' }, ...levels.map((l) => ({ value: l, label: l }))]}
+          />
         </fieldset>
       </form>
 
@@ -221,7 +259,10 @@ export function SearchResults({
         </section>
       ) : result && items.length === 0 && status.kind === 'idle' ? (
         <section className="cw-card flex flex-col gap-2" aria-label="No results">
-          <p>Nothing matched “{state.q.trim()}”{state.kind || state.tag || state.solved || state.level ? ' with these filters' : ''}.</p>
+          <p>
+            Nothing matched “{state.q.trim()}”
+            {state.kind || state.tag || state.solved || state.level ? ' with these filters' : ''}.
+          </p>
           <p className="text-sm">
             Try fewer words or another spelling of a size, read{' '}
             {suggestions.slice(0, 2).map((s, i) => (
@@ -257,7 +298,11 @@ export function SearchResults({
                 {item.level ? <span className="cw-muted normal-case">{item.level}</span> : null}
                 {item.hidden ? <span className="text-signal-700">hidden: moderators only</span> : null}
               </div>
-              <Link href={item.url} className="font-serif text-lg font-semibold no-underline hover:underline" tabIndex={-1}>
+              <Link
+                href={item.url}
+                className="font-serif text-lg font-semibold no-underline hover:underline"
+                tabIndex={-1}
+              >
                 <Marked segments={item.title} />
               </Link>
               {item.snippet.length ? (

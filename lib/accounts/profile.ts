@@ -4,7 +4,10 @@ import { initModels } from '@/models';
 export async function publicProfile(handle: string) {
   if (!/^[a-z0-9_]{1,40}$/.test(handle)) return null;
   const { User, WorkedCalculation } = initModels();
-  const person = await User.findOne({ where: { handle }, attributes: ['id', 'handle', 'displayName', 'role', 'region', 'bio', 'createdAt'] });
+  const person = await User.findOne({
+    where: { handle },
+    attributes: ['id', 'handle', 'displayName', 'role', 'region', 'bio', 'createdAt'],
+  });
   if (!person) return null;
   const calculations = await WorkedCalculation.findAll({
     where: { authorId: person.id },

@@ -31,9 +31,18 @@ export async function submitExpertApplication(userId: number, input: ExpertAppli
   return getSequelize().transaction(async (transaction): Promise<{ ok: true; id: number } | Failure> => {
     // Locking the member's row makes two quick submissions queue, so only one can be pending.
     await User.findByPk(userId, { transaction, lock: transaction.LOCK.UPDATE, attributes: ['id'] });
-    const pending = await ExpertApplication.findOne({ where: { userId, status: 'pending' }, transaction, attributes: ['id'] });
+    const pending = await ExpertApplication.findOne({
+      where: { userId, status: 'pending' },
+      transaction,
+      attributes: ['id'],
+    });
     if (pending) {
-      return { ok: false, status: 409, message: 'You already have an application waiting for a moderator.', code: 'already_pending' };
+      return {
+        ok: false,
+        status: 409,
+        message: 'You already have an application waiting for a moderator.',
+        code: 'already_pending',
+      };
     }
     const created = await ExpertApplication.create(
       { userId, ...input, status: 'pending', decidedBy: null, decisionNote: null, decidedAt: null },
@@ -85,15 +94,37 @@ export async function decideExpertApplication(
   const approved = decision === 'approve';
   const result = await getSequelize().transaction(async (transaction) => {
     const application = await ExpertApplication.findByPk(applicationId, { transaction, lock: transaction.LOCK.UPDATE });
-    if (!application) return { ok: false, status: 404, message: 'There is no such expert application.', code: 'not_found' } satisfies Failure;
+    if (!application)
+      return {
+        ok: false,
+        status: 404,
+        message: 'There is no such expert application.',
+        code: 'not_found',
+      } satisfies Failure;
     if (application.userId === moderatorId) {
-      return { ok: false, status: 403, message: 'You cannot decide your own expert application.', code: 'forbidden' } satisfies Failure;
+      return {
+        ok: false,
+        status: 403,
+        message: 'You cannot decide your own expert application.',
+        code: 'forbidden',
+      } satisfies Failure;
     }
     if (application.status !== 'pending') {
-      return { ok: false, status: 409, message: `This application was already ${application.status}.`, code: 'already_decided' } satisfies Failure;
+      return {
+        ok: false,
+        status: 409,
+        message: `This application was already ${application.status}.`,
+        code: 'already_decided',
+      } satisfies Failure;
     }
     const applicant = await User.findByPk(application.userId, { transaction, lock: transaction.LOCK.UPDATE });
-    if (!applicant) return { ok: false, status: 404, message: 'The applicant no longer has an account.', code: 'not_found' } satisfies Failure;
+    if (!applicant)
+      return {
+        ok: false,
+        status: 404,
+        message: 'The applicant no longer has an account.',
+        code: 'not_found',
+      } satisfies Failure;
 
     await application.update(
       { status: approved ? 'approved' : 'declined', decidedBy: moderatorId, decisionNote: note, decidedAt: new Date() },
@@ -101,7 +132,17 @@ export async function decideExpertApplication(
     );
     // A moderator or admin who applied keeps their standing; only a member becomes an expert.
     if (approved && applicant.role === 'member') await applicant.update({ role: 'expert' }, { transaction });
-    await recordAudit({ actorId: moderatorId, action: approved ? 'expert-approve' : 'expert-decline', targetType: 'expert-application', targetId: application.id, reason: note, details: { applicantId: applicant.id } }, transaction);
+    await recordAudit(
+      {
+        actorId: moderatorId,
+        action: approved ? 'expert-approve' : 'expert-decline',
+        targetType: 'expert-application',
+        targetId: application.id,
+        reason: note,
+        details: { applicantId: applicant.id },
+      },
+      transaction,
+    );
     await Notice.create(
       {
         userId: applicant.id,
@@ -114,7 +155,13 @@ export async function decideExpertApplication(
       },
       { transaction },
     );
-    await notifyExpertDecision(transaction, { applicationId: application.id, applicantId: applicant.id, moderatorId, approved, note });
+    await notifyExpertDecision(transaction, {
+      applicationId: application.id,
+      applicantId: applicant.id,
+      moderatorId,
+      approved,
+      note,
+    });
     return { ok: true as const, role: applicant.role };
   });
   if (!result.ok) return result;
@@ -130,20 +177,47 @@ const ROLE_WORDS: Record<Role, string> = {
 };
 
 /** An admin sets another member's role; the member gets a notice saying so. */
-export async function changeRole(adminId: number, userId: number, role: Role): Promise<{ ok: true; role: Role; changed: boolean } | Failure> {
-  if (adminId === userId) return { ok: false, status: 403, message: 'You cannot change your own role; ask another admin.', code: 'forbidden' };
+export async function changeRole(
+  adminId: number,
+  userId: number,
+  role: Role,
+): Promise<{ ok: true; role: Role; changed: boolean } | Failure> {
+  if (adminId === userId)
+    return {
+      ok: false,
+      status: 403,
+      message: 'You cannot change your own role; ask another admin.',
+      code: 'forbidden',
+    };
   const { User, Notice } = initModels();
   return getSequelize().transaction(async (transaction) => {
     const user = await User.findByPk(userId, { transaction, lock: transaction.LOCK.UPDATE });
-    if (!user) return { ok: false, status: 404, message: 'There is no such member.', code: 'not_found' } satisfies Failure;
+    if (!user)
+      return { ok: false, status: 404, message: 'There is no such member.', code: 'not_found' } satisfies Failure;
     if (user.role === role) return { ok: true as const, role, changed: false };
     const before = user.role;
     await user.update({ role }, { transaction });
     // a demoted moderator's open sessions end with the old powers
     await bumpSessionVersion(userId, transaction);
-    await recordAudit({ actorId: adminId, action: 'role-change', targetType: 'member', targetId: userId, reason: `role changed from ${before} to ${role}`, details: { before, after: role } }, transaction);
+    await recordAudit(
+      {
+        actorId: adminId,
+        action: 'role-change',
+        targetType: 'member',
+        targetId: userId,
+        reason: `role changed from ${before} to ${role}`,
+        details: { before, after: role },
+      },
+      transaction,
+    );
     await Notice.create(
-      { userId, kind: 'role-change', message: `An admin changed your role: you are now ${ROLE_WORDS[role]} on Clackwater.`, link: '/settings', readAt: null },
+      {
+        userId,
+        kind: 'role-change',
+        message: `An admin changed your role: you are now ${ROLE_WORDS[role]} on Clackwater.`,
+        link: '/settings',
+        readAt: null,
+      },
       { transaction },
     );
     return { ok: true as const, role, changed: true };
@@ -159,7 +233,11 @@ export async function listMembersPage(page: number, perPage = 50) {
     limit: perPage,
     offset: (page - 1) * perPage,
   });
-  return { members: rows.map((u) => ({ id: u.id, handle: u.handle, displayName: u.displayName, role: u.role })), total: count, totalPages: Math.max(1, Math.ceil(count / perPage)) };
+  return {
+    members: rows.map((u) => ({ id: u.id, handle: u.handle, displayName: u.displayName, role: u.role })),
+    total: count,
+    totalPages: Math.max(1, Math.ceil(count / perPage)),
+  };
 }
 
 /** Whether this member has an application waiting. */

@@ -26,7 +26,12 @@ function sendLater(what: string, message: () => Promise<Message | null>): void {
  * are public, on every post), the password is hashed either way, and the mail goes
  * out after the answer.
  */
-export async function signUp(input: { email: string; password: string; handle: string; displayName: string }): Promise<Outcome> {
+export async function signUp(input: {
+  email: string;
+  password: string;
+  handle: string;
+  displayName: string;
+}): Promise<Outcome> {
   const problem = passwordProblem(input.password, [input.email, input.handle, input.displayName]);
   if (problem) return { ok: false, status: 422, field: 'password', message: `password ${problem}` };
   const { User } = initModels();
@@ -47,7 +52,15 @@ export async function signUp(input: { email: string; password: string; handle: s
   try {
     ({ user, token } = await getSequelize().transaction(async (transaction) => {
       const u = await User.create(
-        { email: input.email, handle: input.handle, displayName: input.displayName, passwordHash, role: 'member', region: null, bio: null },
+        {
+          email: input.email,
+          handle: input.handle,
+          displayName: input.displayName,
+          passwordHash,
+          role: 'member',
+          region: null,
+          bio: null,
+        },
         { transaction },
       );
       return { user: u, token: await issueToken(u.id, 'verify-email', transaction) };
@@ -91,7 +104,10 @@ export function requestPasswordReset(email: string): void {
   });
 }
 
-export async function resetPassword(token: string, password: string): Promise<{ ok: true } | { ok: false; field: string; message: string }> {
+export async function resetPassword(
+  token: string,
+  password: string,
+): Promise<{ ok: true } | { ok: false; field: string; message: string }> {
   const problem = passwordProblem(password);
   if (problem) return { ok: false, field: 'password', message: `password ${problem}` };
   const passwordHash = await hashPassword(password);
@@ -100,7 +116,10 @@ export async function resetPassword(token: string, password: string): Promise<{ 
     const used = await consumeToken(token, 'reset-password', transaction);
     if (!used.ok) return { ok: false as const, field: 'token', message: TOKEN_PROBLEM[used.reason] };
     // A reset link reaches the inbox, so it also proves the address.
-    await User.unscoped().update({ passwordHash, emailVerifiedAt: new Date() }, { where: { id: used.userId }, transaction });
+    await User.unscoped().update(
+      { passwordHash, emailVerifiedAt: new Date() },
+      { where: { id: used.userId }, transaction },
+    );
     // whoever knew the old password is signed out everywhere
     await bumpSessionVersion(used.userId, transaction);
     return { ok: true as const };

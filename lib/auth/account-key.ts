@@ -37,10 +37,13 @@ export async function accountLimitKey(email: string): Promise<string> {
   const typed = email.trim();
   if (!typed) return '(none)';
   const c = await emailCollation();
-  const [row] = await getSequelize().query<{ k: string }>(`SELECT SHA2(WEIGHT_STRING(CONVERT(? USING utf8mb4) COLLATE ${c}), 256) AS k`, {
-    replacements: [typed],
-    type: QueryTypes.SELECT,
-  });
+  const [row] = await getSequelize().query<{ k: string }>(
+    `SELECT SHA2(WEIGHT_STRING(CONVERT(? USING utf8mb4) COLLATE ${c}), 256) AS k`,
+    {
+      replacements: [typed],
+      type: QueryTypes.SELECT,
+    },
+  );
   if (!row) throw new Error('accountLimitKey: the database returned no row for SELECT SHA2(...)');
   return `account:${row.k}`;
 }

@@ -26,14 +26,28 @@ export function clackwaterAdapter(sequelize: Sequelize) {
     );
   const Account =
     models.auth_account ??
-    sequelize.define('auth_account', { ...adapterModels.Account, userId: { type: DataTypes.INTEGER.UNSIGNED } }, { ...opts, tableName: 'accounts' });
+    sequelize.define(
+      'auth_account',
+      { ...adapterModels.Account, userId: { type: DataTypes.INTEGER.UNSIGNED } },
+      { ...opts, tableName: 'accounts' },
+    );
   const Session =
     models.auth_session ??
-    sequelize.define('auth_session', { ...adapterModels.Session, userId: { type: DataTypes.INTEGER.UNSIGNED } }, { ...opts, tableName: 'sessions' });
+    sequelize.define(
+      'auth_session',
+      { ...adapterModels.Session, userId: { type: DataTypes.INTEGER.UNSIGNED } },
+      { ...opts, tableName: 'sessions' },
+    );
   const VerificationToken =
     models.auth_verification_token ??
-    sequelize.define('auth_verification_token', adapterModels.VerificationToken, { ...opts, tableName: 'verification_tokens' });
-  const adapter = SequelizeAdapter(sequelize, { synchronize: false, models: { User, Account, Session, VerificationToken } as never });
+    sequelize.define('auth_verification_token', adapterModels.VerificationToken, {
+      ...opts,
+      tableName: 'verification_tokens',
+    });
+  const adapter = SequelizeAdapter(sequelize, {
+    synchronize: false,
+    models: { User, Account, Session, VerificationToken } as never,
+  });
   return {
     ...adapter,
     // Accounts are made by sign-up (which sets a handle); a link never creates one.

@@ -27,7 +27,11 @@ export const authLogger: Partial<LoggerInstance> = {
   error(code, metadata) {
     const { err, text } = describe(metadata);
     if (code === 'JWT_SESSION_ERROR') {
-      console.warn(err?.name === 'SessionRevoked' ? `next-auth: ${err.message}` : `next-auth: a session cookie that does not verify was ignored (${text})`);
+      console.warn(
+        err?.name === 'SessionRevoked'
+          ? `next-auth: ${err.message}`
+          : `next-auth: a session cookie that does not verify was ignored (${text})`,
+      );
       return;
     }
     console.error(`next-auth ${code}: ${text}`, ...(err?.stack ? [err.stack] : []));

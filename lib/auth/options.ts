@@ -45,7 +45,9 @@ export const authOptions: NextAuthOptions = {
       name: 'E-mail and password',
       credentials: { email: { label: 'E-mail', type: 'email' }, password: { label: 'Password', type: 'password' } },
       async authorize(credentials, req) {
-        const email = String(credentials?.email ?? '').trim().toLowerCase();
+        const email = String(credentials?.email ?? '')
+          .trim()
+          .toLowerCase();
         const password = String(credentials?.password ?? '');
         const ip = clientIp((req?.headers ?? {}) as Record<string, string>);
         // every spelling the collation folds onto one account spends that account's tries
@@ -104,7 +106,8 @@ export const authOptions: NextAuthOptions = {
       // Every later read of the session (the browser's /api/auth/session, getServerSession):
       // a token behind the account's session version is over, and next-auth clears its cookie.
       const uid = Number(token.uid);
-      const u = Number.isInteger(uid) && uid > 0 ? await User.findByPk(uid, { attributes: ['id', 'sessionVersion'] }) : null;
+      const u =
+        Number.isInteger(uid) && uid > 0 ? await User.findByPk(uid, { attributes: ['id', 'sessionVersion'] }) : null;
       if (!u || u.sessionVersion !== tokenVersion(token)) throw new SessionRevoked();
       return token;
     },
@@ -112,7 +115,12 @@ export const authOptions: NextAuthOptions = {
       return sameSiteRedirect(url, baseUrl);
     },
     async session({ session, token }) {
-      session.user = { ...session.user, id: Number(token.uid), role: String(token.role), handle: String(token.handle) } as typeof session.user;
+      session.user = {
+        ...session.user,
+        id: Number(token.uid),
+        role: String(token.role),
+        handle: String(token.handle),
+      } as typeof session.user;
       return session;
     },
   },

@@ -188,8 +188,10 @@ export const REFUSAL: Record<Action, string> = {
   'moderation.actOnAdmin': 'Only another admin can act on an admin’s post or account.',
   'flag.hideUnsafeAtOnce': 'Only an expert’s unsafe-advice flag hides a post at once.',
   'post.staysUpUnderMemberFlags': 'Members’ posts are hidden pending review when enough flags count.',
-  'post.staysUpUnderExpertFlag': 'Members’ and experts’ posts are hidden pending review under an expert’s unsafe-advice flag.',
-  'digest.expertSections': 'Only experts, moderators and admins get the digest’s unanswered questions and stale safety checks.',
+  'post.staysUpUnderExpertFlag':
+    'Members’ and experts’ posts are hidden pending review under an expert’s unsafe-advice flag.',
+  'digest.expertSections':
+    'Only experts, moderators and admins get the digest’s unanswered questions and stale safety checks.',
   'audit.read': 'Only admins can read the audit log.',
   'mail.outbox': 'Only admins can see the e-mail outbox.',
   'moderation.seeHidden': 'Only moderators can see hidden posts.',

@@ -24,7 +24,11 @@ export class RateLimiterMariaDB extends RateLimiterMySQL {
       tableName: 'rate_limits',
       tableCreated: true,
       // the database not answering must not lock everyone out, nor let floods through
-      insuranceLimiter: new RateLimiterMemory({ points: opts.points, duration: opts.duration, keyPrefix: `${opts.keyPrefix}-insurance` }),
+      insuranceLimiter: new RateLimiterMemory({
+        points: opts.points,
+        duration: opts.duration,
+        keyPrefix: `${opts.keyPrefix}-insurance`,
+      }),
     });
     this.db = opts.sequelize;
   }
@@ -34,25 +38,40 @@ export class RateLimiterMariaDB extends RateLimiterMySQL {
     const expire = msDuration > 0 ? now + msDuration : null;
     return this.db.transaction(async (transaction) => {
       if (forceExpire) {
-        await this.db.query('INSERT INTO rate_limits (`key`, points, expire) VALUES (?, ?, ?) ON DUPLICATE KEY UPDATE points = ?, expire = ?', { replacements: [key, points, expire, points, expire], transaction });
+        await this.db.query(
+          'INSERT INTO rate_limits (`key`, points, expire) VALUES (?, ?, ?) ON DUPLICATE KEY UPDATE points = ?, expire = ?',
+          { replacements: [key, points, expire, points, expire], transaction },
+        );
       } else {
         await this.db.query(
           'INSERT INTO rate_limits (`key`, points, expire) VALUES (?, ?, ?) ON DUPLICATE KEY UPDATE points = IF(expire <= ?, ?, points + (?)), expire = IF(expire <= ?, ?, expire)',
           { replacements: [key, points, expire, now, points, points, now, expire], transaction },
         );
       }
-      const rows = await this.db.query<Row>('SELECT points, expire FROM rate_limits WHERE `key` = ?', { replacements: [key], type: QueryTypes.SELECT, transaction });
+      const rows = await this.db.query<Row>('SELECT points, expire FROM rate_limits WHERE `key` = ?', {
+        replacements: [key],
+        type: QueryTypes.SELECT,
+        transaction,
+      });
       return rows.map((r) => ({ points: Number(r.points), expire: r.expire === null ? null : Number(r.expire) }));
     });
   }
 
   async _get(key: string): Promise<Row[] | null> {
-    const rows = await this.db.query<Row>('SELECT points, expire FROM rate_limits WHERE `key` = ? AND (expire > ? OR expire IS NULL)', { replacements: [key, Date.now()], type: QueryTypes.SELECT });
-    return rows.length ? rows.map((r) => ({ points: Number(r.points), expire: r.expire === null ? null : Number(r.expire) })) : null;
+    const rows = await this.db.query<Row>(
+      'SELECT points, expire FROM rate_limits WHERE `key` = ? AND (expire > ? OR expire IS NULL)',
+      { replacements: [key, Date.now()], type: QueryTypes.SELECT },
+    );
+    return rows.length
+      ? rows.map((r) => ({ points: Number(r.points), expire: r.expire === null ? null : Number(r.expire) }))
+      : null;
   }
 
   async _delete(key: string): Promise<boolean> {
-    const [, meta] = (await this.db.query('DELETE FROM rate_limits WHERE `key` = ?', { replacements: [key] })) as [unknown, { affectedRows?: number }];
+    const [, meta] = (await this.db.query('DELETE FROM rate_limits WHERE `key` = ?', { replacements: [key] })) as [
+      unknown,
+      { affectedRows?: number },
+    ];
     return (meta?.affectedRows ?? 0) > 0;
   }
 }

@@ -9,7 +9,8 @@ import { RateLimiterMariaDB } from './rate-limit-store';
  * in the database, so they hold across every app instance (README, "Scaling out").
  */
 function limiter(points: number, durationS: number, keyPrefix: string) {
-  if (process.env.RATE_LIMIT_STORE === 'mariadb') return new RateLimiterMariaDB({ points, duration: durationS, keyPrefix, sequelize: getSequelize() });
+  if (process.env.RATE_LIMIT_STORE === 'mariadb')
+    return new RateLimiterMariaDB({ points, duration: durationS, keyPrefix, sequelize: getSequelize() });
   return new RateLimiterMemory({ points, duration: durationS, keyPrefix });
 }
 
@@ -50,7 +51,8 @@ export async function spend(checks: [LimitName, string][]): Promise<LimitResult>
     try {
       await limits()[name].consume(key.toLowerCase());
     } catch (err) {
-      if (err instanceof RateLimiterRes) return { ok: false, retryAfterS: Math.max(1, Math.ceil(err.msBeforeNext / 1000)) };
+      if (err instanceof RateLimiterRes)
+        return { ok: false, retryAfterS: Math.max(1, Math.ceil(err.msBeforeNext / 1000)) };
       throw err;
     }
   }
@@ -113,5 +115,8 @@ function addressKey(address: string): string {
   const h = head ? head.split(':') : [];
   const t = a.includes('::') && tail ? tail.split(':') : [];
   const groups = a.includes('::') ? [...h, ...Array(Math.max(0, 8 - h.length - t.length)).fill('0'), ...t] : h;
-  return `${groups.slice(0, 4).map((g) => g.replace(/^0+(?=.)/, '')).join(':')}::/64`;
+  return `${groups
+    .slice(0, 4)
+    .map((g) => g.replace(/^0+(?=.)/, ''))
+    .join(':')}::/64`;
 }

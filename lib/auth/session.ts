@@ -7,7 +7,13 @@ import { authSecret } from './secret';
 import { tokenVersion } from './session-version';
 import type { Actor } from './policy';
 
-export type SessionUser = Actor & { handle: string; displayName: string; email: string; suspendedUntil: Date | null; memberSince: Date };
+export type SessionUser = Actor & {
+  handle: string;
+  displayName: string;
+  email: string;
+  suspendedUntil: Date | null;
+  memberSince: Date;
+};
 
 /**
  * The signed-in member, read fresh from the database so a role change or a
@@ -20,9 +26,19 @@ async function loadActor(token: JWT | null): Promise<SessionUser | null> {
   const id = Number(token.uid);
   if (!Number.isInteger(id) || id <= 0) return null;
   const { User } = initModels();
-  const u = await User.findByPk(id, { attributes: ['id', 'role', 'handle', 'displayName', 'email', 'suspendedUntil', 'createdAt', 'sessionVersion'] });
+  const u = await User.findByPk(id, {
+    attributes: ['id', 'role', 'handle', 'displayName', 'email', 'suspendedUntil', 'createdAt', 'sessionVersion'],
+  });
   if (!u || u.sessionVersion !== tokenVersion(token)) return null;
-  return { id: u.id, role: u.role, handle: u.handle, displayName: u.displayName, email: u.email, suspendedUntil: u.suspendedUntil ?? null, memberSince: u.createdAt };
+  return {
+    id: u.id,
+    role: u.role,
+    handle: u.handle,
+    displayName: u.displayName,
+    email: u.email,
+    suspendedUntil: u.suspendedUntil ?? null,
+    memberSince: u.createdAt,
+  };
 }
 
 /**

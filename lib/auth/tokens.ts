@@ -14,11 +14,22 @@ export const TOKEN_TTL_MS: Record<TokenPurpose, number> = {
 const sha256 = (s: string) => createHash('sha256').update(s).digest('hex');
 
 /** Issues a token for an e-mail link; returns the raw token (only its hash is stored). */
-export async function issueToken(userId: number, purpose: TokenPurpose, transaction?: Transaction, now = new Date()): Promise<string> {
+export async function issueToken(
+  userId: number,
+  purpose: TokenPurpose,
+  transaction?: Transaction,
+  now = new Date(),
+): Promise<string> {
   const { AuthToken } = initModels();
   const raw = randomBytes(32).toString('base64url');
   await AuthToken.create(
-    { userId, purpose, tokenHash: sha256(raw), expiresAt: new Date(now.getTime() + TOKEN_TTL_MS[purpose]), usedAt: null },
+    {
+      userId,
+      purpose,
+      tokenHash: sha256(raw),
+      expiresAt: new Date(now.getTime() + TOKEN_TTL_MS[purpose]),
+      usedAt: null,
+    },
     { transaction },
   );
   return raw;
@@ -30,17 +41,29 @@ export type ConsumeResult = { ok: true; userId: number } | { ok: false; reason: 
  * Uses a token once. The row is locked and marked used inside the caller's
  * transaction, so two clicks on the same link cannot both succeed.
  */
-export async function consumeToken(raw: string, purpose: TokenPurpose, transaction: Transaction, now = new Date()): Promise<ConsumeResult> {
+export async function consumeToken(
+  raw: string,
+  purpose: TokenPurpose,
+  transaction: Transaction,
+  now = new Date(),
+): Promise<ConsumeResult> {
   const { AuthToken } = initModels();
   if (!/^[A-Za-z0-9_-]{20,100}$/.test(raw)) return { ok: false, reason: 'unknown' };
-  const row = await AuthToken.findOne({ where: { tokenHash: sha256(raw), purpose }, transaction, lock: transaction.LOCK.UPDATE });
+  const row = await AuthToken.findOne({
+    where: { tokenHash: sha256(raw), purpose },
+    transaction,
+    lock: transaction.LOCK.UPDATE,
+  });
   if (!row) return { ok: false, reason: 'unknown' };
   if (row.usedAt) return { ok: false, reason: 'used' };
   if (row.expiresAt.getTime() <= now.getTime()) return { ok: false, reason: 'expired' };
   row.usedAt = now;
   await row.save({ transaction });
   // Other live tokens of the same kind for this member die with it (an older reset link, say).
-  await AuthToken.update({ usedAt: now }, { where: { userId: row.userId, purpose, usedAt: { [Op.is]: null } }, transaction });
+  await AuthToken.update(
+    { usedAt: now },
+    { where: { userId: row.userId, purpose, usedAt: { [Op.is]: null } }, transaction },
+  );
   return { ok: true, userId: row.userId };
 }
 

@@ -32,7 +32,8 @@ export interface NewWorkedCalculation {
  */
 export function keepToolFields(form: Record<string, string>, fields: readonly string[]): Record<string, string> {
   const kept: Record<string, string> = Object.create(null);
-  for (const f of fields) if (Object.prototype.hasOwnProperty.call(form, f) && typeof form[f] === 'string') kept[f] = form[f];
+  for (const f of fields)
+    if (Object.prototype.hasOwnProperty.call(form, f) && typeof form[f] === 'string') kept[f] = form[f];
   return kept;
 }
 

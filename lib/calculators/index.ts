@@ -5,9 +5,33 @@
  * database here; components/calculators draws them.
  */
 export { CALCULATOR_IDS, isCalculatorId, type CalculatorId } from './ids';
-export { defineCalculator, type Calculator, type CalculatorDef, type FieldDef, type FieldState, type FormState, type ResultRow } from './types';
-export { CALCULATORS, CALCULATOR_LIST, calculatorFields, calculatorInputNames, getCalculator, runCalculator, type ResultsOf } from './registry';
-export { computeForm, computeFromForm, recompute, resultsDiffer, visibleFields, type FormOutcome, type Recomputed } from './recompute';
+export {
+  defineCalculator,
+  type Calculator,
+  type CalculatorDef,
+  type FieldDef,
+  type FieldState,
+  type FormState,
+  type ResultRow,
+} from './types';
+export {
+  CALCULATORS,
+  CALCULATOR_LIST,
+  calculatorFields,
+  calculatorInputNames,
+  getCalculator,
+  runCalculator,
+  type ResultsOf,
+} from './registry';
+export {
+  computeForm,
+  computeFromForm,
+  recompute,
+  resultsDiffer,
+  visibleFields,
+  type FormOutcome,
+  type Recomputed,
+} from './recompute';
 export { convertState, hasOwnUnit, initialState, readForm, shareQuery, splitTyped } from './state';
 export { displayQuantity, formatNumber, inputNumber } from './format';
 export { SERIES_LABELS, seriesOptions, sizeOptions } from './pipes';

@@ -33,11 +33,29 @@ export const normalizeSeries = (raw: string) => {
 };
 
 /** Length, nominal size and series of one pipe run, under `prefix` (an engine field such as "drivePipe"). */
-export function pipeFields(prefix: string, props: { length: string; size: string; series: string }, label: string): FieldDef[] {
+export function pipeFields(
+  prefix: string,
+  props: { length: string; size: string; series: string },
+  label: string,
+): FieldDef[] {
   return [
     { type: 'quantity', name: `${prefix}.lengthM`, prop: props.length, label: `${label} length`, qty: 'length' },
-    { type: 'select', name: `${prefix}.nominal`, prop: props.size, label: `${label} size (nominal)`, options: sizeOptions, normalize: normalizeSize },
-    { type: 'select', name: `${prefix}.series`, prop: props.series, label: `${label} material`, options: seriesOptions, normalize: normalizeSeries },
+    {
+      type: 'select',
+      name: `${prefix}.nominal`,
+      prop: props.size,
+      label: `${label} size (nominal)`,
+      options: sizeOptions,
+      normalize: normalizeSize,
+    },
+    {
+      type: 'select',
+      name: `${prefix}.series`,
+      prop: props.series,
+      label: `${label} material`,
+      options: seriesOptions,
+      normalize: normalizeSeries,
+    },
   ];
 }
 

@@ -42,8 +42,7 @@ export function computeForm<R>(def: CalculatorDef<R>, state: FormState): FormOut
 }
 
 export type Recomputed<R = unknown> =
-  | { ok: true; output: CalcOutput<R>; engineVersion: string }
-  | { ok: false; field?: string; message: string };
+  { ok: true; output: CalcOutput<R>; engineVersion: string } | { ok: false; field?: string; message: string };
 
 /**
  * Runs a calculator on the inputs as a reader typed them (each with its unit, as in
@@ -79,7 +78,8 @@ export function computeFromForm(tool: string, form: Record<string, string>): Rec
 
 /** Whether two results differ beyond rounding (relative 1e-9), ignoring key order. */
 export function resultsDiffer(a: unknown, b: unknown): boolean {
-  if (typeof a === 'number' && typeof b === 'number') return Math.abs(a - b) > 1e-9 * Math.max(1, Math.abs(a), Math.abs(b));
+  if (typeof a === 'number' && typeof b === 'number')
+    return Math.abs(a - b) > 1e-9 * Math.max(1, Math.abs(a), Math.abs(b));
   if (Array.isArray(a) && Array.isArray(b)) return a.length !== b.length || a.some((x, i) => resultsDiffer(x, b[i]));
   if (a && b && typeof a === 'object' && typeof b === 'object') {
     const keys = new Set([...Object.keys(a), ...Object.keys(b)]);

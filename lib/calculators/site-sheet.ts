@@ -4,7 +4,15 @@
  * server, fill it from a field log entry, show it in the reader's units and open
  * any calculator prefilled from it. Pure, so the browser and the server share it.
  */
-import { defaultSeries, NOMINAL_LABELS, SYMPTOM_LABELS, type NominalSize, type PipeMaterial, type Symptom, type UnitSystem } from '@/lib/hydraulics';
+import {
+  defaultSeries,
+  NOMINAL_LABELS,
+  SYMPTOM_LABELS,
+  type NominalSize,
+  type PipeMaterial,
+  type Symptom,
+  type UnitSystem,
+} from '@/lib/hydraulics';
 import { ForumError } from '@/lib/questions/errors';
 import { DEFAULT_UNITS } from '@/lib/units/preference';
 import type { SiteSheetField } from '@/lib/validation/question';
@@ -25,9 +33,13 @@ const NEEDED_FOR_CHECK = ['fall', 'lift', 'driveLength'] as const;
  * sheet is complete enough the stall check must accept it (lift above the fall,
  * flows positive…). Throws a ForumError naming `siteSheet.<field>`.
  */
-export function validateSiteSheet(sheet: Record<string, string | undefined> | undefined): Record<string, string> | null {
+export function validateSiteSheet(
+  sheet: Record<string, string | undefined> | undefined,
+): Record<string, string> | null {
   if (!sheet) return null;
-  const given = Object.fromEntries(Object.entries(sheet).filter((e): e is [string, string] => typeof e[1] === 'string' && e[1].trim() !== ''));
+  const given = Object.fromEntries(
+    Object.entries(sheet).filter((e): e is [string, string] => typeof e[1] === 'string' && e[1].trim() !== ''),
+  );
   if (Object.keys(given).length === 0) return null;
   const def = CALCULATORS['stall-check'];
   const state = initialState(def.fields, given, {}, DEFAULT_UNITS);
@@ -87,17 +99,58 @@ export function entrySiteSheet(e: MeasuredSite): SiteSheet {
 
 /** Which calculator input each site-sheet field fills, per calculator (the site sheet is the stall check's form). */
 const PREFILL: Record<CalculatorId, Partial<Record<SiteSheetField, string>>> = {
-  'stall-check': { fall: 'fall', lift: 'lift', driveLength: 'driveLength', driveSize: 'driveSize', driveMaterial: 'driveMaterial', sourceFlow: 'sourceFlow', pumpSize: 'pumpSize', pumps: 'pumps', driveFlow: 'driveFlow', delivered: 'delivered', bpm: 'bpm', symptoms: 'symptoms' },
+  'stall-check': {
+    fall: 'fall',
+    lift: 'lift',
+    driveLength: 'driveLength',
+    driveSize: 'driveSize',
+    driveMaterial: 'driveMaterial',
+    sourceFlow: 'sourceFlow',
+    pumpSize: 'pumpSize',
+    pumps: 'pumps',
+    driveFlow: 'driveFlow',
+    delivered: 'delivered',
+    bpm: 'bpm',
+    symptoms: 'symptoms',
+  },
   'yield-estimate': { fall: 'fall', lift: 'lift', driveFlow: 'driveFlow', delivered: 'measured' },
-  'drive-pipe-check': { fall: 'fall', lift: 'lift', driveLength: 'length', driveSize: 'size', driveMaterial: 'material', driveFlow: 'driveFlow' },
-  'delivery-line': { lift: 'lift', deliveryLength: 'length', deliverySize: 'size', deliveryMaterial: 'material', delivered: 'flow' },
-  'array-planner': { fall: 'fall', lift: 'lift', pumps: 'pumps', driveFlow: 'driveFlowEach', driveLength: 'driveLength', driveSize: 'driveSize', driveMaterial: 'driveMaterial', deliveryLength: 'deliveryLength', deliverySize: 'deliverySize', deliveryMaterial: 'deliveryMaterial', sourceFlow: 'sourceFlow' },
+  'drive-pipe-check': {
+    fall: 'fall',
+    lift: 'lift',
+    driveLength: 'length',
+    driveSize: 'size',
+    driveMaterial: 'material',
+    driveFlow: 'driveFlow',
+  },
+  'delivery-line': {
+    lift: 'lift',
+    deliveryLength: 'length',
+    deliverySize: 'size',
+    deliveryMaterial: 'material',
+    delivered: 'flow',
+  },
+  'array-planner': {
+    fall: 'fall',
+    lift: 'lift',
+    pumps: 'pumps',
+    driveFlow: 'driveFlowEach',
+    driveLength: 'driveLength',
+    driveSize: 'driveSize',
+    driveMaterial: 'driveMaterial',
+    deliveryLength: 'deliveryLength',
+    deliverySize: 'deliverySize',
+    deliveryMaterial: 'deliveryMaterial',
+    sourceFlow: 'sourceFlow',
+  },
   'source-flow': {},
   'demand-and-storage': {},
 };
 
 /** A calculator's starting inputs from a question's site sheet ("open any calculator prefilled"). */
-export function calculatorPropsFromSiteSheet(tool: CalculatorId, sheet: Record<string, string> | null): Record<string, string> {
+export function calculatorPropsFromSiteSheet(
+  tool: CalculatorId,
+  sheet: Record<string, string> | null,
+): Record<string, string> {
   const out: Record<string, string> = {};
   for (const [from, to] of Object.entries(PREFILL[tool])) if (to && sheet?.[from]) out[to] = sheet[from];
   return out;
@@ -123,7 +176,10 @@ export const SITE_SHEET_LABELS: Record<SiteSheetField, string> = {
 };
 
 /** The site sheet for reading, each measurement in the reader's units. */
-export function siteSheetRows(sheet: Record<string, string> | null, units: UnitSystem): { label: string; value: string }[] {
+export function siteSheetRows(
+  sheet: Record<string, string> | null,
+  units: UnitSystem,
+): { label: string; value: string }[] {
   if (!sheet) return [];
   const def = CALCULATORS['stall-check'];
   const state = initialState(def.fields, sheet, {}, units);
@@ -134,14 +190,19 @@ export function siteSheetRows(sheet: Record<string, string> | null, units: UnitS
     let value = raw;
     if (field?.type === 'quantity') {
       const { values } = readForm([field], state);
-      const si = field.name.split('.').reduce<unknown>((o, k) => (o as Record<string, unknown> | undefined)?.[k], values);
+      const si = field.name
+        .split('.')
+        .reduce<unknown>((o, k) => (o as Record<string, unknown> | undefined)?.[k], values);
       if (typeof si === 'number') value = Object.values(displayQuantity(field.qty, si, units)).join(' ');
     } else if (key === 'driveSize' || key === 'pumpSize' || key === 'deliverySize') {
       value = NOMINAL_LABELS[raw as NominalSize] ?? raw;
     } else if (key === 'driveMaterial' || key === 'deliveryMaterial') {
       value = SERIES_LABELS[raw as keyof typeof SERIES_LABELS] ?? raw;
     } else if (key === 'symptoms') {
-      value = raw.split(',').map((s) => SYMPTOM_LABELS[s.trim() as Symptom] ?? s).join(', ');
+      value = raw
+        .split(',')
+        .map((s) => SYMPTOM_LABELS[s.trim() as Symptom] ?? s)
+        .join(', ');
     }
     rows.push({ label: SITE_SHEET_LABELS[key as SiteSheetField] ?? key, value });
   }

@@ -1,11 +1,4 @@
-import {
-  DISPLAY_UNITS,
-  fromSI,
-  parseQuantity,
-  toSI,
-  type QuantityKind,
-  type UnitSystem,
-} from '@/lib/hydraulics';
+import { DISPLAY_UNITS, fromSI, parseQuantity, toSI, type QuantityKind, type UnitSystem } from '@/lib/hydraulics';
 import { EngineInputError } from '@/lib/hydraulics';
 import { inputNumber } from './format';
 import type { FieldDef, FieldState, FormState } from './types';
@@ -26,14 +19,21 @@ export function hasOwnUnit(text: string): boolean {
 }
 
 /** The form's starting state from MDX props or a share link, in the reader's units. */
-export function initialState(fields: readonly FieldDef[], props: Record<string, string | undefined>, defaults: Record<string, string>, units: UnitSystem): FormState {
+export function initialState(
+  fields: readonly FieldDef[],
+  props: Record<string, string | undefined>,
+  defaults: Record<string, string>,
+  units: UnitSystem,
+): FormState {
   const state: FormState = {};
   for (const f of fields) {
     const raw = props[f.prop] ?? defaults[f.prop] ?? '';
     if (f.type === 'quantity') {
       const { text, unit } = splitTyped(raw);
       const pick = unit && isKnownUnit(f.qty, unit) ? unit : undefined;
-      state[f.name] = pick ? { text, unit: pick } : { text: raw && !pick && unit ? raw : text, unit: DISPLAY_UNITS[f.qty][units] };
+      state[f.name] = pick
+        ? { text, unit: pick }
+        : { text: raw && !pick && unit ? raw : text, unit: DISPLAY_UNITS[f.qty][units] };
     } else if (f.type === 'checks') {
       state[f.name] = { text: f.normalize ? f.normalize(raw) : raw };
     } else if (f.type === 'select') {
@@ -95,7 +95,10 @@ function setPath(obj: Record<string, unknown>, dotted: string, value: unknown) {
 }
 
 /** Reads the form into SI values keyed by engine field, with a message per field that does not read. */
-export function readForm(fields: readonly FieldDef[], state: FormState): { values: Record<string, unknown>; errors: Record<string, string> } {
+export function readForm(
+  fields: readonly FieldDef[],
+  state: FormState,
+): { values: Record<string, unknown>; errors: Record<string, string> } {
   const values: Record<string, unknown> = {};
   const errors: Record<string, string> = {};
   for (const f of fields) {
@@ -108,11 +111,19 @@ export function readForm(fields: readonly FieldDef[], state: FormState): { value
         const t = s.text.trim().replace(/%$/, '');
         if (t === '') continue;
         const n = Number(t);
-        if (!Number.isFinite(n)) throw new EngineInputError([{ field: f.name, message: `could not read "${s.text}" as a number` }]);
+        if (!Number.isFinite(n))
+          throw new EngineInputError([{ field: f.name, message: `could not read "${s.text}" as a number` }]);
         // an efficiency may be typed as 60 or 60% or 0.6
         setPath(values, f.name, f.percent && (n > 1 || s.text.trim().endsWith('%')) ? n / 100 : n);
       } else if (f.type === 'checks') {
-        setPath(values, f.name, s.text.split(',').map((x) => x.trim()).filter(Boolean));
+        setPath(
+          values,
+          f.name,
+          s.text
+            .split(',')
+            .map((x) => x.trim())
+            .filter(Boolean),
+        );
       } else if (s.text !== '') {
         setPath(values, f.name, s.text);
       }
@@ -129,7 +140,10 @@ export function shareQuery(fields: readonly FieldDef[], state: FormState): URLSe
   for (const f of fields) {
     const s = state[f.name];
     if (!s || s.text.trim() === '') continue;
-    q.set(f.prop, f.type === 'quantity' && !hasOwnUnit(s.text) && s.unit ? `${s.text.trim()} ${s.unit}` : s.text.trim());
+    q.set(
+      f.prop,
+      f.type === 'quantity' && !hasOwnUnit(s.text) && s.unit ? `${s.text.trim()} ${s.unit}` : s.text.trim(),
+    );
   }
   return q;
 }

@@ -4,8 +4,26 @@ import type { CalculatorId } from './ids';
 
 /** One input of a calculator. `name` is the engine's (dotted) field; `prop` the MDX/share-link name. */
 export type FieldDef =
-  | { type: 'quantity'; name: string; prop: string; label: string; qty: QuantityKind; help?: string; units?: readonly string[] }
-  | { type: 'number'; name: string; prop: string; label: string; help?: string; min?: number; max?: number; step?: number; percent?: boolean }
+  | {
+      type: 'quantity';
+      name: string;
+      prop: string;
+      label: string;
+      qty: QuantityKind;
+      help?: string;
+      units?: readonly string[];
+    }
+  | {
+      type: 'number';
+      name: string;
+      prop: string;
+      label: string;
+      help?: string;
+      min?: number;
+      max?: number;
+      step?: number;
+      percent?: boolean;
+    }
   | {
       type: 'select';
       name: string;

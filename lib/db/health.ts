@@ -9,7 +9,9 @@ import { readDbConfig } from './config';
  * queue. One connection per process, opened on first use and again after a failure;
  * concurrent checks share one ping in flight.
  */
-const globalForHealth = globalThis as unknown as { __clackwaterHealth?: { conn?: mariadb.Connection; inFlight?: Promise<{ latencyMs: number }> } };
+const globalForHealth = globalThis as unknown as {
+  __clackwaterHealth?: { conn?: mariadb.Connection; inFlight?: Promise<{ latencyMs: number }> };
+};
 
 function state() {
   if (!globalForHealth.__clackwaterHealth) globalForHealth.__clackwaterHealth = {};
@@ -23,7 +25,11 @@ async function connection(): Promise<mariadb.Connection> {
   if (s.conn && s.conn.isValid()) return s.conn;
   const cfg = readDbConfig();
   s.conn = await mariadb.createConnection({
-    host: cfg.host, port: cfg.port, user: cfg.user, password: cfg.password, database: cfg.database,
+    host: cfg.host,
+    port: cfg.port,
+    user: cfg.user,
+    password: cfg.password,
+    database: cfg.database,
     connectTimeout: PING_TIMEOUT_MS,
   });
   return s.conn;
@@ -35,7 +41,10 @@ async function ping(): Promise<{ latencyMs: number }> {
     const conn = await connection();
     let timer: ReturnType<typeof setTimeout> | undefined;
     const late = new Promise<never>((_, reject) => {
-      timer = setTimeout(() => reject(new Error(`the database did not answer within ${PING_TIMEOUT_MS} ms`)), PING_TIMEOUT_MS);
+      timer = setTimeout(
+        () => reject(new Error(`the database did not answer within ${PING_TIMEOUT_MS} ms`)),
+        PING_TIMEOUT_MS,
+      );
     });
     try {
       await Promise.race([conn.query('SELECT 1'), late]);
@@ -54,7 +63,10 @@ async function ping(): Promise<{ latencyMs: number }> {
 /** Round-trips SELECT 1 on the health connection; throws when the database does not answer. */
 export function pingDatabaseDirect(): Promise<{ latencyMs: number }> {
   const s = state();
-  if (!s.inFlight) s.inFlight = ping().finally(() => { s.inFlight = undefined; });
+  if (!s.inFlight)
+    s.inFlight = ping().finally(() => {
+      s.inFlight = undefined;
+    });
   return s.inFlight;
 }
 

@@ -2,7 +2,14 @@
  * Before/after comparisons of two entries on one site: the measured ratio with the
  * spread of the trials, and the ratio the array planner predicts for the change.
  */
-import { defaultSeries, planArray, resolvePipe, type NominalSize, type PipeMaterial, type PumpType } from '@/lib/hydraulics';
+import {
+  defaultSeries,
+  planArray,
+  resolvePipe,
+  type NominalSize,
+  type PipeMaterial,
+  type PumpType,
+} from '@/lib/hydraulics';
 import { trialSpread, type TrialSI } from './measure';
 
 export interface ComparableEntry {
@@ -54,7 +61,11 @@ function plannedDelivery(e: ComparableEntry, perPumpDriveM3s: number): number | 
   const out = planArray({
     fallM: e.fallM,
     liftM: e.liftM,
-    pumps: Array.from({ length: e.pumpCount }, () => ({ pumpType: e.pumpType, driveFlowM3s: perPumpDriveM3s, drivePipe })),
+    pumps: Array.from({ length: e.pumpCount }, () => ({
+      pumpType: e.pumpType,
+      driveFlowM3s: perPumpDriveM3s,
+      drivePipe,
+    })),
     deliveryLine: pipe(e.deliveryLengthM, e.deliverySize, e.deliveryMaterial),
     ...(e.waterTempC !== null ? { waterTempC: e.waterTempC } : {}),
   });
@@ -66,7 +77,10 @@ function plannedDelivery(e: ComparableEntry, perPumpDriveM3s: number): number | 
  * get its measured drive flow per pump; the after layout is planned with that same
  * per-pump drive flow, so the prediction uses nothing measured after the change.
  */
-export function plannerRatio(before: ComparableEntry, after: ComparableEntry): { ratio: number; beforeM3s: number; afterM3s: number } | null {
+export function plannerRatio(
+  before: ComparableEntry,
+  after: ComparableEntry,
+): { ratio: number; beforeM3s: number; afterM3s: number } | null {
   const perPump = before.driveFlowM3s / before.pumpCount;
   try {
     const b = plannedDelivery(before, perPump);

@@ -38,7 +38,13 @@ export const CSV_COLUMNS = [
 ] as const;
 
 /** Computed on export for reading; import ignores them. */
-export const CSV_COMPUTED_COLUMNS = ['delivered_flow_l_min', 'efficiency_daubuisson', 'efficiency_rankine', 'predicted_flow_l_min', 'lift_ratio'] as const;
+export const CSV_COMPUTED_COLUMNS = [
+  'delivered_flow_l_min',
+  'efficiency_daubuisson',
+  'efficiency_rankine',
+  'predicted_flow_l_min',
+  'lift_ratio',
+] as const;
 
 type Column = (typeof CSV_COLUMNS)[number][0];
 const COLUMN_NAMES: readonly string[] = CSV_COLUMNS.map((c) => c[0]);
@@ -52,11 +58,27 @@ export interface RowError {
 }
 
 const FIELD_TO_COLUMN: Record<string, Column> = {
-  siteName: 'site_name', testedOn: 'tested_on', pumpType: 'pump_type', pumpSize: 'pump_size_in', pumpCount: 'pump_count',
-  arrangement: 'arrangement', fall: 'fall_m', lift: 'lift_m', driveLength: 'drive_length_m', driveSize: 'drive_size_in',
-  driveMaterial: 'drive_material', deliveryLength: 'delivery_length_m', deliverySize: 'delivery_size_in',
-  deliveryMaterial: 'delivery_material', driveFlow: 'drive_flow_l_min', driveFlowMethod: 'drive_flow_method',
-  driveFlowHow: 'drive_flow_how', bpm: 'beats_per_min', wasteValveSetting: 'waste_valve_setting', waterTempC: 'water_temp_c', notes: 'notes',
+  siteName: 'site_name',
+  testedOn: 'tested_on',
+  pumpType: 'pump_type',
+  pumpSize: 'pump_size_in',
+  pumpCount: 'pump_count',
+  arrangement: 'arrangement',
+  fall: 'fall_m',
+  lift: 'lift_m',
+  driveLength: 'drive_length_m',
+  driveSize: 'drive_size_in',
+  driveMaterial: 'drive_material',
+  deliveryLength: 'delivery_length_m',
+  deliverySize: 'delivery_size_in',
+  deliveryMaterial: 'delivery_material',
+  driveFlow: 'drive_flow_l_min',
+  driveFlowMethod: 'drive_flow_method',
+  driveFlowHow: 'drive_flow_how',
+  bpm: 'beats_per_min',
+  wasteValveSetting: 'waste_valve_setting',
+  waterTempC: 'water_temp_c',
+  notes: 'notes',
 };
 
 function columnOf(field: string | undefined): Column | '(row)' {
@@ -82,7 +104,10 @@ function lengthCell(raw: string, unit: string): string | undefined {
 }
 
 /** One CSV row into the entry form, or the first error naming its column. */
-export function rowToInput(row: Record<string, string>, line: number): { data: FieldLogEntryData } | { error: RowError } {
+export function rowToInput(
+  row: Record<string, string>,
+  line: number,
+): { data: FieldLogEntryData } | { error: RowError } {
   const cell = (c: Column) => (row[c] ?? '').trim();
   const fail = (column: Column | '(row)', message: string) => ({ error: { line, column, message } });
   const nums: Partial<Record<Column, number>> = {};
@@ -92,17 +117,34 @@ export function rowToInput(row: Record<string, string>, line: number): { data: F
     if (n !== undefined) nums[c] = n;
   }
   for (const c of ['fall_m', 'lift_m', 'drive_length_m', 'delivery_length_m', 'drive_flow_l_min'] as const) {
-    if (cell(c) !== '' && !NUMBER.test(cell(c))) return fail(c, `${c}: "${cell(c)}" is not a number (the unit is in the column name)`);
+    if (cell(c) !== '' && !NUMBER.test(cell(c)))
+      return fail(c, `${c}: "${cell(c)}" is not a number (the unit is in the column name)`);
   }
-  const volumes = cell('trial_volumes_l') === '' ? [] : cell('trial_volumes_l').split(';').map((s) => s.trim());
-  const seconds = cell('trial_seconds') === '' ? [] : cell('trial_seconds').split(';').map((s) => s.trim());
+  const volumes =
+    cell('trial_volumes_l') === ''
+      ? []
+      : cell('trial_volumes_l')
+          .split(';')
+          .map((s) => s.trim());
+  const seconds =
+    cell('trial_seconds') === ''
+      ? []
+      : cell('trial_seconds')
+          .split(';')
+          .map((s) => s.trim());
   if (volumes.length === 0) return fail('trial_volumes_l', 'trial_volumes_l: give at least one trial volume');
-  if (volumes.length !== seconds.length) return fail('trial_seconds', `trial_seconds: ${seconds.length} times for ${volumes.length} volumes; give one time for each volume`);
+  if (volumes.length !== seconds.length)
+    return fail(
+      'trial_seconds',
+      `trial_seconds: ${seconds.length} times for ${volumes.length} volumes; give one time for each volume`,
+    );
   const trials = [];
   for (const [i, volume] of volumes.entries()) {
     const second = seconds[i] ?? ''; // as many as the volumes, checked above
-    if (!NUMBER.test(volume)) return fail('trial_volumes_l', `trial_volumes_l: "${volume}" (trial ${i + 1}) is not a number`);
-    if (!NUMBER.test(second)) return fail('trial_seconds', `trial_seconds: "${second}" (trial ${i + 1}) is not a number`);
+    if (!NUMBER.test(volume))
+      return fail('trial_volumes_l', `trial_volumes_l: "${volume}" (trial ${i + 1}) is not a number`);
+    if (!NUMBER.test(second))
+      return fail('trial_seconds', `trial_seconds: "${second}" (trial ${i + 1}) is not a number`);
     trials.push({ volume: `${volume} L`, seconds: Number(second) });
   }
   const input = {
@@ -157,16 +199,25 @@ export interface ImportResult {
 
 /** Reads the file's rows; throws a ForumError for a file that is not our CSV at all. */
 export function parseCsv(text: string): { rows: Record<string, string>[] } {
-  const parsed = Papa.parse<Record<string, string>>(text.replace(/^\uFEFF/, ''), { header: true, skipEmptyLines: 'greedy', transformHeader: (h) => h.trim() });
+  const parsed = Papa.parse<Record<string, string>>(text.replace(/^\uFEFF/, ''), {
+    header: true,
+    skipEmptyLines: 'greedy',
+    transformHeader: (h) => h.trim(),
+  });
   const headers = parsed.meta.fields ?? [];
   const missing = CSV_COLUMNS.filter((c) => c[2] && !headers.includes(c[0])).map((c) => c[0]);
-  if (missing.length) throw new ForumError(422, `file: the header lacks ${missing.join(', ')} (see the column list)`, 'file');
-  const unknown = headers.filter((h) => !COLUMN_NAMES.includes(h) && !(CSV_COMPUTED_COLUMNS as readonly string[]).includes(h));
-  if (unknown.length) throw new ForumError(422, `file: unknown columns ${unknown.join(', ')} (see the column list)`, 'file');
+  if (missing.length)
+    throw new ForumError(422, `file: the header lacks ${missing.join(', ')} (see the column list)`, 'file');
+  const unknown = headers.filter(
+    (h) => !COLUMN_NAMES.includes(h) && !(CSV_COMPUTED_COLUMNS as readonly string[]).includes(h),
+  );
+  if (unknown.length)
+    throw new ForumError(422, `file: unknown columns ${unknown.join(', ')} (see the column list)`, 'file');
   const structural = parsed.errors.find((e) => e.type !== 'FieldMismatch' || e.code === 'TooManyFields');
   if (structural) throw new ForumError(422, `file: line ${(structural.row ?? 0) + 2}: ${structural.message}`, 'file');
   if (parsed.data.length === 0) throw new ForumError(422, 'file: no rows under the header', 'file');
-  if (parsed.data.length > MAX_IMPORT_ROWS) throw new ForumError(422, `file: at most ${MAX_IMPORT_ROWS} rows at a time`, 'file');
+  if (parsed.data.length > MAX_IMPORT_ROWS)
+    throw new ForumError(422, `file: at most ${MAX_IMPORT_ROWS} rows at a time`, 'file');
   return { rows: parsed.data };
 }
 
@@ -175,7 +226,11 @@ export function parseCsv(text: string): { rows: Record<string, string>[] } {
  * and nothing is written (the errors come back). Valid-only: the good rows are written
  * and the bad ones listed as skipped.
  */
-export async function importCsv(user: { id: number }, text: string, mode: 'all-or-nothing' | 'valid-only'): Promise<ImportResult> {
+export async function importCsv(
+  user: { id: number },
+  text: string,
+  mode: 'all-or-nothing' | 'valid-only',
+): Promise<ImportResult> {
   const { rows } = parseCsv(text);
   const errors: RowError[] = [];
   const good: FieldLogEntryData[] = [];
@@ -200,15 +255,33 @@ const EXPORT_COLUMNS = [...COLUMN_NAMES, ...CSV_COMPUTED_COLUMNS];
 
 function exportRow(e: EntryView): string[] {
   const r: Record<string, string> = {
-    site_name: e.siteName, tested_on: e.testedOn, pump_type: e.pumpType, pump_size_in: e.pumpSize, pump_count: String(e.pumpCount),
-    arrangement: e.arrangement, fall_m: num(e.fallM), lift_m: num(e.liftM), drive_length_m: num(e.driveLengthM), drive_size_in: e.driveSize,
-    drive_material: e.driveMaterial, delivery_length_m: num(e.deliveryLengthM), delivery_size_in: e.deliverySize ?? '',
-    delivery_material: e.deliveryMaterial ?? '', drive_flow_l_min: lmin(e.driveFlowM3s), drive_flow_method: e.driveFlowMethod,
-    drive_flow_how: e.driveFlowHow, trial_volumes_l: e.trials.map((t) => num(t.volumeL)).join(';'),
-    trial_seconds: e.trials.map((t) => num(t.seconds)).join(';'), beats_per_min: num(e.beatsPerMinute),
-    waste_valve_setting: e.wasteValveSetting, water_temp_c: num(e.waterTempC), notes: e.notes,
-    delivered_flow_l_min: lmin(e.deliveredFlowM3s), efficiency_daubuisson: num(e.performance.dAubuisson),
-    efficiency_rankine: num(e.performance.rankine), predicted_flow_l_min: lmin(e.performance.predictedDeliveredFlowM3s),
+    site_name: e.siteName,
+    tested_on: e.testedOn,
+    pump_type: e.pumpType,
+    pump_size_in: e.pumpSize,
+    pump_count: String(e.pumpCount),
+    arrangement: e.arrangement,
+    fall_m: num(e.fallM),
+    lift_m: num(e.liftM),
+    drive_length_m: num(e.driveLengthM),
+    drive_size_in: e.driveSize,
+    drive_material: e.driveMaterial,
+    delivery_length_m: num(e.deliveryLengthM),
+    delivery_size_in: e.deliverySize ?? '',
+    delivery_material: e.deliveryMaterial ?? '',
+    drive_flow_l_min: lmin(e.driveFlowM3s),
+    drive_flow_method: e.driveFlowMethod,
+    drive_flow_how: e.driveFlowHow,
+    trial_volumes_l: e.trials.map((t) => num(t.volumeL)).join(';'),
+    trial_seconds: e.trials.map((t) => num(t.seconds)).join(';'),
+    beats_per_min: num(e.beatsPerMinute),
+    waste_valve_setting: e.wasteValveSetting,
+    water_temp_c: num(e.waterTempC),
+    notes: e.notes,
+    delivered_flow_l_min: lmin(e.deliveredFlowM3s),
+    efficiency_daubuisson: num(e.performance.dAubuisson),
+    efficiency_rankine: num(e.performance.rankine),
+    predicted_flow_l_min: lmin(e.performance.predictedDeliveredFlowM3s),
     lift_ratio: num(e.performance.liftRatio),
   };
   return EXPORT_COLUMNS.map((c) => r[c]);

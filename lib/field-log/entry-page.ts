@@ -20,7 +20,10 @@ export async function loadEntryPage(id: number, viewer: Actor | null): Promise<E
   if (!entry) return null;
   const { Photo, FieldLogEntry } = initModels();
   const links = await linksOf(id);
-  const photoRows = await Photo.findAll({ where: { fieldLogEntryId: id, ...(can(viewer, 'moderation.seeHidden') ? {} : { hiddenAt: null, deletedAt: null }) }, order: [['id', 'ASC']] });
+  const photoRows = await Photo.findAll({
+    where: { fieldLogEntryId: id, ...(can(viewer, 'moderation.seeHidden') ? {} : { hiddenAt: null, deletedAt: null }) },
+    order: [['id', 'ASC']],
+  });
   const mayLink = can(viewer, 'fieldLog.edit', entry.authorId);
   let linkCandidates: EntryPage['linkCandidates'] = [];
   if (mayLink) {
@@ -30,7 +33,15 @@ export async function loadEntryPage(id: number, viewer: Actor | null): Promise<E
       attributes: ['id', 'testedOn', 'pumpCount', 'arrangement', 'pumpSize'],
     });
     const linked = new Set(links.filter((l) => l.afterId === id).map((l) => l.beforeId));
-    linkCandidates = rows.filter((r) => !linked.has(r.id)).map((r) => ({ id: r.id, testedOn: r.testedOn, pumpCount: r.pumpCount, arrangement: r.arrangement, pumpSize: r.pumpSize }));
+    linkCandidates = rows
+      .filter((r) => !linked.has(r.id))
+      .map((r) => ({
+        id: r.id,
+        testedOn: r.testedOn,
+        pumpCount: r.pumpCount,
+        arrangement: r.arrangement,
+        pumpSize: r.pumpSize,
+      }));
   }
   return {
     entry,

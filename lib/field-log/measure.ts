@@ -60,7 +60,12 @@ function quantity(text: string, kind: 'length' | 'flow' | 'volume', field: strin
 
 function nominal(text: string, field: string): NominalSize {
   const n = parseNominalSize(text);
-  if (!n) throw new ForumError(422, `${field}: "${text}" is not a pipe size from ½" to 4" (${NOMINAL_SIZES.join(', ')})`, field);
+  if (!n)
+    throw new ForumError(
+      422,
+      `${field}: "${text}" is not a pipe size from ½" to 4" (${NOMINAL_SIZES.join(', ')})`,
+      field,
+    );
   return n;
 }
 
@@ -72,11 +77,18 @@ export function readEntry(v: FieldLogEntryData): EntrySI {
   const driveFlowM3s = quantity(v.driveFlow, 'flow', 'driveFlow');
   const deliveryLengthM = v.deliveryLength ? quantity(v.deliveryLength, 'length', 'deliveryLength') : null;
   if (fallM <= 0) throw new ForumError(422, 'fall: must be more than 0', 'fall');
-  if (liftM <= fallM) throw new ForumError(422, 'lift: must be greater than the fall; a ram lifts water above its source', 'lift');
+  if (liftM <= fallM)
+    throw new ForumError(422, 'lift: must be greater than the fall; a ram lifts water above its source', 'lift');
   if (driveLengthM <= 0) throw new ForumError(422, 'driveLength: must be more than 0', 'driveLength');
   if (driveFlowM3s <= 0) throw new ForumError(422, 'driveFlow: must be more than 0', 'driveFlow');
-  if (v.arrangement === 'single' && v.pumpCount !== 1) throw new ForumError(422, 'pumpCount: a single arrangement has one pump; choose parallel or staged for more', 'pumpCount');
-  if (v.arrangement !== 'single' && v.pumpCount < 2) throw new ForumError(422, `pumpCount: a ${v.arrangement} arrangement needs at least two pumps`, 'pumpCount');
+  if (v.arrangement === 'single' && v.pumpCount !== 1)
+    throw new ForumError(
+      422,
+      'pumpCount: a single arrangement has one pump; choose parallel or staged for more',
+      'pumpCount',
+    );
+  if (v.arrangement !== 'single' && v.pumpCount < 2)
+    throw new ForumError(422, `pumpCount: a ${v.arrangement} arrangement needs at least two pumps`, 'pumpCount');
   const trials = v.trials.map((t, i) => {
     const volumeL = quantity(t.volume, 'volume', `trials.${i}.volume`) * 1000;
     if (volumeL <= 0) throw new ForumError(422, `trials.${i}.volume: must be more than 0`, `trials.${i}.volume`);
@@ -84,16 +96,30 @@ export function readEntry(v: FieldLogEntryData): EntrySI {
   });
   const deliveredFlowM3s = trialSpread(trials).mean;
   if (deliveredFlowM3s >= driveFlowM3s) {
-    throw new ForumError(422, 'trials: the delivered flow must be less than the drive flow; a ram delivers only part of the water it uses', 'trials');
+    throw new ForumError(
+      422,
+      'trials: the delivered flow must be less than the drive flow; a ram delivers only part of the water it uses',
+      'trials',
+    );
   }
   if (dAubuissonEfficiency(driveFlowM3s, deliveredFlowM3s, fallM, liftM) > 1) {
-    throw new ForumError(422, 'trials: these trials imply an efficiency above 1 at this fall, lift and drive flow; check the measurements', 'trials');
+    throw new ForumError(
+      422,
+      'trials: these trials imply an efficiency above 1 at this fall, lift and drive flow; check the measurements',
+      'trials',
+    );
   }
   return {
     pumpSize: nominal(v.pumpSize, 'pumpSize'),
     driveSize: nominal(v.driveSize, 'driveSize'),
     deliverySize: v.deliverySize ? nominal(v.deliverySize, 'deliverySize') : null,
-    fallM, liftM, driveLengthM, deliveryLengthM, driveFlowM3s, trials, deliveredFlowM3s,
+    fallM,
+    liftM,
+    driveLengthM,
+    deliveryLengthM,
+    driveFlowM3s,
+    trials,
+    deliveredFlowM3s,
   };
 }
 
@@ -116,7 +142,14 @@ export interface EntryPerformance {
  * η_R = 3 × 7.5 / (27 × 1.5) = 0.556; homemade typical at h/H = 6 is 0.55 →
  * predicted q = 0.55 × 30 × 1.5 / 9 = 2.75 L/min.
  */
-export function performance(e: { pumpType: PumpType; fallM: number; liftM: number; driveFlowM3s: number; waterTempC?: number | null; trials: TrialSI[] }): EntryPerformance {
+export function performance(e: {
+  pumpType: PumpType;
+  fallM: number;
+  liftM: number;
+  driveFlowM3s: number;
+  waterTempC?: number | null;
+  trials: TrialSI[];
+}): EntryPerformance {
   const spread = trialSpread(e.trials);
   const q = spread.mean;
   const est = estimateYield({

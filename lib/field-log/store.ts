@@ -19,33 +19,63 @@ import { deliveryRatio, plannerRatio, type Ratio } from './compare';
 export function entryRows(authorId: number, v: FieldLogEntryData) {
   const si = readEntry(v);
   const typed: Record<string, string> = {
-    fall: v.fall, lift: v.lift, driveLength: v.driveLength, driveFlow: v.driveFlow,
-    pumpSize: v.pumpSize, driveSize: v.driveSize,
+    fall: v.fall,
+    lift: v.lift,
+    driveLength: v.driveLength,
+    driveFlow: v.driveFlow,
+    pumpSize: v.pumpSize,
+    driveSize: v.driveSize,
     ...(v.deliveryLength ? { deliveryLength: v.deliveryLength } : {}),
     ...(v.deliverySize ? { deliverySize: v.deliverySize } : {}),
     trials: v.trials.map((x) => `${x.volume} in ${x.seconds} s`).join('; '),
   };
   const entry = {
-    authorId, siteName: v.siteName, testedOn: v.testedOn, pumpType: v.pumpType, pumpSize: si.pumpSize,
-    pumpCount: v.pumpCount, arrangement: v.arrangement, fallM: si.fallM, liftM: si.liftM, driveLengthM: si.driveLengthM,
-    driveSize: si.driveSize, driveMaterial: v.driveMaterial, deliveryLengthM: si.deliveryLengthM, deliverySize: si.deliverySize,
-    deliveryMaterial: v.deliveryMaterial ?? null, driveFlowM3s: si.driveFlowM3s, driveFlowMethod: v.driveFlowMethod,
-    driveFlowHow: v.driveFlowHow, deliveredFlowM3s: si.deliveredFlowM3s, beatsPerMinute: v.bpm ?? null,
-    wasteValveSetting: v.wasteValveSetting, waterTempC: v.waterTempC ?? null, notes: v.notes, typed,
+    authorId,
+    siteName: v.siteName,
+    testedOn: v.testedOn,
+    pumpType: v.pumpType,
+    pumpSize: si.pumpSize,
+    pumpCount: v.pumpCount,
+    arrangement: v.arrangement,
+    fallM: si.fallM,
+    liftM: si.liftM,
+    driveLengthM: si.driveLengthM,
+    driveSize: si.driveSize,
+    driveMaterial: v.driveMaterial,
+    deliveryLengthM: si.deliveryLengthM,
+    deliverySize: si.deliverySize,
+    deliveryMaterial: v.deliveryMaterial ?? null,
+    driveFlowM3s: si.driveFlowM3s,
+    driveFlowMethod: v.driveFlowMethod,
+    driveFlowHow: v.driveFlowHow,
+    deliveredFlowM3s: si.deliveredFlowM3s,
+    beatsPerMinute: v.bpm ?? null,
+    wasteValveSetting: v.wasteValveSetting,
+    waterTempC: v.waterTempC ?? null,
+    notes: v.notes,
+    typed,
   };
   return { entry, trials: si.trials.map((x, i) => ({ position: i, volumeL: x.volumeL, seconds: x.seconds })) };
 }
 
 /** Writes one entry and its trials, in the given transaction or a new one. */
-export async function createEntry(user: { id: number }, v: FieldLogEntryData, transaction?: Transaction): Promise<FieldLogEntry> {
+export async function createEntry(
+  user: { id: number },
+  v: FieldLogEntryData,
+  transaction?: Transaction,
+): Promise<FieldLogEntry> {
   const rows = entryRows(user.id, v);
   const { FieldLogEntry, FieldLogTrial } = initModels();
   const work = async (t: Transaction) => {
     const e = await FieldLogEntry.create(rows.entry, { transaction: t });
-    await FieldLogTrial.bulkCreate(rows.trials.map((x) => ({ ...x, entryId: e.id })), { transaction: t });
+    await FieldLogTrial.bulkCreate(
+      rows.trials.map((x) => ({ ...x, entryId: e.id })),
+      { transaction: t },
+    );
     if (v.photoIds.length) {
       const n = await attachPhotos(v.photoIds, user.id, { fieldLogEntryId: e.id }, t);
-      if (n !== new Set(v.photoIds).size) throw new ForumError(422, 'photoIds: a photo is not yours or is already attached', 'photoIds');
+      if (n !== new Set(v.photoIds).size)
+        throw new ForumError(422, 'photoIds: a photo is not yours or is already attached', 'photoIds');
     }
     return e;
   };
@@ -90,24 +120,51 @@ export interface EntryView {
 }
 
 function toView(e: FieldLogEntry): EntryView {
-  const trials = [...(e.trials ?? [])].sort((a, b) => a.position - b.position).map((t) => ({ volumeL: t.volumeL, seconds: t.seconds }));
+  const trials = [...(e.trials ?? [])]
+    .sort((a, b) => a.position - b.position)
+    .map((t) => ({ volumeL: t.volumeL, seconds: t.seconds }));
   return {
-    id: e.id, authorId: e.authorId,
+    id: e.id,
+    authorId: e.authorId,
     author: { handle: e.author?.handle ?? '', displayName: e.author?.displayName ?? '' },
-    siteName: e.siteName, testedOn: String(e.testedOn), pumpType: e.pumpType, pumpSize: e.pumpSize, pumpCount: e.pumpCount,
-    arrangement: e.arrangement, fallM: e.fallM, liftM: e.liftM, driveLengthM: e.driveLengthM, driveSize: e.driveSize,
-    driveMaterial: e.driveMaterial, deliveryLengthM: e.deliveryLengthM, deliverySize: e.deliverySize, deliveryMaterial: e.deliveryMaterial,
-    driveFlowM3s: e.driveFlowM3s, driveFlowMethod: e.driveFlowMethod, driveFlowHow: e.driveFlowHow, deliveredFlowM3s: e.deliveredFlowM3s,
-    beatsPerMinute: e.beatsPerMinute, wasteValveSetting: e.wasteValveSetting, waterTempC: e.waterTempC, notes: e.notes,
-    typed: e.typed, trials, hidden: e.hiddenAt !== null && e.hiddenAt !== undefined, deleted: e.deletedAt !== null && e.deletedAt !== undefined,
-    performance: performance({ pumpType: e.pumpType, fallM: e.fallM, liftM: e.liftM, driveFlowM3s: e.driveFlowM3s, waterTempC: e.waterTempC, trials }),
+    siteName: e.siteName,
+    testedOn: String(e.testedOn),
+    pumpType: e.pumpType,
+    pumpSize: e.pumpSize,
+    pumpCount: e.pumpCount,
+    arrangement: e.arrangement,
+    fallM: e.fallM,
+    liftM: e.liftM,
+    driveLengthM: e.driveLengthM,
+    driveSize: e.driveSize,
+    driveMaterial: e.driveMaterial,
+    deliveryLengthM: e.deliveryLengthM,
+    deliverySize: e.deliverySize,
+    deliveryMaterial: e.deliveryMaterial,
+    driveFlowM3s: e.driveFlowM3s,
+    driveFlowMethod: e.driveFlowMethod,
+    driveFlowHow: e.driveFlowHow,
+    deliveredFlowM3s: e.deliveredFlowM3s,
+    beatsPerMinute: e.beatsPerMinute,
+    wasteValveSetting: e.wasteValveSetting,
+    waterTempC: e.waterTempC,
+    notes: e.notes,
+    typed: e.typed,
+    trials,
+    hidden: e.hiddenAt !== null && e.hiddenAt !== undefined,
+    deleted: e.deletedAt !== null && e.deletedAt !== undefined,
+    performance: performance({
+      pumpType: e.pumpType,
+      fallM: e.fallM,
+      liftM: e.liftM,
+      driveFlowM3s: e.driveFlowM3s,
+      waterTempC: e.waterTempC,
+      trials,
+    }),
   };
 }
 
-const include = [
-  { association: 'author', attributes: ['handle', 'displayName'] },
-  { association: 'trials' },
-];
+const include = [{ association: 'author', attributes: ['handle', 'displayName'] }, { association: 'trials' }];
 
 /** One entry as the viewer may see it, or null (hidden and deleted entries only for moderators). */
 export async function getEntry(id: number, viewer: Actor | null): Promise<EntryView | null> {
@@ -117,7 +174,10 @@ export async function getEntry(id: number, viewer: Actor | null): Promise<EntryV
 }
 
 /** Every visible entry matching the filter, as views (the chart needs them all; the table pages them). */
-export async function filteredEntries(filter: Pick<FieldLogFilter, 'pumpSize' | 'material'>, viewer: Actor | null): Promise<EntryView[]> {
+export async function filteredEntries(
+  filter: Pick<FieldLogFilter, 'pumpSize' | 'material'>,
+  viewer: Actor | null,
+): Promise<EntryView[]> {
   const { FieldLogEntry } = initModels();
   const where: Record<string, unknown> = { ...visibleWhere(viewer) };
   if (filter.pumpSize) {
@@ -126,7 +186,14 @@ export async function filteredEntries(filter: Pick<FieldLogFilter, 'pumpSize' | 
     where.pumpSize = n;
   }
   if (filter.material) where.driveMaterial = filter.material;
-  const rows = await FieldLogEntry.findAll({ where, include, order: [['testedOn', 'DESC'], ['id', 'DESC']] });
+  const rows = await FieldLogEntry.findAll({
+    where,
+    include,
+    order: [
+      ['testedOn', 'DESC'],
+      ['id', 'DESC'],
+    ],
+  });
   return rows.map(toView);
 }
 
@@ -158,12 +225,15 @@ export async function filteredIdsInOrder(
     where.pumpSize = n;
   }
   if (filter.material) where.driveMaterial = filter.material;
-  const light = await gate(() => FieldLogEntry.findAll({ where, attributes: ['id', 'testedOn', 'siteName', 'deliveredFlowM3s'], raw: true }));
+  const light = await gate(() =>
+    FieldLogEntry.findAll({ where, attributes: ['id', 'testedOn', 'siteName', 'deliveredFlowM3s'], raw: true }),
+  );
   let keyed: { id: number; key: number | string }[];
   if (filter.sort === 'efficiency' || filter.sort === 'liftRatio') {
     keyed = [];
     for (let i = 0; i < light.length; i += EXPORT_CHUNK) {
-      for (const v of await chunk(light.slice(i, i + EXPORT_CHUNK).map((r) => r.id))) keyed.push({ id: v.id, key: SORT_KEY[filter.sort](v) });
+      for (const v of await chunk(light.slice(i, i + EXPORT_CHUNK).map((r) => r.id)))
+        keyed.push({ id: v.id, key: SORT_KEY[filter.sort](v) });
     }
   } else {
     const key = SORT_KEY[filter.sort];
@@ -197,7 +267,13 @@ export function sortAndPage(entries: EntryView[], f: Pick<FieldLogFilter, 'sort'
     return f.dir === 'asc' ? c : -c;
   });
   const start = (f.page - 1) * f.perPage;
-  return { total: entries.length, page: f.page, perPage: f.perPage, totalPages: Math.max(1, Math.ceil(entries.length / f.perPage)), items: sorted.slice(start, start + f.perPage) };
+  return {
+    total: entries.length,
+    page: f.page,
+    perPage: f.perPage,
+    totalPages: Math.max(1, Math.ceil(entries.length / f.perPage)),
+    items: sorted.slice(start, start + f.perPage),
+  };
 }
 
 export interface Comparison {
@@ -209,19 +285,32 @@ export interface Comparison {
 }
 
 /** The before/after pair, when linked and both visible to the viewer. */
-export async function getComparison(beforeId: number, afterId: number, viewer: Actor | null): Promise<Comparison | null> {
+export async function getComparison(
+  beforeId: number,
+  afterId: number,
+  viewer: Actor | null,
+): Promise<Comparison | null> {
   const { FieldLogLink } = initModels();
   const link = await FieldLogLink.findOne({ where: { beforeId, afterId } });
   if (!link) return null;
   const [before, after] = await Promise.all([getEntry(beforeId, viewer), getEntry(afterId, viewer)]);
   if (!before || !after) return null;
-  return { before, after, whatChanged: link.whatChanged, measured: deliveryRatio(before.trials, after.trials), planner: plannerRatio(before, after) };
+  return {
+    before,
+    after,
+    whatChanged: link.whatChanged,
+    measured: deliveryRatio(before.trials, after.trials),
+    planner: plannerRatio(before, after),
+  };
 }
 
 /** Links for an entry, in both directions. */
 export async function linksOf(id: number) {
   const { FieldLogLink } = initModels();
-  const rows = await FieldLogLink.findAll({ where: { [Op.or]: [{ beforeId: id }, { afterId: id }] }, order: [['id', 'ASC']] });
+  const rows = await FieldLogLink.findAll({
+    where: { [Op.or]: [{ beforeId: id }, { afterId: id }] },
+    order: [['id', 'ASC']],
+  });
   return rows.map((r) => ({ beforeId: r.beforeId, afterId: r.afterId, whatChanged: r.whatChanged }));
 }
 
@@ -229,20 +318,39 @@ export async function linksOf(id: number) {
  * Links `afterId` as the after of `beforeId`. Both must be on the same site (same
  * site name, same author) and the after must be the caller's own (or a moderator's act).
  */
-export async function linkEntries(user: SessionUser, afterId: number, input: { beforeId: number; whatChanged: string }) {
+export async function linkEntries(
+  user: SessionUser,
+  afterId: number,
+  input: { beforeId: number; whatChanged: string },
+) {
   const { FieldLogEntry, FieldLogLink } = initModels();
   return getSequelize().transaction(async (transaction) => {
-    const after = await FieldLogEntry.findOne({ where: { id: afterId, deletedAt: null }, transaction, lock: transaction.LOCK.UPDATE });
+    const after = await FieldLogEntry.findOne({
+      where: { id: afterId, deletedAt: null },
+      transaction,
+      lock: transaction.LOCK.UPDATE,
+    });
     if (!after) throw new ForumError(404, 'no such field log entry', 'id');
     if (!can(user, 'fieldLog.edit', after.authorId)) throw new ForumError(403, 'Only its author can link this entry.');
-    if (input.beforeId === afterId) throw new ForumError(422, 'beforeId: an entry cannot be its own before', 'beforeId');
+    if (input.beforeId === afterId)
+      throw new ForumError(422, 'beforeId: an entry cannot be its own before', 'beforeId');
     const before = await FieldLogEntry.findOne({ where: { id: input.beforeId, deletedAt: null }, transaction });
     if (!before) throw new ForumError(422, 'beforeId: no such field log entry', 'beforeId');
-    if (before.authorId !== after.authorId || before.siteName.trim().toLowerCase() !== after.siteName.trim().toLowerCase()) {
-      throw new ForumError(422, 'beforeId: before and after must be entries on the same site (same site name, same author)', 'beforeId');
+    if (
+      before.authorId !== after.authorId ||
+      before.siteName.trim().toLowerCase() !== after.siteName.trim().toLowerCase()
+    ) {
+      throw new ForumError(
+        422,
+        'beforeId: before and after must be entries on the same site (same site name, same author)',
+        'beforeId',
+      );
     }
     const existing = await FieldLogLink.findOne({ where: { beforeId: input.beforeId, afterId }, transaction });
     if (existing) throw new ForumError(409, 'beforeId: these entries are already linked', 'beforeId');
-    return FieldLogLink.create({ beforeId: input.beforeId, afterId, whatChanged: input.whatChanged, createdBy: user.id }, { transaction });
+    return FieldLogLink.create(
+      { beforeId: input.beforeId, afterId, whatChanged: input.whatChanged, createdBy: user.id },
+      { transaction },
+    );
   });
 }

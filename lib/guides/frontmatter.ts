@@ -4,7 +4,6 @@ import { CALCULATOR_IDS } from '@/lib/calculators/ids';
 export const GUIDE_LEVELS = ['first build', 'working system', 'advanced'] as const;
 export type GuideLevel = (typeof GUIDE_LEVELS)[number];
 
-
 /** What every content/guides/*.mdx must declare; a guide that fails this breaks the build. */
 export const guideFrontmatterSchema = z.object({
   title: z.string().min(3).max(120),

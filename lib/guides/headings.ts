@@ -21,7 +21,8 @@ function textOf(node: HastNode): string {
   if (node.type === 'text') return node.value ?? '';
   // KaTeX output carries a MathML copy and an HTML copy; read the TeX annotation only.
   if (node.tagName === 'annotation') return node.children?.map(textOf).join('') ?? '';
-  if (node.properties && Array.isArray(node.properties.className) && node.properties.className.includes('katex-html')) return '';
+  if (node.properties && Array.isArray(node.properties.className) && node.properties.className.includes('katex-html'))
+    return '';
   return (node.children ?? []).map(textOf).join('');
 }
 

@@ -11,7 +11,8 @@ export interface FormError {
   message: string;
 }
 
-export type Sent<T> = { ok: true; status: number; data: T } | { ok: false; status: number; error: FormError; body: unknown };
+export type Sent<T> =
+  { ok: true; status: number; data: T } | { ok: false; status: number; error: FormError; body: unknown };
 
 export type Method = 'GET' | 'POST' | 'PUT' | 'PATCH' | 'DELETE';
 
@@ -23,12 +24,20 @@ export const UNREACHABLE = 'Clackwater could not be reached. Check your connecti
  * that abort check `signal.aborted` before using it). `body` on a refusal is the whole
  * answer, for the few forms that show more than the message (an import's row errors).
  */
-export async function sendJson<T = unknown>(url: string, method: Method, body?: unknown, init: { signal?: AbortSignal } = {}): Promise<Sent<T>> {
+export async function sendJson<T = unknown>(
+  url: string,
+  method: Method,
+  body?: unknown,
+  init: { signal?: AbortSignal } = {},
+): Promise<Sent<T>> {
   let res: Response;
   try {
     res = await fetch(url, {
       method,
-      headers: body === undefined ? { accept: 'application/json' } : { accept: 'application/json', 'content-type': 'application/json' },
+      headers:
+        body === undefined
+          ? { accept: 'application/json' }
+          : { accept: 'application/json', 'content-type': 'application/json' },
       body: body === undefined ? undefined : JSON.stringify(body),
       signal: init.signal,
     });
@@ -37,7 +46,8 @@ export async function sendJson<T = unknown>(url: string, method: Method, body?: 
   }
   const json = (await res.json().catch(() => null)) as { error?: Partial<FormError> } | null;
   if (res.ok) return { ok: true, status: res.status, data: json as T };
-  const message = typeof json?.error?.message === 'string' ? json.error.message : `Something went wrong (${res.status}).`;
+  const message =
+    typeof json?.error?.message === 'string' ? json.error.message : `Something went wrong (${res.status}).`;
   const field = typeof json?.error?.field === 'string' ? json.error.field : undefined;
   return { ok: false, status: res.status, error: field === undefined ? { message } : { field, message }, body: json };
 }

@@ -24,7 +24,10 @@ export function contentSecurityPolicy(scripts: ScriptSource, dev = false): strin
   // No 'strict-dynamic': Next's chunks load from this origin, which 'self' allows, and
   // the site serves no script a member could upload (photos are re-encoded, nosniff).
   if ('unsafeInline' in scripts) scriptSrc = "'self' 'unsafe-inline'";
-  else scriptSrc = ["'self'", ...('nonce' in scripts ? [`nonce-${scripts.nonce}`] : []), ...(scripts.hashes ?? [])].map((s) => (s.startsWith("'") ? s : `'${s}'`)).join(' ');
+  else
+    scriptSrc = ["'self'", ...('nonce' in scripts ? [`nonce-${scripts.nonce}`] : []), ...(scripts.hashes ?? [])]
+      .map((s) => (s.startsWith("'") ? s : `'${s}'`))
+      .join(' ');
   return [
     "default-src 'self'",
     `script-src ${scriptSrc}${dev ? " 'unsafe-eval'" : ''}`,

@@ -46,16 +46,33 @@ export async function guarded(
   if (!user) return apiError(401, REFUSAL[action], undefined, 'unauthenticated');
   if (!roleMayTry(user, action)) return apiError(403, REFUSAL[action], undefined, 'forbidden');
   if (refusedBySuspension(user, action)) {
-    return apiError(403, `Your account is suspended until ${user.suspendedUntil!.toUTCString().slice(5, 16)}. See your notices in Settings for the reason.`, undefined, 'suspended');
+    return apiError(
+      403,
+      `Your account is suspended until ${user.suspendedUntil!.toUTCString().slice(5, 16)}. See your notices in Settings for the reason.`,
+      undefined,
+      'suspended',
+    );
   }
   let spent: [LimitName, string][] = [];
   if (options.flood) {
     const ip = clientIp(request.headers);
     const checks: Record<FloodKind, [LimitName, string][]> = {
-      flag: [['flagIp', ip], ['flagAccount', String(user.id)]],
-      upload: [['uploadIp', ip], ['uploadAccount', String(user.id)]],
-      post: [['postIp', ip], [isNewMember(user) ? 'postNewAccount' : 'postAccount', String(user.id)]],
-      calculation: [['calculationIp', ip], ['calculationAccount', String(user.id)]],
+      flag: [
+        ['flagIp', ip],
+        ['flagAccount', String(user.id)],
+      ],
+      upload: [
+        ['uploadIp', ip],
+        ['uploadAccount', String(user.id)],
+      ],
+      post: [
+        ['postIp', ip],
+        [isNewMember(user) ? 'postNewAccount' : 'postAccount', String(user.id)],
+      ],
+      calculation: [
+        ['calculationIp', ip],
+        ['calculationAccount', String(user.id)],
+      ],
     };
     try {
       const limited = await spend(checks[options.flood]);

@@ -13,7 +13,8 @@ interface Manifest {
   dynamicRoutes: Record<string, { routeRegex: string; fallback?: unknown }>;
 }
 
-export type PageKind = { kind: 'rendered'; hashes: string[] } | { kind: 'static'; hashes: string[] } | { kind: 'regenerated' };
+export type PageKind =
+  { kind: 'rendered'; hashes: string[] } | { kind: 'static'; hashes: string[] } | { kind: 'regenerated' };
 
 let manifest: { static: Set<string>; regenerated: Set<string>; dynamic: RegExp[] } | null | undefined;
 const hashCache = new Map<string, string[] | null>();
@@ -25,12 +26,17 @@ function distDir(): string {
 function load() {
   if (manifest !== undefined) return manifest;
   try {
-    const m = JSON.parse(readFileSync(/* turbopackIgnore: true */ path.join(distDir(), 'prerender-manifest.json'), 'utf8')) as Manifest;
+    const m = JSON.parse(
+      readFileSync(/* turbopackIgnore: true */ path.join(distDir(), 'prerender-manifest.json'), 'utf8'),
+    ) as Manifest;
     const statics = new Set<string>();
     const regenerated = new Set<string>();
-    for (const [route, r] of Object.entries(m.routes)) (r.initialRevalidateSeconds === false ? statics : regenerated).add(route);
+    for (const [route, r] of Object.entries(m.routes))
+      (r.initialRevalidateSeconds === false ? statics : regenerated).add(route);
     // a dynamic route with fallback false (dynamicParams = false) only has its built paths
-    const dynamic = Object.values(m.dynamicRoutes).filter((r) => r.fallback !== false).map((r) => new RegExp(r.routeRegex));
+    const dynamic = Object.values(m.dynamicRoutes)
+      .filter((r) => r.fallback !== false)
+      .map((r) => new RegExp(r.routeRegex));
     manifest = { static: statics, regenerated, dynamic };
   } catch {
     manifest = null;
@@ -43,7 +49,9 @@ function builtHashes(route: string): string[] | null {
   let hashes: string[] | null = null;
   try {
     const file = route === '/' ? 'index' : route.replace(/^\//, '');
-    hashes = inlineScriptHashes(readFileSync(/* turbopackIgnore: true */ path.join(distDir(), 'server', 'app', `${file}.html`), 'utf8'));
+    hashes = inlineScriptHashes(
+      readFileSync(/* turbopackIgnore: true */ path.join(distDir(), 'server', 'app', `${file}.html`), 'utf8'),
+    );
   } catch {
     hashes = null;
   }

@@ -55,7 +55,12 @@ export function isSameOriginWrite(request: Request): boolean {
 
 export function crossSiteRefusal(request: Request): Response | undefined {
   if (isSameOriginWrite(request)) return undefined;
-  return apiError(403, 'This request came from another site, so it was refused. Reload the page on Clackwater and try again.', undefined, 'cross_site');
+  return apiError(
+    403,
+    'This request came from another site, so it was refused. Reload the page on Clackwater and try again.',
+    undefined,
+    'cross_site',
+  );
 }
 
 /** Whether the request declares a JSON body (`application/json`, any parameters). */
@@ -86,7 +91,12 @@ export function jsonBodyLimit(request: Request): number {
 }
 
 export function tooLarge(limit: number): Response {
-  return apiError(413, `the request body is too large (at most ${Math.round(limit / 1024).toLocaleString('en-US')} kB)`, undefined, 'body_too_large');
+  return apiError(
+    413,
+    `the request body is too large (at most ${Math.round(limit / 1024).toLocaleString('en-US')} kB)`,
+    undefined,
+    'body_too_large',
+  );
 }
 
 /**
@@ -94,7 +104,10 @@ export function tooLarge(limit: number): Response {
  * at once when Content-Length says so (nothing is read), else as soon as the
  * streamed count passes the limit (a chunked body has no length to check first).
  */
-export async function readBodyText(request: Request, limit: number): Promise<{ text: string } | { response: Response }> {
+export async function readBodyText(
+  request: Request,
+  limit: number,
+): Promise<{ text: string } | { response: Response }> {
   const declared = request.headers.get('content-length');
   if (declared !== null && /^\d+$/.test(declared.trim()) && Number(declared) > limit) {
     await request.body?.cancel().catch(() => undefined);

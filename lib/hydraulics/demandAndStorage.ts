@@ -18,14 +18,19 @@ export const demandAndStorageSchema = z.object({
   gardenAreaM2: z._default(siNumber({ min: 0, max: 100000, unit: 'm²' }), 0),
   /** water depth per week on the garden, m; default 1 inch */
   gardenDepthPerWeekM: z._default(siNumber({ min: 0, max: 0.2, unit: 'm' }), GARDEN_DEPTH_PER_WEEK_M),
-  livestock: z._default(z
-    .array(z.object({
-      kind: z.enum(LIVESTOCK_KINDS),
-      count: siNumber({ min: 0, max: 100000, unit: '', integer: true }),
-      /** override the table rate, m³/day per head */
-      perHeadM3PerDay: z.optional(siNumber({ min: 0, max: 1, unit: 'm³/day' })),
-    }))
-    .check(z.maxLength(30)), []),
+  livestock: z._default(
+    z
+      .array(
+        z.object({
+          kind: z.enum(LIVESTOCK_KINDS),
+          count: siNumber({ min: 0, max: 100000, unit: '', integer: true }),
+          /** override the table rate, m³/day per head */
+          perHeadM3PerDay: z.optional(siNumber({ min: 0, max: 1, unit: 'm³/day' })),
+        }),
+      )
+      .check(z.maxLength(30)),
+    [],
+  ),
   otherM3PerDay: z._default(siNumber({ min: 0, max: 1000, unit: 'm³/day' }), 0),
   /** days the tank should carry the demand with no delivery */
   reserveDays: z._default(siNumber({ min: 0, max: 60, unit: 'day' }), 3),
@@ -80,12 +85,30 @@ export function planDemandAndStorage(input: DemandAndStorageInput): CalcOutput<D
   const perPerson = v.perPersonM3PerDay ?? householdRate().typicalM3PerDay;
   const house = v.people * perPerson;
   if (v.people > 0) {
-    steps.push(step('Household', 'D_h = n \\times r_p', `D_h = ${v.people} \\times ${tq(perPerson, 'm³/day')}`, house, 'm³/day', 'dailyVolume',
-      v.perPersonM3PerDay === undefined ? 'USGS: about 80–100 US gal per person per day (from memory).' : undefined));
+    steps.push(
+      step(
+        'Household',
+        'D_h = n \\times r_p',
+        `D_h = ${v.people} \\times ${tq(perPerson, 'm³/day')}`,
+        house,
+        'm³/day',
+        'dailyVolume',
+        v.perPersonM3PerDay === undefined ? 'USGS: about 80–100 US gal per person per day (from memory).' : undefined,
+      ),
+    );
   }
   const garden = (v.gardenAreaM2 * v.gardenDepthPerWeekM) / 7;
   if (v.gardenAreaM2 > 0) {
-    steps.push(step('Garden', 'D_g = \\frac{A\\,d_{week}}{7}', `D_g = \\frac{${tq(v.gardenAreaM2, 'm²')} \\times ${tq(v.gardenDepthPerWeekM, 'm')}}{7}`, garden, 'm³/day', 'dailyVolume'));
+    steps.push(
+      step(
+        'Garden',
+        'D_g = \\frac{A\\,d_{week}}{7}',
+        `D_g = \\frac{${tq(v.gardenAreaM2, 'm²')} \\times ${tq(v.gardenDepthPerWeekM, 'm')}}{7}`,
+        garden,
+        'm³/day',
+        'dailyVolume',
+      ),
+    );
   }
   const rates = livestockRates();
   let stock = 0;
@@ -93,17 +116,54 @@ export function planDemandAndStorage(input: DemandAndStorageInput): CalcOutput<D
     const r = a.perHeadM3PerDay ?? rates[a.kind].typicalM3PerDay;
     const d = a.count * r;
     stock += d;
-    steps.push(step(`Livestock: ${a.kind}`, 'D_i = n_i \\times r_i', `D_i = ${a.count} \\times ${tq(r, 'm³/day')}`, d, 'm³/day', 'dailyVolume'));
+    steps.push(
+      step(
+        `Livestock: ${a.kind}`,
+        'D_i = n_i \\times r_i',
+        `D_i = ${a.count} \\times ${tq(r, 'm³/day')}`,
+        d,
+        'm³/day',
+        'dailyVolume',
+      ),
+    );
   }
   const total = house + garden + stock + v.otherM3PerDay;
-  steps.push(step('Total demand', 'D = D_h + D_g + \\sum D_i + D_o',
-    `D = ${tq(house)} + ${tq(garden)} + ${tq(stock)} + ${tq(v.otherM3PerDay)}\\,\\mathrm{m^3/day}`, total, 'm³/day', 'dailyVolume'));
+  steps.push(
+    step(
+      'Total demand',
+      'D = D_h + D_g + \\sum D_i + D_o',
+      `D = ${tq(house)} + ${tq(garden)} + ${tq(stock)} + ${tq(v.otherM3PerDay)}\\,\\mathrm{m^3/day}`,
+      total,
+      'm³/day',
+      'dailyVolume',
+    ),
+  );
   const delivery = v.deliveredFlowM3s * 86400;
-  steps.push(step('Delivered in 24 hours', 'V = q \\times 86\\,400\\,\\mathrm{s}', `V = ${tq(v.deliveredFlowM3s, 'm³/s')} \\times 86\\,400\\,\\mathrm{s}`, delivery, 'm³/day', 'dailyVolume'));
+  steps.push(
+    step(
+      'Delivered in 24 hours',
+      'V = q \\times 86\\,400\\,\\mathrm{s}',
+      `V = ${tq(v.deliveredFlowM3s, 'm³/s')} \\times 86\\,400\\,\\mathrm{s}`,
+      delivery,
+      'm³/day',
+      'dailyVolume',
+    ),
+  );
   const surplus = delivery - total;
-  steps.push(step('Surplus', 'V - D', `${tq(delivery, 'm³/day')} - ${tq(total, 'm³/day')}`, surplus, 'm³/day', 'dailyVolume'));
+  steps.push(
+    step('Surplus', 'V - D', `${tq(delivery, 'm³/day')} - ${tq(total, 'm³/day')}`, surplus, 'm³/day', 'dailyVolume'),
+  );
   const reserve = v.reserveDays * total;
-  steps.push(step('Tank for the reserve', 'V_t = n_d \\times D', `V_t = ${tq(v.reserveDays, 'day')} \\times ${tq(total, 'm³/day')}`, reserve, 'm³', 'volume'));
+  steps.push(
+    step(
+      'Tank for the reserve',
+      'V_t = n_d \\times D',
+      `V_t = ${tq(v.reserveDays, 'day')} \\times ${tq(total, 'm³/day')}`,
+      reserve,
+      'm³',
+      'volume',
+    ),
+  );
 
   const results: DemandAndStorageResults = {
     householdM3PerDay: house,
@@ -118,27 +178,65 @@ export function planDemandAndStorage(input: DemandAndStorageInput): CalcOutput<D
   };
   if (surplus > 0 && reserve > 0) {
     results.reserveRefillTimeS = (reserve / surplus) * 86400;
-    steps.push(step('Time to refill the reserve from empty', 't = \\frac{V_t}{V - D}', `t = \\frac{${tq(reserve, 'm³')}}{${tq(surplus, 'm³/day')}}`, results.reserveRefillTimeS, 's', 'time'));
+    steps.push(
+      step(
+        'Time to refill the reserve from empty',
+        't = \\frac{V_t}{V - D}',
+        `t = \\frac{${tq(reserve, 'm³')}}{${tq(surplus, 'm³/day')}}`,
+        results.reserveRefillTimeS,
+        's',
+        'time',
+      ),
+    );
   }
   if (v.tankVolumeM3 !== undefined) {
     if (total > 0) results.tankDaysOfReserve = v.tankVolumeM3 / total;
     if (surplus > 0) {
       results.tankRefillTimeS = (v.tankVolumeM3 / surplus) * 86400;
-      steps.push(step('Time to refill the existing tank', 't = \\frac{V_{tank}}{V - D}', `t = \\frac{${tq(v.tankVolumeM3, 'm³')}}{${tq(surplus, 'm³/day')}}`, results.tankRefillTimeS, 's', 'time'));
+      steps.push(
+        step(
+          'Time to refill the existing tank',
+          't = \\frac{V_{tank}}{V - D}',
+          `t = \\frac{${tq(v.tankVolumeM3, 'm³')}}{${tq(surplus, 'm³/day')}}`,
+          results.tankRefillTimeS,
+          's',
+          'time',
+        ),
+      );
     }
   }
 
   if (surplus < 0) {
-    warnings.push(warn('demand-exceeds-delivery', `The demand of ${(total * 1000).toFixed(0)} L/day is more than the ${(delivery * 1000).toFixed(0)} L/day the ram delivers; add a pump, find more fall or trim the demand.`));
+    warnings.push(
+      warn(
+        'demand-exceeds-delivery',
+        `The demand of ${(total * 1000).toFixed(0)} L/day is more than the ${(delivery * 1000).toFixed(0)} L/day the ram delivers; add a pump, find more fall or trim the demand.`,
+      ),
+    );
   }
   if (surplus <= 0 && (reserve > 0 || v.tankVolumeM3 !== undefined)) {
-    warnings.push(warn('tank-never-refills', 'With no surplus over the day the tank never refills after a dry spell or a stoppage.'));
+    warnings.push(
+      warn(
+        'tank-never-refills',
+        'With no surplus over the day the tank never refills after a dry spell or a stoppage.',
+      ),
+    );
   }
   if (surplus > 0) {
-    warnings.push(warn('overflow-needed', `The ram delivers ${(surplus * 1000).toFixed(0)} L/day more than is used and never stops; give the tank an overflow back to the stream rather than shutting the delivery line, which makes the ram hammer.`));
+    warnings.push(
+      warn(
+        'overflow-needed',
+        `The ram delivers ${(surplus * 1000).toFixed(0)} L/day more than is used and never stops; give the tank an overflow back to the stream rather than shutting the delivery line, which makes the ram hammer.`,
+      ),
+    );
   }
   if (v.people > 0) {
-    warnings.push(warn('drinking-water-untreated', 'Ram-pumped surface water is untreated: test it and treat it before drinking, and keep livestock away from the intake.'));
+    warnings.push(
+      warn(
+        'drinking-water-untreated',
+        'Ram-pumped surface water is untreated: test it and treat it before drinking, and keep livestock away from the intake.',
+      ),
+    );
   }
   return finish(results, steps, warnings);
 }

@@ -44,7 +44,12 @@ export interface EfficiencyBand {
   source: string;
 }
 
-const row = (ratio: number, low: number, typical: number, high: number): EfficiencyBandRow => ({ ratio, low, typical, high });
+const row = (ratio: number, low: number, typical: number, high: number): EfficiencyBandRow => ({
+  ratio,
+  low,
+  typical,
+  high,
+});
 
 export const EFFICIENCY_BANDS: Record<PumpType, EfficiencyBand> = {
   homemade: {
@@ -60,7 +65,7 @@ export const EFFICIENCY_BANDS: Record<PumpType, EfficiencyBand> = {
       row(30, 0.06, 0.15, 0.28),
       row(40, 0, 0, 0.12),
     ],
-    source: "from memory; anchored on Water for the World RWS.4.D.5 (E = 0.33 home-built)",
+    source: 'from memory; anchored on Water for the World RWS.4.D.5 (E = 0.33 home-built)',
   },
   commercial: {
     label: 'manufactured cast or fabricated ram',
@@ -76,7 +81,7 @@ export const EFFICIENCY_BANDS: Record<PumpType, EfficiencyBand> = {
       row(45, 0.05, 0.15, 0.3),
       row(60, 0, 0, 0.12),
     ],
-    source: "from memory; anchored on Water for the World RWS.4.D.5 (E = 0.66 commercial)",
+    source: 'from memory; anchored on Water for the World RWS.4.D.5 (E = 0.66 commercial)',
   },
 };
 

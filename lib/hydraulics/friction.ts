@@ -95,7 +95,14 @@ export function darcyF(re: number, relativeRoughness: number, fGuess?: number): 
  * @example as {@link pipeLoss}: 1 L/s through 100 m of 26.6-mm smooth pipe at 10 °C
  * pipeHeadLoss(1e-3, 100, 0.0266, 1.5e-6, 1.306e-6, 0)  // ≈ 14.0
  */
-export function pipeHeadLoss(flowM3s: number, lengthM: number, diameterM: number, roughnessM: number, nu: number, sumKValue: number): number {
+export function pipeHeadLoss(
+  flowM3s: number,
+  lengthM: number,
+  diameterM: number,
+  roughnessM: number,
+  nu: number,
+  sumKValue: number,
+): number {
   const v = flowM3s / boreArea(diameterM);
   if (v === 0) return 0;
   const f = darcyF(reynolds(v, diameterM, nu), roughnessM / diameterM);
@@ -223,7 +230,13 @@ export function pipeLoss(
 ): PipeLoss {
   const v = flowM3s / boreArea(diameterM);
   if (v === 0) {
-    return { velocityMs: 0, reynolds: 0, friction: { f: 0, regime: 'laminar', fSwameeJain: 0 }, frictionHeadM: 0, minorHeadM: 0 };
+    return {
+      velocityMs: 0,
+      reynolds: 0,
+      friction: { f: 0, regime: 'laminar', fSwameeJain: 0 },
+      frictionHeadM: 0,
+      minorHeadM: 0,
+    };
   }
   const re = reynolds(v, diameterM, nu);
   const friction = frictionFactor(re, roughnessM / diameterM);

@@ -15,15 +15,33 @@ export { WARNING_CODES } from './warnings';
 
 // Units at the edges: what people type → SI, SI → the reader's units.
 export {
-  DISPLAY_UNITS, UNIT_CHOICES, fieldFromDisplay, fieldToDisplay, fromDisplay, fromSI, kindOfField, parseQuantity,
-  toDisplay, toSI, unitLabel, type QuantityKind, type UnitSystem,
+  DISPLAY_UNITS,
+  UNIT_CHOICES,
+  fieldFromDisplay,
+  fieldToDisplay,
+  fromDisplay,
+  fromSI,
+  kindOfField,
+  parseQuantity,
+  toDisplay,
+  toSI,
+  unitLabel,
+  type QuantityKind,
+  type UnitSystem,
 } from './units';
 
 // Water, pipes and fittings: property tables and schedule sizes.
 export { G, waterProperties } from './water';
 export {
-  NOMINAL_LABELS, NOMINAL_SIZES, PIPE_SERIES, defaultSeries, parseNominalSize, resolvePipe,
-  type NominalSize, type PipeMaterial, type PipeSeries,
+  NOMINAL_LABELS,
+  NOMINAL_SIZES,
+  PIPE_SERIES,
+  defaultSeries,
+  parseNominalSize,
+  resolvePipe,
+  type NominalSize,
+  type PipeMaterial,
+  type PipeSeries,
 } from './pipes';
 export { FITTING_K, sumK } from './fittings';
 
@@ -31,7 +49,12 @@ export { FITTING_K, sumK } from './fittings';
 export { colebrook, darcyHeadLoss, frictionFactor, hazenWilliamsHeadLoss, swameeJain } from './friction';
 export { joukowskyHead, joukowskySurge, slowClosureSurge, waveRoundTrip, waveSpeed } from './transients';
 export {
-  EFFICIENCY_BANDS, dAubuissonEfficiency, efficiencyBand, rankineEfficiency, type BandAtRatio, type PumpType,
+  EFFICIENCY_BANDS,
+  dAubuissonEfficiency,
+  efficiencyBand,
+  rankineEfficiency,
+  type BandAtRatio,
+  type PumpType,
 } from './efficiency';
 export { estimateDriveFlow } from './ramCycle';
 export { typicalDriveFlow } from './pumpSizes';
@@ -46,7 +69,4 @@ export { checkDeliveryLine, deliveryLineSchema, type DeliveryLineResults } from 
 export { measureSourceFlow, sourceFlowSchema, type SourceFlowResults } from './sourceFlow';
 export { planDemandAndStorage, demandAndStorageSchema, type DemandAndStorageResults } from './demandAndStorage';
 export { runStallCheck, stallCheckSchema, type StallCheckInput, type StallCheckResults } from './stallCheck';
-export {
-  STALL_CAUSE_CODES, SYMPTOMS, SYMPTOM_LABELS, type StallCauseCode, type Symptom,
-} from './stallCauses';
-
+export { STALL_CAUSE_CODES, SYMPTOMS, SYMPTOM_LABELS, type StallCauseCode, type Symptom } from './stallCauses';

@@ -87,7 +87,8 @@ export interface RamCycle {
  */
 export function fullFlowVelocity(input: RamCycleInput): { v0: number; f: number; R: number } {
   const { fallM, lengthM, insideDiameterM: D, roughnessM, nu } = input;
-  const kFixed = 1 + (input.entranceK ?? DEFAULT_ENTRANCE_K) + (input.pumpLossK ?? DEFAULT_PUMP_LOSS_K) + (input.fittingsK ?? 0);
+  const kFixed =
+    1 + (input.entranceK ?? DEFAULT_ENTRANCE_K) + (input.pumpLossK ?? DEFAULT_PUMP_LOSS_K) + (input.fittingsK ?? 0);
   let v = Math.sqrt((2 * G * fallM) / (kFixed + 0.02 * (lengthM / D)));
   let f = 0.02;
   let R = kFixed;

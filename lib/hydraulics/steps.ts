@@ -126,7 +126,12 @@ export function step(
 function assertFinite(v: unknown, path: string): void {
   if (typeof v === 'number') {
     if (!Number.isFinite(v)) {
-      throw new EngineInputError([{ field: '(input)', message: `these values are outside what the calculation can handle (${path} came out infinite); check each value and its unit` }]);
+      throw new EngineInputError([
+        {
+          field: '(input)',
+          message: `these values are outside what the calculation can handle (${path} came out infinite); check each value and its unit`,
+        },
+      ]);
     }
     return;
   }

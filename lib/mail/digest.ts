@@ -49,7 +49,10 @@ const VISIBLE = 'q.hidden_at IS NULL AND q.deleted_at IS NULL';
  * Visible questions by others in the tags a member follows, asked in [since, until):
  * the new ones newest first, or those with no visible answer yet oldest first.
  */
-async function questionsInTags(userId: number, o: { since: Date; until: Date; unanswered: boolean; limit: number }): Promise<QuestionRow[]> {
+async function questionsInTags(
+  userId: number,
+  o: { since: Date; until: Date; unanswered: boolean; limit: number },
+): Promise<QuestionRow[]> {
   const order = o.unanswered ? 'ASC' : 'DESC';
   return getSequelize().query<QuestionRow>(
     `SELECT DISTINCT q.id, q.title, q.created_at, q.answer_count, q.fixed_answer_id
@@ -80,20 +83,38 @@ function questionItems(rows: QuestionRow[], tags: Map<number, string[]>, now: Da
   return rows.map((q) => {
     const days = Math.floor((now.getTime() - new Date(q.created_at).getTime()) / DAY);
     const age = days < 1 ? 'today' : days === 1 ? 'yesterday' : `${days} days ago`;
-    const answers = q.fixed_answer_id ? 'fixed' : q.answer_count === 0 ? 'no answers yet' : `${q.answer_count} answer${q.answer_count === 1 ? '' : 's'}`;
-    return { title: q.title, url: `${siteUrl()}/questions/${q.id}`, meta: [(tags.get(q.id) ?? []).join(', '), `asked ${age}`, answers].filter(Boolean).join(' · ') };
+    const answers = q.fixed_answer_id
+      ? 'fixed'
+      : q.answer_count === 0
+        ? 'no answers yet'
+        : `${q.answer_count} answer${q.answer_count === 1 ? '' : 's'}`;
+    return {
+      title: q.title,
+      url: `${siteUrl()}/questions/${q.id}`,
+      meta: [(tags.get(q.id) ?? []).join(', '), `asked ${age}`, answers].filter(Boolean).join(' · '),
+    };
   });
 }
 
 /** Guides whose newest safety check was made on an earlier wording than the file has now. */
 async function staleGuides(guides: ReturnType<typeof listGuides>): Promise<MailItem[]> {
   const { SafetyCheck } = initModels();
-  const checks = await SafetyCheck.findAll({ attributes: ['guideSlug', 'contentHash', 'createdAt', 'id'], order: [['createdAt', 'DESC'], ['id', 'DESC']] });
+  const checks = await SafetyCheck.findAll({
+    attributes: ['guideSlug', 'contentHash', 'createdAt', 'id'],
+    order: [
+      ['createdAt', 'DESC'],
+      ['id', 'DESC'],
+    ],
+  });
   const newest = new Map<string, { contentHash: string; createdAt: Date }>();
   for (const c of checks) if (!newest.has(c.guideSlug)) newest.set(c.guideSlug, c);
   return guides
     .filter((g) => newest.has(g.slug) && newest.get(g.slug)!.contentHash !== g.hash)
-    .map((g) => ({ title: g.meta.title, url: `${siteUrl()}/guides/${g.slug}`, meta: `last checked ${dayFmt.format(newest.get(g.slug)!.createdAt)}, on an earlier wording` }));
+    .map((g) => ({
+      title: g.meta.title,
+      url: `${siteUrl()}/guides/${g.slug}`,
+      meta: `last checked ${dayFmt.format(newest.get(g.slug)!.createdAt)}, on an earlier wording`,
+    }));
 }
 
 /** What is the same in every member's digest of one run. */
@@ -109,15 +130,37 @@ interface RunContext {
 /** The sections of one member's digest (empty ones left out). */
 async function digestSections(user: Pick<User, 'id' | 'role'>, run: RunContext): Promise<MailSection[]> {
   const expert = can(user, 'digest.expertSections');
-  const fresh = await questionsInTags(user.id, { since: run.start, until: run.now, unanswered: false, limit: NEW_QUESTIONS_MAX });
-  const waiting = expert ? await questionsInTags(user.id, { since: new Date(run.now.getTime() - UNANSWERED_DAYS * DAY), until: run.now, unanswered: true, limit: UNANSWERED_MAX }) : [];
+  const fresh = await questionsInTags(user.id, {
+    since: run.start,
+    until: run.now,
+    unanswered: false,
+    limit: NEW_QUESTIONS_MAX,
+  });
+  const waiting = expert
+    ? await questionsInTags(user.id, {
+        since: new Date(run.now.getTime() - UNANSWERED_DAYS * DAY),
+        until: run.now,
+        unanswered: true,
+        limit: UNANSWERED_MAX,
+      })
+    : [];
   const tags = await tagNames([...fresh, ...waiting].map((q) => q.id));
 
   const sections: MailSection[] = [];
   if (fresh.length) sections.push({ title: 'New questions in your tags', items: questionItems(fresh, tags, run.now) });
-  if (waiting.length) sections.push({ title: 'Still waiting for an answer', note: 'Questions in your tags that nobody has answered yet, oldest first.', items: questionItems(waiting, tags, run.now) });
+  if (waiting.length)
+    sections.push({
+      title: 'Still waiting for an answer',
+      note: 'Questions in your tags that nobody has answered yet, oldest first.',
+      items: questionItems(waiting, tags, run.now),
+    });
   if (run.changedGuides.length) sections.push({ title: 'Guides added or changed', items: run.changedGuides });
-  if (expert && run.stale.length) sections.push({ title: 'Safety checks out of date', note: 'These guides changed after their last safety check. An expert’s fresh read keeps the cautions honest.', items: run.stale });
+  if (expert && run.stale.length)
+    sections.push({
+      title: 'Safety checks out of date',
+      note: 'These guides changed after their last safety check. An expert’s fresh read keeps the cautions honest.',
+      items: run.stale,
+    });
   return sections;
 }
 
@@ -142,7 +185,13 @@ export async function runDigests(frequency: DigestFrequency, now = new Date()): 
   const run: RunContext = {
     now,
     start,
-    changedGuides: guides.filter((g) => g.meta.updated >= startDay).map((g) => ({ title: g.meta.title, url: `${siteUrl()}/guides/${g.slug}`, meta: `updated ${g.meta.updated} · ${g.meta.level}` })),
+    changedGuides: guides
+      .filter((g) => g.meta.updated >= startDay)
+      .map((g) => ({
+        title: g.meta.title,
+        url: `${siteUrl()}/guides/${g.slug}`,
+        meta: `updated ${g.meta.updated} · ${g.meta.level}`,
+      })),
     stale: await staleGuides(guides),
   };
   const result: DigestRunResult = { frequency, period, members: 0, queued: 0, nothingNew: 0, alreadyQueued: 0 };
@@ -170,7 +219,9 @@ export async function runDigests(frequency: DigestFrequency, now = new Date()): 
         subject: `Your ${frequency} Clackwater digest: ${count} thing${count === 1 ? '' : 's'} to read`,
         preview: sections.map((s) => `${s.title} (${s.items.length})`).join(' · '),
         heading: `Your ${frequency} digest`,
-        paragraphs: [`Hello ${m.displayName}, here is what happened on Clackwater in the ${frequency === 'weekly' ? 'last seven days' : 'last day'}.`],
+        paragraphs: [
+          `Hello ${m.displayName}, here is what happened on Clackwater in the ${frequency === 'weekly' ? 'last seven days' : 'last day'}.`,
+        ],
         sections,
         action: { label: 'Ask a question', url: `${siteUrl()}/questions/ask` },
         footer: {
@@ -179,7 +230,16 @@ export async function runDigests(frequency: DigestFrequency, now = new Date()): 
           unsubscribe: { label: 'Stop the digest', url: unsubscribePageUrl(m.id, 'digest') },
         },
       });
-      mails.push({ key: `digest:${frequency}:${period}:to:${m.id}`, userId: m.id, to: m.email, kind: `digest-${frequency}`, subject: mail.subject, text: mail.text, html: mail.html, headers: unsubscribeHeaders(m.id, 'digest') });
+      mails.push({
+        key: `digest:${frequency}:${period}:to:${m.id}`,
+        userId: m.id,
+        to: m.email,
+        kind: `digest-${frequency}`,
+        subject: mail.subject,
+        text: mail.text,
+        html: mail.html,
+        headers: unsubscribeHeaders(m.id, 'digest'),
+      });
     }
     const added = await getSequelize().transaction((transaction) => enqueue(mails, transaction));
     result.queued += added;

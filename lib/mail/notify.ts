@@ -33,14 +33,26 @@ export function excerpt(text: string, max = QUOTE_CHARS): string {
   return `${cut.slice(0, space > max * 0.6 ? space : max)}…`;
 }
 
-async function recipient(userId: number, actorId: number | null, flag: Switch, transaction: Transaction): Promise<User | null> {
+async function recipient(
+  userId: number,
+  actorId: number | null,
+  flag: Switch,
+  transaction: Transaction,
+): Promise<User | null> {
   if (userId === actorId) return null;
   const u = await initModels().User.findByPk(userId, { transaction });
   if (!u || !u.emailVerifiedAt || !u[flag]) return null;
   return u;
 }
 
-async function queue(key: string, kind: string, to: User, flag: Switch, content: Omit<MailContent, 'footer'> & { reason: string }, transaction: Transaction) {
+async function queue(
+  key: string,
+  kind: string,
+  to: User,
+  flag: Switch,
+  content: Omit<MailContent, 'footer'> & { reason: string },
+  transaction: Transaction,
+) {
   const scope = SCOPE_OF[flag];
   const { reason, ...rest } = content;
   const mail = await renderMail({
@@ -51,32 +63,67 @@ async function queue(key: string, kind: string, to: User, flag: Switch, content:
       unsubscribe: { label: 'Stop these e-mails', url: unsubscribePageUrl(to.id, scope) },
     },
   });
-  await enqueue([{ key, userId: to.id, to: to.email, kind, subject: mail.subject, text: mail.text, html: mail.html, headers: unsubscribeHeaders(to.id, scope) }], transaction);
+  await enqueue(
+    [
+      {
+        key,
+        userId: to.id,
+        to: to.email,
+        kind,
+        subject: mail.subject,
+        text: mail.text,
+        html: mail.html,
+        headers: unsubscribeHeaders(to.id, scope),
+      },
+    ],
+    transaction,
+  );
 }
 
-const threadUrl = (questionId: number, anchor?: string) => `${siteUrl()}/questions/${questionId}${anchor ? `#${anchor}` : ''}`;
+const threadUrl = (questionId: number, anchor?: string) =>
+  `${siteUrl()}/questions/${questionId}${anchor ? `#${anchor}` : ''}`;
 
 /** An answer to your question. */
-export async function notifyAnswer(transaction: Transaction, a: { answerId: number; questionId: number; authorId: number; body: string }) {
+export async function notifyAnswer(
+  transaction: Transaction,
+  a: { answerId: number; questionId: number; authorId: number; body: string },
+) {
   const { Question, User } = initModels();
   const q = await Question.findByPk(a.questionId, { attributes: ['id', 'title', 'authorId'], transaction });
   if (!q) return;
   const to = await recipient(q.authorId, a.authorId, 'notifyAnswers', transaction);
   if (!to) return;
   const by = (await User.findByPk(a.authorId, { attributes: ['displayName'], transaction }))?.displayName ?? 'A member';
-  await queue(`answer:${a.answerId}:to:${to.id}`, 'answer', to, 'notifyAnswers', {
-    subject: `New answer: ${q.title}`,
-    preview: `${by} answered your question.`,
-    heading: 'Your question has a new answer',
-    paragraphs: [`${by} answered “${q.title}”.`],
-    quote: { by, text: excerpt(a.body) },
-    action: { label: 'Read the answer', url: threadUrl(q.id, `answer-${a.answerId}`) },
-    reason: 'You get this because you asked this question on Clackwater.',
-  }, transaction);
+  await queue(
+    `answer:${a.answerId}:to:${to.id}`,
+    'answer',
+    to,
+    'notifyAnswers',
+    {
+      subject: `New answer: ${q.title}`,
+      preview: `${by} answered your question.`,
+      heading: 'Your question has a new answer',
+      paragraphs: [`${by} answered “${q.title}”.`],
+      quote: { by, text: excerpt(a.body) },
+      action: { label: 'Read the answer', url: threadUrl(q.id, `answer-${a.answerId}`) },
+      reason: 'You get this because you asked this question on Clackwater.',
+    },
+    transaction,
+  );
 }
 
 /** A reply to your post: the reply it answers, else the answer it sits under, else the question. */
-export async function notifyReply(transaction: Transaction, r: { replyId: number; questionId: number; authorId: number; body: string; answerId: number | null; replyToId: number | null }) {
+export async function notifyReply(
+  transaction: Transaction,
+  r: {
+    replyId: number;
+    questionId: number;
+    authorId: number;
+    body: string;
+    answerId: number | null;
+    replyToId: number | null;
+  },
+) {
   const { Question, Answer, Reply, User } = initModels();
   const q = await Question.findByPk(r.questionId, { attributes: ['id', 'title', 'authorId'], transaction });
   if (!q) return;
@@ -92,19 +139,29 @@ export async function notifyReply(transaction: Transaction, r: { replyId: number
   const to = await recipient(ownerId, r.authorId, 'notifyReplies', transaction);
   if (!to) return;
   const by = (await User.findByPk(r.authorId, { attributes: ['displayName'], transaction }))?.displayName ?? 'A member';
-  await queue(`reply:${r.replyId}:to:${to.id}`, 'reply', to, 'notifyReplies', {
-    subject: `New reply: ${q.title}`,
-    preview: `${by} replied to ${what}.`,
-    heading: `A reply to ${what}`,
-    paragraphs: [`${by} replied to ${what} in “${q.title}”.`],
-    quote: { by, text: excerpt(r.body) },
-    action: { label: 'Read the reply', url: threadUrl(q.id, `reply-${r.replyId}`) },
-    reason: 'You get this because you wrote the post this replies to.',
-  }, transaction);
+  await queue(
+    `reply:${r.replyId}:to:${to.id}`,
+    'reply',
+    to,
+    'notifyReplies',
+    {
+      subject: `New reply: ${q.title}`,
+      preview: `${by} replied to ${what}.`,
+      heading: `A reply to ${what}`,
+      paragraphs: [`${by} replied to ${what} in “${q.title}”.`],
+      quote: { by, text: excerpt(r.body) },
+      action: { label: 'Read the reply', url: threadUrl(q.id, `reply-${r.replyId}`) },
+      reason: 'You get this because you wrote the post this replies to.',
+    },
+    transaction,
+  );
 }
 
 /** The asker chose your answer as the one that fixed it. */
-export async function notifyFixed(transaction: Transaction, f: { questionId: number; answerId: number; askerId: number }) {
+export async function notifyFixed(
+  transaction: Transaction,
+  f: { questionId: number; answerId: number; askerId: number },
+) {
   const { Question, Answer, User } = initModels();
   const [q, a] = await Promise.all([
     Question.findByPk(f.questionId, { attributes: ['id', 'title'], transaction }),
@@ -114,42 +171,90 @@ export async function notifyFixed(transaction: Transaction, f: { questionId: num
   const to = await recipient(a.authorId, f.askerId, 'notifyFixed', transaction);
   if (!to) return;
   const by = (await User.findByPk(f.askerId, { attributes: ['displayName'], transaction }))?.displayName ?? 'The asker';
-  await queue(`fixed:${q.id}:${a.id}:to:${to.id}`, 'fixed', to, 'notifyFixed', {
-    subject: `Your answer fixed it: ${q.title}`,
-    preview: `${by} marked your answer as the one that fixed it.`,
-    heading: 'Your answer fixed it',
-    paragraphs: [`${by} marked your answer to “${q.title}” as the one that fixed it. It now shows first in the thread, for the next builder with the same trouble.`],
-    action: { label: 'Open the thread', url: threadUrl(q.id, `answer-${a.id}`) },
-    reason: 'You get this because you answered this question on Clackwater.',
-  }, transaction);
+  await queue(
+    `fixed:${q.id}:${a.id}:to:${to.id}`,
+    'fixed',
+    to,
+    'notifyFixed',
+    {
+      subject: `Your answer fixed it: ${q.title}`,
+      preview: `${by} marked your answer as the one that fixed it.`,
+      heading: 'Your answer fixed it',
+      paragraphs: [
+        `${by} marked your answer to “${q.title}” as the one that fixed it. It now shows first in the thread, for the next builder with the same trouble.`,
+      ],
+      action: { label: 'Open the thread', url: threadUrl(q.id, `answer-${a.id}`) },
+      reason: 'You get this because you answered this question on Clackwater.',
+    },
+    transaction,
+  );
 }
 
 /** A moderator acted on your post (not sent for a dismissed flag: nothing changed). */
-export async function notifyModeration(transaction: Transaction, m: { auditId: number; authorId: number; moderatorId: number; words: string; reason: string; questionId: number | null; postLabel: string }) {
+export async function notifyModeration(
+  transaction: Transaction,
+  m: {
+    auditId: number;
+    authorId: number;
+    moderatorId: number;
+    words: string;
+    reason: string;
+    questionId: number | null;
+    postLabel: string;
+  },
+) {
   const to = await recipient(m.authorId, m.moderatorId, 'notifyModeration', transaction);
   if (!to) return;
-  await queue(`moderation:${m.auditId}:to:${to.id}`, 'moderation', to, 'notifyModeration', {
-    subject: `${m.words} on Clackwater`,
-    preview: `${m.words}. Reason: ${m.reason}`,
-    heading: m.words,
-    paragraphs: [`This concerns ${m.postLabel}.`, `The moderator’s reason: ${m.reason}`, 'Your notices in Settings keep a copy. If you think this was a mistake, reply in the thread or write to the moderators from your settings page.'],
-    action: m.questionId ? { label: 'Open the thread', url: threadUrl(m.questionId) } : { label: 'Open your settings', url: `${siteUrl()}/settings` },
-    reason: 'You get this because a moderator acted on something you posted.',
-  }, transaction);
+  await queue(
+    `moderation:${m.auditId}:to:${to.id}`,
+    'moderation',
+    to,
+    'notifyModeration',
+    {
+      subject: `${m.words} on Clackwater`,
+      preview: `${m.words}. Reason: ${m.reason}`,
+      heading: m.words,
+      paragraphs: [
+        `This concerns ${m.postLabel}.`,
+        `The moderator’s reason: ${m.reason}`,
+        'Your notices in Settings keep a copy. If you think this was a mistake, reply in the thread or write to the moderators from your settings page.',
+      ],
+      action: m.questionId
+        ? { label: 'Open the thread', url: threadUrl(m.questionId) }
+        : { label: 'Open your settings', url: `${siteUrl()}/settings` },
+      reason: 'You get this because a moderator acted on something you posted.',
+    },
+    transaction,
+  );
 }
 
 /** A moderator decided your expert application. */
-export async function notifyExpertDecision(transaction: Transaction, d: { applicationId: number; applicantId: number; moderatorId: number; approved: boolean; note: string }) {
+export async function notifyExpertDecision(
+  transaction: Transaction,
+  d: { applicationId: number; applicantId: number; moderatorId: number; approved: boolean; note: string },
+) {
   const to = await recipient(d.applicantId, d.moderatorId, 'notifyExpert', transaction);
   if (!to) return;
-  await queue(`expert-decision:${d.applicationId}:to:${to.id}`, 'expert-decision', to, 'notifyExpert', {
-    subject: d.approved ? 'You are now an expert on Clackwater' : 'Your expert application on Clackwater',
-    preview: d.approved ? 'Your application for expert standing was approved.' : 'Your application for expert standing was declined this time.',
-    heading: d.approved ? 'Your expert application was approved' : 'Your expert application was declined this time',
-    paragraphs: d.approved
-      ? ['You can now record safety checks on guides, and your answers carry the expert mark.', `The moderator wrote: ${d.note}`]
-      : [`The moderator wrote: ${d.note}`, 'You can apply again later from your settings page.'],
-    action: { label: 'Open your settings', url: `${siteUrl()}/settings` },
-    reason: 'You get this because you applied for expert standing on Clackwater.',
-  }, transaction);
+  await queue(
+    `expert-decision:${d.applicationId}:to:${to.id}`,
+    'expert-decision',
+    to,
+    'notifyExpert',
+    {
+      subject: d.approved ? 'You are now an expert on Clackwater' : 'Your expert application on Clackwater',
+      preview: d.approved
+        ? 'Your application for expert standing was approved.'
+        : 'Your application for expert standing was declined this time.',
+      heading: d.approved ? 'Your expert application was approved' : 'Your expert application was declined this time',
+      paragraphs: d.approved
+        ? [
+            'You can now record safety checks on guides, and your answers carry the expert mark.',
+            `The moderator wrote: ${d.note}`,
+          ]
+        : [`The moderator wrote: ${d.note}`, 'You can apply again later from your settings page.'],
+      action: { label: 'Open your settings', url: `${siteUrl()}/settings` },
+      reason: 'You get this because you applied for expert standing on Clackwater.',
+    },
+    transaction,
+  );
 }

@@ -84,7 +84,9 @@ export function kickOutbox(): void {
   if (!mailWorkerEnabled() || kick) return;
   kick = setTimeout(() => {
     kick = null;
-    flushOutbox().catch((err) => console.error(`mail: the outbox worker stopped: ${err instanceof Error ? err.message : err}`));
+    flushOutbox().catch((err) =>
+      console.error(`mail: the outbox worker stopped: ${err instanceof Error ? err.message : err}`),
+    );
   }, 200);
   kick.unref?.();
 }
@@ -101,7 +103,10 @@ async function claim(limit: number, now: Date): Promise<number[]> {
     const ids = rows.map((r) => r.id);
     if (ids.length) {
       const { MailMessage } = initModels();
-      await MailMessage.update({ status: 'sending', lockedUntil: new Date(now.getTime() + CLAIM_MS) }, { where: { id: { [Op.in]: ids } }, transaction });
+      await MailMessage.update(
+        { status: 'sending', lockedUntil: new Date(now.getTime() + CLAIM_MS) },
+        { where: { id: { [Op.in]: ids } }, transaction },
+      );
     }
     return ids;
   });
@@ -116,7 +121,9 @@ function smtpError(err: unknown): string {
 /** A failure of the connection rather than of this one message: the rest of the batch would fail the same way. */
 function connectionDown(err: unknown): boolean {
   const code = (err as { code?: string })?.code;
-  return code === 'ECONNECTION' || code === 'ETIMEDOUT' || code === 'ESOCKET' || code === 'EDNS' || code === 'ECONNREFUSED';
+  return (
+    code === 'ECONNECTION' || code === 'ETIMEDOUT' || code === 'ESOCKET' || code === 'EDNS' || code === 'ECONNREFUSED'
+  );
 }
 
 let running: Promise<FlushResult> | null = null;
@@ -127,7 +134,13 @@ let again = false;
  * once: each message is claimed by one worker (SELECT … FOR UPDATE SKIP LOCKED) and
  * marked sent by the worker that sent it. In one process, overlapping calls share a run.
  */
-export function flushOutbox(opts: { limit?: number; now?: () => Date; /** run as a worker of its own, as another process would */ separate?: boolean } = {}): Promise<FlushResult> {
+export function flushOutbox(
+  opts: {
+    limit?: number;
+    now?: () => Date;
+    /** run as a worker of its own, as another process would */ separate?: boolean;
+  } = {},
+): Promise<FlushResult> {
   if (opts.separate) return flushOnce(opts);
   if (running) {
     // a message queued after the running pass looked: go round once more when it ends
@@ -150,7 +163,13 @@ export function flushOutbox(opts: { limit?: number; now?: () => Date; /** run as
   return running;
 }
 
-async function flushOnce({ limit = 50, now = () => new Date() }: { limit?: number; now?: () => Date }): Promise<FlushResult> {
+async function flushOnce({
+  limit = 50,
+  now = () => new Date(),
+}: {
+  limit?: number;
+  now?: () => Date;
+}): Promise<FlushResult> {
   const { MailMessage } = initModels();
   const result: FlushResult = { sent: 0, retrying: 0, failed: 0 };
   const max = maxAttempts();
@@ -183,7 +202,9 @@ async function flushOnce({ limit = 50, now = () => new Date() }: { limit?: numbe
           const next = new Date(now().getTime() + backoffMs(attempts));
           await m.update({ status: 'pending', attempts, nextAttemptAt: next, lockedUntil: null, lastError: message });
           result.retrying++;
-          console.error(`mail: message ${m.id} to ${m.toAddress} not sent (attempt ${attempts} of ${max}), next try ${next.toISOString()}: ${message}`);
+          console.error(
+            `mail: message ${m.id} to ${m.toAddress} not sent (attempt ${attempts} of ${max}), next try ${next.toISOString()}: ${message}`,
+          );
         }
         if (connectionDown(err)) {
           // Hand the rest of the batch back untried: they wait for the server, keep their
@@ -192,7 +213,11 @@ async function flushOnce({ limit = 50, now = () => new Date() }: { limit?: numbe
           const rest = rows.slice(i + 1);
           for (const r of rest) {
             await MailMessage.update(
-              { status: 'pending', lockedUntil: null, nextAttemptAt: new Date(now().getTime() + backoffMs(Math.max(1, r.attempts))) },
+              {
+                status: 'pending',
+                lockedUntil: null,
+                nextAttemptAt: new Date(now().getTime() + backoffMs(Math.max(1, r.attempts))),
+              },
               { where: { id: r.id, status: 'sending' } },
             );
           }
@@ -207,7 +232,10 @@ async function flushOnce({ limit = 50, now = () => new Date() }: { limit?: numbe
 /** Puts a failed message back in the queue for one more round of attempts (admins, from /admin/outbox). */
 export async function retryFailed(id: number): Promise<boolean> {
   const { MailMessage } = initModels();
-  const [n] = await MailMessage.update({ status: 'pending', attempts: 0, nextAttemptAt: new Date(), lockedUntil: null }, { where: { id, status: 'failed' } });
+  const [n] = await MailMessage.update(
+    { status: 'pending', attempts: 0, nextAttemptAt: new Date(), lockedUntil: null },
+    { where: { id, status: 'failed' } },
+  );
   if (n > 0) kickOutbox();
   return n > 0;
 }
@@ -215,11 +243,29 @@ export async function retryFailed(id: number): Promise<boolean> {
 /** For /admin/outbox: how many messages in each status, and the newest 100 (of one status, or all). */
 export async function outboxView(status: MailStatus | null) {
   const { MailMessage } = initModels();
-  const grouped = (await MailMessage.findAll({ attributes: ['status', [fn('COUNT', col('id')), 'n']], group: ['status'], raw: true })) as unknown as { status: string; n: number }[];
+  const grouped = (await MailMessage.findAll({
+    attributes: ['status', [fn('COUNT', col('id')), 'n']],
+    group: ['status'],
+    raw: true,
+  })) as unknown as { status: string; n: number }[];
   const rows = await MailMessage.findAll({
     where: status ? { status } : {},
-    attributes: ['id', 'toAddress', 'kind', 'subject', 'status', 'attempts', 'nextAttemptAt', 'lastError', 'sentAt', 'createdAt'],
-    order: [['createdAt', 'DESC'], ['id', 'DESC']],
+    attributes: [
+      'id',
+      'toAddress',
+      'kind',
+      'subject',
+      'status',
+      'attempts',
+      'nextAttemptAt',
+      'lastError',
+      'sentAt',
+      'createdAt',
+    ],
+    order: [
+      ['createdAt', 'DESC'],
+      ['id', 'DESC'],
+    ],
     limit: 100,
   });
   return { counts: Object.fromEntries(grouped.map((g) => [g.status, Number(g.n)])) as Record<string, number>, rows };

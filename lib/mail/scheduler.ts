@@ -17,7 +17,9 @@ function report(what: string) {
 
 async function digestAndFlush(frequency: DigestFrequency) {
   const r = await runDigests(frequency);
-  console.log(`mail: ${r.frequency} digest ${r.period}: ${r.queued} queued, ${r.nothingNew} with nothing new, ${r.alreadyQueued} already queued`);
+  console.log(
+    `mail: ${r.frequency} digest ${r.period}: ${r.queued} queued, ${r.nothingNew} with nothing new, ${r.alreadyQueued} already queued`,
+  );
   await flushOutbox();
 }
 
@@ -26,9 +28,21 @@ export function startMailScheduler(): ScheduledTask[] {
   if (g.__clackwaterMailTasks) return g.__clackwaterMailTasks;
   const opts = { timezone: 'UTC', noOverlap: true };
   g.__clackwaterMailTasks = [
-    cron.schedule(process.env.MAIL_FLUSH_CRON ?? '*/15 * * * * *', () => flushOutbox().then(() => undefined, report('the outbox worker')), { ...opts, name: 'mail-flush' }),
-    cron.schedule(process.env.MAIL_DAILY_CRON ?? '0 6 * * *', () => digestAndFlush('daily').catch(report('the daily digest')), { ...opts, name: 'mail-digest-daily' }),
-    cron.schedule(process.env.MAIL_WEEKLY_CRON ?? '0 6 * * 1', () => digestAndFlush('weekly').catch(report('the weekly digest')), { ...opts, name: 'mail-digest-weekly' }),
+    cron.schedule(
+      process.env.MAIL_FLUSH_CRON ?? '*/15 * * * * *',
+      () => flushOutbox().then(() => undefined, report('the outbox worker')),
+      { ...opts, name: 'mail-flush' },
+    ),
+    cron.schedule(
+      process.env.MAIL_DAILY_CRON ?? '0 6 * * *',
+      () => digestAndFlush('daily').catch(report('the daily digest')),
+      { ...opts, name: 'mail-digest-daily' },
+    ),
+    cron.schedule(
+      process.env.MAIL_WEEKLY_CRON ?? '0 6 * * 1',
+      () => digestAndFlush('weekly').catch(report('the weekly digest')),
+      { ...opts, name: 'mail-digest-weekly' },
+    ),
   ];
   return g.__clackwaterMailTasks;
 }

@@ -43,18 +43,38 @@ export function unsubscribeHeaders(userId: number, scope: UnsubscribeScope): Rec
   };
 }
 
-export type UnsubscribeCheck = { ok: true; userId: number; scope: UnsubscribeScope } | { ok: false; field: 'u' | 's' | 't'; message: string };
+export type UnsubscribeCheck =
+  { ok: true; userId: number; scope: UnsubscribeScope } | { ok: false; field: 'u' | 's' | 't'; message: string };
 
 /** Checks a link's three parameters; any change to any of them is refused. */
-export function verifyUnsubscribe(params: { u?: string | null; s?: string | null; t?: string | null }): UnsubscribeCheck {
+export function verifyUnsubscribe(params: {
+  u?: string | null;
+  s?: string | null;
+  t?: string | null;
+}): UnsubscribeCheck {
   const userId = idParam(params.u ?? '');
-  if (!userId) return { ok: false, field: 'u', message: 'This unsubscribe link is damaged: the member number is missing or wrong.' };
+  if (!userId)
+    return {
+      ok: false,
+      field: 'u',
+      message: 'This unsubscribe link is damaged: the member number is missing or wrong.',
+    };
   const scope = params.s as UnsubscribeScope;
-  if (!UNSUBSCRIBE_SCOPES.includes(scope)) return { ok: false, field: 's', message: 'This unsubscribe link is damaged: it does not say which e-mail to stop.' };
+  if (!UNSUBSCRIBE_SCOPES.includes(scope))
+    return {
+      ok: false,
+      field: 's',
+      message: 'This unsubscribe link is damaged: it does not say which e-mail to stop.',
+    };
   const given = Buffer.from(params.t ?? '');
   const expected = Buffer.from(signature(userId, scope));
   if (given.length !== expected.length || !timingSafeEqual(given, expected)) {
-    return { ok: false, field: 't', message: 'This unsubscribe link does not check out: it may have been changed or cut short. Use the link from the e-mail as it came, or change your e-mail settings after signing in.' };
+    return {
+      ok: false,
+      field: 't',
+      message:
+        'This unsubscribe link does not check out: it may have been changed or cut short. Use the link from the e-mail as it came, or change your e-mail settings after signing in.',
+    };
   }
   return { ok: true, userId, scope };
 }

@@ -45,7 +45,14 @@ export function checkRank(actor: Actor, targetRole: Role): void {
  */
 export async function moderate(
   moderator: SessionUser,
-  input: { action: ModerationAction; postType: ModeratedType; postId: number; reason: string; tags?: string[]; until?: string },
+  input: {
+    action: ModerationAction;
+    postType: ModeratedType;
+    postId: number;
+    reason: string;
+    tags?: string[];
+    until?: string;
+  },
 ) {
   const { Flag, Question, QuestionTag, Tag, User, Notice } = initModels();
   const done = await getSequelize().transaction(async (transaction) => {
@@ -53,17 +60,25 @@ export async function moderate(
     if (post.authorId === moderator.id) throw new ForumError(403, 'Moderators cannot act on their own posts.');
     const author = await User.findByPk(post.authorId, { attributes: ['id', 'role'], transaction });
     if (author) checkRank(moderator, author.role);
-    const ownFlag = await Flag.findOne({ where: { postType: input.postType, postId: input.postId, flaggerId: moderator.id, status: 'open' }, transaction });
-    if (ownFlag) throw new ForumError(403, 'Moderators cannot act on a post they flagged themselves; another moderator will.');
+    const ownFlag = await Flag.findOne({
+      where: { postType: input.postType, postId: input.postId, flaggerId: moderator.id, status: 'open' },
+      transaction,
+    });
+    if (ownFlag)
+      throw new ForumError(403, 'Moderators cannot act on a post they flagged themselves; another moderator will.');
     const now = new Date();
     const details: Record<string, unknown> = { questionId };
     const settleFlags = (status: 'dismissed' | 'upheld') =>
-      Flag.update({ status, resolvedBy: moderator.id, resolvedAt: now }, { where: { postType: input.postType, postId: input.postId, status: 'open' }, transaction });
+      Flag.update(
+        { status, resolvedBy: moderator.id, resolvedAt: now },
+        { where: { postType: input.postType, postId: input.postId, status: 'open' }, transaction },
+      );
 
     switch (input.action) {
       case 'dismiss':
         await settleFlags('dismissed');
-        if (post.hiddenAt && /pending review/.test(post.hiddenReason ?? '')) await post.update({ hiddenAt: null, hiddenReason: null }, { transaction });
+        if (post.hiddenAt && /pending review/.test(post.hiddenReason ?? ''))
+          await post.update({ hiddenAt: null, hiddenReason: null }, { transaction });
         break;
       case 'hide':
         await post.update({ hiddenAt: now, hiddenReason: input.reason }, { transaction });
@@ -79,8 +94,12 @@ export async function moderate(
         break;
       case 'lock':
       case 'unlock': {
-        if (input.postType !== 'question') throw new ForumError(422, 'postType: only a question’s thread can be locked', 'postType');
-        await Question.update({ lockedAt: input.action === 'lock' ? now : null }, { where: { id: input.postId }, transaction });
+        if (input.postType !== 'question')
+          throw new ForumError(422, 'postType: only a question’s thread can be locked', 'postType');
+        await Question.update(
+          { lockedAt: input.action === 'lock' ? now : null },
+          { where: { id: input.postId }, transaction },
+        );
         break;
       }
       case 'retag': {
@@ -92,7 +111,10 @@ export async function moderate(
         const before = await QuestionTag.findAll({ where: { questionId: input.postId }, transaction });
         details.tagsBefore = before.map((t) => t.tagId);
         await QuestionTag.destroy({ where: { questionId: input.postId }, transaction });
-        await QuestionTag.bulkCreate(tags.map((t) => ({ questionId: input.postId, tagId: t.id })), { transaction });
+        await QuestionTag.bulkCreate(
+          tags.map((t) => ({ questionId: input.postId, tagId: t.id })),
+          { transaction },
+        );
         details.tags = slugs;
         break;
       }
@@ -100,7 +122,8 @@ export async function moderate(
         break;
       case 'suspend': {
         const until = input.until ? new Date(`${input.until}T23:59:59Z`) : null;
-        if (!until || Number.isNaN(until.getTime()) || until <= now) throw new ForumError(422, 'until: the suspension must end on a date after today', 'until');
+        if (!until || Number.isNaN(until.getTime()) || until <= now)
+          throw new ForumError(422, 'until: the suspension must end on a date after today', 'until');
         await User.update({ suspendedUntil: until }, { where: { id: post.authorId }, transaction });
         await bumpSessionVersion(post.authorId, transaction);
         details.until = until.toISOString();
@@ -108,23 +131,45 @@ export async function moderate(
       }
     }
     const audit = await recordAudit(
-      { actorId: moderator.id, action: input.action, targetType: input.action === 'warn' || input.action === 'suspend' ? 'member' : input.postType, targetId: input.action === 'warn' || input.action === 'suspend' ? post.authorId : input.postId, reason: input.reason, details: { ...details, postType: input.postType, postId: input.postId } },
+      {
+        actorId: moderator.id,
+        action: input.action,
+        targetType: input.action === 'warn' || input.action === 'suspend' ? 'member' : input.postType,
+        targetId: input.action === 'warn' || input.action === 'suspend' ? post.authorId : input.postId,
+        reason: input.reason,
+        details: { ...details, postType: input.postType, postId: input.postId },
+      },
       transaction,
     );
-    const untilWords = input.action === 'suspend' ? ` until ${new Date(details.until as string).toUTCString().slice(5, 16)}` : '';
+    const untilWords =
+      input.action === 'suspend' ? ` until ${new Date(details.until as string).toUTCString().slice(5, 16)}` : '';
     await Notice.create(
-      { userId: post.authorId, kind: 'moderation', message: `${WORDS[input.action]}${untilWords}. Reason: ${input.reason}`, link: questionId ? `/questions/${questionId}` : null, readAt: null },
+      {
+        userId: post.authorId,
+        kind: 'moderation',
+        message: `${WORDS[input.action]}${untilWords}. Reason: ${input.reason}`,
+        link: questionId ? `/questions/${questionId}` : null,
+        readAt: null,
+      },
       { transaction },
     );
     if (input.action !== 'dismiss') {
       await notifyModeration(transaction, {
-        auditId: audit.id, authorId: post.authorId, moderatorId: moderator.id, words: WORDS[input.action], reason: input.reason, questionId,
+        auditId: audit.id,
+        authorId: post.authorId,
+        moderatorId: moderator.id,
+        words: WORDS[input.action],
+        reason: input.reason,
+        questionId,
         postLabel: POST_LABEL[input.postType],
       });
     }
     return { auditId: audit.id, questionId };
   });
   // hide, restore, delete and retag change what search shows: the thread is reindexed now
-  await postsChanged({ questionId: done.questionId, fieldLogEntryId: input.postType === 'field-log' ? input.postId : null });
+  await postsChanged({
+    questionId: done.questionId,
+    fieldLogEntryId: input.postType === 'field-log' ? input.postId : null,
+  });
   return { auditId: done.auditId };
 }

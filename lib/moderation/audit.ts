@@ -3,12 +3,26 @@ import { initModels } from '@/models';
 
 /** Writes one audit row inside the caller's transaction: the action and its record commit together or not at all. */
 export async function recordAudit(
-  entry: { actorId: number | null; action: string; targetType: string; targetId: string | number; reason: string; details?: Record<string, unknown> },
+  entry: {
+    actorId: number | null;
+    action: string;
+    targetType: string;
+    targetId: string | number;
+    reason: string;
+    details?: Record<string, unknown>;
+  },
   transaction: Transaction,
 ) {
   const { AuditEntry } = initModels();
   return AuditEntry.create(
-    { actorId: entry.actorId, action: entry.action, targetType: entry.targetType, targetId: String(entry.targetId), reason: entry.reason, details: entry.details ?? null },
+    {
+      actorId: entry.actorId,
+      action: entry.action,
+      targetType: entry.targetType,
+      targetId: String(entry.targetId),
+      reason: entry.reason,
+      details: entry.details ?? null,
+    },
     { transaction },
   );
 }
@@ -39,7 +53,10 @@ export async function listAudit(f: AuditFilter) {
   const { rows, count } = await AuditEntry.findAndCountAll({
     where,
     include: [{ model: User, as: 'actor', attributes: ['handle', 'displayName'] }],
-    order: [['createdAt', 'DESC'], ['id', 'DESC']],
+    order: [
+      ['createdAt', 'DESC'],
+      ['id', 'DESC'],
+    ],
     limit: perPage,
     offset: (page - 1) * perPage,
   });

@@ -18,13 +18,23 @@ export interface ModeratedPost {
 }
 
 /** The thread a photo is shown in: its question's, or its answer's question's; null while unattached. */
-export async function photoQuestionId(photo: { questionId: number | null; answerId: number | null }, transaction?: Transaction): Promise<number | null> {
+export async function photoQuestionId(
+  photo: { questionId: number | null; answerId: number | null },
+  transaction?: Transaction,
+): Promise<number | null> {
   if (photo.questionId !== null || photo.answerId === null) return photo.questionId;
-  return (await initModels().Answer.findByPk(photo.answerId, { attributes: ['questionId'], transaction }))?.questionId ?? null;
+  return (
+    (await initModels().Answer.findByPk(photo.answerId, { attributes: ['questionId'], transaction }))?.questionId ??
+    null
+  );
 }
 
 /** The post (locked for update) and the question it belongs to. A photo's author is its uploader, its words its description. */
-export async function loadPost(postType: ModeratedType, postId: number, transaction: Transaction): Promise<{ post: ModeratedPost; questionId: number | null }> {
+export async function loadPost(
+  postType: ModeratedType,
+  postId: number,
+  transaction: Transaction,
+): Promise<{ post: ModeratedPost; questionId: number | null }> {
   const { Question, Answer, Reply, Photo, FieldLogEntry } = initModels();
   if (postType === 'field-log') {
     // an entry belongs to no thread; its words are its site, its measurements and its notes
@@ -59,7 +69,8 @@ export async function loadPost(postType: ModeratedType, postId: number, transact
     return { post, questionId };
   }
   const model = { question: Question, answer: Answer, reply: Reply }[postType] as unknown as typeof Answer;
-  const post = (await model.findByPk(postId, { transaction, lock: transaction.LOCK.UPDATE })) as unknown as (ModeratedPost & { questionId?: number }) | null;
+  const post = (await model.findByPk(postId, { transaction, lock: transaction.LOCK.UPDATE })) as unknown as
+    (ModeratedPost & { questionId?: number }) | null;
   if (!post) throw new ForumError(404, `no such ${postType}`, 'postId');
   const questionId = postType === 'question' ? post.id : (post.questionId as number);
   return { post, questionId };

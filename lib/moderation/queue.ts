@@ -10,7 +10,12 @@ export async function reviewQueue(filter: { reason?: FlagReason; olderThanHours?
   const where: Record<string | symbol, unknown> = { status: 'open', postType: { [Op.in]: [...MODERATED_TYPES] } };
   if (filter.reason) where.reason = filter.reason;
   if (filter.olderThanHours) where.createdAt = { [Op.lte]: new Date(Date.now() - filter.olderThanHours * 3_600_000) };
-  const flags = await Flag.findAll({ where, include: [{ model: User, as: 'flagger', attributes: ['handle', 'displayName', 'role'] }], order: [['createdAt', 'ASC']], limit: 500 });
+  const flags = await Flag.findAll({
+    where,
+    include: [{ model: User, as: 'flagger', attributes: ['handle', 'displayName', 'role'] }],
+    order: [['createdAt', 'ASC']],
+    limit: 500,
+  });
   const groups = new Map<string, typeof flags>();
   for (const f of flags) {
     const k = `${f.postType}:${f.postId}`;
@@ -20,28 +25,67 @@ export async function reviewQueue(filter: { reason?: FlagReason; olderThanHours?
   for (const [k, fs] of groups) {
     const [type, idText] = k.split(':') as [ModeratedType, string];
     const id = Number(idText);
-    type QueuedPost = { id: number; body: string; questionId?: number | null; hiddenAt: Date | null; deletedAt: Date | null; createdAt: Date; author?: { id: number; handle: string; displayName: string; role: Role }; photoId?: string };
+    type QueuedPost = {
+      id: number;
+      body: string;
+      questionId?: number | null;
+      hiddenAt: Date | null;
+      deletedAt: Date | null;
+      createdAt: Date;
+      author?: { id: number; handle: string; displayName: string; role: Role };
+      photoId?: string;
+    };
     let post: QueuedPost | null;
     if (type === 'field-log') {
       const entry = await FieldLogEntry.findByPk(id);
-      const author = entry ? await User.findByPk(entry.authorId, { attributes: ['id', 'handle', 'displayName', 'role'] }) : null;
+      const author = entry
+        ? await User.findByPk(entry.authorId, { attributes: ['id', 'handle', 'displayName', 'role'] })
+        : null;
       post = entry
-        ? { id: entry.id, body: `Field log: ${entry.siteName} (${entry.testedOn}). ${entry.notes}`.trim(), questionId: null, hiddenAt: entry.hiddenAt ?? null, deletedAt: entry.deletedAt ?? null, createdAt: entry.createdAt, author: author ?? undefined }
+        ? {
+            id: entry.id,
+            body: `Field log: ${entry.siteName} (${entry.testedOn}). ${entry.notes}`.trim(),
+            questionId: null,
+            hiddenAt: entry.hiddenAt ?? null,
+            deletedAt: entry.deletedAt ?? null,
+            createdAt: entry.createdAt,
+            author: author ?? undefined,
+          }
         : null;
     } else if (type === 'photo') {
       const photo = await Photo.findByPk(id);
-      const owner = photo ? await User.findByPk(photo.ownerId, { attributes: ['id', 'handle', 'displayName', 'role'] }) : null;
+      const owner = photo
+        ? await User.findByPk(photo.ownerId, { attributes: ['id', 'handle', 'displayName', 'role'] })
+        : null;
       post = photo
-        ? { id: photo.id, body: photo.alt ?? '', questionId: await photoQuestionId(photo), hiddenAt: photo.hiddenAt ?? null, deletedAt: photo.deletedAt ?? null, createdAt: photo.createdAt, author: owner ?? undefined, photoId: photo.publicId }
+        ? {
+            id: photo.id,
+            body: photo.alt ?? '',
+            questionId: await photoQuestionId(photo),
+            hiddenAt: photo.hiddenAt ?? null,
+            deletedAt: photo.deletedAt ?? null,
+            createdAt: photo.createdAt,
+            author: owner ?? undefined,
+            photoId: photo.publicId,
+          }
         : null;
     } else {
       const model = { question: Question, answer: Answer, reply: Reply }[type] as unknown as typeof Answer;
-      post = (await model.findByPk(id, { include: [{ model: User, as: 'author', attributes: ['id', 'handle', 'displayName', 'role'] }] })) as unknown as QueuedPost | null;
+      post = (await model.findByPk(id, {
+        include: [{ model: User, as: 'author', attributes: ['id', 'handle', 'displayName', 'role'] }],
+      })) as unknown as QueuedPost | null;
     }
     if (!post) continue;
     const questionId = type === 'question' ? post.id : (post.questionId ?? 0);
-    const q = await Question.findByPk(questionId, { attributes: ['id', 'title'], include: [{ model: Tag, as: 'tags', attributes: ['slug'], through: { attributes: [] } }] });
-    const revisions = await Revision.findAll({ where: { postType: type, postId: id }, include: [{ model: User, as: 'editor', attributes: ['displayName'] }], order: [['createdAt', 'ASC']] });
+    const q = await Question.findByPk(questionId, {
+      attributes: ['id', 'title'],
+      include: [{ model: Tag, as: 'tags', attributes: ['slug'], through: { attributes: [] } }],
+    });
+    const revisions = await Revision.findAll({
+      where: { postType: type, postId: id },
+      include: [{ model: User, as: 'editor', attributes: ['displayName'] }],
+      order: [['createdAt', 'ASC']],
+    });
     items.push({
       post: {
         type,
@@ -49,15 +93,36 @@ export async function reviewQueue(filter: { reason?: FlagReason; olderThanHours?
         questionId,
         questionTitle: q?.title ?? '',
         body: post.body,
-        author: post.author ? { id: post.author.id, handle: post.author.handle, displayName: post.author.displayName, role: post.author.role } : null,
+        author: post.author
+          ? {
+              id: post.author.id,
+              handle: post.author.handle,
+              displayName: post.author.displayName,
+              role: post.author.role,
+            }
+          : null,
         hiddenAt: post.hiddenAt?.toISOString() ?? null,
         deletedAt: post.deletedAt?.toISOString() ?? null,
         createdAt: post.createdAt.toISOString(),
         tags: (q?.tags ?? []).map((t) => t.slug),
         photoId: post.photoId ?? null,
       },
-      flags: fs.map((f) => ({ id: f.id, reason: f.reason, note: f.note, flagger: { handle: f.flagger?.handle ?? '', displayName: f.flagger?.displayName ?? '', role: f.flagger?.role ?? 'member' }, createdAt: f.createdAt.toISOString() })),
-      revisions: revisions.map((r) => ({ body: r.body, at: r.createdAt.toISOString(), editor: r.editor?.displayName ?? 'unknown' })),
+      flags: fs.map((f) => ({
+        id: f.id,
+        reason: f.reason,
+        note: f.note,
+        flagger: {
+          handle: f.flagger?.handle ?? '',
+          displayName: f.flagger?.displayName ?? '',
+          role: f.flagger?.role ?? 'member',
+        },
+        createdAt: f.createdAt.toISOString(),
+      })),
+      revisions: revisions.map((r) => ({
+        body: r.body,
+        at: r.createdAt.toISOString(),
+        editor: r.editor?.displayName ?? 'unknown',
+      })),
     });
   }
   return { items };

@@ -25,11 +25,29 @@ export async function liftSuspension(moderator: SessionUser, userId: number, rea
     if (!until || until.getTime() <= Date.now()) throw new ForumError(409, 'This member is not suspended.', 'id');
     await member.update({ suspendedUntil: null }, { transaction });
     const audit = await recordAudit(
-      { actorId: moderator.id, action: 'lift-suspension', targetType: 'member', targetId: member.id, reason, details: { until: until.toISOString() } },
+      {
+        actorId: moderator.id,
+        action: 'lift-suspension',
+        targetType: 'member',
+        targetId: member.id,
+        reason,
+        details: { until: until.toISOString() },
+      },
       transaction,
     );
-    await Notice.create({ userId: member.id, kind: 'moderation', message: `${LIFTED}. Reason: ${reason}`, link: null, readAt: null }, { transaction });
-    await notifyModeration(transaction, { auditId: audit.id, authorId: member.id, moderatorId: moderator.id, words: LIFTED, reason, questionId: null, postLabel: 'your account' });
+    await Notice.create(
+      { userId: member.id, kind: 'moderation', message: `${LIFTED}. Reason: ${reason}`, link: null, readAt: null },
+      { transaction },
+    );
+    await notifyModeration(transaction, {
+      auditId: audit.id,
+      authorId: member.id,
+      moderatorId: moderator.id,
+      words: LIFTED,
+      reason,
+      questionId: null,
+      postLabel: 'your account',
+    });
     return { auditId: audit.id, id: member.id };
   });
 }
@@ -54,8 +72,21 @@ export async function listSuspended(): Promise<SuspendedMember[]> {
   });
   const out: SuspendedMember[] = [];
   for (const u of users) {
-    const last = await AuditEntry.findOne({ where: { action: 'suspend', targetType: 'member', targetId: String(u.id) }, order: [['createdAt', 'DESC'], ['id', 'DESC']] });
-    out.push({ id: u.id, handle: u.handle, displayName: u.displayName, role: u.role, until: u.suspendedUntil!.toISOString(), reason: last?.reason ?? null });
+    const last = await AuditEntry.findOne({
+      where: { action: 'suspend', targetType: 'member', targetId: String(u.id) },
+      order: [
+        ['createdAt', 'DESC'],
+        ['id', 'DESC'],
+      ],
+    });
+    out.push({
+      id: u.id,
+      handle: u.handle,
+      displayName: u.displayName,
+      role: u.role,
+      until: u.suspendedUntil!.toISOString(),
+      reason: last?.reason ?? null,
+    });
   }
   return out;
 }

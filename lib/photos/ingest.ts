@@ -22,7 +22,11 @@ import {
 
 export { PHOTO_LIMITS };
 
-const ACCEPTED: Record<string, 'jpeg' | 'png' | 'webp'> = { 'image/jpeg': 'jpeg', 'image/png': 'png', 'image/webp': 'webp' };
+const ACCEPTED: Record<string, 'jpeg' | 'png' | 'webp'> = {
+  'image/jpeg': 'jpeg',
+  'image/png': 'png',
+  'image/webp': 'webp',
+};
 
 export class UploadRefused extends Error {
   constructor(
@@ -47,7 +51,11 @@ const mb = (bytes: number) => `${Math.round(bytes / (1024 * 1024))} MB`;
 
 /** A file's name fit to quote back in a message: no path, no control characters, bounded. */
 export function displayName(original: string | null | undefined): string {
-  const base = (original ?? '').split(/[\\/]/).pop()!.replace(/[\u0000-\u001f\u007f]/g, '').trim();
+  const base = (original ?? '')
+    .split(/[\\/]/)
+    .pop()!
+    .replace(/[\u0000-\u001f\u007f]/g, '')
+    .trim();
   return base ? `“${base.length > 80 ? `${base.slice(0, 77)}…` : base}”` : 'a file with no name';
 }
 
@@ -68,7 +76,11 @@ export async function ingestUpload(request: Request, ownerId: number): Promise<I
   const declared = Number(request.headers.get('content-length') ?? NaN);
   // room for the multipart framing and the alt texts around the file data
   if (Number.isFinite(declared) && declared > PHOTO_LIMITS.maxTotalBytes + 64 * 1024) {
-    throw new UploadRefused(413, `Photos can come to ${mb(PHOTO_LIMITS.maxTotalBytes)} at most in one upload.`, 'too_large');
+    throw new UploadRefused(
+      413,
+      `Photos can come to ${mb(PHOTO_LIMITS.maxTotalBytes)} at most in one upload.`,
+      'too_large',
+    );
   }
 
   let tmpDir: string;
@@ -82,7 +94,8 @@ export async function ingestUpload(request: Request, ownerId: number): Promise<I
     const { files, alts } = await receive(request, tmpDir);
     if (files.length === 0) throw new UploadRefused(400, 'Choose at least one photo (JPEG, PNG or WebP).', 'no_file');
     const altParsed = altSchema.safeParse(alts);
-    if (!altParsed.success) throw new UploadRefused(400, altParsed.error.issues[0]?.message ?? ALT_TOO_LONG, 'invalid_alt', 'alt');
+    if (!altParsed.success)
+      throw new UploadRefused(400, altParsed.error.issues[0]?.message ?? ALT_TOO_LONG, 'invalid_alt', 'alt');
 
     // Check every file before encoding any, so a refusal costs no decoding.
     for (const f of files) await inspect(f);
@@ -110,7 +123,13 @@ export async function ingestUpload(request: Request, ownerId: number): Promise<I
     await sequelize.transaction(async (transaction) => {
       await Photo.bulkCreate(rows, { transaction });
     });
-    return rows.map((r) => ({ id: r.publicId, width: r.width, height: r.height, url: photoUrl(r.publicId), thumbUrl: photoUrl(r.publicId, 'thumb') }));
+    return rows.map((r) => ({
+      id: r.publicId,
+      width: r.width,
+      height: r.height,
+      url: photoUrl(r.publicId),
+      thumbUrl: photoUrl(r.publicId, 'thumb'),
+    }));
   } catch (err) {
     await removeFiles(written);
     throw storageRefusal(err);
@@ -122,7 +141,11 @@ export async function ingestUpload(request: Request, ownerId: number): Promise<I
 function storageRefusal(err: unknown): unknown {
   if (err instanceof UploadRefused || !isStorageUnavailable(err)) return err;
   console.error('photo storage unavailable', err);
-  return new UploadRefused(507, 'Clackwater could not store photos just now: the server’s storage is full or not writable. Nothing was saved; please try again later.', 'storage_unavailable');
+  return new UploadRefused(
+    507,
+    'Clackwater could not store photos just now: the server’s storage is full or not writable. Nothing was saved; please try again later.',
+    'storage_unavailable',
+  );
 }
 
 /** Streams the body through formidable into `tmpDir` under random names (the sender's names never reach the disk). */
@@ -163,7 +186,8 @@ async function receive(request: Request, tmpDir: string): Promise<{ files: Formi
     for (const f of received) {
       if (writeError) break;
       const onDisk = (await stat(f.filepath)).size;
-      if (onDisk < f.size) writeError = Object.assign(new Error(`ENOSPC: ${onDisk} of ${f.size} bytes written`), { code: 'ENOSPC' });
+      if (onDisk < f.size)
+        writeError = Object.assign(new Error(`ENOSPC: ${onDisk} of ${f.size} bytes written`), { code: 'ENOSPC' });
     }
     if (writeError) throw writeError;
     return { files: received, alts: fields.alt ?? [] };
@@ -178,9 +202,17 @@ function formidableRefusal(err: unknown, current: string | null): unknown {
   if (typeof code !== 'number') return err; // a Node error (disk full, …), classified by the caller
   switch (code) {
     case formidableErrors.biggerThanMaxFileSize:
-      return new UploadRefused(413, `${displayName(current)} is larger than ${mb(PHOTO_LIMITS.maxFileBytes)}, the limit for one photo.`, 'too_large');
+      return new UploadRefused(
+        413,
+        `${displayName(current)} is larger than ${mb(PHOTO_LIMITS.maxFileBytes)}, the limit for one photo.`,
+        'too_large',
+      );
     case formidableErrors.biggerThanTotalMaxFileSize:
-      return new UploadRefused(413, `Photos can come to ${mb(PHOTO_LIMITS.maxTotalBytes)} at most in one upload.`, 'too_large');
+      return new UploadRefused(
+        413,
+        `Photos can come to ${mb(PHOTO_LIMITS.maxTotalBytes)} at most in one upload.`,
+        'too_large',
+      );
     case formidableErrors.maxFilesExceeded:
       return new UploadRefused(413, `Send up to ${PHOTO_LIMITS.maxFiles} photos at a time.`, 'too_many_files');
     case formidableErrors.noEmptyFiles:
@@ -190,7 +222,11 @@ function formidableRefusal(err: unknown, current: string | null): unknown {
     case formidableErrors.maxFieldsSizeExceeded:
       return new UploadRefused(413, 'Too many or too long fields beside the photos.', 'too_large', 'alt');
     default:
-      return new UploadRefused(400, 'The upload could not be read; please choose the photos again.', 'malformed_upload');
+      return new UploadRefused(
+        400,
+        'The upload could not be read; please choose the photos again.',
+        'malformed_upload',
+      );
   }
 }
 
@@ -216,8 +252,13 @@ async function inspect(f: FormidableFile): Promise<void> {
     if (/pixel limit/i.test((err as Error).message)) throw tooManyPixels(name);
     throw new UploadRefused(415, `${name} could not be read as an image.`, 'unreadable_image');
   }
-  if (meta.format !== format || !meta.width || !meta.height) throw new UploadRefused(415, `${name} could not be read as an image.`, 'unreadable_image');
-  if (meta.width * meta.height > PHOTO_LIMITS.maxPixels || meta.width > PHOTO_LIMITS.maxSide || meta.height > PHOTO_LIMITS.maxSide) {
+  if (meta.format !== format || !meta.width || !meta.height)
+    throw new UploadRefused(415, `${name} could not be read as an image.`, 'unreadable_image');
+  if (
+    meta.width * meta.height > PHOTO_LIMITS.maxPixels ||
+    meta.width > PHOTO_LIMITS.maxSide ||
+    meta.height > PHOTO_LIMITS.maxSide
+  ) {
     throw tooManyPixels(name, meta.width, meta.height);
   }
 }
@@ -240,7 +281,11 @@ async function encode(f: FormidableFile) {
   try {
     const input = sharp(f.filepath, { limitInputPixels: PHOTO_LIMITS.maxPixels }).rotate();
     const fit = (side: number) => ({ width: side, height: side, fit: 'inside' as const, withoutEnlargement: true });
-    const web = await input.clone().resize(fit(PHOTO_LIMITS.webSide)).webp({ quality: 82 }).toBuffer({ resolveWithObject: true });
+    const web = await input
+      .clone()
+      .resize(fit(PHOTO_LIMITS.webSide))
+      .webp({ quality: 82 })
+      .toBuffer({ resolveWithObject: true });
     const thumb = await sharp(web.data).resize(fit(PHOTO_LIMITS.thumbSide)).webp({ quality: 75 }).toBuffer();
     return { web, thumb };
   } catch (err) {

@@ -1,4 +1,10 @@
-import { DeleteObjectCommand, GetObjectCommand, PutObjectCommand, S3Client, S3ServiceException } from '@aws-sdk/client-s3';
+import {
+  DeleteObjectCommand,
+  GetObjectCommand,
+  PutObjectCommand,
+  S3Client,
+  S3ServiceException,
+} from '@aws-sdk/client-s3';
 
 /**
  * Photos on S3-compatible object storage (AWS S3, MinIO, Ceph, …) when S3_BUCKET is
@@ -39,7 +45,14 @@ export const S3_HANDLE = 's3:';
 
 export async function putObject(name: string, data: Buffer): Promise<string> {
   await client().send(
-    new PutObjectCommand({ Bucket: bucket(), Key: prefix() + name, Body: data, ContentType: 'image/webp', IfNoneMatch: '*', CacheControl: 'private, max-age=31536000, immutable' }),
+    new PutObjectCommand({
+      Bucket: bucket(),
+      Key: prefix() + name,
+      Body: data,
+      ContentType: 'image/webp',
+      IfNoneMatch: '*',
+      CacheControl: 'private, max-age=31536000, immutable',
+    }),
   );
   return S3_HANDLE + name;
 }
@@ -49,7 +62,8 @@ export async function getObject(name: string): Promise<Buffer | null> {
     const out = await client().send(new GetObjectCommand({ Bucket: bucket(), Key: prefix() + name }));
     return Buffer.from(await out.Body!.transformToByteArray());
   } catch (err) {
-    if (err instanceof S3ServiceException && (err.name === 'NoSuchKey' || err.$metadata?.httpStatusCode === 404)) return null;
+    if (err instanceof S3ServiceException && (err.name === 'NoSuchKey' || err.$metadata?.httpStatusCode === 404))
+      return null;
     throw err;
   }
 }
@@ -60,7 +74,8 @@ export async function deleteObject(handle: string): Promise<void> {
 
 /** The object store refused or could not be reached: answered like a full disk (507), not 500. */
 export function isObjectStoreUnavailable(err: unknown): boolean {
-  if (err instanceof S3ServiceException) return (err.$metadata?.httpStatusCode ?? 500) >= 500 || err.name === 'AccessDenied' || err.name === 'QuotaExceeded';
+  if (err instanceof S3ServiceException)
+    return (err.$metadata?.httpStatusCode ?? 500) >= 500 || err.name === 'AccessDenied' || err.name === 'QuotaExceeded';
   const code = (err as { code?: string } | null)?.code;
   return code === 'ECONNREFUSED' || code === 'ECONNRESET' || code === 'ETIMEDOUT' || code === 'ENOTFOUND';
 }

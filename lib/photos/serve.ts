@@ -58,7 +58,10 @@ export async function servePhoto(request: Request, id: string, variant: PhotoVar
   if (!isPhotoId(id)) return notFound();
   try {
     const { Photo } = initModels();
-    const row = await Photo.findOne({ where: { publicId: id }, attributes: ['id', 'questionId', 'answerId', 'fieldLogEntryId', 'hiddenAt', 'deletedAt'] });
+    const row = await Photo.findOne({
+      where: { publicId: id },
+      attributes: ['id', 'questionId', 'answerId', 'fieldLogEntryId', 'hiddenAt', 'deletedAt'],
+    });
     if (!row) return notFound();
     const hidden = await takenDown(row);
     if (hidden && !can(await currentUser(request), 'moderation.seeHidden')) return notFound();

@@ -12,7 +12,10 @@ import { deleteObject, getObject, isObjectStoreUnavailable, putObject, S3_HANDLE
  * S3-compatible object storage instead (lib/photos/s3.ts); scratch files stay local.
  */
 export function uploadRoot(): string {
-  return path.resolve(/* turbopackIgnore: true */ process.env.UPLOAD_DIR || path.join(/* turbopackIgnore: true */ process.cwd(), '.data', 'uploads'));
+  return path.resolve(
+    /* turbopackIgnore: true */ process.env.UPLOAD_DIR ||
+      path.join(/* turbopackIgnore: true */ process.cwd(), '.data', 'uploads'),
+  );
 }
 
 /** Scratch space for the incoming files of requests in flight; each request gets its own directory inside. */

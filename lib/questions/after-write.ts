@@ -48,7 +48,11 @@ function pageStale(path: string): void {
  * The page and counts as above, then search: the thread's documents, and a field log
  * entry's. `reindex: false` for a write search does not see (a flag that hid nothing).
  */
-export async function postsChanged(w: { questionId: number | null; fieldLogEntryId?: number | null; reindex?: boolean }): Promise<void> {
+export async function postsChanged(w: {
+  questionId: number | null;
+  fieldLogEntryId?: number | null;
+  reindex?: boolean;
+}): Promise<void> {
   threadChanged(w.questionId);
   if (w.reindex === false) return;
   if (w.questionId) await indexThread(w.questionId);

@@ -78,7 +78,10 @@ async function countOf(filter: ListFilter, where: WhereOptions): Promise<number>
 }
 
 /** Newest questions first, one page at a time (index questions_created_at_id), optionally filtered. */
-export async function listQuestions({ page, perPage }: Pagination, filter: ListFilter = { kind: 'newest' }): Promise<QuestionPage> {
+export async function listQuestions(
+  { page, perPage }: Pagination,
+  filter: ListFilter = { kind: 'newest' },
+): Promise<QuestionPage> {
   const { Question, User, Tag } = initModels();
   // hidden and deleted questions never appear in lists
   const where = { ...(await filterWhere(filter)), hiddenAt: null, deletedAt: null } as WhereOptions;

@@ -22,7 +22,8 @@ export const TEXT_LIMITS: Record<PostType, { body: [number, number]; title?: [nu
  * scheme://, mailto:, bare www. addresses (autolinked) and protocol-relative link
  * targets, in any letter case. Spam hides links in each of these forms.
  */
-const LINK = /\b[a-z][a-z0-9+.-]*:\/\/|\bmailto:|(?<![\w./@:-])www\.[a-z0-9-]+\.[a-z]|(?:\]\(\s*<?|^\s*\[[^\]\n]*\]:\s*<?)\/\//gim;
+const LINK =
+  /\b[a-z][a-z0-9+.-]*:\/\/|\bmailto:|(?<![\w./@:-])www\.[a-z0-9-]+\.[a-z]|(?:\]\(\s*<?|^\s*\[[^\]\n]*\]:\s*<?)\/\//gim;
 
 export function countLinks(text: string): number {
   return (text.match(LINK) ?? []).length;

@@ -33,7 +33,15 @@ async function tagIds(slugs: string[], transaction: Transaction) {
 
 export async function askQuestion(
   user: SessionUser,
-  input: { title: string; body: string; tags: string[]; siteSheet?: Record<string, string | undefined>; photoIds: string[]; guide?: string; fieldLogEntryId?: number },
+  input: {
+    title: string;
+    body: string;
+    tags: string[];
+    siteSheet?: Record<string, string | undefined>;
+    photoIds: string[];
+    guide?: string;
+    fieldLogEntryId?: number;
+  },
 ) {
   checkPostText(user, 'question', input);
   const siteSheet = validateSiteSheet(input.siteSheet);
@@ -41,20 +49,41 @@ export async function askQuestion(
   const write = getSequelize().transaction(async (transaction) => {
     const ids = await tagIds([...new Set(input.tags)], transaction);
     if (input.fieldLogEntryId !== undefined) {
-      const entry = await FieldLogEntry.findOne({ where: { id: input.fieldLogEntryId, hiddenAt: null, deletedAt: null }, attributes: ['id'], transaction });
+      const entry = await FieldLogEntry.findOne({
+        where: { id: input.fieldLogEntryId, hiddenAt: null, deletedAt: null },
+        attributes: ['id'],
+        transaction,
+      });
       if (!entry) throw new ForumError(422, 'fieldLogEntryId: no such field log entry', 'fieldLogEntryId');
     }
     const now = new Date();
     const q = await Question.create(
-      { authorId: user.id, title: input.title, body: input.body, answerCount: 0, fixedAnswerId: null, siteSheet, guideSlug: input.guide ?? null, fieldLogEntryId: input.fieldLogEntryId ?? null, lastActivityAt: now },
+      {
+        authorId: user.id,
+        title: input.title,
+        body: input.body,
+        answerCount: 0,
+        fixedAnswerId: null,
+        siteSheet,
+        guideSlug: input.guide ?? null,
+        fieldLogEntryId: input.fieldLogEntryId ?? null,
+        lastActivityAt: now,
+      },
       { transaction },
     );
-    await QuestionTag.bulkCreate(ids.map((tagId) => ({ questionId: q.id, tagId })), { transaction });
-    await Revision.create({ postType: 'question', postId: q.id, editorId: user.id, title: q.title, body: q.body }, { transaction });
+    await QuestionTag.bulkCreate(
+      ids.map((tagId) => ({ questionId: q.id, tagId })),
+      { transaction },
+    );
+    await Revision.create(
+      { postType: 'question', postId: q.id, editorId: user.id, title: q.title, body: q.body },
+      { transaction },
+    );
     await QuestionFollow.create({ questionId: q.id, userId: user.id }, { transaction });
     if (input.photoIds.length) {
       const n = await attachPhotos(input.photoIds, user.id, { questionId: q.id }, transaction);
-      if (n !== input.photoIds.length) throw new ForumError(422, 'photoIds: a photo is not yours or is already attached', 'photoIds');
+      if (n !== input.photoIds.length)
+        throw new ForumError(422, 'photoIds: a photo is not yours or is already attached', 'photoIds');
     }
     return q;
   });
@@ -75,7 +104,11 @@ async function writableQuestion(user: SessionUser, id: number, transaction: Tran
   return (await findWritablePost(user, 'question', id, { transaction, lock: 'question' })).question;
 }
 
-export async function editQuestion(user: SessionUser, id: number, input: { title: string; body: string; tags: string[]; siteSheet?: Record<string, string | undefined> }) {
+export async function editQuestion(
+  user: SessionUser,
+  id: number,
+  input: { title: string; body: string; tags: string[]; siteSheet?: Record<string, string | undefined> },
+) {
   const siteSheet = validateSiteSheet(input.siteSheet);
   const { QuestionTag, Revision } = initModels();
   const write = getSequelize().transaction(async (transaction) => {
@@ -86,14 +119,24 @@ export async function editQuestion(user: SessionUser, id: number, input: { title
     const ids = await tagIds([...new Set(input.tags)], transaction);
     await q.update({ title: input.title, body: input.body, siteSheet }, { transaction });
     await QuestionTag.destroy({ where: { questionId: id }, transaction });
-    await QuestionTag.bulkCreate(ids.map((tagId) => ({ questionId: id, tagId })), { transaction });
-    await Revision.create({ postType: 'question', postId: id, editorId: user.id, title: input.title, body: input.body }, { transaction });
+    await QuestionTag.bulkCreate(
+      ids.map((tagId) => ({ questionId: id, tagId })),
+      { transaction },
+    );
+    await Revision.create(
+      { postType: 'question', postId: id, editorId: user.id, title: input.title, body: input.body },
+      { transaction },
+    );
     return q;
   });
   return thenIndex(write, (q) => q.id);
 }
 
-export async function postAnswer(user: SessionUser, questionId: number, input: { body: string; calculationId?: string; photoIds: string[] }) {
+export async function postAnswer(
+  user: SessionUser,
+  questionId: number,
+  input: { body: string; calculationId?: string; photoIds: string[] },
+) {
   checkPostText(user, 'answer', input);
   const { Answer, WorkedCalculation, Revision } = initModels();
   const write = getSequelize().transaction(async (transaction) => {
@@ -106,10 +149,14 @@ export async function postAnswer(user: SessionUser, questionId: number, input: {
       calculationId = calc.id;
     }
     const a = await Answer.create({ questionId, authorId: user.id, body: input.body, calculationId }, { transaction });
-    await Revision.create({ postType: 'answer', postId: a.id, editorId: user.id, title: null, body: a.body }, { transaction });
+    await Revision.create(
+      { postType: 'answer', postId: a.id, editorId: user.id, title: null, body: a.body },
+      { transaction },
+    );
     if (input.photoIds.length) {
       const n = await attachPhotos(input.photoIds, user.id, { answerId: a.id }, transaction);
-      if (n !== input.photoIds.length) throw new ForumError(422, 'photoIds: a photo is not yours or is already attached', 'photoIds');
+      if (n !== input.photoIds.length)
+        throw new ForumError(422, 'photoIds: a photo is not yours or is already attached', 'photoIds');
     }
     await q.update({ answerCount: q.answerCount + 1, lastActivityAt: new Date() }, { transaction });
     await notifyAnswer(transaction, { answerId: a.id, questionId, authorId: user.id, body: a.body });
@@ -135,7 +182,11 @@ export async function editPostBody(user: SessionUser, postType: 'answer' | 'repl
   return thenIndex(write, (post) => post.questionId);
 }
 
-export async function postReply(user: SessionUser, questionId: number, input: { body: string; answerId?: number; replyToId?: number }) {
+export async function postReply(
+  user: SessionUser,
+  questionId: number,
+  input: { body: string; answerId?: number; replyToId?: number },
+) {
   checkPostText(user, 'reply', input);
   const { Answer, Reply, Revision } = initModels();
   const write = getSequelize().transaction(async (transaction) => {
@@ -145,7 +196,12 @@ export async function postReply(user: SessionUser, questionId: number, input: { 
     let depth = 0;
     let replyToId: number | null = null;
     if (input.replyToId) {
-      const parent = namedInBody(user, await Reply.findOne({ where: { id: input.replyToId, questionId }, transaction }), 'replyToId', 'replyToId: no such reply in this thread');
+      const parent = namedInBody(
+        user,
+        await Reply.findOne({ where: { id: input.replyToId, questionId }, transaction }),
+        'replyToId',
+        'replyToId: no such reply in this thread',
+      );
       answerId = parent.answerId;
       // Nesting is capped; past the cap a reply joins its parent's level (flattened).
       if (parent.depth + 1 > MAX_REPLY_DEPTH) {
@@ -156,15 +212,38 @@ export async function postReply(user: SessionUser, questionId: number, input: { 
         replyToId = parent.id;
       }
     } else if (answerId) {
-      namedInBody(user, await Answer.findOne({ where: { id: answerId, questionId }, transaction }), 'answerId', 'answerId: no such answer on this question');
+      namedInBody(
+        user,
+        await Answer.findOne({ where: { id: answerId, questionId }, transaction }),
+        'answerId',
+        'answerId: no such answer on this question',
+      );
     }
     const r = await Reply.create(
-      { questionId, parentType: answerId ? 'answer' : 'question', answerId, replyToId, depth, authorId: user.id, body: input.body },
+      {
+        questionId,
+        parentType: answerId ? 'answer' : 'question',
+        answerId,
+        replyToId,
+        depth,
+        authorId: user.id,
+        body: input.body,
+      },
       { transaction },
     );
-    await Revision.create({ postType: 'reply', postId: r.id, editorId: user.id, title: null, body: r.body }, { transaction });
+    await Revision.create(
+      { postType: 'reply', postId: r.id, editorId: user.id, title: null, body: r.body },
+      { transaction },
+    );
     await q.update({ lastActivityAt: new Date() }, { transaction });
-    await notifyReply(transaction, { replyId: r.id, questionId, authorId: user.id, body: r.body, answerId, replyToId: input.replyToId ?? null });
+    await notifyReply(transaction, {
+      replyId: r.id,
+      questionId,
+      authorId: user.id,
+      body: r.body,
+      answerId,
+      replyToId: input.replyToId ?? null,
+    });
     return r;
   });
   return thenIndex(write, (r) => r.questionId);
@@ -197,11 +276,17 @@ export async function chooseFixed(user: SessionUser, questionId: number, answerI
     const q = await writableQuestion(user, questionId, transaction);
     if (!can(user, 'question.markFixed', q.authorId)) throw new ForumError(403, REFUSAL['question.markFixed']);
     if (answerId !== null) {
-      namedInBody(user, await Answer.findOne({ where: { id: answerId, questionId }, transaction }), 'answerId', 'answerId: no such answer on this question');
+      namedInBody(
+        user,
+        await Answer.findOne({ where: { id: answerId, questionId }, transaction }),
+        'answerId',
+        'answerId: no such answer on this question',
+      );
     }
     const before = q.fixedAnswerId;
     await q.update({ fixedAnswerId: answerId }, { transaction });
-    if (answerId !== null && answerId !== before) await notifyFixed(transaction, { questionId, answerId, askerId: user.id });
+    if (answerId !== null && answerId !== before)
+      await notifyFixed(transaction, { questionId, answerId, askerId: user.id });
     return q;
   });
   return thenIndex(write, (q) => q.id);

@@ -86,9 +86,16 @@ const person = (u: { handle: string; displayName: string; role: string } | undef
 export async function loadThread(id: number, viewer: Actor | null): Promise<ThreadView> {
   const viewerId = viewer?.id ?? null;
   const seeHidden = can(viewer, 'moderation.seeHidden');
-  const { Question, Answer, Reply, User, Tag, WorkedCalculation, Photo, HelpfulMark, QuestionFollow, Revision, Flag } = initModels();
+  const { Question, Answer, Reply, User, Tag, WorkedCalculation, Photo, HelpfulMark, QuestionFollow, Revision, Flag } =
+    initModels();
   // hidden and deleted photos are left out for everyone but moderators, like posts
-  const photoInclude = { model: Photo, as: 'photos', attributes: ['id', 'publicId', 'width', 'height', 'alt', 'hiddenAt', 'deletedAt'], required: false, ...(seeHidden ? {} : { where: { hiddenAt: null, deletedAt: null } }) };
+  const photoInclude = {
+    model: Photo,
+    as: 'photos',
+    attributes: ['id', 'publicId', 'width', 'height', 'alt', 'hiddenAt', 'deletedAt'],
+    required: false,
+    ...(seeHidden ? {} : { where: { hiddenAt: null, deletedAt: null } }),
+  };
   const q = await Question.findByPk(id, {
     include: [
       { model: User, as: 'author', attributes: ['id', 'handle', 'displayName', 'role'] },
@@ -108,7 +115,14 @@ export async function loadThread(id: number, viewer: Actor | null): Promise<Thre
         photoInclude,
       ],
     }),
-    Reply.findAll({ where: { questionId: id, ...visible }, include: [{ model: User, as: 'author', attributes: ['handle', 'displayName', 'role'] }], order: [['createdAt', 'ASC'], ['id', 'ASC']] }),
+    Reply.findAll({
+      where: { questionId: id, ...visible },
+      include: [{ model: User, as: 'author', attributes: ['handle', 'displayName', 'role'] }],
+      order: [
+        ['createdAt', 'ASC'],
+        ['id', 'ASC'],
+      ],
+    }),
     viewerId ? QuestionFollow.findOne({ where: { questionId: id, userId: viewerId } }) : Promise.resolve(null),
   ]);
   // Every per-post lookup below is for this thread's posts only.
@@ -120,9 +134,14 @@ export async function loadThread(id: number, viewer: Actor | null): Promise<Thre
   const [revisionCounts, marks, unsafeRows] = await Promise.all([
     // more than one revision means the post was edited
     Revision.count({ where: { [Op.or]: thisThread }, group: ['postType', 'postId'] }),
-    viewerId ? HelpfulMark.findAll({ where: { userId: viewerId, [Op.or]: thisThread }, attributes: ['postType', 'postId'] }) : Promise.resolve([]),
+    viewerId
+      ? HelpfulMark.findAll({ where: { userId: viewerId, [Op.or]: thisThread }, attributes: ['postType', 'postId'] })
+      : Promise.resolve([]),
     // an open "unsafe advice" flag shows readers a caution until a moderator reviews it
-    Flag.findAll({ where: { status: 'open', reason: 'unsafe', [Op.or]: thisThread }, attributes: ['postType', 'postId'] }),
+    Flag.findAll({
+      where: { status: 'open', reason: 'unsafe', [Op.or]: thisThread },
+      attributes: ['postType', 'postId'],
+    }),
   ]);
   const unsafe = new Set(unsafeRows.map((f) => `${f.postType}:${f.postId}`));
   const modState = (t: string, p: { id: number; hiddenAt?: Date | null; deletedAt?: Date | null }) => ({
@@ -131,14 +150,42 @@ export async function loadThread(id: number, viewer: Actor | null): Promise<Thre
     deletedAt: p.deletedAt?.toISOString() ?? null,
   });
   const marked = new Set(marks.map((m) => `${m.postType}:${m.postId}`));
-  const edits = new Map((revisionCounts as unknown as { postType: string; postId: number; count: number }[]).map((r) => [`${r.postType}:${r.postId}`, Number(r.count)]));
+  const edits = new Map(
+    (revisionCounts as unknown as { postType: string; postId: number; count: number }[]).map((r) => [
+      `${r.postType}:${r.postId}`,
+      Number(r.count),
+    ]),
+  );
   const edited = (t: string, pid: number) => (edits.get(`${t}:${pid}`) ?? 1) > 1;
-  const photoView = (ps: { id: number; publicId: string; width: number; height: number; alt: string | null; hiddenAt: Date | null; deletedAt: Date | null }[] | undefined) =>
-    (ps ?? []).map((p) => ({ id: p.publicId, ref: p.id, width: p.width, height: p.height, alt: p.alt, hidden: !!(p.hiddenAt || p.deletedAt) }));
+  const photoView = (
+    ps:
+      | {
+          id: number;
+          publicId: string;
+          width: number;
+          height: number;
+          alt: string | null;
+          hiddenAt: Date | null;
+          deletedAt: Date | null;
+        }[]
+      | undefined,
+  ) =>
+    (ps ?? []).map((p) => ({
+      id: p.publicId,
+      ref: p.id,
+      width: p.width,
+      height: p.height,
+      alt: p.alt,
+      hidden: !!(p.hiddenAt || p.deletedAt),
+    }));
 
   const answerViews: AnswerView[] = answers
     .map((a) => {
-      const calc = (a as unknown as { calculation?: { publicId: string; tool: string; title: string | null; inputs: Record<string, string> } }).calculation;
+      const calc = (
+        a as unknown as {
+          calculation?: { publicId: string; tool: string; title: string | null; inputs: Record<string, string> };
+        }
+      ).calculation;
       return {
         id: a.id,
         author: person(a.author),
@@ -153,7 +200,10 @@ export async function loadThread(id: number, viewer: Actor | null): Promise<Thre
         ...modState('answer', a),
       };
     })
-    .sort((x, y) => Number(y.fixed) - Number(x.fixed) || y.helpfulCount - x.helpfulCount || x.createdAt.localeCompare(y.createdAt));
+    .sort(
+      (x, y) =>
+        Number(y.fixed) - Number(x.fixed) || y.helpfulCount - x.helpfulCount || x.createdAt.localeCompare(y.createdAt),
+    );
 
   return {
     id: q.id,
@@ -201,7 +251,16 @@ export async function listRevisions(viewer: Actor | null, questionId: number, po
   const rows = await Revision.findAll({
     where: { postType, postId },
     include: [{ model: User, as: 'editor', attributes: ['handle', 'displayName'] }],
-    order: [['createdAt', 'ASC'], ['id', 'ASC']],
+    order: [
+      ['createdAt', 'ASC'],
+      ['id', 'ASC'],
+    ],
   });
-  return rows.map((r) => ({ id: r.id, title: r.title, body: r.body, editor: r.editor?.displayName ?? 'unknown', at: r.createdAt.toISOString() }));
+  return rows.map((r) => ({
+    id: r.id,
+    title: r.title,
+    body: r.body,
+    editor: r.editor?.displayName ?? 'unknown',
+    at: r.createdAt.toISOString(),
+  }));
 }

@@ -49,7 +49,8 @@ export async function findVisiblePost(
   const { Question, Answer, Reply } = initModels();
   const { transaction } = opts;
   const field = opts.field ?? (postType === 'question' ? 'id' : 'postId');
-  const lockFor = (what: 'question' | 'post') => (transaction && opts.lock === what ? transaction.LOCK.UPDATE : undefined);
+  const lockFor = (what: 'question' | 'post') =>
+    transaction && opts.lock === what ? transaction.LOCK.UPDATE : undefined;
   let post: Question | Answer | Reply | null;
   let questionId: number;
   if (postType === 'question') {
@@ -59,10 +60,14 @@ export async function findVisiblePost(
   } else {
     const found = { transaction, lock: lockFor('post') };
     post = postType === 'answer' ? await Answer.findByPk(postId, found) : await Reply.findByPk(postId, found);
-    if (!post || (opts.questionId !== undefined && post.questionId !== opts.questionId)) throw notFound(postType, field);
+    if (!post || (opts.questionId !== undefined && post.questionId !== opts.questionId))
+      throw notFound(postType, field);
     questionId = post.questionId as number;
   }
-  const question = await Question.findByPk(questionId, { transaction, lock: postType === 'question' ? (lockFor('question') ?? lockFor('post')) : lockFor('question') });
+  const question = await Question.findByPk(questionId, {
+    transaction,
+    lock: postType === 'question' ? (lockFor('question') ?? lockFor('post')) : lockFor('question'),
+  });
   if (!question) throw notFound(postType, field);
   const takenDown = isTakenDown(question) || isTakenDown(post);
   if (takenDown && !can(viewer, 'moderation.seeHidden')) throw notFound(postType, field);
@@ -95,6 +100,11 @@ export async function findWritablePost(
  */
 export function namedInBody<T extends Hideable>(user: Actor, post: T | null, field: string, noSuch: string): T {
   if (!post || (isTakenDown(post) && !can(user, 'moderation.seeHidden'))) throw new ForumError(422, noSuch, field);
-  if (isTakenDown(post)) throw new ForumError(409, `${field}: that post is hidden or deleted: restore it before anyone writes to it.`, field);
+  if (isTakenDown(post))
+    throw new ForumError(
+      409,
+      `${field}: that post is hidden or deleted: restore it before anyone writes to it.`,
+      field,
+    );
   return post;
 }

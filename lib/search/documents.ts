@@ -55,7 +55,11 @@ export function mdxToText(mdx: string): string {
 /** A guide cut at its h2/h3 headings; anchors as rehype-slug makes them (github-slugger). */
 export function guideSections(guide: GuideFile): SearchDoc[] {
   const slugger = new GithubSlugger();
-  let current: { heading: string | null; anchor: string | null; lines: string[] } = { heading: null, anchor: null, lines: [] };
+  let current: { heading: string | null; anchor: string | null; lines: string[] } = {
+    heading: null,
+    anchor: null,
+    lines: [],
+  };
   const sections = [current];
   let inFence = false;
   for (const line of guide.body.split('\n')) {
@@ -170,7 +174,11 @@ export async function threadDocs(questionIds: number[]): Promise<SearchDoc[]> {
   if (questionIds.length === 0) return [];
   const { Question, Answer, Reply, Tag } = initModels();
   const [questions, answers, replies] = await Promise.all([
-    Question.findAll({ attributes: Q_ATTRS, where: { id: { [Op.in]: questionIds } }, include: [{ model: Tag, as: 'tags', attributes: ['slug'], through: { attributes: [] } }] }),
+    Question.findAll({
+      attributes: Q_ATTRS,
+      where: { id: { [Op.in]: questionIds } },
+      include: [{ model: Tag, as: 'tags', attributes: ['slug'], through: { attributes: [] } }],
+    }),
     Answer.findAll({ attributes: P_ATTRS, where: { questionId: { [Op.in]: questionIds } }, raw: true }),
     Reply.findAll({ attributes: P_ATTRS, where: { questionId: { [Op.in]: questionIds } }, raw: true }),
   ]);
@@ -193,7 +201,23 @@ const ARRANGEMENT_WORDS: Record<string, string> = { single: '', parallel: ' in p
 export async function fieldLogDocs(ids?: number[]): Promise<SearchDoc[]> {
   const { FieldLogEntry } = initModels();
   const rows = await FieldLogEntry.findAll({
-    attributes: ['id', 'siteName', 'testedOn', 'pumpType', 'pumpSize', 'pumpCount', 'arrangement', 'driveMaterial', 'driveFlowMethod', 'driveFlowHow', 'wasteValveSetting', 'notes', 'typed', 'hiddenAt', 'deletedAt'],
+    attributes: [
+      'id',
+      'siteName',
+      'testedOn',
+      'pumpType',
+      'pumpSize',
+      'pumpCount',
+      'arrangement',
+      'driveMaterial',
+      'driveFlowMethod',
+      'driveFlowHow',
+      'wasteValveSetting',
+      'notes',
+      'typed',
+      'hiddenAt',
+      'deletedAt',
+    ],
     where: ids ? { id: { [Op.in]: ids } } : {},
     order: [['id', 'ASC']],
   });
@@ -231,7 +255,15 @@ export async function* allThreadDocs(batch = 2000): AsyncGenerator<SearchDoc[]> 
   const { Question } = initModels();
   let after = 0;
   for (;;) {
-    const ids = (await Question.findAll({ attributes: ['id'], where: { id: { [Op.gt]: after } }, order: [['id', 'ASC']], limit: batch, raw: true })).map((r) => r.id);
+    const ids = (
+      await Question.findAll({
+        attributes: ['id'],
+        where: { id: { [Op.gt]: after } },
+        order: [['id', 'ASC']],
+        limit: batch,
+        raw: true,
+      })
+    ).map((r) => r.id);
     const last = ids.at(-1);
     if (last === undefined) return;
     yield await threadDocs(ids);

@@ -4,7 +4,8 @@ import type { SearchDoc } from './documents';
 import { CANDIDATES, passes, type EngineResult, type SearchEngine, type SearchFilters } from './engine';
 import { indexTerms } from './normalize';
 
-const newIndex = () => new Index({ tokenize: 'strict', resolution: 9, encode: (s: string) => s.split(' ').filter(Boolean) });
+const newIndex = () =>
+  new Index({ tokenize: 'strict', resolution: 9, encode: (s: string) => s.split(' ').filter(Boolean) });
 
 /** A scratch array's slot; grow() keeps every document's number inside, so the 0 is never used. */
 const at = (a: Float64Array, n: number): number => a[n] ?? 0;
@@ -126,7 +127,10 @@ export class FlexEngine implements SearchEngine {
     for (const [i, n] of touched.entries()) {
       // words ≤ 12 (× 10^6), head ≤ 12 (× 10^4), rarity ≤ 12 × 11.6 (× 50 < 10^4), earlier-ness ≤ 12 (× 3 < 50)
       const score =
-        at(words, n) * 1e6 + at(inHead, n) * 1e4 + Math.round(at(rarity, n) * 50) + Math.round((used.length - at(position, n)) * 3);
+        at(words, n) * 1e6 +
+        at(inHead, n) * 1e4 +
+        Math.round(at(rarity, n) * 50) +
+        Math.round((used.length - at(position, n)) * 3);
       keys[i] = -(score * SHIFT) + i;
     }
     keys.sort();

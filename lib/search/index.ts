@@ -27,7 +27,9 @@ interface State {
 const g = globalThis as unknown as { __clackwaterSearch?: State };
 
 export function createEngine(env: Record<string, string | undefined> = process.env): SearchEngine {
-  return env.MEILISEARCH_URL ? new MeiliEngine(env.MEILISEARCH_URL, env.MEILISEARCH_KEY || undefined, env.MEILISEARCH_INDEX || 'clackwater') : new FlexEngine();
+  return env.MEILISEARCH_URL
+    ? new MeiliEngine(env.MEILISEARCH_URL, env.MEILISEARCH_KEY || undefined, env.MEILISEARCH_INDEX || 'clackwater')
+    : new FlexEngine();
 }
 
 function state(): State {
@@ -41,7 +43,12 @@ function state(): State {
  */
 export function setSearchEngine(engine: SearchEngine, opts: { filled?: boolean } = {}) {
   const now = Date.now();
-  g.__clackwaterSearch = { engine, built: opts.filled ? Promise.resolve() : null, builtAt: opts.filled ? now : 0, checkedAt: now };
+  g.__clackwaterSearch = {
+    engine,
+    built: opts.filled ? Promise.resolve() : null,
+    builtAt: opts.filled ? now : 0,
+    checkedAt: now,
+  };
 }
 
 export function searchEngine(): SearchEngine {
@@ -142,14 +149,20 @@ export async function indexFieldLog(ids: number[]): Promise<void> {
     await s.built;
     await s.engine.upsert(await fieldLogDocs(ids));
   } catch (err) {
-    console.error(`search: could not index field log entries ${ids.join(', ')}:`, err instanceof Error ? err.message : err);
+    console.error(
+      `search: could not index field log entries ${ids.join(', ')}:`,
+      err instanceof Error ? err.message : err,
+    );
   }
 }
 
 /** The search engine (a Meilisearch server) did not answer: a 503 with a plain message. */
 export class SearchUnavailableError extends Error {
   constructor(cause: unknown) {
-    super('Search is not answering just now. Please try again in a minute; guides and questions can still be browsed.', { cause });
+    super(
+      'Search is not answering just now. Please try again in a minute; guides and questions can still be browsed.',
+      { cause },
+    );
   }
 }
 
@@ -186,7 +199,13 @@ export interface SearchResult {
 export async function search(params: SearchParams, viewer: { seeHidden: boolean }): Promise<SearchResult> {
   const t0 = performance.now();
   const terms = queryTerms(params.q);
-  const filters: SearchFilters = { kinds: params.kinds, tag: params.tag, solved: params.solved, level: params.level, includeHidden: viewer.seeHidden };
+  const filters: SearchFilters = {
+    kinds: params.kinds,
+    tag: params.tag,
+    solved: params.solved,
+    level: params.level,
+    includeHidden: viewer.seeHidden,
+  };
   let found: Awaited<ReturnType<SearchEngine['search']>>;
   try {
     await ensureIndex();

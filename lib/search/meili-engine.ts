@@ -53,8 +53,14 @@ export class MeiliEngine implements SearchEngine {
   async upsert(docs: SearchDoc[]) {
     if (docs.length === 0) return;
     await this.ready();
-    const task = await this.index().addDocuments(docs.map((d) => ({ ...d, headTerms: indexTerms(d.head).join(' '), bodyTerms: indexTerms(d.text).join(' ') })), { primaryKey: 'id' }).waitTask(WAIT);
-    if (task.status !== 'succeeded') throw new Error(`Meilisearch could not index documents: ${task.error?.message ?? task.status}`);
+    const task = await this.index()
+      .addDocuments(
+        docs.map((d) => ({ ...d, headTerms: indexTerms(d.head).join(' '), bodyTerms: indexTerms(d.text).join(' ') })),
+        { primaryKey: 'id' },
+      )
+      .waitTask(WAIT);
+    if (task.status !== 'succeeded')
+      throw new Error(`Meilisearch could not index documents: ${task.error?.message ?? task.status}`);
   }
 
   async remove(ids: string[]) {
@@ -90,7 +96,20 @@ export class MeiliEngine implements SearchEngine {
       limit: Math.min(limit, CANDIDATES),
       offset,
       matchingStrategy: 'last',
-      attributesToRetrieve: ['id', 'kind', 'title', 'head', 'url', 'text', 'tags', 'solved', 'level', 'hidden', 'date', 'threadId'],
+      attributesToRetrieve: [
+        'id',
+        'kind',
+        'title',
+        'head',
+        'url',
+        'text',
+        'tags',
+        'solved',
+        'level',
+        'hidden',
+        'date',
+        'threadId',
+      ],
     });
     return { docs: res.hits as SearchDoc[], total: Math.min(res.estimatedTotalHits ?? res.hits.length, CANDIDATES) };
   }

@@ -43,7 +43,15 @@ export const NOMINAL_SIZES: ReadonlyArray<{ inches: number; dn: number }> = [
   { inches: 8, dn: 200 },
 ];
 
-const VULGAR: Record<string, number> = { '¼': 0.25, '½': 0.5, '¾': 0.75, '⅛': 0.125, '⅜': 0.375, '⅝': 0.625, '⅞': 0.875 };
+const VULGAR: Record<string, number> = {
+  '¼': 0.25,
+  '½': 0.5,
+  '¾': 0.75,
+  '⅛': 0.125,
+  '⅜': 0.375,
+  '⅝': 0.625,
+  '⅞': 0.875,
+};
 
 function dnForInches(inches: number): number | null {
   const hit = NOMINAL_SIZES.find((s) => Math.abs(inches - s.inches) / s.inches <= 0.03);
@@ -71,13 +79,43 @@ function quantityToken(kind: string, si: number, start: number, end: number): To
 }
 
 /** metres per unit */
-const LENGTH: Record<string, number> = { m: 1, metre: 1, metres: 1, meter: 1, meters: 1, ft: 0.3048, feet: 0.3048, foot: 0.3048, "'": 0.3048, cm: 0.01, km: 1000, yd: 0.9144, yards: 0.9144 };
+const LENGTH: Record<string, number> = {
+  m: 1,
+  metre: 1,
+  metres: 1,
+  meter: 1,
+  meters: 1,
+  ft: 0.3048,
+  feet: 0.3048,
+  foot: 0.3048,
+  "'": 0.3048,
+  cm: 0.01,
+  km: 1000,
+  yd: 0.9144,
+  yards: 0.9144,
+};
 /** litres per minute per unit (US gallon, 3.785411784 L, as the rest of the app) */
 const GAL = 3.785411784;
 const FLOW: Record<string, number> = {
-  'l/min': 1, lpm: 1, 'litres per minute': 1, 'liters per minute': 1, 'l/s': 60, 'l/h': 1 / 60, lph: 1 / 60, 'l/day': 1 / 1440, 'l/d': 1 / 1440,
-  gpm: GAL, 'gal/min': GAL, 'gallons per minute': GAL, 'gallon per minute': GAL, gph: GAL / 60, 'gal/h': GAL / 60, 'gallons per hour': GAL / 60,
-  gpd: GAL / 1440, 'gal/day': GAL / 1440, 'gallons per day': GAL / 1440,
+  'l/min': 1,
+  lpm: 1,
+  'litres per minute': 1,
+  'liters per minute': 1,
+  'l/s': 60,
+  'l/h': 1 / 60,
+  lph: 1 / 60,
+  'l/day': 1 / 1440,
+  'l/d': 1 / 1440,
+  gpm: GAL,
+  'gal/min': GAL,
+  'gallons per minute': GAL,
+  'gallon per minute': GAL,
+  gph: GAL / 60,
+  'gal/h': GAL / 60,
+  'gallons per hour': GAL / 60,
+  gpd: GAL / 1440,
+  'gal/day': GAL / 1440,
+  'gallons per day': GAL / 1440,
 };
 /** kilopascals per unit (1 psi = 6.894757 kPa, NIST SP 811) */
 const PRESSURE: Record<string, number> = { psi: 6.894757, kpa: 1, bar: 100 };
@@ -99,32 +137,55 @@ const num = (s: string) => Number(s);
 
 const RULES: Rule[] = [
   // DN20, DN 20
-  { re: /\bdn\s?(\d{1,3})\b/y, make: (m) => (NOMINAL_SIZES.some((s) => s.dn === Number(m[1])) ? tok(`dn${Number(m[1])}`, m) : null) },
+  {
+    re: /\bdn\s?(\d{1,3})\b/y,
+    make: (m) => (NOMINAL_SIZES.some((s) => s.dn === Number(m[1])) ? tok(`dn${Number(m[1])}`, m) : null),
+  },
   // 1 1/4", 1-1/4 inch, 1¼", ¾ inch
-  { re: new RegExp(String.raw`(?:(\d+)[\s-]+)?(\d)\/(\d{1,2})${INCH}`, 'y'), make: (m) => {
-    const [, whole, top, bottom] = m;
-    return top && bottom ? sizeOrLength((whole ? Number(whole) : 0) + Number(top) / Number(bottom), m) : null;
-  } },
-  { re: new RegExp(String.raw`(\d+)?\s?([¼½¾⅛⅜⅝⅞])${INCH}`, 'y'), make: (m) => {
-    const [, whole, vulgar] = m;
-    const fraction = vulgar && VULGAR[vulgar];
-    return fraction ? sizeOrLength((whole ? Number(whole) : 0) + fraction, m) : null;
-  } },
+  {
+    re: new RegExp(String.raw`(?:(\d+)[\s-]+)?(\d)\/(\d{1,2})${INCH}`, 'y'),
+    make: (m) => {
+      const [, whole, top, bottom] = m;
+      return top && bottom ? sizeOrLength((whole ? Number(whole) : 0) + Number(top) / Number(bottom), m) : null;
+    },
+  },
+  {
+    re: new RegExp(String.raw`(\d+)?\s?([¼½¾⅛⅜⅝⅞])${INCH}`, 'y'),
+    make: (m) => {
+      const [, whole, vulgar] = m;
+      const fraction = vulgar && VULGAR[vulgar];
+      return fraction ? sizeOrLength((whole ? Number(whole) : 0) + fraction, m) : null;
+    },
+  },
   // 0.75 in, 1-inch, 2"
   { re: new RegExp(String.raw`${NUM}${INCH}`, 'y'), make: (m) => (m[1] ? sizeOrLength(num(m[1]), m) : null) },
   // 19 mm
-  { re: new RegExp(String.raw`${NUM}\s?mm\b`, 'y'), make: (m) => {
-    if (!m[1]) return null;
-    const dn = dnForMillimetres(num(m[1]));
-    return dn ? tok(`dn${dn}`, m) : quantityToken('len', num(m[1]) / 1000, m.index, m.index + m[0].length);
-  } },
-  { re: new RegExp(String.raw`${NUM}\s?(${unitAlt(FLOW)})(?![a-z])`, 'y'), make: (m) => withUnit('flow', FLOW, m, (u) => u.replace(/\s+/g, ' ')) },
-  { re: new RegExp(String.raw`${NUM}\s?(${unitAlt(PRESSURE)})(?![a-z])`, 'y'), make: (m) => withUnit('kpa', PRESSURE, m) },
+  {
+    re: new RegExp(String.raw`${NUM}\s?mm\b`, 'y'),
+    make: (m) => {
+      if (!m[1]) return null;
+      const dn = dnForMillimetres(num(m[1]));
+      return dn ? tok(`dn${dn}`, m) : quantityToken('len', num(m[1]) / 1000, m.index, m.index + m[0].length);
+    },
+  },
+  {
+    re: new RegExp(String.raw`${NUM}\s?(${unitAlt(FLOW)})(?![a-z])`, 'y'),
+    make: (m) => withUnit('flow', FLOW, m, (u) => u.replace(/\s+/g, ' ')),
+  },
+  {
+    re: new RegExp(String.raw`${NUM}\s?(${unitAlt(PRESSURE)})(?![a-z])`, 'y'),
+    make: (m) => withUnit('kpa', PRESSURE, m),
+  },
   { re: new RegExp(String.raw`${NUM}\s?(${unitAlt(LENGTH)})(?![a-z])`, 'y'), make: (m) => withUnit('len', LENGTH, m) },
 ];
 
 /** A number and a unit from `units` (groups 1 and 2), as a quantity token in SI; null when the unit is not in the table. */
-function withUnit(kind: string, units: Record<string, number>, m: RegExpExecArray, key = (u: string) => u): Token | null {
+function withUnit(
+  kind: string,
+  units: Record<string, number>,
+  m: RegExpExecArray,
+  key = (u: string) => u,
+): Token | null {
   const [, value, unit] = m;
   if (!value || !unit) return null;
   const factor = units[key(unit.toLowerCase())];
@@ -158,7 +219,9 @@ const SYNONYM_RE = new RegExp(
 );
 /** the first word of each synonym phrase, to try the phrase rule only where it can match */
 const SYNONYM_FIRST_WORDS = new Set(SYNONYMS.flatMap((s) => s.phrases.map((p) => p.split(/[-\s]/)[0])));
-const SYNONYM_OF = new Map<string, string>(SYNONYMS.flatMap((s) => s.phrases.map((p) => [p.replace(/[-\s]+/g, ' '), s.term] as const)));
+const SYNONYM_OF = new Map<string, string>(
+  SYNONYMS.flatMap((s) => s.phrases.map((p) => [p.replace(/[-\s]+/g, ' '), s.term] as const)),
+);
 
 /** flexsearch's English stop-word list */
 const STOP_WORDS = english.filter as Set<string>;
@@ -202,7 +265,8 @@ export function tokenize(input: string): Token[] {
         SYNONYM_RE.lastIndex = i;
         const m = SYNONYM_RE.exec(text);
         const phrase = m?.[1];
-        if (m && phrase) matched = { term: SYNONYM_OF.get(phrase.replace(/[-\s]+/g, ' ')) ?? phrase, start: i, end: i + m[0].length };
+        if (m && phrase)
+          matched = { term: SYNONYM_OF.get(phrase.replace(/[-\s]+/g, ' ')) ?? phrase, start: i, end: i + m[0].length };
       }
     }
     if (matched) {
@@ -215,7 +279,8 @@ export function tokenize(input: string): Token[] {
       continue;
     }
     const word = w[0].replace(/['’]/g, '');
-    if (!STOP_WORDS.has(word) && word.length > 0) out.push({ term: /^\d/.test(word) ? word : stemmer(word), start: i, end: i + w[0].length });
+    if (!STOP_WORDS.has(word) && word.length > 0)
+      out.push({ term: /^\d/.test(word) ? word : stemmer(word), start: i, end: i + w[0].length });
     i += w[0].length;
   }
   return out;

@@ -11,12 +11,24 @@ export interface SimilarQuestion {
  * Questions like the one being asked, from search: its title, tags, fall and lift
  * (heights match across units), most alike first; the ones that were fixed say so.
  */
-export async function similarQuestions(input: { title?: string; tags: string[]; fall?: string; lift?: string }, limit = 5): Promise<SimilarQuestion[]> {
-  const q = [input.title, ...input.tags.map((t) => t.replace(/-/g, ' ')), input.fall && `fall ${input.fall}`, input.lift && `lift ${input.lift}`]
+export async function similarQuestions(
+  input: { title?: string; tags: string[]; fall?: string; lift?: string },
+  limit = 5,
+): Promise<SimilarQuestion[]> {
+  const q = [
+    input.title,
+    ...input.tags.map((t) => t.replace(/-/g, ' ')),
+    input.fall && `fall ${input.fall}`,
+    input.lift && `lift ${input.lift}`,
+  ]
     .filter(Boolean)
     .join(' ')
     .slice(0, 200);
   if (!q.trim()) return [];
   const { items } = await search({ q, kinds: ['question'], limit, offset: 0 }, { seeHidden: false });
-  return items.map((i) => ({ id: Number(i.id.replace('question-', '')), title: plain(i.title), fixed: Boolean(i.solved) }));
+  return items.map((i) => ({
+    id: Number(i.id.replace('question-', '')),
+    title: plain(i.title),
+    fixed: Boolean(i.solved),
+  }));
 }

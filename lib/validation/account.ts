@@ -17,14 +17,57 @@ const email = z
  */
 
 /** Invisible characters that only disguise: format and control characters, fillers that render blank. */
-const INVISIBLE = /[\p{Cc}\p{Cf}\p{Zl}\p{Zp}\u034F\u115F\u1160\u17B4\u17B5\u180E\u2800\u3164\uFFA0\uFE00-\uFE0F]|[\u{E0100}-\u{E01EF}]/gu;
+const INVISIBLE =
+  /[\p{Cc}\p{Cf}\p{Zl}\p{Zp}\u034F\u115F\u1160\u17B4\u17B5\u180E\u2800\u3164\uFFA0\uFE00-\uFE0F]|[\u{E0100}-\u{E01EF}]/gu;
 /** Joiners that scripts and emoji need between visible characters; every other invisible character is dropped. */
 const JOINERS = new Set(['\u200C', '\u200D']);
 
 const LOOK_ALIKE: Record<string, string> = {
-  а: 'a', в: 'b', е: 'e', ё: 'e', к: 'k', м: 'm', н: 'h', о: 'o', р: 'p', с: 'c', т: 't', у: 'y', х: 'x', і: 'i', ї: 'i', ј: 'j', ѕ: 's', ԁ: 'd', ԛ: 'q', ԝ: 'w', ɑ: 'a', ı: 'i',
-  α: 'a', β: 'b', ε: 'e', η: 'n', ι: 'i', κ: 'k', ν: 'v', ο: 'o', ρ: 'p', τ: 't', υ: 'u', χ: 'x', μ: 'u',
-  '0': 'o', '1': 'i', '3': 'e', '4': 'a', '5': 's', '7': 't', '@': 'a', $: 's', '|': 'l', '!': 'i',
+  а: 'a',
+  в: 'b',
+  е: 'e',
+  ё: 'e',
+  к: 'k',
+  м: 'm',
+  н: 'h',
+  о: 'o',
+  р: 'p',
+  с: 'c',
+  т: 't',
+  у: 'y',
+  х: 'x',
+  і: 'i',
+  ї: 'i',
+  ј: 'j',
+  ѕ: 's',
+  ԁ: 'd',
+  ԛ: 'q',
+  ԝ: 'w',
+  ɑ: 'a',
+  ı: 'i',
+  α: 'a',
+  β: 'b',
+  ε: 'e',
+  η: 'n',
+  ι: 'i',
+  κ: 'k',
+  ν: 'v',
+  ο: 'o',
+  ρ: 'p',
+  τ: 't',
+  υ: 'u',
+  χ: 'x',
+  μ: 'u',
+  '0': 'o',
+  '1': 'i',
+  '3': 'e',
+  '4': 'a',
+  '5': 's',
+  '7': 't',
+  '@': 'a',
+  $: 's',
+  '|': 'l',
+  '!': 'i',
 };
 
 type Role = 'member' | 'expert' | 'moderator' | 'admin';
@@ -49,7 +92,13 @@ export function cleanDisplayName(raw: string): string {
   return chars
     .filter((c, i) => {
       if (!c.match(INVISIBLE)) return true;
-      return JOINERS.has(c) && i > 0 && i < chars.length - 1 && !chars[i - 1]?.match(INVISIBLE) && !chars[i + 1]?.match(INVISIBLE);
+      return (
+        JOINERS.has(c) &&
+        i > 0 &&
+        i < chars.length - 1 &&
+        !chars[i - 1]?.match(INVISIBLE) &&
+        !chars[i + 1]?.match(INVISIBLE)
+      );
     })
     .join('')
     .trim();
@@ -57,16 +106,13 @@ export function cleanDisplayName(raw: string): string {
 
 /** The name as the eye reads it, folded to plain lower-case letters for comparison. */
 function folded(name: string): string {
-  const plain = name
-    .normalize('NFKD')
-    .replace(/\p{M}/gu, '')
-    .replace(INVISIBLE, '')
-    .toLowerCase();
+  const plain = name.normalize('NFKD').replace(/\p{M}/gu, '').replace(INVISIBLE, '').toLowerCase();
   return [...plain].map((c) => LOOK_ALIKE[c] ?? c).join('');
 }
 
 /** "M o d", "a.d.m.i.n": runs of single letters with separators between them, each read as one word. */
-const spacedOut = (text: string) => (text.match(/(?<!\p{L})\p{L}(?:[\s._\-·*~/\\]+\p{L}(?!\p{L}))+/gu) ?? []).map((m) => m.replace(/[^\p{L}]/gu, ''));
+const spacedOut = (text: string) =>
+  (text.match(/(?<!\p{L})\p{L}(?:[\s._\-·*~/\\]+\p{L}(?!\p{L}))+/gu) ?? []).map((m) => m.replace(/[^\p{L}]/gu, ''));
 
 /** The first role word in a name that its holder's role does not carry, if any. */
 export function borrowedRoleWord(name: string, role: Role): string | undefined {
@@ -92,14 +138,26 @@ export function displayNameSchema(role: Role = 'member') {
   return z
     .string({ error: 'displayName is required' })
     .transform(cleanDisplayName)
-    .pipe(z.string().min(2, 'displayName must be at least 2 characters').max(80, 'displayName must be at most 80 characters'))
+    .pipe(
+      z
+        .string()
+        .min(2, 'displayName must be at least 2 characters')
+        .max(80, 'displayName must be at most 80 characters'),
+    )
     .superRefine((name, ctx) => {
       if (visibleCount(name) < 2 || !/[\p{L}\p{N}]/u.test(name)) {
-        ctx.addIssue({ code: 'custom', message: 'displayName must show at least 2 characters, with a letter or a digit among them' });
+        ctx.addIssue({
+          code: 'custom',
+          message: 'displayName must show at least 2 characters, with a letter or a digit among them',
+        });
         return;
       }
       const word = borrowedRoleWord(name, role);
-      if (word) ctx.addIssue({ code: 'custom', message: `displayName must not claim a role on Clackwater (it reads as “${word}”); badges show roles` });
+      if (word)
+        ctx.addIssue({
+          code: 'custom',
+          message: `displayName must not claim a role on Clackwater (it reads as “${word}”); badges show roles`,
+        });
     });
 }
 
@@ -115,6 +173,8 @@ export const signUpSchema = z.object({
 
 export const emailOnlySchema = z.object({ email });
 
-export const tokenSchema = z.object({ token: z.string({ error: 'token is required' }).min(20, 'token is not valid').max(100, 'token is not valid') });
+export const tokenSchema = z.object({
+  token: z.string({ error: 'token is required' }).min(20, 'token is not valid').max(100, 'token is not valid'),
+});
 
 export const newPasswordSchema = tokenSchema.extend({ password: z.string({ error: 'password is required' }) });

@@ -11,6 +11,11 @@ export const saveCalculationSchema = z.object({
       z.string().max(500, 'each input must be at most 500 characters').refine(isWellFormedText, BROKEN_TEXT_MESSAGE),
     )
     .refine((r) => Object.keys(r).length <= 40, 'at most 40 inputs'),
-  title: z.string().trim().max(160, 'title must be at most 160 characters').refine(isWellFormedText, BROKEN_TEXT_MESSAGE).optional(),
+  title: z
+    .string()
+    .trim()
+    .max(160, 'title must be at most 160 characters')
+    .refine(isWellFormedText, BROKEN_TEXT_MESSAGE)
+    .optional(),
 });
 export type SaveCalculation = z.output<typeof saveCalculationSchema>;

@@ -40,7 +40,11 @@ export const expertApplicationSchema = z.object({
   years: wholeNumber('years', 80),
   region: text('region', 2, 80),
   experience: text('experience', 20, 4000),
-  links: z.array(link, { error: 'links must be a list of web addresses' }).max(10, 'links can hold at most 10 addresses').optional().default([]),
+  links: z
+    .array(link, { error: 'links must be a list of web addresses' })
+    .max(10, 'links can hold at most 10 addresses')
+    .optional()
+    .default([]),
 });
 export type ExpertApplicationInput = z.output<typeof expertApplicationSchema>;
 

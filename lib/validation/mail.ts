@@ -5,7 +5,9 @@ import { DIGEST_FREQUENCIES } from '@/lib/vocabulary';
 export const mailSettingsSchema = z.object({
   digest: z.enum(DIGEST_FREQUENCIES, { message: `digest: one of ${DIGEST_FREQUENCIES.join(', ')}` }),
   tags: z
-    .array(z.string().regex(/^[a-z0-9-]{1,40}$/, 'tags: tag slugs such as drive-pipe'), { message: 'tags: a list of tag slugs' })
+    .array(z.string().regex(/^[a-z0-9-]{1,40}$/, 'tags: tag slugs such as drive-pipe'), {
+      message: 'tags: a list of tag slugs',
+    })
     .max(40, 'tags: at most 40')
     .default([]),
   notify: z.object(

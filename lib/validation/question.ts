@@ -28,16 +28,41 @@ export const SITE_SHEET_FIELDS = [
 export type SiteSheetField = (typeof SITE_SHEET_FIELDS)[number];
 
 export const siteSheetSchema = z
-  .partialRecord(z.enum(SITE_SHEET_FIELDS), z.string().trim().max(200, 'each site sheet value must be at most 200 characters').refine(isWellFormedText, BROKEN_TEXT_MESSAGE))
+  .partialRecord(
+    z.enum(SITE_SHEET_FIELDS),
+    z
+      .string()
+      .trim()
+      .max(200, 'each site sheet value must be at most 200 characters')
+      .refine(isWellFormedText, BROKEN_TEXT_MESSAGE),
+  )
   .optional();
 
 export const askQuestionSchema = z.object({
-  title: z.string({ error: 'title is required' }).trim().min(10, 'title must be at least 10 characters').max(160, 'title must be at most 160 characters'),
-  body: z.string({ error: 'body is required' }).trim().min(20, 'body must be at least 20 characters').max(20_000, 'body must be at most 20,000 characters'),
-  tags: z.array(z.string().regex(/^[a-z0-9-]{2,40}$/, 'tags must be tag names like drive-pipe')).min(1, 'tags: choose at least one').max(5, 'tags: at most five'),
+  title: z
+    .string({ error: 'title is required' })
+    .trim()
+    .min(10, 'title must be at least 10 characters')
+    .max(160, 'title must be at most 160 characters'),
+  body: z
+    .string({ error: 'body is required' })
+    .trim()
+    .min(20, 'body must be at least 20 characters')
+    .max(20_000, 'body must be at most 20,000 characters'),
+  tags: z
+    .array(z.string().regex(/^[a-z0-9-]{2,40}$/, 'tags must be tag names like drive-pipe'))
+    .min(1, 'tags: choose at least one')
+    .max(5, 'tags: at most five'),
   siteSheet: siteSheetSchema,
-  photoIds: z.array(z.string().regex(/^[0-9A-Za-z]{10,24}$/, 'photoIds must be ids from the upload')).max(6, 'at most six photos').default([]),
-  guide: z.string().regex(/^[a-z0-9-]+$/).max(80).optional(),
+  photoIds: z
+    .array(z.string().regex(/^[0-9A-Za-z]{10,24}$/, 'photoIds must be ids from the upload'))
+    .max(6, 'at most six photos')
+    .default([]),
+  guide: z
+    .string()
+    .regex(/^[a-z0-9-]+$/)
+    .max(80)
+    .optional(),
   /** the field log entry the site sheet was filled from */
   fieldLogEntryId: z.number({ error: 'fieldLogEntryId must be a field log entry number' }).int().positive().optional(),
 });
@@ -46,17 +71,35 @@ export type AskQuestion = z.input<typeof askQuestionSchema>;
 export const editQuestionSchema = askQuestionSchema.pick({ title: true, body: true, tags: true, siteSheet: true });
 
 export const answerSchema = z.object({
-  body: z.string({ error: 'body is required' }).trim().min(20, 'body must be at least 20 characters').max(20_000, 'body must be at most 20,000 characters'),
-  calculationId: z.string().regex(/^[0-9A-Za-z]{6,16}$/, 'calculationId must be a worked calculation id').optional(),
-  photoIds: z.array(z.string().regex(/^[0-9A-Za-z]{10,24}$/)).max(6, 'at most six photos').default([]),
+  body: z
+    .string({ error: 'body is required' })
+    .trim()
+    .min(20, 'body must be at least 20 characters')
+    .max(20_000, 'body must be at most 20,000 characters'),
+  calculationId: z
+    .string()
+    .regex(/^[0-9A-Za-z]{6,16}$/, 'calculationId must be a worked calculation id')
+    .optional(),
+  photoIds: z
+    .array(z.string().regex(/^[0-9A-Za-z]{10,24}$/))
+    .max(6, 'at most six photos')
+    .default([]),
 });
 
 export const editBodySchema = z.object({
-  body: z.string({ error: 'body is required' }).trim().min(2, 'body must not be empty').max(20_000, 'body must be at most 20,000 characters'),
+  body: z
+    .string({ error: 'body is required' })
+    .trim()
+    .min(2, 'body must not be empty')
+    .max(20_000, 'body must be at most 20,000 characters'),
 });
 
 export const replySchema = z.object({
-  body: z.string({ error: 'body is required' }).trim().min(2, 'body must not be empty').max(5_000, 'body must be at most 5,000 characters'),
+  body: z
+    .string({ error: 'body is required' })
+    .trim()
+    .min(2, 'body must not be empty')
+    .max(5_000, 'body must be at most 5,000 characters'),
   answerId: z.number().int().positive().optional(),
   replyToId: z.number().int().positive().optional(),
 });

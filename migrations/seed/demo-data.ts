@@ -10,13 +10,55 @@ import type { CalculatorId } from '@/lib/calculators';
 export const DEMO_PASSWORD = 'lift-with-falling-water';
 
 export const demoUsers = [
-  { handle: 'ferncombe_tamsin', displayName: 'Tamsin at Ferncombe', email: 'tamsin@ferncombe.example', role: 'member', region: 'Linnet valley, hill country' },
-  { handle: 'highcrag_shepherd', displayName: 'Highcrag Shepherd', email: 'shepherd@highcrag.example', role: 'member', region: 'Highcrag, upper Linnet valley' },
-  { handle: 'sorrel_cabin', displayName: 'Sorrel Creek Cabin', email: 'cabin@sorrelcreek.example', role: 'member', region: 'Sorrel Creek headwaters' },
-  { handle: 'ironwheel_builds', displayName: 'Ironwheel Builds', email: 'builds@ironwheel.example', role: 'expert', region: 'Lower Linnet valley' },
-  { handle: 'quarry_lane_valves', displayName: 'Quarry Lane Valves', email: 'valves@quarrylane.example', role: 'expert', region: 'Fellside' },
-  { handle: 'moss_moderator', displayName: 'Moss (moderator)', email: 'moss@clackwater.example', role: 'moderator', region: null },
-  { handle: 'clack_admin', displayName: 'Clackwater admin', email: 'admin@clackwater.example', role: 'admin', region: null },
+  {
+    handle: 'ferncombe_tamsin',
+    displayName: 'Tamsin at Ferncombe',
+    email: 'tamsin@ferncombe.example',
+    role: 'member',
+    region: 'Linnet valley, hill country',
+  },
+  {
+    handle: 'highcrag_shepherd',
+    displayName: 'Highcrag Shepherd',
+    email: 'shepherd@highcrag.example',
+    role: 'member',
+    region: 'Highcrag, upper Linnet valley',
+  },
+  {
+    handle: 'sorrel_cabin',
+    displayName: 'Sorrel Creek Cabin',
+    email: 'cabin@sorrelcreek.example',
+    role: 'member',
+    region: 'Sorrel Creek headwaters',
+  },
+  {
+    handle: 'ironwheel_builds',
+    displayName: 'Ironwheel Builds',
+    email: 'builds@ironwheel.example',
+    role: 'expert',
+    region: 'Lower Linnet valley',
+  },
+  {
+    handle: 'quarry_lane_valves',
+    displayName: 'Quarry Lane Valves',
+    email: 'valves@quarrylane.example',
+    role: 'expert',
+    region: 'Fellside',
+  },
+  {
+    handle: 'moss_moderator',
+    displayName: 'Moss (moderator)',
+    email: 'moss@clackwater.example',
+    role: 'moderator',
+    region: null,
+  },
+  {
+    handle: 'clack_admin',
+    displayName: 'Clackwater admin',
+    email: 'admin@clackwater.example',
+    role: 'admin',
+    region: null,
+  },
 ] as const;
 
 /** Each demo member's digest and the tags it follows (the rest keep the defaults: digest off, every notification on). */
@@ -30,16 +72,36 @@ export const demoMailChoices: Record<string, { digest: 'off' | 'daily' | 'weekly
 
 export const demoTags = [
   { slug: 'survey', name: 'Survey', description: 'Measuring fall, source flow, lift and pipe runs before you build.' },
-  { slug: 'drive-pipe', name: 'Drive pipe', description: 'Length, size, material and fittings of the pipe that feeds the pump.' },
+  {
+    slug: 'drive-pipe',
+    name: 'Drive pipe',
+    description: 'Length, size, material and fittings of the pipe that feeds the pump.',
+  },
   { slug: 'tuning', name: 'Tuning', description: 'Waste valve stroke and weight, beats per minute, first start.' },
-  { slug: 'parallel', name: 'Pumps in parallel', description: 'Several pumps, each with its own drive pipe, into one delivery line.' },
+  {
+    slug: 'parallel',
+    name: 'Pumps in parallel',
+    description: 'Several pumps, each with its own drive pipe, into one delivery line.',
+  },
   { slug: 'staged', name: 'Pumps in stages', description: 'A lower pump filling a tank that drives an upper pump.' },
-  { slug: 'delivery-line', name: 'Delivery line', description: 'The pipe from the pump up to the tank: size, friction, filling it.' },
+  {
+    slug: 'delivery-line',
+    name: 'Delivery line',
+    description: 'The pipe from the pump up to the tank: size, friction, filling it.',
+  },
   { slug: 'storage', name: 'Storage', description: 'Tanks, overflows and float valves.' },
   { slug: 'stall', name: 'Stops cycling', description: 'When the waste valve stops beating, or delivery drops.' },
   { slug: 'frost', name: 'Frost', description: 'Protecting pumps and pipe from freezing.' },
-  { slug: 'drinking-water', name: 'Drinking water', description: 'Testing and treating ram-pumped water before anyone drinks it.' },
-  { slug: 'water-rights', name: 'Water rights', description: 'Diversions, permits and how much of a stream you may take.' },
+  {
+    slug: 'drinking-water',
+    name: 'Drinking water',
+    description: 'Testing and treating ram-pumped water before anyone drinks it.',
+  },
+  {
+    slug: 'water-rights',
+    name: 'Water rights',
+    description: 'Diversions, permits and how much of a stream you may take.',
+  },
   { slug: 'livestock', name: 'Livestock', description: 'Watering animals away from the stream.' },
 ] as const;
 
@@ -60,7 +122,11 @@ export const demoQuestions: DemoQuestion[] = [
     tags: ['stall', 'drive-pipe', 'tuning'],
     daysAgo: 2,
     answers: [
-      { author: 'ironwheel_builds', hoursLater: 3, body: 'Twelve feet is on the short side for 4 ft of fall. Most builders aim for a drive pipe several times the fall and keep it rigid and straight. Before re-piping, check the intake screen is fully under water: a pump that stops after a minute often has the source dropping and the drive pipe drawing air.' },
+      {
+        author: 'ironwheel_builds',
+        hoursLater: 3,
+        body: 'Twelve feet is on the short side for 4 ft of fall. Most builders aim for a drive pipe several times the fall and keep it rigid and straight. Before re-piping, check the intake screen is fully under water: a pump that stops after a minute often has the source dropping and the drive pipe drawing air.',
+      },
     ],
   },
   {
@@ -70,8 +136,16 @@ export const demoQuestions: DemoQuestion[] = [
     tags: ['parallel', 'livestock'],
     daysAgo: 5,
     answers: [
-      { author: 'quarry_lane_valves', hoursLater: 6, body: 'Two in parallel roughly doubles what one gives, as long as each has its own drive pipe and the pool can spare both drive flows. Keep the drive pipes identical — an extra elbow on one costs that pump some delivery.' },
-      { author: 'ferncombe_tamsin', hoursLater: 30, body: 'We run two side by side at Ferncombe. Make sure the delivery line is big enough for the combined flow.' },
+      {
+        author: 'quarry_lane_valves',
+        hoursLater: 6,
+        body: 'Two in parallel roughly doubles what one gives, as long as each has its own drive pipe and the pool can spare both drive flows. Keep the drive pipes identical — an extra elbow on one costs that pump some delivery.',
+      },
+      {
+        author: 'ferncombe_tamsin',
+        hoursLater: 30,
+        body: 'We run two side by side at Ferncombe. Make sure the delivery line is big enough for the combined flow.',
+      },
     ],
   },
   {
@@ -81,7 +155,11 @@ export const demoQuestions: DemoQuestion[] = [
     tags: ['frost', 'storage'],
     daysAgo: 9,
     answers: [
-      { author: 'ironwheel_builds', hoursLater: 20, body: 'Drain the drive pipe, the pump body and the lowest run of the delivery line, and bring the valves indoors if you can. Water left in fittings splits them when it freezes.' },
+      {
+        author: 'ironwheel_builds',
+        hoursLater: 20,
+        body: 'Drain the drive pipe, the pump body and the lowest run of the delivery line, and bring the valves indoors if you can. Water left in fittings splits them when it freezes.',
+      },
     ],
   },
   {
@@ -91,7 +169,11 @@ export const demoQuestions: DemoQuestion[] = [
     tags: ['drinking-water'],
     daysAgo: 12,
     answers: [
-      { author: 'quarry_lane_valves', hoursLater: 4, body: 'Treat it as untreated surface water. Have it tested by an accredited lab and talk to your local health authority about treatment before anyone drinks it. With pasture upstream, expect to need filtration and disinfection.' },
+      {
+        author: 'quarry_lane_valves',
+        hoursLater: 4,
+        body: 'Treat it as untreated surface water. Have it tested by an accredited lab and talk to your local health authority about treatment before anyone drinks it. With pasture upstream, expect to need filtration and disinfection.',
+      },
     ],
   },
   {
@@ -101,7 +183,11 @@ export const demoQuestions: DemoQuestion[] = [
     tags: ['survey'],
     daysAgo: 15,
     answers: [
-      { author: 'ironwheel_builds', hoursLater: 2, body: 'A clear hose filled with water works as a water level: hold one end at the pool surface, the other at the pump site, and measure the difference. Do it in stages on a long bank, and never alone when the stream is high.' },
+      {
+        author: 'ironwheel_builds',
+        hoursLater: 2,
+        body: 'A clear hose filled with water works as a water level: hold one end at the pool surface, the other at the pump site, and measure the difference. Do it in stages on a long bank, and never alone when the stream is high.',
+      },
     ],
   },
   {
@@ -119,7 +205,11 @@ export const demoQuestions: DemoQuestion[] = [
     tags: ['tuning'],
     daysAgo: 21,
     answers: [
-      { author: 'quarry_lane_valves', hoursLater: 8, body: 'Change one thing at a time and time the beats. A longer stroke and a little more weight slow the beat and let the drive pipe water gather speed; too much and the valve will not close at all.' },
+      {
+        author: 'quarry_lane_valves',
+        hoursLater: 8,
+        body: 'Change one thing at a time and time the beats. A longer stroke and a little more weight slow the beat and let the drive pipe water gather speed; too much and the valve will not close at all.',
+      },
     ],
   },
   {
@@ -129,7 +219,11 @@ export const demoQuestions: DemoQuestion[] = [
     tags: ['water-rights'],
     daysAgo: 24,
     answers: [
-      { author: 'moss_moderator', hoursLater: 5, body: 'That depends entirely on where you are. Ask the authority that issues water abstraction or diversion permits in your area before you build; many places limit how much of a stream you may take even on your own land.' },
+      {
+        author: 'moss_moderator',
+        hoursLater: 5,
+        body: 'That depends entirely on where you are. Ask the authority that issues water abstraction or diversion permits in your area before you build; many places limit how much of a stream you may take even on your own land.',
+      },
     ],
   },
   {
@@ -147,7 +241,11 @@ export const demoQuestions: DemoQuestion[] = [
     tags: ['stall', 'tuning'],
     daysAgo: 30,
     answers: [
-      { author: 'ironwheel_builds', hoursLater: 12, body: 'Check the snifter hole just below the delivery valve; it may be blocked. It lets a little air in each cycle to keep the chamber charged. Never use glass or unrated parts for the chamber — it holds stored energy.' },
+      {
+        author: 'ironwheel_builds',
+        hoursLater: 12,
+        body: 'Check the snifter hole just below the delivery valve; it may be blocked. It lets a little air in each cycle to keep the chamber charged. Never use glass or unrated parts for the chamber — it holds stored energy.',
+      },
     ],
   },
   {
@@ -165,7 +263,11 @@ export const demoQuestions: DemoQuestion[] = [
     tags: ['drive-pipe', 'stall'],
     daysAgo: 36,
     answers: [
-      { author: 'quarry_lane_valves', hoursLater: 9, body: 'Flexible pipe soaks up the pressure wave the pump lives on. Use rigid pipe — galvanised steel or pressure-rated PVC — for the drive pipe and keep the HDPE for the delivery line.' },
+      {
+        author: 'quarry_lane_valves',
+        hoursLater: 9,
+        body: 'Flexible pipe soaks up the pressure wave the pump lives on. Use rigid pipe — galvanised steel or pressure-rated PVC — for the drive pipe and keep the HDPE for the delivery line.',
+      },
     ],
   },
 ];
@@ -180,16 +282,63 @@ export const demoSafetyChecks: {
   stale?: boolean;
   staleBecause?: string;
 }[] = [
-  { guide: 'how-a-ram-pump-works', expert: 'ironwheel_builds', verdict: 'sound', daysAgo: 6, notes: 'Cycle description matches what I see on the bench. The air chamber caution is in the right place.' },
-  { guide: 'the-drive-pipe', expert: 'quarry_lane_valves', verdict: 'needs changes', daysAgo: 40, stale: true, staleBecause: 'the surge section was added', notes: 'Needs a plain statement that a flexible drive pipe soaks up the surge, and a caution on pressure ratings.' },
-  { guide: 'the-drive-pipe', expert: 'quarry_lane_valves', verdict: 'sound', daysAgo: 20, stale: true, staleBecause: 'the fittings section was rewritten', notes: 'Surge caution added; the length guidance now says where sources disagree.' },
-  { guide: 'first-start-and-tuning', expert: 'ironwheel_builds', verdict: 'sound', daysAgo: 9, notes: 'One change at a time, timed beats: good advice. Stand clear of the waste valve on first start.' },
-  { guide: 'care-frost-floods-and-water-rights', expert: 'quarry_lane_valves', verdict: 'sound', daysAgo: 3, notes: 'Drinking-water and permit sections defer to the right authorities.' },
-  { guide: 'will-a-ram-meet-my-demand', expert: 'ironwheel_builds', verdict: 'needs changes', daysAgo: 12, notes: 'The livestock figures are per head per day; say that hot weather can double them.' },
+  {
+    guide: 'how-a-ram-pump-works',
+    expert: 'ironwheel_builds',
+    verdict: 'sound',
+    daysAgo: 6,
+    notes: 'Cycle description matches what I see on the bench. The air chamber caution is in the right place.',
+  },
+  {
+    guide: 'the-drive-pipe',
+    expert: 'quarry_lane_valves',
+    verdict: 'needs changes',
+    daysAgo: 40,
+    stale: true,
+    staleBecause: 'the surge section was added',
+    notes: 'Needs a plain statement that a flexible drive pipe soaks up the surge, and a caution on pressure ratings.',
+  },
+  {
+    guide: 'the-drive-pipe',
+    expert: 'quarry_lane_valves',
+    verdict: 'sound',
+    daysAgo: 20,
+    stale: true,
+    staleBecause: 'the fittings section was rewritten',
+    notes: 'Surge caution added; the length guidance now says where sources disagree.',
+  },
+  {
+    guide: 'first-start-and-tuning',
+    expert: 'ironwheel_builds',
+    verdict: 'sound',
+    daysAgo: 9,
+    notes: 'One change at a time, timed beats: good advice. Stand clear of the waste valve on first start.',
+  },
+  {
+    guide: 'care-frost-floods-and-water-rights',
+    expert: 'quarry_lane_valves',
+    verdict: 'sound',
+    daysAgo: 3,
+    notes: 'Drinking-water and permit sections defer to the right authorities.',
+  },
+  {
+    guide: 'will-a-ram-meet-my-demand',
+    expert: 'ironwheel_builds',
+    verdict: 'needs changes',
+    daysAgo: 12,
+    notes: 'The livestock figures are per head per day; say that hot weather can double them.',
+  },
 ];
 
 /** Saved worked calculations; fixed ids so README and tests can link to them. */
-export const demoCalculations: { publicId?: string; tool: CalculatorId; title: string; author: string; daysAgo: number; inputs: Record<string, string> }[] = [
+export const demoCalculations: {
+  publicId?: string;
+  tool: CalculatorId;
+  title: string;
+  author: string;
+  daysAgo: number;
+  inputs: Record<string, string>;
+}[] = [
   {
     publicId: 'FerncombeY1',
     tool: 'yield-estimate',
@@ -204,7 +353,21 @@ export const demoCalculations: { publicId?: string; tool: CalculatorId; title: s
     title: 'Highcrag far paddock: two ½-inch pumps side by side',
     author: 'quarry_lane_valves',
     daysAgo: 5,
-    inputs: { mode: 'parallel', pumps: '2', fall: '4 ft', lift: '30 ft', driveFlowEach: '2 gal/min', driveLength: '24 ft', driveSize: '1/2', driveMaterial: 'pvc-sch40', extraElbows: '0', deliveryLength: '300 ft', deliverySize: '3/4', deliveryMaterial: 'hdpe-dr11', sourceFlow: '8 gal/min' },
+    inputs: {
+      mode: 'parallel',
+      pumps: '2',
+      fall: '4 ft',
+      lift: '30 ft',
+      driveFlowEach: '2 gal/min',
+      driveLength: '24 ft',
+      driveSize: '1/2',
+      driveMaterial: 'pvc-sch40',
+      extraElbows: '0',
+      deliveryLength: '300 ft',
+      deliverySize: '3/4',
+      deliveryMaterial: 'hdpe-dr11',
+      sourceFlow: '8 gal/min',
+    },
   },
   {
     publicId: 'SorrelDL400',

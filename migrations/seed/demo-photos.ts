@@ -22,17 +22,32 @@ function sketch(caption: string): string {
 </svg>`;
 }
 
-export async function seedPhoto(p: { ownerId: number; questionId?: number; answerId?: number; alt: string; caption: string }, transaction: Transaction) {
+export async function seedPhoto(
+  p: { ownerId: number; questionId?: number; answerId?: number; alt: string; caption: string },
+  transaction: Transaction,
+) {
   const { Photo } = initModels();
   const publicId = newPhotoId();
-  const png = await sharp(Buffer.from(sketch(p.caption))).png().toBuffer();
+  const png = await sharp(Buffer.from(sketch(p.caption)))
+    .png()
+    .toBuffer();
   const web = await sharp(png).resize({ width: 1200, withoutEnlargement: true }).webp({ quality: 80 }).toBuffer();
   const thumb = await sharp(png).resize({ width: 320 }).webp({ quality: 75 }).toBuffer();
   await writeVariant(publicId, 'web', web);
   await writeVariant(publicId, 'thumb', thumb);
   const meta = await sharp(web).metadata();
   await Photo.create(
-    { publicId, ownerId: p.ownerId, questionId: p.questionId ?? null, answerId: p.answerId ?? null, mime: 'image/webp', width: meta.width ?? 1200, height: meta.height ?? 800, bytes: web.length, alt: p.alt },
+    {
+      publicId,
+      ownerId: p.ownerId,
+      questionId: p.questionId ?? null,
+      answerId: p.answerId ?? null,
+      mime: 'image/webp',
+      width: meta.width ?? 1200,
+      height: meta.height ?? 800,
+      bytes: web.length,
+      alt: p.alt,
+    },
     { transaction },
   );
 }

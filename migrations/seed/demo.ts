@@ -7,7 +7,15 @@ import { hashPassword } from '@/lib/auth/password';
 import { demoThreads } from './demo-forum-data';
 import { seedPhoto } from './demo-photos';
 import { seedFieldLog } from './demo-field-log';
-import { DEMO_PASSWORD, demoMailChoices, demoCalculations, demoQuestions, demoSafetyChecks, demoTags, demoUsers } from './demo-data';
+import {
+  DEMO_PASSWORD,
+  demoMailChoices,
+  demoCalculations,
+  demoQuestions,
+  demoSafetyChecks,
+  demoTags,
+  demoUsers,
+} from './demo-data';
 
 const DAY = 86_400_000;
 
@@ -16,13 +24,31 @@ const DAY = 86_400_000;
  * nothing when the database already holds members (a second `npm start`).
  */
 export async function seedDemo(sequelize: Sequelize, now = new Date()): Promise<boolean> {
-  const { User, Tag, Question, Answer, QuestionTag, SafetyCheck, WorkedCalculation, Reply, Revision, HelpfulMark, TagFollow } = initModels(sequelize);
+  const {
+    User,
+    Tag,
+    Question,
+    Answer,
+    QuestionTag,
+    SafetyCheck,
+    WorkedCalculation,
+    Reply,
+    Revision,
+    HelpfulMark,
+    TagFollow,
+  } = initModels(sequelize);
   if ((await User.count()) > 0) return false;
 
   const passwordHash = await hashPassword(DEMO_PASSWORD);
   await sequelize.transaction(async (transaction) => {
     const users = await User.bulkCreate(
-      demoUsers.map((u) => ({ ...u, passwordHash, emailVerifiedAt: now, createdAt: new Date(now.getTime() - 400 * DAY), updatedAt: now })),
+      demoUsers.map((u) => ({
+        ...u,
+        passwordHash,
+        emailVerifiedAt: now,
+        createdAt: new Date(now.getTime() - 400 * DAY),
+        updatedAt: now,
+      })),
       { transaction },
     );
     const userId = new Map(users.map((u) => [u.handle, u.id]));
@@ -30,13 +56,24 @@ export async function seedDemo(sequelize: Sequelize, now = new Date()): Promise<
     const tagId = new Map(tags.map((t) => [t.slug, t.id]));
     for (const [handle, choice] of Object.entries(demoMailChoices)) {
       await User.update({ digestFrequency: choice.digest }, { where: { id: must(userId, handle) }, transaction });
-      await TagFollow.bulkCreate(choice.follows.map((slug) => ({ userId: must(userId, handle), tagId: must(tagId, slug) })), { transaction });
+      await TagFollow.bulkCreate(
+        choice.follows.map((slug) => ({ userId: must(userId, handle), tagId: must(tagId, slug) })),
+        { transaction },
+      );
     }
 
     for (const q of demoQuestions) {
       const createdAt = new Date(now.getTime() - q.daysAgo * DAY);
       const question = await Question.create(
-        { authorId: must(userId, q.author), title: q.title, body: q.body, answerCount: q.answers.length, fixedAnswerId: null, createdAt, updatedAt: createdAt },
+        {
+          authorId: must(userId, q.author),
+          title: q.title,
+          body: q.body,
+          answerCount: q.answers.length,
+          fixedAnswerId: null,
+          createdAt,
+          updatedAt: createdAt,
+        },
         { transaction },
       );
       await QuestionTag.bulkCreate(
@@ -60,7 +97,15 @@ export async function seedDemo(sequelize: Sequelize, now = new Date()): Promise<
       const hash = c.stale ? contentHash(`${c.guide}: an earlier version, before ${c.staleBecause}`) : guide.hash;
       const at = new Date(now.getTime() - c.daysAgo * DAY);
       await SafetyCheck.create(
-        { guideSlug: c.guide, contentHash: hash, expertId: must(userId, c.expert), verdict: c.verdict, notes: c.notes, createdAt: at, updatedAt: at },
+        {
+          guideSlug: c.guide,
+          contentHash: hash,
+          expertId: must(userId, c.expert),
+          verdict: c.verdict,
+          notes: c.notes,
+          createdAt: at,
+          updatedAt: at,
+        },
         { transaction },
       );
     }
@@ -87,36 +132,96 @@ export async function seedDemo(sequelize: Sequelize, now = new Date()): Promise<
     }
 
     // The forum threads: site sheets, solved ones, replies, helpful marks, worked calculations, photos.
-    const calcId = new Map((await WorkedCalculation.findAll({ attributes: ['id', 'publicId'], transaction })).map((c) => [c.publicId, c.id]));
+    const calcId = new Map(
+      (await WorkedCalculation.findAll({ attributes: ['id', 'publicId'], transaction })).map((c) => [c.publicId, c.id]),
+    );
     for (const t of demoThreads) {
       const createdAt = new Date(now.getTime() - t.daysAgo * DAY);
       const q = await Question.create(
-        { authorId: must(userId, t.author), title: t.title, body: t.body, answerCount: t.answers.length, fixedAnswerId: null, siteSheet: t.siteSheet ?? null, lastActivityAt: createdAt, createdAt, updatedAt: createdAt },
+        {
+          authorId: must(userId, t.author),
+          title: t.title,
+          body: t.body,
+          answerCount: t.answers.length,
+          fixedAnswerId: null,
+          siteSheet: t.siteSheet ?? null,
+          lastActivityAt: createdAt,
+          createdAt,
+          updatedAt: createdAt,
+        },
         { transaction },
       );
-      await QuestionTag.bulkCreate(t.tags.map((slug) => ({ questionId: q.id, tagId: must(tagId, slug) })), { transaction });
-      await Revision.create({ postType: 'question', postId: q.id, editorId: q.authorId as number, title: q.title, body: q.body, createdAt }, { transaction });
+      await QuestionTag.bulkCreate(
+        t.tags.map((slug) => ({ questionId: q.id, tagId: must(tagId, slug) })),
+        { transaction },
+      );
+      await Revision.create(
+        { postType: 'question', postId: q.id, editorId: q.authorId as number, title: q.title, body: q.body, createdAt },
+        { transaction },
+      );
       if (t.photo) await seedPhoto({ ownerId: q.authorId as number, questionId: q.id, ...t.photo }, transaction);
       const answerIds: number[] = [];
       for (const a of t.answers) {
         const at = new Date(createdAt.getTime() + a.hoursLater * 3_600_000);
         const row = await Answer.create(
-          { questionId: q.id, authorId: must(userId, a.author), body: a.body, calculationId: a.calculation ? must(calcId, a.calculation) : null, helpfulCount: a.helpfulFrom?.length ?? 0, createdAt: at, updatedAt: at },
+          {
+            questionId: q.id,
+            authorId: must(userId, a.author),
+            body: a.body,
+            calculationId: a.calculation ? must(calcId, a.calculation) : null,
+            helpfulCount: a.helpfulFrom?.length ?? 0,
+            createdAt: at,
+            updatedAt: at,
+          },
           { transaction },
         );
         answerIds.push(row.id);
-        await Revision.create({ postType: 'answer', postId: row.id, editorId: row.authorId as number, title: null, body: row.body, createdAt: at }, { transaction });
-        for (const who of a.helpfulFrom ?? []) await HelpfulMark.create({ postType: 'answer', postId: row.id, userId: must(userId, who), createdAt: at }, { transaction });
+        await Revision.create(
+          {
+            postType: 'answer',
+            postId: row.id,
+            editorId: row.authorId as number,
+            title: null,
+            body: row.body,
+            createdAt: at,
+          },
+          { transaction },
+        );
+        for (const who of a.helpfulFrom ?? [])
+          await HelpfulMark.create(
+            { postType: 'answer', postId: row.id, userId: must(userId, who), createdAt: at },
+            { transaction },
+          );
       }
       if (t.fixed !== undefined) await q.update({ fixedAnswerId: answerIds[t.fixed] }, { transaction });
       for (const r of t.replies ?? []) {
         const at = new Date(createdAt.getTime() + r.hoursLater * 3_600_000);
         const answerId = r.toAnswer !== undefined ? answerIds[r.toAnswer] : null;
         const reply = await Reply.create(
-          { questionId: q.id, parentType: answerId ? 'answer' : 'question', answerId, replyToId: null, depth: 0, authorId: must(userId, r.author), body: r.body, createdAt: at, updatedAt: at },
+          {
+            questionId: q.id,
+            parentType: answerId ? 'answer' : 'question',
+            answerId,
+            replyToId: null,
+            depth: 0,
+            authorId: must(userId, r.author),
+            body: r.body,
+            createdAt: at,
+            updatedAt: at,
+          },
           { transaction },
         );
-        await Revision.create({ postType: 'reply', postId: reply.id, editorId: reply.authorId, title: null, body: reply.body, createdAt: at }, { transaction });
+        await Revision.create(
+          {
+            postType: 'reply',
+            postId: reply.id,
+            editorId: reply.authorId,
+            title: null,
+            body: reply.body,
+            createdAt: at,
+          },
+          { transaction },
+        );
       }
     }
 

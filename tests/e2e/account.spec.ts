@@ -83,9 +83,13 @@ for (const d of DEMO) {
   });
 }
 
-test('a signed-in member saves a worked calculation and opens its permalink; a visitor is asked to sign in', async ({ page }) => {
+test('a signed-in member saves a worked calculation and opens its permalink; a visitor is asked to sign in', async ({
+  page,
+}) => {
   await page.goto('/calculators/yield-estimate?fall=4+ft&lift=29+ft&driveFlow=2+gal%2Fmin');
-  await expect(page.locator('[data-calculator="yield-estimate"]').getByRole('link', { name: 'Sign in to save' })).toBeVisible();
+  await expect(
+    page.locator('[data-calculator="yield-estimate"]').getByRole('link', { name: 'Sign in to save' }),
+  ).toBeVisible();
   await signInWithPassword(page, 'tamsin@ferncombe.example');
   await page.goto('/calculators/yield-estimate?fall=4+ft&lift=29+ft&driveFlow=2+gal%2Fmin');
   await page.getByRole('button', { name: 'Save as a worked calculation' }).click();

@@ -12,24 +12,33 @@ async function watchViolations(page: Page) {
   await page.addInitScript(() => {
     (window as unknown as { __violations: string[] }).__violations = [];
     document.addEventListener('securitypolicyviolation', (e) => {
-      (window as unknown as { __violations: string[] }).__violations.push(`${e.violatedDirective} ${e.blockedURI} ${e.sample}`);
+      (window as unknown as { __violations: string[] }).__violations.push(
+        `${e.violatedDirective} ${e.blockedURI} ${e.sample}`,
+      );
     });
   });
   const console: string[] = [];
   page.on('console', (m) => {
     if (/Content Security Policy/i.test(m.text())) console.push(m.text());
   });
-  return async () => [...(await page.evaluate(() => (window as unknown as { __violations: string[] }).__violations)), ...console];
+  return async () => [
+    ...(await page.evaluate(() => (window as unknown as { __violations: string[] }).__violations)),
+    ...console,
+  ];
 }
 
 async function firstThreadUrl(page: Page): Promise<string> {
   await page.goto('/questions');
-  const href = await page.$$eval('a[href^="/questions/"]', (links) => links.map((a) => a.getAttribute('href')).find((h) => /^\/questions\/\d+$/.test(h ?? '')));
+  const href = await page.$$eval('a[href^="/questions/"]', (links) =>
+    links.map((a) => a.getAttribute('href')).find((h) => /^\/questions\/\d+$/.test(h ?? '')),
+  );
   expect(href).toMatch(/^\/questions\/\d+/);
   return href!;
 }
 
-test('the main pages load and hydrate with no CSP violation, and pages rendered per request carry no unsafe-inline', async ({ page }) => {
+test('the main pages load and hydrate with no CSP violation, and pages rendered per request carry no unsafe-inline', async ({
+  page,
+}) => {
   const violations = await watchViolations(page);
   const thread = await firstThreadUrl(page);
   for (const path of ['/', '/sign-in', '/guides/how-a-ram-pump-works', thread, '/no-such-page']) {
@@ -68,7 +77,10 @@ test('a script injected into the page without the nonce is blocked; with it, it 
       const csp = res.headers()['content-security-policy'] ?? '';
       nonce = /'nonce-([^']+)'/.exec(csp)?.[1] ?? '';
       // as a markup injection would land in the page: one plain inline script, one with a guessed nonce
-      let html = (await res.text()).replace('</body>', '<script>window.__injected = "plain"</script><script nonce="AAAAAAAAAAAAAAAAAAAAAA==">window.__guessed = 1</script></body>');
+      let html = (await res.text()).replace(
+        '</body>',
+        '<script>window.__injected = "plain"</script><script nonce="AAAAAAAAAAAAAAAAAAAAAA==">window.__guessed = 1</script></body>',
+      );
       // the control: the same script with the page's own nonce runs, so the check can see a script run
       if (nonce) html = html.replace('</body>', `<script nonce="${nonce}">window.__control = 1</script></body>`);
       await route.fulfill({ response: res, body: html });
@@ -83,7 +95,10 @@ test('a script injected into the page without the nonce is blocked; with it, it 
     expect(ran.injected, path).toBeNull();
     expect(ran.guessed, path).toBeNull();
     if (nonce) expect(ran.control, path).toBe(1);
-    expect((await violations()).some((v) => v.startsWith('script-src')), path).toBe(true);
+    expect(
+      (await violations()).some((v) => v.startsWith('script-src')),
+      path,
+    ).toBe(true);
     await page.unrouteAll();
   }
 });
@@ -96,15 +111,30 @@ test('HSTS is sent when the site is reached over https, and not over plain http'
   expect(tls.headers()['strict-transport-security']).toMatch(/max-age=\d{8,}/);
 });
 
-test('cross-site writes are refused by the running server: a text/plain form and another origin', async ({ request, baseURL }) => {
+test('cross-site writes are refused by the running server: a text/plain form and another origin', async ({
+  request,
+  baseURL,
+}) => {
   // what <form enctype="text/plain" action=…/api/helpful> on another port sends
-  const form = await request.post('/api/helpful', { headers: { 'content-type': 'text/plain', origin: 'http://127.0.0.1:9' }, data: '{"postType":"question","postId":1,"x":"=1"}' });
+  const form = await request.post('/api/helpful', {
+    headers: { 'content-type': 'text/plain', origin: 'http://127.0.0.1:9' },
+    data: '{"postType":"question","postId":1,"x":"=1"}',
+  });
   expect([403, 415]).toContain(form.status());
-  const json = await request.post('/api/account/sign-up', { headers: { 'content-type': 'application/json', origin: 'http://127.0.0.1:9' }, data: '{}' });
+  const json = await request.post('/api/account/sign-up', {
+    headers: { 'content-type': 'application/json', origin: 'http://127.0.0.1:9' },
+    data: '{}',
+  });
   expect(json.status()).toBe(403);
-  const own = await request.post('/api/account/sign-up', { headers: { 'content-type': 'application/json', origin: new URL(baseURL!).origin }, data: '{}' });
+  const own = await request.post('/api/account/sign-up', {
+    headers: { 'content-type': 'application/json', origin: new URL(baseURL!).origin },
+    data: '{}',
+  });
   expect(own.status()).toBe(400);
   // a body over the limit is refused from its Content-Length, before it is read
-  const big = await request.post('/api/account/sign-up', { headers: { 'content-type': 'application/json' }, data: Buffer.alloc(3 * 1024 * 1024, 0x20) });
+  const big = await request.post('/api/account/sign-up', {
+    headers: { 'content-type': 'application/json' },
+    data: Buffer.alloc(3 * 1024 * 1024, 0x20),
+  });
   expect(big.status()).toBe(413);
 });

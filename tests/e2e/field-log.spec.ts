@@ -11,17 +11,25 @@ test('the community page shows the demo entries on the chart and in the table', 
   await expect(page.getByRole('table', { name: 'Field log entries' }).locator('tbody tr')).toHaveCount(20);
   // sorting by efficiency, highest first, puts the API's best entry on top
   const best = (await (await request.get('/api/field-log?sort=efficiency&dir=desc&perPage=1')).json()).items[0];
-  await page.getByRole('table', { name: 'Field log entries' }).getByRole('link', { name: 'Efficiency', exact: true }).click();
+  await page
+    .getByRole('table', { name: 'Field log entries' })
+    .getByRole('link', { name: 'Efficiency', exact: true })
+    .click();
   await expect(page).toHaveURL(/sort=efficiency/);
   await expect(page.locator('tbody tr').first()).toHaveAttribute('data-entry-row', String(best.id));
   // the next page keeps the sort
   await page.getByRole('link', { name: 'Next →' }).click();
   await expect(page).toHaveURL(/sort=efficiency.*page=2|page=2.*sort=efficiency/);
-  const second = (await (await request.get('/api/field-log?sort=efficiency&dir=desc&perPage=20&page=2')).json()).items[0];
+  const second = (await (await request.get('/api/field-log?sort=efficiency&dir=desc&perPage=20&page=2')).json())
+    .items[0];
   await expect(page.locator('tbody tr').first()).toHaveAttribute('data-entry-row', String(second.id));
 });
 
-test('record a test with three bucket trials, see it on the chart, link it as the after of an earlier test and read the ratio', async ({ page, request, baseURL }) => {
+test('record a test with three bucket trials, see it on the chart, link it as the after of an earlier test and read the ratio', async ({
+  page,
+  request,
+  baseURL,
+}) => {
   await page.context().addCookies([{ name: 'cw_units', value: 'metric', url: baseURL! }]);
   await signIn(page, 'tamsin@ferncombe.example');
   await page.goto('/field-log/new');
@@ -34,7 +42,11 @@ test('record a test with three bucket trials, see it on the chart, link it as th
   await form.getByLabel('Drive pipe size').selectOption('3/4');
   await form.getByLabel('Drive pipe material').selectOption('pvc');
   await form.getByLabel('Drive flow (all pumps)').fill('14 L/min');
-  const trials = [['2.5', '45'], ['2.5', '46'], ['2.5', '44']];
+  const trials = [
+    ['2.5', '45'],
+    ['2.5', '46'],
+    ['2.5', '44'],
+  ];
   for (const [i, [vol, s]] of trials.entries()) {
     if (i > 0) await form.getByRole('button', { name: 'Add a trial' }).click();
     await form.getByLabel(`Trial ${i + 1} volume`).fill(vol);
@@ -60,12 +72,17 @@ test('record a test with three bucket trials, see it on the chart, link it as th
   const before = await (await request.get(`/api/field-log/${beforeId}`)).json();
   const after = await (await request.get(`/api/field-log/${id}`)).json();
   // the ratio of mean trial flows, after ÷ before
-  await expect(page.getByTestId('measured-ratio')).toHaveText(`${(after.deliveredFlowM3s / before.deliveredFlowM3s).toFixed(2)}×`);
+  await expect(page.getByTestId('measured-ratio')).toHaveText(
+    `${(after.deliveredFlowM3s / before.deliveredFlowM3s).toFixed(2)}×`,
+  );
   await expect(page.getByText('What changed: drive pipe re-laid straighter')).toBeVisible();
 });
 
 test('the demo one-pump against two-pump comparison shows both ratios', async ({ page, request }) => {
-  const list = (await (await request.get('/api/field-log?perPage=100&sort=testedOn&dir=asc')).json()).items as { id: number; siteName: string }[];
+  const list = (await (await request.get('/api/field-log?perPage=100&sort=testedOn&dir=asc')).json()).items as {
+    id: number;
+    siteName: string;
+  }[];
   const [one, two] = list.filter((e) => e.siteName === 'Ferncombe lower meadow');
   await page.goto(`/field-log/compare/${one.id}/${two.id}`);
   const measured = Number((await page.getByTestId('measured-ratio').textContent())?.replace('×', ''));
@@ -76,7 +93,10 @@ test('the demo one-pump against two-pump comparison shows both ratios', async ({
 });
 
 test('an entry opens the ask form with the site sheet filled from it', async ({ page, request }) => {
-  const list = (await (await request.get('/api/field-log?perPage=100&sort=testedOn&dir=asc')).json()).items as { id: number; siteName: string }[];
+  const list = (await (await request.get('/api/field-log?perPage=100&sort=testedOn&dir=asc')).json()).items as {
+    id: number;
+    siteName: string;
+  }[];
   const one = list.find((e) => e.siteName === 'Ferncombe lower meadow')!;
   await signIn(page, 'tamsin@ferncombe.example');
   await page.goto(`/field-log/${one.id}`);

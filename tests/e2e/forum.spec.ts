@@ -12,7 +12,9 @@ test.describe.serial('the forum', () => {
     await page.goto('/questions/ask');
     await settled(page);
     await page.getByLabel('Title', { exact: true }).fill(TITLE);
-    await page.getByLabel('What happened').fill('It beats about a dozen times, then the waste valve stays shut until I push it down again.');
+    await page
+      .getByLabel('What happened')
+      .fill('It beats about a dozen times, then the waste valve stays shut until I push it down again.');
     await page.getByLabel('Stops cycling', { exact: true }).check();
     const sheet = page.locator('section', { has: page.getByRole('heading', { name: /site sheet/i }) });
     await sheet.getByLabel('Fall', { exact: true }).fill('5 ft');
@@ -27,7 +29,9 @@ test.describe.serial('the forum', () => {
     const before = page.getByTestId('before-you-post');
     await expect(before).toContainText(/Drive pipe length outside the usual range/i);
 
-    const png = await sharp({ create: { width: 64, height: 48, channels: 3, background: { r: 95, g: 122, b: 58 } } }).png().toBuffer();
+    const png = await sharp({ create: { width: 64, height: 48, channels: 3, background: { r: 95, g: 122, b: 58 } } })
+      .png()
+      .toBuffer();
     await page.getByLabel('Photos (optional)').setInputFiles({ name: 'pump.png', mimeType: 'image/png', buffer: png });
     await expect(page.getByRole('list', { name: 'Photos added' }).getByRole('listitem')).toHaveCount(1);
 
@@ -41,12 +45,19 @@ test.describe.serial('the forum', () => {
     await expect(page.getByRole('link', { name: TITLE })).toBeVisible();
   });
 
-  test('the expert’s journey: an answer with a worked calculation, fixed it, and try with my numbers', async ({ page, browser }) => {
+  test('the expert’s journey: an answer with a worked calculation, fixed it, and try with my numbers', async ({
+    page,
+    browser,
+  }) => {
     await signIn(page, 'builds@ironwheel.example');
     await page.goto(questionUrl);
     await settled(page);
     const composer = page.getByRole('form', { name: 'Your answer' });
-    await composer.getByLabel('Answer (Markdown; math between $ signs)').fill('Twelve feet is short for five feet of fall: the pulse comes back too soon. Here is the drive pipe check for your site.');
+    await composer
+      .getByLabel('Answer (Markdown; math between $ signs)')
+      .fill(
+        'Twelve feet is short for five feet of fall: the pulse comes back too soon. Here is the drive pipe check for your site.',
+      );
     await composer.getByLabel('Add a worked calculation').selectOption('drive-pipe-check');
     const card = composer.locator('[data-calculator="drive-pipe-check"]');
     // prefilled from the site sheet
@@ -68,7 +79,11 @@ test.describe.serial('the forum', () => {
     await settled(askerPage);
     // the mark shows at once (optimistic): wait for the server to save it before closing the context
     const saved = askerPage.waitForResponse((r) => r.request().method() !== 'GET' && r.url().endsWith('/fixed'));
-    await askerPage.locator('[data-answer]').filter({ hasText: 'Twelve feet is short' }).getByRole('button', { name: 'This fixed it' }).click();
+    await askerPage
+      .locator('[data-answer]')
+      .filter({ hasText: 'Twelve feet is short' })
+      .getByRole('button', { name: 'This fixed it' })
+      .click();
     expect((await saved).ok()).toBe(true);
     await expect(askerPage.locator('[data-answer]').first()).toContainText('fixed it');
     await asker.close();

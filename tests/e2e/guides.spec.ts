@@ -4,7 +4,10 @@ import AxeBuilder from '@axe-core/playwright';
 const firstCard = (page: Page) => page.locator('[data-calculator="yield-estimate"]').first();
 const delivered = (page: Page) => firstCard(page).locator('[data-result="Delivered"]');
 
-test('the beginner’s journey: a checked guide, its caution, a live calculator, units and a share link', async ({ page, browser }) => {
+test('the beginner’s journey: a checked guide, its caution, a live calculator, units and a share link', async ({
+  page,
+  browser,
+}) => {
   await page.goto('/guides/how-a-ram-pump-works');
   await expect(page.getByRole('heading', { level: 1, name: 'How a ram pump works' })).toBeVisible();
   const status = page.getByTestId('safety-check-status');

@@ -8,13 +8,18 @@ const catcher = new SmtpCatcher(E2E_SMTP_PORT);
 test.beforeAll(() => catcher.start());
 test.afterAll(() => catcher.stop());
 
-test('an answer in the browser reaches the asker’s inbox within a minute; its unsubscribe link works signed out', async ({ page, browser }) => {
+test('an answer in the browser reaches the asker’s inbox within a minute; its unsubscribe link works signed out', async ({
+  page,
+  browser,
+}) => {
   test.setTimeout(120_000);
   const title = `Mail check: ram slows every afternoon ${Date.now() % 100000}`;
   await signIn(page, 'tamsin@ferncombe.example');
   await page.goto('/questions/ask');
   await page.getByLabel('Title', { exact: true }).fill(title);
-  await page.getByLabel('What happened').fill('By mid afternoon the beat slows from sixty to forty a minute, and delivery falls with it.');
+  await page
+    .getByLabel('What happened')
+    .fill('By mid afternoon the beat slows from sixty to forty a minute, and delivery falls with it.');
   await page.getByLabel('Tuning', { exact: true }).check();
   await page.getByRole('button', { name: 'Post my question' }).click();
   await expect(page.getByRole('heading', { level: 1, name: title })).toBeVisible();
@@ -25,19 +30,27 @@ test('an answer in the browser reaches the asker’s inbox within a minute; its 
   await signIn(ep, 'valves@quarrylane.example');
   await ep.goto(questionUrl);
   const composer = ep.getByRole('form', { name: 'Your answer' });
-  await composer.getByLabel('Answer (Markdown; math between $ signs)').fill('Warm water in the afternoon holds less air; check the snifter and the air chamber cushion.');
+  await composer
+    .getByLabel('Answer (Markdown; math between $ signs)')
+    .fill('Warm water in the afternoon holds less air; check the snifter and the air chamber cushion.');
   // wait for the answer to be saved and shown in the thread: the words alone also match
   // the composer's own textarea, and closing the context too soon would abort the post
   const saved = ep.waitForResponse((r) => r.request().method() === 'POST' && r.url().endsWith(`/answers`));
   await composer.getByRole('button', { name: 'Post the answer' }).click();
   expect((await saved).status()).toBe(201);
-  await expect(ep.locator('[data-answer]').filter({ hasText: 'check the snifter and the air chamber cushion' })).toBeVisible();
+  await expect(
+    ep.locator('[data-answer]').filter({ hasText: 'check the snifter and the air chamber cushion' }),
+  ).toBeVisible();
   await expert.close();
 
   // the server's worker sends it after the answer commits: no script run by hand
-  const mail = await catcher.waitFor('tamsin@ferncombe.example', new RegExp(`^New answer: ${title}$`), 60_000).catch(async (err: Error) => {
-    throw new Error(`${err.message}\nthe outbox for this address at ${new Date().toISOString()}:\n${await outboxFor('tamsin@ferncombe.example')}\ncaught: ${catcher.messages.map((m) => `${m.to.join(',')} ${m.subject}`).join('; ') || 'nothing'}`);
-  });
+  const mail = await catcher
+    .waitFor('tamsin@ferncombe.example', new RegExp(`^New answer: ${title}$`), 60_000)
+    .catch(async (err: Error) => {
+      throw new Error(
+        `${err.message}\nthe outbox for this address at ${new Date().toISOString()}:\n${await outboxFor('tamsin@ferncombe.example')}\ncaught: ${catcher.messages.map((m) => `${m.to.join(',')} ${m.subject}`).join('; ') || 'nothing'}`,
+      );
+    });
   expect(mail.text).toContain('Quarry Lane Valves wrote:');
   expect(mail.html).toContain('check the snifter and the air chamber cushion');
   const unsubscribe = /Stop these e-mails: (\S+)/.exec(mail.text)![1];
@@ -70,7 +83,9 @@ test('an admin sees the outbox, with what was sent', async ({ page }) => {
   await page.goto('/admin/outbox?status=sent');
   await expect(page.getByRole('heading', { level: 1, name: 'E-mail outbox' })).toBeVisible();
   const sent = page.locator('[data-outbox-status="sent"]').filter({ hasText: 'tamsin@ferncombe.example' }).first();
-  await expect(sent).toBeVisible().catch(async (err: Error) => {
-    throw new Error(`${err.message}\nthe outbox for this address:\n${await outboxFor('tamsin@ferncombe.example')}`);
-  });
+  await expect(sent)
+    .toBeVisible()
+    .catch(async (err: Error) => {
+      throw new Error(`${err.message}\nthe outbox for this address:\n${await outboxFor('tamsin@ferncombe.example')}`);
+    });
 });

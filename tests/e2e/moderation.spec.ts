@@ -37,7 +37,9 @@ test.describe.serial('moderation', () => {
     await answer.getByRole('button', { name: 'Flag', exact: true }).click();
     const form = answer.getByRole('form', { name: 'Flag this answer' });
     await form.getByLabel('unsafe advice').check();
-    await form.getByLabel(/Note for the moderator/).fill('A PVC air chamber left charged through a freeze can split; this does not say to drain it.');
+    await form
+      .getByLabel(/Note for the moderator/)
+      .fill('A PVC air chamber left charged through a freeze can split; this does not say to drain it.');
     await form.getByRole('button', { name: 'Send flag' }).click();
     await expect(answer.getByRole('status')).toHaveText('Flagged — a moderator will look at it');
 
@@ -67,11 +69,19 @@ test.describe.serial('moderation', () => {
     await item.getByRole('link', { name: QUESTION }).click();
     await expect(page.getByRole('heading', { level: 1, name: QUESTION })).toBeVisible();
     await settled(page);
-    await expect(page.locator('[data-answer]').filter({ hasText: ANSWER_TEXT }).getByRole('note', { name: 'Flagged as unsafe advice' })).toBeVisible();
+    await expect(
+      page
+        .locator('[data-answer]')
+        .filter({ hasText: ANSWER_TEXT })
+        .getByRole('note', { name: 'Flagged as unsafe advice' }),
+    ).toBeVisible();
     await page.goBack();
     await settled(page);
 
-    const panel = page.locator('[data-review-item]').filter({ hasText: ANSWER_TEXT }).getByRole('form', { name: 'Act on this answer' });
+    const panel = page
+      .locator('[data-review-item]')
+      .filter({ hasText: ANSWER_TEXT })
+      .getByRole('form', { name: 'Act on this answer' });
     await panel.getByLabel('Action', { exact: true }).selectOption('hide');
     await panel.getByLabel('Reason for this action').fill(HIDE_REASON);
     await panel.getByRole('button', { name: 'Apply' }).click();
@@ -81,7 +91,9 @@ test.describe.serial('moderation', () => {
     // The moderator still sees the answer in the thread, marked hidden.
     await page.goto(questionUrl);
     await settled(page);
-    await expect(page.locator('[data-answer]').filter({ hasText: ANSWER_TEXT }).getByTestId('moderation-state')).toContainText('hidden');
+    await expect(
+      page.locator('[data-answer]').filter({ hasText: ANSWER_TEXT }).getByTestId('moderation-state'),
+    ).toContainText('hidden');
 
     await asVisitor(browser, questionUrl, async (v) => {
       await expect(v.getByRole('heading', { level: 1, name: QUESTION })).toBeVisible();

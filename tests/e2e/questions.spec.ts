@@ -47,7 +47,10 @@ test('an unknown page gets the not-found page', async ({ page }) => {
   await expect(page.getByRole('heading', { name: 'Nothing here' })).toBeVisible();
 });
 
-test('with the database stopped, pages explain in plain words and recover when it returns', async ({ page, request }) => {
+test('with the database stopped, pages explain in plain words and recover when it returns', async ({
+  page,
+  request,
+}) => {
   const db = (action: string) =>
     execFileSync('bash', ['scripts/db.sh', action], { env: { ...process.env, CLACKWATER_ENV: 'test' }, stdio: 'pipe' });
   db('stop');

@@ -1,15 +1,24 @@
 import { test, expect } from '@playwright/test';
 
-test('the header search finds the thread and the guide section for a builder’s question, with the words marked', async ({ page }) => {
+test('the header search finds the thread and the guide section for a builder’s question, with the words marked', async ({
+  page,
+}) => {
   await page.goto('/guides');
-  await page.getByRole('searchbox', { name: 'Search Clackwater' }).fill('Has anyone had a 1-inch pump stop when the creek drops?');
+  await page
+    .getByRole('searchbox', { name: 'Search Clackwater' })
+    .fill('Has anyone had a 1-inch pump stop when the creek drops?');
   await page.keyboard.press('Enter');
   await expect(page).toHaveURL(/\/search\?q=Has\+anyone/);
   const results = page.getByRole('listbox', { name: 'Results' });
   const first = results.getByRole('option').first();
   await expect(first).toContainText('1-inch pump stops every dry spell when the creek drops');
   await expect(first.locator('mark').first()).toBeVisible();
-  await expect(results.getByRole('option').filter({ hasText: /^Guide/ }).first()).toBeVisible();
+  await expect(
+    results
+      .getByRole('option')
+      .filter({ hasText: /^Guide/ })
+      .first(),
+  ).toBeVisible();
 });
 
 test('results follow each keystroke; arrows and Enter open one; filters narrow them', async ({ page }) => {
@@ -19,7 +28,9 @@ test('results follow each keystroke; arrows and Enter open one; filters narrow t
   await box.pressSequentially('impulse valve', { delay: 30 });
   const results = page.getByRole('listbox', { name: 'Results' });
   // another name for the waste valve still finds the thread about its weight
-  await expect(results.getByRole('option').filter({ hasText: 'What weight on the waste valve for 4 ft of fall?' })).toBeVisible();
+  await expect(
+    results.getByRole('option').filter({ hasText: 'What weight on the waste valve for 4 ft of fall?' }),
+  ).toBeVisible();
   await expect(page).toHaveURL(/q=impulse\+valve/);
 
   await page.getByLabel('Show').selectOption({ label: 'Guides' });
@@ -41,7 +52,12 @@ test('sizes match however they are written; nothing found suggests guides and th
   // the demo thread's drive pipe is written ¾" (19.05 mm: ASME B36.10M-2018 nominal sizes)
   const thread = page.getByRole('option').filter({ hasText: 'drive pipe too short?' });
   await expect(thread).toBeVisible();
-  await expect(thread.locator('mark').filter({ hasText: /¾"|3\/4 inch/ }).first()).toBeVisible();
+  await expect(
+    thread
+      .locator('mark')
+      .filter({ hasText: /¾"|3\/4 inch/ })
+      .first(),
+  ).toBeVisible();
 
   await page.goto('/search?q=zzyzx%20quixotic');
   const none = page.getByRole('region', { name: 'No results' });

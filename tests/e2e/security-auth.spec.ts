@@ -19,9 +19,18 @@ test.describe('rotating X-Forwarded-For', () => {
     // counts in this instance's memory, so spending this address's sign-in tries here
     // leaves the shared ones (RATE_LIMIT_STORE=mariadb) of the main instance alone
     const env = { ...serverEnv(C), RATE_LIMIT_STORE: 'memory' };
-    server = spawn('node', ['scripts/server.mjs', '-p', String(PORT_C), '-H', '127.0.0.1'], { env: env as unknown as NodeJS.ProcessEnv, stdio: 'ignore' });
+    server = spawn('node', ['scripts/server.mjs', '-p', String(PORT_C), '-H', '127.0.0.1'], {
+      env: env as unknown as NodeJS.ProcessEnv,
+      stdio: 'ignore',
+    });
     for (let i = 0; i < 120; i++) {
-      if (await fetch(`${C}/api/health`).then((r) => r.ok, () => false)) return;
+      if (
+        await fetch(`${C}/api/health`).then(
+          (r) => r.ok,
+          () => false,
+        )
+      )
+        return;
       await new Promise((r) => setTimeout(r, 500));
     }
     throw new Error(`the third instance did not start on ${C}`);
@@ -39,7 +48,13 @@ test.describe('rotating X-Forwarded-For', () => {
       const res = await api.post('/api/auth/callback/password', {
         headers: { 'x-forwarded-for': `198.51.100.${i}` },
         // a different unknown address each time: only the per-address limit can refuse
-        form: { csrfToken, email: `nobody${i}@nowhere.example`, password: 'not the password at all', json: 'true', callbackUrl: C },
+        form: {
+          csrfToken,
+          email: `nobody${i}@nowhere.example`,
+          password: 'not the password at all',
+          json: 'true',
+          callbackUrl: C,
+        },
       });
       const { url } = await res.json();
       errors.push(new URL(url).searchParams.get('error') ?? '(none)');

@@ -13,7 +13,11 @@ async function questionId(page: Page, title: string): Promise<number> {
 test.describe.serial('thread pages from the page cache', () => {
   let id = 0;
 
-  test('the page is kept and served again, with nothing of any reader in it; units are the reader’s', async ({ page, browser, baseURL }) => {
+  test('the page is kept and served again, with nothing of any reader in it; units are the reader’s', async ({
+    page,
+    browser,
+    baseURL,
+  }) => {
     id = await questionId(page, TITLE);
     const first = await page.request.get(`/questions/${id}`);
     expect(first.status()).toBe(200);
@@ -34,13 +38,17 @@ test.describe.serial('thread pages from the page cache', () => {
     await expect(page.getByTestId('site-sheet')).toContainText('4 ft');
   });
 
-  test('a signed-in reader gets their own controls on the same page; a hidden question is gone for readers and shown to moderators', async ({ browser }) => {
+  test('a signed-in reader gets their own controls on the same page; a hidden question is gone for readers and shown to moderators', async ({
+    browser,
+  }) => {
     const member = await signedIn(browser, 'shepherd@highcrag.example');
     await member.goto(`/questions/${id}`);
     await expect(member.getByRole('form', { name: 'Your answer' })).toBeVisible();
 
     const moderator = await signedIn(browser, 'moss@clackwater.example');
-    const hide = await moderator.request.post('/api/review/actions', { data: { action: 'hide', postType: 'question', postId: id, reason: 'checking the page cache' } });
+    const hide = await moderator.request.post('/api/review/actions', {
+      data: { action: 'hide', postType: 'question', postId: id, reason: 'checking the page cache' },
+    });
     expect(hide.status()).toBe(200);
     const gone = await member.request.get(`/questions/${id}`);
     expect(gone.status()).toBe(404);
@@ -49,7 +57,9 @@ test.describe.serial('thread pages from the page cache', () => {
     await expect(moderator.getByRole('status').filter({ hasText: 'You see it as a moderator' })).toBeVisible();
     await expect(moderator.getByRole('heading', { level: 1, name: TITLE })).toBeVisible();
 
-    const restore = await moderator.request.post('/api/review/actions', { data: { action: 'restore', postType: 'question', postId: id, reason: 'done checking' } });
+    const restore = await moderator.request.post('/api/review/actions', {
+      data: { action: 'restore', postType: 'question', postId: id, reason: 'done checking' },
+    });
     expect(restore.status()).toBe(200);
     expect((await member.request.get(`/questions/${id}`)).status()).toBe(200);
     await member.context().close();

@@ -74,7 +74,10 @@ export function docBlocks(source: string, file: string): DocBlock[] {
     const body = m[1] ?? '';
     const text = body.split('\n').map((l) => l.replace(/^\s*\* ?/, ''));
     const after = source.slice(m.index + m[0].length);
-    const decl = /^\s*export\s+(?:async\s+)?(?:function\s*\*?\s*|const\s+|let\s+|class\s+|interface\s+|type\s+)([A-Za-z_$][\w$]*)/.exec(after);
+    const decl =
+      /^\s*export\s+(?:async\s+)?(?:function\s*\*?\s*|const\s+|let\s+|class\s+|interface\s+|type\s+)([A-Za-z_$][\w$]*)/.exec(
+        after,
+      );
     blocks.push({ file, line: start, owner: decl?.[1], text });
   }
   return blocks;
@@ -144,7 +147,14 @@ export function examplesOf(block: DocBlock): Example[] {
         current = undefined;
       }
       if (tag[1] === 'example') {
-        current = { file: block.file, line: lineNo, caption: (tag[2] ?? '').trim(), owner: block.owner, statements: [], malformed: [] };
+        current = {
+          file: block.file,
+          line: lineNo,
+          caption: (tag[2] ?? '').trim(),
+          owner: block.owner,
+          statements: [],
+          malformed: [],
+        };
       }
       return;
     }
@@ -172,7 +182,8 @@ function readStatement(text: string, line: number, ex: Example): Statement[] {
   let m = THROWS.exec(text);
   if (m) return [{ line, expectation: { kind: 'throws', code: (m[1] ?? '').trim(), expected: m[2] ?? '', line } }];
   m = EXACT.exec(text);
-  if (m) return [{ line, expectation: { kind: 'exact', code: (m[1] ?? '').trim(), expected: (m[2] ?? '').trim(), line } }];
+  if (m)
+    return [{ line, expectation: { kind: 'exact', code: (m[1] ?? '').trim(), expected: (m[2] ?? '').trim(), line } }];
   m = APPROX.exec(text);
   if (m) {
     const a = parseApprox(m[2] ?? '');
@@ -180,7 +191,18 @@ function readStatement(text: string, line: number, ex: Example): Statement[] {
       ex.malformed.push({ line, text, why: a });
       return [];
     }
-    return [{ line, expectation: { kind: 'approx', code: (m[1] ?? '').trim(), expected: String(a.value), tolerance: a.tolerance, line } }];
+    return [
+      {
+        line,
+        expectation: {
+          kind: 'approx',
+          code: (m[1] ?? '').trim(),
+          expected: String(a.value),
+          tolerance: a.tolerance,
+          line,
+        },
+      },
+    ];
   }
   if (/^(const|let)\s/.test(text)) return [{ line, setup: text.replace(/;?\s*$/, ';') }];
   ex.malformed.push({ line, text, why: 'an expression needs "// ≈ value", "// → value" or "// throws Name"' });
@@ -196,7 +218,11 @@ const IDENT = /^[A-Za-z_$][\w$]*$/;
 
 /** Runs one example with `scope` (exported names → values) and returns what disagreed. */
 export function runExample(ex: Example, scope: Record<string, unknown>): Failure[] {
-  const failures: Failure[] = ex.malformed.map((m) => ({ line: m.line, code: m.text, message: `malformed example line: ${m.why}` }));
+  const failures: Failure[] = ex.malformed.map((m) => ({
+    line: m.line,
+    code: m.text,
+    message: `malformed example line: ${m.why}`,
+  }));
   if (ex.statements.every((s) => !s.expectation)) {
     failures.push({ line: ex.line, code: '', message: 'example has no checked line' });
   }
@@ -216,7 +242,10 @@ export function runExample(ex: Example, scope: Record<string, unknown>): Failure
       const fail = (message: string) => failures.push({ line: e.line, code: e.code, message });
       if (e.kind === 'throws') {
         if (r.ok) fail(`expected it to throw ${e.expected}, got ${inspect(r.value)}`);
-        else if (!(r.error instanceof Error) || (r.error.name !== e.expected && r.error.constructor.name !== e.expected)) {
+        else if (
+          !(r.error instanceof Error) ||
+          (r.error.name !== e.expected && r.error.constructor.name !== e.expected)
+        ) {
           fail(`expected ${e.expected}, it threw ${inspect(r.error)}`);
         }
         return;
@@ -248,7 +277,11 @@ export function runExample(ex: Example, scope: Record<string, unknown>): Failure
     // The examples are our own doc comments, read from the repository.
     new Function(...names, '__report', body)(...values, checks);
   } catch (error) {
-    failures.push({ line: ex.line, code: '', message: `example does not run: ${error instanceof Error ? error.message : String(error)}` });
+    failures.push({
+      line: ex.line,
+      code: '',
+      message: `example does not run: ${error instanceof Error ? error.message : String(error)}`,
+    });
   }
   return failures;
 }

@@ -12,7 +12,10 @@ import * as friction from '@/lib/hydraulics/friction';
 import { docBlocks, extractExamples, runExample, writtenPrecision, type Example } from './doctest-runner';
 
 const DIR = path.resolve(__dirname, '../../lib/hydraulics');
-const FILES = fs.readdirSync(DIR).filter((f) => f.endsWith('.ts')).sort();
+const FILES = fs
+  .readdirSync(DIR)
+  .filter((f) => f.endsWith('.ts'))
+  .sort();
 const sources = new Map(FILES.map((f) => [f, fs.readFileSync(path.join(DIR, f), 'utf8')]));
 const examples: Example[] = FILES.flatMap((f) => extractExamples(sources.get(f)!, f));
 
@@ -37,7 +40,7 @@ describe('engine doc-comment examples', () => {
 
 /** Exported functions exempt from needing an example: they compute nothing a reader would check. */
 const NO_NUMBER: Record<string, string> = {
-  addRangeIssue: 'adds a zod issue inside a refinement; covered by every calculator\'s invalid-input tests',
+  addRangeIssue: "adds a zod issue inside a refinement; covered by every calculator's invalid-input tests",
 };
 
 /** Engine files whose exports compute nothing (none today). */
@@ -76,10 +79,12 @@ describe('the doctest runner itself', () => {
   });
 
   it('passes the same example when it is right', () => {
-    expect(run(`/**
+    expect(
+      run(`/**
  * @example
  * reynolds(1, 0.0266, 1.306e-6)  // ≈ 20368
- */`)).toEqual([]);
+ */`),
+    ).toEqual([]);
   });
 
   it('checks a number to the digits written when no tolerance is given', () => {
@@ -104,9 +109,13 @@ describe('the doctest runner itself', () => {
 
   it('reports a line with no marker, an unknown name, and an example with nothing checked', () => {
     expect(run('/**\n * @example\n * reynolds(1, 0.0266, 1.306e-6) = 20368\n */')[0]!.message).toMatch(/malformed/);
-    expect(run('/**\n * @example\n * noSuchFunction(1)  // ≈ 1\n */')[0]!.message).toMatch(/noSuchFunction is not defined/);
+    expect(run('/**\n * @example\n * noSuchFunction(1)  // ≈ 1\n */')[0]!.message).toMatch(
+      /noSuchFunction is not defined/,
+    );
     expect(run('/**\n * @example\n * // only prose here\n */')[0]!.message).toMatch(/no checked line/);
-    expect(run('/**\n * @example\n * reynolds(1, 0.0266, 1.306e-6)  // ≈ about twenty thousand\n */')[0]!.message).toMatch(/malformed/);
+    expect(
+      run('/**\n * @example\n * reynolds(1, 0.0266, 1.306e-6)  // ≈ about twenty thousand\n */')[0]!.message,
+    ).toMatch(/malformed/);
   });
 
   it('joins an expression over lines, runs setup lines and knows its owner', () => {

@@ -5,7 +5,14 @@ import { FALL, LIFT, ft } from './fixtures';
 describe('rigid-column beat model', () => {
   const nu = waterProperties(10).kinematicViscosityM2s;
   const p = resolvePipe('pvc-sch40', '1/2');
-  const c = estimateDriveFlow({ fallM: FALL, pumpHeadM: LIFT, lengthM: ft(20), insideDiameterM: p.insideDiameterM, roughnessM: 1.5e-6, nu });
+  const c = estimateDriveFlow({
+    fallM: FALL,
+    pumpHeadM: LIFT,
+    lengthM: ft(20),
+    insideDiameterM: p.insideDiameterM,
+    roughnessM: 1.5e-6,
+    nu,
+  });
   it('predicts about the common-practice drive flow of a ½-inch ram', () => {
     // common practice, no source: a ½" pump at 4 ft of fall uses about 2 US gal/min. The model (α = 0.8,
     // K values from Munson Table 8.2, from memory) is not tuned to it; it should land within ±35 %.
@@ -23,7 +30,15 @@ describe('rigid-column beat model', () => {
     expect(c.fullFlowVelocityMs).toBeCloseTo(Math.sqrt((2 * 9.80665 * FALL) / c.lossCoefficient), 9);
   });
   it('an elbow lowers the full-flow velocity', () => {
-    const e = estimateDriveFlow({ fallM: FALL, pumpHeadM: LIFT, lengthM: ft(20), insideDiameterM: p.insideDiameterM, roughnessM: 1.5e-6, nu, fittingsK: 1.5 });
+    const e = estimateDriveFlow({
+      fallM: FALL,
+      pumpHeadM: LIFT,
+      lengthM: ft(20),
+      insideDiameterM: p.insideDiameterM,
+      roughnessM: 1.5e-6,
+      nu,
+      fittingsK: 1.5,
+    });
     expect(e.fullFlowVelocityMs).toBeLessThan(c.fullFlowVelocityMs);
     expect(e.lossCoefficient).toBeGreaterThan(c.lossCoefficient + 1.4);
   });

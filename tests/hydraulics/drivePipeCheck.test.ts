@@ -1,5 +1,12 @@
 import { describe, expect, it } from 'vitest';
-import { DRIVE_PIPE_GUIDES, EngineInputError, checkDrivePipe, resolvePipe, toSI, waterProperties } from '@/lib/hydraulics';
+import {
+  DRIVE_PIPE_GUIDES,
+  EngineInputError,
+  checkDrivePipe,
+  resolvePipe,
+  toSI,
+  waterProperties,
+} from '@/lib/hydraulics';
 import { FALL, LIFT, drivePipe, ft } from './fixtures';
 
 describe('drive pipe check', () => {
@@ -12,7 +19,11 @@ describe('drive pipe check', () => {
   });
   it('cites the guidance and where sources disagree', () => {
     // L/H 3–12 (US extension publications), 5–12 (handbooks), L/D 150–1000 (Calvert) — all from memory
-    expect(DRIVE_PIPE_GUIDES.map((g) => [g.min, g.max])).toEqual([[3, 12], [5, 12], [150, 1000]]);
+    expect(DRIVE_PIPE_GUIDES.map((g) => [g.min, g.max])).toEqual([
+      [3, 12],
+      [5, 12],
+      [150, 1000],
+    ]);
     const between = checkDrivePipe({ fallM: FALL, drivePipe: { ...drivePipe('1'), lengthM: ft(16) } });
     expect(between.warnings.map((w) => w.code)).toContain('drive-guides-disagree');
   });
@@ -20,7 +31,9 @@ describe('drive pipe check', () => {
     const w = waterProperties(10);
     const p = resolvePipe('pvc-sch40', '1');
     // Korteweg, as in Wylie & Streeter (1993): c = √((K/ρ)/(1 + KD/(Ee))) with E = 2.76 GPa (ASTM D1784, from memory)
-    const c = Math.sqrt(w.bulkModulusPa / w.densityKgM3 / (1 + (w.bulkModulusPa * p.insideDiameterM) / (2.76e9 * p.wallThicknessM)));
+    const c = Math.sqrt(
+      w.bulkModulusPa / w.densityKgM3 / (1 + (w.bulkModulusPa * p.insideDiameterM) / (2.76e9 * p.wallThicknessM)),
+    );
     expect(r.results.waveSpeedMs).toBeCloseTo(c, 9);
     expect(c).toBeGreaterThan(500); // thick-walled 1" sch 40 PVC, ≈ 548 m/s
     // Joukowsky (1900): Δp = ρ·c·v₀
@@ -31,7 +44,10 @@ describe('drive pipe check', () => {
     expect(r.results.ratingMargin).toBeCloseTo(toSI(450, 'psi', 'pressure') / r.results.peakPressurePa, 9);
   });
   it('warns when the surge exceeds the rating, deferring to codes and professionals', () => {
-    const weak = checkDrivePipe({ fallM: 20, drivePipe: { ...drivePipe('1'), lengthM: 100, pressureRatingPa: toSI(100, 'psi', 'pressure') } });
+    const weak = checkDrivePipe({
+      fallM: 20,
+      drivePipe: { ...drivePipe('1'), lengthM: 100, pressureRatingPa: toSI(100, 'psi', 'pressure') },
+    });
     const w = weak.warnings.find((x) => x.code === 'surge-exceeds-rating');
     expect(w).toBeDefined();
     expect(w!.severity).toBe('danger');

@@ -1,8 +1,14 @@
 /** Invalid input gets a typed error naming the field and the accepted range. */
 import { describe, expect, it } from 'vitest';
 import {
-  EngineInputError, checkDeliveryLine, checkDrivePipe, estimateYield, measureSourceFlow, planArray,
-  planDemandAndStorage, runStallCheck,
+  EngineInputError,
+  checkDeliveryLine,
+  checkDrivePipe,
+  estimateYield,
+  measureSourceFlow,
+  planArray,
+  planDemandAndStorage,
+  runStallCheck,
 } from '@/lib/hydraulics';
 import { FALL, LIFT, deliveryLine, drivePipe } from './fixtures';
 
@@ -48,21 +54,40 @@ describe('typed errors', () => {
   });
 
   it('nested fields carry their path', () => {
-    const e = errorOf(() => planArray({ fallM: FALL, liftM: LIFT, pumps: [{ drivePipe: { ...drivePipe('1/2'), lengthM: -3 } }], deliveryLine: deliveryLine() }));
+    const e = errorOf(() =>
+      planArray({
+        fallM: FALL,
+        liftM: LIFT,
+        pumps: [{ drivePipe: { ...drivePipe('1/2'), lengthM: -3 } }],
+        deliveryLine: deliveryLine(),
+      }),
+    );
     expect(e.field).toBe('pumps.0.drivePipe.lengthM');
     expect(e.range).toMatchObject({ min: 0, minExclusive: true, max: 500, unit: 'm' });
   });
 
   it('every calculator validates', () => {
-    expect(() => planArray({ fallM: 0, liftM: LIFT, pumps: [], deliveryLine: deliveryLine() })).toThrow(EngineInputError);
+    expect(() => planArray({ fallM: 0, liftM: LIFT, pumps: [], deliveryLine: deliveryLine() })).toThrow(
+      EngineInputError,
+    );
     expect(() => checkDrivePipe({ fallM: Number.NaN, drivePipe: drivePipe('1') })).toThrow(EngineInputError);
     expect(() => checkDeliveryLine({ flowM3s: 1e-5, liftM: -2, line: deliveryLine() })).toThrow(EngineInputError);
-    expect(() => measureSourceFlow({ method: 'bucket', trials: [{ volumeM3: 0.01, timeS: 0 }] })).toThrow(/trials\.0\.timeS/);
+    expect(() => measureSourceFlow({ method: 'bucket', trials: [{ volumeM3: 0.01, timeS: 0 }] })).toThrow(
+      /trials\.0\.timeS/,
+    );
     expect(() => measureSourceFlow({ method: 'v-notch', notchHeadM: 0.1, angleDeg: 120 })).toThrow(/angleDeg/);
     expect(() => planDemandAndStorage({ deliveredFlowM3s: 1e-5, people: 2.5 })).toThrow(/people/);
     const e = errorOf(() => runStallCheck({ site: { fallM: 3, liftM: 2, drivePipe: drivePipe('1/2') } }));
     expect(e.field).toBe('site.liftM');
     expect(e.range).toMatchObject({ min: 3, minExclusive: true });
-    expect(() => planArray({ fallM: FALL, liftM: LIFT, pumps: [{ drivePipe: drivePipe('1/2') }], deliveryLine: deliveryLine(), staged: { upperFallM: 3, upperLiftM: 2, upperPump: { drivePipe: drivePipe('1/2') } } })).toThrow(/staged\.upperLiftM/);
+    expect(() =>
+      planArray({
+        fallM: FALL,
+        liftM: LIFT,
+        pumps: [{ drivePipe: drivePipe('1/2') }],
+        deliveryLine: deliveryLine(),
+        staged: { upperFallM: 3, upperLiftM: 2, upperPump: { drivePipe: drivePipe('1/2') } },
+      }),
+    ).toThrow(/staged\.upperLiftM/);
   });
 });

@@ -19,7 +19,11 @@ export const LIFT = ft(29);
  * pipe is sold in (common practice, no source); 20 ft is 5 × the 4-ft fall,
  * inside the cited 3–12 H and 150–1000 D ranges for ½" and 1¼".
  */
-export function drivePipe(size: NominalSize, series: PipeSeries = 'pvc-sch40', fittings: { kind: 'elbow-90-threaded' }[] = []) {
+export function drivePipe(
+  size: NominalSize,
+  series: PipeSeries = 'pvc-sch40',
+  fittings: { kind: 'elbow-90-threaded' }[] = [],
+) {
   const p = resolvePipe(series, size);
   return {
     lengthM: ft(20),
@@ -34,5 +38,10 @@ export function drivePipe(size: NominalSize, series: PipeSeries = 'pvc-sch40', f
 /** 100 ft of ½" or ¾" sch 40 PVC delivery line. */
 export function deliveryLine(size: NominalSize = '1/2', lengthFt = 100) {
   const p = resolvePipe('pvc-sch40', size);
-  return { lengthM: ft(lengthFt), insideDiameterM: p.insideDiameterM, material: p.material, pressureRatingPa: p.pressureRatingPa };
+  return {
+    lengthM: ft(lengthFt),
+    insideDiameterM: p.insideDiameterM,
+    material: p.material,
+    pressureRatingPa: p.pressureRatingPa,
+  };
 }

@@ -1,7 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import { FITTING_K, NOMINAL_SIZES, fromSI, parseNominalSize, resolvePipe, sumK } from '@/lib/hydraulics';
 
-const idIn = (series: Parameters<typeof resolvePipe>[0], size: Parameters<typeof resolvePipe>[1]) => fromSI(resolvePipe(series, size).insideDiameterM, 'in', 'smallLength');
+const idIn = (series: Parameters<typeof resolvePipe>[0], size: Parameters<typeof resolvePipe>[1]) =>
+  fromSI(resolvePipe(series, size).insideDiameterM, 'in', 'smallLength');
 const psi = (pa: number) => fromSI(pa, 'psi', 'pressure');
 
 describe('nominal pipe sizes', () => {
@@ -53,6 +54,12 @@ describe('fitting loss coefficients', () => {
     expect(FITTING_K['entrance-sharp']).toBe(0.5);
     expect(FITTING_K.exit).toBe(1);
     // arithmetic: 2 × 1.5 + 0.15 + custom 0.35 = 3.5
-    expect(sumK([{ kind: 'elbow-90-threaded', count: 2 }, { kind: 'gate-valve-open', count: 1 }, { k: 0.35, count: 1 }])).toBeCloseTo(3.5, 12);
+    expect(
+      sumK([
+        { kind: 'elbow-90-threaded', count: 2 },
+        { kind: 'gate-valve-open', count: 1 },
+        { k: 0.35, count: 1 },
+      ]),
+    ).toBeCloseTo(3.5, 12);
   });
 });

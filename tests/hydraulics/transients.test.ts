@@ -1,5 +1,13 @@
 import { describe, expect, it } from 'vitest';
-import { joukowskyHead, joukowskySurge, resolvePipe, slowClosureSurge, waterProperties, waveRoundTrip, waveSpeed } from '@/lib/hydraulics';
+import {
+  joukowskyHead,
+  joukowskySurge,
+  resolvePipe,
+  slowClosureSurge,
+  waterProperties,
+  waveRoundTrip,
+  waveSpeed,
+} from '@/lib/hydraulics';
 
 const w = waterProperties(20);
 
@@ -38,7 +46,7 @@ describe('Joukowsky surge', () => {
   it('slow closure gives less (Michaud)', () => {
     // Wylie & Streeter (1993), §1.2: for t_c > 2L/c, Δp ≈ 2ρLΔv/t_c (from memory)
     expect(waveRoundTrip(6.1, 550)).toBeCloseTo(0.02218, 5);
-    expect(slowClosureSurge(998.2, 6.1, 1, 0.05, 550)).toBeCloseTo(2 * 998.2 * 6.1 / 0.05, 6);
+    expect(slowClosureSurge(998.2, 6.1, 1, 0.05, 550)).toBeCloseTo((2 * 998.2 * 6.1) / 0.05, 6);
     expect(slowClosureSurge(998.2, 6.1, 1, 0.01, 550)).toBeCloseTo(joukowskySurge(998.2, 550, 1), 6);
   });
 });

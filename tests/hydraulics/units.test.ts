@@ -2,8 +2,17 @@ import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { unit as mathUnit } from 'mathjs';
 import {
-  EngineInputError, UNIT_CHOICES, fieldFromDisplay, fieldToDisplay, fromDisplay, fromSI,
-  kindOfField, parseQuantity, toDisplay, toSI, type QuantityKind,
+  EngineInputError,
+  UNIT_CHOICES,
+  fieldFromDisplay,
+  fieldToDisplay,
+  fromDisplay,
+  fromSI,
+  kindOfField,
+  parseQuantity,
+  toDisplay,
+  toSI,
+  type QuantityKind,
 } from '@/lib/hydraulics';
 
 describe('exact conversion factors', () => {
@@ -130,13 +139,29 @@ describe('display helpers', () => {
 
 describe('round trips', () => {
   // property: converting to a display unit and back returns the input (floating-point tolerance)
-  const kinds: QuantityKind[] = ['length', 'smallLength', 'flow', 'smallFlow', 'volume', 'dailyVolume', 'pressure', 'velocity', 'area', 'temperature'];
+  const kinds: QuantityKind[] = [
+    'length',
+    'smallLength',
+    'flow',
+    'smallFlow',
+    'volume',
+    'dailyVolume',
+    'pressure',
+    'velocity',
+    'area',
+    'temperature',
+  ];
   it('SI → display → SI', () => {
     fc.assert(
-      fc.property(fc.constantFrom(...kinds), fc.constantFrom('US' as const, 'metric' as const), fc.double({ min: 1e-6, max: 1e6, noNaN: true }), (kind, system, si) => {
-        const back = fromDisplay(kind, toDisplay(kind, si, system).value, system);
-        expect(Math.abs(back - si)).toBeLessThanOrEqual(1e-9 * Math.max(1, Math.abs(si)));
-      }),
+      fc.property(
+        fc.constantFrom(...kinds),
+        fc.constantFrom('US' as const, 'metric' as const),
+        fc.double({ min: 1e-6, max: 1e6, noNaN: true }),
+        (kind, system, si) => {
+          const back = fromDisplay(kind, toDisplay(kind, si, system).value, system);
+          expect(Math.abs(back - si)).toBeLessThanOrEqual(1e-9 * Math.max(1, Math.abs(si)));
+        },
+      ),
     );
   });
   it('unit → SI → unit for every picker unit', () => {

@@ -22,7 +22,14 @@ import { PUT as putRole } from '@/app/api/admin/users/[id]/role/route';
 import { GET as getSettings, PUT as putSettings } from '@/app/api/account/settings/route';
 import { GET as getChecks, POST as postCheck } from '@/app/api/guides/[slug]/safety-checks/route';
 
-type Handle = 'ferncombe_tamsin' | 'highcrag_shepherd' | 'sorrel_cabin' | 'ironwheel_builds' | 'quarry_lane_valves' | 'moss_moderator' | 'clack_admin';
+type Handle =
+  | 'ferncombe_tamsin'
+  | 'highcrag_shepherd'
+  | 'sorrel_cabin'
+  | 'ironwheel_builds'
+  | 'quarry_lane_valves'
+  | 'moss_moderator'
+  | 'clack_admin';
 
 async function userByHandle(handle: Handle) {
   const u = await initModels().User.findOne({ where: { handle } });
@@ -33,7 +40,10 @@ async function userByHandle(handle: Handle) {
 /** A next-auth session cookie for a seeded member, as the browser would send it. */
 async function cookieFor(handle: Handle) {
   const user = await userByHandle(handle);
-  const token = await encode({ token: { uid: user.id, role: user.role, handle: user.handle, sv: user.sessionVersion }, secret: authSecret() });
+  const token = await encode({
+    token: { uid: user.id, role: user.role, handle: user.handle, sv: user.sessionVersion },
+    secret: authSecret(),
+  });
   return `next-auth.session-token=${token}`;
 }
 
@@ -102,11 +112,16 @@ describe('expert applications', () => {
   });
 
   it('shows moderators the pending list with the applicant, and nobody else', async () => {
-    expect((await call(listApplications, 'GET', '/api/expert-applications', { as: 'ferncombe_tamsin' })).status).toBe(403);
+    expect((await call(listApplications, 'GET', '/api/expert-applications', { as: 'ferncombe_tamsin' })).status).toBe(
+      403,
+    );
     const list = await call(listApplications, 'GET', '/api/expert-applications', { as: 'moss_moderator' });
     expect(list.status).toBe(200);
     expect(list.body.items).toHaveLength(1);
-    expect(list.body.items[0].applicant).toMatchObject({ handle: 'ferncombe_tamsin', displayName: 'Tamsin at Ferncombe' });
+    expect(list.body.items[0].applicant).toMatchObject({
+      handle: 'ferncombe_tamsin',
+      displayName: 'Tamsin at Ferncombe',
+    });
   });
 
   it('refuses a decision from a member or an expert', async () => {
@@ -167,7 +182,11 @@ describe('expert applications', () => {
     const { ExpertApplication, Notice } = initModels();
     const moss = await userByHandle('moss_moderator');
     const decided = await ExpertApplication.findByPk(applicationId);
-    expect(decided).toMatchObject({ status: 'approved', decidedBy: moss.id, decisionNote: 'Your answers on frost damage were spot on.' });
+    expect(decided).toMatchObject({
+      status: 'approved',
+      decidedBy: moss.id,
+      decisionNote: 'Your answers on frost damage were spot on.',
+    });
     expect(decided?.decidedAt).toBeInstanceOf(Date);
     const notices = await Notice.findAll({ where: { userId: tamsin.id, kind: 'expert-decision' } });
     expect(notices).toHaveLength(1);
@@ -175,7 +194,11 @@ describe('expert applications', () => {
     // the e-mail is queued in the outbox with the decision, and sent by the worker after it commits
     const mail = await initModels().MailMessage.findAll({ where: { userId: tamsin.id, kind: 'expert-decision' } });
     expect(mail).toHaveLength(1);
-    expect(mail[0]).toMatchObject({ toAddress: 'tamsin@ferncombe.example', subject: 'You are now an expert on Clackwater', status: 'pending' });
+    expect(mail[0]).toMatchObject({
+      toAddress: 'tamsin@ferncombe.example',
+      subject: 'You are now an expert on Clackwater',
+      status: 'pending',
+    });
     expect(mail[0].textBody).toContain('Your answers on frost damage were spot on.');
   });
 
@@ -202,14 +225,23 @@ describe('expert applications', () => {
     expect(res.body.status).toBe('declined');
     expect((await userByHandle('sorrel_cabin')).role).toBe('member');
     const cabin = await userByHandle('sorrel_cabin');
-    expect(await initModels().MailMessage.count({ where: { userId: cabin.id, kind: 'expert-decision', status: 'pending' } })).toBe(1);
+    expect(
+      await initModels().MailMessage.count({ where: { userId: cabin.id, kind: 'expert-decision', status: 'pending' } }),
+    ).toBe(1);
   });
 
   it('does not let a moderator decide their own application', async () => {
     const { ExpertApplication } = initModels();
     const moss = await userByHandle('moss_moderator');
     // Policy refuses moderators an application of their own; one made before they became a moderator can exist.
-    const own = await ExpertApplication.create({ userId: moss.id, ...application, status: 'pending', decidedBy: null, decisionNote: null, decidedAt: null });
+    const own = await ExpertApplication.create({
+      userId: moss.id,
+      ...application,
+      status: 'pending',
+      decidedBy: null,
+      decisionNote: null,
+      decidedAt: null,
+    });
     const res = await call(decide, 'POST', `/api/expert-applications/${own.id}/decision`, {
       as: 'moss_moderator',
       body: { decision: 'approve', note: 'yes please' },
@@ -225,7 +257,11 @@ describe('admin roles', () => {
 
   it('lets an admin change a role, with a notice to the member', async () => {
     const shepherd = await userByHandle('highcrag_shepherd');
-    const res = await call(putRole, 'PUT', `/api/admin/users/${shepherd.id}/role`, { as: 'clack_admin', body: { role: 'moderator' }, params: { id: String(shepherd.id) } });
+    const res = await call(putRole, 'PUT', `/api/admin/users/${shepherd.id}/role`, {
+      as: 'clack_admin',
+      body: { role: 'moderator' },
+      params: { id: String(shepherd.id) },
+    });
     expect(res.status).toBe(200);
     expect(res.body).toMatchObject({ role: 'moderator', changed: true });
     expect((await shepherd.reload()).role).toBe('moderator');
@@ -235,7 +271,11 @@ describe('admin roles', () => {
 
   it('does not let an admin change their own role', async () => {
     const admin = await userByHandle('clack_admin');
-    const res = await call(putRole, 'PUT', `/api/admin/users/${admin.id}/role`, { as: 'clack_admin', body: { role: 'member' }, params: { id: String(admin.id) } });
+    const res = await call(putRole, 'PUT', `/api/admin/users/${admin.id}/role`, {
+      as: 'clack_admin',
+      body: { role: 'member' },
+      params: { id: String(admin.id) },
+    });
     expect(res.status).toBe(403);
     expect((await admin.reload()).role).toBe('admin');
   });
@@ -243,13 +283,36 @@ describe('admin roles', () => {
   it('refuses non-admins, 404s unknown members and 400s unknown roles', async () => {
     const tamsin = await userByHandle('ferncombe_tamsin');
     for (const as of ['ferncombe_tamsin', 'ironwheel_builds', 'moss_moderator'] as const) {
-      const res = await call(putRole, 'PUT', `/api/admin/users/${tamsin.id}/role`, { as, body: { role: 'admin' }, params: { id: String(tamsin.id) } });
+      const res = await call(putRole, 'PUT', `/api/admin/users/${tamsin.id}/role`, {
+        as,
+        body: { role: 'admin' },
+        params: { id: String(tamsin.id) },
+      });
       expect(res.status).toBe(403);
       expect(res.body.error.message).toBe('Only admins can change roles.');
     }
-    expect((await call(putRole, 'PUT', `/api/admin/users/${tamsin.id}/role`, { body: { role: 'admin' }, params: { id: String(tamsin.id) } })).status).toBe(401);
-    expect((await call(putRole, 'PUT', '/api/admin/users/999999/role', { as: 'clack_admin', body: { role: 'expert' }, params: { id: '999999' } })).status).toBe(404);
-    const bad = await call(putRole, 'PUT', `/api/admin/users/${tamsin.id}/role`, { as: 'clack_admin', body: { role: 'owner' }, params: { id: String(tamsin.id) } });
+    expect(
+      (
+        await call(putRole, 'PUT', `/api/admin/users/${tamsin.id}/role`, {
+          body: { role: 'admin' },
+          params: { id: String(tamsin.id) },
+        })
+      ).status,
+    ).toBe(401);
+    expect(
+      (
+        await call(putRole, 'PUT', '/api/admin/users/999999/role', {
+          as: 'clack_admin',
+          body: { role: 'expert' },
+          params: { id: '999999' },
+        })
+      ).status,
+    ).toBe(404);
+    const bad = await call(putRole, 'PUT', `/api/admin/users/${tamsin.id}/role`, {
+      as: 'clack_admin',
+      body: { role: 'owner' },
+      params: { id: String(tamsin.id) },
+    });
     expect(bad.status).toBe(400);
     expect(bad.body.error.field).toBe('role');
     expect((await tamsin.reload()).role).toBe('member');
@@ -283,13 +346,30 @@ describe('account settings', () => {
     const res = await call(putSettings, 'PUT', '/api/account/settings', {
       as: 'ferncombe_tamsin',
       // an id or handle in the body is ignored: the session decides whose settings these are
-      body: { id: shepherd.id, handle: 'highcrag_shepherd', displayName: 'Tamsin F.', region: '', bio: 'Two rams on the brook.', units: 'metric' },
+      body: {
+        id: shepherd.id,
+        handle: 'highcrag_shepherd',
+        displayName: 'Tamsin F.',
+        region: '',
+        bio: 'Two rams on the brook.',
+        units: 'metric',
+      },
     });
     expect(res.status).toBe(200);
-    expect(res.body).toMatchObject({ handle: 'ferncombe_tamsin', displayName: 'Tamsin F.', region: '', units: 'metric' });
+    expect(res.body).toMatchObject({
+      handle: 'ferncombe_tamsin',
+      displayName: 'Tamsin F.',
+      region: '',
+      units: 'metric',
+    });
     expect(res.res.headers.get('set-cookie')).toMatch(/cw_units=metric/);
     const tamsin = await userByHandle('ferncombe_tamsin');
-    expect(tamsin).toMatchObject({ displayName: 'Tamsin F.', region: null, bio: 'Two rams on the brook.', units: 'metric' });
+    expect(tamsin).toMatchObject({
+      displayName: 'Tamsin F.',
+      region: null,
+      bio: 'Two rams on the brook.',
+      units: 'metric',
+    });
     expect((await shepherd.reload()).displayName).toBe(before);
     const mine = await call(getSettings, 'GET', '/api/account/settings', { as: 'ferncombe_tamsin' });
     expect(mine.body).toMatchObject({ displayName: 'Tamsin F.', units: 'metric' });
@@ -303,16 +383,30 @@ describe('recording safety checks', () => {
   const path = `/api/guides/${unchecked}/safety-checks`;
 
   it('refuses visitors (401) and members (403)', async () => {
-    expect((await call(postCheck, 'POST', path, { body: { verdict: 'sound' }, params: { slug: unchecked } })).status).toBe(401);
-    const member = await call(postCheck, 'POST', path, { as: 'ferncombe_tamsin', body: { verdict: 'sound' }, params: { slug: unchecked } });
+    expect(
+      (await call(postCheck, 'POST', path, { body: { verdict: 'sound' }, params: { slug: unchecked } })).status,
+    ).toBe(401);
+    const member = await call(postCheck, 'POST', path, {
+      as: 'ferncombe_tamsin',
+      body: { verdict: 'sound' },
+      params: { slug: unchecked },
+    });
     expect(member.status).toBe(403);
     expect(member.body.error.message).toBe('Only experts can record a safety check.');
   });
 
   it('404s an unknown guide and 400s a bad verdict', async () => {
-    const unknown = await call(postCheck, 'POST', '/api/guides/no-such-guide/safety-checks', { as: 'ironwheel_builds', body: { verdict: 'sound' }, params: { slug: 'no-such-guide' } });
+    const unknown = await call(postCheck, 'POST', '/api/guides/no-such-guide/safety-checks', {
+      as: 'ironwheel_builds',
+      body: { verdict: 'sound' },
+      params: { slug: 'no-such-guide' },
+    });
     expect(unknown.status).toBe(404);
-    const bad = await call(postCheck, 'POST', path, { as: 'ironwheel_builds', body: { verdict: 'fine' }, params: { slug: unchecked } });
+    const bad = await call(postCheck, 'POST', path, {
+      as: 'ironwheel_builds',
+      body: { verdict: 'fine' },
+      params: { slug: unchecked },
+    });
     expect(bad.status).toBe(400);
     expect(bad.body.error.field).toBe('verdict');
   });

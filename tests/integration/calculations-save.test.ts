@@ -13,7 +13,16 @@ const { call, raw } = actAs('10.13.1');
 
 async function member(handle: string, ageDays: number) {
   const made = new Date(Date.now() - ageDays * 86_400_000);
-  await initModels().User.create({ handle, displayName: handle, email: `${handle}@calc.example`, role: 'member', region: null, bio: null, emailVerifiedAt: made, createdAt: made });
+  await initModels().User.create({
+    handle,
+    displayName: handle,
+    email: `${handle}@calc.example`,
+    role: 'member',
+    region: null,
+    bio: null,
+    emailVerifiedAt: made,
+    createdAt: made,
+  });
 }
 
 /** The body exactly as a client wrote it: a JSON text with its own "__proto__" key. */
@@ -36,10 +45,13 @@ describe('POST /api/calculations keeps only the tool’s fields and has a flood 
       '{"tool":"yield-estimate","inputs":{"fall":"4 ft","lift":"29 ft","driveFlow":"2 gal/min","__proto__":"polluted","colour":"red","results":"99"}}',
     );
     expect(res.status).toBe(201);
-    const [row] = await getSequelize().query<{ inputs: string | Record<string, unknown> }>('SELECT inputs FROM worked_calculations WHERE public_id = ?', {
-      replacements: [res.body.id],
-      type: QueryTypes.SELECT,
-    });
+    const [row] = await getSequelize().query<{ inputs: string | Record<string, unknown> }>(
+      'SELECT inputs FROM worked_calculations WHERE public_id = ?',
+      {
+        replacements: [res.body.id],
+        type: QueryTypes.SELECT,
+      },
+    );
     const stored = typeof row.inputs === 'string' ? row.inputs : JSON.stringify(row.inputs);
     expect(stored).not.toMatch(/__proto__|colour|results|polluted/);
     const own = new Set(calculatorInputNames('yield-estimate'));
@@ -54,7 +66,8 @@ describe('POST /api/calculations keeps only the tool’s fields and has a flood 
     const body = { tool: 'yield-estimate', inputs: { fall: '4 ft', lift: '29 ft', driveFlow: '2 gal/min' } };
     let accepted = 0;
     // 60 an hour per account: our own allowance (lib/auth/rate-limit.ts), common practice, no source
-    for (let i = 0; i < 60; i++) if ((await call(calcPOST, 'POST', '/api/calculations', 'calc_flooder', body)).status === 201) accepted++;
+    for (let i = 0; i < 60; i++)
+      if ((await call(calcPOST, 'POST', '/api/calculations', 'calc_flooder', body)).status === 201) accepted++;
     expect(accepted).toBe(60);
     const limited = await raw(calcPOST, 'POST', '/api/calculations', 'calc_flooder', body);
     expect(limited.status).toBe(429);
@@ -64,10 +77,20 @@ describe('POST /api/calculations keeps only the tool’s fields and has a flood 
   it('refused saves do not use up the allowance', async () => {
     await member('calc_typo', 365);
     for (let i = 0; i < 60; i++) {
-      const bad = await call(calcPOST, 'POST', '/api/calculations', 'calc_typo', { tool: 'yield-estimate', inputs: { fall: 'four feet', lift: '29 ft', driveFlow: '2 gal/min' } });
+      const bad = await call(calcPOST, 'POST', '/api/calculations', 'calc_typo', {
+        tool: 'yield-estimate',
+        inputs: { fall: 'four feet', lift: '29 ft', driveFlow: '2 gal/min' },
+      });
       expect(bad.status).toBe(422);
     }
-    expect((await call(calcPOST, 'POST', '/api/calculations', 'calc_typo', { tool: 'yield-estimate', inputs: { fall: '4 ft', lift: '29 ft', driveFlow: '2 gal/min' } })).status).toBe(201);
+    expect(
+      (
+        await call(calcPOST, 'POST', '/api/calculations', 'calc_typo', {
+          tool: 'yield-estimate',
+          inputs: { fall: '4 ft', lift: '29 ft', driveFlow: '2 gal/min' },
+        })
+      ).status,
+    ).toBe(201);
   }, 60_000);
 });
 
@@ -76,7 +99,11 @@ describe('guarded() spends a member’s post allowance only on requests that pas
     await member('new_asker', 0);
     // a new member gets 6 posts an hour (lib/auth/rate-limit.ts, postNewAccount): common practice, no source
     for (let i = 0; i < 6; i++) {
-      const refused = await call(askPOST, 'POST', '/api/questions', 'new_asker', { title: 'short', body: 'The pump stops after a minute.', tags: ['stall'] });
+      const refused = await call(askPOST, 'POST', '/api/questions', 'new_asker', {
+        title: 'short',
+        body: 'The pump stops after a minute.',
+        tags: ['stall'],
+      });
       expect(refused.status).toBe(400);
       expect(refused.body.error.field).toBe('title');
     }

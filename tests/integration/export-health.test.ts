@@ -33,7 +33,9 @@ describe('field log export and /api/health under load (issue 17, item 15)', () =
     await health(); // open the health connection, as a running server has
     const max = pool().maxSize;
     // hold every connection of the pool for 3 s
-    const sleepers = Array.from({ length: max }, () => getSequelize().query('SELECT SLEEP(3)', { type: QueryTypes.SELECT }));
+    const sleepers = Array.from({ length: max }, () =>
+      getSequelize().query('SELECT SLEEP(3)', { type: QueryTypes.SELECT }),
+    );
     await new Promise((r) => setTimeout(r, 200));
     expect(pool().using).toBe(max);
     const during = await timedHealth();
@@ -44,7 +46,8 @@ describe('field log export and /api/health under load (issue 17, item 15)', () =
   }, 30_000);
 
   it('streams 60 exports at once through at most EXPORT_CONNECTIONS connections, each complete, with health fast throughout', async () => {
-    const total = (await (await list(new NextRequest('http://localhost/api/field-log?perPage=1'))).json()).total as number;
+    const total = (await (await list(new NextRequest('http://localhost/api/field-log?perPage=1'))).json())
+      .total as number;
     let most = 0;
     const sampler = setInterval(() => {
       most = Math.max(most, pool().using);

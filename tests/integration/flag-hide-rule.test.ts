@@ -17,7 +17,16 @@ async function accounts(prefix: string, n: number, opts: { ageDays: number; conf
   const handles: string[] = [];
   for (let i = 0; i < n; i++) {
     const handle = `${prefix}_${i}`;
-    await User.create({ handle, displayName: handle, email: `${handle}@flags.example`, role: 'member', region: null, bio: null, emailVerifiedAt: opts.confirmed ? made : null, createdAt: made });
+    await User.create({
+      handle,
+      displayName: handle,
+      email: `${handle}@flags.example`,
+      role: 'member',
+      region: null,
+      bio: null,
+      emailVerifiedAt: opts.confirmed ? made : null,
+      createdAt: made,
+    });
     handles.push(handle);
   }
   return handles;
@@ -25,18 +34,35 @@ async function accounts(prefix: string, n: number, opts: { ageDays: number; conf
 
 async function answerByRole(handle: string, role: Role) {
   const { User, Question, Answer } = initModels();
-  const author = (await User.findOne({ where: { handle } })) ?? (await User.create({ handle, displayName: handle, email: `${handle}@flags.example`, role, region: null, bio: null, emailVerifiedAt: new Date() }));
+  const author =
+    (await User.findOne({ where: { handle } })) ??
+    (await User.create({
+      handle,
+      displayName: handle,
+      email: `${handle}@flags.example`,
+      role,
+      region: null,
+      bio: null,
+      emailVerifiedAt: new Date(),
+    }));
   const q = (await Question.findOne({ order: [['id', 'ASC']] }))!;
-  return Answer.create({ questionId: q.id, authorId: author.id, body: 'Size the drive pipe for the fall, not the flow.' });
+  return Answer.create({
+    questionId: q.id,
+    authorId: author.id,
+    body: 'Size the drive pipe for the fall, not the flow.',
+  });
 }
 
 async function flagAll(handles: string[], postId: number, reason = 'spam') {
-  for (const who of handles) expect((await call(flagPOST, 'POST', '/api/flags', who, { postType: 'answer', postId, reason })).status).toBe(201);
+  for (const who of handles)
+    expect((await call(flagPOST, 'POST', '/api/flags', who, { postType: 'answer', postId, reason })).status).toBe(201);
 }
 
 const hiddenNow = async (id: number) => (await initModels().Answer.findByPk(id))!.hiddenAt !== null;
 const queued = async (id: number) =>
-  (await call(reviewGET, 'GET', '/api/review', 'moss_moderator')).body.items.some((i: { post: { type: string; id: number } }) => i.post.type === 'answer' && i.post.id === id);
+  (await call(reviewGET, 'GET', '/api/review', 'moss_moderator')).body.items.some(
+    (i: { post: { type: string; id: number } }) => i.post.type === 'answer' && i.post.id === id,
+  );
 
 describe('which flags hide a post by themselves (real MariaDB)', () => {
   let established: string[];

@@ -12,7 +12,11 @@ import { actAs } from '../support/act-as';
 const { call } = actAs('10.52');
 const catcher = new SmtpCatcher(Number(process.env.SMTP_PORT));
 const ask = (who: string, title: string, tags: string[]) =>
-  call(askPOST, 'POST', '/api/questions', who, { title, body: 'Asked while testing the digest: the pump beats, then stops after a few minutes.', tags });
+  call(askPOST, 'POST', '/api/questions', who, {
+    title,
+    body: 'Asked while testing the digest: the pump beats, then stops after a few minutes.',
+    tags,
+  });
 
 describe('digests (real MariaDB, an SMTP catcher)', () => {
   beforeAll(async () => {
@@ -36,7 +40,16 @@ describe('digests (real MariaDB, an SMTP catcher)', () => {
     const own = await ask('highcrag_shepherd', 'Digest check: a question of my own', ['tuning']);
     const fresh = await ask('sorrel_cabin', 'Digest check: a new question in tuning', ['tuning', 'frost']);
     for (const r of [hidden, elsewhere, own, fresh]) expect(r.status).toBe(201);
-    expect((await call(actionPOST, 'POST', '/api/review/actions', 'moss_moderator', { action: 'hide', postType: 'question', postId: hidden.body.id, reason: 'testing the digest' })).status).toBe(200);
+    expect(
+      (
+        await call(actionPOST, 'POST', '/api/review/actions', 'moss_moderator', {
+          action: 'hide',
+          postType: 'question',
+          postId: hidden.body.id,
+          reason: 'testing the digest',
+        })
+      ).status,
+    ).toBe(200);
 
     const run = await runDigests('weekly');
     expect(run.queued).toBeGreaterThan(0);
@@ -62,7 +75,9 @@ describe('digests (real MariaDB, an SMTP catcher)', () => {
     expect(rows[0].htmlBody).not.toContain('a moderator hides');
     expect(rows[0].htmlBody).not.toMatch(/<img/i);
     expect(rows[0].headers).toMatchObject({ 'List-Unsubscribe-Post': 'List-Unsubscribe=One-Click' });
-    expect(rows[0].headers?.['List-Unsubscribe']).toMatch(new RegExp(`^<http://127\\.0\\.0\\.1:3100/api/unsubscribe\\?u=${shepherd.id}&s=digest&t=[A-Za-z0-9_-]{43}>$`));
+    expect(rows[0].headers?.['List-Unsubscribe']).toMatch(
+      new RegExp(`^<http://127\\.0\\.0\\.1:3100/api/unsubscribe\\?u=${shepherd.id}&s=digest&t=[A-Za-z0-9_-]{43}>$`),
+    );
   });
 
   it('an expert’s digest adds unanswered questions in their tags and guides whose safety check went stale', async () => {
@@ -93,7 +108,9 @@ describe('digests (real MariaDB, an SMTP catcher)', () => {
     expect(a.alreadyQueued).toBeGreaterThan(0);
     const nextWeek = new Date(Date.now() + 7 * 86_400_000);
     const [c, d] = await Promise.all([runDigests('weekly', nextWeek), runDigests('weekly', nextWeek)]);
-    const queued = await MailMessage.findAll({ where: { dedupeKey: { [Op.like]: `digest:weekly:${periodKey('weekly', nextWeek)}:%` } } });
+    const queued = await MailMessage.findAll({
+      where: { dedupeKey: { [Op.like]: `digest:weekly:${periodKey('weekly', nextWeek)}:%` } },
+    });
     expect(queued.length).toBeGreaterThan(0);
     expect(c.queued + d.queued).toBe(queued.length);
     expect(new Set(queued.map((q) => q.userId)).size).toBe(queued.length);
@@ -104,7 +121,9 @@ describe('digests (real MariaDB, an SMTP catcher)', () => {
     expect(x.sent + y.sent).toBe(await MailMessage.count({ where: { status: 'sent' } }));
     // each member's digests arrive once each: as many at the catcher as rows in the outbox
     for (const address of new Set(rows.map((r) => r.toAddress))) {
-      const arrived = catcher.messages.filter((m) => m.to.includes(address) && /weekly Clackwater digest/.test(m.subject)).length;
+      const arrived = catcher.messages.filter(
+        (m) => m.to.includes(address) && /weekly Clackwater digest/.test(m.subject),
+      ).length;
       expect(arrived, address).toBe(rows.filter((r) => r.toAddress === address).length);
     }
   });

@@ -34,7 +34,9 @@ describe('migrations round trip on the real MariaDB', () => {
 
     const applied = await migrator.up();
     expect(applied.map((m) => m.name)).toEqual(migrations.map((m) => m.name));
-    expect(await tableNames()).toEqual(expect.arrayContaining(['users', 'tags', 'questions', 'answers', 'question_tags']));
+    expect(await tableNames()).toEqual(
+      expect.arrayContaining(['users', 'tags', 'questions', 'answers', 'question_tags']),
+    );
 
     expect(await seedDemo(sequelize)).toBe(true);
     expect(await seedDemo(sequelize)).toBe(false); // a second seed writes nothing

@@ -28,13 +28,33 @@ async function discoverHandlers(): Promise<{ key: string; file: string; method: 
   for (const f of found) {
     const mod = (await import(f.file)) as Record<string, unknown>;
     const route = `/api/${path.relative(API_DIR, path.dirname(f.file)).split(path.sep).join('/')}`;
-    for (const m of METHODS) if (typeof mod[m] === 'function') out.push({ key: `${m} ${route}`, file: f.file, method: m });
+    for (const m of METHODS)
+      if (typeof mod[m] === 'function') out.push({ key: `${m} ${route}`, file: f.file, method: m });
   }
   return out;
 }
 
-type Persona = 'anonymous' | 'member' | 'owner' | 'expert' | 'moderator' | 'admin' | 'suspendedMember' | 'suspendedExpert' | 'suspendedAdmin';
-const PERSONAS: Persona[] = ['anonymous', 'member', 'owner', 'expert', 'moderator', 'admin', 'suspendedMember', 'suspendedExpert', 'suspendedAdmin'];
+type Persona =
+  | 'anonymous'
+  | 'member'
+  | 'owner'
+  | 'expert'
+  | 'moderator'
+  | 'admin'
+  | 'suspendedMember'
+  | 'suspendedExpert'
+  | 'suspendedAdmin';
+const PERSONAS: Persona[] = [
+  'anonymous',
+  'member',
+  'owner',
+  'expert',
+  'moderator',
+  'admin',
+  'suspendedMember',
+  'suspendedExpert',
+  'suspendedAdmin',
+];
 const PERSONA_HANDLE: Record<Exclude<Persona, 'anonymous'>, string> = {
   member: 'highcrag_shepherd',
   owner: 'ferncombe_tamsin',
@@ -46,7 +66,11 @@ const PERSONA_HANDLE: Record<Exclude<Persona, 'anonymous'>, string> = {
   suspendedExpert: 'matrix_suspended_expert',
   suspendedAdmin: 'matrix_suspended_admin',
 };
-const SUSPENDED: Partial<Record<Persona, 'member' | 'expert' | 'admin'>> = { suspendedMember: 'member', suspendedExpert: 'expert', suspendedAdmin: 'admin' };
+const SUSPENDED: Partial<Record<Persona, 'member' | 'expert' | 'admin'>> = {
+  suspendedMember: 'member',
+  suspendedExpert: 'expert',
+  suspendedAdmin: 'admin',
+};
 
 /**
  * A request each protected route accepts when the caller is allowed: the matrix
@@ -55,11 +79,27 @@ const SUSPENDED: Partial<Record<Persona, 'member' | 'expert' | 'admin'>> = { sus
  */
 type Sample = { params?: Record<string, string>; body?: unknown; url?: string };
 const SAMPLES: Record<string, (ids: Record<string, number>) => Sample> = {
-  'POST /api/calculations': () => ({ body: { tool: 'yield-estimate', inputs: { fall: '4 ft', lift: '29 ft', driveFlow: '2 gal/min' } } }),
-  'POST /api/guides/[slug]/safety-checks': () => ({ params: { slug: 'surveying-fall-and-flow' }, body: { verdict: 'sound', notes: '' } }),
+  'POST /api/calculations': () => ({
+    body: { tool: 'yield-estimate', inputs: { fall: '4 ft', lift: '29 ft', driveFlow: '2 gal/min' } },
+  }),
+  'POST /api/guides/[slug]/safety-checks': () => ({
+    params: { slug: 'surveying-fall-and-flow' },
+    body: { verdict: 'sound', notes: '' },
+  }),
   'GET /api/expert-applications': () => ({}),
-  'POST /api/expert-applications': () => ({ body: { pumpsBuilt: 3, years: 2, region: 'Linnet valley', experience: 'Three rams on a spring-fed brook, tuned by ear.', links: [] } }),
-  'POST /api/expert-applications/[id]/decision': () => ({ params: { id: '999999' }, body: { decision: 'approve', note: 'looks good' } }),
+  'POST /api/expert-applications': () => ({
+    body: {
+      pumpsBuilt: 3,
+      years: 2,
+      region: 'Linnet valley',
+      experience: 'Three rams on a spring-fed brook, tuned by ear.',
+      links: [],
+    },
+  }),
+  'POST /api/expert-applications/[id]/decision': () => ({
+    params: { id: '999999' },
+    body: { decision: 'approve', note: 'looks good' },
+  }),
   'PUT /api/admin/users/[id]/role': (ids) => ({ params: { id: String(ids.member) }, body: { role: 'member' } }),
   'GET /api/account/settings': () => ({}),
   'PUT /api/account/settings': () => ({ body: { displayName: 'Same Name', region: '', bio: '', units: 'US' } }),
@@ -67,24 +107,46 @@ const SAMPLES: Record<string, (ids: Record<string, number>) => Sample> = {
   // multipart cannot be sent as JSON: an allowed caller gets 400 for the JSON body, never 401/403
   'POST /api/photos': () => ({ body: {} }),
   'POST /api/questions': () => ({
-    body: { title: 'Waste valve sticks open after rain', body: 'Since the brook rose the valve hangs open and the pump will not restart.', tags: ['stall'] },
+    body: {
+      title: 'Waste valve sticks open after rain',
+      body: 'Since the brook rose the valve hangs open and the pump will not restart.',
+      tags: ['stall'],
+    },
   }),
   'PUT /api/questions/[id]': (ids) => ({
     params: { id: String(ids.ownerQuestion) },
-    body: { title: 'Half-inch pump beats for a minute, then stops', body: 'Edited: the drive pipe is 12 ft of 3/4 inch PVC on 4 ft of fall.', tags: ['stall'] },
+    body: {
+      title: 'Half-inch pump beats for a minute, then stops',
+      body: 'Edited: the drive pipe is 12 ft of 3/4 inch PVC on 4 ft of fall.',
+      tags: ['stall'],
+    },
   }),
-  'POST /api/questions/[id]/answers': (ids) => ({ params: { id: String(ids.otherQuestion) }, body: { body: 'Drain the drive pipe and the pump body before the first frost.' } }),
-  'POST /api/questions/[id]/replies': (ids) => ({ params: { id: String(ids.otherQuestion) }, body: { body: 'Same here on our creek.' } }),
+  'POST /api/questions/[id]/answers': (ids) => ({
+    params: { id: String(ids.otherQuestion) },
+    body: { body: 'Drain the drive pipe and the pump body before the first frost.' },
+  }),
+  'POST /api/questions/[id]/replies': (ids) => ({
+    params: { id: String(ids.otherQuestion) },
+    body: { body: 'Same here on our creek.' },
+  }),
   'PUT /api/questions/[id]/fixed': (ids) => ({ params: { id: String(ids.ownerQuestion) }, body: { answerId: null } }),
   'POST /api/questions/[id]/follow': (ids) => ({ params: { id: String(ids.otherQuestion) } }),
   'DELETE /api/questions/[id]/follow': (ids) => ({ params: { id: String(ids.otherQuestion) } }),
-  'PUT /api/answers/[id]': (ids) => ({ params: { id: String(ids.ownerAnswer) }, body: { body: 'We run two side by side at Ferncombe; size the line for both.' } }),
-  'PUT /api/replies/[id]': (ids) => ({ params: { id: String(ids.ownerReply) }, body: { body: 'Thanks, that did it.' } }),
+  'PUT /api/answers/[id]': (ids) => ({
+    params: { id: String(ids.ownerAnswer) },
+    body: { body: 'We run two side by side at Ferncombe; size the line for both.' },
+  }),
+  'PUT /api/replies/[id]': (ids) => ({
+    params: { id: String(ids.ownerReply) },
+    body: { body: 'Thanks, that did it.' },
+  }),
   'POST /api/helpful': (ids) => ({ body: { postType: 'question', postId: ids.otherQuestion } }),
   'DELETE /api/helpful': (ids) => ({ body: { postType: 'question', postId: ids.otherQuestion } }),
   'POST /api/flags': (ids) => ({ body: { postType: 'answer', postId: ids.flagTarget, reason: 'spam' } }),
   'GET /api/review': () => ({}),
-  'POST /api/review/actions': (ids) => ({ body: { action: 'warn', postType: 'answer', postId: ids.ownerAnswer, reason: 'checking the matrix' } }),
+  'POST /api/review/actions': (ids) => ({
+    body: { action: 'warn', postType: 'answer', postId: ids.ownerAnswer, reason: 'checking the matrix' },
+  }),
   'GET /api/review/suspensions': () => ({}),
   // no member 999999: an allowed caller gets 404, never 401/403
   'POST /api/review/suspensions/[id]/lift': () => ({ params: { id: '999999' }, body: { reason: 'served the time' } }),
@@ -92,33 +154,66 @@ const SAMPLES: Record<string, (ids: Record<string, number>) => Sample> = {
   // no failed message 999999: an allowed caller gets 404, never 401/403
   'POST /api/admin/outbox/[id]/retry': () => ({ params: { id: '999999' } }),
   'GET /api/account/mail': () => ({}),
-  'PUT /api/account/mail': () => ({ body: { digest: 'weekly', tags: ['tuning'], notify: { answers: true, replies: true, fixed: true, moderation: true, expert: true } } }),
-  'POST /api/field-log': () => ({
+  'PUT /api/account/mail': () => ({
     body: {
-      siteName: 'Matrix test spring', testedOn: '2026-06-01', pumpSize: '1', fall: '2 m', lift: '10 m', driveLength: '12 m', driveSize: '1',
-      driveMaterial: 'pvc', driveFlow: '20 L/min', driveFlowMethod: 'measured', trials: [{ volume: '2 L', seconds: 40 }],
+      digest: 'weekly',
+      tags: ['tuning'],
+      notify: { answers: true, replies: true, fixed: true, moderation: true, expert: true },
     },
   }),
-  'POST /api/field-log/[id]/link': (ids) => ({ params: { id: String(ids.ownerEntryAfter) }, body: { beforeId: ids.ownerEntryBefore, whatChanged: 'outlet moved higher' } }),
+  'POST /api/field-log': () => ({
+    body: {
+      siteName: 'Matrix test spring',
+      testedOn: '2026-06-01',
+      pumpSize: '1',
+      fall: '2 m',
+      lift: '10 m',
+      driveLength: '12 m',
+      driveSize: '1',
+      driveMaterial: 'pvc',
+      driveFlow: '20 L/min',
+      driveFlowMethod: 'measured',
+      trials: [{ volume: '2 L', seconds: 40 }],
+    },
+  }),
+  'POST /api/field-log/[id]/link': (ids) => ({
+    params: { id: String(ids.ownerEntryAfter) },
+    body: { beforeId: ids.ownerEntryBefore, whatChanged: 'outlet moved higher' },
+  }),
   // a header with no rows: an allowed caller gets 422 for the empty file, never 401/403
   'POST /api/field-log/import': () => ({ body: { csv: 'site_name,tested_on\r\n' } }),
 };
 
 /** Routes that only ever act on the caller's own account: every signed-in persona is the owner. */
-const SELF_ONLY = new Set(['GET /api/account/settings', 'PUT /api/account/settings', 'GET /api/account/mail', 'PUT /api/account/mail']);
+const SELF_ONLY = new Set([
+  'GET /api/account/settings',
+  'PUT /api/account/settings',
+  'GET /api/account/mail',
+  'PUT /api/account/mail',
+]);
 
 async function cookieFor(persona: Persona): Promise<string | undefined> {
   if (persona === 'anonymous') return undefined;
   const { User } = initModels();
   const u = (await User.findOne({ where: { handle: PERSONA_HANDLE[persona] } }))!;
-  const token = await encode({ token: { uid: u.id, role: u.role, handle: u.handle, sv: u.sessionVersion }, secret: authSecret() });
+  const token = await encode({
+    token: { uid: u.id, role: u.role, handle: u.handle, sv: u.sessionVersion },
+    secret: authSecret(),
+  });
   return `next-auth.session-token=${token}`;
 }
 
 function allowed(action: Action, persona: Persona, selfOnly: boolean): boolean {
   const roleOf: Record<Persona, 'anonymous' | 'member' | 'expert' | 'moderator' | 'admin'> = {
-    anonymous: 'anonymous', member: 'member', owner: 'member', expert: 'expert', moderator: 'moderator', admin: 'admin',
-    suspendedMember: 'member', suspendedExpert: 'expert', suspendedAdmin: 'admin',
+    anonymous: 'anonymous',
+    member: 'member',
+    owner: 'member',
+    expert: 'expert',
+    moderator: 'moderator',
+    admin: 'admin',
+    suspendedMember: 'member',
+    suspendedExpert: 'expert',
+    suspendedAdmin: 'admin',
   };
   // a suspended account keeps only the rows the table marks as kept (reads)
   if (SUSPENDED[persona] && !POLICY[action].keptWhenSuspended) return false;
@@ -154,7 +249,16 @@ describe('permission matrix: every API route × every persona, against the polic
     const { User } = initModels();
     for (const [persona, role] of Object.entries(SUSPENDED)) {
       const handle = PERSONA_HANDLE[persona as Exclude<Persona, 'anonymous'>];
-      await User.create({ handle, displayName: handle, email: `${handle}@matrix.example`, role, region: null, bio: null, emailVerifiedAt: new Date(), suspendedUntil: new Date('2099-01-31T23:59:59Z') });
+      await User.create({
+        handle,
+        displayName: handle,
+        email: `${handle}@matrix.example`,
+        role,
+        region: null,
+        bio: null,
+        emailVerifiedAt: new Date(),
+        suspendedUntil: new Date('2099-01-31T23:59:59Z'),
+      });
     }
     handlers = await discoverHandlers();
   });
@@ -166,14 +270,18 @@ describe('permission matrix: every API route × every persona, against the polic
       if (!action || action === 'session') continue;
       const src = handlerSource(h.file, h.method);
       if (src === null) {
-        failures.push(`${h.key}: write it as \`export async function ${h.method}\` (or \`export const ${h.method} = (…) => helper(…)\`) so this check can read it`);
+        failures.push(
+          `${h.key}: write it as \`export async function ${h.method}\` (or \`export const ${h.method} = (…) => helper(…)\`) so this check can read it`,
+        );
         continue;
       }
       if (action === 'public') continue;
       const calls = [...src.matchAll(/guarded\(\s*\w+\s*,\s*'([\w.]+)'/g)].map((m) => m[1]);
       if (calls.length === 0) failures.push(`${h.key}: protected (${action}) but never calls guarded()`);
-      else if (!calls.includes(action)) failures.push(`${h.key}: routes.ts says ${action}, guarded() is called with ${calls.join(', ')}`);
-      if (/\bcurrentUser\(/.test(src)) failures.push(`${h.key}: reads the session itself; guarded() hands the work its user`);
+      else if (!calls.includes(action))
+        failures.push(`${h.key}: routes.ts says ${action}, guarded() is called with ${calls.join(', ')}`);
+      if (/\bcurrentUser\(/.test(src))
+        failures.push(`${h.key}: reads the session itself; guarded() hands the work its user`);
     }
     expect(failures).toEqual([]);
   });
@@ -183,26 +291,85 @@ describe('permission matrix: every API route × every persona, against the polic
     const admin = (await User.findOne({ where: { handle: 'clack_admin' } }))!;
     const moderator = (await User.findOne({ where: { handle: 'moss_moderator' } }))!;
     const q = (await Question.findOne({ order: [['id', 'ASC']] }))!;
-    const otherAdmin = await User.create({ handle: 'matrix_second_admin', displayName: 'Second admin', email: 'second-admin@matrix.example', role: 'admin', region: null, bio: null, emailVerifiedAt: new Date() });
-    const otherModerator = await User.create({ handle: 'matrix_second_mod', displayName: 'Second moderator', email: 'second-mod@matrix.example', role: 'moderator', region: null, bio: null, emailVerifiedAt: new Date() });
-    const post = async (authorId: number) => (await Answer.create({ questionId: q.id, authorId, body: 'Keep the drive pipe straight and rigid.' })).id;
+    const otherAdmin = await User.create({
+      handle: 'matrix_second_admin',
+      displayName: 'Second admin',
+      email: 'second-admin@matrix.example',
+      role: 'admin',
+      region: null,
+      bio: null,
+      emailVerifiedAt: new Date(),
+    });
+    const otherModerator = await User.create({
+      handle: 'matrix_second_mod',
+      displayName: 'Second moderator',
+      email: 'second-mod@matrix.example',
+      role: 'moderator',
+      region: null,
+      bio: null,
+      emailVerifiedAt: new Date(),
+    });
+    const post = async (authorId: number) =>
+      (await Answer.create({ questionId: q.id, authorId, body: 'Keep the drive pipe straight and rigid.' })).id;
     const act = async (persona: Persona, body: Record<string, unknown>) => {
       const cookie = (await cookieFor(persona))!;
-      const req = new NextRequest('http://localhost/api/review/actions', { method: 'POST', headers: { 'content-type': 'application/json', cookie }, body: JSON.stringify(body) });
+      const req = new NextRequest('http://localhost/api/review/actions', {
+        method: 'POST',
+        headers: { 'content-type': 'application/json', cookie },
+        body: JSON.stringify(body),
+      });
       return actionPOST(req);
     };
     const adminPost = await post(admin.id);
-    expect((await act('moderator', { action: 'hide', postType: 'answer', postId: adminPost, reason: 'testing rank' })).status).toBe(403);
-    expect((await act('moderator', { action: 'suspend', postType: 'answer', postId: adminPost, reason: 'testing rank', until: '2099-01-31' })).status).toBe(403);
+    expect(
+      (await act('moderator', { action: 'hide', postType: 'answer', postId: adminPost, reason: 'testing rank' }))
+        .status,
+    ).toBe(403);
+    expect(
+      (
+        await act('moderator', {
+          action: 'suspend',
+          postType: 'answer',
+          postId: adminPost,
+          reason: 'testing rank',
+          until: '2099-01-31',
+        })
+      ).status,
+    ).toBe(403);
     expect((await Answer.findByPk(adminPost))!.hiddenAt).toBeNull();
     expect((await admin.reload()).suspendedUntil).toBeNull();
     const modPost = await post(otherModerator.id);
-    expect((await act('moderator', { action: 'hide', postType: 'answer', postId: modPost, reason: 'testing rank' })).status).toBe(403);
-    expect((await act('admin', { action: 'hide', postType: 'answer', postId: modPost, reason: 'testing rank' })).status).toBe(200);
+    expect(
+      (await act('moderator', { action: 'hide', postType: 'answer', postId: modPost, reason: 'testing rank' })).status,
+    ).toBe(403);
+    expect(
+      (await act('admin', { action: 'hide', postType: 'answer', postId: modPost, reason: 'testing rank' })).status,
+    ).toBe(200);
     // another admin, never oneself
-    expect((await act('admin', { action: 'hide', postType: 'answer', postId: await post(otherAdmin.id), reason: 'testing rank' })).status).toBe(200);
-    expect((await act('admin', { action: 'hide', postType: 'answer', postId: await post(admin.id), reason: 'testing rank' })).status).toBe(403);
-    expect((await act('admin', { action: 'hide', postType: 'answer', postId: await post(moderator.id), reason: 'testing rank' })).status).toBe(200);
+    expect(
+      (
+        await act('admin', {
+          action: 'hide',
+          postType: 'answer',
+          postId: await post(otherAdmin.id),
+          reason: 'testing rank',
+        })
+      ).status,
+    ).toBe(200);
+    expect(
+      (await act('admin', { action: 'hide', postType: 'answer', postId: await post(admin.id), reason: 'testing rank' }))
+        .status,
+    ).toBe(403);
+    expect(
+      (
+        await act('admin', {
+          action: 'hide',
+          postType: 'answer',
+          postId: await post(moderator.id),
+          reason: 'testing rank',
+        })
+      ).status,
+    ).toBe(200);
   });
 
   it('finds the route handlers, and every one has an entry in lib/auth/routes.ts', () => {
@@ -214,7 +381,9 @@ describe('permission matrix: every API route × every persona, against the polic
   });
 
   it('has a sample request for every protected route', () => {
-    const protectedRoutes = Object.entries(API_ROUTES).filter(([, a]) => a !== 'public' && a !== 'session').map(([k]) => k);
+    const protectedRoutes = Object.entries(API_ROUTES)
+      .filter(([, a]) => a !== 'public' && a !== 'session')
+      .map(([k]) => k);
     expect(protectedRoutes.filter((k) => !(k in SAMPLES))).toEqual([]);
   });
 
@@ -230,10 +399,22 @@ describe('permission matrix: every API route × every persona, against the polic
     ids.otherQuestion = (await Question.findOne({ where: { authorId: cabin } }))!.id;
     const quarry = (await User.findOne({ where: { handle: 'quarry_lane_valves' } }))!.id;
     ids.flagTarget = (await Answer.findOne({ where: { authorId: quarry } }))!.id;
-    const garden = await initModels().FieldLogEntry.findAll({ where: { authorId: ids.owner, siteName: 'Ferncombe top garden' }, order: [['id', 'ASC']] });
+    const garden = await initModels().FieldLogEntry.findAll({
+      where: { authorId: ids.owner, siteName: 'Ferncombe top garden' },
+      order: [['id', 'ASC']],
+    });
     ids.ownerEntryBefore = garden[0].id;
     ids.ownerEntryAfter = garden[1].id;
-    ids.ownerReply = (await Reply.create({ questionId: ids.otherQuestion, parentType: 'question', answerId: null, replyToId: null, authorId: ids.owner, body: 'A first reply.' })).id;
+    ids.ownerReply = (
+      await Reply.create({
+        questionId: ids.otherQuestion,
+        parentType: 'question',
+        answerId: null,
+        replyToId: null,
+        authorId: ids.owner,
+        body: 'A first reply.',
+      })
+    ).id;
     const failures: string[] = [];
     for (const h of handlers) {
       const action = API_ROUTES[h.key];
@@ -244,7 +425,11 @@ describe('permission matrix: every API route × every persona, against the polic
         const cookie = await cookieFor(persona);
         const req = new NextRequest(`http://localhost${sample.url ?? routePath}`, {
           method: h.method,
-          headers: { 'content-type': 'application/json', 'x-forwarded-for': `10.7.${persona.length}.1`, ...(cookie ? { cookie } : {}) },
+          headers: {
+            'content-type': 'application/json',
+            'x-forwarded-for': `10.7.${persona.length}.1`,
+            ...(cookie ? { cookie } : {}),
+          },
           body: h.method === 'GET' ? undefined : JSON.stringify(sample.body ?? {}),
         });
         const mod = (await import(h.file)) as Record<string, (r: Request, ctx: unknown) => Promise<Response>>;
@@ -253,7 +438,8 @@ describe('permission matrix: every API route × every persona, against the polic
         const refused = res.status === 401 || res.status === 403;
         if (ok && refused) failures.push(`${h.key} as ${persona}: policy allows, got ${res.status}`);
         if (!ok && !refused) failures.push(`${h.key} as ${persona}: policy refuses, got ${res.status}`);
-        if (!ok && persona === 'anonymous' && res.status !== 401) failures.push(`${h.key} as anonymous: expected 401, got ${res.status}`);
+        if (!ok && persona === 'anonymous' && res.status !== 401)
+          failures.push(`${h.key} as anonymous: expected 401, got ${res.status}`);
         if (!ok && persona !== 'anonymous' && res.status === 403) {
           const body = await res.json();
           if (!body.error?.message) failures.push(`${h.key} as ${persona}: 403 without a plain message`);

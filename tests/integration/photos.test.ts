@@ -24,7 +24,8 @@ process.env.UPLOAD_DIR = uploadDir;
 const MEMBER = 'highcrag_shepherd';
 const OTHER = 'ferncombe_tamsin';
 
-const upload = (parts: Part[], opts: { as?: string | null; alt?: string[] } = {}) => uploadAs(parts, { as: opts.as === undefined ? MEMBER : opts.as, alt: opts.alt ?? [] });
+const upload = (parts: Part[], opts: { as?: string | null; alt?: string[] } = {}) =>
+  uploadAs(parts, { as: opts.as === undefined ? MEMBER : opts.as, alt: opts.alt ?? [] });
 
 const ctx = (id: string) => ({ params: Promise.resolve({ id }) });
 
@@ -44,7 +45,12 @@ function claimedPng(w: number, h: number): Buffer {
   ihdr[8] = 1; // bit depth
   ihdr[9] = 0; // greyscale
   const signature = Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]); // PNG spec (W3C PNG 2nd ed., 5.2)
-  return Buffer.concat([signature, chunk('IHDR', ihdr), chunk('IDAT', zlib.deflateSync(Buffer.alloc(2))), chunk('IEND', Buffer.alloc(0))]);
+  return Buffer.concat([
+    signature,
+    chunk('IHDR', ihdr),
+    chunk('IDAT', zlib.deflateSync(Buffer.alloc(2))),
+    chunk('IEND', Buffer.alloc(0)),
+  ]);
 }
 
 let png: Buffer;
@@ -66,14 +72,18 @@ let photoRowsBefore = 0;
 
 beforeAll(async () => {
   await freshDemoDatabase();
-  png = await sharp({ create: { width: 2400, height: 1200, channels: 3, background: { r: 31, g: 58, b: 61 } } }).png().toBuffer();
+  png = await sharp({ create: { width: 2400, height: 1200, channels: 3, background: { r: 31, g: 58, b: 61 } } })
+    .png()
+    .toBuffer();
   jpegWithExif = await sharp({ create: { width: 800, height: 600, channels: 3, background: { r: 181, g: 86, b: 43 } } })
     .jpeg()
     .withMetadata({ exif: { IFD0: { Copyright: 'x' } } })
     .toBuffer();
   // random noise does not compress, so this PNG is bigger than the 8 MB per-file limit
   const side = 1800; // 1800² × 3 channels ≈ 9.7 MB of raw noise (arithmetic)
-  largePng = await sharp(Buffer.from(Array.from({ length: side * side * 3 }, () => (Math.random() * 256) | 0)), { raw: { width: side, height: side, channels: 3 } })
+  largePng = await sharp(Buffer.from(Array.from({ length: side * side * 3 }, () => (Math.random() * 256) | 0)), {
+    raw: { width: side, height: side, channels: 3 },
+  })
     .png({ compressionLevel: 0 })
     .toBuffer();
 });
@@ -84,19 +94,33 @@ afterAll(() => rmSync(uploadDir, { recursive: true, force: true }));
 
 describe('POST /api/photos', () => {
   it('stores a PNG as two re-encoded WebP copies within the size limits', async () => {
-    const res = await upload([{ name: 'brook-intake.png', data: png, type: 'image/png' }], { alt: ['Intake box on the brook'] });
+    const res = await upload([{ name: 'brook-intake.png', data: png, type: 'image/png' }], {
+      alt: ['Intake box on the brook'],
+    });
     expect(res.status).toBe(201);
     const { photos } = await res.json();
     expect(photos).toHaveLength(1);
     const [p] = photos;
     expect(p.id).toMatch(/^[0-9A-Za-z]{16}$/); // id format chosen in lib/photos/storage.ts
-    expect(p).toMatchObject({ width: 1600, height: 800, url: `/api/photos/${p.id}`, thumbUrl: `/api/photos/${p.id}/thumb` }); // 2400×1200 fitted inside 1600 px, limit chosen in lib/photos/ingest.ts
+    expect(p).toMatchObject({
+      width: 1600,
+      height: 800,
+      url: `/api/photos/${p.id}`,
+      thumbUrl: `/api/photos/${p.id}/thumb`,
+    }); // 2400×1200 fitted inside 1600 px, limit chosen in lib/photos/ingest.ts
     const web = await sharp(photoPath(p.id, 'web')).metadata();
     const thumb = await sharp(photoPath(p.id, 'thumb')).metadata();
     expect([web.format, web.width, web.height]).toEqual(['webp', 1600, 800]); // limit chosen in lib/photos/ingest.ts
     expect([thumb.format, thumb.width, thumb.height]).toEqual(['webp', 320, 160]); // 320 px thumbnail, limit chosen in lib/photos/ingest.ts
     const row = await initModels().Photo.findOne({ where: { publicId: p.id } });
-    expect(row).toMatchObject({ mime: 'image/webp', width: 1600, height: 800, questionId: null, answerId: null, alt: 'Intake box on the brook' });
+    expect(row).toMatchObject({
+      mime: 'image/webp',
+      width: 1600,
+      height: 800,
+      questionId: null,
+      answerId: null,
+      alt: 'Intake box on the brook',
+    });
     expect(readdirSync(path.join(uploadDir, 'tmp'))).toEqual([]);
   });
 
@@ -118,14 +142,18 @@ describe('POST /api/photos', () => {
     const res = await upload([{ name: '../../etc/passwd.png', data: png, type: 'image/png' }]);
     expect(res.status).toBe(201);
     const [p] = (await res.json()).photos;
-    const added = readdirSync(uploadDir).filter((f) => !before.includes(f)).sort();
+    const added = readdirSync(uploadDir)
+      .filter((f) => !before.includes(f))
+      .sort();
     expect(added).toEqual([`${p.id}-thumb.webp`, `${p.id}.webp`]);
     expect(readdirSync(path.dirname(uploadDir)).some((f) => f === 'passwd.png' || f === 'etc')).toBe(false);
   });
 
   it('refuses a text file named photo.jpg with 415 naming it, keeping nothing', async () => {
     const before = storedFiles();
-    const res = await upload([{ name: 'photo.jpg', data: 'not a picture, just words about a waste valve\n', type: 'image/jpeg' }]);
+    const res = await upload([
+      { name: 'photo.jpg', data: 'not a picture, just words about a waste valve\n', type: 'image/jpeg' },
+    ]);
     expect(res.status).toBe(415);
     expect((await res.json()).error.message).toContain('photo.jpg');
     await expectNothingKept(before);
@@ -193,7 +221,11 @@ describe('POST /api/photos', () => {
     const before = storedFiles();
     const form = new FormData();
     form.append('alt', 'nothing here');
-    const req = new NextRequest('http://localhost/api/photos', { method: 'POST', body: form, headers: { cookie: await sessionCookie(MEMBER) } });
+    const req = new NextRequest('http://localhost/api/photos', {
+      method: 'POST',
+      body: form,
+      headers: { cookie: await sessionCookie(MEMBER) },
+    });
     const res = await POST(req);
     expect(res.status).toBe(400);
     expect((await res.json()).error.code).toBe('no_file');
@@ -201,7 +233,13 @@ describe('POST /api/photos', () => {
   });
 
   it('answers 400 to a signed-in JSON body, 401 to a signed-out caller', async () => {
-    const json = await POST(new NextRequest('http://localhost/api/photos', { method: 'POST', body: '{}', headers: { 'content-type': 'application/json', cookie: await sessionCookie(MEMBER) } }));
+    const json = await POST(
+      new NextRequest('http://localhost/api/photos', {
+        method: 'POST',
+        body: '{}',
+        headers: { 'content-type': 'application/json', cookie: await sessionCookie(MEMBER) },
+      }),
+    );
     expect(json.status).toBe(400);
     const before = storedFiles();
     const res = await upload([{ name: 'a.png', data: png, type: 'image/png' }], { as: null });
@@ -233,7 +271,10 @@ describe('POST /api/photos', () => {
 describe('GET /api/photos/:id and /thumb', () => {
   it('serves our WebP copies with nosniff and an hour of caching', async () => {
     const [p] = (await (await upload([{ name: 'a.png', data: png, type: 'image/png' }])).json()).photos;
-    for (const res of [await getWeb(new Request(`http://localhost${p.url}`), ctx(p.id)), await getThumb(new Request(`http://localhost${p.thumbUrl}`), ctx(p.id))]) {
+    for (const res of [
+      await getWeb(new Request(`http://localhost${p.url}`), ctx(p.id)),
+      await getThumb(new Request(`http://localhost${p.thumbUrl}`), ctx(p.id)),
+    ]) {
       expect(res.status).toBe(200);
       expect(res.headers.get('content-type')).toBe('image/webp');
       expect(res.headers.get('x-content-type-options')).toBe('nosniff');
@@ -243,10 +284,13 @@ describe('GET /api/photos/:id and /thumb', () => {
     }
   });
 
-  it.each(['AAAAAAAAAAAAAAAA', '..%2F..%2Fetc%2Fpasswd', '../../etc/passwd', 'short', 'tmp'])('answers 404 for %s', async (id) => {
-    expect((await getWeb(new Request('http://localhost/api/photos/x'), ctx(id))).status).toBe(404);
-    expect((await getThumb(new Request('http://localhost/api/photos/x/thumb'), ctx(id))).status).toBe(404);
-  });
+  it.each(['AAAAAAAAAAAAAAAA', '..%2F..%2Fetc%2Fpasswd', '../../etc/passwd', 'short', 'tmp'])(
+    'answers 404 for %s',
+    async (id) => {
+      expect((await getWeb(new Request('http://localhost/api/photos/x'), ctx(id))).status).toBe(404);
+      expect((await getThumb(new Request('http://localhost/api/photos/x/thumb'), ctx(id))).status).toBe(404);
+    },
+  );
 });
 
 describe('attachPhotos', () => {
@@ -255,7 +299,14 @@ describe('attachPhotos', () => {
     const question = (await Question.findOne())!;
     const member = (await User.findOne({ where: { handle: MEMBER } }))!;
     const other = (await User.findOne({ where: { handle: OTHER } }))!;
-    const mine = (await (await upload([{ name: 'a.png', data: png, type: 'image/png' }, { name: 'b.jpg', data: jpegWithExif, type: 'image/jpeg' }])).json()).photos.map((p: { id: string }) => p.id);
+    const mine = (
+      await (
+        await upload([
+          { name: 'a.png', data: png, type: 'image/png' },
+          { name: 'b.jpg', data: jpegWithExif, type: 'image/jpeg' },
+        ])
+      ).json()
+    ).photos.map((p: { id: string }) => p.id);
     expect(await attachPhotos(mine, other.id, { questionId: question.id })).toBe(0);
     expect(await attachPhotos([...mine, 'not-an-id', mine[0]], member.id, { questionId: question.id })).toBe(2); // the two uploaded just above
     expect(await attachPhotos(mine, member.id, { questionId: question.id })).toBe(0);
@@ -270,7 +321,9 @@ describe('storage errors', () => {
     const form = new FormData();
     form.append('photos', new File([new Uint8Array(png)], 'a.png', { type: 'image/png' }));
     // no such member: the owner_id foreign key refuses the insert after both copies are on disk
-    await expect(ingestUpload(new Request('http://localhost/api/photos', { method: 'POST', body: form }), 2_000_000_000)).rejects.toMatchObject({ name: 'SequelizeForeignKeyConstraintError' });
+    await expect(
+      ingestUpload(new Request('http://localhost/api/photos', { method: 'POST', body: form }), 2_000_000_000),
+    ).rejects.toMatchObject({ name: 'SequelizeForeignKeyConstraintError' });
     expect(storedFiles()).toEqual(before);
     expect(readdirSync(path.join(uploadDir, 'tmp'))).toEqual([]);
     expect(await initModels().Photo.count()).toBe(rows);
@@ -278,7 +331,9 @@ describe('storage errors', () => {
 
   // a full or read-only upload directory, end to end: tests/reliability/upload-storage.test.ts
   it('treats a full, read-only or forbidden disk as storage unavailable (507), and nothing else', () => {
-    for (const code of ['ENOSPC', 'EACCES', 'EROFS']) expect(isStorageUnavailable(Object.assign(new Error(code), { code }))).toBe(true);
-    for (const code of ['ENOENT', 1009, undefined]) expect(isStorageUnavailable(Object.assign(new Error('x'), { code }))).toBe(false);
+    for (const code of ['ENOSPC', 'EACCES', 'EROFS'])
+      expect(isStorageUnavailable(Object.assign(new Error(code), { code }))).toBe(true);
+    for (const code of ['ENOENT', 1009, undefined])
+      expect(isStorageUnavailable(Object.assign(new Error('x'), { code }))).toBe(false);
   });
 });

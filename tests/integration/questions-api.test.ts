@@ -22,7 +22,9 @@ describe('GET /api/questions', () => {
       expect(res.status).toBe(200);
       const body = await res.json();
       expect(body).toMatchObject({ page, perPage, total: demoQuestions.length, totalPages: expectedPages });
-      expect(body.items.length).toBe(page < expectedPages ? perPage : demoQuestions.length - perPage * (expectedPages - 1));
+      expect(body.items.length).toBe(
+        page < expectedPages ? perPage : demoQuestions.length - perPage * (expectedPages - 1),
+      );
       for (const item of body.items) {
         seen.push(item.id);
         dates.push(item.createdAt);

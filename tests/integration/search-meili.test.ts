@@ -66,8 +66,17 @@ describe('the Meilisearch adapter against a fake server gives the in-process res
     const { documents } = await rebuildIndex();
     const idx = fake.indexes.get('clackwater_test')!;
     expect(idx.docs.size).toBe(documents);
-    expect(idx.settings).toMatchObject({ searchableAttributes: ['headTerms', 'bodyTerms'], filterableAttributes: expect.arrayContaining(['kind', 'tags', 'solved', 'level', 'hidden']) });
-    expect(fake.requests).toEqual(expect.arrayContaining(['POST /indexes', 'PATCH /indexes/clackwater_test/settings', 'POST /indexes/clackwater_test/documents']));
+    expect(idx.settings).toMatchObject({
+      searchableAttributes: ['headTerms', 'bodyTerms'],
+      filterableAttributes: expect.arrayContaining(['kind', 'tags', 'solved', 'level', 'hidden']),
+    });
+    expect(fake.requests).toEqual(
+      expect.arrayContaining([
+        'POST /indexes',
+        'PATCH /indexes/clackwater_test/settings',
+        'POST /indexes/clackwater_test/documents',
+      ]),
+    );
   });
 
   // Both rank by words, then title/tag matches; their last tie-breaks differ (Meilisearch's
@@ -86,9 +95,15 @@ describe('the Meilisearch adapter against a fake server gives the in-process res
 
   it('keeps hidden posts from everyone but moderators, through GET /api/search', async () => {
     const q = (await initModels().Question.findOne({ where: { title: 'Using a pressure tank as the air chamber' } }))!;
-    const res = await call(actionPOST, 'POST', '/api/review/actions', 'moss_moderator', { action: 'hide', postType: 'question', postId: q.id, reason: 'checking the adapter' });
+    const res = await call(actionPOST, 'POST', '/api/review/actions', 'moss_moderator', {
+      action: 'hide',
+      postType: 'question',
+      postId: q.id,
+      reason: 'checking the adapter',
+    });
     expect(res.status).toBe(200);
-    const found = async (who: string | null) => (await call(searchGET, 'GET', '/api/search?q=old%20well%20pressure%20tank&limit=20', who)).body;
+    const found = async (who: string | null) =>
+      (await call(searchGET, 'GET', '/api/search?q=old%20well%20pressure%20tank&limit=20', who)).body;
     const member = await found('highcrag_shepherd');
     expect(member.engine).toBe('meilisearch');
     expect(member.items.map((i: { id: string }) => i.id)).not.toContain(`question-${q.id}`);
@@ -100,10 +115,18 @@ describe('the Meilisearch adapter against a fake server gives the in-process res
     await fake.close();
     const res = await call(searchGET, 'GET', '/api/search?q=pump', null);
     expect(res.status).toBe(503);
-    expect(res.body.error).toMatchObject({ code: 'search_unavailable', message: expect.stringMatching(/^Search is not answering just now/) });
+    expect(res.body.error).toMatchObject({
+      code: 'search_unavailable',
+      message: expect.stringMatching(/^Search is not answering just now/),
+    });
     expect(res.body.error.message).not.toMatch(/fetch|ECONNREFUSED|stack/i);
     const q = (await initModels().Question.findOne({ order: [['id', 'ASC']] }))!;
-    const hide = await call(actionPOST, 'POST', '/api/review/actions', 'moss_moderator', { action: 'lock', postType: 'question', postId: q.id, reason: 'search is down' });
+    const hide = await call(actionPOST, 'POST', '/api/review/actions', 'moss_moderator', {
+      action: 'lock',
+      postType: 'question',
+      postId: q.id,
+      reason: 'search is down',
+    });
     expect(hide.status).toBe(200);
     expect((await initModels().Question.findByPk(q.id))!.lockedAt).not.toBeNull();
     fake = await startFakeMeilisearch();

@@ -26,7 +26,13 @@ afterAll(async () => {
 
 let ip = 0;
 const post = (handler: (r: Request) => Promise<Response>, url: string, body: unknown) =>
-  handler(new NextRequest(`http://localhost${url}`, { method: 'POST', body: JSON.stringify(body), headers: { 'content-type': 'application/json', 'x-forwarded-for': `192.0.2.${++ip}` } }));
+  handler(
+    new NextRequest(`http://localhost${url}`, {
+      method: 'POST',
+      body: JSON.stringify(body),
+      headers: { 'content-type': 'application/json', 'x-forwarded-for': `192.0.2.${++ip}` },
+    }),
+  );
 
 const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)];
 
@@ -34,16 +40,32 @@ describe('sign-up', () => {
   const member = { password: 'kettle moss heron ladder', displayName: 'Someone New' };
 
   it('a taken handle is refused the same way whether the e-mail is new or already a member’s', async () => {
-    const withNewEmail = await post(signUpPOST, '/api/account/sign-up', { ...member, email: 'brand-new@linnetmill.example', handle: 'ferncombe_tamsin' });
-    const withMemberEmail = await post(signUpPOST, '/api/account/sign-up', { ...member, email: 'cabin@sorrelcreek.example', handle: 'ferncombe_tamsin' });
+    const withNewEmail = await post(signUpPOST, '/api/account/sign-up', {
+      ...member,
+      email: 'brand-new@linnetmill.example',
+      handle: 'ferncombe_tamsin',
+    });
+    const withMemberEmail = await post(signUpPOST, '/api/account/sign-up', {
+      ...member,
+      email: 'cabin@sorrelcreek.example',
+      handle: 'ferncombe_tamsin',
+    });
     expect(withNewEmail.status).toBe(409);
     expect(withMemberEmail.status).toBe(409);
     expect(await withMemberEmail.json()).toEqual(await withNewEmail.json());
   });
 
   it('a free handle: the same answer for a member’s e-mail as for a new one, and the member gets a note', async () => {
-    const fresh = await post(signUpPOST, '/api/account/sign-up', { ...member, email: 'otter@linnetmill.example', handle: 'linnet_otter' });
-    const taken = await post(signUpPOST, '/api/account/sign-up', { ...member, email: 'cabin@sorrelcreek.example', handle: 'linnet_otter_2' });
+    const fresh = await post(signUpPOST, '/api/account/sign-up', {
+      ...member,
+      email: 'otter@linnetmill.example',
+      handle: 'linnet_otter',
+    });
+    const taken = await post(signUpPOST, '/api/account/sign-up', {
+      ...member,
+      email: 'cabin@sorrelcreek.example',
+      handle: 'linnet_otter_2',
+    });
     expect(taken.status).toBe(fresh.status);
     expect(await taken.json()).toEqual(await fresh.json());
     expect(await initModels().User.count({ where: { handle: 'linnet_otter_2' } })).toBe(0);
@@ -55,7 +77,9 @@ describe('sign-up', () => {
 describe('password reset', () => {
   it('answers members and strangers alike, in the same time, and still mails the member', async () => {
     const { User } = initModels();
-    const members = (await User.findAll({ attributes: ['email'], order: [['id', 'ASC']], limit: 5 })).map((u) => u.email);
+    const members = (await User.findAll({ attributes: ['email'], order: [['id', 'ASC']], limit: 5 })).map(
+      (u) => u.email,
+    );
     const strangers = members.map((_, i) => `stranger${i}@nowhere.example`);
     const timed = async (email: string) => {
       const t0 = performance.now();

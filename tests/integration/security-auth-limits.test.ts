@@ -30,16 +30,27 @@ afterEach(() => {
 });
 
 type Authorize = (c: Record<string, string>, req: { headers: Record<string, string> }) => Promise<unknown>;
-const authorize = (authOptions.providers.find((x) => (x as unknown as { options?: { id?: string } }).options?.id === 'password') as unknown as { options: { authorize: Authorize } }).options.authorize;
+const authorize = (
+  authOptions.providers.find(
+    (x) => (x as unknown as { options?: { id?: string } }).options?.id === 'password',
+  ) as unknown as { options: { authorize: Authorize } }
+).options.authorize;
 
 /** What the app's server hands a route handler when a client wrote `spoofed` itself: the real peer is appended last. */
 const forwarded = (spoofed: string, peer: string) => ({ 'x-forwarded-for': `${spoofed}, ${peer}` });
 
 describe('per-address limits follow the connecting address, not what the client writes', () => {
   it("the server appends the socket's peer to X-Forwarded-For, so a rotated header keys nothing", async () => {
-    const server = peerAwareServer((req: import('node:http').IncomingMessage, res: import('node:http').ServerResponse) => {
-      res.end(JSON.stringify({ key: clientIp(req.headers as Record<string, string>), header: req.headers['x-forwarded-for'] }));
-    });
+    const server = peerAwareServer(
+      (req: import('node:http').IncomingMessage, res: import('node:http').ServerResponse) => {
+        res.end(
+          JSON.stringify({
+            key: clientIp(req.headers as Record<string, string>),
+            header: req.headers['x-forwarded-for'],
+          }),
+        );
+      },
+    );
     await new Promise<void>((r) => server.listen(0, '127.0.0.1', () => r()));
     try {
       const { port } = server.address() as AddressInfo;
@@ -62,7 +73,10 @@ describe('per-address limits follow the connecting address, not what the client 
     const outcomes: string[] = [];
     // a different unknown address each time, so only the per-address limit can refuse
     for (let i = 0; i < 31; i++) {
-      const err = await authorize({ email: `nobody${i}@nowhere.example`, password: 'not the password at all' }, { headers: forwarded(`198.51.100.${i}`, '203.0.113.10') }).then(
+      const err = await authorize(
+        { email: `nobody${i}@nowhere.example`, password: 'not the password at all' },
+        { headers: forwarded(`198.51.100.${i}`, '203.0.113.10') },
+      ).then(
         () => 'signed in',
         (e: Error) => e.message,
       );
@@ -111,15 +125,24 @@ describe('per-account limits hold for every spelling the collation folds onto th
   });
 
   it('a spelling the collation merely folds onto an account does not sign in to it', async () => {
-    for (const email of SPELLINGS) await expect(authorize({ email, password: DEMO_PASSWORD }, from())).rejects.toThrow(SIGN_IN_ERRORS.wrong);
+    for (const email of SPELLINGS)
+      await expect(authorize({ email, password: DEMO_PASSWORD }, from())).rejects.toThrow(SIGN_IN_ERRORS.wrong);
   });
 
   it('wrong passwords under several spellings use up one count; the locked account stays locked under its own spelling', async () => {
     // those three tries above already count: five a quarter hour per account (lib/auth/rate-limit.ts; common practice, no source)
-    await expect(authorize({ email: SPELLINGS[0], password: 'not-the-password' }, from())).rejects.toThrow(SIGN_IN_ERRORS.wrong);
-    await expect(authorize({ email: SPELLINGS[1], password: 'not-the-password' }, from())).rejects.toThrow(SIGN_IN_ERRORS.wrong);
-    await expect(authorize({ email: SPELLINGS[2], password: DEMO_PASSWORD }, from())).rejects.toThrow(/Too many attempts/);
-    await expect(authorize({ email: 'cabin@sorrelcreek.example', password: DEMO_PASSWORD }, from())).rejects.toThrow(/Too many attempts/);
+    await expect(authorize({ email: SPELLINGS[0], password: 'not-the-password' }, from())).rejects.toThrow(
+      SIGN_IN_ERRORS.wrong,
+    );
+    await expect(authorize({ email: SPELLINGS[1], password: 'not-the-password' }, from())).rejects.toThrow(
+      SIGN_IN_ERRORS.wrong,
+    );
+    await expect(authorize({ email: SPELLINGS[2], password: DEMO_PASSWORD }, from())).rejects.toThrow(
+      /Too many attempts/,
+    );
+    await expect(authorize({ email: 'cabin@sorrelcreek.example', password: DEMO_PASSWORD }, from())).rejects.toThrow(
+      /Too many attempts/,
+    );
   });
 
   it('sign-in links: one count per account however it is spelt, and no link to a spelling that is not the account', async () => {
@@ -143,9 +166,16 @@ describe('per-account limits hold for every spelling the collation folds onto th
     // three an hour per account (lib/auth/rate-limit.ts; common practice, no source)
     expect(limited).toEqual([false, false, false, true]);
 
-    const send = (authOptions.providers.find((x) => x.id === 'email') as unknown as { options: { sendVerificationRequest: (p: { identifier: string; url: string }) => Promise<void> } }).options.sendVerificationRequest;
+    const send = (
+      authOptions.providers.find((x) => x.id === 'email') as unknown as {
+        options: { sendVerificationRequest: (p: { identifier: string; url: string }) => Promise<void> };
+      }
+    ).options.sendVerificationRequest;
     const before = catcher.countTo(email);
-    await send({ identifier: 'välves@quarrylane.example', url: 'http://127.0.0.1:3100/api/auth/callback/email?token=x' });
+    await send({
+      identifier: 'välves@quarrylane.example',
+      url: 'http://127.0.0.1:3100/api/auth/callback/email?token=x',
+    });
     await backgroundSettled();
     expect(catcher.countTo(email)).toBe(before);
   });
@@ -158,7 +188,12 @@ describe('per-account limits hold for every spelling the collation folds onto th
         new NextRequest('http://localhost/api/account/sign-up', {
           method: 'POST',
           headers: { 'content-type': 'application/json', 'x-forwarded-for': `192.0.2.${++ip}` },
-          body: JSON.stringify({ email, password: 'kettle moss heron ladder', handle: `cabin_twin_${ip}`, displayName: 'Cabin twin' }),
+          body: JSON.stringify({
+            email,
+            password: 'kettle moss heron ladder',
+            handle: `cabin_twin_${ip}`,
+            displayName: 'Cabin twin',
+          }),
         }),
       );
       expect(res.status).toBe(400);

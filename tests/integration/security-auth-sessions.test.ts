@@ -8,8 +8,17 @@ import path from 'node:path';
 const pageRequest = vi.hoisted(() => ({ cookie: '' }));
 vi.mock('next/headers', () => ({
   cookies: async () => {
-    const jar = new Map(pageRequest.cookie ? pageRequest.cookie.split('; ').map((c) => [c.slice(0, c.indexOf('=')), c.slice(c.indexOf('=') + 1)] as [string, string]) : []);
-    return { getAll: () => [...jar].map(([name, value]) => ({ name, value })), get: (n: string) => (jar.has(n) ? { name: n, value: jar.get(n)! } : undefined) };
+    const jar = new Map(
+      pageRequest.cookie
+        ? pageRequest.cookie
+            .split('; ')
+            .map((c) => [c.slice(0, c.indexOf('=')), c.slice(c.indexOf('=') + 1)] as [string, string])
+        : [],
+    );
+    return {
+      getAll: () => [...jar].map(([name, value]) => ({ name, value })),
+      get: (n: string) => (jar.has(n) ? { name: n, value: jar.get(n)! } : undefined),
+    };
   },
   headers: async () => new Headers(pageRequest.cookie ? { cookie: pageRequest.cookie } : {}),
 }));
@@ -41,7 +50,11 @@ afterEach(() => vi.restoreAllMocks());
 /** The cookie a browser got at its sign-in: the jwt callback's token, as next-auth encodes it. */
 async function signedInCookie(handle: string): Promise<string> {
   const u = (await initModels().User.findOne({ where: { handle } }))!;
-  const token = await authOptions.callbacks!.jwt!({ token: {}, user: { id: String(u.id) } as never, account: null } as never);
+  const token = await authOptions.callbacks!.jwt!({
+    token: {},
+    user: { id: String(u.id) } as never,
+    account: null,
+  } as never);
   return `next-auth.session-token=${await encode({ token, secret: authSecret() })}`;
 }
 
@@ -55,14 +68,23 @@ const request = (url: string, cookie: string, method = 'GET', body?: unknown) =>
 const settingsAs = async (cookie: string) => (await settingsGET(request('/api/account/settings', cookie))).status;
 
 // next-auth's core handler, which its route handler calls (not in the package's exports map)
-const { AuthHandler } = createRequire(import.meta.url)(path.resolve(__dirname, '../../node_modules/next-auth/core/index.js')) as {
+const { AuthHandler } = createRequire(import.meta.url)(
+  path.resolve(__dirname, '../../node_modules/next-auth/core/index.js'),
+) as {
   AuthHandler: (p: { req: Request; options: typeof authOptions }) => Promise<unknown>;
 };
 
 /** next-auth's own /api/auth/session, as the browser's SessionProvider asks it. */
 async function sessionEndpoint(cookie: string) {
-  const res = await AuthHandler({ req: new Request('http://127.0.0.1:3100/api/auth/session', { headers: { cookie } }), options: authOptions });
-  return res as { status?: number; body?: Record<string, unknown>; cookies?: { name: string; value: string; options?: { maxAge?: number; expires?: Date } }[] };
+  const res = await AuthHandler({
+    req: new Request('http://127.0.0.1:3100/api/auth/session', { headers: { cookie } }),
+    options: authOptions,
+  });
+  return res as {
+    status?: number;
+    body?: Record<string, unknown>;
+    cookies?: { name: string; value: string; options?: { maxAge?: number; expires?: Date } }[];
+  };
 }
 
 describe('a session ends when the account says so', () => {
@@ -74,7 +96,16 @@ describe('a session ends when the account says so', () => {
 
     const user = (await initModels().User.findOne({ where: { handle: 'ferncombe_tamsin' } }))!;
     const token = await getSequelize().transaction((t) => issueToken(user.id, 'reset-password', t));
-    expect((await resetConfirmPOST(request('/api/account/password-reset/confirm', '', 'POST', { token, password: 'alder sluice gravel lantern' }))).status).toBe(200);
+    expect(
+      (
+        await resetConfirmPOST(
+          request('/api/account/password-reset/confirm', '', 'POST', {
+            token,
+            password: 'alder sluice gravel lantern',
+          }),
+        )
+      ).status,
+    ).toBe(200);
 
     expect(await settingsAs(cookie)).toBe(401);
     expect(await currentUserInPage()).toBeNull();
@@ -107,11 +138,24 @@ describe('a session ends when the account says so', () => {
     const answer = (await Answer.findOne({ where: { authorId: author.id } }))!;
     const before = await signedInCookie('quarry_lane_valves');
     const moss = await signedInCookie('moss_moderator');
-    const act = await reviewPOST(request('/api/review/actions', moss, 'POST', { action: 'suspend', postType: 'answer', postId: answer.id, reason: 'testing session ends', until: '2099-01-31' }));
+    const act = await reviewPOST(
+      request('/api/review/actions', moss, 'POST', {
+        action: 'suspend',
+        postType: 'answer',
+        postId: answer.id,
+        reason: 'testing session ends',
+        until: '2099-01-31',
+      }),
+    );
     expect(act.status).toBeLessThan(300);
     expect(await settingsAs(before)).toBe(401);
     const question = (await Question.findOne({ where: { id: answer.questionId } }))!;
-    const again = await answerPOST(request(`/api/questions/${question.id}/answers`, await signedInCookie('quarry_lane_valves'), 'POST', { body: 'Trying to answer while suspended.' }), { params: Promise.resolve({ id: String(question.id) }) });
+    const again = await answerPOST(
+      request(`/api/questions/${question.id}/answers`, await signedInCookie('quarry_lane_valves'), 'POST', {
+        body: 'Trying to answer while suspended.',
+      }),
+      { params: Promise.resolve({ id: String(question.id) }) },
+    );
     expect(again.status).toBe(403);
     expect((await again.json()).error.code).toBe('suspended');
   });
@@ -137,7 +181,13 @@ describe('junk session cookies read as signed out, with at most one short log li
     const lines: string[] = [];
     for (const level of ['error', 'warn', 'log', 'info'] as const) {
       vi.spyOn(console, level).mockImplementation((...args: unknown[]) => {
-        lines.push(args.map((a) => (a instanceof Error ? `${a.message}\n${a.stack}` : typeof a === 'string' ? a : JSON.stringify(a))).join(' '));
+        lines.push(
+          args
+            .map((a) =>
+              a instanceof Error ? `${a.message}\n${a.stack}` : typeof a === 'string' ? a : JSON.stringify(a),
+            )
+            .join(' '),
+        );
       });
     }
     expect(await currentUser(request('/', cookie))).toBeNull();
@@ -157,7 +207,15 @@ describe('junk session cookies read as signed out, with at most one short log li
 
 describe('after sign-in the browser goes only to a path on this site', () => {
   // "\t" is what the page receives for callbackUrl=/%09/host: the query is decoded before it gets it
-  const OFF_SITE = ['//evil.example', '/\\evil.example', '/\t/evil.example', '/.//evil.example', 'https://evil.example/x', 'javascript:alert(1)', '\\\\evil.example'];
+  const OFF_SITE = [
+    '//evil.example',
+    '/\\evil.example',
+    '/\t/evil.example',
+    '/.//evil.example',
+    'https://evil.example/x',
+    'javascript:alert(1)',
+    '\\\\evil.example',
+  ];
 
   it.each(OFF_SITE)('refuses %j', (raw) => {
     expect(safeReturnPath(raw)).toBe('/');
@@ -194,7 +252,13 @@ describe('after sign-in the browser goes only to a path on this site', () => {
   it("next-auth's redirect callback keeps to this origin", async () => {
     const redirect = authOptions.callbacks!.redirect!;
     const base = 'http://127.0.0.1:3100';
-    for (const url of ['//evil.example', '/\\evil.example', '/\t/evil.example', 'https://evil.example/', `${base}.evil.example/`]) {
+    for (const url of [
+      '//evil.example',
+      '/\\evil.example',
+      '/\t/evil.example',
+      'https://evil.example/',
+      `${base}.evil.example/`,
+    ]) {
       expect(new URL(await redirect({ url, baseUrl: base })).origin).toBe(base);
     }
     expect(await redirect({ url: '/settings', baseUrl: base })).toBe(`${base}/settings`);

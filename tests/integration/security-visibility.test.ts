@@ -25,7 +25,8 @@ import { actAs } from '../support/act-as';
 process.env.UPLOAD_DIR = mkdtempSync(path.join(os.tmpdir(), 'clackwater-visibility-'));
 
 const { call, raw } = actAs('10.71');
-const { Question, Answer, Reply, FieldLogEntry, MailMessage, QuestionFollow, HelpfulMark, Revision, Photo, User } = initModels();
+const { Question, Answer, Reply, FieldLogEntry, MailMessage, QuestionFollow, HelpfulMark, Revision, Photo, User } =
+  initModels();
 const p = (id: number) => ({ id: String(id) });
 const userId = async (handle: string) => (await User.findOne({ where: { handle } }))!.id;
 
@@ -35,17 +36,35 @@ const MEMBER = 'highcrag_shepherd';
 const MOD = 'moss_moderator';
 
 async function ask(title: string) {
-  const res = await call(askPOST, 'POST', '/api/questions', ASKER, { title, body: 'The waste valve beats for a minute, then stops shut; the brook is at its summer low.', tags: ['stall'] });
+  const res = await call(askPOST, 'POST', '/api/questions', ASKER, {
+    title,
+    body: 'The waste valve beats for a minute, then stops shut; the brook is at its summer low.',
+    tags: ['stall'],
+  });
   expect(res.status).toBe(201);
   return res.body.id as number;
 }
 async function answer(qid: number, who = EXPERT) {
-  const res = await call(answerPOST, 'POST', `/api/questions/${qid}/answers`, who, { body: 'Lengthen the drive pipe and check the waste valve spring weight first.' }, p(qid));
+  const res = await call(
+    answerPOST,
+    'POST',
+    `/api/questions/${qid}/answers`,
+    who,
+    { body: 'Lengthen the drive pipe and check the waste valve spring weight first.' },
+    p(qid),
+  );
   expect(res.status).toBe(201);
   return res.body.id as number;
 }
 async function reply(qid: number, answerId: number, who = MEMBER) {
-  const res = await call(replyPOST, 'POST', `/api/questions/${qid}/replies`, who, { body: 'Same here with a 1 inch pump.', answerId }, p(qid));
+  const res = await call(
+    replyPOST,
+    'POST',
+    `/api/questions/${qid}/replies`,
+    who,
+    { body: 'Same here with a 1 inch pump.', answerId },
+    p(qid),
+  );
   expect(res.status).toBe(201);
   return res.body.id as number;
 }
@@ -54,10 +73,23 @@ const hide = { hiddenAt: new Date(), hiddenReason: 'test: hidden by a moderator'
 /** A stored photo (both copies) attached to a post, as an upload would leave it. */
 async function photoOn(target: { questionId?: number; answerId?: number; fieldLogEntryId?: number }) {
   const publicId = newPhotoId();
-  const web = await sharp({ create: { width: 64, height: 48, channels: 3, background: '#5f7a3a' } }).webp().toBuffer();
+  const web = await sharp({ create: { width: 64, height: 48, channels: 3, background: '#5f7a3a' } })
+    .webp()
+    .toBuffer();
   await writeVariant(publicId, 'web', web);
   await writeVariant(publicId, 'thumb', web);
-  await Photo.create({ publicId, ownerId: await userId(ASKER), questionId: target.questionId ?? null, answerId: target.answerId ?? null, fieldLogEntryId: target.fieldLogEntryId ?? null, mime: 'image/webp', width: 64, height: 48, bytes: web.length, alt: 'the pump on its sill' });
+  await Photo.create({
+    publicId,
+    ownerId: await userId(ASKER),
+    questionId: target.questionId ?? null,
+    answerId: target.answerId ?? null,
+    fieldLogEntryId: target.fieldLogEntryId ?? null,
+    mime: 'image/webp',
+    width: 64,
+    height: 48,
+    bytes: web.length,
+    alt: 'the pump on its sill',
+  });
   return publicId;
 }
 
@@ -78,13 +110,29 @@ describe('revision history follows the visibility of its post and its thread (is
     deletedReply = await reply(open, openAnswer, 'sorrel_cabin');
     hiddenQ = await ask('Revisions check: a thread a moderator hid');
     answerInHiddenQ = await answer(hiddenQ);
-    expect((await call(questionPUT, 'PUT', `/api/questions/${hiddenQ}`, ASKER, { title: 'Revisions check: a thread a moderator hid', body: 'Edited: the second version of the words nobody may read now.', tags: ['stall'] }, p(hiddenQ))).status).toBe(200);
+    expect(
+      (
+        await call(
+          questionPUT,
+          'PUT',
+          `/api/questions/${hiddenQ}`,
+          ASKER,
+          {
+            title: 'Revisions check: a thread a moderator hid',
+            body: 'Edited: the second version of the words nobody may read now.',
+            tags: ['stall'],
+          },
+          p(hiddenQ),
+        )
+      ).status,
+    ).toBe(200);
     await Question.update(hide, { where: { id: hiddenQ } });
     await Answer.update(hide, { where: { id: hiddenAnswer } });
     await Reply.update({ deletedAt: new Date() }, { where: { id: deletedReply } });
   });
 
-  const revisions = (qid: number, who: string | null, query = '') => call(revisionsGET, 'GET', `/api/questions/${qid}/revisions${query}`, who, undefined, p(qid));
+  const revisions = (qid: number, who: string | null, query = '') =>
+    call(revisionsGET, 'GET', `/api/questions/${qid}/revisions${query}`, who, undefined, p(qid));
 
   it('a hidden question’s history is not found for the anonymous, members and its own asker, as the thread is', async () => {
     for (const who of [null, MEMBER, ASKER]) {
@@ -104,7 +152,10 @@ describe('revision history follows the visibility of its post and its thread (is
     expect(res.body.revisions[1].body).toContain('nobody may read');
     expect((await revisions(hiddenQ, 'clack_admin', `?postType=answer&postId=${answerInHiddenQ}`)).status).toBe(200);
     // a moderator's view of hidden words is never for a shared cache
-    for (const [handler, url] of [[revisionsGET, `/api/questions/${hiddenQ}/revisions`], [threadGET, `/api/questions/${hiddenQ}`]] as const) {
+    for (const [handler, url] of [
+      [revisionsGET, `/api/questions/${hiddenQ}/revisions`],
+      [threadGET, `/api/questions/${hiddenQ}`],
+    ] as const) {
       const res = await raw(handler, 'GET', url, MOD, undefined, p(hiddenQ));
       expect(res.status).toBe(200);
       expect(res.headers.get('cache-control')).toBe('private, no-store');
@@ -158,7 +209,9 @@ describe('hidden and deleted posts take no answers, replies, marks, follows or f
     deletedAnswer = await answer(open, 'sorrel_cabin');
     hiddenReply = await reply(open, visibleAnswer);
     // a mark made before the post was hidden, to take back afterwards
-    expect((await call(helpfulPOST, 'POST', '/api/helpful', MEMBER, { postType: 'answer', postId: hiddenAnswer })).status).toBe(201);
+    expect(
+      (await call(helpfulPOST, 'POST', '/api/helpful', MEMBER, { postType: 'answer', postId: hiddenAnswer })).status,
+    ).toBe(201);
     await Question.update(hide, { where: { id: hiddenQ } });
     await Answer.update(hide, { where: { id: hiddenAnswer } });
     await Answer.update({ deletedAt: new Date() }, { where: { id: deletedAnswer } });
@@ -170,11 +223,32 @@ describe('hidden and deleted posts take no answers, replies, marks, follows or f
     const answers = await Answer.count();
     const replies = await Reply.count();
     for (const who of [MEMBER, EXPERT, ASKER]) {
-      const a = await call(answerPOST, 'POST', `/api/questions/${hiddenQ}/answers`, who, { body: 'An answer nobody can read, to a question nobody can read.' }, p(hiddenQ));
+      const a = await call(
+        answerPOST,
+        'POST',
+        `/api/questions/${hiddenQ}/answers`,
+        who,
+        { body: 'An answer nobody can read, to a question nobody can read.' },
+        p(hiddenQ),
+      );
       expect(a.status, `answer as ${who}`).toBe(404);
-      const r = await call(replyPOST, 'POST', `/api/questions/${hiddenQ}/replies`, who, { body: 'A reply to a hidden question.' }, p(hiddenQ));
+      const r = await call(
+        replyPOST,
+        'POST',
+        `/api/questions/${hiddenQ}/replies`,
+        who,
+        { body: 'A reply to a hidden question.' },
+        p(hiddenQ),
+      );
       expect(r.status, `reply as ${who}`).toBe(404);
-      const under = await call(replyPOST, 'POST', `/api/questions/${hiddenQ}/replies`, who, { body: 'A reply under an answer in a hidden thread.', answerId: answerInHiddenQ }, p(hiddenQ));
+      const under = await call(
+        replyPOST,
+        'POST',
+        `/api/questions/${hiddenQ}/replies`,
+        who,
+        { body: 'A reply under an answer in a hidden thread.', answerId: answerInHiddenQ },
+        p(hiddenQ),
+      );
       expect(under.status).toBe(404);
     }
     expect(await Answer.count()).toBe(answers);
@@ -183,18 +257,40 @@ describe('hidden and deleted posts take no answers, replies, marks, follows or f
   });
 
   it('a moderator, who can see it, is told to restore it first (409), and nothing is saved', async () => {
-    const a = await call(answerPOST, 'POST', `/api/questions/${hiddenQ}/answers`, MOD, { body: 'A moderator answering in a hidden thread.' }, p(hiddenQ));
+    const a = await call(
+      answerPOST,
+      'POST',
+      `/api/questions/${hiddenQ}/answers`,
+      MOD,
+      { body: 'A moderator answering in a hidden thread.' },
+      p(hiddenQ),
+    );
     expect(a.status).toBe(409);
     expect(a.body.error.message).toMatch(/hidden or deleted/);
-    expect((await call(helpfulPOST, 'POST', '/api/helpful', MOD, { postType: 'question', postId: hiddenQ })).status).toBe(409);
-    expect((await call(followPOST, 'POST', `/api/questions/${hiddenQ}/follow`, MOD, undefined, p(hiddenQ))).status).toBe(409);
+    expect(
+      (await call(helpfulPOST, 'POST', '/api/helpful', MOD, { postType: 'question', postId: hiddenQ })).status,
+    ).toBe(409);
+    expect(
+      (await call(followPOST, 'POST', `/api/questions/${hiddenQ}/follow`, MOD, undefined, p(hiddenQ))).status,
+    ).toBe(409);
     expect(await Answer.count({ where: { questionId: hiddenQ } })).toBe(1);
   });
 
   it('a reply under a hidden or deleted answer, or to a hidden reply, is refused as if it were not there', async () => {
     const replies = await Reply.count();
-    for (const [answerId, replyToId] of [[hiddenAnswer, undefined], [deletedAnswer, undefined], [undefined, hiddenReply]]) {
-      const r = await call(replyPOST, 'POST', `/api/questions/${open}/replies`, MEMBER, { body: 'Replying to something hidden.', answerId, replyToId }, p(open));
+    for (const [answerId, replyToId] of [
+      [hiddenAnswer, undefined],
+      [deletedAnswer, undefined],
+      [undefined, hiddenReply],
+    ]) {
+      const r = await call(
+        replyPOST,
+        'POST',
+        `/api/questions/${open}/replies`,
+        MEMBER,
+        { body: 'Replying to something hidden.', answerId, replyToId },
+        p(open),
+      );
       expect(r.status).toBe(422);
       expect(r.body.error.field).toBe(answerId ? 'answerId' : 'replyToId');
     }
@@ -203,12 +299,21 @@ describe('hidden and deleted posts take no answers, replies, marks, follows or f
 
   it('helpful marks on hidden posts, or on any post of a hidden thread, are not found, either way', async () => {
     const marks = await HelpfulMark.count();
-    const targets: [string, number][] = [['question', hiddenQ], ['answer', answerInHiddenQ], ['answer', hiddenAnswer], ['answer', deletedAnswer], ['reply', hiddenReply]];
+    const targets: [string, number][] = [
+      ['question', hiddenQ],
+      ['answer', answerInHiddenQ],
+      ['answer', hiddenAnswer],
+      ['answer', deletedAnswer],
+      ['reply', hiddenReply],
+    ];
     for (const [postType, postId] of targets) {
       const res = await call(helpfulPOST, 'POST', '/api/helpful', 'sorrel_cabin', { postType, postId });
       expect(res.status, `${postType} ${postId}`).toBe(404);
     }
-    const back = await call(helpfulDELETE, 'DELETE', '/api/helpful', MEMBER, { postType: 'answer', postId: hiddenAnswer });
+    const back = await call(helpfulDELETE, 'DELETE', '/api/helpful', MEMBER, {
+      postType: 'answer',
+      postId: hiddenAnswer,
+    });
     expect(back.status).toBe(404);
     expect(await HelpfulMark.count()).toBe(marks);
     expect((await Answer.findByPk(hiddenAnswer))!.helpfulCount).toBe(1);
@@ -218,11 +323,16 @@ describe('hidden and deleted posts take no answers, replies, marks, follows or f
     const res = await call(followPOST, 'POST', `/api/questions/${hiddenQ}/follow`, MEMBER, undefined, p(hiddenQ));
     expect(res.status).toBe(404);
     expect(await QuestionFollow.count({ where: { questionId: hiddenQ, userId: await userId(MEMBER) } })).toBe(0);
-    expect((await call(followDELETE, 'DELETE', `/api/questions/${hiddenQ}/follow`, MEMBER, undefined, p(hiddenQ))).status).toBe(404);
+    expect(
+      (await call(followDELETE, 'DELETE', `/api/questions/${hiddenQ}/follow`, MEMBER, undefined, p(hiddenQ))).status,
+    ).toBe(404);
   });
 
   it('fixed it: not on a hidden question, and never a hidden or deleted answer', async () => {
-    expect((await call(fixedPUT, 'PUT', `/api/questions/${hiddenQ}/fixed`, ASKER, { answerId: answerInHiddenQ }, p(hiddenQ))).status).toBe(404);
+    expect(
+      (await call(fixedPUT, 'PUT', `/api/questions/${hiddenQ}/fixed`, ASKER, { answerId: answerInHiddenQ }, p(hiddenQ)))
+        .status,
+    ).toBe(404);
     for (const answerId of [hiddenAnswer, deletedAnswer]) {
       const res = await call(fixedPUT, 'PUT', `/api/questions/${open}/fixed`, ASKER, { answerId }, p(open));
       expect(res.status).toBe(422);
@@ -234,10 +344,58 @@ describe('hidden and deleted posts take no answers, replies, marks, follows or f
 
   it('their authors cannot edit hidden posts they can no longer see', async () => {
     const revisions = await Revision.count();
-    expect((await call(answerPUT, 'PUT', `/api/answers/${hiddenAnswer}`, 'quarry_lane_valves', { body: 'Quietly rewriting a hidden answer after the fact.' }, p(hiddenAnswer))).status).toBe(404);
-    expect((await call(answerPUT, 'PUT', `/api/answers/${answerInHiddenQ}`, EXPERT, { body: 'Rewriting an answer in a hidden thread after the fact.' }, p(answerInHiddenQ))).status).toBe(404);
-    expect((await call(replyPUT, 'PUT', `/api/replies/${hiddenReply}`, MEMBER, { body: 'Rewriting a hidden reply.' }, p(hiddenReply))).status).toBe(404);
-    expect((await call(questionPUT, 'PUT', `/api/questions/${hiddenQ}`, ASKER, { title: 'Writes check: a thread a moderator hid', body: 'Rewriting the hidden question after the fact.', tags: ['stall'] }, p(hiddenQ))).status).toBe(404);
+    expect(
+      (
+        await call(
+          answerPUT,
+          'PUT',
+          `/api/answers/${hiddenAnswer}`,
+          'quarry_lane_valves',
+          { body: 'Quietly rewriting a hidden answer after the fact.' },
+          p(hiddenAnswer),
+        )
+      ).status,
+    ).toBe(404);
+    expect(
+      (
+        await call(
+          answerPUT,
+          'PUT',
+          `/api/answers/${answerInHiddenQ}`,
+          EXPERT,
+          { body: 'Rewriting an answer in a hidden thread after the fact.' },
+          p(answerInHiddenQ),
+        )
+      ).status,
+    ).toBe(404);
+    expect(
+      (
+        await call(
+          replyPUT,
+          'PUT',
+          `/api/replies/${hiddenReply}`,
+          MEMBER,
+          { body: 'Rewriting a hidden reply.' },
+          p(hiddenReply),
+        )
+      ).status,
+    ).toBe(404);
+    expect(
+      (
+        await call(
+          questionPUT,
+          'PUT',
+          `/api/questions/${hiddenQ}`,
+          ASKER,
+          {
+            title: 'Writes check: a thread a moderator hid',
+            body: 'Rewriting the hidden question after the fact.',
+            tags: ['stall'],
+          },
+          p(hiddenQ),
+        )
+      ).status,
+    ).toBe(404);
     expect(await Revision.count()).toBe(revisions);
   });
 
@@ -246,7 +404,18 @@ describe('hidden and deleted posts take no answers, replies, marks, follows or f
   });
 
   it('open posts in the same thread still take answers and replies (and their mail)', async () => {
-    expect((await call(replyPOST, 'POST', `/api/questions/${open}/replies`, MEMBER, { body: 'Still open for replies.', answerId: visibleAnswer }, p(open))).status).toBe(201);
+    expect(
+      (
+        await call(
+          replyPOST,
+          'POST',
+          `/api/questions/${open}/replies`,
+          MEMBER,
+          { body: 'Still open for replies.', answerId: visibleAnswer },
+          p(open),
+        )
+      ).status,
+    ).toBe(201);
     expect(await MailMessage.count()).toBeGreaterThan(outboxBefore);
   });
 });
@@ -277,7 +446,10 @@ describe('a photo on a hidden post is served only to moderators, and never to a 
   it('is not found for the anonymous and for members, and that answer is not kept by any cache', async () => {
     for (const [what, id] of Object.entries(taken)) {
       for (const who of [null, MEMBER, ASKER]) {
-        for (const [handler, url] of [[photoGET, `/api/photos/${id}`], [thumbGET, `/api/photos/${id}/thumb`]] as const) {
+        for (const [handler, url] of [
+          [photoGET, `/api/photos/${id}`],
+          [thumbGET, `/api/photos/${id}/thumb`],
+        ] as const) {
           const res = await raw(handler, 'GET', url, who, undefined, { id });
           expect(res.status, `${what} ${url} as ${who ?? 'anonymous'}`).toBe(404);
           expect(res.headers.get('content-type')).not.toMatch(/image/);

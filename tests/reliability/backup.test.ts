@@ -13,12 +13,25 @@ import { freshDemoDatabase } from '../support/db';
 
 /** Row count of every table, and a sha256 over every post's id, title and body in order. */
 async function fingerprint(db: Sequelize) {
-  const tables = (await db.query<{ t: string }>('SELECT table_name AS t FROM information_schema.tables WHERE table_schema = DATABASE() ORDER BY table_name', { type: QueryTypes.SELECT })).map((r) => r.t);
+  const tables = (
+    await db.query<{ t: string }>(
+      'SELECT table_name AS t FROM information_schema.tables WHERE table_schema = DATABASE() ORDER BY table_name',
+      { type: QueryTypes.SELECT },
+    )
+  ).map((r) => r.t);
   const counts: Record<string, number> = {};
-  for (const t of tables) counts[t] = Number((await db.query<{ n: number }>(`SELECT COUNT(*) AS n FROM \`${t}\``, { type: QueryTypes.SELECT }))[0].n);
+  for (const t of tables)
+    counts[t] = Number(
+      (await db.query<{ n: number }>(`SELECT COUNT(*) AS n FROM \`${t}\``, { type: QueryTypes.SELECT }))[0].n,
+    );
   const hash = createHash('sha256');
-  for (const sql of ['SELECT id, title, body FROM questions ORDER BY id', 'SELECT id, body FROM answers ORDER BY id', 'SELECT id, body FROM replies ORDER BY id']) {
-    for (const row of await db.query<Record<string, unknown>>(sql, { type: QueryTypes.SELECT })) hash.update(`${JSON.stringify(row)}\n`);
+  for (const sql of [
+    'SELECT id, title, body FROM questions ORDER BY id',
+    'SELECT id, body FROM answers ORDER BY id',
+    'SELECT id, body FROM replies ORDER BY id',
+  ]) {
+    for (const row of await db.query<Record<string, unknown>>(sql, { type: QueryTypes.SELECT }))
+      hash.update(`${JSON.stringify(row)}\n`);
   }
   return { counts, posts: hash.digest('hex') };
 }
@@ -32,7 +45,10 @@ describe('db:backup and db:restore (mariadb-dump, real MariaDB)', () => {
     await freshDemoDatabase();
     // words that a careless dump or restore would mangle
     const { Question } = initModels();
-    await Question.update({ body: 'Ünïcödé ≥ 1¼" — 水 — \'; DROP TABLE questions; -- \\ \u{1F4A7}' }, { where: { id: 1 } });
+    await Question.update(
+      { body: 'Ünïcödé ≥ 1¼" — 水 — \'; DROP TABLE questions; -- \\ \u{1F4A7}' },
+      { where: { id: 1 } },
+    );
     const admin = createSequelize({ database: '' });
     await admin.query('DROP DATABASE IF EXISTS `clackwater_test_restore`');
     await admin.close();
@@ -52,7 +68,9 @@ describe('db:backup and db:restore (mariadb-dump, real MariaDB)', () => {
     expect(Object.keys(after.counts).length).toBeGreaterThan(10);
     expect(after.counts).toEqual(before.counts);
     expect(after.posts).toBe(before.posts);
-    const [row] = await restored.query<{ body: string }>('SELECT body FROM questions WHERE id = 1', { type: QueryTypes.SELECT });
+    const [row] = await restored.query<{ body: string }>('SELECT body FROM questions WHERE id = 1', {
+      type: QueryTypes.SELECT,
+    });
     expect(row.body).toBe('Ünïcödé ≥ 1¼" — 水 — \'; DROP TABLE questions; -- \\ \u{1F4A7}');
   });
 

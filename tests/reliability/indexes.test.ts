@@ -40,13 +40,16 @@ async function plans(work: () => Promise<unknown>) {
     options.logging = before;
   }
   const out: { sql: string; plan: PlanRow[] }[] = [];
-  for (const sql of seen) out.push({ sql, plan: await sequelize.query<PlanRow>(`EXPLAIN ${sql}`, { type: QueryTypes.SELECT }) });
+  for (const sql of seen)
+    out.push({ sql, plan: await sequelize.query<PlanRow>(`EXPLAIN ${sql}`, { type: QueryTypes.SELECT }) });
   return out;
 }
 
 function fullScans(found: Awaited<ReturnType<typeof plans>>) {
   return found.flatMap(({ sql, plan }) =>
-    plan.filter((r) => r.type === 'ALL' && Number(r.rows ?? 0) >= LARGE_ROWS).map((r) => `${r.table} (≈${r.rows} rows) in: ${sql.slice(0, 300)}`),
+    plan
+      .filter((r) => r.type === 'ALL' && Number(r.rows ?? 0) >= LARGE_ROWS)
+      .map((r) => `${r.table} (≈${r.rows} rows) in: ${sql.slice(0, 300)}`),
   );
 }
 
@@ -56,8 +59,13 @@ describe('every list query uses an index (EXPLAIN on 20,000 posts, real MariaDB)
   beforeAll(async () => {
     await freshDemoDatabase();
     await insertBenchPosts(getSequelize(), POSTS);
-    await getSequelize().query('ANALYZE TABLE questions, answers, replies, question_tags, users, revisions', { type: QueryTypes.SELECT });
-    const [row] = await getSequelize().query<{ id: number }>('SELECT id FROM questions ORDER BY answer_count DESC LIMIT 1', { type: QueryTypes.SELECT });
+    await getSequelize().query('ANALYZE TABLE questions, answers, replies, question_tags, users, revisions', {
+      type: QueryTypes.SELECT,
+    });
+    const [row] = await getSequelize().query<{ id: number }>(
+      'SELECT id FROM questions ORDER BY answer_count DESC LIMIT 1',
+      { type: QueryTypes.SELECT },
+    );
     bigThread = row.id;
     member = (await initModels().User.findOne({ where: { handle: 'highcrag_shepherd' } }))!.id;
   }, 120_000);

@@ -24,12 +24,30 @@ describe('SMTP down: events commit, messages wait in the outbox, each goes out o
   });
 
   it('with no mail server, answers and replies are saved and their messages wait', async () => {
-    const q = await call(askPOST, 'POST', '/api/questions', 'ferncombe_tamsin', { title: 'Outage check: delivery drops at dusk', body: 'Every evening the delivery falls to half and comes back by morning.', tags: ['stall'] });
+    const q = await call(askPOST, 'POST', '/api/questions', 'ferncombe_tamsin', {
+      title: 'Outage check: delivery drops at dusk',
+      body: 'Every evening the delivery falls to half and comes back by morning.',
+      tags: ['stall'],
+    });
     expect(q.status).toBe(201);
     qid = q.body.id;
-    const a = await call(answerPOST, 'POST', `/api/questions/${qid}/answers`, 'ironwheel_builds', { body: 'Check the intake screen at dusk: leaves settle on it when the breeze drops.' }, { id: String(qid) });
+    const a = await call(
+      answerPOST,
+      'POST',
+      `/api/questions/${qid}/answers`,
+      'ironwheel_builds',
+      { body: 'Check the intake screen at dusk: leaves settle on it when the breeze drops.' },
+      { id: String(qid) },
+    );
     expect(a.status).toBe(201);
-    const r = await call(replyPOST, 'POST', `/api/questions/${qid}/replies`, 'ferncombe_tamsin', { body: 'The screen was half covered. Cleared it.', answerId: a.body.id }, { id: String(qid) });
+    const r = await call(
+      replyPOST,
+      'POST',
+      `/api/questions/${qid}/replies`,
+      'ferncombe_tamsin',
+      { body: 'The screen was half covered. Cleared it.', answerId: a.body.id },
+      { id: String(qid) },
+    );
     expect(r.status).toBe(201);
 
     const { MailMessage, Answer, Reply } = initModels();
@@ -68,7 +86,9 @@ describe('SMTP down: events commit, messages wait in the outbox, each goes out o
     expect(answerMail.text).toMatch(new RegExp(`/questions/${qid}#answer-\\d+`));
     expect(answerMail.html).toContain('Check the intake screen at dusk');
     expect(answerMail.raw.get('list-unsubscribe-post')).toBe('List-Unsubscribe=One-Click');
-    expect(answerMail.raw.get('list-unsubscribe')).toMatch(/^<http:\/\/127\.0\.0\.1:3100\/api\/unsubscribe\?u=\d+&s=answers&t=[\w-]{43}>$/);
+    expect(answerMail.raw.get('list-unsubscribe')).toMatch(
+      /^<http:\/\/127\.0\.0\.1:3100\/api\/unsubscribe\?u=\d+&s=answers&t=[\w-]{43}>$/,
+    );
     const { MailMessage } = initModels();
     expect(await MailMessage.count({ where: { status: 'sent' } })).toBe(2);
   });
@@ -78,7 +98,14 @@ describe('SMTP down: events commit, messages wait in the outbox, each goes out o
     const cabin = (await User.findOne({ where: { handle: 'sorrel_cabin' } }))!;
     await cabin.update({ email: 'refused@nowhere.example' });
     const theirs = (await initModels().Question.findOne({ where: { authorId: cabin.id } }))!.id;
-    const a = await call(answerPOST, 'POST', `/api/questions/${theirs}/answers`, 'ironwheel_builds', { body: 'Raise the outlet a little.' }, { id: String(theirs) });
+    const a = await call(
+      answerPOST,
+      'POST',
+      `/api/questions/${theirs}/answers`,
+      'ironwheel_builds',
+      { body: 'Raise the outlet a little.' },
+      { id: String(theirs) },
+    );
     expect(a.status).toBe(201);
     const row = (await MailMessage.findOne({ where: { toAddress: 'refused@nowhere.example' } }))!;
     let t = Date.now();
@@ -92,13 +119,34 @@ describe('SMTP down: events commit, messages wait in the outbox, each goes out o
     expect(row.lastError).toMatch(/550/);
     expect(catcher!.countTo('refused@nowhere.example')).toBe(0);
 
-    const member = await call(retryPOST, 'POST', `/api/admin/outbox/${row.id}/retry`, 'moss_moderator', {}, { id: String(row.id) });
+    const member = await call(
+      retryPOST,
+      'POST',
+      `/api/admin/outbox/${row.id}/retry`,
+      'moss_moderator',
+      {},
+      { id: String(row.id) },
+    );
     expect(member.status).toBe(403);
-    const admin = await call(retryPOST, 'POST', `/api/admin/outbox/${row.id}/retry`, 'clack_admin', {}, { id: String(row.id) });
+    const admin = await call(
+      retryPOST,
+      'POST',
+      `/api/admin/outbox/${row.id}/retry`,
+      'clack_admin',
+      {},
+      { id: String(row.id) },
+    );
     expect(admin.status).toBe(200);
     await row.reload();
     expect(row).toMatchObject({ status: 'pending', attempts: 0 });
-    const again = await call(retryPOST, 'POST', `/api/admin/outbox/${row.id}/retry`, 'clack_admin', {}, { id: String(row.id) });
+    const again = await call(
+      retryPOST,
+      'POST',
+      `/api/admin/outbox/${row.id}/retry`,
+      'clack_admin',
+      {},
+      { id: String(row.id) },
+    );
     expect(again.status).toBe(404);
   });
 
@@ -107,9 +155,27 @@ describe('SMTP down: events commit, messages wait in the outbox, each goes out o
     catcher = null;
     const { MailMessage } = initModels();
     await MailMessage.destroy({ where: {} });
-    const base = { userId: null, kind: 'answer', subject: 'Backoff check', textBody: 'x', htmlBody: null, headers: null };
-    const old = await MailMessage.create({ ...base, dedupeKey: 'check:old', toAddress: 'old@nowhere.example', attempts: 4, nextAttemptAt: new Date(Date.now() - 60_000) });
-    const fresh = await MailMessage.create({ ...base, dedupeKey: 'check:fresh', toAddress: 'fresh@nowhere.example', nextAttemptAt: new Date() });
+    const base = {
+      userId: null,
+      kind: 'answer',
+      subject: 'Backoff check',
+      textBody: 'x',
+      htmlBody: null,
+      headers: null,
+    };
+    const old = await MailMessage.create({
+      ...base,
+      dedupeKey: 'check:old',
+      toAddress: 'old@nowhere.example',
+      attempts: 4,
+      nextAttemptAt: new Date(Date.now() - 60_000),
+    });
+    const fresh = await MailMessage.create({
+      ...base,
+      dedupeKey: 'check:fresh',
+      toAddress: 'fresh@nowhere.example',
+      nextAttemptAt: new Date(),
+    });
     const t0 = Date.now();
     expect(await flushOutbox()).toEqual({ sent: 0, retrying: 2, failed: 0 });
     await old.reload();

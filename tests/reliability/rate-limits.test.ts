@@ -5,7 +5,8 @@ import { RateLimiterMariaDB } from '@/lib/auth/rate-limit-store';
 import { freshDemoDatabase } from '../support/db';
 
 /** What one app instance holds: its own pool and its own limiter object, on the shared database. */
-const instance = (points: number, duration: number) => new RateLimiterMariaDB({ points, duration, keyPrefix: 'post-account', sequelize: createSequelize() });
+const instance = (points: number, duration: number) =>
+  new RateLimiterMariaDB({ points, duration, keyPrefix: 'post-account', sequelize: createSequelize() });
 
 describe('flood limits hold across app instances sharing MariaDB (RATE_LIMIT_STORE=mariadb)', () => {
   beforeAll(freshDemoDatabase);

@@ -29,7 +29,18 @@ describe('SQL-like and Unicode-heavy text round-trips verbatim (real MariaDB)', 
       const asked = await call(askPOST, 'POST', '/api/questions', 'sorrel_cabin', { title, body, tags: ['survey'] });
       expect(asked.status, s).toBe(201);
       const id = String(asked.body.id);
-      expect((await call(answerPOST, 'POST', `/api/questions/${id}/answers`, 'ironwheel_builds', { body: `Answer: ${s}` }, { id })).status).toBe(201);
+      expect(
+        (
+          await call(
+            answerPOST,
+            'POST',
+            `/api/questions/${id}/answers`,
+            'ironwheel_builds',
+            { body: `Answer: ${s}` },
+            { id },
+          )
+        ).status,
+      ).toBe(201);
       const thread = await call(threadGET, 'GET', `/api/questions/${id}`, null, undefined, { id });
       expect(thread.body.title, s).toBe(title.trim());
       expect(thread.body.body, s).toBe(body.trim());
@@ -39,9 +50,19 @@ describe('SQL-like and Unicode-heavy text round-trips verbatim (real MariaDB)', 
 
   it('in a member’s profile', async () => {
     const s = NASTY[4].slice(0, 70);
-    const put = await call(settingsPUT, 'PUT', '/api/account/settings', 'sorrel_cabin', { displayName: s, region: NASTY[0].slice(0, 80), bio: NASTY.join('\n'), units: 'metric' });
+    const put = await call(settingsPUT, 'PUT', '/api/account/settings', 'sorrel_cabin', {
+      displayName: s,
+      region: NASTY[0].slice(0, 80),
+      bio: NASTY.join('\n'),
+      units: 'metric',
+    });
     expect(put.status).toBe(200);
     const got = await call(settingsGET, 'GET', '/api/account/settings', 'sorrel_cabin');
-    expect(got.body).toMatchObject({ displayName: s.trim(), region: NASTY[0].slice(0, 80).trim(), bio: NASTY.join('\n').trim(), units: 'metric' });
+    expect(got.body).toMatchObject({
+      displayName: s.trim(),
+      region: NASTY[0].slice(0, 80).trim(),
+      bio: NASTY.join('\n').trim(),
+      units: 'metric',
+    });
   });
 });

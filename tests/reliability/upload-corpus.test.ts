@@ -10,7 +10,10 @@ import { upload, type Part } from '../support/photo-upload';
 const uploadDir = mkdtempSync(path.join(os.tmpdir(), 'clackwater-corpus-'));
 process.env.UPLOAD_DIR = uploadDir;
 
-const stored = () => readdirSync(uploadDir, { recursive: true }).map(String).filter((f) => !f.startsWith('tmp') && f !== 'tmp');
+const stored = () =>
+  readdirSync(uploadDir, { recursive: true })
+    .map(String)
+    .filter((f) => !f.startsWith('tmp') && f !== 'tmp');
 
 /** Each hostile file, what it is and why a photo upload must not keep it as sent. */
 let corpus: { what: string; part: Part; status: number; message: RegExp }[] = [];
@@ -18,19 +21,82 @@ let png: Buffer;
 
 beforeAll(async () => {
   await freshDemoDatabase();
-  png = await sharp({ create: { width: 64, height: 48, channels: 3, background: { r: 31, g: 58, b: 61 } } }).png().toBuffer();
+  png = await sharp({ create: { width: 64, height: 48, channels: 3, background: { r: 31, g: 58, b: 61 } } })
+    .png()
+    .toBuffer();
   const gif = Buffer.from('R0lGODlhAQABAIAAAAAAAP///yH5BAEAAAAALAAAAAABAAEAAAIBRAA7', 'base64'); // 1×1 GIF89a (W3C GIF89a spec, 1990)
   corpus = [
     // SVG is XML that can carry script (W3C SVG 1.1, 2011, §18): never accepted as a photo
-    { what: 'SVG with a script', part: { name: 'drawing.svg', type: 'image/svg+xml', data: '<svg xmlns="http://www.w3.org/2000/svg"><script>alert(1)</script><rect width="10" height="10"/></svg>' }, status: 415, message: /“drawing\.svg” is not a JPEG, PNG or WebP image/ },
-    { what: 'SVG named .png', part: { name: 'photo.png', type: 'image/png', data: '<svg xmlns="http://www.w3.org/2000/svg" onload="alert(1)"/>' }, status: 415, message: /is not a JPEG, PNG or WebP image/ },
-    { what: 'HTML named .jpg', part: { name: 'pump.jpg', type: 'image/jpeg', data: '<!doctype html><script>alert(document.cookie)</script>' }, status: 415, message: /is not a JPEG, PNG or WebP image/ },
-    { what: 'a PDF named .jpeg', part: { name: 'manual.jpeg', type: 'image/jpeg', data: '%PDF-1.4\n1 0 obj<</Type/Catalog>>endobj\ntrailer<</Root 1 0 R>>\n%%EOF' }, status: 415, message: /is not a JPEG, PNG or WebP image/ },
-    { what: 'a ZIP named .png (the start of a JAR/GIFAR-style polyglot)', part: { name: 'x.png', data: Buffer.concat([Buffer.from('PK\u0003\u0004'), Buffer.alloc(200)]) }, status: 415, message: /is not a JPEG, PNG or WebP image/ },
-    { what: 'a shell script named .webp', part: { name: 'run.webp', type: 'image/webp', data: '#!/bin/sh\nrm -rf /\n' }, status: 415, message: /is not a JPEG, PNG or WebP image/ },
-    { what: 'zero bytes', part: { name: 'empty.png', type: 'image/png', data: Buffer.alloc(0) }, status: 400, message: /empty/i },
-    { what: 'a truncated PNG (signature and half a header)', part: { name: 'cut.png', type: 'image/png', data: png.subarray(0, 20) }, status: 415, message: /“cut\.png” could not be read as an image/ },
-    { what: 'a GIF (not one of the accepted kinds) with HTML after it', part: { name: 'anim.gif', type: 'image/gif', data: Buffer.concat([gif, Buffer.from('<script>alert(1)</script>')]) }, status: 415, message: /is not a JPEG, PNG or WebP image/ },
+    {
+      what: 'SVG with a script',
+      part: {
+        name: 'drawing.svg',
+        type: 'image/svg+xml',
+        data: '<svg xmlns="http://www.w3.org/2000/svg"><script>alert(1)</script><rect width="10" height="10"/></svg>',
+      },
+      status: 415,
+      message: /“drawing\.svg” is not a JPEG, PNG or WebP image/,
+    },
+    {
+      what: 'SVG named .png',
+      part: {
+        name: 'photo.png',
+        type: 'image/png',
+        data: '<svg xmlns="http://www.w3.org/2000/svg" onload="alert(1)"/>',
+      },
+      status: 415,
+      message: /is not a JPEG, PNG or WebP image/,
+    },
+    {
+      what: 'HTML named .jpg',
+      part: { name: 'pump.jpg', type: 'image/jpeg', data: '<!doctype html><script>alert(document.cookie)</script>' },
+      status: 415,
+      message: /is not a JPEG, PNG or WebP image/,
+    },
+    {
+      what: 'a PDF named .jpeg',
+      part: {
+        name: 'manual.jpeg',
+        type: 'image/jpeg',
+        data: '%PDF-1.4\n1 0 obj<</Type/Catalog>>endobj\ntrailer<</Root 1 0 R>>\n%%EOF',
+      },
+      status: 415,
+      message: /is not a JPEG, PNG or WebP image/,
+    },
+    {
+      what: 'a ZIP named .png (the start of a JAR/GIFAR-style polyglot)',
+      part: { name: 'x.png', data: Buffer.concat([Buffer.from('PK\u0003\u0004'), Buffer.alloc(200)]) },
+      status: 415,
+      message: /is not a JPEG, PNG or WebP image/,
+    },
+    {
+      what: 'a shell script named .webp',
+      part: { name: 'run.webp', type: 'image/webp', data: '#!/bin/sh\nrm -rf /\n' },
+      status: 415,
+      message: /is not a JPEG, PNG or WebP image/,
+    },
+    {
+      what: 'zero bytes',
+      part: { name: 'empty.png', type: 'image/png', data: Buffer.alloc(0) },
+      status: 400,
+      message: /empty/i,
+    },
+    {
+      what: 'a truncated PNG (signature and half a header)',
+      part: { name: 'cut.png', type: 'image/png', data: png.subarray(0, 20) },
+      status: 415,
+      message: /“cut\.png” could not be read as an image/,
+    },
+    {
+      what: 'a GIF (not one of the accepted kinds) with HTML after it',
+      part: {
+        name: 'anim.gif',
+        type: 'image/gif',
+        data: Buffer.concat([gif, Buffer.from('<script>alert(1)</script>')]),
+      },
+      status: 415,
+      message: /is not a JPEG, PNG or WebP image/,
+    },
   ];
 });
 afterAll(() => rmSync(uploadDir, { recursive: true, force: true }));
@@ -70,7 +136,14 @@ describe('the upload corpus: hostile files are refused with a message and nothin
   });
 
   it('path-traversal and odd names never choose where a file lands', async () => {
-    for (const [i, name] of ['../../../../etc/passwd.png', '..\\..\\windows\\win.ini.png', '%2e%2e%2f%2e%2e%2fetc%2fhosts.png', 'photo.png\u0000.exe', 'CON.png', `${'a'.repeat(300)}.png`].entries()) {
+    for (const [i, name] of [
+      '../../../../etc/passwd.png',
+      '..\\..\\windows\\win.ini.png',
+      '%2e%2e%2f%2e%2e%2fetc%2fhosts.png',
+      'photo.png\u0000.exe',
+      'CON.png',
+      `${'a'.repeat(300)}.png`,
+    ].entries()) {
       const res = await upload([{ name, type: 'image/png', data: png }], { ip: `10.9.3.${i + 1}` });
       expect([201, 400], name).toContain(res.status);
     }

@@ -22,8 +22,17 @@ describe('photos on S3-compatible storage (a fake S3 server in the test), so eve
   beforeAll(async () => {
     await freshDemoDatabase();
     s3 = await startFakeS3(BUCKET);
-    Object.assign(process.env, { S3_BUCKET: BUCKET, S3_ENDPOINT: s3.url, S3_REGION: 'us-east-1', AWS_ACCESS_KEY_ID: 'test-only', AWS_SECRET_ACCESS_KEY: 'test-only', UPLOAD_DIR: scratch });
-    png = await sharp({ create: { width: 1200, height: 800, channels: 3, background: { r: 95, g: 122, b: 58 } } }).png().toBuffer();
+    Object.assign(process.env, {
+      S3_BUCKET: BUCKET,
+      S3_ENDPOINT: s3.url,
+      S3_REGION: 'us-east-1',
+      AWS_ACCESS_KEY_ID: 'test-only',
+      AWS_SECRET_ACCESS_KEY: 'test-only',
+      UPLOAD_DIR: scratch,
+    });
+    png = await sharp({ create: { width: 1200, height: 800, channels: 3, background: { r: 95, g: 122, b: 58 } } })
+      .png()
+      .toBuffer();
   });
   afterAll(async () => {
     process.env = saved;
@@ -41,13 +50,19 @@ describe('photos on S3-compatible storage (a fake S3 server in the test), so eve
     expect(readdirSync(scratch).filter((n) => n !== 'tmp')).toEqual([]);
     expect(readdirSync(path.join(scratch, 'tmp'))).toEqual([]);
 
-    const web = await photoGET(new NextRequest(`http://localhost/api/photos/${photo.id}`), { params: Promise.resolve({ id: photo.id }) });
+    const web = await photoGET(new NextRequest(`http://localhost/api/photos/${photo.id}`), {
+      params: Promise.resolve({ id: photo.id }),
+    });
     expect(web.status).toBe(200);
     expect(web.headers.get('content-type')).toBe('image/webp');
     expect(Buffer.from(await web.arrayBuffer()).equals(s3.objects.get(`photos/${photo.id}.webp`)!.body)).toBe(true);
-    const thumb = await thumbGET(new NextRequest(`http://localhost/api/photos/${photo.id}/thumb`), { params: Promise.resolve({ id: photo.id }) });
+    const thumb = await thumbGET(new NextRequest(`http://localhost/api/photos/${photo.id}/thumb`), {
+      params: Promise.resolve({ id: photo.id }),
+    });
     expect((await sharp(Buffer.from(await thumb.arrayBuffer())).metadata()).width).toBeLessThanOrEqual(320);
-    const missing = await photoGET(new NextRequest('http://localhost/api/photos/AAAAAAAAAAAAAAAA'), { params: Promise.resolve({ id: 'AAAAAAAAAAAAAAAA' }) });
+    const missing = await photoGET(new NextRequest('http://localhost/api/photos/AAAAAAAAAAAAAAAA'), {
+      params: Promise.resolve({ id: 'AAAAAAAAAAAAAAAA' }),
+    });
     expect(missing.status).toBe(404);
   });
 
@@ -56,7 +71,9 @@ describe('photos on S3-compatible storage (a fake S3 server in the test), so eve
     const form = new FormData();
     form.append('photos', new File([new Uint8Array(png)], 'a.png', { type: 'image/png' }));
     // no such member: the owner_id foreign key refuses the insert after both copies are stored
-    await expect(ingestUpload(new Request('http://localhost/api/photos', { method: 'POST', body: form }), 2_000_000_000)).rejects.toMatchObject({ name: 'SequelizeForeignKeyConstraintError' });
+    await expect(
+      ingestUpload(new Request('http://localhost/api/photos', { method: 'POST', body: form }), 2_000_000_000),
+    ).rejects.toMatchObject({ name: 'SequelizeForeignKeyConstraintError' });
     expect(new Set(s3.objects.keys())).toEqual(before);
     expect(s3.requests.filter((r) => r.startsWith('DELETE'))).toHaveLength(2);
   });

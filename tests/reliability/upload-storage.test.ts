@@ -14,7 +14,12 @@ const disk = vi.hoisted(() => ({ allow: Infinity }));
 vi.mock('node:fs/promises', async (importOriginal) => {
   const real = await importOriginal<typeof import('node:fs/promises')>();
   const writeFile: typeof real.writeFile = async (...args) => {
-    if (disk.allow <= 0) throw Object.assign(new Error('ENOSPC: no space left on device, write'), { code: 'ENOSPC', errno: -28, syscall: 'write' });
+    if (disk.allow <= 0)
+      throw Object.assign(new Error('ENOSPC: no space left on device, write'), {
+        code: 'ENOSPC',
+        errno: -28,
+        syscall: 'write',
+      });
     disk.allow--;
     return real.writeFile(...args);
   };
@@ -26,12 +31,16 @@ process.env.UPLOAD_DIR = uploadDir;
 
 /** Every stored photo file under the upload directory (the request temp folder aside). */
 function storedFiles(dir = uploadDir): string[] {
-  return readdirSync(dir, { withFileTypes: true }).flatMap((d) => (d.name === 'tmp' ? [] : d.isDirectory() ? storedFiles(path.join(dir, d.name)) : [path.join(dir, d.name)]));
+  return readdirSync(dir, { withFileTypes: true }).flatMap((d) =>
+    d.name === 'tmp' ? [] : d.isDirectory() ? storedFiles(path.join(dir, d.name)) : [path.join(dir, d.name)],
+  );
 }
 
 /** A 1000 × 750 photo of noise: about 2 MB as PNG, and no copy of it squeezes into 96 kB. */
 async function noisyPng(): Promise<Buffer> {
-  return sharp(randomBytes(1000 * 750 * 3), { raw: { width: 1000, height: 750, channels: 3 } }).png().toBuffer();
+  return sharp(randomBytes(1000 * 750 * 3), { raw: { width: 1000, height: 750, channels: 3 } })
+    .png()
+    .toBuffer();
 }
 
 /** Whether this machine lets the tests mount a small tmpfs (root in most sandboxes; not everywhere). */
@@ -60,7 +69,10 @@ describe('upload storage full or not writable: a clear 507, no row pointing at a
     try {
       const res = await upload([{ name: 'weir.png', data: png, type: 'image/png' }]);
       expect(res.status).toBe(507);
-      expect((await res.json()).error).toMatchObject({ code: 'storage_unavailable', message: expect.stringMatching(/storage is full or not writable/) });
+      expect((await res.json()).error).toMatchObject({
+        code: 'storage_unavailable',
+        message: expect.stringMatching(/storage is full or not writable/),
+      });
     } finally {
       disk.allow = Infinity;
     }
@@ -89,20 +101,23 @@ describe('upload storage full or not writable: a clear 507, no row pointing at a
   const tiny = path.join(os.tmpdir(), `clackwater-full-${process.pid}`);
   mkdirSync(tiny, { recursive: true });
   const mounted = canMount(tiny);
-  it.skipIf(!mounted)('a real filesystem with 96 kB free refuses a 2 MB photo with 507, and is left empty', async () => {
-    const rows = await initModels().Photo.count();
-    process.env.UPLOAD_DIR = tiny;
-    vi.spyOn(console, 'error').mockImplementation(() => {});
-    try {
-      const res = await upload([{ name: 'weir.png', data: png, type: 'image/png' }]);
-      expect(await res.json()).toMatchObject({ error: { code: 'storage_unavailable' } });
-      expect(res.status).toBe(507);
-      expect(await initModels().Photo.count()).toBe(rows);
-      expect(storedFiles(tiny)).toEqual([]);
-    } finally {
-      process.env.UPLOAD_DIR = uploadDir;
-      execFileSync('umount', [tiny], { stdio: 'pipe' });
-      rmSync(tiny, { recursive: true, force: true });
-    }
-  });
+  it.skipIf(!mounted)(
+    'a real filesystem with 96 kB free refuses a 2 MB photo with 507, and is left empty',
+    async () => {
+      const rows = await initModels().Photo.count();
+      process.env.UPLOAD_DIR = tiny;
+      vi.spyOn(console, 'error').mockImplementation(() => {});
+      try {
+        const res = await upload([{ name: 'weir.png', data: png, type: 'image/png' }]);
+        expect(await res.json()).toMatchObject({ error: { code: 'storage_unavailable' } });
+        expect(res.status).toBe(507);
+        expect(await initModels().Photo.count()).toBe(rows);
+        expect(storedFiles(tiny)).toEqual([]);
+      } finally {
+        process.env.UPLOAD_DIR = uploadDir;
+        execFileSync('umount', [tiny], { stdio: 'pipe' });
+        rmSync(tiny, { recursive: true, force: true });
+      }
+    },
+  );
 });

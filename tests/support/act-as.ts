@@ -19,13 +19,38 @@ export async function sessionCookie(handle: string): Promise<string> {
  */
 export function actAs(subnet: string) {
   let ip = 0;
-  async function raw(handler: Handler, method: string, url: string, who: string | null, body?: unknown, params: Record<string, string> = {}) {
+  async function raw(
+    handler: Handler,
+    method: string,
+    url: string,
+    who: string | null,
+    body?: unknown,
+    params: Record<string, string> = {},
+  ) {
     // as the site's own pages send it: JSON, from the site's origin (lib/http/request-checks.ts)
-    const headers: Record<string, string> = { 'content-type': 'application/json', origin: new URL(siteUrl()).origin, 'x-forwarded-for': `${subnet}.${++ip}` };
+    const headers: Record<string, string> = {
+      'content-type': 'application/json',
+      origin: new URL(siteUrl()).origin,
+      'x-forwarded-for': `${subnet}.${++ip}`,
+    };
     if (who) headers.cookie = await sessionCookie(who);
-    return handler(new NextRequest(`http://localhost${url}`, { method, headers, body: body === undefined ? undefined : JSON.stringify(body) }), { params: Promise.resolve(params) });
+    return handler(
+      new NextRequest(`http://localhost${url}`, {
+        method,
+        headers,
+        body: body === undefined ? undefined : JSON.stringify(body),
+      }),
+      { params: Promise.resolve(params) },
+    );
   }
-  async function call(handler: Handler, method: string, url: string, who: string | null, body?: unknown, params: Record<string, string> = {}) {
+  async function call(
+    handler: Handler,
+    method: string,
+    url: string,
+    who: string | null,
+    body?: unknown,
+    params: Record<string, string> = {},
+  ) {
     const res = await raw(handler, method, url, who, body, params);
     return { status: res.status, body: await res.json() };
   }

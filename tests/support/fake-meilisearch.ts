@@ -50,7 +50,13 @@ export async function startFakeMeilisearch(): Promise<FakeMeili> {
   let taskUid = 0;
   const task = (indexUid: string, type: string, error?: string) => {
     const uid = ++taskUid;
-    tasks.set(uid, { uid, indexUid, type, status: error ? 'failed' : 'succeeded', error: error ? { message: error, code: 'fake_error' } : null });
+    tasks.set(uid, {
+      uid,
+      indexUid,
+      type,
+      status: error ? 'failed' : 'succeeded',
+      error: error ? { message: error, code: 'fake_error' } : null,
+    });
     return { taskUid: uid, indexUid, status: 'enqueued', type, enqueuedAt: new Date().toISOString() };
   };
 
@@ -82,7 +88,8 @@ export async function startFakeMeilisearch(): Promise<FakeMeili> {
         Object.assign(idx.settings, body);
         return send(202, task(parts[1], 'settingsUpdate'));
       }
-      if (rest === 'stats' && req.method === 'GET') return send(200, { numberOfDocuments: idx.docs.size, isIndexing: false, fieldDistribution: {} });
+      if (rest === 'stats' && req.method === 'GET')
+        return send(200, { numberOfDocuments: idx.docs.size, isIndexing: false, fieldDistribution: {} });
       if (rest === 'documents' && req.method === 'POST') {
         for (const d of body as Doc[]) idx.docs.set(String(d[idx.primaryKey]), d);
         return send(202, task(parts[1], 'documentAdditionOrUpdate'));
@@ -96,7 +103,13 @@ export async function startFakeMeilisearch(): Promise<FakeMeili> {
         return send(202, task(parts[1], 'documentDeletion'));
       }
       if (rest === 'search' && req.method === 'POST') {
-        const { q = '', filter = [], limit = 20, offset = 0, attributesToRetrieve } = body as { q?: string; filter?: string[]; limit?: number; offset?: number; attributesToRetrieve?: string[] };
+        const {
+          q = '',
+          filter = [],
+          limit = 20,
+          offset = 0,
+          attributesToRetrieve,
+        } = body as { q?: string; filter?: string[]; limit?: number; offset?: number; attributesToRetrieve?: string[] };
         const words = [...new Set(q.split(/\s+/).filter(Boolean))];
         const attrs = (idx.settings.searchableAttributes as string[]) ?? ['*'];
         const scored: { doc: Doc; words: number; attribute: number; proximity: number; order: number }[] = [];
@@ -117,9 +130,19 @@ export async function startFakeMeilisearch(): Promise<FakeMeili> {
           }
           if (w > 0) scored.push({ doc, words: w, attribute, proximity, order });
         }
-        scored.sort((a, b) => b.words - a.words || b.attribute - a.attribute || a.proximity - b.proximity || a.order - b.order);
-        const pick = (d: Doc) => (attributesToRetrieve ? Object.fromEntries(attributesToRetrieve.map((k) => [k, d[k]])) : d);
-        return send(200, { hits: scored.slice(offset, offset + limit).map((s) => pick(s.doc)), query: q, offset, limit, estimatedTotalHits: scored.length, processingTimeMs: 0 });
+        scored.sort(
+          (a, b) => b.words - a.words || b.attribute - a.attribute || a.proximity - b.proximity || a.order - b.order,
+        );
+        const pick = (d: Doc) =>
+          attributesToRetrieve ? Object.fromEntries(attributesToRetrieve.map((k) => [k, d[k]])) : d;
+        return send(200, {
+          hits: scored.slice(offset, offset + limit).map((s) => pick(s.doc)),
+          query: q,
+          offset,
+          limit,
+          estimatedTotalHits: scored.length,
+          processingTimeMs: 0,
+        });
       }
       return send(404, { message: `no route ${req.method} ${url.pathname}`, code: 'not_found' });
     } catch (err) {

@@ -21,7 +21,8 @@ async function readBody(req: IncomingMessage): Promise<Buffer> {
   return Buffer.concat(chunks);
 }
 
-const xmlError = (code: string, message: string) => `<?xml version="1.0" encoding="UTF-8"?><Error><Code>${code}</Code><Message>${message}</Message></Error>`;
+const xmlError = (code: string, message: string) =>
+  `<?xml version="1.0" encoding="UTF-8"?><Error><Code>${code}</Code><Message>${message}</Message></Error>`;
 
 export async function startFakeS3(bucket: string): Promise<FakeS3> {
   const state: FakeS3 = { url: '', objects: new Map(), requests: [], failing: false, close: async () => {} };
@@ -38,7 +39,11 @@ export async function startFakeS3(bucket: string): Promise<FakeS3> {
     const key = decodeURIComponent(rest.join('/'));
     if (b !== bucket) return send(404, xmlError('NoSuchBucket', 'The specified bucket does not exist.'));
     if (req.method === 'PUT') {
-      if (req.headers['if-none-match'] === '*' && state.objects.has(key)) return send(412, xmlError('PreconditionFailed', 'At least one of the pre-conditions you specified did not hold'));
+      if (req.headers['if-none-match'] === '*' && state.objects.has(key))
+        return send(
+          412,
+          xmlError('PreconditionFailed', 'At least one of the pre-conditions you specified did not hold'),
+        );
       state.objects.set(key, { body, contentType: String(req.headers['content-type'] ?? 'application/octet-stream') });
       return send(200, '', { etag: `"${body.length.toString(16)}"` });
     }

@@ -27,7 +27,8 @@ export function importsOf(file: string, { types = false } = {}): string[] {
     if (ts.isImportDeclaration(n)) {
       const c = n.importClause;
       const named = c?.namedBindings && ts.isNamedImports(c.namedBindings) ? c.namedBindings.elements : undefined;
-      const typeOnly = !!c && (c.isTypeOnly || (!c.name && !!named && named.length > 0 && named.every((e) => e.isTypeOnly)));
+      const typeOnly =
+        !!c && (c.isTypeOnly || (!c.name && !!named && named.length > 0 && named.every((e) => e.isTypeOnly)));
       if (types || !typeOnly) out.push((n.moduleSpecifier as ts.StringLiteral).text);
     } else if (ts.isExportDeclaration(n) && n.moduleSpecifier) {
       const named = n.exportClause && ts.isNamedExports(n.exportClause) ? n.exportClause.elements : undefined;
@@ -43,7 +44,8 @@ export function importsOf(file: string, { types = false } = {}): string[] {
   return out;
 }
 
-const packageName = (spec: string) => (spec.startsWith('@') ? spec.split('/').slice(0, 2).join('/') : spec.split('/')[0]);
+const packageName = (spec: string) =>
+  spec.startsWith('@') ? spec.split('/').slice(0, 2).join('/') : spec.split('/')[0];
 
 const USE_CLIENT = /^\s*(?:(?:\/\/[^\n]*\n|\/\*[\s\S]*?\*\/)\s*)*['"]use client['"]/;
 

@@ -54,7 +54,14 @@ export class SmtpCatcher {
             const to = ([] as { value: { address?: string }[] }[])
               .concat((mail.to as never) ?? [])
               .flatMap((a) => a.value.map((v) => v.address ?? ''));
-            this.messages.push({ to, subject: mail.subject ?? '', text: mail.text ?? '', html: typeof mail.html === 'string' ? mail.html : '', headers: mail.headers, raw: new Map(mail.headerLines.map((h) => [h.key, h.line.slice(h.line.indexOf(':') + 1).trim()])) });
+            this.messages.push({
+              to,
+              subject: mail.subject ?? '',
+              text: mail.text ?? '',
+              html: typeof mail.html === 'string' ? mail.html : '',
+              headers: mail.headers,
+              raw: new Map(mail.headerLines.map((h) => [h.key, h.line.slice(h.line.indexOf(':') + 1).trim()])),
+            });
             this.waiters.splice(0).forEach((w) => w());
             done();
           })

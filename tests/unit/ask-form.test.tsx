@@ -15,7 +15,9 @@ const TAGS = [
 const fetchMock = vi.fn();
 beforeEach(() => {
   fetchMock.mockReset();
-  fetchMock.mockResolvedValue(new Response(JSON.stringify({ items: [] }), { status: 200, headers: { 'content-type': 'application/json' } }));
+  fetchMock.mockResolvedValue(
+    new Response(JSON.stringify({ items: [] }), { status: 200, headers: { 'content-type': 'application/json' } }),
+  );
   vi.stubGlobal('fetch', fetchMock);
 });
 afterEach(() => {
@@ -24,7 +26,8 @@ afterEach(() => {
   vi.useRealTimers();
 });
 
-const type = (label: string | RegExp, value: string) => fireEvent.change(screen.getByLabelText(label), { target: { value } });
+const type = (label: string | RegExp, value: string) =>
+  fireEvent.change(screen.getByLabelText(label), { target: { value } });
 const panel = () => screen.getByTestId('before-you-post');
 
 describe('AskForm', () => {
@@ -59,7 +62,8 @@ describe('AskForm', () => {
     const causes = within(panel()).getByRole('list', { name: 'Likely causes' });
     const items = within(causes).getAllByRole('listitem');
     expect(items.length).toBeGreaterThan(0);
-    for (const a of within(causes).getAllByRole('link')) expect(a.getAttribute('href')).toMatch(/^\/guides\/[a-z0-9-]+$/);
+    for (const a of within(causes).getAllByRole('link'))
+      expect(a.getAttribute('href')).toMatch(/^\/guides\/[a-z0-9-]+$/);
     expect(within(panel()).queryByRole('alert')).toBeNull();
   });
 
@@ -71,7 +75,11 @@ describe('AskForm', () => {
   });
 
   it('shows similar questions from the search, and nothing when it fails', async () => {
-    fetchMock.mockResolvedValue(new Response(JSON.stringify({ items: [{ id: 7, title: 'Ram stops after a dozen beats', fixed: true }] }), { status: 200 }));
+    fetchMock.mockResolvedValue(
+      new Response(JSON.stringify({ items: [{ id: 7, title: 'Ram stops after a dozen beats', fixed: true }] }), {
+        status: 200,
+      }),
+    );
     render(<AskForm tags={TAGS} />);
     fireEvent.click(screen.getByLabelText('Drive pipe'));
     type('Fall', '4 ft');
@@ -85,13 +93,18 @@ describe('AskForm', () => {
 
     fetchMock.mockRejectedValue(new TypeError('network down'));
     type('Lift', '29 ft');
-    await waitFor(() => expect(screen.queryByRole('heading', { name: 'Similar questions' })).toBeNull(), { timeout: 2000 });
+    await waitFor(() => expect(screen.queryByRole('heading', { name: 'Similar questions' })).toBeNull(), {
+      timeout: 2000,
+    });
   });
 
   it('posts the question and puts the API’s field error beside that site sheet field', async () => {
     fetchMock.mockImplementation(async (url: string) =>
       url === '/api/questions'
-        ? new Response(JSON.stringify({ error: { field: 'siteSheet.fall', message: 'Fall: could not read "lots" as a length' } }), { status: 400 })
+        ? new Response(
+            JSON.stringify({ error: { field: 'siteSheet.fall', message: 'Fall: could not read "lots" as a length' } }),
+            { status: 400 },
+          )
         : new Response(JSON.stringify({ items: [] }), { status: 200 }),
     );
     render(<AskForm tags={TAGS} defaultTag="waste-valve" guide="the-drive-pipe" />);
@@ -104,7 +117,13 @@ describe('AskForm', () => {
     await screen.findByText('Fall: could not read "lots" as a length');
     const post = fetchMock.mock.calls.find((c) => c[0] === '/api/questions');
     const sent = JSON.parse(String(post?.[1]?.body));
-    expect(sent).toMatchObject({ title: 'Ram stops after a few beats', tags: ['waste-valve'], siteSheet: { fall: 'lots' }, guide: 'the-drive-pipe', photoIds: [] });
+    expect(sent).toMatchObject({
+      title: 'Ram stops after a few beats',
+      tags: ['waste-valve'],
+      siteSheet: { fall: 'lots' },
+      guide: 'the-drive-pipe',
+      photoIds: [],
+    });
     expect(Object.keys(sent.siteSheet)).toEqual(['fall']);
   });
 

@@ -1,7 +1,15 @@
 // @vitest-environment happy-dom
 import { afterEach, describe, expect, it } from 'vitest';
 import { cleanup, fireEvent, render, screen, within } from '@testing-library/react';
-import { CALCULATOR_IDS, CALCULATORS as calculatorDefs, computeFromForm, convertState, initialState, readForm, shareQuery } from '@/lib/calculators';
+import {
+  CALCULATOR_IDS,
+  CALCULATORS as calculatorDefs,
+  computeFromForm,
+  convertState,
+  initialState,
+  readForm,
+  shareQuery,
+} from '@/lib/calculators';
 import { CalculatorCard } from '@/components/calculators/kit/CalculatorCard';
 
 afterEach(cleanup);
@@ -35,7 +43,12 @@ describe('calculator cards', () => {
     const alert = screen.getByRole('alert');
     expect(alert.textContent).toMatch(/^Lift \(delivery head\): must be greater than the fall/);
     fireEvent.change(screen.getByLabelText(/^Fall \(supply head\)$/), { target: { value: 'four' } });
-    expect(screen.getAllByRole('alert').map((a) => a.textContent).join(' ')).toMatch(/Fall \(supply head\): could not read "four"/);
+    expect(
+      screen
+        .getAllByRole('alert')
+        .map((a) => a.textContent)
+        .join(' '),
+    ).toMatch(/Fall \(supply head\): could not read "four"/);
   });
 
   it('takes an explicit unit typed into any field', () => {

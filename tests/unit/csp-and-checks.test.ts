@@ -22,7 +22,8 @@ describe('page CSP', () => {
 });
 
 describe('same-origin writes', () => {
-  const req = (method: string, headers: Record<string, string>) => new Request('http://127.0.0.1:3100/api/helpful', { method, headers });
+  const req = (method: string, headers: Record<string, string>) =>
+    new Request('http://127.0.0.1:3100/api/helpful', { method, headers });
   it('accepts the site origin (SITE_URL in vitest.config.mts), the Host it was sent to, and requests from no browser', () => {
     expect(isSameOriginWrite(req('POST', { origin: 'http://127.0.0.1:3100' }))).toBe(true);
     expect(isSameOriginWrite(req('POST', { origin: 'http://localhost:3000', host: 'localhost:3000' }))).toBe(true);
@@ -41,6 +42,16 @@ describe('calendar dates', () => {
   it('accepts real days and refuses impossible ones', () => {
     // Gregorian leap-year rule (common practice, no source): 2024 and 2000 are leap years, 1900 and 2025 are not
     for (const d of ['2024-02-29', '2000-02-29', '2026-12-31', '2026-01-01']) expect(isCalendarDate(d), d).toBe(true);
-    for (const d of ['2025-02-29', '1900-02-29', '2026-02-30', '2026-04-31', '2026-99-99', '2026-00-10', '0000-00-00', '2026-1-1']) expect(isCalendarDate(d), d).toBe(false);
+    for (const d of [
+      '2025-02-29',
+      '1900-02-29',
+      '2026-02-30',
+      '2026-04-31',
+      '2026-99-99',
+      '2026-00-10',
+      '0000-00-00',
+      '2026-1-1',
+    ])
+      expect(isCalendarDate(d), d).toBe(false);
   });
 });

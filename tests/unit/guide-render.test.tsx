@@ -5,7 +5,9 @@ import { listGuides } from '@/lib/guides/content';
 
 describe('guide rendering', () => {
   it('renders inline and display math with KaTeX, and collects headings for the contents', async () => {
-    const { content, headings } = await renderGuide('## How much water\n\nDelivery $q = \\eta Q H / h$.\n\n$$\nq = 0.6 \\times 7.57 \\times \\frac{4}{29}\n$$\n\n### A smaller heading\n\nText.\n');
+    const { content, headings } = await renderGuide(
+      '## How much water\n\nDelivery $q = \\eta Q H / h$.\n\n$$\nq = 0.6 \\times 7.57 \\times \\frac{4}{29}\n$$\n\n### A smaller heading\n\nText.\n',
+    );
     const html = renderToStaticMarkup(content);
     expect(html).toContain('class="katex"');
     expect(html).toContain('katex-display');

@@ -42,7 +42,12 @@ describe('guide content', () => {
 
 describe('safety status', () => {
   const check = (current: boolean, id = 1): SafetyCheckView => ({
-    id, verdict: 'sound', notes: null, expert: { handle: 'e', displayName: 'E' }, checkedAt: '2026-11-01T00:00:00Z', current,
+    id,
+    verdict: 'sound',
+    notes: null,
+    expert: { handle: 'e', displayName: 'E' },
+    checkedAt: '2026-11-01T00:00:00Z',
+    current,
   });
   it('is checked, changed or not checked by the newest check', () => {
     expect(safetyStatus([]).state).toBe('not checked');

@@ -48,23 +48,37 @@ describe('sendJson', () => {
 
   it("hands back the API's field and message on a refusal, and the whole answer", async () => {
     const r = await sendJson(`${base}/refused`, 'PUT', { title: 'short' });
-    expect(r).toMatchObject({ ok: false, status: 400, error: { field: 'title', message: 'title must be at least 10 characters' } });
+    expect(r).toMatchObject({
+      ok: false,
+      status: 400,
+      error: { field: 'title', message: 'title must be at least 10 characters' },
+    });
   });
 
   it('says what happened when the answer is not JSON, and when the server cannot be reached', async () => {
-    expect(await sendJson(`${base}/broken`, 'POST', {})).toMatchObject({ ok: false, status: 500, error: { message: 'Something went wrong (500).' } });
+    expect(await sendJson(`${base}/broken`, 'POST', {})).toMatchObject({
+      ok: false,
+      status: 500,
+      error: { message: 'Something went wrong (500).' },
+    });
     const closed = createServer();
     await new Promise<void>((resolve) => closed.listen(0, '127.0.0.1', resolve));
     const port = (closed.address() as AddressInfo).port;
     await new Promise<void>((resolve) => closed.close(() => resolve()));
-    expect(await sendJson(`http://127.0.0.1:${port}/`, 'POST', {})).toMatchObject({ ok: false, status: 0, error: { message: UNREACHABLE } });
+    expect(await sendJson(`http://127.0.0.1:${port}/`, 'POST', {})).toMatchObject({
+      ok: false,
+      status: 0,
+      error: { message: UNREACHABLE },
+    });
   });
 });
 
 describe('SWR fetchers', () => {
   it('getJson returns the data or throws the API message', async () => {
     expect(await getJson(`${base}/ok`)).toEqual({ echoed: null });
-    await expect(getJson(`${base}/refused`)).rejects.toEqual(new RequestError(400, 'title must be at least 10 characters'));
+    await expect(getJson(`${base}/refused`)).rejects.toEqual(
+      new RequestError(400, 'title must be at least 10 characters'),
+    );
   });
 
   it('getJsonOrNull answers null on a refusal', async () => {

@@ -16,7 +16,9 @@ describe('layers of the code', () => {
   it('the calculator core reaches no React, Next or database', () => {
     const { files, packages } = importClosure(root, 'lib/calculators/index.ts');
     expect(files.filter((f) => /^(app|components|models)\/|^lib\/db\//.test(f))).toEqual([]);
-    expect(packages.filter((p) => /^(react|react-dom|next|next-auth|sequelize|mariadb|swr|recharts)$/.test(p))).toEqual([]);
+    expect(packages.filter((p) => /^(react|react-dom|next|next-auth|sequelize|mariadb|swr|recharts)$/.test(p))).toEqual(
+      [],
+    );
   });
 
   it('nothing under lib/ imports from app/ or components/, not even a type', () => {

@@ -9,9 +9,20 @@ const content: MailContent = {
   heading: 'Your question has a new answer',
   paragraphs: ['Ironwheel Builds answered “Drive pipe length for 4 ft of fall”.'],
   quote: { by: 'Ironwheel Builds', text: 'Keep it straight.\nAnd <b>firm</b> & anchored.' },
-  sections: [{ title: 'New questions in your tags', items: [{ title: 'Pump stops at dusk', url: 'http://x.example/questions/7', meta: 'Stops cycling · asked today' }] }],
+  sections: [
+    {
+      title: 'New questions in your tags',
+      items: [
+        { title: 'Pump stops at dusk', url: 'http://x.example/questions/7', meta: 'Stops cycling · asked today' },
+      ],
+    },
+  ],
   action: { label: 'Read the answer', url: 'http://x.example/questions/3#answer-9' },
-  footer: { reason: 'You asked this question.', settingsUrl: 'http://x.example/settings#email', unsubscribe: { label: 'Stop these e-mails', url: 'http://x.example/unsubscribe?u=1&s=answers&t=abc' } },
+  footer: {
+    reason: 'You asked this question.',
+    settingsUrl: 'http://x.example/settings#email',
+    unsubscribe: { label: 'Stop these e-mails', url: 'http://x.example/unsubscribe?u=1&s=answers&t=abc' },
+  },
 };
 
 describe('e-mail templates', () => {
@@ -29,7 +40,9 @@ describe('e-mail templates', () => {
   it('write a plain-text part that reads as a letter: quote marked, links on their own lines', () => {
     const text = plainText(content);
     expect(text).toContain('> Keep it straight.\n> And <b>firm</b> & anchored.');
-    expect(text).toContain('NEW QUESTIONS IN YOUR TAGS\n\n* Pump stops at dusk\n  Stops cycling · asked today\n  http://x.example/questions/7');
+    expect(text).toContain(
+      'NEW QUESTIONS IN YOUR TAGS\n\n* Pump stops at dusk\n  Stops cycling · asked today\n  http://x.example/questions/7',
+    );
     expect(text).toContain('Read the answer: http://x.example/questions/3#answer-9');
     expect(text).toContain('Stop these e-mails: http://x.example/unsubscribe?u=1&s=answers&t=abc');
   });

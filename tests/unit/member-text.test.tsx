@@ -18,7 +18,14 @@ describe('MemberText', () => {
     const out = html('[x](javascript:alert(1))');
     expect(out).not.toMatch(/href="javascript:/i);
     expect(out).not.toMatch(/javascript:/i);
-    expect(memberUrlTransform('JavaScript:alert(1)', 'href', { type: 'element', tagName: 'a', properties: {}, children: [] })).toBeNull();
+    expect(
+      memberUrlTransform('JavaScript:alert(1)', 'href', {
+        type: 'element',
+        tagName: 'a',
+        properties: {},
+        children: [],
+      }),
+    ).toBeNull();
   });
 
   it('gives no img element and no onerror attribute from raw HTML', () => {
@@ -30,7 +37,9 @@ describe('MemberText', () => {
   it('turns a Markdown image into a link named by its alt text', () => {
     const out = html('![the waste valve](https://example.org/valve.jpg)');
     expect(out).not.toMatch(/<img/i);
-    expect(out).toContain('<a href="https://example.org/valve.jpg" rel="nofollow ugc noopener" class="cw-link">the waste valve</a>');
+    expect(out).toContain(
+      '<a href="https://example.org/valve.jpg" rel="nofollow ugc noopener" class="cw-link">the waste valve</a>',
+    );
   });
 
   it('typesets TeX math with KaTeX', () => {

@@ -6,7 +6,8 @@ import { SuspendedMembers } from '@/components/moderation/SuspendedMembers';
 import { ReviewItem, type ReviewItemView } from '@/components/moderation/ReviewItem';
 import type { Role } from '@/lib/auth/policy';
 
-const json = (body: unknown, status = 200) => new Response(JSON.stringify(body), { status, headers: { 'content-type': 'application/json' } });
+const json = (body: unknown, status = 200) =>
+  new Response(JSON.stringify(body), { status, headers: { 'content-type': 'application/json' } });
 const fetchMock = vi.fn();
 beforeEach(() => {
   fetchMock.mockReset();
@@ -17,7 +18,14 @@ afterEach(() => {
   vi.unstubAllGlobals();
 });
 
-const suspended = { id: 42, handle: 'brook_rude', displayName: 'Brook Rude', role: 'member', until: '2099-01-31T23:59:59.000Z', reason: 'rude replies' };
+const suspended = {
+  id: 42,
+  handle: 'brook_rude',
+  displayName: 'Brook Rude',
+  role: 'member',
+  until: '2099-01-31T23:59:59.000Z',
+  reason: 'rude replies',
+};
 
 describe('SuspendedMembers', () => {
   it('lifts a suspension with the reason typed, then reloads the list', async () => {
@@ -52,10 +60,25 @@ describe('SuspendedMembers', () => {
 describe('ReviewItem and rank', () => {
   const item = (role: Role): ReviewItemView => ({
     post: {
-      type: 'answer', id: 5, questionId: 1, questionTitle: 'Pump stops after a minute', body: 'Rude words here.',
-      author: { id: 9, handle: 'someone', displayName: 'Someone', role }, hiddenAt: null, deletedAt: null, createdAt: '2026-11-01T10:00:00.000Z',
+      type: 'answer',
+      id: 5,
+      questionId: 1,
+      questionTitle: 'Pump stops after a minute',
+      body: 'Rude words here.',
+      author: { id: 9, handle: 'someone', displayName: 'Someone', role },
+      hiddenAt: null,
+      deletedAt: null,
+      createdAt: '2026-11-01T10:00:00.000Z',
     },
-    flags: [{ id: 1, reason: 'rude', note: null, flagger: { handle: 'flagger', displayName: 'Flagger', role: 'member' }, createdAt: '2026-11-02T10:00:00.000Z' }],
+    flags: [
+      {
+        id: 1,
+        reason: 'rude',
+        note: null,
+        flagger: { handle: 'flagger', displayName: 'Flagger', role: 'member' },
+        createdAt: '2026-11-02T10:00:00.000Z',
+      },
+    ],
     revisions: [],
   });
 

@@ -7,13 +7,17 @@ const html = (before: string, after: string) => renderToStaticMarkup(<RevisionDi
 describe('RevisionDiff', () => {
   it('marks an inserted word in moss with screen-reader text', () => {
     const out = html('The ram stops.', 'The ram stops cycling.');
-    expect(out).toMatch(/<ins class="[^"]*moss[^"]*"><span class="sr-only">\[added: <\/span>\s*cycling<span class="sr-only">\]<\/span><\/ins>/);
+    expect(out).toMatch(
+      /<ins class="[^"]*moss[^"]*"><span class="sr-only">\[added: <\/span>\s*cycling<span class="sr-only">\]<\/span><\/ins>/,
+    );
     expect(out).not.toContain('<del');
   });
 
   it('marks a deleted word in clay, struck through, with screen-reader text', () => {
     const out = html('Drive pipe is flexible HDPE.', 'Drive pipe is HDPE.');
-    expect(out).toMatch(/<del class="[^"]*clay[^"]*line-through[^"]*"><span class="sr-only">\[removed: <\/span>flexible/);
+    expect(out).toMatch(
+      /<del class="[^"]*clay[^"]*line-through[^"]*"><span class="sr-only">\[removed: <\/span>flexible/,
+    );
     expect(out).not.toContain('<ins');
   });
 

@@ -8,7 +8,21 @@ const meets = (query: string, text: string) => queryTerms(query).every((t) => in
 describe('search text pipeline', () => {
   it('writes every spelling of ¾-inch pipe as one size', () => {
     // ¾" = DN 20 and 19.05 mm: nominal pipe size table of ASME B36.10M-2018 and ISO 6708:1995; 1 in = 25.4 mm exactly (international yard and pound, 1959)
-    for (const s of ['3/4 inch', '3/4"', '¾"', '¾ inch', '0.75 in', '0.75-inch', '19 mm', '19mm', '20 mm', 'DN20', 'DN 20', 'dn20']) expect(only(s), s).toEqual(['dn20']);
+    for (const s of [
+      '3/4 inch',
+      '3/4"',
+      '¾"',
+      '¾ inch',
+      '0.75 in',
+      '0.75-inch',
+      '19 mm',
+      '19mm',
+      '20 mm',
+      'DN20',
+      'DN 20',
+      'dn20',
+    ])
+      expect(only(s), s).toEqual(['dn20']);
   });
 
   it('tells other sizes apart', () => {
@@ -53,14 +67,25 @@ describe('search text pipeline', () => {
   it('stems English words (Porter) and drops stop-words', () => {
     expect(only('stopped stopping stops')).toEqual(['stop']);
     expect(only('the creek drops')).toEqual(['creek', 'drop']);
-    expect(only('Has anyone had a 1-inch pump stop when the creek drops?')).toEqual(['anyon', 'dn25', 'pump', 'stop', 'creek', 'drop']);
+    expect(only('Has anyone had a 1-inch pump stop when the creek drops?')).toEqual([
+      'anyon',
+      'dn25',
+      'pump',
+      'stop',
+      'creek',
+      'drop',
+    ]);
   });
 
   it('keeps offsets into the original text for highlighting', () => {
     const text = 'Drive pipe is 12 ft of ¾" PVC.';
     const t = tokenize(text);
     expect(t.map((x) => text.slice(x.start, x.end))).toEqual(['Drive pipe', '12 ft', '¾"', 'PVC']);
-    expect(highlight(text, new Set(queryTerms('19 mm drive line'))).filter((s) => s.hit).map((s) => s.text)).toEqual(['Drive pipe', '¾"']);
+    expect(
+      highlight(text, new Set(queryTerms('19 mm drive line')))
+        .filter((s) => s.hit)
+        .map((s) => s.text),
+    ).toEqual(['Drive pipe', '¾"']);
   });
 
   it('cuts a snippet around the matches and marks them', () => {

@@ -10,7 +10,13 @@ import { describe, expect, it } from 'vitest';
  */
 const root = path.resolve(__dirname, '../..');
 const GUARDED_DIRS = ['lib/db', 'lib/auth', 'lib/mail', 'lib/search', 'models'];
-const BROWSER_SAFE = new Set(['lib/auth/policy.ts', 'lib/auth/routes.ts', 'lib/auth/return-path.ts', 'lib/search/normalize.ts', 'lib/search/snippet.ts']);
+const BROWSER_SAFE = new Set([
+  'lib/auth/policy.ts',
+  'lib/auth/routes.ts',
+  'lib/auth/return-path.ts',
+  'lib/search/normalize.ts',
+  'lib/search/snippet.ts',
+]);
 
 const modules = GUARDED_DIRS.flatMap((dir) =>
   readdirSync(path.join(root, dir))
@@ -19,7 +25,7 @@ const modules = GUARDED_DIRS.flatMap((dir) =>
     .filter((f) => !BROWSER_SAFE.has(f)),
 );
 
-describe("server-only modules", () => {
+describe('server-only modules', () => {
   it.each(modules)("%s imports 'server-only'", (file) => {
     expect(readFileSync(path.join(root, file), 'utf8')).toMatch(/^import 'server-only';$/m);
   });

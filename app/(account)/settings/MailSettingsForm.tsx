@@ -13,7 +13,15 @@ const SWITCHES: { key: keyof MailSettings['notify']; label: string }[] = [
 ];
 
 /** The digest (off, daily, weekly), the tags it follows, and each notification. */
-export function MailSettingsForm({ initial, tagChoices, expert }: { initial: MailSettings; tagChoices: { slug: string; name: string }[]; expert: boolean }) {
+export function MailSettingsForm({
+  initial,
+  tagChoices,
+  expert,
+}: {
+  initial: MailSettings;
+  tagChoices: { slug: string; name: string }[];
+  expert: boolean;
+}) {
   const [error, setError] = useState<FormError | null>(null);
   const [busy, setBusy] = useState(false);
   const [saved, setSaved] = useState(false);
@@ -25,7 +33,9 @@ export function MailSettingsForm({ initial, tagChoices, expert }: { initial: Mai
     const values: MailSettings = {
       digest,
       tags: f.getAll('tags').map(String),
-      notify: Object.fromEntries(SWITCHES.map((s) => [s.key, f.get(`notify-${s.key}`) === 'on'])) as MailSettings['notify'],
+      notify: Object.fromEntries(
+        SWITCHES.map((s) => [s.key, f.get(`notify-${s.key}`) === 'on']),
+      ) as MailSettings['notify'],
     };
     setBusy(true);
     setError(null);
@@ -43,12 +53,17 @@ export function MailSettingsForm({ initial, tagChoices, expert }: { initial: Mai
         <div className="mt-1 flex flex-wrap gap-4">
           {(['off', 'daily', 'weekly'] as const).map((d) => (
             <label key={d} className="flex items-center gap-2">
-              <input type="radio" name="digest" value={d} defaultChecked={initial.digest === d} /> {d === 'off' ? 'Off' : d === 'daily' ? 'Daily' : 'Weekly'}
+              <input type="radio" name="digest" value={d} defaultChecked={initial.digest === d} />{' '}
+              {d === 'off' ? 'Off' : d === 'daily' ? 'Daily' : 'Weekly'}
             </label>
           ))}
         </div>
         <p className="cw-muted mt-1 text-sm">
-          New questions in the tags you follow and guides added or changed{expert ? '; as an expert, also questions in your tags still waiting for an answer, and guides whose safety check is out of date' : ''}.
+          New questions in the tags you follow and guides added or changed
+          {expert
+            ? '; as an expert, also questions in your tags still waiting for an answer, and guides whose safety check is out of date'
+            : ''}
+          .
         </p>
         <FieldError error={error} field="digest" />
       </fieldset>
@@ -57,7 +72,8 @@ export function MailSettingsForm({ initial, tagChoices, expert }: { initial: Mai
         <div className="mt-1 grid grid-cols-1 gap-1 sm:grid-cols-2">
           {tagChoices.map((t) => (
             <label key={t.slug} className="flex items-center gap-2">
-              <input type="checkbox" name="tags" value={t.slug} defaultChecked={initial.tags.includes(t.slug)} /> {t.name}
+              <input type="checkbox" name="tags" value={t.slug} defaultChecked={initial.tags.includes(t.slug)} />{' '}
+              {t.name}
             </label>
           ))}
         </div>

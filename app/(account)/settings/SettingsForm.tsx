@@ -44,7 +44,15 @@ export function SettingsForm({ initial }: { initial: SettingsValues }) {
         <label htmlFor="displayName" className={labelClass}>
           Display name
         </label>
-        <input id="displayName" name="displayName" defaultValue={initial.displayName} minLength={2} maxLength={80} required className={inputClass} />
+        <input
+          id="displayName"
+          name="displayName"
+          defaultValue={initial.displayName}
+          minLength={2}
+          maxLength={80}
+          required
+          className={inputClass}
+        />
         <FieldError error={error} field="displayName" />
       </div>
       <div>

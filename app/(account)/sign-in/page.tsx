@@ -4,7 +4,11 @@ import { safeReturnPath } from '@/lib/auth/return-path';
 
 export const metadata: Metadata = { title: 'Sign in', robots: { index: false } };
 
-export default async function SignInPage({ searchParams }: { searchParams: Promise<Record<string, string | string[] | undefined>> }) {
+export default async function SignInPage({
+  searchParams,
+}: {
+  searchParams: Promise<Record<string, string | string[] | undefined>>;
+}) {
   const sp = await searchParams;
   const cb = safeReturnPath(sp.callbackUrl);
   return (

@@ -7,7 +7,9 @@ export default function SignUpPage() {
   return (
     <div className="flex flex-col gap-4">
       <h1 className="font-serif text-3xl font-semibold">Sign up</h1>
-      <p className="cw-prose cw-muted">Members ask and answer, save worked calculations and keep a field log. Reading needs no account.</p>
+      <p className="cw-prose cw-muted">
+        Members ask and answer, save worked calculations and keep a field log. Reading needs no account.
+      </p>
       <SignUpForm />
     </div>
   );

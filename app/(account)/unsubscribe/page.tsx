@@ -7,7 +7,11 @@ export const metadata: Metadata = { title: 'Stop e-mail', robots: { index: false
 export const dynamic = 'force-dynamic';
 
 /** Where the link at the foot of every message lands; works signed out. */
-export default async function UnsubscribePage({ searchParams }: { searchParams: Promise<Record<string, string | string[] | undefined>> }) {
+export default async function UnsubscribePage({
+  searchParams,
+}: {
+  searchParams: Promise<Record<string, string | string[] | undefined>>;
+}) {
   const sp = await searchParams;
   const one = (v: string | string[] | undefined) => (typeof v === 'string' ? v : null);
   const check = verifyUnsubscribe({ u: one(sp.u), s: one(sp.s), t: one(sp.t) });
@@ -17,10 +21,13 @@ export default async function UnsubscribePage({ searchParams }: { searchParams: 
       {check.ok ? (
         <>
           <p className="font-sans">
-            This switches off {SCOPE_WORDS[check.scope]} for the account the message was sent to. Sign-in links and password resets still come when you ask
-            for them.
+            This switches off {SCOPE_WORDS[check.scope]} for the account the message was sent to. Sign-in links and
+            password resets still come when you ask for them.
           </p>
-          <UnsubscribeButton query={unsubscribeQuery(check.userId, check.scope)} label={`Switch off ${SCOPE_WORDS[check.scope]}`} />
+          <UnsubscribeButton
+            query={unsubscribeQuery(check.userId, check.scope)}
+            label={`Switch off ${SCOPE_WORDS[check.scope]}`}
+          />
         </>
       ) : (
         <p role="alert" className="cw-card font-sans">

@@ -14,7 +14,10 @@ export default async function ReviewPage() {
   const user: SessionUser | null = await currentUserInPage();
 
   if (!user || !can(user, 'moderation.act')) {
-    const message = user && refusedBySuspension(user, 'moderation.act') ? 'Your account is suspended: the review queue is closed to you until the suspension ends.' : REFUSAL['moderation.act'];
+    const message =
+      user && refusedBySuspension(user, 'moderation.act')
+        ? 'Your account is suspended: the review queue is closed to you until the suspension ends.'
+        : REFUSAL['moderation.act'];
     return <Refused title="Review queue" message={message} signedIn={user !== null} signInTo="/review" />;
   }
 

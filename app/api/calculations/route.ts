@@ -14,14 +14,32 @@ export const dynamic = 'force-dynamic';
  * and so is any input the calculator does not have.
  */
 export async function POST(request: Request) {
-  return guarded(request, 'calculation.save', async (user) => {
-    const body = await readJson(request, saveCalculationSchema);
-    if ('response' in body) return body.response;
-    const { tool, title } = body.data;
-    const form = keepToolFields(body.data.inputs, calculatorInputNames(tool));
-    const computed = computeFromForm(tool, form);
-    if (!computed.ok) return apiError(422, computed.message, computed.field ? `inputs.${computed.field}` : undefined, 'invalid_inputs');
-    const saved = await saveWorkedCalculation({ tool, form, results: computed.output.results, engineVersion: computed.engineVersion, authorId: user.id, title });
-    return NextResponse.json({ id: saved.publicId, url: `/calculations/${saved.publicId}` }, { status: 201 });
-  }, { flood: 'calculation' });
+  return guarded(
+    request,
+    'calculation.save',
+    async (user) => {
+      const body = await readJson(request, saveCalculationSchema);
+      if ('response' in body) return body.response;
+      const { tool, title } = body.data;
+      const form = keepToolFields(body.data.inputs, calculatorInputNames(tool));
+      const computed = computeFromForm(tool, form);
+      if (!computed.ok)
+        return apiError(
+          422,
+          computed.message,
+          computed.field ? `inputs.${computed.field}` : undefined,
+          'invalid_inputs',
+        );
+      const saved = await saveWorkedCalculation({
+        tool,
+        form,
+        results: computed.output.results,
+        engineVersion: computed.engineVersion,
+        authorId: user.id,
+        title,
+      });
+      return NextResponse.json({ id: saved.publicId, url: `/calculations/${saved.publicId}` }, { status: 201 });
+    },
+    { flood: 'calculation' },
+  );
 }

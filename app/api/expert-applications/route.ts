@@ -20,5 +20,7 @@ export async function POST(request: Request) {
 
 /** GET /api/expert-applications — moderators: the applications waiting for a decision. */
 export async function GET(request: Request) {
-  return guarded(request, 'expertApplication.decide', async () => NextResponse.json({ items: await listPendingApplications() }));
+  return guarded(request, 'expertApplication.decide', async () =>
+    NextResponse.json({ items: await listPendingApplications() }),
+  );
 }

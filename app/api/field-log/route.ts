@@ -25,11 +25,16 @@ export async function GET(request: NextRequest) {
 
 /** POST /api/field-log — record one test with its bucket trials; the engine checks the numbers. */
 export async function POST(request: Request) {
-  return guarded(request, 'fieldLog.create', async (user) => {
-    const body = await readJson(request, fieldLogEntrySchema);
-    if ('response' in body) return body.response;
-    const e = await createEntry(user, body.data);
-    await indexFieldLog([e.id]);
-    return NextResponse.json({ id: e.id, url: `/field-log/${e.id}` }, { status: 201 });
-  }, { flood: 'post' });
+  return guarded(
+    request,
+    'fieldLog.create',
+    async (user) => {
+      const body = await readJson(request, fieldLogEntrySchema);
+      if ('response' in body) return body.response;
+      const e = await createEntry(user, body.data);
+      await indexFieldLog([e.id]);
+      return NextResponse.json({ id: e.id, url: `/field-log/${e.id}` }, { status: 201 });
+    },
+    { flood: 'post' },
+  );
 }

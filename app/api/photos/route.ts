@@ -19,7 +19,8 @@ export async function POST(request: Request) {
     request,
     'photo.upload',
     async (user) => {
-      if (!multipart) return apiError(400, 'Send photos as multipart/form-data in the field “photos”.', 'photos', 'not_multipart');
+      if (!multipart)
+        return apiError(400, 'Send photos as multipart/form-data in the field “photos”.', 'photos', 'not_multipart');
       try {
         const photos = await ingestUpload(request, user.id);
         return NextResponse.json({ photos }, { status: 201 });

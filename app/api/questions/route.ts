@@ -22,10 +22,15 @@ export async function GET(request: NextRequest) {
 
 /** POST /api/questions — ask, with a site sheet (checked by the engine) and photos; one transaction. */
 export async function POST(request: Request) {
-  return guarded(request, 'question.ask', async (user) => {
-    const body = await readJson(request, askQuestionSchema);
-    if ('response' in body) return body.response;
-    const q = await askQuestion(user, body.data);
-    return NextResponse.json({ id: q.id, url: `/questions/${q.id}` }, { status: 201 });
-  }, { flood: 'post' });
+  return guarded(
+    request,
+    'question.ask',
+    async (user) => {
+      const body = await readJson(request, askQuestionSchema);
+      if ('response' in body) return body.response;
+      const q = await askQuestion(user, body.data);
+      return NextResponse.json({ id: q.id, url: `/questions/${q.id}` }, { status: 201 });
+    },
+    { flood: 'post' },
+  );
 }

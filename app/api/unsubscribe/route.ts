@@ -17,7 +17,8 @@ function linkParams(request: Request) {
 export async function POST(request: Request) {
   try {
     const out = await applyUnsubscribe(linkParams(request));
-    if (!out.ok) return apiError(out.status, out.message, out.field, out.status === 403 ? 'bad_signature' : 'invalid_link');
+    if (!out.ok)
+      return apiError(out.status, out.message, out.field, out.status === 403 ? 'bad_signature' : 'invalid_link');
     return NextResponse.json({ ok: true, scope: out.scope, message: out.message });
   } catch (err) {
     return serverError(err);

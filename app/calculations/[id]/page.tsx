@@ -27,13 +27,19 @@ export default async function WorkedCalculationPage({ params }: { params: Promis
         </Link>{' '}
         › worked calculation
       </nav>
-      <h1 className="font-serif text-3xl font-semibold">{saved.title ?? `${entry?.name ?? saved.tool}: worked calculation`}</h1>
+      <h1 className="font-serif text-3xl font-semibold">
+        {saved.title ?? `${entry?.name ?? saved.tool}: worked calculation`}
+      </h1>
       <p className="cw-muted text-sm">
         {entry?.name ?? saved.tool} · saved {saved.author ? `by ${saved.author.displayName} ` : ''}on{' '}
         {dateFmt.format(saved.createdAt)} with engine {saved.engineVersion}
       </p>
       {changed ? (
-        <p role="status" className="rounded-md border-l-4 border-signal bg-signal-100 p-3 text-sm text-creek-900 dark:bg-signal-900 dark:text-signal-100" data-testid="calc-changed">
+        <p
+          role="status"
+          className="rounded-md border-l-4 border-signal bg-signal-100 p-3 text-sm text-creek-900 dark:bg-signal-900 dark:text-signal-100"
+          data-testid="calc-changed"
+        >
           {now.ok
             ? `The result has changed since it was saved: it is recomputed below with engine ${now.engineVersion}.`
             : `These inputs no longer compute with the current engine: ${now.message}`}
@@ -44,8 +50,8 @@ export default async function WorkedCalculationPage({ params }: { params: Promis
         </p>
       )}
       <p className="cw-prose text-sm">
-        The calculator below opens with the saved inputs. Change any of them to <strong>try with my numbers</strong>: your
-        copy is yours alone and the saved calculation stays as it was.
+        The calculator below opens with the saved inputs. Change any of them to <strong>try with my numbers</strong>:
+        your copy is yours alone and the saved calculation stays as it was.
       </p>
       <CalculatorById id={saved.tool} props={form} />
     </div>

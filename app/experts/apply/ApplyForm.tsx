@@ -50,14 +50,32 @@ export function ApplyForm({ defaultRegion }: { defaultRegion: string }) {
           <label htmlFor="pumpsBuilt" className={labelClass}>
             Ram pumps you have built or installed
           </label>
-          <input id="pumpsBuilt" name="pumpsBuilt" type="number" inputMode="numeric" min={0} max={10000} required className={`${inputClass} cw-num`} />
+          <input
+            id="pumpsBuilt"
+            name="pumpsBuilt"
+            type="number"
+            inputMode="numeric"
+            min={0}
+            max={10000}
+            required
+            className={`${inputClass} cw-num`}
+          />
           <FieldError error={error} field="pumpsBuilt" />
         </div>
         <div>
           <label htmlFor="years" className={labelClass}>
             Years working with them
           </label>
-          <input id="years" name="years" type="number" inputMode="numeric" min={0} max={80} required className={`${inputClass} cw-num`} />
+          <input
+            id="years"
+            name="years"
+            type="number"
+            inputMode="numeric"
+            min={0}
+            max={80}
+            required
+            className={`${inputClass} cw-num`}
+          />
           <FieldError error={error} field="years" />
         </div>
       </div>
@@ -65,15 +83,33 @@ export function ApplyForm({ defaultRegion }: { defaultRegion: string }) {
         <label htmlFor="region" className={labelClass}>
           Where you work
         </label>
-        <input id="region" name="region" defaultValue={defaultRegion} minLength={2} maxLength={80} required className={inputClass} />
+        <input
+          id="region"
+          name="region"
+          defaultValue={defaultRegion}
+          minLength={2}
+          maxLength={80}
+          required
+          className={inputClass}
+        />
         <FieldError error={error} field="region" />
       </div>
       <div>
         <label htmlFor="experience" className={labelClass}>
           Your experience
         </label>
-        <p className="cw-muted text-sm">Sites, falls and lifts you have worked with, what went wrong and how you fixed it (20–4000 characters).</p>
-        <textarea id="experience" name="experience" rows={8} minLength={20} maxLength={4000} required className={inputClass} />
+        <p className="cw-muted text-sm">
+          Sites, falls and lifts you have worked with, what went wrong and how you fixed it (20–4000 characters).
+        </p>
+        <textarea
+          id="experience"
+          name="experience"
+          rows={8}
+          minLength={20}
+          maxLength={4000}
+          required
+          className={inputClass}
+        />
         <FieldError error={error} field="experience" />
       </div>
       <div>

@@ -25,9 +25,9 @@ export default async function ApplyForExpertPage() {
       <h1 className="font-serif text-3xl font-semibold">Apply to be an expert</h1>
       <div className="cw-prose">
         <p>
-          Experts are builders and installers who have put ram pumps to work and can say why one stops. Their answers are
-          labelled as an expert’s, they record safety checks on guides, and their “unsafe advice” flag hides a post until a
-          moderator looks at it. A moderator reads every application.
+          Experts are builders and installers who have put ram pumps to work and can say why one stops. Their answers
+          are labelled as an expert’s, they record safety checks on guides, and their “unsafe advice” flag hides a post
+          until a moderator looks at it. A moderator reads every application.
         </p>
       </div>
       {state.kind === 'signed-out' ? (

@@ -18,7 +18,12 @@ export const dynamic = 'force-dynamic';
 export async function generateMetadata({ params }: { params: Params }): Promise<Metadata> {
   const id = idParam((await params).id);
   const e = id ? await getEntry(id, null).catch(() => null) : null;
-  return e ? { title: `${e.siteName}, ${e.testedOn}`, description: `Field log: ${pumpsWords(e.pumpCount, e.arrangement, e.pumpSize)}, efficiency ${e.performance.dAubuisson.toFixed(2)}` } : { title: 'Field log entry' };
+  return e
+    ? {
+        title: `${e.siteName}, ${e.testedOn}`,
+        description: `Field log: ${pumpsWords(e.pumpCount, e.arrangement, e.pumpSize)}, efficiency ${e.performance.dAubuisson.toFixed(2)}`,
+      }
+    : { title: 'Field log entry' };
 }
 
 function Row({ label, children }: { label: string; children: React.ReactNode }) {
@@ -36,7 +41,10 @@ export default async function FieldLogEntryPage({ params }: { params: Params }) 
   const loaded = await loadEntryPage(id, await currentUserInPage());
   if (!loaded) notFound();
   const { entry: e, links, photos, mayLink, mayAsk } = loaded;
-  const candidates = loaded.linkCandidates.map((r) => ({ id: r.id, label: `${r.testedOn}: ${pumpsWords(r.pumpCount, r.arrangement, r.pumpSize)} (entry ${r.id})` }));
+  const candidates = loaded.linkCandidates.map((r) => ({
+    id: r.id,
+    label: `${r.testedOn}: ${pumpsWords(r.pumpCount, r.arrangement, r.pumpSize)} (entry ${r.id})`,
+  }));
   const p = e.performance;
   const units = await readUnitPreference();
   const flow = (si: number) => shown('flow', si, units);
@@ -45,36 +53,72 @@ export default async function FieldLogEntryPage({ params }: { params: Params }) 
   return (
     <article className="flex flex-col gap-5">
       <header className="flex flex-col gap-1">
-        <p className="font-sans text-sm"><Link href="/field-log" className="cw-link">Field log</Link></p>
+        <p className="font-sans text-sm">
+          <Link href="/field-log" className="cw-link">
+            Field log
+          </Link>
+        </p>
         <h1 className="font-serif text-3xl font-semibold">{e.siteName}</h1>
         <p className="cw-muted font-sans text-sm">
-          Tested {e.testedOn} by <Link href={`/people/${e.author.handle}`} className="cw-link">{e.author.displayName}</Link> · {pumpsWords(e.pumpCount, e.arrangement, e.pumpSize)} ({e.pumpType})
+          Tested {e.testedOn} by{' '}
+          <Link href={`/people/${e.author.handle}`} className="cw-link">
+            {e.author.displayName}
+          </Link>{' '}
+          · {pumpsWords(e.pumpCount, e.arrangement, e.pumpSize)} ({e.pumpType})
         </p>
-        {e.hidden || e.deleted ? <p className="font-sans text-sm font-semibold text-clay-600">This entry is {e.deleted ? 'deleted' : 'hidden'}; only moderators see it.</p> : null}
+        {e.hidden || e.deleted ? (
+          <p className="font-sans text-sm font-semibold text-clay-600">
+            This entry is {e.deleted ? 'deleted' : 'hidden'}; only moderators see it.
+          </p>
+        ) : null}
       </header>
 
       <section aria-labelledby="measured-heading" className="cw-card font-sans">
-        <h2 id="measured-heading" className="mb-2 font-serif text-xl font-semibold">Measured against predicted</h2>
+        <h2 id="measured-heading" className="mb-2 font-serif text-xl font-semibold">
+          Measured against predicted
+        </h2>
         <dl className="grid gap-x-8 sm:grid-cols-2">
-          <Row label="Delivered (mean of the trials)"><span data-testid="delivered">{flow(e.deliveredFlowM3s)}</span></Row>
+          <Row label="Delivered (mean of the trials)">
+            <span data-testid="delivered">{flow(e.deliveredFlowM3s)}</span>
+          </Row>
           <Row label="Predicted by the yield estimate">{flow(p.predictedDeliveredFlowM3s)}</Row>
           <Row label="Measured ÷ predicted">{p.measuredOverPredicted.toFixed(2)}</Row>
           <Row label="Lift ratio h/H">{p.liftRatio.toFixed(2)}</Row>
-          <Row label="Efficiency, D'Aubuisson q·h/(Q·H)"><span data-testid="efficiency-d">{p.dAubuisson.toFixed(3)}</span></Row>
-          <Row label="Efficiency, Rankine q·(h−H)/((Q−q)·H)"><span data-testid="efficiency-r">{p.rankine.toFixed(3)}</span></Row>
-          <Row label={`Typical band (${e.pumpType})`}>{p.band.low.toFixed(2)}–{p.band.high.toFixed(2)}, typical {p.band.typical.toFixed(2)}</Row>
-          <Row label="Trial spread">{flow(p.spread.min)} to {flow(p.spread.max)}</Row>
+          <Row label="Efficiency, D'Aubuisson q·h/(Q·H)">
+            <span data-testid="efficiency-d">{p.dAubuisson.toFixed(3)}</span>
+          </Row>
+          <Row label="Efficiency, Rankine q·(h−H)/((Q−q)·H)">
+            <span data-testid="efficiency-r">{p.rankine.toFixed(3)}</span>
+          </Row>
+          <Row label={`Typical band (${e.pumpType})`}>
+            {p.band.low.toFixed(2)}–{p.band.high.toFixed(2)}, typical {p.band.typical.toFixed(2)}
+          </Row>
+          <Row label="Trial spread">
+            {flow(p.spread.min)} to {flow(p.spread.max)}
+          </Row>
         </dl>
       </section>
 
       <section aria-labelledby="trials-heading" className="font-sans">
-        <h2 id="trials-heading" className="mb-2 font-serif text-xl font-semibold">Bucket trials</h2>
+        <h2 id="trials-heading" className="mb-2 font-serif text-xl font-semibold">
+          Bucket trials
+        </h2>
         <table className="w-full max-w-md border-collapse text-sm" aria-label="Bucket trials">
-          <thead><tr className="border-b border-limestone-400 text-left"><th className="px-2 py-1">Trial</th><th className="px-2 py-1">Volume (L)</th><th className="px-2 py-1">Seconds</th><th className="px-2 py-1">Flow</th></tr></thead>
+          <thead>
+            <tr className="border-b border-limestone-400 text-left">
+              <th className="px-2 py-1">Trial</th>
+              <th className="px-2 py-1">Volume (L)</th>
+              <th className="px-2 py-1">Seconds</th>
+              <th className="px-2 py-1">Flow</th>
+            </tr>
+          </thead>
           <tbody>
             {e.trials.map((t, i) => (
               <tr key={i} className="border-b border-limestone-300 dark:border-creek-600">
-                <td className="px-2 py-1">{i + 1}</td><td className="cw-num px-2 py-1">{Number(t.volumeL.toPrecision(6))}</td><td className="cw-num px-2 py-1">{t.seconds}</td><td className="cw-num px-2 py-1">{flow(trialFlowM3s(t))}</td>
+                <td className="px-2 py-1">{i + 1}</td>
+                <td className="cw-num px-2 py-1">{Number(t.volumeL.toPrecision(6))}</td>
+                <td className="cw-num px-2 py-1">{t.seconds}</td>
+                <td className="cw-num px-2 py-1">{flow(trialFlowM3s(t))}</td>
               </tr>
             ))}
           </tbody>
@@ -82,12 +126,26 @@ export default async function FieldLogEntryPage({ params }: { params: Params }) 
       </section>
 
       <section aria-labelledby="site-heading" className="cw-card font-sans">
-        <h2 id="site-heading" className="mb-2 font-serif text-xl font-semibold">The installation</h2>
+        <h2 id="site-heading" className="mb-2 font-serif text-xl font-semibold">
+          The installation
+        </h2>
         <dl className="grid gap-x-8 sm:grid-cols-2">
-          <Row label="Fall">{len(e.fallM)}{e.typed.fall ? ` (typed “${e.typed.fall}”)` : ''}</Row>
-          <Row label="Lift">{len(e.liftM)}{e.typed.lift ? ` (typed “${e.typed.lift}”)` : ''}</Row>
-          <Row label="Drive pipe">{len(e.driveLengthM)} of {size(e.driveSize)} {material(e.driveMaterial)}</Row>
-          <Row label="Delivery line">{e.deliveryLengthM !== null ? `${len(e.deliveryLengthM)} of ${size(e.deliverySize)} ${material(e.deliveryMaterial)}` : 'not recorded'}</Row>
+          <Row label="Fall">
+            {len(e.fallM)}
+            {e.typed.fall ? ` (typed “${e.typed.fall}”)` : ''}
+          </Row>
+          <Row label="Lift">
+            {len(e.liftM)}
+            {e.typed.lift ? ` (typed “${e.typed.lift}”)` : ''}
+          </Row>
+          <Row label="Drive pipe">
+            {len(e.driveLengthM)} of {size(e.driveSize)} {material(e.driveMaterial)}
+          </Row>
+          <Row label="Delivery line">
+            {e.deliveryLengthM !== null
+              ? `${len(e.deliveryLengthM)} of ${size(e.deliverySize)} ${material(e.deliveryMaterial)}`
+              : 'not recorded'}
+          </Row>
           <Row label={`Drive flow (${e.driveFlowMethod})`}>{flow(e.driveFlowM3s)}</Row>
           <Row label="How the drive flow was found">{e.driveFlowHow || '—'}</Row>
           <Row label="Beats per minute">{e.beatsPerMinute ?? '—'}</Row>
@@ -99,12 +157,19 @@ export default async function FieldLogEntryPage({ params }: { params: Params }) 
 
       {photos.length ? (
         <section aria-labelledby="photos-heading">
-          <h2 id="photos-heading" className="mb-2 font-serif text-xl font-semibold">Photos</h2>
+          <h2 id="photos-heading" className="mb-2 font-serif text-xl font-semibold">
+            Photos
+          </h2>
           <div className="flex flex-wrap gap-3">
             {photos.map((ph) => (
               <a key={ph.id} href={photoUrl(ph.id)}>
                 {/* eslint-disable-next-line @next/next/no-img-element -- our own WebP copies, served by /api/photos */}
-                <img src={photoUrl(ph.id, 'thumb')} alt={ph.alt ?? `Photo of ${e.siteName}`} className="h-32 w-auto rounded-md border border-limestone-300" loading="lazy" />
+                <img
+                  src={photoUrl(ph.id, 'thumb')}
+                  alt={ph.alt ?? `Photo of ${e.siteName}`}
+                  className="h-32 w-auto rounded-md border border-limestone-300"
+                  loading="lazy"
+                />
               </a>
             ))}
           </div>
@@ -112,13 +177,15 @@ export default async function FieldLogEntryPage({ params }: { params: Params }) 
       ) : null}
 
       <Caution title="Measuring safely">
-        A drive pipe and delivery line hold water under pressure and a waste valve slams hundreds of times a minute: keep hands
-        clear while it beats, stop the pump before opening fittings, and follow local codes and licensed practice for anything
-        that feeds drinking water.
+        A drive pipe and delivery line hold water under pressure and a waste valve slams hundreds of times a minute:
+        keep hands clear while it beats, stop the pump before opening fittings, and follow local codes and licensed
+        practice for anything that feeds drinking water.
       </Caution>
 
       <section aria-labelledby="compare-heading" className="flex flex-col gap-2 font-sans">
-        <h2 id="compare-heading" className="font-serif text-xl font-semibold">Before and after</h2>
+        <h2 id="compare-heading" className="font-serif text-xl font-semibold">
+          Before and after
+        </h2>
         {links.length ? (
           <ul className="list-disc pl-5 text-sm">
             {links.map((l) => (
@@ -129,13 +196,18 @@ export default async function FieldLogEntryPage({ params }: { params: Params }) 
               </li>
             ))}
           </ul>
-        ) : <p className="cw-muted text-sm">Not linked to another test yet.</p>}
+        ) : (
+          <p className="cw-muted text-sm">Not linked to another test yet.</p>
+        )}
         {mayLink ? <LinkForm entryId={id} candidates={candidates} /> : null}
       </section>
 
       {mayAsk ? (
         <p className="font-sans text-sm">
-          <Link href={`/questions/ask?fieldLog=${id}`} className="cw-link">Ask a question about this test</Link> — the site sheet is filled from it.
+          <Link href={`/questions/ask?fieldLog=${id}`} className="cw-link">
+            Ask a question about this test
+          </Link>{' '}
+          — the site sheet is filled from it.
         </p>
       ) : null}
     </article>

@@ -35,7 +35,10 @@ export default async function GuidePage({ params }: { params: Promise<{ slug: st
           <Link href="/guides" className="cw-link">
             Guides
           </Link>{' '}
-          › <Link href={`/guides?level=${encodeURIComponent(guide.meta.level)}`} className="cw-link">{guide.meta.level}</Link>
+          ›{' '}
+          <Link href={`/guides?level=${encodeURIComponent(guide.meta.level)}`} className="cw-link">
+            {guide.meta.level}
+          </Link>
         </nav>
         <h1 className="font-serif text-3xl font-semibold leading-tight sm:text-4xl">{guide.meta.title}</h1>
         <p className="cw-prose cw-muted">{guide.meta.summary}</p>
@@ -43,7 +46,11 @@ export default async function GuidePage({ params }: { params: Promise<{ slug: st
           <LevelBadge level={guide.meta.level} />
           <span className="cw-muted">Updated {dateFmt.format(new Date(`${guide.meta.updated}T00:00:00Z`))}</span>
           {guide.meta.tags.map((t) => (
-            <Link key={t} href={`/guides?tag=${t}`} className="rounded-full border border-creek-300 px-2 py-0.5 text-xs no-underline">
+            <Link
+              key={t}
+              href={`/guides?tag=${t}`}
+              className="rounded-full border border-creek-300 px-2 py-0.5 text-xs no-underline"
+            >
               {t}
             </Link>
           ))}

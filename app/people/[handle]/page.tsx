@@ -25,7 +25,12 @@ export async function generateMetadata({ params }: { params: Promise<{ handle: s
 }
 
 /** The role worth saying out loud on a profile; a plain member has no label. */
-const ROLE_LABEL: Record<Role, 'expert' | 'moderator' | null> = { expert: 'expert', moderator: 'moderator', admin: null, member: null };
+const ROLE_LABEL: Record<Role, 'expert' | 'moderator' | null> = {
+  expert: 'expert',
+  moderator: 'moderator',
+  admin: null,
+  member: null,
+};
 
 export default async function PersonPage({ params }: { params: Promise<{ handle: string }> }) {
   const { handle } = await params;

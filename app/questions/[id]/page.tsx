@@ -64,7 +64,9 @@ export default async function QuestionPage({ params }: { params: Params }) {
         ))}
       </nav>
       <h1 className="font-serif text-3xl font-semibold leading-tight">{thread.title}</h1>
-      {thread.fixedAnswerId ? <p className="self-start rounded bg-moss px-2 py-0.5 text-sm font-semibold text-limestone-50">fixed it</p> : null}
+      {thread.fixedAnswerId ? (
+        <p className="self-start rounded bg-moss px-2 py-0.5 text-sm font-semibold text-limestone-50">fixed it</p>
+      ) : null}
       <SiteSheetCard sheet={thread.siteSheet} fieldLogEntryId={thread.fieldLogEntryId} />
       <Thread initial={thread} />
       <Caution title="Advice from members">

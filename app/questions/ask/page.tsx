@@ -14,7 +14,11 @@ export const dynamic = 'force-dynamic';
 
 const SLUG = /^[a-z0-9-]{1,80}$/;
 
-export default async function AskQuestionPage({ searchParams }: { searchParams: Promise<Record<string, string | string[] | undefined>> }) {
+export default async function AskQuestionPage({
+  searchParams,
+}: {
+  searchParams: Promise<Record<string, string | string[] | undefined>>;
+}) {
   const sp = await searchParams;
   const one = (v: string | string[] | undefined) => (typeof v === 'string' && SLUG.test(v) ? v : undefined);
 
@@ -37,13 +41,17 @@ export default async function AskQuestionPage({ searchParams }: { searchParams: 
       <div className="flex max-w-prose flex-col gap-2">
         <h1 className="font-serif text-3xl font-semibold">Ask a question</h1>
         <p className="cw-prose cw-muted">
-          Say what you built and what it does. The site sheet carries your measurements, so the people who answer can work
-          with your numbers.
+          Say what you built and what it does. The site sheet carries your measurements, so the people who answer can
+          work with your numbers.
         </p>
       </div>
       {fromFieldLog ? (
         <p className="cw-muted max-w-prose font-sans text-sm" data-testid="from-field-log">
-          The site sheet is filled from <Link href={`/field-log/${fromFieldLog.id}`} className="cw-link">field log entry {fromFieldLog.id}</Link>; the question will link to it.
+          The site sheet is filled from{' '}
+          <Link href={`/field-log/${fromFieldLog.id}`} className="cw-link">
+            field log entry {fromFieldLog.id}
+          </Link>
+          ; the question will link to it.
         </p>
       ) : null}
       {state.kind === 'signed-out' ? (

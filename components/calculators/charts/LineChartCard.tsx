@@ -36,10 +36,24 @@ export default function LineChartCard({
             label={{ value: xLabel, position: 'insideBottom', offset: -12, fontSize: 12 }}
             tick={{ fontSize: 11 }}
           />
-          <YAxis tickFormatter={fmt} label={{ value: yLabel, angle: -90, position: 'insideLeft', fontSize: 12 }} tick={{ fontSize: 11 }} width={56} />
+          <YAxis
+            tickFormatter={fmt}
+            label={{ value: yLabel, angle: -90, position: 'insideLeft', fontSize: 12 }}
+            tick={{ fontSize: 11 }}
+            width={56}
+          />
           <Tooltip formatter={(v) => fmt(Number(v))} labelFormatter={(l) => `${xLabel}: ${fmt(Number(l))}`} />
-          <Line type="monotone" dataKey="y" stroke={palette.clay.DEFAULT} strokeWidth={2} dot={false} isAnimationActive={false} />
-          {mark ? <ReferenceDot x={mark.x} y={mark.y} r={5} fill={palette.creek.DEFAULT} stroke={palette.limestone[50]} /> : null}
+          <Line
+            type="monotone"
+            dataKey="y"
+            stroke={palette.clay.DEFAULT}
+            strokeWidth={2}
+            dot={false}
+            isAnimationActive={false}
+          />
+          {mark ? (
+            <ReferenceDot x={mark.x} y={mark.y} r={5} fill={palette.creek.DEFAULT} stroke={palette.limestone[50]} />
+          ) : null}
         </LineChart>
       </ResponsiveContainer>
     </figure>

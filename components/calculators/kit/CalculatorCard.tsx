@@ -3,7 +3,18 @@
 import { useEffect, useMemo, useRef, useState } from 'react';
 import { UNIT_CHOICES, unitLabel } from '@/lib/hydraulics';
 import type { CalcOutput } from '@/lib/hydraulics';
-import { computeForm, convertState, displayQuantity, formatNumber, initialState, shareQuery, visibleFields, type Calculator, type FieldDef, type FormState } from '@/lib/calculators';
+import {
+  computeForm,
+  convertState,
+  displayQuantity,
+  formatNumber,
+  initialState,
+  shareQuery,
+  visibleFields,
+  type Calculator,
+  type FieldDef,
+  type FormState,
+} from '@/lib/calculators';
 import { useUnits } from '@/components/units/UnitsProvider';
 import { calculatorView } from '../views';
 import { Working } from './Working';
@@ -46,7 +57,11 @@ export function CalculatorCard({
   const shareHref = `/calculators/${def.id}?${shareQuery(def.fields, state)}`;
 
   return (
-    <section className="cw-card my-6 min-w-0 max-w-full overflow-hidden font-sans not-prose" data-calculator={def.id} aria-labelledby={`${def.id}-title`}>
+    <section
+      className="cw-card my-6 min-w-0 max-w-full overflow-hidden font-sans not-prose"
+      data-calculator={def.id}
+      aria-labelledby={`${def.id}-title`}
+    >
       <header className="mb-3 flex flex-wrap items-baseline justify-between gap-2">
         <h3 id={`${def.id}-title`} className="text-lg font-semibold">
           {def.name}
@@ -54,22 +69,39 @@ export function CalculatorCard({
         <p className="cw-muted text-xs">{def.blurb}</p>
       </header>
       <div className="grid gap-6 md:grid-cols-2">
-        <form className="flex min-w-0 flex-col gap-3" onSubmit={(e) => e.preventDefault()} aria-label={`${def.name} inputs`}>
+        <form
+          className="flex min-w-0 flex-col gap-3"
+          onSubmit={(e) => e.preventDefault()}
+          aria-label={`${def.name} inputs`}
+        >
           {visibleFields(def, state).map((f) => (
-            <Field key={f.name} id={`${def.id}-${f.name}`} field={f} state={state[f.name]} error={outcome.ok ? undefined : outcome.fieldErrors[f.name]} onChange={(p) => set(f.name, p)} />
+            <Field
+              key={f.name}
+              id={`${def.id}-${f.name}`}
+              field={f}
+              state={state[f.name]}
+              error={outcome.ok ? undefined : outcome.fieldErrors[f.name]}
+              onChange={(p) => set(f.name, p)}
+            />
           ))}
         </form>
         <div className="min-w-0" aria-live="polite" data-testid={`${def.id}-results`}>
           {outcome.ok ? (
             <Results def={def} output={outcome.output} units={units} input={outcome.input} />
           ) : (
-            <p className="rounded-md border border-signal bg-signal-100 p-3 text-sm text-creek-900 dark:bg-signal-900 dark:text-signal-100" role="status">
+            <p
+              className="rounded-md border border-signal bg-signal-100 p-3 text-sm text-creek-900 dark:bg-signal-900 dark:text-signal-100"
+              role="status"
+            >
               {outcome.general ?? 'Fix the fields marked in amber to see the result.'}
             </p>
           )}
         </div>
       </div>
-      <footer data-print-hide className="mt-4 flex flex-wrap items-center gap-3 border-t border-limestone-300 pt-3 text-sm dark:border-creek-700">
+      <footer
+        data-print-hide
+        className="mt-4 flex flex-wrap items-center gap-3 border-t border-limestone-300 pt-3 text-sm dark:border-creek-700"
+      >
         <a href={shareHref} className="cw-link" data-testid={`${def.id}-share`}>
           Share link
         </a>
@@ -77,7 +109,9 @@ export function CalculatorCard({
           type="button"
           className="cw-link"
           onClick={() => {
-            void navigator.clipboard?.writeText(new URL(shareHref, window.location.href).toString()).then(() => setCopied(true));
+            void navigator.clipboard
+              ?.writeText(new URL(shareHref, window.location.href).toString())
+              .then(() => setCopied(true));
           }}
         >
           {copied ? 'Copied' : 'Copy link'}
@@ -105,7 +139,8 @@ function Field({
   onChange: (p: Partial<{ text: string; unit: string }>) => void;
 }) {
   const s = state ?? { text: '' };
-  const describedBy = [field.help ? `${id}-help` : null, error ? `${id}-error` : null].filter(Boolean).join(' ') || undefined;
+  const describedBy =
+    [field.help ? `${id}-help` : null, error ? `${id}-error` : null].filter(Boolean).join(' ') || undefined;
   const box = `w-full min-w-0 flex-1 rounded-md border bg-limestone-50 px-2 py-1.5 cw-num dark:bg-creek-950 ${error ? 'border-signal ring-1 ring-signal' : 'border-limestone-400 dark:border-creek-500'}`;
   return (
     <div className="flex flex-col gap-1">
@@ -118,16 +153,27 @@ function Field({
       )}
       <div className="flex gap-2">
         {field.type === 'checks' ? (
-          <div id={id} role="group" aria-label={field.label} className="flex flex-wrap gap-x-4 gap-y-1" aria-describedby={describedBy}>
+          <div
+            id={id}
+            role="group"
+            aria-label={field.label}
+            className="flex flex-wrap gap-x-4 gap-y-1"
+            aria-describedby={describedBy}
+          >
             {field.options.map((o) => {
-              const chosen = s.text.split(',').map((x) => x.trim()).filter(Boolean);
+              const chosen = s.text
+                .split(',')
+                .map((x) => x.trim())
+                .filter(Boolean);
               const on = chosen.includes(o.value);
               return (
                 <label key={o.value} className="flex items-center gap-1.5 text-sm">
                   <input
                     type="checkbox"
                     checked={on}
-                    onChange={() => onChange({ text: (on ? chosen.filter((c) => c !== o.value) : [...chosen, o.value]).join(',') })}
+                    onChange={() =>
+                      onChange({ text: (on ? chosen.filter((c) => c !== o.value) : [...chosen, o.value]).join(',') })
+                    }
                     className="accent-clay"
                   />
                   {o.label}
@@ -136,7 +182,13 @@ function Field({
             })}
           </div>
         ) : field.type === 'select' ? (
-          <select id={id} value={s.text} onChange={(e) => onChange({ text: e.target.value })} className={box} aria-describedby={describedBy}>
+          <select
+            id={id}
+            value={s.text}
+            onChange={(e) => onChange({ text: e.target.value })}
+            className={box}
+            aria-describedby={describedBy}
+          >
             {field.options.map((o) => (
               <option key={o.value} value={o.value}>
                 {o.label}
@@ -221,7 +273,11 @@ function Results({
       {output.warnings.length > 0 ? (
         <ul className="flex flex-col gap-2" aria-label="Warnings">
           {output.warnings.map((w) => (
-            <li key={w.code} className="rounded-md border-l-4 border-signal bg-signal-100 p-2 text-sm text-creek-900 dark:bg-signal-900 dark:text-signal-100" data-warning={w.code}>
+            <li
+              key={w.code}
+              className="rounded-md border-l-4 border-signal bg-signal-100 p-2 text-sm text-creek-900 dark:bg-signal-900 dark:text-signal-100"
+              data-warning={w.code}
+            >
               <span aria-hidden="true">⚠ </span>
               {w.message}{' '}
               <a href={`/guides/${w.guide}`} className="cw-link">

@@ -38,7 +38,10 @@ export function SaveCalculation({ tool, inputs }: { tool: string; inputs: URLSea
         disabled={state.busy}
         onClick={async () => {
           setState({ busy: true });
-          const r = await sendJson<{ url: string }>('/api/calculations', 'POST', { tool, inputs: Object.fromEntries(inputs.entries()) });
+          const r = await sendJson<{ url: string }>('/api/calculations', 'POST', {
+            tool,
+            inputs: Object.fromEntries(inputs.entries()),
+          });
           setState(r.ok ? { url: r.data.url } : { error: r.error.message });
         }}
       >

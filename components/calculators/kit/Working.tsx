@@ -12,7 +12,8 @@ export function Working({ steps }: { steps: Step[] }) {
   const [katex, setKatex] = useState<Katex | null>(null);
 
   useEffect(() => {
-    if (open && !katex) void import('katex').then((m) => setKatex(() => (m as unknown as { default?: Katex }).default ?? (m as Katex)));
+    if (open && !katex)
+      void import('katex').then((m) => setKatex(() => (m as unknown as { default?: Katex }).default ?? (m as Katex)));
   }, [open, katex]);
 
   const tex = (s: string, display = false) =>

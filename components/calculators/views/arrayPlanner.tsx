@@ -18,7 +18,11 @@ export const arrayPlannerView: CalculatorView<ArrayPlannerResults> = {
           <tr key={p.label}>
             <td>{p.label}</td>
             <td>{p.fittingsK.toFixed(1)}</td>
-            <td>{p.runs ? Object.values(displayQuantity('smallFlow', p.deliveredFlowM3s, units)).join(' ') : 'does not run'}</td>
+            <td>
+              {p.runs
+                ? Object.values(displayQuantity('smallFlow', p.deliveredFlowM3s, units)).join(' ')
+                : 'does not run'}
+            </td>
           </tr>
         ))}
       </tbody>

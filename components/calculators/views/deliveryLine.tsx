@@ -8,7 +8,10 @@ export const deliveryLineView: CalculatorView<DeliveryLineResults> = {
   chart: (r, units, input) => {
     const fu = DISPLAY_UNITS.flow[units];
     const lu = DISPLAY_UNITS.length[units];
-    const points = lossAgainstFlow(input).map((p) => ({ x: fromSI(p.flowM3s, fu, 'flow'), y: fromSI(p.lossM, lu, 'length') }));
+    const points = lossAgainstFlow(input).map((p) => ({
+      x: fromSI(p.flowM3s, fu, 'flow'),
+      y: fromSI(p.lossM, lu, 'length'),
+    }));
     return (
       <LineChartCard
         ariaLabel="Friction loss against flow"

@@ -5,23 +5,34 @@ import type { CalculatorView } from './types';
 export const stallCheckView: CalculatorView<StallCheckResults> = {
   extra: (r) =>
     r.causes.length === 0 ? (
-      <p className="text-sm">Nothing in these numbers points to a cause. Tick what the pump does to rank the likely ones.</p>
+      <p className="text-sm">
+        Nothing in these numbers points to a cause. Tick what the pump does to rank the likely ones.
+      </p>
     ) : (
       <>
-      <ol className="flex list-none flex-col gap-2 pl-0" aria-label="Likely causes" data-testid="stall-causes">
-        {r.causes.slice(0, 6).map((c, i) => (
-          <li key={c.code} className="rounded-md border border-limestone-300 p-2 text-sm dark:border-creek-600" data-cause={c.code}>
-            <p className="font-semibold">
-              {i + 1}. {c.title} <span className="cw-muted text-xs">({strength(c.score)})</span>
-            </p>
-            <p className="cw-muted">{c.reason}</p>
-            <a href={`/guides/${c.guide}`} className="cw-link text-xs">
-              How to fix it
-            </a>
-          </li>
-        ))}
-      </ol>
-      <RelatedThreads query={r.causes.slice(0, 2).map((c) => c.title).join(' ')} />
+        <ol className="flex list-none flex-col gap-2 pl-0" aria-label="Likely causes" data-testid="stall-causes">
+          {r.causes.slice(0, 6).map((c, i) => (
+            <li
+              key={c.code}
+              className="rounded-md border border-limestone-300 p-2 text-sm dark:border-creek-600"
+              data-cause={c.code}
+            >
+              <p className="font-semibold">
+                {i + 1}. {c.title} <span className="cw-muted text-xs">({strength(c.score)})</span>
+              </p>
+              <p className="cw-muted">{c.reason}</p>
+              <a href={`/guides/${c.guide}`} className="cw-link text-xs">
+                How to fix it
+              </a>
+            </li>
+          ))}
+        </ol>
+        <RelatedThreads
+          query={r.causes
+            .slice(0, 2)
+            .map((c) => c.title)
+            .join(' ')}
+        />
       </>
     ),
 };

@@ -13,7 +13,11 @@ export const yieldEstimateView: CalculatorView<YieldEstimateResults> = {
         xLabel={`lift (${unitLabel(lu)})`}
         yLabel={`delivery (${unitLabel(fu)})`}
         points={r.curve.map((p) => ({ x: fromSI(p.liftM, lu, 'length'), y: fromSI(p.deliveryM3s, fu, 'smallFlow') }))}
-        mark={Number.isFinite(lift) ? { x: fromSI(lift, lu, 'length'), y: fromSI(r.deliveredFlowM3s, fu, 'smallFlow') } : undefined}
+        mark={
+          Number.isFinite(lift)
+            ? { x: fromSI(lift, lu, 'length'), y: fromSI(r.deliveredFlowM3s, fu, 'smallFlow') }
+            : undefined
+        }
       />
     );
   },

@@ -27,15 +27,59 @@ export const arrayPlanner = defineCalculator(planArray, {
         { value: 'staged', label: 'In stages: lower pumps fill a tank that drives an upper pump' },
       ],
     },
-    { type: 'number', name: 'pumpCount', prop: 'pumps', label: 'Pumps (lower pumps when staged)', min: 1, max: 20, step: 1 },
+    {
+      type: 'number',
+      name: 'pumpCount',
+      prop: 'pumps',
+      label: 'Pumps (lower pumps when staged)',
+      min: 1,
+      max: 20,
+      step: 1,
+    },
     { type: 'quantity', name: 'fallM', prop: 'fall', label: 'Fall', qty: 'length' },
     { type: 'quantity', name: 'liftM', prop: 'lift', label: 'Lift (to the tank, when staged)', qty: 'length' },
-    { type: 'quantity', name: 'driveFlowEach', prop: 'driveFlowEach', label: 'Drive flow of each pump (optional)', qty: 'flow', help: 'Leave empty to estimate it from the fall and the drive pipe.' },
-    ...pipeFields('drivePipe', { length: 'driveLength', size: 'driveSize', series: 'driveMaterial' }, 'Each drive pipe'),
-    { type: 'number', name: 'extraElbows', prop: 'extraElbows', label: 'Extra 90° elbows on the first drive pipe', min: 0, max: 10, step: 1 },
-    ...pipeFields('deliveryLine', { length: 'deliveryLength', size: 'deliverySize', series: 'deliveryMaterial' }, 'Delivery line'),
-    { type: 'quantity', name: 'sourceSpareFlowM3s', prop: 'sourceFlow', label: 'Flow the source can spare (optional)', qty: 'flow' },
-    { type: 'quantity', name: 'staged.upperFallM', prop: 'upperFall', label: 'Upper pump: fall from the tank', qty: 'length', help: 'Empty: the same as the lower fall.' },
+    {
+      type: 'quantity',
+      name: 'driveFlowEach',
+      prop: 'driveFlowEach',
+      label: 'Drive flow of each pump (optional)',
+      qty: 'flow',
+      help: 'Leave empty to estimate it from the fall and the drive pipe.',
+    },
+    ...pipeFields(
+      'drivePipe',
+      { length: 'driveLength', size: 'driveSize', series: 'driveMaterial' },
+      'Each drive pipe',
+    ),
+    {
+      type: 'number',
+      name: 'extraElbows',
+      prop: 'extraElbows',
+      label: 'Extra 90° elbows on the first drive pipe',
+      min: 0,
+      max: 10,
+      step: 1,
+    },
+    ...pipeFields(
+      'deliveryLine',
+      { length: 'deliveryLength', size: 'deliverySize', series: 'deliveryMaterial' },
+      'Delivery line',
+    ),
+    {
+      type: 'quantity',
+      name: 'sourceSpareFlowM3s',
+      prop: 'sourceFlow',
+      label: 'Flow the source can spare (optional)',
+      qty: 'flow',
+    },
+    {
+      type: 'quantity',
+      name: 'staged.upperFallM',
+      prop: 'upperFall',
+      label: 'Upper pump: fall from the tank',
+      qty: 'length',
+      help: 'Empty: the same as the lower fall.',
+    },
     { type: 'quantity', name: 'staged.upperLiftM', prop: 'upperLift', label: 'Upper pump: lift', qty: 'length' },
   ],
   defaults: {
@@ -59,7 +103,9 @@ export const arrayPlanner = defineCalculator(planArray, {
     const pump = (i: number) => ({
       label: `Pump ${i + 1}`,
       ...(v.driveFlowEach !== undefined ? { driveFlowM3s: v.driveFlowEach } : {}),
-      drivePipe: resolvePipeRun(v.drivePipe, { fittings: i === 0 && elbows > 0 ? [{ kind: 'elbow-90-threaded', count: elbows }] : [] }),
+      drivePipe: resolvePipeRun(v.drivePipe, {
+        fittings: i === 0 && elbows > 0 ? [{ kind: 'elbow-90-threaded', count: elbows }] : [],
+      }),
     });
     const staged = v.mode === 'staged' ? (v.staged as Record<string, unknown> | undefined) : undefined;
     return {
@@ -84,15 +130,29 @@ export const arrayPlanner = defineCalculator(planArray, {
     { label: 'Per day', value: r.combinedPerDayM3PerDay, qty: 'dailyVolume', emphasis: !r.staged },
     { label: 'Against the first pump alone', value: r.gainOverFirstPump, unit: '×' },
     { label: 'Total drive flow', value: r.totalDriveFlowM3s, qty: 'flow' },
-    ...(r.sourceShare !== undefined ? [{ label: 'Share of the spare source flow', value: r.sourceShare * 100, unit: '%' }] : []),
-    { label: 'Friction in the shared delivery line', value: r.deliveryFrictionHeadM + r.deliveryMinorHeadM, qty: 'length' as const },
+    ...(r.sourceShare !== undefined
+      ? [{ label: 'Share of the spare source flow', value: r.sourceShare * 100, unit: '%' }]
+      : []),
+    {
+      label: 'Friction in the shared delivery line',
+      value: r.deliveryFrictionHeadM + r.deliveryMinorHeadM,
+      qty: 'length' as const,
+    },
     { label: 'Highest lift (any number of pumps)', value: r.maxLiftM, qty: 'length' },
     ...(r.staged
       ? [
-          { label: 'At the top, per day', value: r.staged.topYieldPerDayM3PerDay, qty: 'dailyVolume' as const, emphasis: true },
+          {
+            label: 'At the top, per day',
+            value: r.staged.topYieldPerDayM3PerDay,
+            qty: 'dailyVolume' as const,
+            emphasis: true,
+          },
           { label: 'Upper pump runs around the clock', value: yesNo(r.staged.runsAroundTheClock) },
           { label: 'Share of the day the upper pump runs', value: r.staged.dutyFraction * 100, unit: '%' },
-          { label: 'Lower pumps needed to run it all day', value: r.staged.lowerPumpsNeeded > 0 ? String(r.staged.lowerPumpsNeeded) : 'more than 20' },
+          {
+            label: 'Lower pumps needed to run it all day',
+            value: r.staged.lowerPumpsNeeded > 0 ? String(r.staged.lowerPumpsNeeded) : 'more than 20',
+          },
         ]
       : []),
   ],

@@ -13,7 +13,14 @@ export const deliveryLine = defineCalculator(checkDeliveryLine, {
     { type: 'quantity', name: 'flowM3s', prop: 'flow', label: 'Delivered flow', qty: 'flow' },
     { type: 'quantity', name: 'liftM', prop: 'lift', label: 'Lift', qty: 'length' },
     ...pipeFields('line', { length: 'length', size: 'size', series: 'material' }, 'Delivery line'),
-    { type: 'quantity', name: 'targetLossM', prop: 'targetLoss', label: 'Most friction loss you accept (optional)', qty: 'length', help: 'Empty: a tenth of the lift.' },
+    {
+      type: 'quantity',
+      name: 'targetLossM',
+      prop: 'targetLoss',
+      label: 'Most friction loss you accept (optional)',
+      qty: 'length',
+      help: 'Empty: a tenth of the lift.',
+    },
   ],
   defaults: { flow: '0.5 L/min', lift: '29 ft', length: '150 ft', size: '3/4', material: 'hdpe-dr11' },
   toInput: (v) => ({ ...v, line: resolvePipeRun(v.line) }),
@@ -25,11 +32,16 @@ export const deliveryLine = defineCalculator(checkDeliveryLine, {
     { label: 'Fittings', value: r.minorHeadM, qty: 'length' },
     { label: 'Velocity', value: r.velocityMs, qty: 'velocity' },
     { label: `Reynolds number (${r.regime})`, value: r.reynolds },
-    { label: 'Friction factor f (Colebrook / Swamee-Jain)', value: `${r.frictionFactor.toFixed(4)} / ${r.frictionFactorSwameeJain.toFixed(4)}` },
+    {
+      label: 'Friction factor f (Colebrook / Swamee-Jain)',
+      value: `${r.frictionFactor.toFixed(4)} / ${r.frictionFactorSwameeJain.toFixed(4)}`,
+    },
     { label: 'Within the loss you accept', value: yesNo(r.withinTarget) },
     {
       label: 'Smallest pipe within it',
-      value: r.smallestPipe ? `${NOMINAL_LABELS[r.smallestPipe.nominal]} ${SERIES_LABELS[r.smallestPipe.series]}` : 'none from ½" to 4"',
+      value: r.smallestPipe
+        ? `${NOMINAL_LABELS[r.smallestPipe.nominal]} ${SERIES_LABELS[r.smallestPipe.series]}`
+        : 'none from ½" to 4"',
     },
   ],
 });

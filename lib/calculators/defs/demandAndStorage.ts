@@ -1,5 +1,11 @@
 import Qty from 'js-quantities';
-import { demandAndStorageSchema, EngineInputError, livestockRates, planDemandAndStorage, type LivestockKind } from '@/lib/hydraulics';
+import {
+  demandAndStorageSchema,
+  EngineInputError,
+  livestockRates,
+  planDemandAndStorage,
+  type LivestockKind,
+} from '@/lib/hydraulics';
 import { defineCalculator, type FieldDef } from '../types';
 
 /** MDX prop → livestock kind; chickens are counted per bird and the table is per 100 birds. */
@@ -23,7 +29,9 @@ export function parseArea(text: string): number {
     if (q.isUnitless()) throw new Error('unitless');
     return q.to('m^2').scalar;
   } catch {
-    throw new EngineInputError([{ field: 'garden', message: `could not read "${text}" as an area; type e.g. "200 ft2" or "20 m2"` }]);
+    throw new EngineInputError([
+      { field: 'garden', message: `could not read "${text}" as an area; type e.g. "200 ft2" or "20 m2"` },
+    ]);
   }
 }
 
@@ -39,8 +47,22 @@ export const demandAndStorage = defineCalculator(planDemandAndStorage, {
   fields: [
     { type: 'quantity', name: 'deliveryPerDay', prop: 'delivery', label: 'Ram delivery per day', qty: 'dailyVolume' },
     { type: 'number', name: 'people', prop: 'people', label: 'People', min: 0, step: 1 },
-    { type: 'text', name: 'garden', prop: 'garden', label: 'Garden area', placeholder: '200 ft2', help: 'Watered about an inch a week.' },
-    ...ANIMALS.map((a): FieldDef => ({ type: 'number', name: `animal.${a.prop}`, prop: a.prop, label: a.label, min: 0, step: 1 })),
+    {
+      type: 'text',
+      name: 'garden',
+      prop: 'garden',
+      label: 'Garden area',
+      placeholder: '200 ft2',
+      help: 'Watered about an inch a week.',
+    },
+    ...ANIMALS.map((a): FieldDef => ({
+      type: 'number',
+      name: `animal.${a.prop}`,
+      prop: a.prop,
+      label: a.label,
+      min: 0,
+      step: 1,
+    })),
     { type: 'number', name: 'reserveDays', prop: 'reserveDays', label: 'Days of reserve', min: 0, max: 60 },
     { type: 'quantity', name: 'tankVolumeM3', prop: 'tank', label: 'Tank you have (optional)', qty: 'volume' },
   ],
@@ -55,7 +77,11 @@ export const demandAndStorage = defineCalculator(planDemandAndStorage, {
       livestock: rates.map((a) =>
         // The table is per 100 birds and counts are whole: 12 chickens go in as one flock at 12/100 of the table's rate.
         a.perHundred
-          ? { kind: a.kind, count: 1, perHeadM3PerDay: (livestockRates()[a.kind].typicalM3PerDay * count(animals[a.prop])) / 100 }
+          ? {
+              kind: a.kind,
+              count: 1,
+              perHeadM3PerDay: (livestockRates()[a.kind].typicalM3PerDay * count(animals[a.prop])) / 100,
+            }
           : { kind: a.kind, count: count(animals[a.prop]) },
       ),
       reserveDays: v.reserveDays === undefined ? 3 : Number(v.reserveDays),
@@ -65,12 +91,20 @@ export const demandAndStorage = defineCalculator(planDemandAndStorage, {
   rows: (r) => [
     { label: 'Demand per day', value: r.totalDemandM3PerDay, qty: 'dailyVolume', emphasis: true },
     { label: 'Delivery per day', value: r.deliveryM3PerDay, qty: 'dailyVolume', emphasis: true },
-    { label: r.surplusM3PerDay >= 0 ? 'To spare per day' : 'Short per day', value: Math.abs(r.surplusM3PerDay), qty: 'dailyVolume' },
+    {
+      label: r.surplusM3PerDay >= 0 ? 'To spare per day' : 'Short per day',
+      value: Math.abs(r.surplusM3PerDay),
+      qty: 'dailyVolume',
+    },
     { label: 'Household', value: r.householdM3PerDay, qty: 'dailyVolume' },
     { label: 'Garden', value: r.gardenM3PerDay, qty: 'dailyVolume' },
     { label: 'Livestock', value: r.livestockM3PerDay, qty: 'dailyVolume' },
     { label: 'Tank for the reserve', value: r.reserveTankM3, qty: 'volume' },
-    ...(r.reserveRefillTimeS !== undefined ? [{ label: 'Refill from empty', value: r.reserveRefillTimeS / 3600, unit: 'hours' }] : []),
-    ...(r.tankDaysOfReserve !== undefined ? [{ label: 'Your tank carries', value: r.tankDaysOfReserve, unit: 'days' }] : []),
+    ...(r.reserveRefillTimeS !== undefined
+      ? [{ label: 'Refill from empty', value: r.reserveRefillTimeS / 3600, unit: 'hours' }]
+      : []),
+    ...(r.tankDaysOfReserve !== undefined
+      ? [{ label: 'Your tank carries', value: r.tankDaysOfReserve, unit: 'days' }]
+      : []),
   ],
 });

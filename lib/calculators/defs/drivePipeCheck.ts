@@ -36,11 +36,16 @@ export const drivePipeCheck = defineCalculator(checkDrivePipe, {
  * series, for the chart; `values` are the form's fields as read (SI). A series
  * the engine refuses for this pipe is left out.
  */
-export function surgeByMaterial(values: Record<string, unknown>): { series: PipeSeries; surgePa: number; current: boolean }[] {
+export function surgeByMaterial(
+  values: Record<string, unknown>,
+): { series: PipeSeries; surgePa: number; current: boolean }[] {
   const current = (values.drivePipe as { series?: string } | undefined)?.series;
   return PIPE_SERIES.flatMap((series) => {
     try {
-      const out = drivePipeCheck.run({ ...values, drivePipe: resolvePipeRun({ ...(values.drivePipe as Record<string, unknown>), series }) });
+      const out = drivePipeCheck.run({
+        ...values,
+        drivePipe: resolvePipeRun({ ...(values.drivePipe as Record<string, unknown>), series }),
+      });
       return [{ series, surgePa: out.results.surgePa, current: series === current }];
     } catch {
       return [];

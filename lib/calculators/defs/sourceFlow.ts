@@ -17,7 +17,9 @@ export function parseTrials(text: string) {
     .map((t, i) => {
       const [, volume, time] = /^(.+?)\s+in\s+(.+)$/i.exec(t) ?? [];
       if (volume === undefined || time === undefined) {
-        throw new EngineInputError([{ field: 'trials', message: `trial ${i + 1} ("${t}") should read like "5 L in 12 s"` }]);
+        throw new EngineInputError([
+          { field: 'trials', message: `trial ${i + 1} ("${t}") should read like "5 L in 12 s"` },
+        ]);
       }
       return { volumeM3: parseQuantity(volume, 'volume', 'trials'), timeS: parseQuantity(time, 'time', 'trials') };
     });
@@ -50,17 +52,38 @@ export const sourceFlow = defineCalculator(measureSourceFlow, {
         { value: 'float', label: 'Float' },
       ],
     },
-    { type: 'text', name: 'trials', prop: 'trials', label: 'Trials', placeholder: '5 gal in 42 s, 5 gal in 40 s', help: 'Each trial as “volume in time”, separated by commas.' },
-    { type: 'quantity', name: 'notchHeadM', prop: 'head', label: 'Head over the notch', qty: 'smallLength', help: 'Measured upstream, at least four heads back from the notch.' },
+    {
+      type: 'text',
+      name: 'trials',
+      prop: 'trials',
+      label: 'Trials',
+      placeholder: '5 gal in 42 s, 5 gal in 40 s',
+      help: 'Each trial as “volume in time”, separated by commas.',
+    },
+    {
+      type: 'quantity',
+      name: 'notchHeadM',
+      prop: 'head',
+      label: 'Head over the notch',
+      qty: 'smallLength',
+      help: 'Measured upstream, at least four heads back from the notch.',
+    },
     { type: 'number', name: 'angleDeg', prop: 'angle', label: 'Notch angle (degrees)' },
     { type: 'quantity', name: 'distanceM', prop: 'distance', label: 'Float run distance', qty: 'length' },
     { type: 'text', name: 'times', prop: 'time', label: 'Float times', placeholder: '8 s, 9 s, 8.5 s' },
     { type: 'quantity', name: 'widthM', prop: 'width', label: 'Stream width', qty: 'length' },
     { type: 'quantity', name: 'meanDepthM', prop: 'depth', label: 'Mean depth', qty: 'length' },
-    { type: 'quantity', name: 'plannedDrawM3s', prop: 'draw', label: 'Drive flow you plan to take (optional)', qty: 'flow' },
+    {
+      type: 'quantity',
+      name: 'plannedDrawM3s',
+      prop: 'draw',
+      label: 'Drive flow you plan to take (optional)',
+      qty: 'flow',
+    },
   ],
   defaults: { method: 'bucket', trials: '5 gal in 42 s, 5 gal in 40 s, 5 gal in 44 s', angle: '90' },
-  visible: (name: string, state: FormState) => !ALL.has(name) || (BY_METHOD[state.method?.text ?? 'bucket'] ?? []).includes(name),
+  visible: (name: string, state: FormState) =>
+    !ALL.has(name) || (BY_METHOD[state.method?.text ?? 'bucket'] ?? []).includes(name),
   toInput: (v) => {
     const { trials, times, ...rest } = v;
     if (v.method === 'bucket') return { ...rest, trials: parseTrials(String(trials ?? '')) };
@@ -77,8 +100,14 @@ export const sourceFlow = defineCalculator(measureSourceFlow, {
           { label: 'Coefficient of variation', value: r.stats.cv * 100, unit: '%' },
         ]
       : []),
-    ...(r.weir?.usbr90M3s !== undefined ? [{ label: 'Cross-check, USBR 90° equation', value: r.weir.usbr90M3s, qty: 'flow' as const }] : []),
-    ...(r.surfaceVelocityMs !== undefined ? [{ label: 'Surface velocity', value: r.surfaceVelocityMs, qty: 'velocity' as const }] : []),
-    ...(r.planShare !== undefined ? [{ label: 'Share of the flow the plan takes', value: r.planShare * 100, unit: '%' }] : []),
+    ...(r.weir?.usbr90M3s !== undefined
+      ? [{ label: 'Cross-check, USBR 90° equation', value: r.weir.usbr90M3s, qty: 'flow' as const }]
+      : []),
+    ...(r.surfaceVelocityMs !== undefined
+      ? [{ label: 'Surface velocity', value: r.surfaceVelocityMs, qty: 'velocity' as const }]
+      : []),
+    ...(r.planShare !== undefined
+      ? [{ label: 'Share of the flow the plan takes', value: r.planShare * 100, unit: '%' }]
+      : []),
   ],
 });

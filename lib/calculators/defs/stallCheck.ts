@@ -1,4 +1,11 @@
-import { NOMINAL_LABELS, NOMINAL_SIZES, runStallCheck, stallCheckSchema, SYMPTOM_LABELS, SYMPTOMS } from '@/lib/hydraulics';
+import {
+  NOMINAL_LABELS,
+  NOMINAL_SIZES,
+  runStallCheck,
+  stallCheckSchema,
+  SYMPTOM_LABELS,
+  SYMPTOMS,
+} from '@/lib/hydraulics';
 import { defineCalculator } from '../types';
 import { normalizeSeries, normalizeSize, resolvePipeRun, seriesOptions, sizeOptions } from '../pipes';
 
@@ -26,23 +33,96 @@ export const stallCheck = defineCalculator(runStallCheck, {
   guide: 'when-it-stops-cycling',
   schema: stallCheckSchema,
   fields: [
-    { type: 'checks', name: 'symptoms', prop: 'symptoms', label: 'What it does', options: SYMPTOMS.map((s) => ({ value: s, label: SYMPTOM_LABELS[s] })), normalize: normalizeSymptoms },
+    {
+      type: 'checks',
+      name: 'symptoms',
+      prop: 'symptoms',
+      label: 'What it does',
+      options: SYMPTOMS.map((s) => ({ value: s, label: SYMPTOM_LABELS[s] })),
+      normalize: normalizeSymptoms,
+    },
     { type: 'quantity', name: 'site.fallM', prop: 'fall', label: 'Fall', qty: 'length' },
     { type: 'quantity', name: 'site.liftM', prop: 'lift', label: 'Lift', qty: 'length' },
-    { type: 'quantity', name: 'site.drivePipe.lengthM', prop: 'driveLength', label: 'Drive pipe length', qty: 'length' },
-    { type: 'select', name: 'site.drivePipe.nominal', prop: 'driveSize', label: 'Drive pipe size', options: sizeOptions, normalize: normalizeSize },
-    { type: 'select', name: 'site.drivePipe.series', prop: 'driveMaterial', label: 'Drive pipe material', options: seriesOptions, normalize: normalizeSeries },
-    { type: 'select', name: 'site.pumpSize', prop: 'pumpSize', label: 'Pump size', options: NOMINAL_SIZES.map((s) => ({ value: s, label: NOMINAL_LABELS[s] })), normalize: normalizeSize },
+    {
+      type: 'quantity',
+      name: 'site.drivePipe.lengthM',
+      prop: 'driveLength',
+      label: 'Drive pipe length',
+      qty: 'length',
+    },
+    {
+      type: 'select',
+      name: 'site.drivePipe.nominal',
+      prop: 'driveSize',
+      label: 'Drive pipe size',
+      options: sizeOptions,
+      normalize: normalizeSize,
+    },
+    {
+      type: 'select',
+      name: 'site.drivePipe.series',
+      prop: 'driveMaterial',
+      label: 'Drive pipe material',
+      options: seriesOptions,
+      normalize: normalizeSeries,
+    },
+    {
+      type: 'select',
+      name: 'site.pumpSize',
+      prop: 'pumpSize',
+      label: 'Pump size',
+      options: NOMINAL_SIZES.map((s) => ({ value: s, label: NOMINAL_LABELS[s] })),
+      normalize: normalizeSize,
+    },
     { type: 'number', name: 'site.pumpCount', prop: 'pumps', label: 'Pumps', min: 1, max: 20, step: 1 },
-    { type: 'quantity', name: 'site.sourceSpareFlowM3s', prop: 'sourceFlow', label: 'Flow the source can spare (optional)', qty: 'flow' },
-    { type: 'quantity', name: 'site.driveFlowM3s', prop: 'driveFlow', label: 'Measured drive flow of one pump (optional)', qty: 'flow' },
-    { type: 'quantity', name: 'site.deliveredFlowM3s', prop: 'delivered', label: 'Measured delivery (optional)', qty: 'smallFlow' },
-    { type: 'number', name: 'site.beatsPerMinute', prop: 'bpm', label: 'Beats per minute (optional)', min: 1, max: 400 },
-    { type: 'select', name: 'site.wasteOutletSubmerged', prop: 'wasteFlooded', label: 'Waste valve outlet under water', options: triState },
+    {
+      type: 'quantity',
+      name: 'site.sourceSpareFlowM3s',
+      prop: 'sourceFlow',
+      label: 'Flow the source can spare (optional)',
+      qty: 'flow',
+    },
+    {
+      type: 'quantity',
+      name: 'site.driveFlowM3s',
+      prop: 'driveFlow',
+      label: 'Measured drive flow of one pump (optional)',
+      qty: 'flow',
+    },
+    {
+      type: 'quantity',
+      name: 'site.deliveredFlowM3s',
+      prop: 'delivered',
+      label: 'Measured delivery (optional)',
+      qty: 'smallFlow',
+    },
+    {
+      type: 'number',
+      name: 'site.beatsPerMinute',
+      prop: 'bpm',
+      label: 'Beats per minute (optional)',
+      min: 1,
+      max: 400,
+    },
+    {
+      type: 'select',
+      name: 'site.wasteOutletSubmerged',
+      prop: 'wasteFlooded',
+      label: 'Waste valve outlet under water',
+      options: triState,
+    },
     { type: 'select', name: 'site.screenAtIntake', prop: 'screen', label: 'Screen at the intake', options: triState },
     { type: 'select', name: 'site.frostRisk', prop: 'frost', label: 'Freezing weather at the site', options: triState },
   ],
-  defaults: { fall: '4 ft', lift: '29 ft', driveLength: '24 ft', driveSize: '1/2', driveMaterial: 'pvc-sch40', pumpSize: '1/2', pumps: '1' },
+  defaults: {
+    fall: '4 ft',
+    lift: '29 ft',
+    driveLength: '24 ft',
+    driveSize: '1/2',
+    driveMaterial: 'pvc-sch40',
+    pumpSize: '1/2',
+    pumps: '1',
+  },
   toInput: (v) => {
     const site = { ...((v.site ?? {}) as Record<string, unknown>) };
     for (const k of ['wasteOutletSubmerged', 'screenAtIntake', 'frostRisk']) {
@@ -56,7 +136,11 @@ export const stallCheck = defineCalculator(runStallCheck, {
   },
   rows: (r) => [
     { label: 'Expected delivery', value: r.expectedDeliveryM3s, qty: 'smallFlow' },
-    { label: `Drive flow of all pumps${r.driveFlowEstimated ? ' (estimated)' : ''}`, value: r.totalDriveFlowM3s, qty: 'flow' },
+    {
+      label: `Drive flow of all pumps${r.driveFlowEstimated ? ' (estimated)' : ''}`,
+      value: r.totalDriveFlowM3s,
+      qty: 'flow',
+    },
     { label: 'Lift ratio h/H', value: r.liftRatio },
     { label: 'Drive pipe L/H', value: r.lengthToFall },
     { label: 'Expected beats per minute', value: r.expectedBeatsPerMinute },

@@ -9,10 +9,38 @@ export const yieldEstimate = defineCalculator(estimateYield, {
   guide: 'will-a-ram-meet-my-demand',
   schema: yieldEstimateSchema,
   fields: [
-    { type: 'quantity', name: 'fallM', prop: 'fall', label: 'Fall (supply head)', qty: 'length', help: 'From the intake’s water surface down to the pump.' },
-    { type: 'quantity', name: 'liftM', prop: 'lift', label: 'Lift (delivery head)', qty: 'length', help: 'From the pump up to where the delivery pipe empties.' },
-    { type: 'quantity', name: 'driveFlowM3s', prop: 'driveFlow', label: 'Drive flow', qty: 'flow', help: 'Water the pump uses: what comes out of the waste valve plus what it delivers.' },
-    { type: 'number', name: 'efficiency', prop: 'efficiency', label: 'Efficiency (optional)', percent: true, help: 'As 0.6 or 60 %. Leave empty to use the typical value for this lift ratio.' },
+    {
+      type: 'quantity',
+      name: 'fallM',
+      prop: 'fall',
+      label: 'Fall (supply head)',
+      qty: 'length',
+      help: 'From the intake’s water surface down to the pump.',
+    },
+    {
+      type: 'quantity',
+      name: 'liftM',
+      prop: 'lift',
+      label: 'Lift (delivery head)',
+      qty: 'length',
+      help: 'From the pump up to where the delivery pipe empties.',
+    },
+    {
+      type: 'quantity',
+      name: 'driveFlowM3s',
+      prop: 'driveFlow',
+      label: 'Drive flow',
+      qty: 'flow',
+      help: 'Water the pump uses: what comes out of the waste valve plus what it delivers.',
+    },
+    {
+      type: 'number',
+      name: 'efficiency',
+      prop: 'efficiency',
+      label: 'Efficiency (optional)',
+      percent: true,
+      help: 'As 0.6 or 60 %. Leave empty to use the typical value for this lift ratio.',
+    },
     {
       type: 'select',
       name: 'pumpType',
@@ -23,7 +51,14 @@ export const yieldEstimate = defineCalculator(estimateYield, {
         { value: 'commercial', label: 'Cast, factory-made' },
       ],
     },
-    { type: 'quantity', name: 'measuredDeliveredFlowM3s', prop: 'measured', label: 'Measured delivery (optional)', qty: 'smallFlow', help: 'From a cup and a stopwatch, to work out your pump’s own efficiency.' },
+    {
+      type: 'quantity',
+      name: 'measuredDeliveredFlowM3s',
+      prop: 'measured',
+      label: 'Measured delivery (optional)',
+      qty: 'smallFlow',
+      help: 'From a cup and a stopwatch, to work out your pump’s own efficiency.',
+    },
   ],
   defaults: { fall: '4 ft', lift: '29 ft', driveFlow: '2 gal/min', pumpType: 'homemade' },
   rows: (r) => [
@@ -32,7 +67,11 @@ export const yieldEstimate = defineCalculator(estimateYield, {
     { label: 'Waste flow', value: r.wasteFlowM3s, qty: 'flow' },
     { label: 'Lift ratio h/H', value: r.liftRatio },
     { label: `Efficiency used (${r.efficiencySource})`, value: r.efficiencyUsed * 100, unit: '%' },
-    { label: 'Typical band at this ratio', value: `${Math.round(r.band.low * 100)}–${Math.round(r.band.high * 100)}`, unit: '%' },
+    {
+      label: 'Typical band at this ratio',
+      value: `${Math.round(r.band.low * 100)}–${Math.round(r.band.high * 100)}`,
+      unit: '%',
+    },
     ...(r.measured
       ? [
           { label: 'Measured efficiency, D’Aubuisson q·h/(Q·H)', value: r.measured.dAubuisson * 100, unit: '%' },

@@ -16,7 +16,15 @@ type AuditPage = Awaited<ReturnType<typeof listAudit>>;
 type AuditItem = AuditPage['items'][number];
 
 const FIELDS = ['action', 'actor', 'from', 'to', 'page'] as const;
-const whenFmt = new Intl.DateTimeFormat('en', { day: 'numeric', month: 'short', year: 'numeric', hour: '2-digit', minute: '2-digit', timeZone: 'UTC', hour12: false });
+const whenFmt = new Intl.DateTimeFormat('en', {
+  day: 'numeric',
+  month: 'short',
+  year: 'numeric',
+  hour: '2-digit',
+  minute: '2-digit',
+  timeZone: 'UTC',
+  hour12: false,
+});
 
 /** The query as typed: one value per field, blanks dropped (an empty GET form field means "any"). */
 function readQuery(raw: Record<string, string | string[] | undefined>) {
@@ -64,7 +72,13 @@ export default async function AuditPage({ searchParams }: { searchParams: Search
   return (
     <div className="flex flex-col gap-4">
       <h1 className="font-serif text-3xl font-semibold">Audit log</h1>
-      <form method="get" action="/admin/audit" role="search" aria-label="Filter the audit log" className="cw-card flex flex-wrap items-end gap-4">
+      <form
+        method="get"
+        action="/admin/audit"
+        role="search"
+        aria-label="Filter the audit log"
+        className="cw-card flex flex-wrap items-end gap-4"
+      >
         <div>
           <label htmlFor="audit-action" className={labelClass}>
             Action
@@ -106,7 +120,9 @@ export default async function AuditPage({ searchParams }: { searchParams: Search
         </p>
       ) : null}
       <p className="cw-muted font-sans text-sm">
-        {data.total === 0 ? 'Nothing recorded matches.' : `${data.total} ${data.total === 1 ? 'entry' : 'entries'}, newest first · page ${data.page} of ${totalPages}. Times are UTC.`}
+        {data.total === 0
+          ? 'Nothing recorded matches.'
+          : `${data.total} ${data.total === 1 ? 'entry' : 'entries'}, newest first · page ${data.page} of ${totalPages}. Times are UTC.`}
       </p>
       {data.items.length ? (
         <div className="cw-card overflow-x-auto p-0">
@@ -114,16 +130,29 @@ export default async function AuditPage({ searchParams }: { searchParams: Search
             <caption className="sr-only">Moderation actions</caption>
             <thead>
               <tr className="border-b border-limestone-300 text-left dark:border-creek-600">
-                <th scope="col" className="px-3 py-2">When</th>
-                <th scope="col" className="px-3 py-2">Who</th>
-                <th scope="col" className="px-3 py-2">Action</th>
-                <th scope="col" className="px-3 py-2">Target</th>
-                <th scope="col" className="px-3 py-2">Reason</th>
+                <th scope="col" className="px-3 py-2">
+                  When
+                </th>
+                <th scope="col" className="px-3 py-2">
+                  Who
+                </th>
+                <th scope="col" className="px-3 py-2">
+                  Action
+                </th>
+                <th scope="col" className="px-3 py-2">
+                  Target
+                </th>
+                <th scope="col" className="px-3 py-2">
+                  Reason
+                </th>
               </tr>
             </thead>
             <tbody>
               {data.items.map((item) => (
-                <tr key={item.id} className="border-b border-limestone-200 align-top last:border-0 dark:border-creek-700">
+                <tr
+                  key={item.id}
+                  className="border-b border-limestone-200 align-top last:border-0 dark:border-creek-700"
+                >
                   <td className="cw-num whitespace-nowrap px-3 py-2">{whenFmt.format(new Date(item.at))}</td>
                   <td className="px-3 py-2">
                     {item.actor ? (

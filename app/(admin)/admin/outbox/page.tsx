@@ -9,11 +9,27 @@ import { RetryButton } from './RetryButton';
 export const metadata: Metadata = { title: 'E-mail outbox' };
 export const dynamic = 'force-dynamic';
 
-const whenFmt = new Intl.DateTimeFormat('en', { day: 'numeric', month: 'short', hour: '2-digit', minute: '2-digit', timeZone: 'UTC', hour12: false });
-const STATUS_WORDS: Record<MailStatus, string> = { pending: 'waiting', sending: 'being sent', sent: 'sent', failed: 'failed' };
+const whenFmt = new Intl.DateTimeFormat('en', {
+  day: 'numeric',
+  month: 'short',
+  hour: '2-digit',
+  minute: '2-digit',
+  timeZone: 'UTC',
+  hour12: false,
+});
+const STATUS_WORDS: Record<MailStatus, string> = {
+  pending: 'waiting',
+  sending: 'being sent',
+  sent: 'sent',
+  failed: 'failed',
+};
 
 /** The outbox for admins: counts by status, then failed messages with the SMTP error, then the newest. */
-export default async function OutboxPage({ searchParams }: { searchParams: Promise<Record<string, string | string[] | undefined>> }) {
+export default async function OutboxPage({
+  searchParams,
+}: {
+  searchParams: Promise<Record<string, string | string[] | undefined>>;
+}) {
   const sp = await searchParams;
   const status = MAIL_STATUSES.find((s) => s === sp.status) ?? null;
   let signedIn = false;
@@ -23,14 +39,17 @@ export default async function OutboxPage({ searchParams }: { searchParams: Promi
   if (user && can(user, 'mail.outbox')) {
     data = await outboxView(status);
   }
-  if (!data) return <Refused title="E-mail outbox" message={REFUSAL['mail.outbox']} signedIn={signedIn} signInTo="/admin/outbox" />;
+  if (!data)
+    return (
+      <Refused title="E-mail outbox" message={REFUSAL['mail.outbox']} signedIn={signedIn} signInTo="/admin/outbox" />
+    );
 
   return (
     <div className="flex flex-col gap-4">
       <h1 className="font-serif text-3xl font-semibold">E-mail outbox</h1>
       <p className="cw-muted max-w-2xl font-sans text-sm">
-        Every message is written here with the event that causes it and sent by the worker, with longer waits after each failure. A message still refused
-        after its last attempt shows as failed, with what the mail server said.
+        Every message is written here with the event that causes it and sent by the worker, with longer waits after each
+        failure. A message still refused after its last attempt shows as failed, with what the mail server said.
       </p>
       <nav aria-label="Outbox by status" className="flex flex-wrap gap-3 font-sans text-sm">
         <a href="/admin/outbox" className={status ? 'cw-link' : 'font-semibold'}>
@@ -59,7 +78,11 @@ export default async function OutboxPage({ searchParams }: { searchParams: Promi
             </thead>
             <tbody>
               {data.rows.map((m) => (
-                <tr key={m.id} className="border-b border-limestone-300 align-top dark:border-creek-600" data-outbox-status={m.status}>
+                <tr
+                  key={m.id}
+                  className="border-b border-limestone-300 align-top dark:border-creek-600"
+                  data-outbox-status={m.status}
+                >
                   <td className="p-2 whitespace-nowrap">{whenFmt.format(m.createdAt)}</td>
                   <td className="p-2">{m.toAddress}</td>
                   <td className="p-2">
@@ -69,8 +92,12 @@ export default async function OutboxPage({ searchParams }: { searchParams: Promi
                   </td>
                   <td className="p-2">
                     {STATUS_WORDS[m.status as MailStatus]}
-                    {m.status === 'sent' && m.sentAt ? <span className="cw-muted"> {whenFmt.format(m.sentAt)}</span> : null}
-                    {m.status === 'pending' && m.attempts > 0 ? <span className="cw-muted"> — next try {whenFmt.format(m.nextAttemptAt)}</span> : null}
+                    {m.status === 'sent' && m.sentAt ? (
+                      <span className="cw-muted"> {whenFmt.format(m.sentAt)}</span>
+                    ) : null}
+                    {m.status === 'pending' && m.attempts > 0 ? (
+                      <span className="cw-muted"> — next try {whenFmt.format(m.nextAttemptAt)}</span>
+                    ) : null}
                   </td>
                   <td className="p-2">{m.attempts}</td>
                   <td className="p-2">

@@ -46,7 +46,11 @@ export function RolePicker({ userId, handle, role }: { userId: number; handle: s
           </option>
         ))}
       </select>
-      {saved ? <span className="ml-2 text-sm text-moss-600 dark:text-moss-300" role="status">saved</span> : null}
+      {saved ? (
+        <span className="ml-2 text-sm text-moss-600 dark:text-moss-300" role="status">
+          saved
+        </span>
+      ) : null}
       {error ? (
         <p role="alert" className="mt-1 text-sm font-semibold text-clay-600 dark:text-clay-300">
           {error.message}

@@ -11,7 +11,11 @@ export const dynamic = 'force-dynamic';
 
 const PER_PAGE = 50;
 
-export default async function AdminUsersPage({ searchParams }: { searchParams: Promise<{ page?: string | string[] }> }) {
+export default async function AdminUsersPage({
+  searchParams,
+}: {
+  searchParams: Promise<{ page?: string | string[] }>;
+}) {
   const raw = (await searchParams).page;
   const asked = Number(Array.isArray(raw) ? raw[0] : raw);
   const page = Number.isInteger(asked) && asked >= 1 && asked <= 1_000_000 ? asked : 1;
@@ -38,9 +42,15 @@ export default async function AdminUsersPage({ searchParams }: { searchParams: P
         <table className="w-full font-sans text-sm">
           <thead>
             <tr className="border-b border-limestone-300 text-left dark:border-creek-600">
-              <th scope="col" className="px-3 py-2">Handle</th>
-              <th scope="col" className="px-3 py-2">Display name</th>
-              <th scope="col" className="px-3 py-2">Role</th>
+              <th scope="col" className="px-3 py-2">
+                Handle
+              </th>
+              <th scope="col" className="px-3 py-2">
+                Display name
+              </th>
+              <th scope="col" className="px-3 py-2">
+                Role
+              </th>
             </tr>
           </thead>
           <tbody>

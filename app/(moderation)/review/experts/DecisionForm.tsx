@@ -22,11 +22,20 @@ export function DecisionForm({ applicationId, applicantName }: { applicationId: 
     const out = await sendJson(`/api/expert-applications/${applicationId}/decision`, 'POST', { decision, note });
     setBusy(false);
     if (!out.ok) return setError(out.error);
-    setDone(decision === 'approve' ? `${applicantName} is now an expert.` : `The application from ${applicantName} was declined.`);
+    setDone(
+      decision === 'approve'
+        ? `${applicantName} is now an expert.`
+        : `The application from ${applicantName} was declined.`,
+    );
     router.refresh();
   }
 
-  if (done) return <p role="status" className="font-sans text-sm text-moss-600 dark:text-moss-300">{done}</p>;
+  if (done)
+    return (
+      <p role="status" className="font-sans text-sm text-moss-600 dark:text-moss-300">
+        {done}
+      </p>
+    );
 
   return (
     <form onSubmit={onSubmit} noValidate className="flex flex-col gap-2 font-sans">

@@ -23,7 +23,14 @@ export default async function ReviewExpertsPage() {
   }
 
   if (!applications) {
-    return <Refused title="Expert applications" message={REFUSAL['expertApplication.decide']} signedIn={signedIn} signInTo="/review/experts" />;
+    return (
+      <Refused
+        title="Expert applications"
+        message={REFUSAL['expertApplication.decide']}
+        signedIn={signedIn}
+        signInTo="/review/experts"
+      />
+    );
   }
 
   return (
@@ -46,7 +53,8 @@ export default async function ReviewExpertsPage() {
               </h2>
               <p className="cw-muted text-sm">
                 applied {dateFmt.format(new Date(a.createdAt))} · {a.region} ·{' '}
-                <span className="cw-num">{a.pumpsBuilt}</span> pumps built · <span className="cw-num">{a.years}</span> years
+                <span className="cw-num">{a.pumpsBuilt}</span> pumps built · <span className="cw-num">{a.years}</span>{' '}
+                years
               </p>
             </div>
             <p className="cw-prose whitespace-pre-line">{a.experience}</p>

@@ -14,7 +14,15 @@ export const dynamic = 'force-dynamic';
 const ONE_YEAR_S = 60 * 60 * 24 * 365;
 
 function settingsView(u: User) {
-  return { handle: u.handle, email: u.email, role: u.role, displayName: u.displayName, region: u.region ?? '', bio: u.bio ?? '', units: u.units };
+  return {
+    handle: u.handle,
+    email: u.email,
+    role: u.role,
+    displayName: u.displayName,
+    region: u.region ?? '',
+    bio: u.bio ?? '',
+    units: u.units,
+  };
 }
 
 /** GET /api/account/settings — the signed-in member's own settings. */

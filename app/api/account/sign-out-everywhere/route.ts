@@ -15,7 +15,14 @@ export async function POST(request: Request) {
   return guarded(request, 'session.revokeAll', async (user) => {
     await endAllSessions(user.id);
     const res = NextResponse.json({ message: 'Signed out everywhere. Sign in again on each device you use.' });
-    for (const name of SESSION_COOKIES) res.cookies.set(name, '', { path: '/', maxAge: 0, httpOnly: true, sameSite: 'lax', secure: name.startsWith('__Secure-') });
+    for (const name of SESSION_COOKIES)
+      res.cookies.set(name, '', {
+        path: '/',
+        maxAge: 0,
+        httpOnly: true,
+        sameSite: 'lax',
+        secure: name.startsWith('__Secure-'),
+      });
     return res;
   });
 }

@@ -12,7 +12,9 @@ export async function POST(request: Request) {
   if ('response' in body) return body.response;
   try {
     const out = await verifyEmail(body.data.token);
-    return out.ok ? NextResponse.json({ message: 'Your e-mail is confirmed. You can sign in.' }) : apiError(410, out.message, 'token', 'token_invalid');
+    return out.ok
+      ? NextResponse.json({ message: 'Your e-mail is confirmed. You can sign in.' })
+      : apiError(410, out.message, 'token', 'token_invalid');
   } catch (err) {
     return serverError(err);
   }

@@ -15,8 +15,13 @@ type Ctx = { params: Promise<{ nextauth: string[] }> };
 async function POST(request: Request, ctx: Ctx) {
   const { nextauth } = await ctx.params;
   if (nextauth.join('/') === 'signin/email') {
-    const form = await request.clone().formData().catch(() => null);
-    const email = String(form?.get('email') ?? '').trim().toLowerCase();
+    const form = await request
+      .clone()
+      .formData()
+      .catch(() => null);
+    const email = String(form?.get('email') ?? '')
+      .trim()
+      .toLowerCase();
     const limited = await spend([
       ['linkIp', clientIp(request.headers)],
       // one count per account however the address is spelt (lib/auth/account-key.ts)
@@ -24,7 +29,10 @@ async function POST(request: Request, ctx: Ctx) {
     ]);
     if (!limited.ok) {
       // next-auth's client reads `error` from the returned url's query
-      const url = new URL(`/sign-in?error=${encodeURIComponent(limitMessage(limited.retryAfterS))}`, request.url).toString();
+      const url = new URL(
+        `/sign-in?error=${encodeURIComponent(limitMessage(limited.retryAfterS))}`,
+        request.url,
+      ).toString();
       return NextResponse.json({ url }, { status: 429 });
     }
   }

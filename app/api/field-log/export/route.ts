@@ -49,6 +49,10 @@ export async function GET(request: NextRequest) {
     },
   });
   return new Response(body, {
-    headers: { 'content-type': 'text/csv; charset=utf-8', 'content-disposition': 'attachment; filename="clackwater-field-log.csv"', 'cache-control': 'no-store' },
+    headers: {
+      'content-type': 'text/csv; charset=utf-8',
+      'content-disposition': 'attachment; filename="clackwater-field-log.csv"',
+      'cache-control': 'no-store',
+    },
   });
 }

@@ -16,7 +16,10 @@ const schema = z.object({
 export async function GET(request: NextRequest) {
   const parsed = schema.safeParse(queryObject(request.nextUrl.searchParams));
   if (!parsed.success) return validationError(parsed.error);
-  const tags = parsed.data.tags.split(',').map((t) => t.trim()).filter((t) => /^[a-z0-9-]{2,40}$/.test(t));
+  const tags = parsed.data.tags
+    .split(',')
+    .map((t) => t.trim())
+    .filter((t) => /^[a-z0-9-]{2,40}$/.test(t));
   try {
     return NextResponse.json({ items: await similarQuestions({ ...parsed.data, tags }) });
   } catch (err) {

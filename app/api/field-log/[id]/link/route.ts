@@ -16,6 +16,9 @@ export async function POST(request: Request, { params }: Ctx) {
     const body = await readJson(request, fieldLogLinkSchema);
     if ('response' in body) return body.response;
     await linkEntries(user, id, body.data);
-    return NextResponse.json({ beforeId: body.data.beforeId, afterId: id, url: `/field-log/compare/${body.data.beforeId}/${id}` }, { status: 201 });
+    return NextResponse.json(
+      { beforeId: body.data.beforeId, afterId: id, url: `/field-log/compare/${body.data.beforeId}/${id}` },
+      { status: 201 },
+    );
   });
 }

@@ -38,7 +38,13 @@ export async function POST(request: Request, { params }: { params: Promise<{ slu
     const { SafetyCheck } = initModels();
     const check = await getSequelize().transaction((transaction) =>
       SafetyCheck.create(
-        { guideSlug: slug, contentHash: guide.hash, expertId: user.id, verdict: body.data.verdict, notes: body.data.notes || null },
+        {
+          guideSlug: slug,
+          contentHash: guide.hash,
+          expertId: user.id,
+          verdict: body.data.verdict,
+          notes: body.data.notes || null,
+        },
         { transaction },
       ),
     );

@@ -6,7 +6,9 @@ import { guarded, idParam } from '@/lib/http/guard';
 import { chooseFixed } from '@/lib/questions/posts';
 
 export const dynamic = 'force-dynamic';
-const schema = z.object({ answerId: z.number({ error: 'answerId must be a number or null' }).int().positive().nullable() });
+const schema = z.object({
+  answerId: z.number({ error: 'answerId must be a number or null' }).int().positive().nullable(),
+});
 
 /** PUT /api/questions/:id/fixed { answerId | null } — the asker's "fixed it" choice. */
 export async function PUT(request: Request, { params }: { params: Promise<{ id: string }> }) {

@@ -10,11 +10,16 @@ export const dynamic = 'force-dynamic';
 /** POST /api/questions/:id/replies — a reply under the question, an answer or another reply. */
 export async function POST(request: Request, { params }: { params: Promise<{ id: string }> }) {
   const id = idParam((await params).id);
-  return guarded(request, 'reply.post', async (user) => {
-    if (!id) return apiError(400, 'id must be a question number', 'id');
-    const body = await readJson(request, replySchema);
-    if ('response' in body) return body.response;
-    const r = await postReply(user, id, body.data);
-    return NextResponse.json({ id: r.id, depth: r.depth }, { status: 201 });
-  }, { flood: 'post' });
+  return guarded(
+    request,
+    'reply.post',
+    async (user) => {
+      if (!id) return apiError(400, 'id must be a question number', 'id');
+      const body = await readJson(request, replySchema);
+      if ('response' in body) return body.response;
+      const r = await postReply(user, id, body.data);
+      return NextResponse.json({ id: r.id, depth: r.depth }, { status: 201 });
+    },
+    { flood: 'post' },
+  );
 }

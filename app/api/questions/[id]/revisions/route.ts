@@ -10,7 +10,11 @@ import { ForumError } from '@/lib/questions/errors';
 export const dynamic = 'force-dynamic';
 const schema = z.object({
   postType: z.enum(POST_TYPES, { error: 'postType must be question, answer or reply' }).default('question'),
-  postId: z.string().regex(/^\d{1,10}$/, 'postId must be a number').transform(Number).optional(),
+  postId: z
+    .string()
+    .regex(/^\d{1,10}$/, 'postId must be a number')
+    .transform(Number)
+    .optional(),
 });
 
 /**

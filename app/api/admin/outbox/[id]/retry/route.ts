@@ -9,7 +9,8 @@ export const dynamic = 'force-dynamic';
 export async function POST(request: Request, { params }: { params: Promise<{ id: string }> }) {
   return guarded(request, 'mail.outbox', async () => {
     const id = idParam((await params).id);
-    if (id === undefined || !(await retryFailed(id))) return apiError(404, 'There is no failed message with that number.', 'id', 'not_found');
+    if (id === undefined || !(await retryFailed(id)))
+      return apiError(404, 'There is no failed message with that number.', 'id', 'not_found');
     return NextResponse.json({ id, status: 'pending' });
   });
 }
