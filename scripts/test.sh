@@ -19,6 +19,7 @@ step() { log "$1"; shift; "$@" || { failed=1; log "FAILED: $*"; }; }
 step "typecheck" npx tsc --noEmit
 step "typecheck lib/ (noUncheckedIndexedAccess)" npx tsc -p lib --noEmit
 step "lint" npx eslint . --max-warnings=0
+step "format (prettier --check)" npx prettier --check . --log-level=warn
 step "reset test database" npx tsx scripts/reset-db.ts
 step "unit and integration tests (vitest)" npx vitest run --reporter=default --reporter=json --outputFile=.data/reports/vitest.json
 step "build" npx next build
