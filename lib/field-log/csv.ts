@@ -284,7 +284,7 @@ function exportRow(e: EntryView): string[] {
     predicted_flow_l_min: lmin(e.performance.predictedDeliveredFlowM3s),
     lift_ratio: num(e.performance.liftRatio),
   };
-  return EXPORT_COLUMNS.map((c) => r[c]);
+  return EXPORT_COLUMNS.map((c) => r[c] ?? '');
 }
 
 const UNPARSE = { newline: '\r\n', escapeFormulae: true } as const;

@@ -56,11 +56,11 @@ export function newNonce(): string {
 export function inlineScriptHashes(html: string): string[] {
   const out = new Set<string>();
   for (const m of html.matchAll(/<script\b([^>]*)>([\s\S]*?)<\/script>/gi)) {
-    const attrs = m[1];
+    const [, attrs = '', code = ''] = m;
     if (/\bsrc\s*=/i.test(attrs)) continue;
     const type = /\btype\s*=\s*["']?([^"'\s>]+)/i.exec(attrs)?.[1]?.toLowerCase();
     if (type && type !== 'text/javascript' && type !== 'module' && type !== 'application/javascript') continue;
-    out.add(`sha256-${createHash('sha256').update(m[2], 'utf8').digest('base64')}`);
+    out.add(`sha256-${createHash('sha256').update(code, 'utf8').digest('base64')}`);
   }
   return [...out];
 }
@@ -72,5 +72,6 @@ export const HSTS = 'max-age=63072000; includeSubDomains';
 export function servedOverHttps(url: URL, headers: Headers): boolean {
   if (url.protocol === 'https:') return true;
   if ((process.env.SITE_URL ?? '').startsWith('https://')) return true;
-  return (headers.get('x-forwarded-proto') ?? '').split(',')[0].trim().toLowerCase() === 'https';
+  const [nearest = ''] = (headers.get('x-forwarded-proto') ?? '').split(',');
+  return nearest.trim().toLowerCase() === 'https';
 }

@@ -67,7 +67,8 @@ export function crossSiteRefusal(request: Request): Response | undefined {
 export function isJsonContentType(request: Request): boolean {
   const type = request.headers.get('content-type');
   if (!type) return false;
-  return type.split(';')[0].trim().toLowerCase() === 'application/json';
+  const [mediaType = ''] = type.split(';');
+  return mediaType.trim().toLowerCase() === 'application/json';
 }
 
 /**

@@ -281,7 +281,7 @@ describe('bad input answers 4xx naming the field (issue 17, item 9)', () => {
       (await call(createEntry, 'POST', '/api/field-log', 'sorrel_cabin', { ...entry, testedOn: '2024-02-29' })).status,
     ).toBe(201);
 
-    const fixture = readFileSync(path.join(__dirname, 'fixtures/field-log-import.csv'), 'utf8').split('\n');
+    const fixture = readFileSync(path.join(__dirname, '../support/fixtures/field-log-import.csv'), 'utf8').split('\n');
     const good = fixture[1];
     const csv = [
       fixture[0],

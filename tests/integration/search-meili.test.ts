@@ -80,15 +80,18 @@ describe('the Meilisearch adapter against a fake server gives the in-process res
   });
 
   // Both rank by words, then title/tag matches; their last tie-breaks differ (Meilisearch's
-  // proximity and document order against our rarity of the matched terms), so the first
-  // result and the whole set of matches are compared exactly, the rest of the order not.
+  // proximity and document order against our rarity of the matched terms). Two sections
+  // can tie on words and title matches (two parts of one guide that both name every
+  // word), and then either may come first: so each engine's first result must be among
+  // the other's first three, and the whole set of matches must be the same.
   it('returns the same top results and the same matches as flexsearch for each query', async () => {
     for (const q of QUERIES) {
       const key = JSON.stringify(q);
       const top = await topIds(q, 3);
       const expected = flexTop.get(key)!;
       expect(top.length, key).toBeGreaterThan(0);
-      expect(top[0], key).toBe(expected[0]);
+      expect(expected, key).toContain(top[0]);
+      expect(top, key).toContain(expected[0]);
       expect(await matches(q), key).toEqual(flexAll.get(key));
     }
   });
