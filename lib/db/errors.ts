@@ -41,3 +41,17 @@ export function isDatabaseUnavailable(err: unknown): boolean {
   }
   return false;
 }
+
+/**
+ * A deadlock or lock-wait timeout (MariaDB 1213 / 1205): InnoDB rolled the transaction
+ * back and says to restart it. Work that is safe to repeat (a claim, a counter) retries.
+ */
+export function isLockConflict(err: unknown): boolean {
+  let cur: unknown = err;
+  for (let depth = 0; cur && depth < 5; depth++) {
+    const e = cur as { errno?: number; parent?: unknown; original?: unknown; cause?: unknown };
+    if (e.errno === 1213 || e.errno === 1205) return true;
+    cur = e.parent ?? e.original ?? e.cause;
+  }
+  return false;
+}

@@ -3,6 +3,7 @@ import { createHash } from 'node:crypto';
 import { col, fn, Op, QueryTypes, type Transaction } from 'sequelize';
 import type { MailStatus } from '@/models/MailMessage';
 import { getSequelize } from '@/lib/db';
+import { isLockConflict } from '@/lib/db/errors';
 import { initModels } from '@/models';
 import { getTransport, mailFrom } from './transport';
 
@@ -91,8 +92,24 @@ export function kickOutbox(): void {
   kick.unref?.();
 }
 
-/** Claims up to `limit` due messages for this worker; rows another worker holds are skipped, not waited for. */
+/**
+ * Claims up to `limit` due messages for this worker; rows another worker holds are
+ * skipped, not waited for. Two workers claiming at once can still meet in InnoDB's
+ * index locks (the claim moves rows between status values) and one is rolled back as
+ * a deadlock: a claim changes nothing until it commits, so it simply runs again.
+ */
 async function claim(limit: number, now: Date): Promise<number[]> {
+  for (let attempt = 1; ; attempt++) {
+    try {
+      return await claimOnce(limit, now);
+    } catch (err) {
+      if (attempt >= 5 || !isLockConflict(err)) throw err;
+      await new Promise((resolve) => setTimeout(resolve, 20 * attempt + Math.random() * 30));
+    }
+  }
+}
+
+async function claimOnce(limit: number, now: Date): Promise<number[]> {
   return getSequelize().transaction(async (transaction) => {
     const rows = await getSequelize().query<{ id: number }>(
       `SELECT id FROM mail_outbox
