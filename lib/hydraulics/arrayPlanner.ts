@@ -134,8 +134,8 @@ export interface ArrayPlannerResults {
  * r.pumps[1].fittingHeadLossM  // ≈ 0.097
  * r.pumps[1].fittingHeadLossM / 1.2192  // ≈ 0.08
  * // its lift ratio against H_eff rises, so its typical efficiency falls too
- * r.pumps[1].deliveredFlowM3s / r.pumps[0].deliveredFlowM3s  // ≈ 0.89
- * r.gainOverFirstPump  // ≈ 1.89
+ * r.pumps[1].deliveredFlowM3s / r.pumps[0].deliveredFlowM3s  // ≈ 0.874
+ * r.gainOverFirstPump  // ≈ 1.870
  */
 export function planArray(input: ArrayPlannerInput): CalcOutput<ArrayPlannerResults> {
   const v = parseInput(arrayPlannerSchema, input);

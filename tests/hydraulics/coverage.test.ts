@@ -21,9 +21,9 @@ describe('warning codes', () => {
     // yield estimate
     collect(estimateYield({ driveFlowM3s: 1e-4, fallM: 0.3, liftM: 3 })); // fall-below-minimum (0.3 m < 0.5 m)
     collect(estimateYield({ driveFlowM3s: 1e-4, fallM: 2, liftM: 3 })); // lift-ratio-low (1.5 < 2)
-    collect(estimateYield({ driveFlowM3s: 1e-4, fallM: 1, liftM: 50 })); // lift-ratio-beyond-range (50 > 40)
+    collect(estimateYield({ driveFlowM3s: 1e-4, fallM: 1, liftM: 50 })); // lift-ratio-beyond-range (50 > 26, Building Trades Pocketbook)
     collect(estimateYield({ driveFlowM3s: 1e-4, fallM: 1, liftM: 7, efficiency: 0.95 })); // efficiency-above-typical
-    collect(estimateYield({ driveFlowM3s: gpm(2), fallM: FALL, liftM: LIFT, measuredDeliveredFlowM3s: mlPerMin(150) })); // efficiency-below-typical
+    collect(estimateYield({ driveFlowM3s: gpm(2), fallM: FALL, liftM: LIFT, measuredDeliveredFlowM3s: mlPerMin(100) })); // efficiency-below-typical (η 0.096 < homemade low 0.138, efficiency.ts)
     // array planner
     collect(planArray({ fallM: FALL, liftM: LIFT, pumps: [half(), half()], deliveryLine: deliveryLine(), sourceSpareFlowM3s: gpm(3) })); // drive-exceeds-source, diversion-rules
     collect(planArray({ fallM: FALL, liftM: LIFT, pumps: [half(), half()], deliveryLine: deliveryLine(), sourceSpareFlowM3s: gpm(4.2) })); // drive-near-source-limit (95 %)
@@ -71,10 +71,10 @@ describe('stall-check causes', () => {
   const scenarios: Record<StallCauseCode, StallCheckInput> = {
     'drive-pipe-outside-range': { site: { ...base, drivePipe: { ...drivePipe('1/2'), lengthM: ft(2) } }, symptoms: ['never-starts'] }, // L/H = 0.5
     'drive-flow-above-source': { site: { ...base, driveFlowM3s: gpm(2), pumpCount: 2, sourceSpareFlowM3s: gpm(3) }, symptoms: ['stops-after-some-beats'] },
-    'lift-too-high': { site: { ...base, fallM: 1, liftM: 45 }, symptoms: ['weak-delivery'] }, // h/H = 45 > 40
+    'lift-too-high': { site: { ...base, fallM: 1, liftM: 45 }, symptoms: ['weak-delivery'] }, // h/H = 45 > 26 (Building Trades Pocketbook)
     'flexible-drive-pipe': { site: { ...base, drivePipe: drivePipe('1/2', 'hdpe-dr11') }, symptoms: ['weak-delivery'] },
     'waste-valve-setting': { site: { ...base, beatsPerMinute: 200 }, symptoms: ['never-starts'] }, // 200 > 120
-    'delivery-valve-or-snifter': { site: { ...base, driveFlowM3s: gpm(2), deliveredFlowM3s: mlPerMin(150) }, symptoms: ['weak-delivery'] },
+    'delivery-valve-or-snifter': { site: { ...base, driveFlowM3s: gpm(2), deliveredFlowM3s: mlPerMin(100) }, symptoms: ['weak-delivery'] }, // η 0.096 < homemade low 0.138
     'air-in-drive-pipe': { site: { ...base, intakeSubmergenceM: 0.01 }, symptoms: ['spits-air'] },
     'flooded-waste-outlet': { site: { ...base, wasteOutletSubmerged: true }, symptoms: ['never-starts'] },
     debris: { site: { ...base, screenAtIntake: false }, symptoms: ['weak-delivery'] },
