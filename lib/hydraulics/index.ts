@@ -31,8 +31,10 @@ export { FITTING_K, sumK } from './fittings';
 export { colebrook, darcyHeadLoss, frictionFactor, hazenWilliamsHeadLoss, swameeJain } from './friction';
 export { joukowskyHead, joukowskySurge, slowClosureSurge, waveRoundTrip, waveSpeed } from './transients';
 export {
-  EFFICIENCY_BANDS, dAubuissonEfficiency, efficiencyBand, rankineEfficiency, type BandAtRatio, type PumpType,
+  EFFICIENCY_BANDS, EFFICIENCY_SOURCES, dAubuissonEfficiency, efficiencyBand, maxLiftRatio, rankineEfficiency,
+  type BandAtRatio, type EfficiencySource, type PumpType,
 } from './efficiency';
+export { estimateShutOffPressure, shutOffPressure, shutOffSchema, type ShutOffResults } from './shutOff';
 export { estimateDriveFlow } from './ramCycle';
 export { typicalDriveFlow } from './pumpSizes';
 export { vNotch90Usbr, vNotchFlow, weirCoefficients } from './weirs';
