@@ -26,6 +26,9 @@ export {
   type NominalSize, type PipeMaterial, type PipeSeries,
 } from './pipes';
 export { FITTING_K, sumK } from './fittings';
+export {
+  PE_HDS_PSI, VINSON, hoopStress, jointRating, peRating, pvcCyclesToFailure, pvcFatigue, type JointRating, type PeGrade, type PvcFatigue,
+} from './pipeRatings';
 
 // Formulas the calculators are built from, checked on their own by the tests.
 export { colebrook, darcyHeadLoss, frictionFactor, hazenWilliamsHeadLoss, swameeJain } from './friction';
@@ -43,7 +46,10 @@ export { householdRate, livestockRates, type LivestockKind } from './demandRates
 // The seven calculators: input schema, run function and results.
 export { estimateYield, yieldEstimateSchema, type YieldEstimateResults } from './yieldEstimate';
 export { planArray, arrayPlannerSchema, type ArrayPlannerResults } from './arrayPlanner';
-export { DRIVE_PIPE_GUIDES, checkDrivePipe, drivePipeCheckSchema, type DrivePipeCheckResults } from './drivePipeCheck';
+export {
+  BEATS_PER_MINUTE_RANGE, DRIVE_PIPE_GUIDES, FATIGUE_DESIGN_LIFE_YEARS, RATING_MARGIN, checkDrivePipe, drivePipeCheckSchema,
+  type DrivePipeCheckResults,
+} from './drivePipeCheck';
 export { checkDeliveryLine, deliveryLineSchema, type DeliveryLineResults } from './deliveryLine';
 export { measureSourceFlow, sourceFlowSchema, type SourceFlowResults } from './sourceFlow';
 export { planDemandAndStorage, demandAndStorageSchema, type DemandAndStorageResults } from './demandAndStorage';

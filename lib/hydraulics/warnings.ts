@@ -49,6 +49,9 @@ const CATALOGUE = {
   'surge-margin-low': ['caution', 'the-drive-pipe'],
   'flexible-drive-pipe': ['caution', 'the-drive-pipe'],
   'valve-closure-slow': ['info', 'how-a-ram-pump-works'],
+  'shut-off-exceeds-rating': ['danger', 'first-start-and-tuning'],
+  'threaded-joint-refused': ['danger', 'the-drive-pipe'],
+  'fatigue-life-short': ['caution', 'the-drive-pipe'],
   // delivery line
   'delivery-loss-high': ['caution', 'the-delivery-line'],
   'delivery-velocity-high': ['caution', 'the-delivery-line'],
@@ -88,6 +91,9 @@ export const WARNING_INFO: Record<WarningCode, { severity: Severity; guide: Guid
 const SAFETY: ReadonlySet<WarningCode> = new Set<WarningCode>([
   'surge-exceeds-rating',
   'surge-margin-low',
+  'shut-off-exceeds-rating',
+  'threaded-joint-refused',
+  'fatigue-life-short',
   'delivery-pressure-above-rating',
   'drinking-water-untreated',
   'diversion-rules',

@@ -42,6 +42,8 @@ describe('warning codes', () => {
     collect(checkDrivePipe({ fallM: FALL, drivePipe: { ...pipe1, pressureRatingPa: toSI(150, 'psi', 'pressure') } })); // surge-margin-low (peak ≈ 126 psi)
     collect(checkDrivePipe({ fallM: FALL, drivePipe: drivePipe('1', 'hdpe-dr11') })); // flexible-drive-pipe
     collect(checkDrivePipe({ fallM: FALL, drivePipe: pipe1, valveClosureTimeS: 0.5 })); // valve-closure-slow (0.5 s > 2L/c ≈ 0.022 s)
+    collect(checkDrivePipe({ fallM: FALL, drivePipe: { ...pipe1, pressureRatingPa: toSI(100, 'psi', 'pressure') } })); // shut-off-exceeds-rating (≈ 126 psi > 100)
+    collect(checkDrivePipe({ fallM: FALL, drivePipe: pipe1, series: 'pvc-sch40', joints: 'threaded' })); // threaded-joint-refused, fatigue-life-short (≈ 5 years)
     // delivery line
     const p34 = resolvePipe('pvc-sch40', '3/4');
     collect(checkDeliveryLine({ flowM3s: 0.01, liftM: 10, targetLossM: 0.01, line: { lengthM: 5000, insideDiameterM: p34.insideDiameterM, material: 'pvc' } })); // delivery-loss-high, no-standard-pipe-meets-target, delivery-velocity-high
