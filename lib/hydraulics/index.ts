@@ -25,6 +25,10 @@ export {
   NOMINAL_LABELS, NOMINAL_SIZES, PIPE_SERIES, defaultSeries, parseNominalSize, resolvePipe,
   type NominalSize, type PipeMaterial, type PipeSeries,
 } from './pipes';
+export {
+  METRIC_ODS_MM, METRIC_PIPE_SOURCES, METRIC_SERIES, defaultSeriesFor, nominalPressureBar, resolveMetricPipe,
+  type MetricOd, type MetricPipeSpec, type MetricSeries,
+} from './metricPipes';
 export { FITTING_K, sumK } from './fittings';
 export {
   PE_HDS_PSI, VINSON, hoopStress, jointRating, peRating, pvcCyclesToFailure, pvcFatigue, type JointRating, type PeGrade, type PvcFatigue,
