@@ -13,6 +13,7 @@ import {
 import { DEFAULT_CLOSURE_RATIO } from './ramCycle';
 import { addRangeIssue, efficiency, fallM, flowM3s, liftM, parseInput, siNumber, waterTempC } from './schemaKit';
 import { finish, step, tq, type CalcOutput, type Step, type Warning } from './steps';
+import { PRACTICE } from './practice';
 import { warn } from './warnings';
 import { waterProperties } from './water';
 
@@ -204,8 +205,8 @@ export function planArray(input: ArrayPlannerInput): CalcOutput<ArrayPlannerResu
       `\\frac{${tq(totalDrive, 'm³/s')}}{${tq(v.sourceSpareFlowM3s, 'm³/s')}}`, sourceShare, ''));
     if (sourceShare > 1) {
       warnings.push(warn('drive-exceeds-source', `The pumps need ${(totalDrive * 6e4).toFixed(1)} L/min of drive water but the source spares ${(v.sourceSpareFlowM3s * 6e4).toFixed(1)} L/min. The intake will draw down, suck air and the pumps will stop; run fewer pumps or smaller ones.`));
-    } else if (sourceShare > 0.9) {
-      warnings.push(warn('drive-near-source-limit', `The pumps use ${(sourceShare * 100).toFixed(0)} % of what the source spares; in a dry spell the intake may draw air.`));
+    } else if (sourceShare > PRACTICE.sourceShareCaution.value) {
+      warnings.push(warn('drive-near-source-limit', `The pumps use ${(sourceShare * 100).toFixed(0)} % of the source flow given, more than the ${PRACTICE.sourceShareCaution.value * 100} % the engine allows for (${PRACTICE.sourceShareCaution.source}); in a dry spell the intake may draw air.`));
     }
     warnings.push(warn('diversion-rules', `This plan takes ${(totalDrive * 6e4).toFixed(1)} L/min through the pumps (most of it returns below them); local rules decide how much may be diverted and whether a permit is needed.`));
   }

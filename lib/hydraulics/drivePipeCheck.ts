@@ -14,36 +14,33 @@ import { DEFAULT_ENTRANCE_K, DEFAULT_PUMP_LOSS_K, fullFlowVelocity } from './ram
 import { addRangeIssue, fallM, flowM3s, liftM, parseInput, siNumber, waterTempC } from './schemaKit';
 import { finish, step, tq, type CalcOutput, type Step, type Warning } from './steps';
 import { joukowskySurge, slowClosureSurge, waveRoundTrip, waveSpeed } from './transients';
+import { PRACTICE } from './practice';
 import { warn } from './warnings';
 import { G, waterProperties } from './water';
 
 /**
- * Published guidance on drive-pipe length. The sources disagree; all are
- * shown so the reader sees where a pipe sits against each.
- * L/H 3–12: the range given across US extension publications on ram pumps (from memory).
- * L/H 5–12: the narrower range in several ram handbooks (from memory).
- * L/D 150–1000: Calvert's drive-pipe tests as cited in ram handbooks (from memory).
- * None of the three was found in the published references searched, so each stays
- * "from memory" until a reader can cite it.
+ * Guidance on drive-pipe length, one rule each: L/H 5–10 (PRACTICE: the range
+ * ram guides repeat; no published source found) and L/D 150–1000 (Calvert's
+ * drive-pipe tests as cited in ram handbooks, from memory). The Building
+ * Trades Pocketbook's 25–50 ft of drive pipe is the one published length
+ * found; it is returned beside them (PRACTICE.driveLengthMinM/MaxM).
  */
 export const DRIVE_PIPE_GUIDES = [
-  { id: 'length-to-fall-extension', ratio: 'L/H', min: 3, max: 12, source: 'US extension publications on ram pumps (from memory)' },
-  { id: 'length-to-fall-handbooks', ratio: 'L/H', min: 5, max: 12, source: 'ram pump handbooks (from memory)' },
+  { id: 'length-to-fall', ratio: 'L/H', min: PRACTICE.driveLengthToFallMin.value, max: PRACTICE.driveLengthToFallMax.value, source: PRACTICE.driveLengthToFallMin.source },
   { id: 'length-to-diameter', ratio: 'L/D', min: 150, max: 1000, source: 'Calvert, drive-pipe experiments, as cited in ram handbooks (from memory)' },
 ] as const;
 
-/**
- * Margin wanted between the weakest rating and the peak: 1.5. Common practice,
- * no published source found for a ram drive pipe; shown as such.
- */
-export const RATING_MARGIN = { value: 1.5, source: 'common practice, no published source found' } as const;
+/** Margin wanted between the weakest rating and the peak (PRACTICE.ratingMargin: common practice, no published source found). */
+export const RATING_MARGIN = PRACTICE.ratingMargin;
 
 /**
  * Beats per minute assumed for the fatigue life when none is given: 60, inside
- * the 40–120 a small ram usually beats at (common practice, no published source found).
+ * the 40–120 a small ram usually beats at (PRACTICE: common practice, no published source found).
  */
 export const DEFAULT_BEATS_PER_MINUTE = 60;
-export const BEATS_PER_MINUTE_RANGE = { min: 40, max: 120, source: 'common practice, no published source found' } as const;
+export const BEATS_PER_MINUTE_RANGE = {
+  min: PRACTICE.beatsPerMinuteMin.value, max: PRACTICE.beatsPerMinuteMax.value, source: PRACTICE.beatsPerMinuteMin.source,
+} as const;
 
 /** Design life a PVC drive pipe's fatigue life is held against, years (common practice, no published source found). */
 export const FATIGUE_DESIGN_LIFE_YEARS = 50;
@@ -199,15 +196,13 @@ export function checkDrivePipe(input: DrivePipeCheckInput): CalcOutput<DrivePipe
     const value = g.ratio === 'L/H' ? lh : ld;
     return { id: g.id, ratio: g.ratio, min: g.min, max: g.max, value, within: value >= g.min && value <= g.max, source: g.source };
   });
-  const lhGuides = guides.filter((g) => g.ratio === 'L/H');
-  if (lhGuides.every((g) => lh < g.min)) {
-    warnings.push(warn('drive-length-short-for-fall', `The drive pipe is ${lh.toFixed(1)} times the fall; the guides ask for at least ${Math.min(...lhGuides.map((g) => g.min))}. A short pipe returns the pressure wave too soon for a strong beat.`));
-  } else if (lhGuides.every((g) => lh > g.max)) {
-    warnings.push(warn('drive-length-long-for-fall', `The drive pipe is ${lh.toFixed(1)} times the fall, longer than the ${Math.max(...lhGuides.map((g) => g.max))} the guides suggest; friction eats the fall and the beat slows. Consider a standpipe or a larger bore.`));
-  } else if (lhGuides.some((g) => !g.within)) {
-    const ok = lhGuides.filter((g) => g.within).map((g) => `${g.min}–${g.max}`).join(', ');
-    const not = lhGuides.filter((g) => !g.within).map((g) => `${g.min}–${g.max}`).join(', ');
-    warnings.push(warn('drive-guides-disagree', `At ${lh.toFixed(1)} times the fall the drive pipe is inside the ${ok} range of some guides but outside the ${not} of others; sources disagree here, so watch the beat.`));
+  const lhMin = PRACTICE.driveLengthToFallMin.value;
+  const lhMax = PRACTICE.driveLengthToFallMax.value;
+  const rule = `${lhMin}–${lhMax} times the fall (${PRACTICE.driveLengthToFallMin.source})`;
+  if (lh < lhMin) {
+    warnings.push(warn('drive-length-short-for-fall', `The drive pipe is ${lh.toFixed(1)} times the fall; the engine asks for ${rule}. A short pipe returns the pressure wave too soon for a strong beat.`));
+  } else if (lh > lhMax) {
+    warnings.push(warn('drive-length-long-for-fall', `The drive pipe is ${lh.toFixed(1)} times the fall, longer than the engine's ${rule}; friction eats the fall and the beat slows. Consider a standpipe or a larger bore.`));
   }
   if (ld < 150) warnings.push(warn('drive-ld-low', `The drive pipe is only ${ld.toFixed(0)} bores long (guide: 150–1000); too little water mass to drive a strong beat.`));
   if (ld > 1000) warnings.push(warn('drive-ld-high', `The drive pipe is ${ld.toFixed(0)} bores long (guide: 150–1000); friction will rob the fall — a larger bore suits this length.`));
@@ -251,7 +246,7 @@ export function checkDrivePipe(input: DrivePipeCheckInput): CalcOutput<DrivePipe
   if (peak > rating) {
     warnings.push(warn('surge-exceeds-rating', `A sudden stop from full flow can reach ${kPa(peak)}, above the pipe's rating of ${kPa(rating)}; the drive pipe or its fittings can burst.`));
   } else if (margin < v.requiredMargin) {
-    warnings.push(warn('surge-margin-low', `The peak of ${kPa(peak)} leaves a margin of only ${margin.toFixed(2)} on the ${kPa(rating)} rating (wanted ${v.requiredMargin}); the pipe sees this surge at every beat, and fatigue adds up.`));
+    warnings.push(warn('surge-margin-low', `The peak of ${kPa(peak)} leaves a margin of only ${margin.toFixed(2)} on the ${kPa(rating)} rating (wanted ${v.requiredMargin}; ${RATING_MARGIN.source}); the pipe sees this surge at every beat, and fatigue adds up.`));
   }
   const vClose = v.closureVelocityMs ?? v0;
   const shutOff = shutOffPressure(rho, H, L, c, vClose, v.valveClosureTimeS);

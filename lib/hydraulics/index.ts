@@ -42,8 +42,9 @@ export {
   type BandAtRatio, type EfficiencySource, type PumpType,
 } from './efficiency';
 export { estimateShutOffPressure, shutOffPressure, shutOffSchema, type ShutOffResults } from './shutOff';
-export { estimateDriveFlow } from './ramCycle';
-export { typicalDriveFlow } from './pumpSizes';
+export { RAM_CYCLE_SOURCES, estimateDriveFlow } from './ramCycle';
+export { PRACTICE, fallRarelyViable, type PracticeRule } from './practice';
+export { PUMP_SIZE_SOURCE, typicalDriveFlow } from './pumpSizes';
 export { vNotch90Usbr, vNotchFlow, weirCoefficients } from './weirs';
 export { householdRate, livestockRates, type LivestockKind } from './demandRates';
 

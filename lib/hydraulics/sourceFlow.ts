@@ -6,6 +6,7 @@
 import * as z from 'zod/mini';
 import { flowM3s, parseInput, siNumber } from './schemaKit';
 import { finish, step, tq, type CalcOutput, type Step, type Warning } from './steps';
+import { PRACTICE } from './practice';
 import { warn } from './warnings';
 import { WEIR_ANGLE_RANGE, fromFeet, toFeet, vNotch90Usbr, vNotchFlow, weirCoefficients, weirLimits } from './weirs';
 
@@ -175,8 +176,8 @@ export function measureSourceFlow(input: SourceFlowInput): CalcOutput<SourceFlow
     steps.push(step('Share of the flow the plan takes', '\\frac{Q_{plan}}{Q_{source}}', `\\frac{${tq(v.plannedDrawM3s, 'm³/s')}}{${tq(flow, 'm³/s')}}`, share, ''));
     if (share > 1) {
       warnings.push(warn('plan-exceeds-source', `The plan needs ${(share * 100).toFixed(0)} % of the measured flow; the intake will run dry and draw air. Measure again in the driest month and plan for less.`));
-    } else if (share > 0.5) {
-      warnings.push(warn('plan-takes-large-share', `The plan takes ${(share * 100).toFixed(0)} % of the measured flow; in a dry month the source may not keep up, and the reach between intake and waste outlet runs low.`));
+    } else if (share > PRACTICE.sourceShareCaution.value) {
+      warnings.push(warn('plan-takes-large-share', `The plan takes ${(share * 100).toFixed(0)} % of the measured flow, more than the ${PRACTICE.sourceShareCaution.value * 100} % the engine allows for (${PRACTICE.sourceShareCaution.source}); in a dry month the source may not keep up, and the reach between intake and waste outlet runs low.`));
     }
     warnings.push(warn('diversion-rules', `The plan takes ${(share * 100).toFixed(0)} % of the stream through the pumps (most returns below the pump). Local rules decide how much may be diverted, and whether water rights or a permit are needed.`));
   }

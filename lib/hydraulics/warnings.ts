@@ -44,7 +44,6 @@ const CATALOGUE = {
   'drive-length-long-for-fall': ['caution', 'the-drive-pipe'],
   'drive-ld-low': ['caution', 'the-drive-pipe'],
   'drive-ld-high': ['caution', 'the-drive-pipe'],
-  'drive-guides-disagree': ['info', 'the-drive-pipe'],
   'surge-exceeds-rating': ['danger', 'the-drive-pipe'],
   'surge-margin-low': ['caution', 'the-drive-pipe'],
   'flexible-drive-pipe': ['caution', 'the-drive-pipe'],

@@ -14,6 +14,7 @@ import {
 } from './efficiency';
 import { addRangeIssue, efficiency, fallM, flowM3s, liftM, parseInput, siNumber, waterTempC } from './schemaKit';
 import { finish, step, tq, type CalcOutput, type Step, type Warning } from './steps';
+import { PRACTICE, fallRarelyViable } from './practice';
 import { warn } from './warnings';
 import { G, waterProperties } from './water';
 
@@ -176,7 +177,7 @@ export function estimateYield(input: YieldEstimateInput): CalcOutput<YieldEstima
   }
 
   const maxLift = maxLiftRatio(pumpType) * H;
-  if (H < 0.5) warnings.push(warn('fall-below-minimum', `A fall of ${H.toFixed(2)} m is less than the 0.5 m most rams need to beat reliably (Water for the World RWS.4.D.5).`));
+  if (fallRarelyViable(H)) warnings.push(warn('fall-below-minimum', `A fall of ${H.toFixed(2)} m is at or below the ${PRACTICE.minFallM.value} m most rams need to beat reliably; such a site is rarely viable (${PRACTICE.minFallM.source}).`));
   if (r < 2) warnings.push(warn('lift-ratio-low', `The lift is only ${r.toFixed(1)} times the fall; the ram wastes most of its water for little height. Check whether a simpler gravity line or another pump suits better.`));
   if (band.typical <= 0) {
     warnings.push(warn('lift-ratio-beyond-range', `A lift of ${r.toFixed(1)} times the fall is beyond what a ${pumpType} ram is expected to manage (about ${maxLiftRatio(pumpType)} times, ${maxLift.toFixed(1)} m here). Look for more fall or lift in stages.`));

@@ -37,7 +37,6 @@ describe('warning codes', () => {
     collect(checkDrivePipe({ fallM: FALL, drivePipe: { ...pipe1, lengthM: 15 * FALL } })); // drive-length-long-for-fall (15 H)
     collect(checkDrivePipe({ fallM: 1, drivePipe: { ...pipe1, lengthM: 3 } })); // drive-ld-low (3 m / 26.6 mm = 113)
     collect(checkDrivePipe({ fallM: 2, drivePipe: { ...drivePipe('1/2'), lengthM: 20 } })); // drive-ld-high (1266)
-    collect(checkDrivePipe({ fallM: FALL, drivePipe: { ...pipe1, lengthM: 4 * FALL } })); // drive-guides-disagree (4 H: in 3–12, not 5–12)
     collect(checkDrivePipe({ fallM: 20, drivePipe: { ...pipe1, lengthM: 100, pressureRatingPa: toSI(100, 'psi', 'pressure') } })); // surge-exceeds-rating
     collect(checkDrivePipe({ fallM: FALL, drivePipe: { ...pipe1, pressureRatingPa: toSI(150, 'psi', 'pressure') } })); // surge-margin-low (peak ≈ 126 psi)
     collect(checkDrivePipe({ fallM: FALL, drivePipe: drivePipe('1', 'hdpe-dr11') })); // flexible-drive-pipe

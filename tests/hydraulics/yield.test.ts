@@ -88,3 +88,13 @@ describe('invalid input', () => {
     expect(() => estimateYield({ driveFlowM3s: 1e-4, fallM: 1, liftM: 10, measuredDeliveredFlowM3s: 2e-5 })).toThrow(/measuredDeliveredFlowM3s/);
   });
 });
+
+describe('least fall', () => {
+  it('warns at 0.5 m itself, not only below it', () => {
+    // Water for the World RWS.4.D.5 (from memory): 0.5 m is the least fall; issue 19 settles "at or below"
+    const at = estimateYield({ driveFlowM3s: 1e-4, fallM: 0.5, liftM: 3 });
+    expect(at.warnings.map((w) => w.code)).toContain('fall-below-minimum');
+    const above = estimateYield({ driveFlowM3s: 1e-4, fallM: 0.51, liftM: 3 });
+    expect(above.warnings.map((w) => w.code)).not.toContain('fall-below-minimum');
+  });
+});
