@@ -17,6 +17,14 @@ import { PRACTICE } from './practice';
 import { warn } from './warnings';
 import { waterProperties } from './water';
 
+/**
+ * Limits of the planner, one value each: up to 20 pumps listed one by one, and
+ * a staged search of up to 50 copies of the first pump, so the planner can say
+ * how many lower pumps a stage needs even past what a form lists. Both are
+ * common practice, no published source found.
+ */
+export const ARRAY_LIMITS = { pumps: 20, lowerCopies: 50, source: 'common practice, no published source found' } as const;
+
 export const arrayPumpSchema = z.object({
   label: z.optional(z.string().check(z.maxLength(60))),
   pumpType: z._default(z.enum(PUMP_TYPES), 'homemade'),
@@ -32,7 +40,7 @@ export const arrayPlannerSchema = z
     fallM: fallM(),
     /** lift from the pumps to the outlet of the shared delivery line (the tank, when staged), m */
     liftM: liftM(),
-    pumps: z.array(arrayPumpSchema).check(z.minLength(1), z.maxLength(20)),
+    pumps: z.array(arrayPumpSchema).check(z.minLength(1), z.maxLength(ARRAY_LIMITS.pumps)),
     deliveryLine: pipeRunSchema,
     /** flow the source can spare in the driest month, m³/s */
     sourceSpareFlowM3s: z.optional(flowM3s()),
@@ -268,7 +276,7 @@ function planStage(
   let needed = 0;
   const one = solveParallel([lower.pump], v.fallM, v.liftM, line, nu).combinedFlowM3s;
   const start = one > 0 ? Math.max(1, Math.ceil(Qu / one - 1e-9)) : 51;
-  for (let n = start; n <= 50; n++) {
+  for (let n = start; n <= ARRAY_LIMITS.lowerCopies; n++) {
     if (solveParallel([lower.pump], v.fallM, v.liftM, line, nu, [n]).combinedFlowM3s >= Qu * (1 - 1e-12)) {
       needed = n;
       break;
@@ -281,7 +289,7 @@ function planStage(
     warnings.push(warn('upper-pump-part-time', `The lower pumps fill the tank at ${(S * 6e4).toFixed(2)} L/min but the upper pump uses ${(Qu * 6e4).toFixed(2)} L/min; it can run only about ${(duty * 100).toFixed(0)} % of the time${needed > 0 ? `. About ${needed} lower pumps like ${lower.pump.label} would keep it running around the clock` : ''}.`));
   }
   if (needed === 0) {
-    warnings.push(warn('lower-stage-limit', 'Even 50 lower pumps like the first cannot supply the upper pump through this delivery line; its friction limits the stage. Use a larger line or a smaller upper pump.'));
+    warnings.push(warn('lower-stage-limit', `Even ${ARRAY_LIMITS.lowerCopies} lower pumps like the first cannot supply the upper pump through this delivery line; its friction limits the stage. Use a larger line or a smaller upper pump.`));
   }
   return {
     upperDriveFlowM3s: Qu,

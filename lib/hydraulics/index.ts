@@ -50,7 +50,7 @@ export { householdRate, livestockRates, type LivestockKind } from './demandRates
 
 // The seven calculators: input schema, run function and results.
 export { estimateYield, yieldEstimateSchema, type YieldEstimateResults } from './yieldEstimate';
-export { planArray, arrayPlannerSchema, type ArrayPlannerResults } from './arrayPlanner';
+export { ARRAY_LIMITS, planArray, arrayPlannerSchema, type ArrayPlannerResults } from './arrayPlanner';
 export {
   BEATS_PER_MINUTE_RANGE, DRIVE_PIPE_GUIDES, FATIGUE_DESIGN_LIFE_YEARS, RATING_MARGIN, checkDrivePipe, drivePipeCheckSchema,
   type DrivePipeCheckResults,
