@@ -7,8 +7,15 @@ import { PUMP_TYPES } from './efficiency';
 import { EngineInputError } from './errors';
 import { drivePipeSchema, pipeRunSchema } from './pipeSchemas';
 import {
-  arrayMaxLift, lineSpec, preparePump, pumpAtHead, pumpRuns, solveParallel,
-  type ParallelSolution, type PumpAtHead, type PumpInput,
+  arrayMaxLift,
+  lineSpec,
+  preparePump,
+  pumpAtHead,
+  pumpRuns,
+  solveParallel,
+  type ParallelSolution,
+  type PumpAtHead,
+  type PumpInput,
 } from './parallelPumps';
 import { DEFAULT_CLOSURE_RATIO } from './ramCycle';
 import { addRangeIssue, efficiency, fallM, flowM3s, liftM, parseInput, siNumber, waterTempC } from './schemaKit';
@@ -23,7 +30,11 @@ import { waterProperties } from './water';
  * how many lower pumps a stage needs even past what a form lists. Both are
  * common practice, no published source found.
  */
-export const ARRAY_LIMITS = { pumps: 20, lowerCopies: 50, source: 'common practice, no published source found' } as const;
+export const ARRAY_LIMITS = {
+  pumps: 20,
+  lowerCopies: 50,
+  source: 'common practice, no published source found',
+} as const;
 
 export const arrayPumpSchema = z.object({
   label: z.optional(z.string().check(z.maxLength(60))),
@@ -59,16 +70,26 @@ export const arrayPlannerSchema = z
     ),
     waterTempC: waterTempC(),
   })
-  .check(z.superRefine((v, ctx) => {
-    if (v.liftM <= v.fallM) {
-      addRangeIssue(ctx, ['liftM'], `must be greater than the fall (${v.fallM} m)`, { min: v.fallM, minExclusive: true, max: 1000, unit: 'm' });
-    }
-    if (v.staged && v.staged.upperLiftM <= v.staged.upperFallM) {
-      addRangeIssue(ctx, ['staged', 'upperLiftM'], `must be greater than the upper fall (${v.staged.upperFallM} m)`, {
-        min: v.staged.upperFallM, minExclusive: true, max: 1000, unit: 'm',
-      });
-    }
-  }));
+  .check(
+    z.superRefine((v, ctx) => {
+      if (v.liftM <= v.fallM) {
+        addRangeIssue(ctx, ['liftM'], `must be greater than the fall (${v.fallM} m)`, {
+          min: v.fallM,
+          minExclusive: true,
+          max: 1000,
+          unit: 'm',
+        });
+      }
+      if (v.staged && v.staged.upperLiftM <= v.staged.upperFallM) {
+        addRangeIssue(ctx, ['staged', 'upperLiftM'], `must be greater than the upper fall (${v.staged.upperFallM} m)`, {
+          min: v.staged.upperFallM,
+          minExclusive: true,
+          max: 1000,
+          unit: 'm',
+        });
+      }
+    }),
+  );
 
 export type ArrayPlannerInput = z.input<typeof arrayPlannerSchema>;
 
@@ -163,60 +184,160 @@ export function planArray(input: ArrayPlannerInput): CalcOutput<ArrayPlannerResu
 
   prepared.forEach((p) => {
     if (p.driveFlowEstimated) {
-      steps.push(step(`${p.label}: drive flow (estimated)`, 'Q = A\\,\\frac{x_a + x_d}{t_a + t_d}',
-        `Q \\approx ${tq(p.driveFlowM3s, 'm³/s')}`, p.driveFlowM3s, 'm³/s', 'flow',
-        'Rigid-column model of the beat (ramCycle.ts) for the straight drive pipe.'));
+      steps.push(
+        step(
+          `${p.label}: drive flow (estimated)`,
+          'Q = A\\,\\frac{x_a + x_d}{t_a + t_d}',
+          `Q \\approx ${tq(p.driveFlowM3s, 'm³/s')}`,
+          p.driveFlowM3s,
+          'm³/s',
+          'flow',
+          'Rigid-column model of the beat (ramCycle.ts) for the straight drive pipe.',
+        ),
+      );
     }
     if (p.fittingsK > 0) {
-      steps.push(step(`${p.label}: fittings in the drive pipe`, '\\Delta H = \\Sigma K\\,\\frac{v_c^2}{2g}',
-        `\\Delta H = ${tq(p.fittingsK)} \\times \\frac{(${tq(p.closureVelocityMs, 'm/s')})^2}{2 \\times 9.807\\,\\mathrm{m/s^2}}`,
-        p.fittingHeadLossM, 'm', 'length'));
-      steps.push(step(`${p.label}: effective fall`, 'H_{eff} = H - \\Delta H',
-        `H_{eff} = ${tq(H, 'm')} - ${tq(p.fittingHeadLossM, 'm')}`, p.effectiveFallM, 'm', 'length'));
+      steps.push(
+        step(
+          `${p.label}: fittings in the drive pipe`,
+          '\\Delta H = \\Sigma K\\,\\frac{v_c^2}{2g}',
+          `\\Delta H = ${tq(p.fittingsK)} \\times \\frac{(${tq(p.closureVelocityMs, 'm/s')})^2}{2 \\times 9.807\\,\\mathrm{m/s^2}}`,
+          p.fittingHeadLossM,
+          'm',
+          'length',
+        ),
+      );
+      steps.push(
+        step(
+          `${p.label}: effective fall`,
+          'H_{eff} = H - \\Delta H',
+          `H_{eff} = ${tq(H, 'm')} - ${tq(p.fittingHeadLossM, 'm')}`,
+          p.effectiveFallM,
+          'm',
+          'length',
+        ),
+      );
       const share = p.fittingHeadLossM / H;
       if (!pumpRuns(p, H)) {
-        warnings.push(warn('fittings-stop-pump', `The fittings in ${p.label}'s drive pipe (ΣK = ${p.fittingsK.toFixed(2)}) use up ${(share * 100).toFixed(0)} % of the fall; it will not beat. Straighten the drive pipe.`));
+        warnings.push(
+          warn(
+            'fittings-stop-pump',
+            `The fittings in ${p.label}'s drive pipe (ΣK = ${p.fittingsK.toFixed(2)}) use up ${(share * 100).toFixed(0)} % of the fall; it will not beat. Straighten the drive pipe.`,
+          ),
+        );
       } else {
-        warnings.push(warn('fitting-in-drive-pipe', `The fittings in ${p.label}'s drive pipe (ΣK = ${p.fittingsK.toFixed(2)}) cost about ${p.fittingHeadLossM.toFixed(3)} m of the ${H.toFixed(3)} m fall (${(share * 100).toFixed(1)} %) at the closing velocity of ${p.closureVelocityMs.toFixed(2)} m/s, and about as much of its delivery. Keep drive pipes straight.`));
+        warnings.push(
+          warn(
+            'fitting-in-drive-pipe',
+            `The fittings in ${p.label}'s drive pipe (ΣK = ${p.fittingsK.toFixed(2)}) cost about ${p.fittingHeadLossM.toFixed(3)} m of the ${H.toFixed(3)} m fall (${(share * 100).toFixed(1)} %) at the closing velocity of ${p.closureVelocityMs.toFixed(2)} m/s, and about as much of its delivery. Keep drive pipes straight.`,
+          ),
+        );
       }
     }
   });
 
-  steps.push(step('Losses in the shared delivery line at the combined flow',
-    'h_f = f\\,\\frac{L}{D}\\,\\frac{v^2}{2g} + \\Sigma K\\,\\frac{v^2}{2g}',
-    `h_f = ${tq(sol.loss.friction.f)} \\times \\frac{${tq(line.lengthM, 'm')}}{${tq(line.insideDiameterM, 'm')}} \\times \\frac{(${tq(sol.loss.velocityMs, 'm/s')})^2}{2g} + ${tq(line.sumK)}\\,\\frac{v^2}{2g}`,
-    sol.frictionHeadM + sol.minorHeadM, 'm', 'length'));
-  steps.push(step('Head at each pump', 'h_p = h + h_f', `h_p = ${tq(h, 'm')} + ${tq(sol.frictionHeadM + sol.minorHeadM, 'm')}`, sol.pumpHeadM, 'm', 'length'));
+  steps.push(
+    step(
+      'Losses in the shared delivery line at the combined flow',
+      'h_f = f\\,\\frac{L}{D}\\,\\frac{v^2}{2g} + \\Sigma K\\,\\frac{v^2}{2g}',
+      `h_f = ${tq(sol.loss.friction.f)} \\times \\frac{${tq(line.lengthM, 'm')}}{${tq(line.insideDiameterM, 'm')}} \\times \\frac{(${tq(sol.loss.velocityMs, 'm/s')})^2}{2g} + ${tq(line.sumK)}\\,\\frac{v^2}{2g}`,
+      sol.frictionHeadM + sol.minorHeadM,
+      'm',
+      'length',
+    ),
+  );
+  steps.push(
+    step(
+      'Head at each pump',
+      'h_p = h + h_f',
+      `h_p = ${tq(h, 'm')} + ${tq(sol.frictionHeadM + sol.minorHeadM, 'm')}`,
+      sol.pumpHeadM,
+      'm',
+      'length',
+    ),
+  );
   sol.pumps.forEach(({ pump: p, efficiency: eta, deliveredFlowM3s: q }) => {
-    steps.push(step(`${p.label}: delivery`, 'q_i = \\eta_i\\,Q_i\\,\\frac{H_{eff,i}}{h_p}',
-      `q_i = ${tq(eta)} \\times ${tq(p.driveFlowM3s, 'm³/s')} \\times \\frac{${tq(p.effectiveFallM, 'm')}}{${tq(sol.pumpHeadM, 'm')}}`,
-      q, 'm³/s', 'flow'));
+    steps.push(
+      step(
+        `${p.label}: delivery`,
+        'q_i = \\eta_i\\,Q_i\\,\\frac{H_{eff,i}}{h_p}',
+        `q_i = ${tq(eta)} \\times ${tq(p.driveFlowM3s, 'm³/s')} \\times \\frac{${tq(p.effectiveFallM, 'm')}}{${tq(sol.pumpHeadM, 'm')}}`,
+        q,
+        'm³/s',
+        'flow',
+      ),
+    );
   });
-  steps.push(step('Combined delivery', 'S = \\sum_i q_i', `S = ${sol.pumps.map((x) => tq(x.deliveredFlowM3s, 'm³/s')).join(' + ')}`, sol.combinedFlowM3s, 'm³/s', 'flow'));
+  steps.push(
+    step(
+      'Combined delivery',
+      'S = \\sum_i q_i',
+      `S = ${sol.pumps.map((x) => tq(x.deliveredFlowM3s, 'm³/s')).join(' + ')}`,
+      sol.combinedFlowM3s,
+      'm³/s',
+      'flow',
+    ),
+  );
 
   const alone = prepared.length === 1 ? sol : solveParallel([first.pump], H, h, line, nu);
   const gain = alone.combinedFlowM3s > 0 ? sol.combinedFlowM3s / alone.combinedFlowM3s : 0;
   const totalDrive = prepared.reduce((s, p) => s + (pumpRuns(p, H) ? p.driveFlowM3s : 0), 0);
   const maxLift = arrayMaxLift(prepared, H);
-  steps.push(step('Highest lift the array can reach', 'h_{max} = \\max_i\\; r_{max}\\,H_{eff,i}',
-    `h_{max} = ${tq(maxLift, 'm')}`, maxLift, 'm', 'length', 'Parallel pumps add flow, not height.'));
+  steps.push(
+    step(
+      'Highest lift the array can reach',
+      'h_{max} = \\max_i\\; r_{max}\\,H_{eff,i}',
+      `h_{max} = ${tq(maxLift, 'm')}`,
+      maxLift,
+      'm',
+      'length',
+      'Parallel pumps add flow, not height.',
+    ),
+  );
 
   const lossShare = (sol.frictionHeadM + sol.minorHeadM) / h;
   if (lossShare > 0.1) {
-    warnings.push(warn('delivery-friction-high', `The shared delivery line loses ${(sol.frictionHeadM + sol.minorHeadM).toFixed(2)} m at the combined flow, ${(lossShare * 100).toFixed(0)} % of the lift; every pump pushes against it. A larger line would let each pump deliver more.`));
+    warnings.push(
+      warn(
+        'delivery-friction-high',
+        `The shared delivery line loses ${(sol.frictionHeadM + sol.minorHeadM).toFixed(2)} m at the combined flow, ${(lossShare * 100).toFixed(0)} % of the lift; every pump pushes against it. A larger line would let each pump deliver more.`,
+      ),
+    );
   }
 
   let sourceShare: number | undefined;
   if (v.sourceSpareFlowM3s !== undefined) {
     sourceShare = totalDrive / v.sourceSpareFlowM3s;
-    steps.push(step('Drive flow against what the source can spare', '\\frac{\\Sigma Q}{Q_{spare}}',
-      `\\frac{${tq(totalDrive, 'm³/s')}}{${tq(v.sourceSpareFlowM3s, 'm³/s')}}`, sourceShare, ''));
+    steps.push(
+      step(
+        'Drive flow against what the source can spare',
+        '\\frac{\\Sigma Q}{Q_{spare}}',
+        `\\frac{${tq(totalDrive, 'm³/s')}}{${tq(v.sourceSpareFlowM3s, 'm³/s')}}`,
+        sourceShare,
+        '',
+      ),
+    );
     if (sourceShare > 1) {
-      warnings.push(warn('drive-exceeds-source', `The pumps need ${(totalDrive * 6e4).toFixed(1)} L/min of drive water but the source spares ${(v.sourceSpareFlowM3s * 6e4).toFixed(1)} L/min. The intake will draw down, suck air and the pumps will stop; run fewer pumps or smaller ones.`));
+      warnings.push(
+        warn(
+          'drive-exceeds-source',
+          `The pumps need ${(totalDrive * 6e4).toFixed(1)} L/min of drive water but the source spares ${(v.sourceSpareFlowM3s * 6e4).toFixed(1)} L/min. The intake will draw down, suck air and the pumps will stop; run fewer pumps or smaller ones.`,
+        ),
+      );
     } else if (sourceShare > PRACTICE.sourceShareCaution.value) {
-      warnings.push(warn('drive-near-source-limit', `The pumps use ${(sourceShare * 100).toFixed(0)} % of the source flow given, more than the ${PRACTICE.sourceShareCaution.value * 100} % the engine allows for (${PRACTICE.sourceShareCaution.source}); in a dry spell the intake may draw air.`));
+      warnings.push(
+        warn(
+          'drive-near-source-limit',
+          `The pumps use ${(sourceShare * 100).toFixed(0)} % of the source flow given, more than the ${PRACTICE.sourceShareCaution.value * 100} % the engine allows for (${PRACTICE.sourceShareCaution.source}); in a dry spell the intake may draw air.`,
+        ),
+      );
     }
-    warnings.push(warn('diversion-rules', `This plan takes ${(totalDrive * 6e4).toFixed(1)} L/min through the pumps (most of it returns below them); local rules decide how much may be diverted and whether a permit is needed.`));
+    warnings.push(
+      warn(
+        'diversion-rules',
+        `This plan takes ${(totalDrive * 6e4).toFixed(1)} L/min through the pumps (most of it returns below them); local rules decide how much may be diverted and whether a permit is needed.`,
+      ),
+    );
   }
 
   const results: ArrayPlannerResults = {
@@ -251,8 +372,14 @@ type Parsed = z.output<typeof arrayPlannerSchema>;
 
 /** The upper stage; `lower` is the first lower pump as it runs in the array. */
 function planStage(
-  v: Parsed, st: NonNullable<Parsed['staged']>, sol: ParallelSolution, lower: PumpAtHead, nu: number,
-  line: ReturnType<typeof lineSpec>, steps: Step[], warnings: Warning[],
+  v: Parsed,
+  st: NonNullable<Parsed['staged']>,
+  sol: ParallelSolution,
+  lower: PumpAtHead,
+  nu: number,
+  line: ReturnType<typeof lineSpec>,
+  steps: Step[],
+  warnings: Warning[],
 ): StagedResult {
   const upper = preparePump(st.upperPump as PumpInput, 0, st.upperFallM, st.upperLiftM, nu, v.closureRatio);
   upper.label = st.upperPump.label ?? 'upper pump';
@@ -265,12 +392,35 @@ function planStage(
   const S = sol.combinedFlowM3s;
   const duty = Math.min(1, S / Qu);
   const top = up.combinedFlowM3s * duty;
-  steps.push(step('Upper pump: delivery while running', 'q_u = \\eta_u\\,Q_u\\,\\frac{H_u}{h_u}',
-    `q_u = ${tq(upperAt.efficiency)} \\times ${tq(Qu, 'm³/s')} \\times \\frac{${tq(upper.effectiveFallM, 'm')}}{${tq(up.pumpHeadM, 'm')}}`,
-    up.combinedFlowM3s, 'm³/s', 'flow'));
-  steps.push(step('Share of the day the upper pump can run', 'd = \\min\\left(1, \\frac{S}{Q_u}\\right)',
-    `d = \\min\\left(1, \\frac{${tq(S, 'm³/s')}}{${tq(Qu, 'm³/s')}}\\right)`, duty, ''));
-  steps.push(step('Average yield at the top', '\\bar q_{top} = d\\,q_u', `\\bar q_{top} = ${tq(duty)} \\times ${tq(up.combinedFlowM3s, 'm³/s')}`, top, 'm³/s', 'flow'));
+  steps.push(
+    step(
+      'Upper pump: delivery while running',
+      'q_u = \\eta_u\\,Q_u\\,\\frac{H_u}{h_u}',
+      `q_u = ${tq(upperAt.efficiency)} \\times ${tq(Qu, 'm³/s')} \\times \\frac{${tq(upper.effectiveFallM, 'm')}}{${tq(up.pumpHeadM, 'm')}}`,
+      up.combinedFlowM3s,
+      'm³/s',
+      'flow',
+    ),
+  );
+  steps.push(
+    step(
+      'Share of the day the upper pump can run',
+      'd = \\min\\left(1, \\frac{S}{Q_u}\\right)',
+      `d = \\min\\left(1, \\frac{${tq(S, 'm³/s')}}{${tq(Qu, 'm³/s')}}\\right)`,
+      duty,
+      '',
+    ),
+  );
+  steps.push(
+    step(
+      'Average yield at the top',
+      '\\bar q_{top} = d\\,q_u',
+      `\\bar q_{top} = ${tq(duty)} \\times ${tq(up.combinedFlowM3s, 'm³/s')}`,
+      top,
+      'm³/s',
+      'flow',
+    ),
+  );
 
   // n copies deliver at most n × one pump alone, so start the search there.
   let needed = 0;
@@ -282,14 +432,32 @@ function planStage(
       break;
     }
   }
-  steps.push(step('Lower pumps needed to run the upper pump around the clock', 'n = \\min\\{n : S(n) \\ge Q_u\\}',
-    `S(n) \\ge ${tq(Qu, 'm³/s')}`, needed, '', undefined,
-    `Copies of ${lower.pump.label}, each delivering ${(lower.deliveredFlowM3s * 6e4).toFixed(3)} L/min here, into the same line.`));
+  steps.push(
+    step(
+      'Lower pumps needed to run the upper pump around the clock',
+      'n = \\min\\{n : S(n) \\ge Q_u\\}',
+      `S(n) \\ge ${tq(Qu, 'm³/s')}`,
+      needed,
+      '',
+      undefined,
+      `Copies of ${lower.pump.label}, each delivering ${(lower.deliveredFlowM3s * 6e4).toFixed(3)} L/min here, into the same line.`,
+    ),
+  );
   if (S < Qu) {
-    warnings.push(warn('upper-pump-part-time', `The lower pumps fill the tank at ${(S * 6e4).toFixed(2)} L/min but the upper pump uses ${(Qu * 6e4).toFixed(2)} L/min; it can run only about ${(duty * 100).toFixed(0)} % of the time${needed > 0 ? `. About ${needed} lower pumps like ${lower.pump.label} would keep it running around the clock` : ''}.`));
+    warnings.push(
+      warn(
+        'upper-pump-part-time',
+        `The lower pumps fill the tank at ${(S * 6e4).toFixed(2)} L/min but the upper pump uses ${(Qu * 6e4).toFixed(2)} L/min; it can run only about ${(duty * 100).toFixed(0)} % of the time${needed > 0 ? `. About ${needed} lower pumps like ${lower.pump.label} would keep it running around the clock` : ''}.`,
+      ),
+    );
   }
   if (needed === 0) {
-    warnings.push(warn('lower-stage-limit', `Even ${ARRAY_LIMITS.lowerCopies} lower pumps like the first cannot supply the upper pump through this delivery line; its friction limits the stage. Use a larger line or a smaller upper pump.`));
+    warnings.push(
+      warn(
+        'lower-stage-limit',
+        `Even ${ARRAY_LIMITS.lowerCopies} lower pumps like the first cannot supply the upper pump through this delivery line; its friction limits the stage. Use a larger line or a smaller upper pump.`,
+      ),
+    );
   }
   return {
     upperDriveFlowM3s: Qu,

@@ -98,28 +98,106 @@ export function checkDeliveryLine(input: DeliveryLineInput): CalcOutput<Delivery
 
   const loss = pipeLoss(Q, line.lengthM, D, eps, nu, k);
   const fr = loss.friction;
-  steps.push(step('Velocity', 'v = \\frac{4Q}{\\pi D^2}', `v = \\frac{4 \\times ${tq(Q, 'm³/s')}}{\\pi \\times (${tq(D, 'm')})^2}`, loss.velocityMs, 'm/s', 'velocity'));
-  steps.push(step('Reynolds number', 'Re = \\frac{v D}{\\nu}', `Re = \\frac{${tq(loss.velocityMs, 'm/s')} \\times ${tq(D, 'm')}}{${tq(nu, 'm²/s')}}`, loss.reynolds, ''));
+  steps.push(
+    step(
+      'Velocity',
+      'v = \\frac{4Q}{\\pi D^2}',
+      `v = \\frac{4 \\times ${tq(Q, 'm³/s')}}{\\pi \\times (${tq(D, 'm')})^2}`,
+      loss.velocityMs,
+      'm/s',
+      'velocity',
+    ),
+  );
+  steps.push(
+    step(
+      'Reynolds number',
+      'Re = \\frac{v D}{\\nu}',
+      `Re = \\frac{${tq(loss.velocityMs, 'm/s')} \\times ${tq(D, 'm')}}{${tq(nu, 'm²/s')}}`,
+      loss.reynolds,
+      '',
+    ),
+  );
   if (fr.regime === 'laminar') {
-    steps.push(step('Friction factor (laminar)', 'f = \\frac{64}{Re}', `f = \\frac{64}{${tq(loss.reynolds)}}`, fr.f, ''));
+    steps.push(
+      step('Friction factor (laminar)', 'f = \\frac{64}{Re}', `f = \\frac{64}{${tq(loss.reynolds)}}`, fr.f, ''),
+    );
   } else {
-    steps.push(step('Friction factor (Colebrook-White)', '\\frac{1}{\\sqrt f} = -2\\log_{10}\\left(\\frac{\\varepsilon}{3.7D} + \\frac{2.51}{Re\\sqrt f}\\right)',
-      `\\varepsilon/D = ${tq(eps / D)},\\; Re = ${tq(loss.reynolds)}`, fr.f, '', undefined,
-      fr.regime === 'transitional' ? 'Critical zone 2000 ≤ Re < 4000: blended between laminar and Colebrook.' : undefined));
-    steps.push(step('Friction factor (Swamee-Jain cross-check)', 'f = \\frac{0.25}{\\left[\\log_{10}\\left(\\frac{\\varepsilon}{3.7D} + \\frac{5.74}{Re^{0.9}}\\right)\\right]^2}',
-      `\\varepsilon/D = ${tq(eps / D)},\\; Re = ${tq(loss.reynolds)}`, fr.fSwameeJain, ''));
+    steps.push(
+      step(
+        'Friction factor (Colebrook-White)',
+        '\\frac{1}{\\sqrt f} = -2\\log_{10}\\left(\\frac{\\varepsilon}{3.7D} + \\frac{2.51}{Re\\sqrt f}\\right)',
+        `\\varepsilon/D = ${tq(eps / D)},\\; Re = ${tq(loss.reynolds)}`,
+        fr.f,
+        '',
+        undefined,
+        fr.regime === 'transitional'
+          ? 'Critical zone 2000 ≤ Re < 4000: blended between laminar and Colebrook.'
+          : undefined,
+      ),
+    );
+    steps.push(
+      step(
+        'Friction factor (Swamee-Jain cross-check)',
+        'f = \\frac{0.25}{\\left[\\log_{10}\\left(\\frac{\\varepsilon}{3.7D} + \\frac{5.74}{Re^{0.9}}\\right)\\right]^2}',
+        `\\varepsilon/D = ${tq(eps / D)},\\; Re = ${tq(loss.reynolds)}`,
+        fr.fSwameeJain,
+        '',
+      ),
+    );
   }
-  steps.push(step('Friction loss (Darcy-Weisbach)', 'h_f = f\\,\\frac{L}{D}\\,\\frac{v^2}{2g}',
-    `h_f = ${tq(fr.f)} \\times \\frac{${tq(line.lengthM, 'm')}}{${tq(D, 'm')}} \\times \\frac{(${tq(loss.velocityMs, 'm/s')})^2}{2 \\times 9.807\\,\\mathrm{m/s^2}}`,
-    loss.frictionHeadM, 'm', 'length'));
+  steps.push(
+    step(
+      'Friction loss (Darcy-Weisbach)',
+      'h_f = f\\,\\frac{L}{D}\\,\\frac{v^2}{2g}',
+      `h_f = ${tq(fr.f)} \\times \\frac{${tq(line.lengthM, 'm')}}{${tq(D, 'm')}} \\times \\frac{(${tq(loss.velocityMs, 'm/s')})^2}{2 \\times 9.807\\,\\mathrm{m/s^2}}`,
+      loss.frictionHeadM,
+      'm',
+      'length',
+    ),
+  );
   const hw = hazenWilliamsHeadLoss(Q, line.lengthM, D, C);
-  steps.push(step('Friction loss (Hazen-Williams, second opinion)', 'h_f = \\frac{10.67\\,L\\,Q^{1.852}}{C^{1.852}\\,D^{4.87}}',
-    `h_f = \\frac{10.67 \\times ${tq(line.lengthM, 'm')} \\times (${tq(Q, 'm³/s')})^{1.852}}{${tq(C)}^{1.852} \\times (${tq(D, 'm')})^{4.87}}`, hw, 'm', 'length'));
-  steps.push(step('Fitting losses', 'h_m = \\Sigma K\\,\\frac{v^2}{2g}', `h_m = ${tq(k)} \\times \\frac{(${tq(loss.velocityMs, 'm/s')})^2}{2g}`, loss.minorHeadM, 'm', 'length'));
+  steps.push(
+    step(
+      'Friction loss (Hazen-Williams, second opinion)',
+      'h_f = \\frac{10.67\\,L\\,Q^{1.852}}{C^{1.852}\\,D^{4.87}}',
+      `h_f = \\frac{10.67 \\times ${tq(line.lengthM, 'm')} \\times (${tq(Q, 'm³/s')})^{1.852}}{${tq(C)}^{1.852} \\times (${tq(D, 'm')})^{4.87}}`,
+      hw,
+      'm',
+      'length',
+    ),
+  );
+  steps.push(
+    step(
+      'Fitting losses',
+      'h_m = \\Sigma K\\,\\frac{v^2}{2g}',
+      `h_m = ${tq(k)} \\times \\frac{(${tq(loss.velocityMs, 'm/s')})^2}{2g}`,
+      loss.minorHeadM,
+      'm',
+      'length',
+    ),
+  );
   const total = h + loss.frictionHeadM + loss.minorHeadM;
-  steps.push(step('Head at the pump', 'h_p = h + h_f + h_m', `h_p = ${tq(h, 'm')} + ${tq(loss.frictionHeadM, 'm')} + ${tq(loss.minorHeadM, 'm')}`, total, 'm', 'length'));
+  steps.push(
+    step(
+      'Head at the pump',
+      'h_p = h + h_f + h_m',
+      `h_p = ${tq(h, 'm')} + ${tq(loss.frictionHeadM, 'm')} + ${tq(loss.minorHeadM, 'm')}`,
+      total,
+      'm',
+      'length',
+    ),
+  );
   const p = rho * G * total;
-  steps.push(step('Pressure at the pump', 'p = \\rho\\,g\\,h_p', `p = ${tq(rho, 'kg/m³')} \\times ${tq(G, 'm/s²')} \\times ${tq(total, 'm')}`, p, 'Pa', 'pressure'));
+  steps.push(
+    step(
+      'Pressure at the pump',
+      'p = \\rho\\,g\\,h_p',
+      `p = ${tq(rho, 'kg/m³')} \\times ${tq(G, 'm/s²')} \\times ${tq(total, 'm')}`,
+      p,
+      'Pa',
+      'pressure',
+    ),
+  );
 
   const target = v.targetLossM ?? PRACTICE.deliveryLossShare.value * h;
   const lossNow = loss.frictionHeadM + loss.minorHeadM;
@@ -134,37 +212,88 @@ export function checkDeliveryLine(input: DeliveryLineInput): CalcOutput<Delivery
     }
   }
   if (smallest) {
-    steps.push(step(`Smallest ${series} size with loss under ${target.toFixed(2)} m`, 'h_f + h_m \\le h_{target}',
-      `${smallest.nominal}\\text{ in: } ${tq(smallest.lossM, 'm')} \\le ${tq(target, 'm')}`, smallest.insideDiameterM, 'm', 'smallLength'));
+    steps.push(
+      step(
+        `Smallest ${series} size with loss under ${target.toFixed(2)} m`,
+        'h_f + h_m \\le h_{target}',
+        `${smallest.nominal}\\text{ in: } ${tq(smallest.lossM, 'm')} \\le ${tq(target, 'm')}`,
+        smallest.insideDiameterM,
+        'm',
+        'smallLength',
+      ),
+    );
   } else {
-    warnings.push(warn('no-standard-pipe-meets-target', `No ${series} size from ½" to 4" keeps the loss under ${target.toFixed(2)} m at this flow and length.`));
+    warnings.push(
+      warn(
+        'no-standard-pipe-meets-target',
+        `No ${series} size from ½" to 4" keeps the loss under ${target.toFixed(2)} m at this flow and length.`,
+      ),
+    );
   }
 
-  if (lossNow > target) warnings.push(warn('delivery-loss-high', `The line loses ${lossNow.toFixed(2)} m, more than the target of ${target.toFixed(2)} m (${((lossNow / h) * 100).toFixed(0)} % of the lift); the pump must push against it.${smallest ? ` ${smallest.nominal}" ${series} would keep it to ${smallest.lossM.toFixed(2)} m.` : ''}`));
-  if (loss.velocityMs > HIGH_VELOCITY) warnings.push(warn('delivery-velocity-high', `Water moves at ${loss.velocityMs.toFixed(2)} m/s, above the 1.5 m/s (5 ft/s) usual for plastic lines; losses and surges grow with speed.`));
-  if (fr.regime === 'transitional') warnings.push(warn('transitional-flow', `Re = ${loss.reynolds.toFixed(0)} lies between 2000 and 4000, where flow flips between laminar and turbulent; the friction factor is uncertain by tens of per cent.`));
+  if (lossNow > target)
+    warnings.push(
+      warn(
+        'delivery-loss-high',
+        `The line loses ${lossNow.toFixed(2)} m, more than the target of ${target.toFixed(2)} m (${((lossNow / h) * 100).toFixed(0)} % of the lift); the pump must push against it.${smallest ? ` ${smallest.nominal}" ${series} would keep it to ${smallest.lossM.toFixed(2)} m.` : ''}`,
+      ),
+    );
+  if (loss.velocityMs > HIGH_VELOCITY)
+    warnings.push(
+      warn(
+        'delivery-velocity-high',
+        `Water moves at ${loss.velocityMs.toFixed(2)} m/s, above the 1.5 m/s (5 ft/s) usual for plastic lines; losses and surges grow with speed.`,
+      ),
+    );
+  if (fr.regime === 'transitional')
+    warnings.push(
+      warn(
+        'transitional-flow',
+        `Re = ${loss.reynolds.toFixed(0)} lies between 2000 and 4000, where flow flips between laminar and turbulent; the friction factor is uncertain by tens of per cent.`,
+      ),
+    );
   if (loss.reynolds < 1e4 || D < 0.05 || loss.velocityMs > 3) {
-    warnings.push(warn('hazen-williams-outside-range', `Hazen-Williams was fitted to turbulent water flow in larger mains; here (Re = ${loss.reynolds.toFixed(0)}, D = ${(D * 1000).toFixed(1)} mm) its ${hw.toFixed(3)} m is only a second opinion — the Darcy-Weisbach ${loss.frictionHeadM.toFixed(3)} m is the one to use.`));
+    warnings.push(
+      warn(
+        'hazen-williams-outside-range',
+        `Hazen-Williams was fitted to turbulent water flow in larger mains; here (Re = ${loss.reynolds.toFixed(0)}, D = ${(D * 1000).toFixed(1)} mm) its ${hw.toFixed(3)} m is only a second opinion — the Darcy-Weisbach ${loss.frictionHeadM.toFixed(3)} m is the one to use.`,
+      ),
+    );
   }
   if (line.pressureRatingPa !== undefined && p > line.pressureRatingPa) {
-    warnings.push(warn('delivery-pressure-above-rating', `The pressure at the pump, ${(p / 1000).toFixed(0)} kPa (${(p / 6894.757).toFixed(0)} psi), is above the line's rating of ${(line.pressureRatingPa / 1000).toFixed(0)} kPa; use a higher-rated pipe for the lower part of the run.`));
+    warnings.push(
+      warn(
+        'delivery-pressure-above-rating',
+        `The pressure at the pump, ${(p / 1000).toFixed(0)} kPa (${(p / 6894.757).toFixed(0)} psi), is above the line's rating of ${(line.pressureRatingPa / 1000).toFixed(0)} kPa; use a higher-rated pipe for the lower part of the run.`,
+      ),
+    );
   }
-  if (v.frostRisk) warnings.push(warn('frost-risk', 'A full delivery line that freezes splits, and ice stops the pump. Bury it below the local frost depth or drain it for the winter.'));
+  if (v.frostRisk)
+    warnings.push(
+      warn(
+        'frost-risk',
+        'A full delivery line that freezes splits, and ice stops the pump. Bury it below the local frost depth or drain it for the winter.',
+      ),
+    );
 
-  return finish({
-    velocityMs: loss.velocityMs,
-    reynolds: loss.reynolds,
-    regime: fr.regime,
-    frictionFactor: fr.f,
-    frictionFactorSwameeJain: fr.fSwameeJain,
-    frictionHeadM: loss.frictionHeadM,
-    hazenWilliamsHeadM: hw,
-    minorHeadM: loss.minorHeadM,
-    staticHeadM: h,
-    totalHeadM: total,
-    pumpPressurePa: p,
-    targetLossM: target,
-    withinTarget: lossNow <= target,
-    smallestPipe: smallest,
-  }, steps, warnings);
+  return finish(
+    {
+      velocityMs: loss.velocityMs,
+      reynolds: loss.reynolds,
+      regime: fr.regime,
+      frictionFactor: fr.f,
+      frictionFactorSwameeJain: fr.fSwameeJain,
+      frictionHeadM: loss.frictionHeadM,
+      hazenWilliamsHeadM: hw,
+      minorHeadM: loss.minorHeadM,
+      staticHeadM: h,
+      totalHeadM: total,
+      pumpPressurePa: p,
+      targetLossM: target,
+      withinTarget: lossNow <= target,
+      smallestPipe: smallest,
+    },
+    steps,
+    warnings,
+  );
 }

@@ -21,15 +21,7 @@
  */
 import { toSI } from './units';
 
-export const LIVESTOCK_KINDS = [
-  'beef-cow',
-  'dairy-cow',
-  'horse',
-  'sheep',
-  'goat',
-  'pig',
-  'chickens-per-100',
-] as const;
+export const LIVESTOCK_KINDS = ['beef-cow', 'dairy-cow', 'horse', 'sheep', 'goat', 'pig', 'chickens-per-100'] as const;
 export type LivestockKind = (typeof LIVESTOCK_KINDS)[number];
 
 /** [typical, low, high] US gal per head (or per 100 birds) per day — from memory. */
@@ -65,7 +57,12 @@ export function livestockRates(): Record<LivestockKind, Rate> {
   const t = {} as Record<LivestockKind, Rate>;
   for (const k of LIVESTOCK_KINDS) {
     const [typ, lo, hi] = LIVESTOCK_GAL[k];
-    t[k] = { typicalM3PerDay: gal(typ), lowM3PerDay: gal(lo), highM3PerDay: gal(hi), source: 'US extension livestock water tables (from memory)' };
+    t[k] = {
+      typicalM3PerDay: gal(typ),
+      lowM3PerDay: gal(lo),
+      highM3PerDay: gal(hi),
+      source: 'US extension livestock water tables (from memory)',
+    };
   }
   livestockSI = t;
   return t;

@@ -26,8 +26,20 @@ import { G, waterProperties } from './water';
  * found; it is returned beside them (PRACTICE.driveLengthMinM/MaxM).
  */
 export const DRIVE_PIPE_GUIDES = [
-  { id: 'length-to-fall', ratio: 'L/H', min: PRACTICE.driveLengthToFallMin.value, max: PRACTICE.driveLengthToFallMax.value, source: PRACTICE.driveLengthToFallMin.source },
-  { id: 'length-to-diameter', ratio: 'L/D', min: 150, max: 1000, source: 'Calvert, drive-pipe experiments, as cited in ram handbooks (from memory)' },
+  {
+    id: 'length-to-fall',
+    ratio: 'L/H',
+    min: PRACTICE.driveLengthToFallMin.value,
+    max: PRACTICE.driveLengthToFallMax.value,
+    source: PRACTICE.driveLengthToFallMin.source,
+  },
+  {
+    id: 'length-to-diameter',
+    ratio: 'L/D',
+    min: 150,
+    max: 1000,
+    source: 'Calvert, drive-pipe experiments, as cited in ram handbooks (from memory)',
+  },
 ] as const;
 
 /** Margin wanted between the weakest rating and the peak (PRACTICE.ratingMargin: common practice, no published source found). */
@@ -39,7 +51,9 @@ export const RATING_MARGIN = PRACTICE.ratingMargin;
  */
 export const DEFAULT_BEATS_PER_MINUTE = 60;
 export const BEATS_PER_MINUTE_RANGE = {
-  min: PRACTICE.beatsPerMinuteMin.value, max: PRACTICE.beatsPerMinuteMax.value, source: PRACTICE.beatsPerMinuteMin.source,
+  min: PRACTICE.beatsPerMinuteMin.value,
+  max: PRACTICE.beatsPerMinuteMax.value,
+  source: PRACTICE.beatsPerMinuteMin.source,
 } as const;
 
 /** Design life a PVC drive pipe's fatigue life is held against, years (common practice, no published source found). */
@@ -68,19 +82,40 @@ export const drivePipeCheckSchema = z
     requiredMargin: z._default(siNumber({ min: 1, max: 5, unit: '' }), RATING_MARGIN.value),
     waterTempC: waterTempC(),
   })
-  .check(z.superRefine((v, ctx) => {
-    if (v.drivePipe.wallThicknessM === undefined) {
-      addRangeIssue(ctx, ['drivePipe', 'wallThicknessM'], 'is needed for the wave speed (pick a nominal size and series to fill it)', { min: 0.0005, max: 0.05, unit: 'm' });
-    } else if (v.drivePipe.wallThicknessM > v.drivePipe.insideDiameterM) {
-      addRangeIssue(ctx, ['drivePipe', 'wallThicknessM'], 'is not plausible for this bore', { min: 0.0005, max: v.drivePipe.insideDiameterM, unit: 'm' });
-    }
-    if (v.drivePipe.pressureRatingPa === undefined) {
-      addRangeIssue(ctx, ['drivePipe', 'pressureRatingPa'], "is needed to check the surge (it is printed on the pipe, or pick a series)", { min: 1e4, max: 1e8, unit: 'Pa' });
-    }
-    if (v.liftM !== undefined && v.liftM <= v.fallM) {
-      addRangeIssue(ctx, ['liftM'], `must be greater than the fall (${v.fallM} m)`, { min: v.fallM, minExclusive: true, max: 1000, unit: 'm' });
-    }
-  }));
+  .check(
+    z.superRefine((v, ctx) => {
+      if (v.drivePipe.wallThicknessM === undefined) {
+        addRangeIssue(
+          ctx,
+          ['drivePipe', 'wallThicknessM'],
+          'is needed for the wave speed (pick a nominal size and series to fill it)',
+          { min: 0.0005, max: 0.05, unit: 'm' },
+        );
+      } else if (v.drivePipe.wallThicknessM > v.drivePipe.insideDiameterM) {
+        addRangeIssue(ctx, ['drivePipe', 'wallThicknessM'], 'is not plausible for this bore', {
+          min: 0.0005,
+          max: v.drivePipe.insideDiameterM,
+          unit: 'm',
+        });
+      }
+      if (v.drivePipe.pressureRatingPa === undefined) {
+        addRangeIssue(
+          ctx,
+          ['drivePipe', 'pressureRatingPa'],
+          'is needed to check the surge (it is printed on the pipe, or pick a series)',
+          { min: 1e4, max: 1e8, unit: 'Pa' },
+        );
+      }
+      if (v.liftM !== undefined && v.liftM <= v.fallM) {
+        addRangeIssue(ctx, ['liftM'], `must be greater than the fall (${v.fallM} m)`, {
+          min: v.fallM,
+          minExclusive: true,
+          max: 1000,
+          unit: 'm',
+        });
+      }
+    }),
+  );
 
 export type DrivePipeCheckInput = z.input<typeof drivePipeCheckSchema>;
 
@@ -194,87 +229,252 @@ export function checkDrivePipe(input: DrivePipeCheckInput): CalcOutput<DrivePipe
   steps.push(step('Length against bore', '\\frac{L}{D}', `\\frac{${tq(L, 'm')}}{${tq(D, 'm')}}`, ld, ''));
   const guides: DrivePipeGuideResult[] = DRIVE_PIPE_GUIDES.map((g) => {
     const value = g.ratio === 'L/H' ? lh : ld;
-    return { id: g.id, ratio: g.ratio, min: g.min, max: g.max, value, within: value >= g.min && value <= g.max, source: g.source };
+    return {
+      id: g.id,
+      ratio: g.ratio,
+      min: g.min,
+      max: g.max,
+      value,
+      within: value >= g.min && value <= g.max,
+      source: g.source,
+    };
   });
   const lhMin = PRACTICE.driveLengthToFallMin.value;
   const lhMax = PRACTICE.driveLengthToFallMax.value;
   const rule = `${lhMin}–${lhMax} times the fall (${PRACTICE.driveLengthToFallMin.source})`;
   if (lh < lhMin) {
-    warnings.push(warn('drive-length-short-for-fall', `The drive pipe is ${lh.toFixed(1)} times the fall; the engine asks for ${rule}. A short pipe returns the pressure wave too soon for a strong beat.`));
+    warnings.push(
+      warn(
+        'drive-length-short-for-fall',
+        `The drive pipe is ${lh.toFixed(1)} times the fall; the engine asks for ${rule}. A short pipe returns the pressure wave too soon for a strong beat.`,
+      ),
+    );
   } else if (lh > lhMax) {
-    warnings.push(warn('drive-length-long-for-fall', `The drive pipe is ${lh.toFixed(1)} times the fall, longer than the engine's ${rule}; friction eats the fall and the beat slows. Consider a standpipe or a larger bore.`));
+    warnings.push(
+      warn(
+        'drive-length-long-for-fall',
+        `The drive pipe is ${lh.toFixed(1)} times the fall, longer than the engine's ${rule}; friction eats the fall and the beat slows. Consider a standpipe or a larger bore.`,
+      ),
+    );
   }
-  if (ld < 150) warnings.push(warn('drive-ld-low', `The drive pipe is only ${ld.toFixed(0)} bores long (guide: 150–1000); too little water mass to drive a strong beat.`));
-  if (ld > 1000) warnings.push(warn('drive-ld-high', `The drive pipe is ${ld.toFixed(0)} bores long (guide: 150–1000); friction will rob the fall — a larger bore suits this length.`));
+  if (ld < 150)
+    warnings.push(
+      warn(
+        'drive-ld-low',
+        `The drive pipe is only ${ld.toFixed(0)} bores long (guide: 150–1000); too little water mass to drive a strong beat.`,
+      ),
+    );
+  if (ld > 1000)
+    warnings.push(
+      warn(
+        'drive-ld-high',
+        `The drive pipe is ${ld.toFixed(0)} bores long (guide: 150–1000); friction will rob the fall — a larger bore suits this length.`,
+      ),
+    );
 
   const ff = fullFlowVelocity({
-    fallM: H, pumpHeadM: v.liftM ?? 2 * H, lengthM: L, insideDiameterM: D, roughnessM: roughnessOf(dp),
-    nu: water.kinematicViscosityM2s, fittingsK: sumK(dp.fittings as Fitting[]),
+    fallM: H,
+    pumpHeadM: v.liftM ?? 2 * H,
+    lengthM: L,
+    insideDiameterM: D,
+    roughnessM: roughnessOf(dp),
+    nu: water.kinematicViscosityM2s,
+    fittingsK: sumK(dp.fittings as Fitting[]),
   });
   const v0 = ff.v0;
-  steps.push(step('Full-flow velocity (waste valve held open)', 'v_0 = \\sqrt{\\frac{2gH}{1 + K_e + K_p + \\Sigma K + f\\,L/D}}',
-    `v_0 = \\sqrt{\\frac{2 \\times 9.807 \\times ${tq(H, 'm')}}{1 + ${DEFAULT_ENTRANCE_K} + ${DEFAULT_PUMP_LOSS_K} + ${tq(sumK(dp.fittings as Fitting[]))} + ${tq(ff.f)} \\times ${tq(ld)}}}`,
-    v0, 'm/s', 'velocity', 'Entrance and pump-body loss coefficients: Munson Table 8.2 (from memory).'));
+  steps.push(
+    step(
+      'Full-flow velocity (waste valve held open)',
+      'v_0 = \\sqrt{\\frac{2gH}{1 + K_e + K_p + \\Sigma K + f\\,L/D}}',
+      `v_0 = \\sqrt{\\frac{2 \\times 9.807 \\times ${tq(H, 'm')}}{1 + ${DEFAULT_ENTRANCE_K} + ${DEFAULT_PUMP_LOSS_K} + ${tq(sumK(dp.fittings as Fitting[]))} + ${tq(ff.f)} \\times ${tq(ld)}}}`,
+      v0,
+      'm/s',
+      'velocity',
+      'Entrance and pump-body loss coefficients: Munson Table 8.2 (from memory).',
+    ),
+  );
   let meanV: number | undefined;
   if (v.driveFlowM3s !== undefined) {
     meanV = v.driveFlowM3s / ((Math.PI * D * D) / 4);
-    steps.push(step('Mean velocity from the measured drive flow', '\\bar v = \\frac{4Q}{\\pi D^2}', `\\bar v = \\frac{4 \\times ${tq(v.driveFlowM3s, 'm³/s')}}{\\pi \\times (${tq(D, 'm')})^2}`, meanV, 'm/s', 'velocity'));
+    steps.push(
+      step(
+        'Mean velocity from the measured drive flow',
+        '\\bar v = \\frac{4Q}{\\pi D^2}',
+        `\\bar v = \\frac{4 \\times ${tq(v.driveFlowM3s, 'm³/s')}}{\\pi \\times (${tq(D, 'm')})^2}`,
+        meanV,
+        'm/s',
+        'velocity',
+      ),
+    );
   }
 
   const K = water.bulkModulusPa;
   const c = waveSpeed(K, rho, D, mat.youngsModulusPa, e);
   const cRigid = Math.sqrt(K / rho);
-  steps.push(step('Pressure-wave speed (Korteweg)', 'c = \\sqrt{\\frac{K/\\rho}{1 + \\frac{K D}{E e}}}',
-    `c = \\sqrt{\\frac{${tq(K, 'Pa')}/${tq(rho, 'kg/m³')}}{1 + \\frac{${tq(K, 'Pa')} \\times ${tq(D, 'm')}}{${tq(mat.youngsModulusPa, 'Pa')} \\times ${tq(e, 'm')}}}}`,
-    c, 'm/s', 'velocity', `E for ${mat.label}: ${mat.source}.`));
+  steps.push(
+    step(
+      'Pressure-wave speed (Korteweg)',
+      'c = \\sqrt{\\frac{K/\\rho}{1 + \\frac{K D}{E e}}}',
+      `c = \\sqrt{\\frac{${tq(K, 'Pa')}/${tq(rho, 'kg/m³')}}{1 + \\frac{${tq(K, 'Pa')} \\times ${tq(D, 'm')}}{${tq(mat.youngsModulusPa, 'Pa')} \\times ${tq(e, 'm')}}}}`,
+      c,
+      'm/s',
+      'velocity',
+      `E for ${mat.label}: ${mat.source}.`,
+    ),
+  );
   const t2 = waveRoundTrip(L, c);
-  steps.push(step('Wave round trip', 't_r = \\frac{2L}{c}', `t_r = \\frac{2 \\times ${tq(L, 'm')}}{${tq(c, 'm/s')}}`, t2, 's', 'time'));
+  steps.push(
+    step(
+      'Wave round trip',
+      't_r = \\frac{2L}{c}',
+      `t_r = \\frac{2 \\times ${tq(L, 'm')}}{${tq(c, 'm/s')}}`,
+      t2,
+      's',
+      'time',
+    ),
+  );
 
-  const surge = v.valveClosureTimeS === undefined ? joukowskySurge(rho, c, v0) : slowClosureSurge(rho, L, v0, v.valveClosureTimeS, c);
-  steps.push(step('Surge (Joukowsky) for a stop from full flow', '\\Delta p = \\rho\\,c\\,\\Delta v',
-    `\\Delta p = ${tq(rho, 'kg/m³')} \\times ${tq(c, 'm/s')} \\times ${tq(v0, 'm/s')}`, surge, 'Pa', 'pressure',
-    v.valveClosureTimeS !== undefined && v.valveClosureTimeS > t2 ? `Closure slower than 2L/c: Michaud's 2ρLΔv/t_c used.` : undefined));
+  const surge =
+    v.valveClosureTimeS === undefined
+      ? joukowskySurge(rho, c, v0)
+      : slowClosureSurge(rho, L, v0, v.valveClosureTimeS, c);
+  steps.push(
+    step(
+      'Surge (Joukowsky) for a stop from full flow',
+      '\\Delta p = \\rho\\,c\\,\\Delta v',
+      `\\Delta p = ${tq(rho, 'kg/m³')} \\times ${tq(c, 'm/s')} \\times ${tq(v0, 'm/s')}`,
+      surge,
+      'Pa',
+      'pressure',
+      v.valveClosureTimeS !== undefined && v.valveClosureTimeS > t2
+        ? `Closure slower than 2L/c: Michaud's 2ρLΔv/t_c used.`
+        : undefined,
+    ),
+  );
   if (v.valveClosureTimeS !== undefined && v.valveClosureTimeS > t2) {
-    warnings.push(warn('valve-closure-slow', `The waste valve closes in ${v.valveClosureTimeS.toFixed(3)} s, slower than the wave round trip of ${t2.toFixed(3)} s, so only part of the surge builds up and the beat is weak. A lighter, shorter-stroke valve or a longer drive pipe helps.`));
+    warnings.push(
+      warn(
+        'valve-closure-slow',
+        `The waste valve closes in ${v.valveClosureTimeS.toFixed(3)} s, slower than the wave round trip of ${t2.toFixed(3)} s, so only part of the surge builds up and the beat is weak. A lighter, shorter-stroke valve or a longer drive pipe helps.`,
+      ),
+    );
   }
   const stat = rho * G * H;
   const peak = stat + surge;
-  steps.push(step('Peak pressure at the pump', 'p_{peak} = \\rho g H + \\Delta p', `p_{peak} = ${tq(stat, 'Pa')} + ${tq(surge, 'Pa')}`, peak, 'Pa', 'pressure'));
+  steps.push(
+    step(
+      'Peak pressure at the pump',
+      'p_{peak} = \\rho g H + \\Delta p',
+      `p_{peak} = ${tq(stat, 'Pa')} + ${tq(surge, 'Pa')}`,
+      peak,
+      'Pa',
+      'pressure',
+    ),
+  );
   const margin = rating / peak;
-  steps.push(step('Rating margin', 'm = \\frac{p_{rating}}{p_{peak}}', `m = \\frac{${tq(rating, 'Pa')}}{${tq(peak, 'Pa')}}`, margin, ''));
+  steps.push(
+    step(
+      'Rating margin',
+      'm = \\frac{p_{rating}}{p_{peak}}',
+      `m = \\frac{${tq(rating, 'Pa')}}{${tq(peak, 'Pa')}}`,
+      margin,
+      '',
+    ),
+  );
   const kPa = (p: number) => `${(p / 1000).toFixed(0)} kPa (${(p / 6894.757).toFixed(0)} psi)`;
   if (peak > rating) {
-    warnings.push(warn('surge-exceeds-rating', `A sudden stop from full flow can reach ${kPa(peak)}, above the pipe's rating of ${kPa(rating)}; the drive pipe or its fittings can burst.`));
+    warnings.push(
+      warn(
+        'surge-exceeds-rating',
+        `A sudden stop from full flow can reach ${kPa(peak)}, above the pipe's rating of ${kPa(rating)}; the drive pipe or its fittings can burst.`,
+      ),
+    );
   } else if (margin < v.requiredMargin) {
-    warnings.push(warn('surge-margin-low', `The peak of ${kPa(peak)} leaves a margin of only ${margin.toFixed(2)} on the ${kPa(rating)} rating (wanted ${v.requiredMargin}; ${RATING_MARGIN.source}); the pipe sees this surge at every beat, and fatigue adds up.`));
+    warnings.push(
+      warn(
+        'surge-margin-low',
+        `The peak of ${kPa(peak)} leaves a margin of only ${margin.toFixed(2)} on the ${kPa(rating)} rating (wanted ${v.requiredMargin}; ${RATING_MARGIN.source}); the pipe sees this surge at every beat, and fatigue adds up.`,
+      ),
+    );
   }
   const vClose = v.closureVelocityMs ?? v0;
   const shutOff = shutOffPressure(rho, H, L, c, vClose, v.valveClosureTimeS);
-  steps.push(step('Shut-off pressure against a closed delivery', 'p_{so} = \\rho g H + \\Delta p(v_c)', `p_{so} = ${tq(stat, 'Pa')} + ${tq(shutOff - stat, 'Pa')}`, shutOff, 'Pa', 'pressure',
-    'The chamber charges toward this at every beat while the delivery is shut (shutOff.ts).'));
+  steps.push(
+    step(
+      'Shut-off pressure against a closed delivery',
+      'p_{so} = \\rho g H + \\Delta p(v_c)',
+      `p_{so} = ${tq(stat, 'Pa')} + ${tq(shutOff - stat, 'Pa')}`,
+      shutOff,
+      'Pa',
+      'pressure',
+      'The chamber charges toward this at every beat while the delivery is shut (shutOff.ts).',
+    ),
+  );
   const joint = v.series === undefined ? undefined : jointRating(v.series, rating, v.joints);
   const jointWeaker = joint !== undefined && joint.allowed && joint.ratingPa < rating;
   const weakest = jointWeaker ? joint.ratingPa : rating;
   if (joint && !joint.allowed && v.joints === 'threaded') {
     warnings.push(warn('threaded-joint-refused', `Threaded joints in this drive pipe: ${joint.note}.`));
   } else if (shutOff > weakest) {
-    warnings.push(warn('shut-off-exceeds-rating', `Against a closed delivery the ram can charge its chamber to ${kPa(shutOff)}, above the ${jointWeaker ? 'threaded joints\' ' : ''}rating of ${kPa(weakest)}. Fit a relief valve set below that rating and a gauge on the pump side, and never leave the ram beating against a shut valve.`));
+    warnings.push(
+      warn(
+        'shut-off-exceeds-rating',
+        `Against a closed delivery the ram can charge its chamber to ${kPa(shutOff)}, above the ${jointWeaker ? "threaded joints' " : ''}rating of ${kPa(weakest)}. Fit a relief valve set below that rating and a gauge on the pump side, and never leave the ram beating against a shut valve.`,
+      ),
+    );
   }
   let fatigue: DrivePipeCheckResults['fatigue'];
   if (dp.material === 'pvc') {
     const od = D + 2 * e;
     const f = pvcFatigue(shutOff, od, e, v.beatsPerMinute);
     fatigue = { ...f, beatsPerMinute: v.beatsPerMinute };
-    steps.push(step('Hoop stress at the peak', 'S = \\frac{p\\,(DR - 1)}{2},\\ DR = \\frac{OD}{e}', `S = \\frac{${tq(shutOff, 'Pa')} \\times (${tq(od / e)} - 1)}{2}`, f.hoopStressPa, 'Pa', 'pressure'));
-    steps.push(step('Cycles to failure (Vinson)', 'N = 5.05\\times10^{21}\\,S_{psi}^{-4.906}', `N = 5.05\\times10^{21} \\times ${tq(f.hoopStressPa / 6894.757)}^{-4.906}`, f.cyclesToFailure, '', undefined, f.source));
-    steps.push(step('Years at this beat rate', 't = \\frac{N}{n \\times 525\\,960}', `t = \\frac{${tq(f.cyclesToFailure)}}{${tq(v.beatsPerMinute)} \\times 525\\,960}`, f.yearsToFailure, 'yr'));
+    steps.push(
+      step(
+        'Hoop stress at the peak',
+        'S = \\frac{p\\,(DR - 1)}{2},\\ DR = \\frac{OD}{e}',
+        `S = \\frac{${tq(shutOff, 'Pa')} \\times (${tq(od / e)} - 1)}{2}`,
+        f.hoopStressPa,
+        'Pa',
+        'pressure',
+      ),
+    );
+    steps.push(
+      step(
+        'Cycles to failure (Vinson)',
+        'N = 5.05\\times10^{21}\\,S_{psi}^{-4.906}',
+        `N = 5.05\\times10^{21} \\times ${tq(f.hoopStressPa / 6894.757)}^{-4.906}`,
+        f.cyclesToFailure,
+        '',
+        undefined,
+        f.source,
+      ),
+    );
+    steps.push(
+      step(
+        'Years at this beat rate',
+        't = \\frac{N}{n \\times 525\\,960}',
+        `t = \\frac{${tq(f.cyclesToFailure)}}{${tq(v.beatsPerMinute)} \\times 525\\,960}`,
+        f.yearsToFailure,
+        'yr',
+      ),
+    );
     if (f.yearsToFailure < FATIGUE_DESIGN_LIFE_YEARS) {
-      warnings.push(warn('fatigue-life-short', `At ${v.beatsPerMinute} beats a minute the drive pipe sees ${(f.beatsPerYear / 1e6).toFixed(0)} million pressure cycles a year; by Vinson's fatigue curve for PVC it may crack after about ${f.yearsToFailure < 1 ? 'less than a year' : `${f.yearsToFailure.toFixed(0)} years`}. A thicker wall (schedule 80) or steel lasts longer.`));
+      warnings.push(
+        warn(
+          'fatigue-life-short',
+          `At ${v.beatsPerMinute} beats a minute the drive pipe sees ${(f.beatsPerYear / 1e6).toFixed(0)} million pressure cycles a year; by Vinson's fatigue curve for PVC it may crack after about ${f.yearsToFailure < 1 ? 'less than a year' : `${f.yearsToFailure.toFixed(0)} years`}. A thicker wall (schedule 80) or steel lasts longer.`,
+        ),
+      );
     }
   }
 
   if (!mat.rigid) {
-    warnings.push(warn('flexible-drive-pipe', `${mat.label} stretches under the surge: the wave travels at ${c.toFixed(0)} m/s instead of about ${cRigid.toFixed(0)} m/s in a rigid pipe, and the pipe soaks up the energy the pump needs. Use steel or PVC for the drive pipe.`));
+    warnings.push(
+      warn(
+        'flexible-drive-pipe',
+        `${mat.label} stretches under the surge: the wave travels at ${c.toFixed(0)} m/s instead of about ${cRigid.toFixed(0)} m/s in a rigid pipe, and the pipe soaks up the energy the pump needs. Use steel or PVC for the drive pipe.`,
+      ),
+    );
   }
 
   const results: DrivePipeCheckResults = {

@@ -73,38 +73,67 @@ export interface EfficiencySource {
   note?: string;
 }
 
-const POCKETBOOK = 'International Textbook Company, Building Trades Pocketbook (Scranton, editions 1899–1905), "Water Supply and Distribution — The Hydraulic Ram"';
-const WATER_FOR_THE_WORLD = 'Water for the World, Technical Note RWS.4.D.5 "Designing a Hydraulic Ram Pump" (USAID), as reproduced in "Hydram Pump Calculations", The Free On-line Aquaculture Dictionary (aquatext.com)';
+const POCKETBOOK =
+  'International Textbook Company, Building Trades Pocketbook (Scranton, editions 1899–1905), "Water Supply and Distribution — The Hydraulic Ram"';
+const WATER_FOR_THE_WORLD =
+  'Water for the World, Technical Note RWS.4.D.5 "Designing a Hydraulic Ram Pump" (USAID), as reproduced in "Hydram Pump Calculations", The Free On-line Aquaculture Dictionary (aquatext.com)';
 
 /** Building Trades Pocketbook: ratio of lift to fall → per cent efficiency. */
 const POCKETBOOK_TABLE: readonly (readonly [number, number])[] = [
-  [4, 0.72], [6, 0.61], [8, 0.52], [10, 0.44], [12, 0.37], [14, 0.31],
-  [16, 0.25], [18, 0.19], [20, 0.14], [22, 0.09], [24, 0.04], [26, 0],
+  [4, 0.72],
+  [6, 0.61],
+  [8, 0.52],
+  [10, 0.44],
+  [12, 0.37],
+  [14, 0.31],
+  [16, 0.25],
+  [18, 0.19],
+  [20, 0.14],
+  [22, 0.09],
+  [24, 0.04],
+  [26, 0],
 ];
 
 /** The published series, as printed; the bands below are derived from them. */
 export const EFFICIENCY_SOURCES: readonly EfficiencySource[] = [
   {
-    id: 'pocketbook-table', label: 'efficiency against ratio of lift to fall', pumpType: 'commercial',
+    id: 'pocketbook-table',
+    label: 'efficiency against ratio of lift to fall',
+    pumpType: 'commercial',
     citation: `${POCKETBOOK}, table of per cent efficiency against ratio of lift to fall`,
     points: POCKETBOOK_TABLE,
     note: 'the scanned copy prints "10" between 14 and 18; read as 16',
   },
   {
-    id: 'pocketbook-rule', label: 'about 1/7 of the supply to 5 × the fall, 1/14 to 10 ×', pumpType: 'commercial',
+    id: 'pocketbook-rule',
+    label: 'about 1/7 of the supply to 5 × the fall, 1/14 to 10 ×',
+    pumpType: 'commercial',
     citation: `${POCKETBOOK}, rule for a ram with a discharge pipe 80–100 ft long`,
-    points: [[5, 5 / 7], [10, 10 / 14]],
+    points: [
+      [5, 5 / 7],
+      [10, 10 / 14],
+    ],
   },
   {
-    id: 'water-for-the-world-commercial', label: 'design efficiency, commercial rams', pumpType: 'commercial',
+    id: 'water-for-the-world-commercial',
+    label: 'design efficiency, commercial rams',
+    pumpType: 'commercial',
     citation: `${WATER_FOR_THE_WORLD}: E = 0.66 for commercial rams`,
-    points: [[2, 0.66], [26, 0.66]],
+    points: [
+      [2, 0.66],
+      [26, 0.66],
+    ],
     note: 'one figure for every ratio',
   },
   {
-    id: 'water-for-the-world-homemade', label: 'design efficiency, home-built rams', pumpType: 'homemade',
+    id: 'water-for-the-world-homemade',
+    label: 'design efficiency, home-built rams',
+    pumpType: 'homemade',
     citation: `${WATER_FOR_THE_WORLD}: E = 0.33 for home-built rams`,
-    points: [[2, 0.33], [26, 0.33]],
+    points: [
+      [2, 0.33],
+      [26, 0.33],
+    ],
     note: 'one figure for every ratio',
   },
 ];
@@ -112,7 +141,12 @@ export const EFFICIENCY_SOURCES: readonly EfficiencySource[] = [
 /** Water for the World's home-built to commercial ratio, 0.33/0.66. */
 export const HOMEMADE_SHARE = 0.33 / 0.66;
 
-const row = (ratio: number, low: number, typical: number, high: number): EfficiencyBandRow => ({ ratio, low, typical, high });
+const row = (ratio: number, low: number, typical: number, high: number): EfficiencyBandRow => ({
+  ratio,
+  low,
+  typical,
+  high,
+});
 
 /** The Pocketbook rule (5/7 at 5, 10/14 at 10) where it applies, else undefined. */
 function pocketbookRule(ratio: number): number | undefined {
@@ -144,12 +178,14 @@ export const EFFICIENCY_BANDS: Record<PumpType, EfficiencyBand> = {
   homemade: {
     label: 'small homemade ram (PVC or galvanized fittings, ½"–2")',
     rows: derivedRows('homemade'),
-    source: 'Building Trades Pocketbook table (International Textbook Co., 1899–1905) × 0.33/0.66 from Water for the World RWS.4.D.5; low edge common practice, no published source',
+    source:
+      'Building Trades Pocketbook table (International Textbook Co., 1899–1905) × 0.33/0.66 from Water for the World RWS.4.D.5; low edge common practice, no published source',
   },
   commercial: {
     label: 'manufactured cast or fabricated ram',
     rows: derivedRows('commercial'),
-    source: 'Building Trades Pocketbook table and rule (International Textbook Co., 1899–1905); low edge × 0.33/0.66 from Water for the World RWS.4.D.5',
+    source:
+      'Building Trades Pocketbook table and rule (International Textbook Co., 1899–1905); low edge × 0.33/0.66 from Water for the World RWS.4.D.5',
   },
 };
 

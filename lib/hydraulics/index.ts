@@ -15,31 +15,72 @@ export { WARNING_CODES } from './warnings';
 
 // Units at the edges: what people type → SI, SI → the reader's units.
 export {
-  DISPLAY_UNITS, UNIT_CHOICES, fieldFromDisplay, fieldToDisplay, fromDisplay, fromSI, kindOfField, parseQuantity,
-  toDisplay, toSI, unitLabel, type QuantityKind, type UnitSystem,
+  DISPLAY_UNITS,
+  UNIT_CHOICES,
+  fieldFromDisplay,
+  fieldToDisplay,
+  fromDisplay,
+  fromSI,
+  kindOfField,
+  parseQuantity,
+  toDisplay,
+  toSI,
+  unitLabel,
+  type QuantityKind,
+  type UnitSystem,
 } from './units';
 
 // Water, pipes and fittings: property tables and schedule sizes.
 export { G, waterProperties } from './water';
 export {
-  NOMINAL_LABELS, NOMINAL_SIZES, PIPE_SERIES, defaultSeries, parseNominalSize, resolvePipe,
-  type NominalSize, type PipeMaterial, type PipeSeries,
+  NOMINAL_LABELS,
+  NOMINAL_SIZES,
+  PIPE_SERIES,
+  defaultSeries,
+  parseNominalSize,
+  resolvePipe,
+  type NominalSize,
+  type PipeMaterial,
+  type PipeSeries,
 } from './pipes';
 export {
-  METRIC_ODS_MM, METRIC_PIPE_SOURCES, METRIC_SERIES, defaultSeriesFor, nominalPressureBar, resolveMetricPipe,
-  type MetricOd, type MetricPipeSpec, type MetricSeries,
+  METRIC_ODS_MM,
+  METRIC_PIPE_SOURCES,
+  METRIC_SERIES,
+  defaultSeriesFor,
+  nominalPressureBar,
+  resolveMetricPipe,
+  type MetricOd,
+  type MetricPipeSpec,
+  type MetricSeries,
 } from './metricPipes';
 export { FITTING_K, sumK } from './fittings';
 export {
-  PE_HDS_PSI, VINSON, hoopStress, jointRating, peRating, pvcCyclesToFailure, pvcFatigue, type JointRating, type PeGrade, type PvcFatigue,
+  PE_HDS_PSI,
+  VINSON,
+  hoopStress,
+  jointRating,
+  peRating,
+  pvcCyclesToFailure,
+  pvcFatigue,
+  type JointRating,
+  type PeGrade,
+  type PvcFatigue,
 } from './pipeRatings';
 
 // Formulas the calculators are built from, checked on their own by the tests.
 export { colebrook, darcyHeadLoss, frictionFactor, hazenWilliamsHeadLoss, swameeJain } from './friction';
 export { joukowskyHead, joukowskySurge, slowClosureSurge, waveRoundTrip, waveSpeed } from './transients';
 export {
-  EFFICIENCY_BANDS, EFFICIENCY_SOURCES, dAubuissonEfficiency, efficiencyBand, maxLiftRatio, rankineEfficiency,
-  type BandAtRatio, type EfficiencySource, type PumpType,
+  EFFICIENCY_BANDS,
+  EFFICIENCY_SOURCES,
+  dAubuissonEfficiency,
+  efficiencyBand,
+  maxLiftRatio,
+  rankineEfficiency,
+  type BandAtRatio,
+  type EfficiencySource,
+  type PumpType,
 } from './efficiency';
 export { estimateShutOffPressure, shutOffPressure, shutOffSchema, type ShutOffResults } from './shutOff';
 export { RAM_CYCLE_SOURCES, estimateDriveFlow } from './ramCycle';
@@ -52,16 +93,19 @@ export { householdRate, livestockRates, type LivestockKind } from './demandRates
 export { estimateYield, yieldEstimateSchema, type YieldEstimateResults } from './yieldEstimate';
 export { ARRAY_LIMITS, planArray, arrayPlannerSchema, type ArrayPlannerResults } from './arrayPlanner';
 export {
-  BEATS_PER_MINUTE_RANGE, DRIVE_PIPE_GUIDES, FATIGUE_DESIGN_LIFE_YEARS, RATING_MARGIN, checkDrivePipe, drivePipeCheckSchema,
+  BEATS_PER_MINUTE_RANGE,
+  DRIVE_PIPE_GUIDES,
+  FATIGUE_DESIGN_LIFE_YEARS,
+  RATING_MARGIN,
+  checkDrivePipe,
+  drivePipeCheckSchema,
   type DrivePipeCheckResults,
 } from './drivePipeCheck';
 export { checkDeliveryLine, deliveryLineSchema, type DeliveryLineResults } from './deliveryLine';
 export { measureSourceFlow, sourceFlowSchema, type SourceFlowResults } from './sourceFlow';
 export { planDemandAndStorage, demandAndStorageSchema, type DemandAndStorageResults } from './demandAndStorage';
 export { runStallCheck, stallCheckSchema, type StallCheckInput, type StallCheckResults } from './stallCheck';
-export {
-  STALL_CAUSE_CODES, SYMPTOMS, SYMPTOM_LABELS, type StallCauseCode, type Symptom,
-} from './stallCauses';
+export { STALL_CAUSE_CODES, SYMPTOMS, SYMPTOM_LABELS, type StallCauseCode, type Symptom } from './stallCauses';
 
 // The calculators by id — goes when registry.ts gives way to lib/calculators (issue 18).
 export { CALCULATOR_IDS, calculators, getCalculator, runCalculator } from './registry';

@@ -27,9 +27,15 @@ export const METRIC_ODS_MM = [20, 25, 32, 40, 50, 63, 75, 90, 110] as const;
 export type MetricOd = (typeof METRIC_ODS_MM)[number];
 
 export const METRIC_SERIES = [
-  'pe100-sdr9', 'pe100-sdr11', 'pe100-sdr17',
-  'pe80-sdr9', 'pe80-sdr11', 'pe80-sdr17',
-  'pvcu-sdr13.6', 'pvcu-sdr17', 'pvcu-sdr21',
+  'pe100-sdr9',
+  'pe100-sdr11',
+  'pe100-sdr17',
+  'pe80-sdr9',
+  'pe80-sdr11',
+  'pe80-sdr17',
+  'pvcu-sdr13.6',
+  'pvcu-sdr17',
+  'pvcu-sdr21',
 ] as const;
 export type MetricSeries = (typeof METRIC_SERIES)[number];
 
@@ -112,7 +118,10 @@ export function resolveMetricPipe(series: MetricSeries, odMm: MetricOd): MetricP
   if (wallMm === undefined) return undefined;
   const pn = nominalPressureBar(stress, sdr);
   return {
-    material, series, outsideDiameterMm: odMm, sdr,
+    material,
+    series,
+    outsideDiameterMm: odMm,
+    sdr,
     insideDiameterM: (odMm - 2 * wallMm) / 1000,
     wallThicknessM: wallMm / 1000,
     outsideDiameterM: odMm / 1000,

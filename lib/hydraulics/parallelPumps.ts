@@ -66,11 +66,23 @@ export interface PreparedPump {
  * p.fittingHeadLossM  // ≈ 0.0966
  * p.effectiveFallM  // ≈ 1.1226
  */
-export function preparePump(p: PumpInput, index: number, fallM: number, liftM: number, nu: number, closureRatio: number): PreparedPump {
+export function preparePump(
+  p: PumpInput,
+  index: number,
+  fallM: number,
+  liftM: number,
+  nu: number,
+  closureRatio: number,
+): PreparedPump {
   const dp = p.drivePipe;
   const cycle = estimateDriveFlow({
-    fallM, pumpHeadM: liftM, lengthM: dp.lengthM, insideDiameterM: dp.insideDiameterM,
-    roughnessM: roughnessOf(dp), nu, closureRatio,
+    fallM,
+    pumpHeadM: liftM,
+    lengthM: dp.lengthM,
+    insideDiameterM: dp.insideDiameterM,
+    roughnessM: roughnessOf(dp),
+    nu,
+    closureRatio,
   });
   const Q = p.driveFlowM3s ?? cycle.driveFlowM3s;
   const vc = cycle.closureVelocityMs * (Q / cycle.driveFlowM3s);
@@ -248,7 +260,11 @@ export interface ParallelSolution {
  * solveParallel([pump], 1.2192, 8.8392, line, 1.306e-6, [2]).combinedFlowM3s / s.combinedFlowM3s  // ≈ 1 ±1e-9
  */
 export function solveParallel(
-  pumps: readonly PreparedPump[], fallM: number, liftM: number, line: LineSpec, nu: number,
+  pumps: readonly PreparedPump[],
+  fallM: number,
+  liftM: number,
+  line: LineSpec,
+  nu: number,
   copies?: readonly number[],
 ): ParallelSolution {
   const total = (hp: number) => {
@@ -257,7 +273,8 @@ export function solveParallel(
     for (const p of pumps) s += (copies?.[i++] ?? 1) * pumpDelivery(p, hp, fallM);
     return s;
   };
-  const headAt = (S: number) => liftM + pipeHeadLoss(S, line.lengthM, line.insideDiameterM, line.roughnessM, nu, line.sumK);
+  const headAt = (S: number) =>
+    liftM + pipeHeadLoss(S, line.lengthM, line.insideDiameterM, line.roughnessM, nu, line.sumK);
   // F(S) = total(head(S)) − S is decreasing; F(0) ≥ 0, F(S0) ≤ 0 with S0 = total(lift).
   let a = 0;
   let fa = total(liftM);

@@ -28,14 +28,19 @@
 import { fromSI, toSI } from './units';
 
 /** Vinson's constants (Moser & Folkman 2008, Eq. 4.17). */
-export const VINSON = { coefficient: 5.05e21, exponent: -4.906, source: 'Vinson, as given in Moser & Folkman, Buried Pipe Design, 3rd ed. (2008), Eq. 4.17' } as const;
+export const VINSON = {
+  coefficient: 5.05e21,
+  exponent: -4.906,
+  source: 'Vinson, as given in Moser & Folkman, Buried Pipe Design, 3rd ed. (2008), Eq. 4.17',
+} as const;
 
 /** Hydrostatic design stress for water at 73 °F, psi. */
 export const PE_HDS_PSI = { PE3608: 800, PE4710: 1000 } as const;
 export type PeGrade = keyof typeof PE_HDS_PSI;
 export const PE_HDS_SOURCE = 'PPI TR-4 / AWWA C906: HDS 800 psi PE3608, 1000 psi PE4710 (from memory)';
 
-export const THREAD_SOURCE = "a PVC pipe manufacturer's installation guide, threaded-pipe pressure table (threaded sch 80 = half the plain rating; sch 40 not to be threaded); ASTM D1785 appendix (from memory)";
+export const THREAD_SOURCE =
+  "a PVC pipe manufacturer's installation guide, threaded-pipe pressure table (threaded sch 80 = half the plain rating; sch 40 not to be threaded); ASTM D1785 appendix (from memory)";
 
 /**
  * Hoop stress in a plastic pipe wall, S = P·(DR − 1)/2, Pa.
@@ -82,12 +87,23 @@ export interface PvcFatigue {
  * // 60 × 525 960 = 31.6 million beats a year
  * f.yearsToFailure  // ≈ 5.48 ±1%
  */
-export function pvcFatigue(peakPressurePa: number, outsideDiameterM: number, wallThicknessM: number, beatsPerMinute: number): PvcFatigue {
+export function pvcFatigue(
+  peakPressurePa: number,
+  outsideDiameterM: number,
+  wallThicknessM: number,
+  beatsPerMinute: number,
+): PvcFatigue {
   const dr = outsideDiameterM / wallThicknessM;
   const s = hoopStress(peakPressurePa, dr);
   const n = pvcCyclesToFailure(s);
   const perYear = beatsPerMinute * 60 * 24 * 365.25;
-  return { hoopStressPa: s, cyclesToFailure: n, yearsToFailure: n / perYear, beatsPerYear: perYear, source: VINSON.source };
+  return {
+    hoopStressPa: s,
+    cyclesToFailure: n,
+    yearsToFailure: n / perYear,
+    beatsPerYear: perYear,
+    source: VINSON.source,
+  };
 }
 
 /**
@@ -123,11 +139,34 @@ export interface JointRating {
  * jointRating('pvc-sch40', 1e6, 'plain').ratingPa  // ≈ 1e6
  */
 export function jointRating(series: string, pipeRatingPa: number, joints: JointKind): JointRating {
-  if (joints === 'plain') return { allowed: true, ratingPa: pipeRatingPa, note: 'plain joints keep the pipe rating', source: THREAD_SOURCE };
+  if (joints === 'plain')
+    return { allowed: true, ratingPa: pipeRatingPa, note: 'plain joints keep the pipe rating', source: THREAD_SOURCE };
   if (series === 'pvc-sch40') {
-    return { allowed: false, ratingPa: 0, note: 'schedule 40 PVC is not to be threaded: use schedule 80 or solvent-welded joints', source: THREAD_SOURCE };
+    return {
+      allowed: false,
+      ratingPa: 0,
+      note: 'schedule 40 PVC is not to be threaded: use schedule 80 or solvent-welded joints',
+      source: THREAD_SOURCE,
+    };
   }
-  if (series === 'pvc-sch80') return { allowed: true, ratingPa: pipeRatingPa / 2, note: 'threaded schedule 80 PVC at half its rating', source: THREAD_SOURCE };
-  if (series.startsWith('steel')) return { allowed: true, ratingPa: pipeRatingPa, note: 'steel is already rated by its threaded fittings', source: 'ASME B16.3 Class 150 (from memory)' };
-  return { allowed: false, ratingPa: 0, note: 'polyethylene and metric plastic pipe are joined by fusion or compression fittings, not threads', source: 'common practice, no published source found' };
+  if (series === 'pvc-sch80')
+    return {
+      allowed: true,
+      ratingPa: pipeRatingPa / 2,
+      note: 'threaded schedule 80 PVC at half its rating',
+      source: THREAD_SOURCE,
+    };
+  if (series.startsWith('steel'))
+    return {
+      allowed: true,
+      ratingPa: pipeRatingPa,
+      note: 'steel is already rated by its threaded fittings',
+      source: 'ASME B16.3 Class 150 (from memory)',
+    };
+  return {
+    allowed: false,
+    ratingPa: 0,
+    note: 'polyethylene and metric plastic pipe are joined by fusion or compression fittings, not threads',
+    source: 'common practice, no published source found',
+  };
 }

@@ -69,28 +69,48 @@ export interface MaterialProps {
  */
 export const MATERIAL_PROPS: Record<PipeMaterial, MaterialProps> = {
   steel: {
-    label: 'steel (black)', youngsModulusPa: 200e9, youngsModulusRangePa: [200e9, 207e9],
-    roughnessM: 0.045e-3, hazenWilliamsC: 120, rigid: true,
+    label: 'steel (black)',
+    youngsModulusPa: 200e9,
+    youngsModulusRangePa: [200e9, 207e9],
+    roughnessM: 0.045e-3,
+    hazenWilliamsC: 120,
+    rigid: true,
     source: 'E: Wylie & Streeter Table 2.1; ε: Munson Table 8.1 (from memory)',
   },
   'galvanized-steel': {
-    label: 'galvanized steel', youngsModulusPa: 200e9, youngsModulusRangePa: [200e9, 207e9],
-    roughnessM: 0.15e-3, hazenWilliamsC: 120, rigid: true,
+    label: 'galvanized steel',
+    youngsModulusPa: 200e9,
+    youngsModulusRangePa: [200e9, 207e9],
+    roughnessM: 0.15e-3,
+    hazenWilliamsC: 120,
+    rigid: true,
     source: 'E: Wylie & Streeter Table 2.1; ε: Munson Table 8.1 (from memory)',
   },
   pvc: {
-    label: 'PVC', youngsModulusPa: 2.76e9, youngsModulusRangePa: [2.4e9, 3.3e9],
-    roughnessM: 0.0015e-3, hazenWilliamsC: 150, rigid: true,
+    label: 'PVC',
+    youngsModulusPa: 2.76e9,
+    youngsModulusRangePa: [2.4e9, 3.3e9],
+    roughnessM: 0.0015e-3,
+    hazenWilliamsC: 150,
+    rigid: true,
     source: 'E: ASTM D1784 cell class 12454; range Wylie & Streeter Table 2.1 (from memory)',
   },
   hdpe: {
-    label: 'HDPE (polyethylene)', youngsModulusPa: 0.9e9, youngsModulusRangePa: [0.8e9, 1.1e9],
-    roughnessM: 0.0015e-3, hazenWilliamsC: 150, rigid: false,
+    label: 'HDPE (polyethylene)',
+    youngsModulusPa: 0.9e9,
+    youngsModulusRangePa: [0.8e9, 1.1e9],
+    roughnessM: 0.0015e-3,
+    hazenWilliamsC: 150,
+    rigid: false,
     source: 'E: Wylie & Streeter Table 2.1 (from memory)',
   },
   hose: {
-    label: 'hose (rubber or vinyl)', youngsModulusPa: 0.02e9, youngsModulusRangePa: [0.005e9, 0.1e9],
-    roughnessM: 0.01e-3, hazenWilliamsC: 140, rigid: false,
+    label: 'hose (rubber or vinyl)',
+    youngsModulusPa: 0.02e9,
+    youngsModulusRangePa: [0.005e9, 0.1e9],
+    roughnessM: 0.01e-3,
+    hazenWilliamsC: 140,
+    rigid: false,
     source: 'from memory, order of magnitude only',
   },
 };
@@ -140,7 +160,12 @@ const psi = (x: number) => toSI(x, 'psi', 'pressure');
  * @example the same DR 11 in PE3608: 2 × 800/(11 − 1) = 160 psi
  * fromSI(resolvePipe('hdpe-dr11', '1-1/4', undefined, 'PE3608').pressureRatingPa, 'psi', 'pressure')  // ≈ 160
  */
-export function resolvePipe(series: PipeSeries, nominal: NominalSize, material?: PipeMaterial, peGrade: PeGrade = 'PE4710'): PipeSpec {
+export function resolvePipe(
+  series: PipeSeries,
+  nominal: NominalSize,
+  material?: PipeMaterial,
+  peGrade: PeGrade = 'PE4710',
+): PipeSpec {
   const key = `${series}|${nominal}|${material ?? ''}|${peGrade}`;
   const hit = pipeCache.get(key);
   if (hit) return { ...hit };
@@ -151,7 +176,12 @@ export function resolvePipe(series: PipeSeries, nominal: NominalSize, material?:
 
 const pipeCache = new Map<string, PipeSpec>();
 
-function computePipe(series: PipeSeries, nominal: NominalSize, material: PipeMaterial | undefined, peGrade: PeGrade): PipeSpec {
+function computePipe(
+  series: PipeSeries,
+  nominal: NominalSize,
+  material: PipeMaterial | undefined,
+  peGrade: PeGrade,
+): PipeSpec {
   const [odIn, w40, w80, p40, p80] = STEEL_PVC[nominal];
   let wallIn: number;
   let ratingPsi: number;
@@ -196,15 +226,29 @@ export function defaultSeries(material: PipeMaterial): PipeSeries {
 }
 
 const NOMINAL_WORDS: Record<string, NominalSize> = {
-  '0.5': '1/2', '1/2': '1/2', '.5': '1/2',
-  '0.75': '3/4', '3/4': '3/4', '.75': '3/4',
-  '1': '1', '1.0': '1',
-  '1.25': '1-1/4', '1-1/4': '1-1/4', '1 1/4': '1-1/4',
-  '1.5': '1-1/2', '1-1/2': '1-1/2', '1 1/2': '1-1/2',
-  '2': '2', '2.0': '2',
-  '2.5': '2-1/2', '2-1/2': '2-1/2', '2 1/2': '2-1/2',
-  '3': '3', '3.0': '3',
-  '4': '4', '4.0': '4',
+  '0.5': '1/2',
+  '1/2': '1/2',
+  '.5': '1/2',
+  '0.75': '3/4',
+  '3/4': '3/4',
+  '.75': '3/4',
+  '1': '1',
+  '1.0': '1',
+  '1.25': '1-1/4',
+  '1-1/4': '1-1/4',
+  '1 1/4': '1-1/4',
+  '1.5': '1-1/2',
+  '1-1/2': '1-1/2',
+  '1 1/2': '1-1/2',
+  '2': '2',
+  '2.0': '2',
+  '2.5': '2-1/2',
+  '2-1/2': '2-1/2',
+  '2 1/2': '2-1/2',
+  '3': '3',
+  '3.0': '3',
+  '4': '4',
+  '4.0': '4',
 };
 
 /**
@@ -218,12 +262,22 @@ const NOMINAL_WORDS: Record<string, NominalSize> = {
 export function parseNominalSize(text: string): NominalSize | undefined {
   let s = text.trim().toLowerCase();
   s = s.replace(/½/g, ' 1/2').replace(/¼/g, ' 1/4').replace(/¾/g, ' 3/4').replace(/⁄/g, '/');
-  s = s.replace(/(inches|inch|in\.?|["”″]|nps|nominal)/g, ' ').replace(/\s+/g, ' ').trim();
+  s = s
+    .replace(/(inches|inch|in\.?|["”″]|nps|nominal)/g, ' ')
+    .replace(/\s+/g, ' ')
+    .trim();
   return NOMINAL_WORDS[s];
 }
 
 /** Nominal sizes with their labels for pickers, e.g. { id: '1-1/4', label: '1¼"' }. */
 export const NOMINAL_LABELS: Record<NominalSize, string> = {
-  '1/2': '½"', '3/4': '¾"', '1': '1"', '1-1/4': '1¼"', '1-1/2': '1½"',
-  '2': '2"', '2-1/2': '2½"', '3': '3"', '4': '4"',
+  '1/2': '½"',
+  '3/4': '¾"',
+  '1': '1"',
+  '1-1/4': '1¼"',
+  '1-1/2': '1½"',
+  '2': '2"',
+  '2-1/2': '2½"',
+  '3': '3"',
+  '4': '4"',
 };

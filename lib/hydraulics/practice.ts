@@ -22,17 +22,29 @@ const NONE = 'common practice, no published source found';
  * through the pumps. Delivery-line loss: 10 % of the lift by default.
  */
 export const PRACTICE = {
-  minFallM: { value: 0.5, source: 'Water for the World RWS.4.D.5 (USAID), 0.5 m least fall (from memory; the note was not found)' },
+  minFallM: {
+    value: 0.5,
+    source: 'Water for the World RWS.4.D.5 (USAID), 0.5 m least fall (from memory; the note was not found)',
+  },
   driveLengthToFallMin: { value: 5, source: NONE },
   driveLengthToFallMax: { value: 10, source: NONE },
-  driveLengthMinM: { value: 7.62, source: 'Building Trades Pocketbook (International Textbook Co., 1899–1905): drive pipe 25 to 50 ft' },
-  driveLengthMaxM: { value: 15.24, source: 'Building Trades Pocketbook (International Textbook Co., 1899–1905): drive pipe 25 to 50 ft' },
+  driveLengthMinM: {
+    value: 7.62,
+    source: 'Building Trades Pocketbook (International Textbook Co., 1899–1905): drive pipe 25 to 50 ft',
+  },
+  driveLengthMaxM: {
+    value: 15.24,
+    source: 'Building Trades Pocketbook (International Textbook Co., 1899–1905): drive pipe 25 to 50 ft',
+  },
   sourceShareCaution: { value: 0.5, source: `${NONE}: leave at least half the dry-month flow in the stream` },
   deliveryLossShare: { value: 0.1, source: `${NONE}: delivery-line friction up to a tenth of the lift` },
   ratingMargin: { value: 1.5, source: NONE },
   beatsPerMinuteMin: { value: 40, source: NONE },
   beatsPerMinuteMax: { value: 120, source: NONE },
-  vNotchMinHeadM: { value: 0.06096, source: 'USBR Water Measurement Manual, ch. 7: head at least 0.2 ft (61 mm) (from memory)' },
+  vNotchMinHeadM: {
+    value: 0.06096,
+    source: 'USBR Water Measurement Manual, ch. 7: head at least 0.2 ft (61 mm) (from memory)',
+  },
 } as const satisfies Record<string, PracticeRule>;
 
 /**

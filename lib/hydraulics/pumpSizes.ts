@@ -31,7 +31,8 @@ export interface DriveFlowRange {
   source: string;
 }
 
-export const PUMP_SIZE_SOURCE = 'common practice, no published source found; measure the drive flow, or estimate it for the site';
+export const PUMP_SIZE_SOURCE =
+  'common practice, no published source found; measure the drive flow, or estimate it for the site';
 
 let table: Record<NominalSize, DriveFlowRange> | undefined;
 

@@ -40,8 +40,10 @@ export const DEFAULT_ENTRANCE_K = 0.5;
 
 /** What the product shows beside the waste valve's figures. */
 export const RAM_CYCLE_SOURCES = {
-  closureRatio: 'closure at 0.8 of full-flow velocity: common practice, no published source found (Iversen 1975, ASME J. Fluids Eng. 97(2), only that it is below 1)',
-  pumpLossK: 'K = 2.9, a swing check (2.0) plus a threaded tee run (0.9), Munson, Young & Okiishi Table 8.2; treating the ram body as those fittings is common practice, no published source found',
+  closureRatio:
+    'closure at 0.8 of full-flow velocity: common practice, no published source found (Iversen 1975, ASME J. Fluids Eng. 97(2), only that it is below 1)',
+  pumpLossK:
+    'K = 2.9, a swing check (2.0) plus a threaded tee run (0.9), Munson, Young & Okiishi Table 8.2; treating the ram body as those fittings is common practice, no published source found',
   entranceK: 'K = 0.5, square-edged entrance, Munson, Young & Okiishi Table 8.2',
 } as const;
 
@@ -94,7 +96,8 @@ export interface RamCycle {
  */
 export function fullFlowVelocity(input: RamCycleInput): { v0: number; f: number; R: number } {
   const { fallM, lengthM, insideDiameterM: D, roughnessM, nu } = input;
-  const kFixed = 1 + (input.entranceK ?? DEFAULT_ENTRANCE_K) + (input.pumpLossK ?? DEFAULT_PUMP_LOSS_K) + (input.fittingsK ?? 0);
+  const kFixed =
+    1 + (input.entranceK ?? DEFAULT_ENTRANCE_K) + (input.pumpLossK ?? DEFAULT_PUMP_LOSS_K) + (input.fittingsK ?? 0);
   let v = Math.sqrt((2 * G * fallM) / (kFixed + 0.02 * (lengthM / D)));
   let f = 0.02;
   let R = kFixed;

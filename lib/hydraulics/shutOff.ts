@@ -42,11 +42,17 @@ import { G, waterProperties } from './water';
  * shutOffPressure(999.7, 1.2192, 6.096, 548, 1.57, 0.1)  // ≈ 203310
  */
 export function shutOffPressure(
-  densityKgM3: number, fallM: number, lengthM: number, waveSpeedMs: number, closureVelocityMs: number, closureTimeS?: number,
+  densityKgM3: number,
+  fallM: number,
+  lengthM: number,
+  waveSpeedMs: number,
+  closureVelocityMs: number,
+  closureTimeS?: number,
 ): number {
-  const surge = closureTimeS === undefined
-    ? joukowskySurge(densityKgM3, waveSpeedMs, closureVelocityMs)
-    : slowClosureSurge(densityKgM3, lengthM, closureVelocityMs, closureTimeS, waveSpeedMs);
+  const surge =
+    closureTimeS === undefined
+      ? joukowskySurge(densityKgM3, waveSpeedMs, closureVelocityMs)
+      : slowClosureSurge(densityKgM3, lengthM, closureVelocityMs, closureTimeS, waveSpeedMs);
   return densityKgM3 * G * fallM + surge;
 }
 
@@ -63,11 +69,18 @@ export const shutOffSchema = z
     valveClosureTimeS: z.optional(siNumber({ min: 0, minExclusive: true, max: 5, unit: 's' })),
     waterTempC: waterTempC(),
   })
-  .check(z.superRefine((v, ctx) => {
-    if (v.drivePipe.wallThicknessM === undefined) {
-      addRangeIssue(ctx, ['drivePipe', 'wallThicknessM'], 'is needed for the wave speed (pick a nominal size and series to fill it)', { min: 0.0005, max: 0.05, unit: 'm' });
-    }
-  }));
+  .check(
+    z.superRefine((v, ctx) => {
+      if (v.drivePipe.wallThicknessM === undefined) {
+        addRangeIssue(
+          ctx,
+          ['drivePipe', 'wallThicknessM'],
+          'is needed for the wave speed (pick a nominal size and series to fill it)',
+          { min: 0.0005, max: 0.05, unit: 'm' },
+        );
+      }
+    }),
+  );
 
 export type ShutOffInput = z.input<typeof shutOffSchema>;
 
@@ -124,46 +137,115 @@ export function estimateShutOffPressure(input: ShutOffInput): CalcOutput<ShutOff
   } else if (v.driveFlowM3s !== undefined) {
     vel = v.driveFlowM3s / ((Math.PI * D * D) / 4);
     from = 'drive-flow';
-    steps.push(step('Velocity from the drive flow', 'v = \\frac{4Q}{\\pi D^2}', `v = \\frac{4 \\times ${tq(v.driveFlowM3s, 'm³/s')}}{\\pi \\times (${tq(D, 'm')})^2}`, vel, 'm/s', 'velocity'));
+    steps.push(
+      step(
+        'Velocity from the drive flow',
+        'v = \\frac{4Q}{\\pi D^2}',
+        `v = \\frac{4 \\times ${tq(v.driveFlowM3s, 'm³/s')}}{\\pi \\times (${tq(D, 'm')})^2}`,
+        vel,
+        'm/s',
+        'velocity',
+      ),
+    );
   } else {
     const ff = fullFlowVelocity({
-      fallM: H, pumpHeadM: 2 * H, lengthM: L, insideDiameterM: D, roughnessM: roughnessOf(dp),
-      nu: water.kinematicViscosityM2s, fittingsK: sumK(dp.fittings as Fitting[]),
+      fallM: H,
+      pumpHeadM: 2 * H,
+      lengthM: L,
+      insideDiameterM: D,
+      roughnessM: roughnessOf(dp),
+      nu: water.kinematicViscosityM2s,
+      fittingsK: sumK(dp.fittings as Fitting[]),
     });
     vel = ff.v0;
     from = 'full-flow';
-    steps.push(step('Full-flow velocity (the most the pipe can reach)', 'v_0 = \\sqrt{\\frac{2gH}{R}}', `v_0 = \\sqrt{\\frac{2 \\times 9.807 \\times ${tq(H, 'm')}}{${tq(ff.R)}}}`, vel, 'm/s', 'velocity'));
+    steps.push(
+      step(
+        'Full-flow velocity (the most the pipe can reach)',
+        'v_0 = \\sqrt{\\frac{2gH}{R}}',
+        `v_0 = \\sqrt{\\frac{2 \\times 9.807 \\times ${tq(H, 'm')}}{${tq(ff.R)}}}`,
+        vel,
+        'm/s',
+        'velocity',
+      ),
+    );
   }
 
   const c = waveSpeed(water.bulkModulusPa, rho, D, mat.youngsModulusPa, e);
-  steps.push(step('Pressure-wave speed (Korteweg)', 'c = \\sqrt{\\frac{K/\\rho}{1 + \\frac{K D}{E e}}}',
-    `c = \\sqrt{\\frac{${tq(water.bulkModulusPa, 'Pa')}/${tq(rho, 'kg/m³')}}{1 + \\frac{${tq(water.bulkModulusPa, 'Pa')} \\times ${tq(D, 'm')}}{${tq(mat.youngsModulusPa, 'Pa')} \\times ${tq(e, 'm')}}}}`,
-    c, 'm/s', 'velocity', `E for ${mat.label}: ${mat.source}.`));
+  steps.push(
+    step(
+      'Pressure-wave speed (Korteweg)',
+      'c = \\sqrt{\\frac{K/\\rho}{1 + \\frac{K D}{E e}}}',
+      `c = \\sqrt{\\frac{${tq(water.bulkModulusPa, 'Pa')}/${tq(rho, 'kg/m³')}}{1 + \\frac{${tq(water.bulkModulusPa, 'Pa')} \\times ${tq(D, 'm')}}{${tq(mat.youngsModulusPa, 'Pa')} \\times ${tq(e, 'm')}}}}`,
+      c,
+      'm/s',
+      'velocity',
+      `E for ${mat.label}: ${mat.source}.`,
+    ),
+  );
   const tr = waveRoundTrip(L, c);
-  steps.push(step('Wave round trip', 't_r = \\frac{2L}{c}', `t_r = \\frac{2 \\times ${tq(L, 'm')}}{${tq(c, 'm/s')}}`, tr, 's', 'time'));
+  steps.push(
+    step(
+      'Wave round trip',
+      't_r = \\frac{2L}{c}',
+      `t_r = \\frac{2 \\times ${tq(L, 'm')}}{${tq(c, 'm/s')}}`,
+      tr,
+      's',
+      'time',
+    ),
+  );
   const slow = v.valveClosureTimeS !== undefined && v.valveClosureTimeS > tr;
   const stat = rho * G * H;
   const total = shutOffPressure(rho, H, L, c, vel, v.valveClosureTimeS);
   const surge = total - stat;
   if (slow && v.valveClosureTimeS !== undefined) {
-    steps.push(step("Surge for a closure slower than 2L/c (Michaud)", '\\Delta p = \\frac{2\\rho L v}{t_c}',
-      `\\Delta p = \\frac{2 \\times ${tq(rho, 'kg/m³')} \\times ${tq(L, 'm')} \\times ${tq(vel, 'm/s')}}{${tq(v.valveClosureTimeS, 's')}}`, surge, 'Pa', 'pressure'));
+    steps.push(
+      step(
+        'Surge for a closure slower than 2L/c (Michaud)',
+        '\\Delta p = \\frac{2\\rho L v}{t_c}',
+        `\\Delta p = \\frac{2 \\times ${tq(rho, 'kg/m³')} \\times ${tq(L, 'm')} \\times ${tq(vel, 'm/s')}}{${tq(v.valveClosureTimeS, 's')}}`,
+        surge,
+        'Pa',
+        'pressure',
+      ),
+    );
   } else {
-    steps.push(step('Surge for a closure within 2L/c (Joukowsky)', '\\Delta p = \\rho\\,c\\,v',
-      `\\Delta p = ${tq(rho, 'kg/m³')} \\times ${tq(c, 'm/s')} \\times ${tq(vel, 'm/s')}`, surge, 'Pa', 'pressure'));
+    steps.push(
+      step(
+        'Surge for a closure within 2L/c (Joukowsky)',
+        '\\Delta p = \\rho\\,c\\,v',
+        `\\Delta p = ${tq(rho, 'kg/m³')} \\times ${tq(c, 'm/s')} \\times ${tq(vel, 'm/s')}`,
+        surge,
+        'Pa',
+        'pressure',
+      ),
+    );
   }
-  steps.push(step('Shut-off pressure against a closed delivery', 'p_{so} = \\rho g H + \\Delta p', `p_{so} = ${tq(stat, 'Pa')} + ${tq(surge, 'Pa')}`, total, 'Pa', 'pressure',
-    'The chamber charges toward this at every beat while the delivery is shut; stop the ram before isolating, and bleed through a valve of its own while watching a gauge.'));
+  steps.push(
+    step(
+      'Shut-off pressure against a closed delivery',
+      'p_{so} = \\rho g H + \\Delta p',
+      `p_{so} = ${tq(stat, 'Pa')} + ${tq(surge, 'Pa')}`,
+      total,
+      'Pa',
+      'pressure',
+      'The chamber charges toward this at every beat while the delivery is shut; stop the ram before isolating, and bleed through a valve of its own while watching a gauge.',
+    ),
+  );
 
-  return finish({
-    closureVelocityMs: vel,
-    velocityFrom: from,
-    waveSpeedMs: c,
-    roundTripS: tr,
-    closure: slow ? 'slow' : 'sudden',
-    staticPressurePa: stat,
-    surgePa: surge,
-    shutOffPressurePa: total,
-    shutOffHeadM: total / (rho * G),
-  }, steps, warnings);
+  return finish(
+    {
+      closureVelocityMs: vel,
+      velocityFrom: from,
+      waveSpeedMs: c,
+      roundTripS: tr,
+      closure: slow ? 'slow' : 'sudden',
+      staticPressurePa: stat,
+      surgePa: surge,
+      shutOffPressurePa: total,
+      shutOffHeadM: total / (rho * G),
+    },
+    steps,
+    warnings,
+  );
 }

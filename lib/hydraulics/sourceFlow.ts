@@ -18,12 +18,14 @@ const base = {
 const bucketSchema = z.object({
   method: z.literal('bucket'),
   trials: z
-    .array(z.object({
-      /** volume caught, m³ (a 5-gallon bucket is 0.018927 m³) */
-      volumeM3: siNumber({ min: 0, minExclusive: true, max: 2, unit: 'm³' }),
-      /** time to fill, s */
-      timeS: siNumber({ min: 0.5, max: 3600, unit: 's' }),
-    }))
+    .array(
+      z.object({
+        /** volume caught, m³ (a 5-gallon bucket is 0.018927 m³) */
+        volumeM3: siNumber({ min: 0, minExclusive: true, max: 2, unit: 'm³' }),
+        /** time to fill, s */
+        timeS: siNumber({ min: 0.5, max: 3600, unit: 's' }),
+      }),
+    )
     .check(z.minLength(1), z.maxLength(50)),
   ...base,
 });
@@ -125,47 +127,136 @@ export function measureSourceFlow(input: SourceFlowInput): CalcOutput<SourceFlow
 
   if (v.method === 'bucket') {
     const q = v.trials.map((t) => t.volumeM3 / t.timeS);
-    v.trials.forEach((t, i) => steps.push(step(`Trial ${i + 1}`, 'q_i = \\frac{V_i}{t_i}', `q_{${i + 1}} = \\frac{${tq(t.volumeM3, 'm³')}}{${tq(t.timeS, 's')}}`, t.volumeM3 / t.timeS, 'm³/s', 'flow')));
+    v.trials.forEach((t, i) =>
+      steps.push(
+        step(
+          `Trial ${i + 1}`,
+          'q_i = \\frac{V_i}{t_i}',
+          `q_{${i + 1}} = \\frac{${tq(t.volumeM3, 'm³')}}{${tq(t.timeS, 's')}}`,
+          t.volumeM3 / t.timeS,
+          'm³/s',
+          'flow',
+        ),
+      ),
+    );
     const s = stats(q);
-    steps.push(step('Mean of the trials', '\\bar q = \\frac{1}{n}\\sum q_i', `\\bar q = \\frac{${q.map((x) => tq(x)).join(' + ')}}{${s.n}}`, s.meanM3s, 'm³/s', 'flow'));
-    steps.push(step('Spread (sample standard deviation)', 's = \\sqrt{\\frac{\\sum (q_i - \\bar q)^2}{n - 1}}', `s,\\; n = ${s.n}`, s.sdM3s, 'm³/s', 'flow'));
+    steps.push(
+      step(
+        'Mean of the trials',
+        '\\bar q = \\frac{1}{n}\\sum q_i',
+        `\\bar q = \\frac{${q.map((x) => tq(x)).join(' + ')}}{${s.n}}`,
+        s.meanM3s,
+        'm³/s',
+        'flow',
+      ),
+    );
+    steps.push(
+      step(
+        'Spread (sample standard deviation)',
+        's = \\sqrt{\\frac{\\sum (q_i - \\bar q)^2}{n - 1}}',
+        `s,\\; n = ${s.n}`,
+        s.sdM3s,
+        'm³/s',
+        'flow',
+      ),
+    );
     flow = s.meanM3s;
     results.stats = s;
-    if (s.n < 3) warnings.push(warn('few-trials', `Only ${s.n} trial${s.n === 1 ? '' : 's'}; time at least three fills and use the mean.`));
-    if (s.cv > 0.1) warnings.push(warn('bucket-spread-high', `The trials differ by ${(s.cv * 100).toFixed(0)} % (standard deviation over mean); check that all the flow goes into the bucket and time more fills.`));
+    if (s.n < 3)
+      warnings.push(
+        warn('few-trials', `Only ${s.n} trial${s.n === 1 ? '' : 's'}; time at least three fills and use the mean.`),
+      );
+    if (s.cv > 0.1)
+      warnings.push(
+        warn(
+          'bucket-spread-high',
+          `The trials differ by ${(s.cv * 100).toFixed(0)} % (standard deviation over mean); check that all the flow goes into the bucket and time more fills.`,
+        ),
+      );
   } else if (v.method === 'v-notch') {
     const { ce, khFt } = weirCoefficients(v.angleDeg);
     flow = vNotchFlow(v.notchHeadM, v.angleDeg);
     const hFt = toFeet(v.notchHeadM);
-    steps.push(step('V-notch discharge (Kindsvater-Shen)', 'Q = 4.28\\,C_e\\tan\\tfrac{\\theta}{2}\\,(h_1 + k_h)^{2.5}',
-      `Q = 4.28 \\times ${tq(ce)} \\times \\tan ${tq(v.angleDeg / 2)}^{\\circ} \\times (${tq(hFt, 'ft')} + ${tq(khFt, 'ft')})^{2.5}`, flow, 'm³/s', 'flow',
-      'USBR Water Measurement Manual ch. 7; result in ft³/s converted to m³/s.'));
+    steps.push(
+      step(
+        'V-notch discharge (Kindsvater-Shen)',
+        'Q = 4.28\\,C_e\\tan\\tfrac{\\theta}{2}\\,(h_1 + k_h)^{2.5}',
+        `Q = 4.28 \\times ${tq(ce)} \\times \\tan ${tq(v.angleDeg / 2)}^{\\circ} \\times (${tq(hFt, 'ft')} + ${tq(khFt, 'ft')})^{2.5}`,
+        flow,
+        'm³/s',
+        'flow',
+        'USBR Water Measurement Manual ch. 7; result in ft³/s converted to m³/s.',
+      ),
+    );
     const khM = fromFeet(khFt);
     results.weir = { ce, khM };
     if (v.angleDeg === 90) {
       const u = vNotch90Usbr(v.notchHeadM);
       results.weir.usbr90M3s = u;
-      steps.push(step('Cross-check: USBR 90° equation', 'Q = 2.49\\,h_1^{2.48}', `Q = 2.49 \\times (${tq(hFt, 'ft')})^{2.48}`, u, 'm³/s', 'flow'));
+      steps.push(
+        step(
+          'Cross-check: USBR 90° equation',
+          'Q = 2.49\\,h_1^{2.48}',
+          `Q = 2.49 \\times (${tq(hFt, 'ft')})^{2.48}`,
+          u,
+          'm³/s',
+          'flow',
+        ),
+      );
     }
     const lim = weirLimits();
     if (v.notchHeadM < lim.minHeadM || v.notchHeadM > lim.maxHeadM) {
-      warnings.push(warn('weir-head-out-of-range', `A head of ${(v.notchHeadM * 1000).toFixed(0)} mm is outside the 61–381 mm (0.2–1.25 ft) the weir equations hold for; ${v.notchHeadM < lim.minHeadM ? 'use a narrower notch' : 'use a wider notch or a larger weir'}.`));
+      warnings.push(
+        warn(
+          'weir-head-out-of-range',
+          `A head of ${(v.notchHeadM * 1000).toFixed(0)} mm is outside the 61–381 mm (0.2–1.25 ft) the weir equations hold for; ${v.notchHeadM < lim.minHeadM ? 'use a narrower notch' : 'use a wider notch or a larger weir'}.`,
+        ),
+      );
     }
     const P = v.crestHeightM;
     const B = v.approachWidthM;
-    if ((P !== undefined && (v.notchHeadM / P > 0.4 || P < lim.minCrestM)) || (B !== undefined && (v.notchHeadM / B > 0.2 || B < lim.minWidthM))) {
-      warnings.push(warn('weir-not-fully-contracted', 'The pool behind the weir is too shallow or narrow for a fully contracted notch (h/P ≤ 0.4, h/B ≤ 0.2, P ≥ 0.46 m, B ≥ 0.91 m); the reading will run a few per cent low or high.'));
+    if (
+      (P !== undefined && (v.notchHeadM / P > 0.4 || P < lim.minCrestM)) ||
+      (B !== undefined && (v.notchHeadM / B > 0.2 || B < lim.minWidthM))
+    ) {
+      warnings.push(
+        warn(
+          'weir-not-fully-contracted',
+          'The pool behind the weir is too shallow or narrow for a fully contracted notch (h/P ≤ 0.4, h/B ≤ 0.2, P ≥ 0.46 m, B ≥ 0.91 m); the reading will run a few per cent low or high.',
+        ),
+      );
     }
   } else {
     const vs = v.timesS.map((t) => v.distanceM / t);
     const s = stats(vs);
     const vMean = s.meanM3s;
-    steps.push(step('Surface velocity (mean of runs)', 'v_s = \\frac{1}{n}\\sum \\frac{L}{t_i}', `v_s = \\frac{1}{${s.n}}\\sum \\frac{${tq(v.distanceM, 'm')}}{t_i}`, vMean, 'm/s', 'velocity'));
+    steps.push(
+      step(
+        'Surface velocity (mean of runs)',
+        'v_s = \\frac{1}{n}\\sum \\frac{L}{t_i}',
+        `v_s = \\frac{1}{${s.n}}\\sum \\frac{${tq(v.distanceM, 'm')}}{t_i}`,
+        vMean,
+        'm/s',
+        'velocity',
+      ),
+    );
     flow = v.coefficient * vMean * v.widthM * v.meanDepthM;
-    steps.push(step('Flow (float method)', 'Q = k\\,v_s\\,w\\,\\bar d', `Q = ${tq(v.coefficient)} \\times ${tq(vMean, 'm/s')} \\times ${tq(v.widthM, 'm')} \\times ${tq(v.meanDepthM, 'm')}`, flow, 'm³/s', 'flow',
-      'k = 0.85 typical: USGS WSP 2175 (Rantz et al. 1982), from memory.'));
+    steps.push(
+      step(
+        'Flow (float method)',
+        'Q = k\\,v_s\\,w\\,\\bar d',
+        `Q = ${tq(v.coefficient)} \\times ${tq(vMean, 'm/s')} \\times ${tq(v.widthM, 'm')} \\times ${tq(v.meanDepthM, 'm')}`,
+        flow,
+        'm³/s',
+        'flow',
+        'k = 0.85 typical: USGS WSP 2175 (Rantz et al. 1982), from memory.',
+      ),
+    );
     results.surfaceVelocityMs = vMean;
-    if (s.n < 3) warnings.push(warn('few-trials', `Only ${s.n} float run${s.n === 1 ? '' : 's'}; time at least three and use the mean.`));
+    if (s.n < 3)
+      warnings.push(
+        warn('few-trials', `Only ${s.n} float run${s.n === 1 ? '' : 's'}; time at least three and use the mean.`),
+      );
   }
 
   results.flowM3s = flow;
@@ -173,13 +264,36 @@ export function measureSourceFlow(input: SourceFlowInput): CalcOutput<SourceFlow
   if (v.plannedDrawM3s !== undefined) {
     const share = v.plannedDrawM3s / flow;
     results.planShare = share;
-    steps.push(step('Share of the flow the plan takes', '\\frac{Q_{plan}}{Q_{source}}', `\\frac{${tq(v.plannedDrawM3s, 'm³/s')}}{${tq(flow, 'm³/s')}}`, share, ''));
+    steps.push(
+      step(
+        'Share of the flow the plan takes',
+        '\\frac{Q_{plan}}{Q_{source}}',
+        `\\frac{${tq(v.plannedDrawM3s, 'm³/s')}}{${tq(flow, 'm³/s')}}`,
+        share,
+        '',
+      ),
+    );
     if (share > 1) {
-      warnings.push(warn('plan-exceeds-source', `The plan needs ${(share * 100).toFixed(0)} % of the measured flow; the intake will run dry and draw air. Measure again in the driest month and plan for less.`));
+      warnings.push(
+        warn(
+          'plan-exceeds-source',
+          `The plan needs ${(share * 100).toFixed(0)} % of the measured flow; the intake will run dry and draw air. Measure again in the driest month and plan for less.`,
+        ),
+      );
     } else if (share > PRACTICE.sourceShareCaution.value) {
-      warnings.push(warn('plan-takes-large-share', `The plan takes ${(share * 100).toFixed(0)} % of the measured flow, more than the ${PRACTICE.sourceShareCaution.value * 100} % the engine allows for (${PRACTICE.sourceShareCaution.source}); in a dry month the source may not keep up, and the reach between intake and waste outlet runs low.`));
+      warnings.push(
+        warn(
+          'plan-takes-large-share',
+          `The plan takes ${(share * 100).toFixed(0)} % of the measured flow, more than the ${PRACTICE.sourceShareCaution.value * 100} % the engine allows for (${PRACTICE.sourceShareCaution.source}); in a dry month the source may not keep up, and the reach between intake and waste outlet runs low.`,
+        ),
+      );
     }
-    warnings.push(warn('diversion-rules', `The plan takes ${(share * 100).toFixed(0)} % of the stream through the pumps (most returns below the pump). Local rules decide how much may be diverted, and whether water rights or a permit are needed.`));
+    warnings.push(
+      warn(
+        'diversion-rules',
+        `The plan takes ${(share * 100).toFixed(0)} % of the stream through the pumps (most returns below the pump). Local rules decide how much may be diverted, and whether water rights or a permit are needed.`,
+      ),
+    );
   }
   return finish(results as SourceFlowResults, steps, warnings);
 }

@@ -45,12 +45,22 @@ export const siteSheetSchema = z.object({
 });
 
 export const stallCheckSchema = z
-  .object({ site: siteSheetSchema, symptoms: z._default(z.array(z.enum(SYMPTOMS)).check(z.maxLength(SYMPTOMS.length)), []) })
-  .check(z.superRefine((v, ctx) => {
-    if (v.site.liftM <= v.site.fallM) {
-      addRangeIssue(ctx, ['site', 'liftM'], `must be greater than the fall (${v.site.fallM} m)`, { min: v.site.fallM, minExclusive: true, max: 1000, unit: 'm' });
-    }
-  }));
+  .object({
+    site: siteSheetSchema,
+    symptoms: z._default(z.array(z.enum(SYMPTOMS)).check(z.maxLength(SYMPTOMS.length)), []),
+  })
+  .check(
+    z.superRefine((v, ctx) => {
+      if (v.site.liftM <= v.site.fallM) {
+        addRangeIssue(ctx, ['site', 'liftM'], `must be greater than the fall (${v.site.fallM} m)`, {
+          min: v.site.fallM,
+          minExclusive: true,
+          max: 1000,
+          unit: 'm',
+        });
+      }
+    }),
+  );
 
 export type StallCheckInput = z.input<typeof stallCheckSchema>;
 
@@ -84,7 +94,9 @@ type Evidence = { state: 'problem' | 'ok' | 'unknown'; strength?: number; reason
 const BPM_RANGE = [PRACTICE.beatsPerMinuteMin.value, PRACTICE.beatsPerMinuteMax.value] as const;
 
 function score(code: StallCauseCode, symptoms: readonly Symptom[], ev: Evidence): number {
-  const weights = symptoms.map((s) => (STALL_CAUSES[code].symptoms as Partial<Record<Symptom, number>>)[s] ?? 0).filter((w) => w > 0);
+  const weights = symptoms
+    .map((s) => (STALL_CAUSES[code].symptoms as Partial<Record<Symptom, number>>)[s] ?? 0)
+    .filter((w) => w > 0);
   const sym = weights.length ? Math.max(...weights) + 0.1 * (weights.length - 1) : 0;
   let s: number;
   if (ev.state === 'problem') s = 0.4 * (ev.strength ?? 1) + 0.6 * sym;
@@ -171,11 +183,22 @@ export function runStallCheck(input: StallCheckInput): CalcOutput<StallCheckResu
 
   const eps = roughnessOf(dp);
   const straight = estimateDriveFlow({ fallM: H, pumpHeadM: h, lengthM: L, insideDiameterM: D, roughnessM: eps, nu });
-  const actual = k > 0 ? estimateDriveFlow({ fallM: H, pumpHeadM: h, lengthM: L, insideDiameterM: D, roughnessM: eps, nu, fittingsK: k }) : straight;
+  const actual =
+    k > 0
+      ? estimateDriveFlow({ fallM: H, pumpHeadM: h, lengthM: L, insideDiameterM: D, roughnessM: eps, nu, fittingsK: k })
+      : straight;
   const qEach = s.driveFlowM3s ?? actual.driveFlowM3s;
   const totalDrive = qEach * s.pumpCount;
-  steps.push(step(s.driveFlowM3s === undefined ? 'Drive flow of all pumps (estimated)' : 'Drive flow of all pumps (measured)', 'Q = n\\,Q_1',
-    `Q = ${s.pumpCount} \\times ${tq(qEach, 'm³/s')}`, totalDrive, 'm³/s', 'flow'));
+  steps.push(
+    step(
+      s.driveFlowM3s === undefined ? 'Drive flow of all pumps (estimated)' : 'Drive flow of all pumps (measured)',
+      'Q = n\\,Q_1',
+      `Q = ${s.pumpCount} \\times ${tq(qEach, 'm³/s')}`,
+      totalDrive,
+      'm³/s',
+      'flow',
+    ),
+  );
 
   if (s.sourceSpareFlowM3s !== undefined) {
     const share = totalDrive / s.sourceSpareFlowM3s;
@@ -185,7 +208,10 @@ export function runStallCheck(input: StallCheckInput): CalcOutput<StallCheckResu
       reason: `The pumps use ${lpm(totalDrive)}${s.driveFlowM3s === undefined ? ' (estimated)' : ''}, ${(share * 100).toFixed(0)} % of the ${lpm(s.sourceSpareFlowM3s)} the source spares${share > 0.9 ? '; the intake draws down and sucks air' : ''}.`,
     };
   } else {
-    ev['drive-flow-above-source'] = { state: 'unknown', reason: `The pumps use about ${lpm(totalDrive)}; measure what the source spares in the driest month to compare.` };
+    ev['drive-flow-above-source'] = {
+      state: 'unknown',
+      reason: `The pumps use about ${lpm(totalDrive)}; measure what the source spares in the driest month to compare.`,
+    };
   }
 
   const r = h / H;
@@ -198,7 +224,10 @@ export function runStallCheck(input: StallCheckInput): CalcOutput<StallCheckResu
     reason: `The lift is ${f2(r, 1)} times the fall; a ${s.pumpType} ram is expected to manage up to about ${rMax} times, and its typical efficiency here is ${f2(band.typical)}.`,
   };
 
-  const c = dp.wallThicknessM !== undefined ? waveSpeed(water.bulkModulusPa, water.densityKgM3, D, mat.youngsModulusPa, dp.wallThicknessM) : undefined;
+  const c =
+    dp.wallThicknessM !== undefined
+      ? waveSpeed(water.bulkModulusPa, water.densityKgM3, D, mat.youngsModulusPa, dp.wallThicknessM)
+      : undefined;
   const cRigid = Math.sqrt(water.bulkModulusPa / water.densityKgM3);
   ev['flexible-drive-pipe'] = {
     state: mat.rigid ? 'ok' : 'problem',
@@ -208,7 +237,15 @@ export function runStallCheck(input: StallCheckInput): CalcOutput<StallCheckResu
   };
 
   const bpmModel = actual.beatsPerMinute;
-  steps.push(step('Beat rate the model expects', 'n = \\frac{60}{t_a + t_d}', `n = \\frac{60}{${tq(actual.cycleTimeS, 's')}}`, bpmModel, ''));
+  steps.push(
+    step(
+      'Beat rate the model expects',
+      'n = \\frac{60}{t_a + t_d}',
+      `n = \\frac{60}{${tq(actual.cycleTimeS, 's')}}`,
+      bpmModel,
+      '',
+    ),
+  );
   const size = s.pumpSize;
   const sizeRange = size ? typicalDriveFlow(size) : undefined;
   if (s.beatsPerMinute !== undefined) {
@@ -219,13 +256,22 @@ export function runStallCheck(input: StallCheckInput): CalcOutput<StallCheckResu
       strength: 0.7,
       reason: `It beats ${s.beatsPerMinute.toFixed(0)} times a minute (usual ${BPM_RANGE[0]}–${BPM_RANGE[1]}; the model expects about ${bpmModel.toFixed(0)} for this fall and drive pipe)${out ? (fast ? ': a short stroke or light valve shuts before the water gains speed' : ': a long stroke or heavy valve wastes water between beats') : ''}.`,
     };
-  } else if (size && sizeRange && s.driveFlowM3s !== undefined && (s.driveFlowM3s > sizeRange.highM3s || s.driveFlowM3s < sizeRange.lowM3s)) {
+  } else if (
+    size &&
+    sizeRange &&
+    s.driveFlowM3s !== undefined &&
+    (s.driveFlowM3s > sizeRange.highM3s || s.driveFlowM3s < sizeRange.lowM3s)
+  ) {
     ev['waste-valve-setting'] = {
-      state: 'problem', strength: 0.5,
+      state: 'problem',
+      strength: 0.5,
       reason: `The measured drive flow, ${lpm(s.driveFlowM3s)}, is outside the ${lpm(sizeRange.lowM3s)}–${lpm(sizeRange.highM3s)} typical of a ${NOMINAL_LABELS[size]} pump (common practice, no published source found); the waste valve's stroke or weight sets it.`,
     };
   } else {
-    ev['waste-valve-setting'] = { state: 'unknown', reason: `Count the beats per minute: the model expects about ${bpmModel.toFixed(0)} for this fall and drive pipe; far off that, reset the stroke and weight.` };
+    ev['waste-valve-setting'] = {
+      state: 'unknown',
+      reason: `Count the beats per minute: the model expects about ${bpmModel.toFixed(0)} for this fall and drive pipe; far off that, reset the stroke and weight.`,
+    };
   }
 
   const expected = (band.typical * totalDrive * H) / h;
@@ -233,44 +279,102 @@ export function runStallCheck(input: StallCheckInput): CalcOutput<StallCheckResu
   if (s.deliveredFlowM3s !== undefined && s.deliveredFlowM3s * h > totalDrive * H) {
     if (s.driveFlowM3s !== undefined) {
       const maxQ = (totalDrive * H) / h;
-      throw new EngineInputError([{ field: 'site.deliveredFlowM3s', message: `implies an efficiency above 1 with the measured drive flow; at this fall and lift it can be at most ${maxQ.toPrecision(4)} m³/s — check the measurements`, range: { min: 0, minExclusive: true, max: maxQ, unit: 'm³/s' } }]);
+      throw new EngineInputError([
+        {
+          field: 'site.deliveredFlowM3s',
+          message: `implies an efficiency above 1 with the measured drive flow; at this fall and lift it can be at most ${maxQ.toPrecision(4)} m³/s — check the measurements`,
+          range: { min: 0, minExclusive: true, max: maxQ, unit: 'm³/s' },
+        },
+      ]);
     }
-    ev['delivery-valve-or-snifter'] = { state: 'unknown', reason: `It delivers ${lpm(s.deliveredFlowM3s)}, more than the estimated drive flow of ${lpm(totalDrive)} could lift; measure the drive flow at the waste valve.` };
+    ev['delivery-valve-or-snifter'] = {
+      state: 'unknown',
+      reason: `It delivers ${lpm(s.deliveredFlowM3s)}, more than the estimated drive flow of ${lpm(totalDrive)} could lift; measure the drive flow at the waste valve.`,
+    };
   } else if (s.deliveredFlowM3s !== undefined) {
     measuredEff = dAubuissonEfficiency(totalDrive, s.deliveredFlowM3s, H, h);
-    steps.push(step("Measured efficiency (D'Aubuisson)", '\\eta_D = \\frac{q\\,h}{Q\\,H}',
-      `\\eta_D = \\frac{${tq(s.deliveredFlowM3s, 'm³/s')} \\times ${tq(h, 'm')}}{${tq(totalDrive, 'm³/s')} \\times ${tq(H, 'm')}}`, measuredEff, ''));
+    steps.push(
+      step(
+        "Measured efficiency (D'Aubuisson)",
+        '\\eta_D = \\frac{q\\,h}{Q\\,H}',
+        `\\eta_D = \\frac{${tq(s.deliveredFlowM3s, 'm³/s')} \\times ${tq(h, 'm')}}{${tq(totalDrive, 'm³/s')} \\times ${tq(H, 'm')}}`,
+        measuredEff,
+        '',
+      ),
+    );
     const low = measuredEff < band.low;
     ev['delivery-valve-or-snifter'] = {
-      state: low ? 'problem' : 'ok', strength: 0.6,
+      state: low ? 'problem' : 'ok',
+      strength: 0.6,
       reason: `It delivers ${lpm(s.deliveredFlowM3s)}, an efficiency of ${f2(measuredEff)} against a typical ${f2(band.low)}–${f2(band.high)}${low ? '; a leaking or sticking delivery valve returns water at every beat' : ''}.`,
     };
   } else {
-    ev['delivery-valve-or-snifter'] = { state: 'unknown', reason: `Expected delivery is about ${lpm(expected)}; measure it at the tank, and check the delivery valve seats and the snifter hole.` };
+    ev['delivery-valve-or-snifter'] = {
+      state: 'unknown',
+      reason: `Expected delivery is about ${lpm(expected)}; measure it at the tank, and check the delivery valve seats and the snifter hole.`,
+    };
   }
 
   if (s.intakeSubmergenceM !== undefined) {
     const fr = straight.fullFlowVelocityMs / Math.sqrt(G * D);
     const need = D * (1 + 2.3 * fr);
-    steps.push(step('Intake submergence needed (HI 9.8)', 'S = D\\,(1 + 2.3\\,Fr),\\; Fr = \\frac{v}{\\sqrt{gD}}', `S = ${tq(D, 'm')} \\times (1 + 2.3 \\times ${tq(fr)})`, need, 'm', 'length'));
+    steps.push(
+      step(
+        'Intake submergence needed (HI 9.8)',
+        'S = D\\,(1 + 2.3\\,Fr),\\; Fr = \\frac{v}{\\sqrt{gD}}',
+        `S = ${tq(D, 'm')} \\times (1 + 2.3 \\times ${tq(fr)})`,
+        need,
+        'm',
+        'length',
+      ),
+    );
     ev['air-in-drive-pipe'] = {
       state: s.intakeSubmergenceM < need ? 'problem' : 'ok',
       reason: `The drive pipe's mouth is ${f2(s.intakeSubmergenceM)} m under the surface; at ${f2(straight.fullFlowVelocityMs)} m/s it needs about ${f2(need)} m to keep a vortex from drawing air${s.intakeSubmergenceM < need ? '' : ' — enough'}.`,
     };
   } else {
-    ev['air-in-drive-pipe'] = { state: 'unknown', reason: 'Check that the drive pipe falls steadily with no high points, its joints are tight and its mouth is well under water.' };
+    ev['air-in-drive-pipe'] = {
+      state: 'unknown',
+      reason:
+        'Check that the drive pipe falls steadily with no high points, its joints are tight and its mouth is well under water.',
+    };
   }
 
-  ev['flooded-waste-outlet'] = s.wasteOutletSubmerged === undefined
-    ? { state: 'unknown', reason: 'Check that the waste water falls clear of the valve and the stream has not risen over it.' }
-    : { state: s.wasteOutletSubmerged ? 'problem' : 'ok', reason: s.wasteOutletSubmerged ? 'The waste outlet is under water: the valve cannot open fully against the backed-up water.' : 'The waste outlet discharges clear.' };
-  ev.debris = s.screenAtIntake === undefined
-    ? { state: 'unknown', reason: 'Look for leaves, grit or a frog in the intake, the drive pipe and both valves.' }
-    : { state: s.screenAtIntake ? 'ok' : 'problem', strength: 0.5, reason: s.screenAtIntake ? 'The intake is screened; still check the screen is clear.' : 'The intake has no screen, so leaves and grit reach the valves.' };
-  ev['waterlogged-air-chamber'] = { state: 'unknown', reason: 'Without air the chamber cannot cushion the beat: drain it and check the snifter or bladder.' };
-  ev['frozen-line'] = s.frostRisk === undefined
-    ? { state: 'unknown', reason: 'In frost, ice in an exposed delivery line stops the flow.' }
-    : { state: s.frostRisk ? 'problem' : 'ok', reason: s.frostRisk ? 'The site freezes: an exposed or shallow delivery line freezes first.' : 'The site sheet says it does not freeze.' };
+  ev['flooded-waste-outlet'] =
+    s.wasteOutletSubmerged === undefined
+      ? {
+          state: 'unknown',
+          reason: 'Check that the waste water falls clear of the valve and the stream has not risen over it.',
+        }
+      : {
+          state: s.wasteOutletSubmerged ? 'problem' : 'ok',
+          reason: s.wasteOutletSubmerged
+            ? 'The waste outlet is under water: the valve cannot open fully against the backed-up water.'
+            : 'The waste outlet discharges clear.',
+        };
+  ev.debris =
+    s.screenAtIntake === undefined
+      ? { state: 'unknown', reason: 'Look for leaves, grit or a frog in the intake, the drive pipe and both valves.' }
+      : {
+          state: s.screenAtIntake ? 'ok' : 'problem',
+          strength: 0.5,
+          reason: s.screenAtIntake
+            ? 'The intake is screened; still check the screen is clear.'
+            : 'The intake has no screen, so leaves and grit reach the valves.',
+        };
+  ev['waterlogged-air-chamber'] = {
+    state: 'unknown',
+    reason: 'Without air the chamber cannot cushion the beat: drain it and check the snifter or bladder.',
+  };
+  ev['frozen-line'] =
+    s.frostRisk === undefined
+      ? { state: 'unknown', reason: 'In frost, ice in an exposed delivery line stops the flow.' }
+      : {
+          state: s.frostRisk ? 'problem' : 'ok',
+          reason: s.frostRisk
+            ? 'The site freezes: an exposed or shallow delivery line freezes first.'
+            : 'The site sheet says it does not freeze.',
+        };
   ev['fall-too-small'] = {
     state: H < 0.5 ? 'problem' : 'ok',
     reason: `The fall is ${f2(H)} m; most rams need at least 0.5 m (Water for the World RWS.4.D.5).`,
@@ -278,9 +382,14 @@ export function runStallCheck(input: StallCheckInput): CalcOutput<StallCheckResu
 
   const vc = straight.closureVelocityMs * (qEach / straight.driveFlowM3s);
   const dH = (k * vc * vc) / (2 * G);
-  ev['fittings-in-drive-pipe'] = k > 0
-    ? { state: 'problem', strength: Math.min(1, (5 * dH) / H), reason: `Fittings in the drive pipe (ΣK = ${f2(k)}) take about ${f2(dH, 3)} m of the ${f2(H, 3)} m fall (${((dH / H) * 100).toFixed(1)} %) at the closing velocity of ${f2(vc)} m/s.` }
-    : { state: 'ok', reason: 'The site sheet lists no fittings in the drive pipe.' };
+  ev['fittings-in-drive-pipe'] =
+    k > 0
+      ? {
+          state: 'problem',
+          strength: Math.min(1, (5 * dH) / H),
+          reason: `Fittings in the drive pipe (ΣK = ${f2(k)}) take about ${f2(dH, 3)} m of the ${f2(H, 3)} m fall (${((dH / H) * 100).toFixed(1)} %) at the closing velocity of ${f2(vc)} m/s.`,
+        }
+      : { state: 'ok', reason: 'The site sheet lists no fittings in the drive pipe.' };
 
   if (s.deliveryLine) {
     const q = s.deliveredFlowM3s ?? expected;
@@ -292,26 +401,48 @@ export function runStallCheck(input: StallCheckInput): CalcOutput<StallCheckResu
       reason: `At ${lpm(q)} the delivery line loses ${f2(loss, 3)} m, ${((loss / h) * 100).toFixed(1)} % of the lift${loss > 0.1 * h ? ' — more than the 10 % usually allowed' : ''}.`,
     };
   } else {
-    ev['delivery-line-friction'] = { state: 'unknown', reason: 'Add the delivery line to the site sheet to check its friction.' };
+    ev['delivery-line-friction'] = {
+      state: 'unknown',
+      reason: 'Add the delivery line to the site sheet to check its friction.',
+    };
   }
-  ev['start-procedure'] = { state: 'unknown', reason: 'Fill the delivery line from below, then work the waste valve by hand until it keeps beating on its own.' };
+  ev['start-procedure'] = {
+    state: 'unknown',
+    reason: 'Fill the delivery line from below, then work the waste valve by hand until it keeps beating on its own.',
+  };
 
   const causes: StallCause[] = (Object.keys(ev) as StallCauseCode[])
     .map((code) => ({
-      code, title: STALL_CAUSES[code].title, reason: ev[code].reason, score: score(code, sym, ev[code]),
-      guide: STALL_CAUSES[code].guide, fromNumbers: ev[code].state === 'problem',
+      code,
+      title: STALL_CAUSES[code].title,
+      reason: ev[code].reason,
+      score: score(code, sym, ev[code]),
+      guide: STALL_CAUSES[code].guide,
+      fromNumbers: ev[code].state === 'problem',
     }))
     .filter((x) => x.score > 0)
     .sort((a, b) => b.score - a.score || a.code.localeCompare(b.code));
 
   if (s.wasteOutletSubmerged) {
-    warnings.push(warn('high-water-safety', 'A flooded pump means high water: streams rise fast and banks are slippery. Never work on the pump alone or in high water.'));
+    warnings.push(
+      warn(
+        'high-water-safety',
+        'A flooded pump means high water: streams rise fast and banks are slippery. Never work on the pump alone or in high water.',
+      ),
+    );
   }
   if (sym.includes('hammering') || sym.includes('waterlogged-air-chamber')) {
-    warnings.push(warn('air-chamber-safety', 'An air chamber holds stored energy, and a ram beating against a closed valve keeps charging it. Stop the ram first (close the drive pipe\'s valve or hold the waste valve shut), then isolate the delivery, then bleed the chamber through a bleed valve of its own while watching a pressure gauge on the pump side, before opening anything. Never use glass or unrated parts.'));
+    warnings.push(
+      warn(
+        'air-chamber-safety',
+        "An air chamber holds stored energy, and a ram beating against a closed valve keeps charging it. Stop the ram first (close the drive pipe's valve or hold the waste valve shut), then isolate the delivery, then bleed the chamber through a bleed valve of its own while watching a pressure gauge on the pump side, before opening anything. Never use glass or unrated parts.",
+      ),
+    );
   }
   if (sym.includes('delivery-stops-in-frost') || s.frostRisk) {
-    warnings.push(warn('frost-risk', 'Freezing splits pumps and pipe: drain what you cannot bury below the frost depth.'));
+    warnings.push(
+      warn('frost-risk', 'Freezing splits pumps and pipe: drain what you cannot bury below the frost depth.'),
+    );
   }
 
   const results: StallCheckResults = {

@@ -175,8 +175,16 @@ const ALIASES: Record<string, string> = {
 };
 
 const VULGAR: Record<string, string> = {
-  '½': ' 1/2', '⅓': ' 1/3', '⅔': ' 2/3', '¼': ' 1/4', '¾': ' 3/4',
-  '⅕': ' 1/5', '⅛': ' 1/8', '⅜': ' 3/8', '⅝': ' 5/8', '⅞': ' 7/8',
+  '½': ' 1/2',
+  '⅓': ' 1/3',
+  '⅔': ' 2/3',
+  '¼': ' 1/4',
+  '¾': ' 3/4',
+  '⅕': ' 1/5',
+  '⅛': ' 1/8',
+  '⅜': ' 3/8',
+  '⅝': ' 5/8',
+  '⅞': ' 7/8',
 };
 
 /** Exact re-definitions (NIST SP 811 B.8; NIST Handbook 44 App. C) through js-quantities' exact base units. */
@@ -196,8 +204,13 @@ let corrections: Record<string, number> | undefined;
 function correctionTable(): Record<string, number> {
   if (corrections) return corrections;
   const unitOf: Record<string, string> = {
-    '<gallon>': 'gal', '<quart>': 'qt', '<pint>': 'pint', '<cup>': 'cup',
-    '<fluid-ounce>': 'floz', '<pound-force>': 'lbf', '<psi>': 'psi',
+    '<gallon>': 'gal',
+    '<quart>': 'qt',
+    '<pint>': 'pint',
+    '<cup>': 'cup',
+    '<fluid-ounce>': 'floz',
+    '<pound-force>': 'lbf',
+    '<psi>': 'psi',
   };
   const table: Record<string, number> = {};
   for (const [name, def] of Object.entries(EXACT_DEFINITIONS)) {
@@ -229,7 +242,11 @@ function canonicalUnit(raw: string): string {
 }
 
 function canonicalise(raw: string): string {
-  let u = raw.trim().replace(/\s+per\s+/gi, '/').replace(/\s*\/\s*/g, '/').replace(/\s+/g, ' ');
+  let u = raw
+    .trim()
+    .replace(/\s+per\s+/gi, '/')
+    .replace(/\s*\/\s*/g, '/')
+    .replace(/\s+/g, ' ');
   u = u.replace(/³/g, '^3').replace(/²/g, '^2').replace(/·/g, '*');
   return ALIASES[u.toLowerCase()] ?? u;
 }
@@ -279,7 +296,12 @@ function checkKind(unit: string, kind: QuantityKind): boolean {
 export function toSI(value: number, unit: string, kind: QuantityKind, field = 'unit'): number {
   const u = canonicalUnit(unit);
   if (!checkKind(u, kind)) {
-    throw new EngineInputError([{ field, message: `"${unit}" is not a unit of ${kindWords(kind)}; try ${UNIT_CHOICES[kind].filter(Boolean).join(', ')}` }]);
+    throw new EngineInputError([
+      {
+        field,
+        message: `"${unit}" is not a unit of ${kindWords(kind)}; try ${UNIT_CHOICES[kind].filter(Boolean).join(', ')}`,
+      },
+    ]);
   }
   if (kind === 'temperature') return Qty(value, u).to('tempC').scalar;
   return (value * baseFactor(u)) / baseFactor(SI_UNIT[kind]);
@@ -299,9 +321,20 @@ export function fromSI(si: number, unit: string, kind: QuantityKind): number {
 
 function kindWords(kind: QuantityKind): string {
   const words: Record<QuantityKind, string> = {
-    length: 'length', smallLength: 'length', flow: 'flow', smallFlow: 'flow', area: 'area', volume: 'volume',
-    dailyVolume: 'volume per day', pressure: 'pressure', velocity: 'velocity', time: 'time',
-    power: 'power', modulus: 'stiffness (pressure units)', temperature: 'temperature', dimensionless: 'a plain number',
+    length: 'length',
+    smallLength: 'length',
+    flow: 'flow',
+    smallFlow: 'flow',
+    area: 'area',
+    volume: 'volume',
+    dailyVolume: 'volume per day',
+    pressure: 'pressure',
+    velocity: 'velocity',
+    time: 'time',
+    power: 'power',
+    modulus: 'stiffness (pressure units)',
+    temperature: 'temperature',
+    dimensionless: 'a plain number',
   };
   return words[kind];
 }
@@ -346,7 +379,12 @@ export function parseQuantity(input: QuantityInput, kind: QuantityKind, field = 
   } else if (typeof input === 'string') {
     const parts = splitNumber(input);
     if (!parts) {
-      throw new EngineInputError([{ field, message: `could not read "${input}" as a ${kindWords(kind)}; type a number and a unit, e.g. ${exampleFor(kind)}` }]);
+      throw new EngineInputError([
+        {
+          field,
+          message: `could not read "${input}" as a ${kindWords(kind)}; type a number and a unit, e.g. ${exampleFor(kind)}`,
+        },
+      ]);
     }
     value = parts.value;
     unit = parts.unit;
@@ -400,7 +438,8 @@ export function fromDisplay(kind: QuantityKind, value: number, system: UnitSyste
 }
 
 /** Field names that hold small lengths (diameters, walls, roughness, weir heads) shown in mm or in. */
-const SMALL_LENGTH_FIELD = /(Diameter|WallThickness|Roughness|NotchHead|Depth|DepthPerWeek|diameter|wallThickness|roughness|notchHead)M$/;
+const SMALL_LENGTH_FIELD =
+  /(Diameter|WallThickness|Roughness|NotchHead|Depth|DepthPerWeek|diameter|wallThickness|roughness|notchHead)M$/;
 
 /**
  * The quantity kind of a schema or result field, from its SI suffix:

@@ -35,26 +35,53 @@ export const yieldEstimateSchema = z
     curvePoints: z._default(siNumber({ min: 5, max: 100, unit: '', integer: true }), 25),
     waterTempC: waterTempC(),
   })
-  .check(z.superRefine((v, ctx) => {
-    if (v.liftM <= v.fallM) {
-      addRangeIssue(ctx, ['liftM'], `must be greater than the fall (${v.fallM} m): a ram lifts water above its source`, {
-        min: v.fallM, minExclusive: true, max: 1000, unit: 'm',
-      });
-    }
-    const q = v.measuredDeliveredFlowM3s;
-    if (q !== undefined) {
-      if (q >= v.driveFlowM3s) {
-        addRangeIssue(ctx, ['measuredDeliveredFlowM3s'], 'must be less than the drive flow: a ram delivers only part of the water it uses', {
-          min: 0, minExclusive: true, max: v.driveFlowM3s, maxExclusive: true, unit: 'm³/s',
-        });
-      } else if (v.liftM > v.fallM && q * v.liftM > v.driveFlowM3s * v.fallM) {
-        const maxQ = (v.driveFlowM3s * v.fallM) / v.liftM;
-        addRangeIssue(ctx, ['measuredDeliveredFlowM3s'], `implies an efficiency above 1; at this fall and lift it can be at most ${maxQ.toPrecision(4)} m³/s — check the measurements`, {
-          min: 0, minExclusive: true, max: maxQ, unit: 'm³/s',
-        });
+  .check(
+    z.superRefine((v, ctx) => {
+      if (v.liftM <= v.fallM) {
+        addRangeIssue(
+          ctx,
+          ['liftM'],
+          `must be greater than the fall (${v.fallM} m): a ram lifts water above its source`,
+          {
+            min: v.fallM,
+            minExclusive: true,
+            max: 1000,
+            unit: 'm',
+          },
+        );
       }
-    }
-  }));
+      const q = v.measuredDeliveredFlowM3s;
+      if (q !== undefined) {
+        if (q >= v.driveFlowM3s) {
+          addRangeIssue(
+            ctx,
+            ['measuredDeliveredFlowM3s'],
+            'must be less than the drive flow: a ram delivers only part of the water it uses',
+            {
+              min: 0,
+              minExclusive: true,
+              max: v.driveFlowM3s,
+              maxExclusive: true,
+              unit: 'm³/s',
+            },
+          );
+        } else if (v.liftM > v.fallM && q * v.liftM > v.driveFlowM3s * v.fallM) {
+          const maxQ = (v.driveFlowM3s * v.fallM) / v.liftM;
+          addRangeIssue(
+            ctx,
+            ['measuredDeliveredFlowM3s'],
+            `implies an efficiency above 1; at this fall and lift it can be at most ${maxQ.toPrecision(4)} m³/s — check the measurements`,
+            {
+              min: 0,
+              minExclusive: true,
+              max: maxQ,
+              unit: 'm³/s',
+            },
+          );
+        }
+      }
+    }),
+  );
 
 export type YieldEstimateInput = z.input<typeof yieldEstimateSchema>;
 
@@ -85,7 +112,12 @@ export interface YieldEstimateResults {
  * given lift, so delivery falls as lift rises.
  */
 function deliveryCurve(
-  pumpType: PumpType, Q: number, H: number, h: number, etaUsed: number, points: number,
+  pumpType: PumpType,
+  Q: number,
+  H: number,
+  h: number,
+  etaUsed: number,
+  points: number,
 ): YieldCurvePoint[] {
   const rMax = maxLiftRatio(pumpType);
   const top = Math.min(rMax * H, Math.max(3 * h, 10 * H));
@@ -136,30 +168,66 @@ export function estimateYield(input: YieldEstimateInput): CalcOutput<YieldEstima
 
   const band = efficiencyBand(pumpType, r);
   const eta = v.efficiency ?? band.typical;
-  steps.push(step(
-    v.efficiency === undefined ? 'Typical efficiency at this lift ratio' : 'Efficiency (given)',
-    '\\eta',
-    v.efficiency === undefined
-      ? `\\eta_{\\text{typ}}(r = ${tq(r)}) = ${tq(band.typical)}\\quad(\\text{band } ${tq(band.low)}\\text{--}${tq(band.high)})`
-      : `\\eta = ${tq(eta)}`,
-    eta, '', undefined,
-    v.efficiency === undefined ? `Typical band for the pump type: ${EFFICIENCY_BANDS[pumpType].source}.` : undefined,
-  ));
+  steps.push(
+    step(
+      v.efficiency === undefined ? 'Typical efficiency at this lift ratio' : 'Efficiency (given)',
+      '\\eta',
+      v.efficiency === undefined
+        ? `\\eta_{\\text{typ}}(r = ${tq(r)}) = ${tq(band.typical)}\\quad(\\text{band } ${tq(band.low)}\\text{--}${tq(band.high)})`
+        : `\\eta = ${tq(eta)}`,
+      eta,
+      '',
+      undefined,
+      v.efficiency === undefined ? `Typical band for the pump type: ${EFFICIENCY_BANDS[pumpType].source}.` : undefined,
+    ),
+  );
 
   const q = (eta * Q * H) / h;
-  steps.push(step('Delivered flow', 'q = \\eta\\,Q\\,\\frac{H}{h}',
-    `q = ${tq(eta)} \\times ${tq(Q, 'm³/s')} \\times \\frac{${tq(H, 'm')}}{${tq(h, 'm')}}`, q, 'm³/s', 'flow'));
+  steps.push(
+    step(
+      'Delivered flow',
+      'q = \\eta\\,Q\\,\\frac{H}{h}',
+      `q = ${tq(eta)} \\times ${tq(Q, 'm³/s')} \\times \\frac{${tq(H, 'm')}}{${tq(h, 'm')}}`,
+      q,
+      'm³/s',
+      'flow',
+    ),
+  );
   const waste = Q - q;
   steps.push(step('Waste flow', 'Q_w = Q - q', `Q_w = ${tq(Q, 'm³/s')} - ${tq(q, 'm³/s')}`, waste, 'm³/s', 'flow'));
   const perDay = q * 86400;
-  steps.push(step('Delivered per day', 'V_{24h} = q \\times 86\\,400\\,\\mathrm{s}',
-    `V_{24h} = ${tq(q, 'm³/s')} \\times 86\\,400\\,\\mathrm{s}`, perDay, 'm³/day', 'dailyVolume'));
+  steps.push(
+    step(
+      'Delivered per day',
+      'V_{24h} = q \\times 86\\,400\\,\\mathrm{s}',
+      `V_{24h} = ${tq(q, 'm³/s')} \\times 86\\,400\\,\\mathrm{s}`,
+      perDay,
+      'm³/day',
+      'dailyVolume',
+    ),
+  );
   const pIn = rho * G * Q * H;
-  steps.push(step('Hydraulic power in', 'P_{in} = \\rho\\,g\\,Q\\,H',
-    `P_{in} = ${tq(rho, 'kg/m³')} \\times ${tq(G, 'm/s²')} \\times ${tq(Q, 'm³/s')} \\times ${tq(H, 'm')}`, pIn, 'W', 'power'));
+  steps.push(
+    step(
+      'Hydraulic power in',
+      'P_{in} = \\rho\\,g\\,Q\\,H',
+      `P_{in} = ${tq(rho, 'kg/m³')} \\times ${tq(G, 'm/s²')} \\times ${tq(Q, 'm³/s')} \\times ${tq(H, 'm')}`,
+      pIn,
+      'W',
+      'power',
+    ),
+  );
   const pOut = rho * G * q * h;
-  steps.push(step('Hydraulic power out', 'P_{out} = \\rho\\,g\\,q\\,h',
-    `P_{out} = ${tq(rho, 'kg/m³')} \\times ${tq(G, 'm/s²')} \\times ${tq(q, 'm³/s')} \\times ${tq(h, 'm')}`, pOut, 'W', 'power'));
+  steps.push(
+    step(
+      'Hydraulic power out',
+      'P_{out} = \\rho\\,g\\,q\\,h',
+      `P_{out} = ${tq(rho, 'kg/m³')} \\times ${tq(G, 'm/s²')} \\times ${tq(q, 'm³/s')} \\times ${tq(h, 'm')}`,
+      pOut,
+      'W',
+      'power',
+    ),
+  );
 
   let measured: YieldEstimateResults['measured'];
   const qm = v.measuredDeliveredFlowM3s;
@@ -167,23 +235,64 @@ export function estimateYield(input: YieldEstimateInput): CalcOutput<YieldEstima
     const d = dAubuissonEfficiency(Q, qm, H, h);
     const rk = rankineEfficiency(Q, qm, H, h);
     measured = { dAubuisson: d, rankine: rk };
-    steps.push(step("Measured efficiency (D'Aubuisson)", '\\eta_D = \\frac{q\\,h}{Q\\,H}',
-      `\\eta_D = \\frac{${tq(qm, 'm³/s')} \\times ${tq(h, 'm')}}{${tq(Q, 'm³/s')} \\times ${tq(H, 'm')}}`, d, ''));
-    steps.push(step('Measured efficiency (Rankine)', '\\eta_R = \\frac{q\\,(h - H)}{(Q - q)\\,H}',
-      `\\eta_R = \\frac{${tq(qm, 'm³/s')} \\times ${tq(h - H, 'm')}}{${tq(Q - qm, 'm³/s')} \\times ${tq(H, 'm')}}`, rk, ''));
+    steps.push(
+      step(
+        "Measured efficiency (D'Aubuisson)",
+        '\\eta_D = \\frac{q\\,h}{Q\\,H}',
+        `\\eta_D = \\frac{${tq(qm, 'm³/s')} \\times ${tq(h, 'm')}}{${tq(Q, 'm³/s')} \\times ${tq(H, 'm')}}`,
+        d,
+        '',
+      ),
+    );
+    steps.push(
+      step(
+        'Measured efficiency (Rankine)',
+        '\\eta_R = \\frac{q\\,(h - H)}{(Q - q)\\,H}',
+        `\\eta_R = \\frac{${tq(qm, 'm³/s')} \\times ${tq(h - H, 'm')}}{${tq(Q - qm, 'm³/s')} \\times ${tq(H, 'm')}}`,
+        rk,
+        '',
+      ),
+    );
     if (d < band.low) {
-      warnings.push(warn('efficiency-below-typical', `The measured efficiency, ${d.toFixed(2)}, is below the typical ${band.low.toFixed(2)}–${band.high.toFixed(2)} for this pump type at a lift ratio of ${r.toFixed(1)}. Tuning the waste valve, clearing air and checking the valves usually helps.`));
+      warnings.push(
+        warn(
+          'efficiency-below-typical',
+          `The measured efficiency, ${d.toFixed(2)}, is below the typical ${band.low.toFixed(2)}–${band.high.toFixed(2)} for this pump type at a lift ratio of ${r.toFixed(1)}. Tuning the waste valve, clearing air and checking the valves usually helps.`,
+        ),
+      );
     }
   }
 
   const maxLift = maxLiftRatio(pumpType) * H;
-  if (fallRarelyViable(H)) warnings.push(warn('fall-below-minimum', `A fall of ${H.toFixed(2)} m is at or below the ${PRACTICE.minFallM.value} m most rams need to beat reliably; such a site is rarely viable (${PRACTICE.minFallM.source}).`));
-  if (r < 2) warnings.push(warn('lift-ratio-low', `The lift is only ${r.toFixed(1)} times the fall; the ram wastes most of its water for little height. Check whether a simpler gravity line or another pump suits better.`));
+  if (fallRarelyViable(H))
+    warnings.push(
+      warn(
+        'fall-below-minimum',
+        `A fall of ${H.toFixed(2)} m is at or below the ${PRACTICE.minFallM.value} m most rams need to beat reliably; such a site is rarely viable (${PRACTICE.minFallM.source}).`,
+      ),
+    );
+  if (r < 2)
+    warnings.push(
+      warn(
+        'lift-ratio-low',
+        `The lift is only ${r.toFixed(1)} times the fall; the ram wastes most of its water for little height. Check whether a simpler gravity line or another pump suits better.`,
+      ),
+    );
   if (band.typical <= 0) {
-    warnings.push(warn('lift-ratio-beyond-range', `A lift of ${r.toFixed(1)} times the fall is beyond what a ${pumpType} ram is expected to manage (about ${maxLiftRatio(pumpType)} times, ${maxLift.toFixed(1)} m here). Look for more fall or lift in stages.`));
+    warnings.push(
+      warn(
+        'lift-ratio-beyond-range',
+        `A lift of ${r.toFixed(1)} times the fall is beyond what a ${pumpType} ram is expected to manage (about ${maxLiftRatio(pumpType)} times, ${maxLift.toFixed(1)} m here). Look for more fall or lift in stages.`,
+      ),
+    );
   }
   if (v.efficiency !== undefined && v.efficiency > band.high) {
-    warnings.push(warn('efficiency-above-typical', `An efficiency of ${v.efficiency.toFixed(2)} is above the typical ${band.low.toFixed(2)}–${band.high.toFixed(2)} for this pump type at this lift ratio; the estimate may be optimistic.`));
+    warnings.push(
+      warn(
+        'efficiency-above-typical',
+        `An efficiency of ${v.efficiency.toFixed(2)} is above the typical ${band.low.toFixed(2)}–${band.high.toFixed(2)} for this pump type at this lift ratio; the estimate may be optimistic.`,
+      ),
+    );
   }
 
   const results: YieldEstimateResults = {

@@ -3,14 +3,22 @@ import { fromSI, planArray, typicalDriveFlow } from '@/lib/hydraulics';
 import { FALL, LIFT, deliveryLine, drivePipe, gpm } from './fixtures';
 
 const straightHalf = () => ({ driveFlowM3s: gpm(2), drivePipe: drivePipe('1/2') });
-const elbowHalf = () => ({ driveFlowM3s: gpm(2), drivePipe: drivePipe('1/2', 'pvc-sch40', [{ kind: 'elbow-90-threaded' }]) });
+const elbowHalf = () => ({
+  driveFlowM3s: gpm(2),
+  drivePipe: drivePipe('1/2', 'pvc-sch40', [{ kind: 'elbow-90-threaded' }]),
+});
 
 describe('two ½-inch pumps in parallel into one delivery line', () => {
   // common practice, no source: one ½" pump on ≈ 2 US gal/min at 4 ft fall / 29 ft lift gave ≈ 500 mL/min;
   // two into one line gave ≈ 850 mL/min (≈ 1.7×) with an extra 90° elbow on one drive pipe.
   const one = planArray({ fallM: FALL, liftM: LIFT, pumps: [straightHalf()], deliveryLine: deliveryLine('1/2') });
   it('with an extra 90° elbow on one drive pipe: between 1.5× and 2.0×', () => {
-    const two = planArray({ fallM: FALL, liftM: LIFT, pumps: [straightHalf(), elbowHalf()], deliveryLine: deliveryLine('1/2') });
+    const two = planArray({
+      fallM: FALL,
+      liftM: LIFT,
+      pumps: [straightHalf(), elbowHalf()],
+      deliveryLine: deliveryLine('1/2'),
+    });
     const ratio = two.results.combinedDeliveryM3s / one.results.combinedDeliveryM3s;
     expect(ratio).toBeGreaterThanOrEqual(1.5);
     expect(ratio).toBeLessThan(2.0);
@@ -19,25 +27,52 @@ describe('two ½-inch pumps in parallel into one delivery line', () => {
     expect(two.warnings.map((w) => w.code)).toContain('fitting-in-drive-pipe');
   });
   it('without the elbow: close to 2×', () => {
-    const two = planArray({ fallM: FALL, liftM: LIFT, pumps: [straightHalf(), straightHalf()], deliveryLine: deliveryLine('1/2') });
+    const two = planArray({
+      fallM: FALL,
+      liftM: LIFT,
+      pumps: [straightHalf(), straightHalf()],
+      deliveryLine: deliveryLine('1/2'),
+    });
     const ratio = two.results.combinedDeliveryM3s / one.results.combinedDeliveryM3s;
     expect(ratio).toBeGreaterThanOrEqual(1.9);
     expect(ratio).toBeLessThanOrEqual(2.0);
   });
   it('the shared line works at the combined flow', () => {
-    const two = planArray({ fallM: FALL, liftM: LIFT, pumps: [straightHalf(), straightHalf()], deliveryLine: deliveryLine('1/2', 2000) });
+    const two = planArray({
+      fallM: FALL,
+      liftM: LIFT,
+      pumps: [straightHalf(), straightHalf()],
+      deliveryLine: deliveryLine('1/2', 2000),
+    });
     expect(two.results.deliveryFrictionHeadM).toBeGreaterThan(one.results.deliveryFrictionHeadM);
-    expect(two.results.pumpHeadM).toBeCloseTo(LIFT + two.results.deliveryFrictionHeadM + two.results.deliveryMinorHeadM, 12);
+    expect(two.results.pumpHeadM).toBeCloseTo(
+      LIFT + two.results.deliveryFrictionHeadM + two.results.deliveryMinorHeadM,
+      12,
+    );
   });
 });
 
 describe('parallel pumps add flow, not height', () => {
   it('maximum lift does not grow with pump count', () => {
-    const lifts = [1, 2, 4, 8].map((n) => planArray({
-      fallM: FALL, liftM: LIFT, pumps: Array.from({ length: n }, straightHalf), deliveryLine: deliveryLine('3/4'),
-    }).results.maxLiftM);
+    const lifts = [1, 2, 4, 8].map(
+      (n) =>
+        planArray({
+          fallM: FALL,
+          liftM: LIFT,
+          pumps: Array.from({ length: n }, straightHalf),
+          deliveryLine: deliveryLine('3/4'),
+        }).results.maxLiftM,
+    );
     for (const l of lifts) expect(l).toBeCloseTo(lifts[0], 12);
-    const flows = [1, 2, 4].map((n) => planArray({ fallM: FALL, liftM: LIFT, pumps: Array.from({ length: n }, straightHalf), deliveryLine: deliveryLine('3/4') }).results.combinedDeliveryM3s);
+    const flows = [1, 2, 4].map(
+      (n) =>
+        planArray({
+          fallM: FALL,
+          liftM: LIFT,
+          pumps: Array.from({ length: n }, straightHalf),
+          deliveryLine: deliveryLine('3/4'),
+        }).results.combinedDeliveryM3s,
+    );
     expect(flows[1]).toBeGreaterThan(flows[0]);
     expect(flows[2]).toBeGreaterThan(flows[1]);
   });
@@ -45,7 +80,13 @@ describe('parallel pumps add flow, not height', () => {
 
 describe('source check', () => {
   it('warns when the pumps need more drive water than the source spares', () => {
-    const r = planArray({ fallM: FALL, liftM: LIFT, pumps: [straightHalf(), straightHalf()], deliveryLine: deliveryLine(), sourceSpareFlowM3s: gpm(3) });
+    const r = planArray({
+      fallM: FALL,
+      liftM: LIFT,
+      pumps: [straightHalf(), straightHalf()],
+      deliveryLine: deliveryLine(),
+      sourceSpareFlowM3s: gpm(3),
+    });
     expect(r.results.sourceShare).toBeCloseTo(4 / 3, 9); // arithmetic: 2 × 2 gpm ÷ 3 gpm
     const codes = r.warnings.map((w) => w.code);
     expect(codes).toContain('drive-exceeds-source');
@@ -61,7 +102,8 @@ describe('staged lift: 1¼-inch pumps fill a tank that drives a ½-inch pump', (
   // 20-ft stick of 1¼" sch 40 PVC at 4 ft of fall — about 12 US gal/min — and the efficiency is the typical homemade
   // band value at the lift ratio (efficiency.ts: Building Trades Pocketbook × 0.33/0.66). Nothing here is tuned to the field fact.
   const r = planArray({
-    fallM: FALL, liftM: LIFT,
+    fallM: FALL,
+    liftM: LIFT,
     pumps: [{ drivePipe: drivePipe('1-1/4') }],
     deliveryLine: deliveryLine('3/4'),
     staged: { upperFallM: FALL, upperLiftM: LIFT, upperPump: straightHalf() },
@@ -81,7 +123,8 @@ describe('staged lift: 1¼-inch pumps fill a tank that drives a ½-inch pump', (
     expect(r.results.staged!.lowerPumpsNeeded).toBe(5);
     // common practice, no source: at the efficiency the field pumps showed (0.479, yield.test.ts) two to three do
     const field = planArray({
-      fallM: FALL, liftM: LIFT,
+      fallM: FALL,
+      liftM: LIFT,
       pumps: [{ drivePipe: drivePipe('1-1/4'), efficiency: 0.479 }],
       deliveryLine: deliveryLine('3/4'),
       staged: { upperFallM: FALL, upperLiftM: LIFT, upperPump: straightHalf() },
@@ -95,7 +138,8 @@ describe('staged lift: 1¼-inch pumps fill a tank that drives a ½-inch pump', (
   it('with enough lower pumps the upper pump runs around the clock', () => {
     const n = r.results.staged!.lowerPumpsNeeded;
     const full = planArray({
-      fallM: FALL, liftM: LIFT,
+      fallM: FALL,
+      liftM: LIFT,
       pumps: Array.from({ length: n }, () => ({ drivePipe: drivePipe('1-1/4') })),
       deliveryLine: deliveryLine('3/4'),
       staged: { upperFallM: FALL, upperLiftM: LIFT, upperPump: straightHalf() },

@@ -16,7 +16,11 @@ describe('demand and storage', () => {
   });
   it('sheep farm: 40 ewes on a 1 L/min ram', () => {
     // worked example in planDemandAndStorage's doc comment (arithmetic on the rates above)
-    const r = planDemandAndStorage({ deliveredFlowM3s: toSI(1, 'L/min', 'flow'), livestock: [{ kind: 'sheep', count: 40 }], reserveDays: 3 });
+    const r = planDemandAndStorage({
+      deliveredFlowM3s: toSI(1, 'L/min', 'flow'),
+      livestock: [{ kind: 'sheep', count: 40 }],
+      reserveDays: 3,
+    });
     expect(r.results.totalDemandM3PerDay).toBeCloseTo(40 * toSI(2, 'gal', 'volume'), 12);
     expect(r.results.deliveryM3PerDay).toBeCloseTo(1.44, 12);
     expect(r.results.reserveTankM3).toBeCloseTo(3 * r.results.totalDemandM3PerDay, 12);

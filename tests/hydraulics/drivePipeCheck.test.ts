@@ -1,5 +1,12 @@
 import { describe, expect, it } from 'vitest';
-import { DRIVE_PIPE_GUIDES, EngineInputError, checkDrivePipe, resolvePipe, toSI, waterProperties } from '@/lib/hydraulics';
+import {
+  DRIVE_PIPE_GUIDES,
+  EngineInputError,
+  checkDrivePipe,
+  resolvePipe,
+  toSI,
+  waterProperties,
+} from '@/lib/hydraulics';
 import { FALL, LIFT, drivePipe, ft } from './fixtures';
 
 describe('drive pipe check', () => {
@@ -13,7 +20,10 @@ describe('drive pipe check', () => {
   it('applies one length rule, L/H 5–10, and says where it comes from', () => {
     // settled: L/H 5–10 (common practice, no published source found; was 3–12 and 5–12 side by side, from memory),
     // L/D 150–1000 (Calvert, from memory)
-    expect(DRIVE_PIPE_GUIDES.map((g) => [g.min, g.max])).toEqual([[5, 10], [150, 1000]]);
+    expect(DRIVE_PIPE_GUIDES.map((g) => [g.min, g.max])).toEqual([
+      [5, 10],
+      [150, 1000],
+    ]);
     const long = checkDrivePipe({ fallM: FALL, drivePipe: { ...drivePipe('1'), lengthM: ft(44) } }); // 11 H
     const w = long.warnings.find((x) => x.code === 'drive-length-long-for-fall');
     expect(w!.message).toMatch(/5–10 times the fall \(common practice, no published source found\)/);
@@ -22,7 +32,9 @@ describe('drive pipe check', () => {
     const w = waterProperties(10);
     const p = resolvePipe('pvc-sch40', '1');
     // Korteweg, as in Wylie & Streeter (1993): c = √((K/ρ)/(1 + KD/(Ee))) with E = 2.76 GPa (ASTM D1784, from memory)
-    const c = Math.sqrt(w.bulkModulusPa / w.densityKgM3 / (1 + (w.bulkModulusPa * p.insideDiameterM) / (2.76e9 * p.wallThicknessM)));
+    const c = Math.sqrt(
+      w.bulkModulusPa / w.densityKgM3 / (1 + (w.bulkModulusPa * p.insideDiameterM) / (2.76e9 * p.wallThicknessM)),
+    );
     expect(r.results.waveSpeedMs).toBeCloseTo(c, 9);
     expect(c).toBeGreaterThan(500); // thick-walled 1" sch 40 PVC, ≈ 548 m/s
     // Joukowsky (1900): Δp = ρ·c·v₀
@@ -33,7 +45,10 @@ describe('drive pipe check', () => {
     expect(r.results.ratingMargin).toBeCloseTo(toSI(450, 'psi', 'pressure') / r.results.peakPressurePa, 9);
   });
   it('warns when the surge exceeds the rating, deferring to codes and professionals', () => {
-    const weak = checkDrivePipe({ fallM: 20, drivePipe: { ...drivePipe('1'), lengthM: 100, pressureRatingPa: toSI(100, 'psi', 'pressure') } });
+    const weak = checkDrivePipe({
+      fallM: 20,
+      drivePipe: { ...drivePipe('1'), lengthM: 100, pressureRatingPa: toSI(100, 'psi', 'pressure') },
+    });
     const w = weak.warnings.find((x) => x.code === 'surge-exceeds-rating');
     expect(w).toBeDefined();
     expect(w!.severity).toBe('danger');
@@ -57,7 +72,11 @@ describe('drive pipe under a ram: shut-off pressure, joints and fatigue', () => 
   const r = checkDrivePipe({ fallM: FALL, drivePipe: drivePipe('1') });
   it('the shut-off pressure is the fall plus the surge at closure (Joukowsky 1900, as in Wylie & Streeter 1993)', () => {
     expect(r.results.shutOffPressurePa).toBeCloseTo(r.results.staticPressurePa + r.results.surgePa, 6);
-    const slower = checkDrivePipe({ fallM: FALL, drivePipe: drivePipe('1'), closureVelocityMs: r.results.fullFlowVelocityMs / 2 });
+    const slower = checkDrivePipe({
+      fallM: FALL,
+      drivePipe: drivePipe('1'),
+      closureVelocityMs: r.results.fullFlowVelocityMs / 2,
+    });
     expect(slower.results.shutOffPressurePa - slower.results.staticPressurePa).toBeCloseTo(r.results.surgePa / 2, 3);
   });
   it('refuses threaded schedule 40 PVC and halves threaded schedule 80', () => {
@@ -67,13 +86,21 @@ describe('drive pipe under a ram: shut-off pressure, joints and fatigue', () => 
     expect(t40.results.joint!.allowed).toBe(false);
     const w = t40.warnings.find((x) => x.code === 'threaded-joint-refused');
     expect(w!.severity).toBe('danger');
-    const t80 = checkDrivePipe({ fallM: FALL, drivePipe: drivePipe('1', 'pvc-sch80'), series: 'pvc-sch80', joints: 'threaded' });
+    const t80 = checkDrivePipe({
+      fallM: FALL,
+      drivePipe: drivePipe('1', 'pvc-sch80'),
+      series: 'pvc-sch80',
+      joints: 'threaded',
+    });
     expect(t80.results.weakestIs).toBe('threaded joint');
     expect(t80.results.weakestRatingPa).toBeCloseTo(toSI(315, 'psi', 'pressure'), 3);
     expect(t80.results.shutOffMargin).toBeCloseTo(t80.results.weakestRatingPa / t80.results.shutOffPressurePa, 12);
   });
   it('warns when the shut-off pressure is above the weakest rating', () => {
-    const weak = checkDrivePipe({ fallM: FALL, drivePipe: { ...drivePipe('1'), pressureRatingPa: toSI(100, 'psi', 'pressure') } });
+    const weak = checkDrivePipe({
+      fallM: FALL,
+      drivePipe: { ...drivePipe('1'), pressureRatingPa: toSI(100, 'psi', 'pressure') },
+    });
     expect(weak.warnings.map((x) => x.code)).toContain('shut-off-exceeds-rating');
   });
   it('gives the cyclic life of a PVC drive pipe by Vinson’s equation', () => {

@@ -1,5 +1,13 @@
 import { describe, expect, it } from 'vitest';
-import { METRIC_ODS_MM, METRIC_SERIES, defaultSeriesFor, fromSI, resolveMetricPipe, resolvePipe, toSI } from '@/lib/hydraulics';
+import {
+  METRIC_ODS_MM,
+  METRIC_SERIES,
+  defaultSeriesFor,
+  fromSI,
+  resolveMetricPipe,
+  resolvePipe,
+  toSI,
+} from '@/lib/hydraulics';
 
 describe('ISO 4427 polyethylene by SDR', () => {
   it('walls follow the ISO 4427-2:2007 table', () => {
@@ -20,10 +28,11 @@ describe('ISO 4427 polyethylene by SDR', () => {
     expect(resolveMetricPipe('pe100-sdr9', 50)!.pressureRatingPa).toBeCloseTo(toSI(20, 'bar', 'pressure'), 6);
   });
   it('every listed size either resolves with ID = OD − 2 walls or is not made', () => {
-    for (const s of METRIC_SERIES) for (const od of METRIC_ODS_MM) {
-      const p = resolveMetricPipe(s, od);
-      if (p) expect(p.insideDiameterM).toBeCloseTo(od / 1000 - 2 * p.wallThicknessM, 12); // definition
-    }
+    for (const s of METRIC_SERIES)
+      for (const od of METRIC_ODS_MM) {
+        const p = resolveMetricPipe(s, od);
+        if (p) expect(p.insideDiameterM).toBeCloseTo(od / 1000 - 2 * p.wallThicknessM, 12); // definition
+      }
   });
 });
 
@@ -52,8 +61,14 @@ describe('HDPE grades rate differently at the same DR', () => {
   it('PE4710 200 psi and PE3608 160 psi at DR 11', () => {
     // PR = 2·HDS/(DR − 1), HDS 1000 psi PE4710, 800 psi PE3608 (PPI TR-4 / AWWA C906, from memory)
     expect(fromSI(resolvePipe('hdpe-dr11', '1').pressureRatingPa, 'psi', 'pressure')).toBeCloseTo(200, 9);
-    expect(fromSI(resolvePipe('hdpe-dr11', '1', undefined, 'PE3608').pressureRatingPa, 'psi', 'pressure')).toBeCloseTo(160, 9);
-    expect(fromSI(resolvePipe('hdpe-dr17', '2', undefined, 'PE3608').pressureRatingPa, 'psi', 'pressure')).toBeCloseTo(100, 9);
+    expect(fromSI(resolvePipe('hdpe-dr11', '1', undefined, 'PE3608').pressureRatingPa, 'psi', 'pressure')).toBeCloseTo(
+      160,
+      9,
+    );
+    expect(fromSI(resolvePipe('hdpe-dr17', '2', undefined, 'PE3608').pressureRatingPa, 'psi', 'pressure')).toBeCloseTo(
+      100,
+      9,
+    );
   });
 });
 

@@ -1,5 +1,11 @@
 import { describe, expect, it } from 'vitest';
-import { EngineInputError, estimateShutOffPressure, resolvePipe, shutOffPressure, waterProperties } from '@/lib/hydraulics';
+import {
+  EngineInputError,
+  estimateShutOffPressure,
+  resolvePipe,
+  shutOffPressure,
+  waterProperties,
+} from '@/lib/hydraulics';
 import { drivePipe, ft } from './fixtures';
 
 // Formulas: Joukowsky (1900) Δp = ρ·c·Δv for a closure within 2L/c, Michaud (1878) 2ρ·L·Δv/t_c for a slower one,
@@ -23,11 +29,18 @@ describe('shut-off (dead-head) pressure', () => {
     const p = resolvePipe('pvc-sch40', '1');
     const fast = estimateShutOffPressure({ fallM: ft(4), drivePipe: drivePipe('1'), closureVelocityMs: 1.2 });
     // Korteweg with E = 2.76 GPa (ASTM D1784, from memory) as in transients.test.ts: ≈ 548 m/s in 1" sch 40 PVC
-    const c = Math.sqrt(w.bulkModulusPa / w.densityKgM3 / (1 + (w.bulkModulusPa * p.insideDiameterM) / (2.76e9 * p.wallThicknessM)));
+    const c = Math.sqrt(
+      w.bulkModulusPa / w.densityKgM3 / (1 + (w.bulkModulusPa * p.insideDiameterM) / (2.76e9 * p.wallThicknessM)),
+    );
     expect(fast.results.waveSpeedMs).toBeCloseTo(c, 9);
     expect(fast.results.closure).toBe('sudden');
     expect(fast.results.shutOffPressurePa).toBeCloseTo(w.densityKgM3 * 9.80665 * ft(4) + w.densityKgM3 * c * 1.2, 6);
-    const slow = estimateShutOffPressure({ fallM: ft(4), drivePipe: drivePipe('1'), closureVelocityMs: 1.2, valveClosureTimeS: 0.1 });
+    const slow = estimateShutOffPressure({
+      fallM: ft(4),
+      drivePipe: drivePipe('1'),
+      closureVelocityMs: 1.2,
+      valveClosureTimeS: 0.1,
+    });
     expect(slow.results.closure).toBe('slow');
     expect(slow.results.surgePa).toBeCloseTo((2 * w.densityKgM3 * ft(20) * 1.2) / 0.1, 6);
     expect(slow.results.shutOffPressurePa).toBeLessThan(fast.results.shutOffPressurePa);
@@ -35,7 +48,11 @@ describe('shut-off (dead-head) pressure', () => {
   it('without a velocity it takes the full-flow velocity, the most the pipe can make', () => {
     const worst = estimateShutOffPressure({ fallM: ft(4), drivePipe: drivePipe('1') });
     expect(worst.results.velocityFrom).toBe('full-flow');
-    const half = estimateShutOffPressure({ fallM: ft(4), drivePipe: drivePipe('1'), closureVelocityMs: worst.results.closureVelocityMs / 2 });
+    const half = estimateShutOffPressure({
+      fallM: ft(4),
+      drivePipe: drivePipe('1'),
+      closureVelocityMs: worst.results.closureVelocityMs / 2,
+    });
     expect(half.results.surgePa).toBeCloseTo(worst.results.surgePa / 2, 6); // Joukowsky is linear in Δv
   });
   it('needs the wall thickness', () => {

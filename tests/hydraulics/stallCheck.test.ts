@@ -5,7 +5,10 @@ import { FALL, LIFT, deliveryLine, drivePipe, ft, gpm, mlPerMin } from './fixtur
 describe('stall check', () => {
   it('ranks a flexible drive pipe first for weak delivery, with computed numbers', () => {
     // a cabin's seasonal creek: 20 ft of ½" HDPE DR 11 as the drive pipe (common practice, no source: HDPE soaks up the surge)
-    const r = runStallCheck({ site: { fallM: FALL, liftM: LIFT, drivePipe: drivePipe('1/2', 'hdpe-dr11') }, symptoms: ['weak-delivery'] });
+    const r = runStallCheck({
+      site: { fallM: FALL, liftM: LIFT, drivePipe: drivePipe('1/2', 'hdpe-dr11') },
+      symptoms: ['weak-delivery'],
+    });
     expect(r.results.causes[0].code).toBe('flexible-drive-pipe');
     expect(r.results.causes[0].reason).toMatch(/m\/s/);
     expect(r.results.causes[0].guide).toBe('the-drive-pipe');
@@ -13,7 +16,14 @@ describe('stall check', () => {
   it('names drive flow above the source for a pump that stops and spits air', () => {
     // 2 × 2 US gal/min drive against 3 US gal/min spare → 133 % (arithmetic)
     const r = runStallCheck({
-      site: { fallM: FALL, liftM: LIFT, drivePipe: drivePipe('1/2'), driveFlowM3s: gpm(2), pumpCount: 2, sourceSpareFlowM3s: gpm(3) },
+      site: {
+        fallM: FALL,
+        liftM: LIFT,
+        drivePipe: drivePipe('1/2'),
+        driveFlowM3s: gpm(2),
+        pumpCount: 2,
+        sourceSpareFlowM3s: gpm(3),
+      },
       symptoms: ['stops-after-some-beats', 'spits-air'],
     });
     expect(r.results.causes[0].code).toBe('drive-flow-above-source');
@@ -21,7 +31,10 @@ describe('stall check', () => {
     expect(r.results.sourceShare).toBeCloseTo(4 / 3, 9);
   });
   it('sorts by score and gives every cause a guide', () => {
-    const r = runStallCheck({ site: { fallM: FALL, liftM: LIFT, drivePipe: drivePipe('1/2') }, symptoms: ['never-starts'] });
+    const r = runStallCheck({
+      site: { fallM: FALL, liftM: LIFT, drivePipe: drivePipe('1/2') },
+      symptoms: ['never-starts'],
+    });
     const scores = r.results.causes.map((c) => c.score);
     expect([...scores].sort((a, b) => b - a)).toEqual(scores);
     for (const c of r.results.causes) {
@@ -35,7 +48,14 @@ describe('stall check', () => {
     // ≈ 120 mL/min from 2 US gal/min at 4 ft/29 ft: η = 0.115, below the homemade low edge 0.138 (a quarter of the
     // Building Trades Pocketbook table, efficiency.ts; was 200 mL/min, η 0.19, against the old band from memory)
     const r = runStallCheck({
-      site: { fallM: FALL, liftM: LIFT, drivePipe: drivePipe('1/2'), driveFlowM3s: gpm(2), deliveredFlowM3s: mlPerMin(120), deliveryLine: deliveryLine() },
+      site: {
+        fallM: FALL,
+        liftM: LIFT,
+        drivePipe: drivePipe('1/2'),
+        driveFlowM3s: gpm(2),
+        deliveredFlowM3s: mlPerMin(120),
+        deliveryLine: deliveryLine(),
+      },
       symptoms: ['weak-delivery'],
     });
     expect(r.results.measuredEfficiency).toBeCloseTo(0.115, 3);

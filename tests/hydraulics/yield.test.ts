@@ -85,7 +85,9 @@ describe('invalid input', () => {
   });
   it('measured delivery that breaks η ≤ 1', () => {
     // energy balance: q·h ≤ Q·H, so with Q = 1e-4, H = 1, h = 10, q may be at most 1e-5 m³/s
-    expect(() => estimateYield({ driveFlowM3s: 1e-4, fallM: 1, liftM: 10, measuredDeliveredFlowM3s: 2e-5 })).toThrow(/measuredDeliveredFlowM3s/);
+    expect(() => estimateYield({ driveFlowM3s: 1e-4, fallM: 1, liftM: 10, measuredDeliveredFlowM3s: 2e-5 })).toThrow(
+      /measuredDeliveredFlowM3s/,
+    );
   });
 });
 

@@ -38,7 +38,11 @@ const entry = {
   driveFlow: '2 gal/min',
   driveFlowMethod: 'measured',
   driveFlowHow: 'all the water caught in a bucket for a minute',
-  trials: [{ volume: '0.49 L', seconds: 60 }, { volume: '0.5 L', seconds: 60 }, { volume: '0.51 L', seconds: 60 }],
+  trials: [
+    { volume: '0.49 L', seconds: 60 },
+    { volume: '0.5 L', seconds: 60 },
+    { volume: '0.51 L', seconds: 60 },
+  ],
   bpm: 60,
   wasteValveSetting: 'stroke 8 mm',
   waterTempC: 10,
@@ -67,7 +71,9 @@ describe('field log API', () => {
   it('records an entry with three bucket trials and computes both efficiencies as the engine does', async () => {
     const res = await call(create, 'POST', '/api/field-log', 'sorrel_cabin', entry);
     expect(res.status).toBe(201);
-    const got = await call(getOne, 'GET', `/api/field-log/${res.body.id}`, null, undefined, { id: String(res.body.id) });
+    const got = await call(getOne, 'GET', `/api/field-log/${res.body.id}`, null, undefined, {
+      id: String(res.body.id),
+    });
     expect(got.status).toBe(200);
     const e = got.body;
     expect(e.trials.map((t: { volumeL: number }) => t.volumeL)).toEqual([0.49, 0.5, 0.51]);
@@ -80,7 +86,13 @@ describe('field log API', () => {
     expect(e.performance.rankine).toBeCloseTo(0.442, 3);
     expect(e.performance.liftRatio).toBeCloseTo(7.25, 6); // 29 ft / 4 ft
     // The entry's prediction is the engine's yield estimate for the same numbers, not a copy of its formula.
-    const engine = estimateYield({ driveFlowM3s: toSI(2, 'gal/min', 'flow'), fallM: 1.2192, liftM: 8.8392, pumpType: 'homemade', waterTempC: 10 }).results;
+    const engine = estimateYield({
+      driveFlowM3s: toSI(2, 'gal/min', 'flow'),
+      fallM: 1.2192,
+      liftM: 8.8392,
+      pumpType: 'homemade',
+      waterTempC: 10,
+    }).results;
     expect(e.performance.predictedDeliveredFlowM3s).toBeCloseTo(engine.deliveredFlowM3s, 12);
     // and that estimate is the engine's documented worked example: typical homemade η 0.2769 at h/H = 7.25
     // (Building Trades Pocketbook table × 0.33/0.66 from Water for the World RWS.4.D.5, efficiency.ts; was 0.514
@@ -101,10 +113,19 @@ describe('field log API', () => {
     expect(noTrials.status).toBe(400);
     expect(noTrials.body.error.field).toBe('trials');
     // 5 L a minute up 29 ft from 2 gal/min falling 4 ft would be an efficiency far above 1
-    const tooGood = await call(create, 'POST', '/api/field-log', 'sorrel_cabin', { ...entry, trials: [{ volume: '5 L', seconds: 60 }] });
+    const tooGood = await call(create, 'POST', '/api/field-log', 'sorrel_cabin', {
+      ...entry,
+      trials: [{ volume: '5 L', seconds: 60 }],
+    });
     expect(tooGood.status).toBe(422);
     expect(tooGood.body.error.field).toBe('trials');
-    const badTrial = await call(create, 'POST', '/api/field-log', 'sorrel_cabin', { ...entry, trials: [{ volume: '0.5 L', seconds: 60 }, { volume: 'half a bucket', seconds: 60 }] });
+    const badTrial = await call(create, 'POST', '/api/field-log', 'sorrel_cabin', {
+      ...entry,
+      trials: [
+        { volume: '0.5 L', seconds: 60 },
+        { volume: 'half a bucket', seconds: 60 },
+      ],
+    });
     expect(badTrial.status).toBe(422);
     expect(badTrial.body.error.field).toBe('trials.1.volume');
     expect(await count()).toBe(before);
@@ -114,7 +135,18 @@ describe('field log API', () => {
     const { Photo, User } = initModels();
     const cabin = (await User.findOne({ where: { handle: 'sorrel_cabin' } }))!.id;
     const shepherd = (await User.findOne({ where: { handle: 'highcrag_shepherd' } }))!.id;
-    const photo = (ownerId: number, publicId: string) => Photo.create({ publicId, ownerId, questionId: null, answerId: null, mime: 'image/webp', width: 640, height: 480, bytes: 1000, alt: 'the pump' });
+    const photo = (ownerId: number, publicId: string) =>
+      Photo.create({
+        publicId,
+        ownerId,
+        questionId: null,
+        answerId: null,
+        mime: 'image/webp',
+        width: 640,
+        height: 480,
+        bytes: 1000,
+        alt: 'the pump',
+      });
     const mine = (await photo(cabin, newPhotoId())).publicId;
     const theirs = (await photo(shepherd, newPhotoId())).publicId;
     const before = await count();
@@ -122,7 +154,11 @@ describe('field log API', () => {
     expect(refused.status).toBe(422);
     expect(refused.body.error.field).toBe('photoIds');
     expect(await count()).toBe(before);
-    const ok = await call(create, 'POST', '/api/field-log', 'sorrel_cabin', { ...entry, siteName: 'Photo test site', photoIds: [mine] });
+    const ok = await call(create, 'POST', '/api/field-log', 'sorrel_cabin', {
+      ...entry,
+      siteName: 'Photo test site',
+      photoIds: [mine],
+    });
     expect(ok.status).toBe(201);
     expect((await Photo.findOne({ where: { publicId: mine } }))?.fieldLogEntryId).toBe(ok.body.id);
     expect((await Photo.findOne({ where: { publicId: theirs } }))?.fieldLogEntryId).toBeNull();
@@ -145,21 +181,32 @@ describe('field log API', () => {
 
   it('imports the valid rows only when asked, listing the skipped ones', async () => {
     const before = await count();
-    const res = await call(importRoute, 'POST', '/api/field-log/import', 'sorrel_cabin', { csv: fixture, mode: 'valid-only' });
+    const res = await call(importRoute, 'POST', '/api/field-log/import', 'sorrel_cabin', {
+      csv: fixture,
+      mode: 'valid-only',
+    });
     expect(res.status).toBe(201);
     expect(res.body.imported).toBe(3);
     expect(res.body.skipped).toBe(4);
     expect(await count()).toBe(before + 3);
-    const spring = await initModels().FieldLogEntry.findOne({ where: { siteName: 'Import test spring' }, include: ['trials'] });
+    const spring = await initModels().FieldLogEntry.findOne({
+      where: { siteName: 'Import test spring' },
+      include: ['trials'],
+    });
     expect(spring?.trials?.length).toBe(3);
     expect(spring?.driveFlowM3s).toBeCloseTo(80 / 60_000, 12); // 80 L/min ÷ 60 000 = m³/s, by definition
   });
 
   it('refuses a file that is not our CSV, and a bad mode', async () => {
-    const wrong = await call(importRoute, 'POST', '/api/field-log/import', 'sorrel_cabin', { csv: 'name,height\nfoo,3\n' });
+    const wrong = await call(importRoute, 'POST', '/api/field-log/import', 'sorrel_cabin', {
+      csv: 'name,height\nfoo,3\n',
+    });
     expect(wrong.status).toBe(422);
     expect(wrong.body.error.field).toBe('file');
-    const mode = await call(importRoute, 'POST', '/api/field-log/import', 'sorrel_cabin', { csv: fixture, mode: 'some' });
+    const mode = await call(importRoute, 'POST', '/api/field-log/import', 'sorrel_cabin', {
+      csv: fixture,
+      mode: 'some',
+    });
     expect(mode.status).toBe(400);
     expect(mode.body.error.field).toBe('mode');
   });
@@ -184,21 +231,66 @@ describe('field log API', () => {
   });
 
   it('links an after to a before on the same site and reads the ratio with the spread of the trials', async () => {
-    const a = await call(create, 'POST', '/api/field-log', 'sorrel_cabin', { ...entry, siteName: 'Linked test site', testedOn: '2026-06-01' });
-    const b = await call(create, 'POST', '/api/field-log', 'sorrel_cabin', {
-      ...entry, siteName: 'Linked test site', testedOn: '2026-06-08', pumpCount: 2, arrangement: 'parallel', driveFlow: '3.8 gal/min',
-      trials: [{ volume: '0.9 L', seconds: 60 }, { volume: '0.88 L', seconds: 60 }, { volume: '0.92 L', seconds: 60 }],
+    const a = await call(create, 'POST', '/api/field-log', 'sorrel_cabin', {
+      ...entry,
+      siteName: 'Linked test site',
+      testedOn: '2026-06-01',
     });
-    const other = await call(create, 'POST', '/api/field-log', 'sorrel_cabin', { ...entry, siteName: 'Somewhere else', testedOn: '2026-06-09' });
-    const wrongSite = await call(link, 'POST', `/api/field-log/${other.body.id}/link`, 'sorrel_cabin', { beforeId: a.body.id, whatChanged: 'moved' }, { id: String(other.body.id) });
+    const b = await call(create, 'POST', '/api/field-log', 'sorrel_cabin', {
+      ...entry,
+      siteName: 'Linked test site',
+      testedOn: '2026-06-08',
+      pumpCount: 2,
+      arrangement: 'parallel',
+      driveFlow: '3.8 gal/min',
+      trials: [
+        { volume: '0.9 L', seconds: 60 },
+        { volume: '0.88 L', seconds: 60 },
+        { volume: '0.92 L', seconds: 60 },
+      ],
+    });
+    const other = await call(create, 'POST', '/api/field-log', 'sorrel_cabin', {
+      ...entry,
+      siteName: 'Somewhere else',
+      testedOn: '2026-06-09',
+    });
+    const wrongSite = await call(
+      link,
+      'POST',
+      `/api/field-log/${other.body.id}/link`,
+      'sorrel_cabin',
+      { beforeId: a.body.id, whatChanged: 'moved' },
+      { id: String(other.body.id) },
+    );
     expect(wrongSite.status).toBe(422);
     expect(wrongSite.body.error.field).toBe('beforeId');
-    const notMine = await call(link, 'POST', `/api/field-log/${b.body.id}/link`, 'highcrag_shepherd', { beforeId: a.body.id, whatChanged: 'second pump' }, { id: String(b.body.id) });
+    const notMine = await call(
+      link,
+      'POST',
+      `/api/field-log/${b.body.id}/link`,
+      'highcrag_shepherd',
+      { beforeId: a.body.id, whatChanged: 'second pump' },
+      { id: String(b.body.id) },
+    );
     expect(notMine.status).toBe(403);
-    const ok = await call(link, 'POST', `/api/field-log/${b.body.id}/link`, 'sorrel_cabin', { beforeId: a.body.id, whatChanged: 'a second pump in parallel' }, { id: String(b.body.id) });
+    const ok = await call(
+      link,
+      'POST',
+      `/api/field-log/${b.body.id}/link`,
+      'sorrel_cabin',
+      { beforeId: a.body.id, whatChanged: 'a second pump in parallel' },
+      { id: String(b.body.id) },
+    );
     expect(ok.status).toBe(201);
     expect(ok.body.url).toBe(`/field-log/compare/${a.body.id}/${b.body.id}`);
-    const twice = await call(link, 'POST', `/api/field-log/${b.body.id}/link`, 'sorrel_cabin', { beforeId: a.body.id, whatChanged: 'again' }, { id: String(b.body.id) });
+    const twice = await call(
+      link,
+      'POST',
+      `/api/field-log/${b.body.id}/link`,
+      'sorrel_cabin',
+      { beforeId: a.body.id, whatChanged: 'again' },
+      { id: String(b.body.id) },
+    );
     expect(twice.status).toBe(409);
     const cmp = (await getComparison(a.body.id, b.body.id, null))!;
     // ratio of means: 0.9 L/min ÷ 0.5 L/min = 1.8; spread: 0.88/0.51 = 1.725 to 0.92/0.49 = 1.878 (hand calculation)
@@ -210,7 +302,10 @@ describe('field log API', () => {
 
   it('the demo one-pump against two-pump comparison reads like a real test: clearly more, less than double', async () => {
     const { FieldLogEntry } = initModels();
-    const [one, two] = await FieldLogEntry.findAll({ where: { siteName: 'Ferncombe lower meadow' }, order: [['id', 'ASC']] });
+    const [one, two] = await FieldLogEntry.findAll({
+      where: { siteName: 'Ferncombe lower meadow' },
+      order: [['id', 'ASC']],
+    });
     const cmp = (await getComparison(one.id, two.id, null))!;
     expect(cmp.before.pumpCount).toBe(1);
     expect(cmp.after.pumpCount).toBe(2);
@@ -228,12 +323,21 @@ describe('field log API', () => {
 
   it('a question can be asked with its site sheet filled from an entry, and links to it', async () => {
     const { FieldLogEntry, Question } = initModels();
-    const one = (await FieldLogEntry.findOne({ where: { siteName: 'Ferncombe lower meadow' }, order: [['id', 'ASC']] }))!;
+    const one = (await FieldLogEntry.findOne({
+      where: { siteName: 'Ferncombe lower meadow' },
+      order: [['id', 'ASC']],
+    }))!;
     const view = (await getEntry(one.id, null))!;
     const siteSheet = entrySiteSheet(view);
     expect(siteSheet.fall).toBe('2.4 m');
     expect(siteSheet.driveMaterial).toBe('steel-sch40');
-    const question = { title: 'Second pump gave less than double', body: 'Two 1 inch pumps in parallel deliver about 1.7 times one pump. Is the intake the limit?', tags: ['stall'], siteSheet, fieldLogEntryId: one.id };
+    const question = {
+      title: 'Second pump gave less than double',
+      body: 'Two 1 inch pumps in parallel deliver about 1.7 times one pump. Is the intake the limit?',
+      tags: ['stall'],
+      siteSheet,
+      fieldLogEntryId: one.id,
+    };
     const res = await call(ask, 'POST', '/api/questions', 'ferncombe_tamsin', question);
     expect(res.status).toBe(201);
     expect((await Question.findByPk(res.body.id))?.fieldLogEntryId).toBe(one.id);
@@ -243,16 +347,36 @@ describe('field log API', () => {
   });
 
   it('a hidden entry is shown only to moderators', async () => {
-    const res = await call(create, 'POST', '/api/field-log', 'sorrel_cabin', { ...entry, siteName: 'To be hidden', testedOn: '2026-07-01' });
+    const res = await call(create, 'POST', '/api/field-log', 'sorrel_cabin', {
+      ...entry,
+      siteName: 'To be hidden',
+      testedOn: '2026-07-01',
+    });
     const id = String(res.body.id);
-    const flagged = await call(flag, 'POST', '/api/flags', 'highcrag_shepherd', { postType: 'field-log', postId: res.body.id, reason: 'other', note: 'numbers look copied' });
+    const flagged = await call(flag, 'POST', '/api/flags', 'highcrag_shepherd', {
+      postType: 'field-log',
+      postId: res.body.id,
+      reason: 'other',
+      note: 'numbers look copied',
+    });
     expect(flagged.status).toBeLessThan(300);
     const q = await call(queue, 'GET', '/api/review', 'moss_moderator');
-    expect(q.body.items.some((i: { post: { type: string; id: number } }) => i.post.type === 'field-log' && i.post.id === res.body.id)).toBe(true);
-    const hide = await call(moderate, 'POST', '/api/review/actions', 'moss_moderator', { action: 'hide', postType: 'field-log', postId: res.body.id, reason: 'made-up numbers' });
+    expect(
+      q.body.items.some(
+        (i: { post: { type: string; id: number } }) => i.post.type === 'field-log' && i.post.id === res.body.id,
+      ),
+    ).toBe(true);
+    const hide = await call(moderate, 'POST', '/api/review/actions', 'moss_moderator', {
+      action: 'hide',
+      postType: 'field-log',
+      postId: res.body.id,
+      reason: 'made-up numbers',
+    });
     expect(hide.status).toBe(200);
     expect((await call(getOne, 'GET', `/api/field-log/${id}`, null, undefined, { id })).status).toBe(404);
-    expect((await call(getOne, 'GET', `/api/field-log/${id}`, 'highcrag_shepherd', undefined, { id })).status).toBe(404);
+    expect((await call(getOne, 'GET', `/api/field-log/${id}`, 'highcrag_shepherd', undefined, { id })).status).toBe(
+      404,
+    );
     const mod = await call(getOne, 'GET', `/api/field-log/${id}`, 'moss_moderator', undefined, { id });
     expect(mod.status).toBe(200);
     expect(mod.body.hidden).toBe(true);
