@@ -4,6 +4,7 @@ import {
   PIPE_SERIES,
   parseNominalSize,
   resolvePipe,
+  type FittingKind,
   type NominalSize,
   type PipeSeries,
 } from '@/lib/hydraulics';
@@ -72,6 +73,43 @@ export function resolvePipeRun(run: unknown, extra: Record<string, unknown> = {}
     wallThicknessM: spec.wallThicknessM,
     pressureRatingPa: spec.pressureRatingPa,
   };
+}
+
+/**
+ * Fittings a drive pipe may carry, as the forms offer them: extra threaded 90°
+ * elbows and the valve at its head. Both default to none, the engine's own
+ * default, so a form saved before they existed recomputes unchanged.
+ */
+export const DRIVE_VALVES = {
+  none: { label: 'None', kind: undefined },
+  gate: { label: 'Gate valve, open', kind: 'gate-valve-open' },
+  ball: { label: 'Ball valve, open', kind: 'ball-valve-open' },
+} as const satisfies Record<string, { label: string; kind: FittingKind | undefined }>;
+
+export const driveFittingFields: FieldDef[] = [
+  {
+    type: 'number',
+    name: 'elbows',
+    prop: 'elbows',
+    label: 'Extra 90° elbows on the drive pipe',
+    min: 0,
+    max: 10,
+    step: 1,
+  },
+  {
+    type: 'select',
+    name: 'valve',
+    prop: 'valve',
+    label: 'Valve on the drive pipe',
+    options: Object.entries(DRIVE_VALVES).map(([value, v]) => ({ value, label: v.label })),
+  },
+];
+
+/** The fittings list for the engine from the form's elbow count and valve. */
+export function driveFittings(elbows: unknown, valve: unknown): { kind: FittingKind; count: number }[] {
+  const n = Math.max(0, Math.round(Number(elbows ?? 0)) || 0);
+  const kind = DRIVE_VALVES[(valve as keyof typeof DRIVE_VALVES) ?? 'none']?.kind;
+  return [...(n > 0 ? [{ kind: 'elbow-90-threaded' as const, count: n }] : []), ...(kind ? [{ kind, count: 1 }] : [])];
 }
 
 export const yesNo = (b: boolean) => (b ? 'yes' : 'no');

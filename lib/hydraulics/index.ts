@@ -54,7 +54,7 @@ export {
   type MetricPipeSpec,
   type MetricSeries,
 } from './metricPipes';
-export { FITTING_K, sumK } from './fittings';
+export { FITTING_K, sumK, type FittingKind } from './fittings';
 export {
   PE_HDS_PSI,
   VINSON,
@@ -87,13 +87,14 @@ export { RAM_CYCLE_SOURCES, estimateDriveFlow } from './ramCycle';
 export { PRACTICE, fallRarelyViable, type PracticeRule } from './practice';
 export { PUMP_SIZE_SOURCE, typicalDriveFlow } from './pumpSizes';
 export { vNotch90Usbr, vNotchFlow, weirCoefficients } from './weirs';
-export { householdRate, livestockRates, type LivestockKind } from './demandRates';
+export { GARDEN_DEPTH_PER_WEEK_M, householdRate, livestockRates, type LivestockKind } from './demandRates';
 
 // The seven calculators: input schema, run function and results.
 export { estimateYield, yieldEstimateSchema, type YieldEstimateResults } from './yieldEstimate';
 export { ARRAY_LIMITS, planArray, arrayPlannerSchema, type ArrayPlannerResults } from './arrayPlanner';
 export {
   BEATS_PER_MINUTE_RANGE,
+  DEFAULT_BEATS_PER_MINUTE,
   DRIVE_PIPE_GUIDES,
   FATIGUE_DESIGN_LIFE_YEARS,
   RATING_MARGIN,
