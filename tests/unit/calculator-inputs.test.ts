@@ -5,8 +5,11 @@ import {
   planDemandAndStorage,
   resolvePipe,
   toSI,
+  type ArrayPlannerResults,
   type DemandAndStorageResults,
   type DrivePipeCheckResults,
+  type SourceFlowResults,
+  type StallCheckResults,
 } from '@/lib/hydraulics';
 
 function ok<R>(r: Recomputed): R {
@@ -143,5 +146,88 @@ describe('demand and storage: rates per person, per head and the garden depth', 
     expect(def.visible?.('rate.sheep', state)).toBe(true);
     expect(def.visible?.('rate.goats', state)).toBe(false);
     expect(def.visible?.('people', state)).toBe(true);
+  });
+});
+
+describe('source flow: float coefficient, notch height and pool width', () => {
+  const float = { method: 'float', distance: '10 ft', time: '8 s, 9 s', width: '3 ft', depth: '4 in' };
+
+  it('the flow scales with the float coefficient, 0.85 unless given', () => {
+    const byDefault = ok<SourceFlowResults>(computeFromForm('source-flow', float));
+    const rough = ok<SourceFlowResults>(computeFromForm('source-flow', { ...float, floatK: '0.7' }));
+    // Q = k·v_s·w·d (Rantz et al., USGS Water-Supply Paper 2175, 1982, from memory): Q scales with k
+    expect(rough.flowM3s / byDefault.flowM3s).toBeCloseTo(0.7 / 0.85, 9);
+  });
+
+  it('warns when the pool behind a V-notch is too shallow or narrow', () => {
+    const notch = { method: 'v-notch', head: '4 in' };
+    const codes = (form: Record<string, string>) => {
+      const r = computeFromForm('source-flow', form);
+      return r.ok ? r.output.warnings.map((w) => w.code) : [r.message];
+    };
+    expect(codes(notch)).not.toContain('weir-not-fully-contracted');
+    // fully contracted V-notch: P ≥ 0.46 m (1.5 ft), B ≥ 0.91 m (3 ft) (USBR Water Measurement Manual, 2001, from memory)
+    expect(codes({ ...notch, crestHeight: '0.3 ft' })).toContain('weir-not-fully-contracted');
+    expect(codes({ ...notch, crestHeight: '2 ft', poolWidth: '2 ft' })).toContain('weir-not-fully-contracted');
+    expect(codes({ ...notch, crestHeight: '2 ft', poolWidth: '4 ft' })).not.toContain('weir-not-fully-contracted');
+  });
+});
+
+describe('array planner: efficiency, pump type, the upper pump’s drive flow and delivery line', () => {
+  const staged = { mode: 'staged', pumps: '3', driveFlowEach: '10 gal/min', upperLift: '65 ft' };
+
+  it('a lower efficiency delivers less', () => {
+    const typical = ok<ArrayPlannerResults>(
+      computeFromForm('array-planner', { driveFlowEach: '10 gal/min', efficiency: '60' }),
+    );
+    const poor = ok<ArrayPlannerResults>(
+      computeFromForm('array-planner', { driveFlowEach: '10 gal/min', efficiency: '30' }),
+    );
+    expect(poor.combinedDeliveryM3s).toBeLessThan(typical.combinedDeliveryM3s);
+  });
+
+  it('takes the upper pump’s drive flow as given', () => {
+    const r = ok<ArrayPlannerResults>(computeFromForm('array-planner', { ...staged, upperDriveFlow: '2 gal/min' }));
+    // 2 US gal/min = 2 × 3.785411784 L / 60 s (NIST Handbook 44)
+    expect(r.staged?.upperDriveFlowM3s).toBeCloseTo((2 * 0.003785411784) / 60, 9);
+    expect(r.staged?.upperDriveFlowEstimated).toBe(false);
+  });
+
+  it('charges the upper delivery line its friction instead of leaving it lossless', () => {
+    const lossless = ok<ArrayPlannerResults>(computeFromForm('array-planner', staged));
+    const piped = ok<ArrayPlannerResults>(
+      computeFromForm('array-planner', { ...staged, upperDeliveryLength: '2000 ft', upperDeliverySize: '1/2' }),
+    );
+    expect(piped.staged?.topYieldM3s).toBeLessThan(lossless.staged?.topYieldM3s ?? 0);
+  });
+});
+
+describe('stall check: intake submergence, fittings, delivery line and pump type', () => {
+  const reason = (form: Record<string, string>, code: string) => {
+    const r = ok<StallCheckResults>(computeFromForm('stall-check', form));
+    return r.causes.find((c) => c.code === code)?.reason ?? '';
+  };
+
+  const fromNumbers = (form: Record<string, string>, code: string) =>
+    ok<StallCheckResults>(computeFromForm('stall-check', form)).causes.some((c) => c.code === code && c.fromNumbers);
+
+  it('checks the water over the intake', () => {
+    // S = D(1 + 2.3 Fr) (ANSI/HI 9.8, Pump Intake Design, 1998): about 0.1 m for a 1/2" pipe at full flow
+    expect(fromNumbers({ submergence: '1 in' }, 'air-in-drive-pipe')).toBe(true);
+    expect(fromNumbers({ submergence: '12 in' }, 'air-in-drive-pipe')).toBe(false);
+  });
+
+  it('checks the delivery line only when its length is given', () => {
+    const reason = (form: Record<string, string>) =>
+      ok<StallCheckResults>(computeFromForm('stall-check', { symptoms: 'weak-delivery', ...form })).causes.find(
+        (c) => c.code === 'delivery-line-friction',
+      )?.reason;
+    expect(reason({})).toContain('Add the delivery line');
+    expect(reason({ deliveryLength: '150 ft' })).toContain('the delivery line loses');
+  });
+
+  it('counts the drive pipe’s elbows', () => {
+    // 3 threaded 90° elbows at K = 1.5 each (Crane TP-410, as in Munson Table 8.2, from memory)
+    expect(reason({ elbows: '3' }, 'fittings-in-drive-pipe')).toContain('ΣK = 4.5');
   });
 });
