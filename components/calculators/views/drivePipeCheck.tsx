@@ -1,5 +1,5 @@
 import { DISPLAY_UNITS, fromSI, unitLabel, type DrivePipeCheckResults } from '@/lib/hydraulics';
-import { SERIES_LABELS, surgeByMaterial } from '@/lib/calculators';
+import { surgeByMaterial } from '@/lib/calculators';
 import { BarChartCard } from '../charts';
 import type { CalculatorView } from './types';
 
@@ -17,7 +17,7 @@ export const drivePipeCheckView: CalculatorView<DrivePipeCheckResults> = {
   chart: (_r, units, input) => {
     const pu = DISPLAY_UNITS.pressure[units];
     const bars = surgeByMaterial(input).map((b) => ({
-      name: SERIES_LABELS[b.series].replace('schedule ', 'sch '),
+      name: b.label.replace('schedule ', 'sch ').replace(/ \((ISO 4427|EN 1452)\)/, ''),
       value: fromSI(b.surgePa, pu, 'pressure'),
       highlight: b.current,
     }));

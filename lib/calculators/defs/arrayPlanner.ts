@@ -148,9 +148,13 @@ export const arrayPlanner = defineCalculator(planArray, {
       pumpType,
       ...efficiency,
       ...(v.driveFlowEach !== undefined ? { driveFlowM3s: v.driveFlowEach } : {}),
-      drivePipe: resolvePipeRun(v.drivePipe, {
-        fittings: i === 0 && elbows > 0 ? [{ kind: 'elbow-90-threaded', count: elbows }] : [],
-      }),
+      drivePipe: resolvePipeRun(
+        v.drivePipe,
+        {
+          fittings: i === 0 && elbows > 0 ? [{ kind: 'elbow-90-threaded', count: elbows }] : [],
+        },
+        'drivePipe.nominal',
+      ),
     });
     const staged = v.mode === 'staged' ? (v.staged as Record<string, unknown> | undefined) : undefined;
     const upperLine = staged?.upperDeliveryLine as Record<string, unknown> | undefined;
@@ -158,7 +162,7 @@ export const arrayPlanner = defineCalculator(planArray, {
       fallM: v.fallM,
       liftM: v.liftM,
       pumps: Array.from({ length: count }, (_, i) => pump(i)),
-      deliveryLine: resolvePipeRun(v.deliveryLine),
+      deliveryLine: resolvePipeRun(v.deliveryLine, {}, 'deliveryLine.nominal'),
       ...(v.sourceSpareFlowM3s !== undefined ? { sourceSpareFlowM3s: v.sourceSpareFlowM3s } : {}),
       ...(staged
         ? {
@@ -170,9 +174,11 @@ export const arrayPlanner = defineCalculator(planArray, {
                 pumpType,
                 ...efficiency,
                 ...(staged.upperDriveFlowM3s !== undefined ? { driveFlowM3s: staged.upperDriveFlowM3s } : {}),
-                drivePipe: resolvePipeRun(v.drivePipe),
+                drivePipe: resolvePipeRun(v.drivePipe, {}, 'drivePipe.nominal'),
               },
-              ...(upperLine?.lengthM !== undefined ? { upperDeliveryLine: resolvePipeRun(upperLine) } : {}),
+              ...(upperLine?.lengthM !== undefined
+                ? { upperDeliveryLine: resolvePipeRun(upperLine, {}, 'staged.upperDeliveryLine.nominal') }
+                : {}),
             },
           }
         : {}),

@@ -4,12 +4,22 @@ import {
   DEFAULT_BEATS_PER_MINUTE,
   drivePipeCheckSchema,
   FATIGUE_DESIGN_LIFE_YEARS,
+  METRIC_SERIES,
   PIPE_SERIES,
+  type MetricSeries,
   type DrivePipeCheckResults,
   type PipeSeries,
 } from '@/lib/hydraulics';
 import { defineCalculator, type ResultRow } from '../types';
-import { driveFittingFields, driveFittings, pipeFields, resolvePipeRun, yesNo } from '../pipes';
+import {
+  driveFittingFields,
+  driveFittings,
+  METRIC_SERIES_LABELS,
+  pipeFields,
+  resolvePipeRun,
+  SERIES_LABELS,
+  yesNo,
+} from '../pipes';
 
 /** Past this the fatigue life is shown as "more than": no one plans a drive pipe for longer. */
 const FATIGUE_YEARS_SHOWN = 1000;
@@ -80,8 +90,9 @@ export const drivePipeCheck = defineCalculator(checkDrivePipe, {
     return {
       ...rest,
       // the series goes to the engine too, so that threaded joints are rated by what the pipe is
-      ...(typeof run?.series === 'string' ? { series: run.series } : {}),
-      drivePipe: resolvePipeRun(run, { fittings: driveFittings(elbows, valve) }),
+      // (the engine rates joints of the US series; metric plastic pipe is never threaded)
+      ...((PIPE_SERIES as readonly unknown[]).includes(run?.series) ? { series: run?.series } : {}),
+      drivePipe: resolvePipeRun(run, { fittings: driveFittings(elbows, valve) }, 'drivePipe.nominal'),
     };
   },
   rows: (r) => [
@@ -113,15 +124,20 @@ export const drivePipeCheck = defineCalculator(checkDrivePipe, {
  */
 export function surgeByMaterial(
   values: Record<string, unknown>,
-): { series: PipeSeries; surgePa: number; current: boolean }[] {
-  const current = (values.drivePipe as { series?: string } | undefined)?.series;
-  return PIPE_SERIES.flatMap((series) => {
+): { series: string; label: string; surgePa: number; current: boolean }[] {
+  const run = values.drivePipe as { series?: string; nominal?: string } | undefined;
+  const current = run?.series;
+  // a metric size is compared across the metric series, a nominal size across the US ones
+  const metric = typeof run?.nominal === 'string' && run.nominal.endsWith('mm');
+  const series: readonly string[] = metric ? METRIC_SERIES : PIPE_SERIES;
+  return series.flatMap((s) => {
     try {
       const out = drivePipeCheck.run({
         ...values,
-        drivePipe: resolvePipeRun({ ...(values.drivePipe as Record<string, unknown>), series }),
+        drivePipe: resolvePipeRun({ ...(values.drivePipe as Record<string, unknown>), series: s }),
       });
-      return [{ series, surgePa: out.results.surgePa, current: series === current }];
+      const label = metric ? METRIC_SERIES_LABELS[s as MetricSeries] : SERIES_LABELS[s as PipeSeries];
+      return [{ series: s, label, surgePa: out.results.surgePa, current: s === current }];
     } catch {
       return [];
     }

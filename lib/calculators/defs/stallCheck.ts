@@ -10,12 +10,13 @@ import { defineCalculator } from '../types';
 import {
   driveFittingFields,
   driveFittings,
+  normalizePipeSize,
   normalizeSeries,
   normalizeSize,
   pipeFields,
+  pipeSeriesOptions,
+  pipeSizeOptions,
   resolvePipeRun,
-  seriesOptions,
-  sizeOptions,
 } from '../pipes';
 import { PUMP_TYPE_OPTIONS } from '../options';
 
@@ -65,15 +66,16 @@ export const stallCheck = defineCalculator(runStallCheck, {
       name: 'site.drivePipe.nominal',
       prop: 'driveSize',
       label: 'Drive pipe size',
-      options: sizeOptions,
-      normalize: normalizeSize,
+      options: pipeSizeOptions,
+      normalize: normalizePipeSize,
+      seriesField: 'site.drivePipe.series',
     },
     {
       type: 'select',
       name: 'site.drivePipe.series',
       prop: 'driveMaterial',
       label: 'Drive pipe material',
-      options: seriesOptions,
+      options: pipeSeriesOptions,
       normalize: normalizeSeries,
     },
     {
@@ -160,10 +162,14 @@ export const stallCheck = defineCalculator(runStallCheck, {
       else if (site[k] === 'no') site[k] = false;
       else delete site[k];
     }
-    site.drivePipe = resolvePipeRun(site.drivePipe, { fittings: driveFittings(v.elbows, v.valve) });
+    site.drivePipe = resolvePipeRun(
+      site.drivePipe,
+      { fittings: driveFittings(v.elbows, v.valve) },
+      'site.drivePipe.nominal',
+    );
     // a delivery line counts only when its length is given; the size and material alone say nothing
     const line = site.deliveryLine as Record<string, unknown> | undefined;
-    if (line?.lengthM !== undefined) site.deliveryLine = resolvePipeRun(line);
+    if (line?.lengthM !== undefined) site.deliveryLine = resolvePipeRun(line, {}, 'site.deliveryLine.nominal');
     else delete site.deliveryLine;
     const symptoms = normalizeSymptoms(((v.symptoms as string[] | undefined) ?? []).join(','));
     return { site, symptoms: symptoms ? symptoms.split(',') : [] };
