@@ -1,7 +1,7 @@
 // @vitest-environment happy-dom
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { cleanup, render, screen, within } from '@testing-library/react';
-import { CALCULATORS } from '@/lib/calculators';
+import { CALCULATORS, computeFromForm } from '@/lib/calculators';
 import { CalculatorCard } from '@/components/calculators/kit/CalculatorCard';
 
 vi.mock('next/navigation', () => ({ useRouter: () => ({ push: () => {} }) }));
@@ -30,5 +30,17 @@ describe('efficiency sources on the product', () => {
     expect(caption).toContain('Building Trades Pocketbook');
     expect(caption).toContain('Water for the World');
     expect(caption).not.toContain('from memory, see');
+  });
+});
+
+describe('gallon pickers', () => {
+  it('offer imperial gallons beside US gallons, and read them', () => {
+    render(<CalculatorCard def={CALCULATORS['demand-and-storage']} />);
+    const picker = screen.getByLabelText('Ram delivery per day unit');
+    const labels = [...picker.querySelectorAll('option')].map((o) => o.textContent);
+    expect(labels).toEqual(expect.arrayContaining(['US gal/day', 'imp gal/day']));
+    const r = computeFromForm('demand-and-storage', { delivery: '100 galimp/day' });
+    // 1 imperial gallon = 4.54609 L exactly (UK Weights and Measures Act 1985, Schedule 1)
+    expect(r.ok && (r.output.results as { deliveryM3PerDay: number }).deliveryM3PerDay).toBeCloseTo(0.454609, 9);
   });
 });
