@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { CALCULATORS, computeFromForm, type Recomputed } from '@/lib/calculators';
+import { calculatorPropsFromSiteSheet } from '@/lib/calculators/site-sheet';
 import {
   checkDrivePipe,
   planDemandAndStorage,
@@ -229,5 +230,17 @@ describe('stall check: intake submergence, fittings, delivery line and pump type
   it('counts the drive pipe’s elbows', () => {
     // 3 threaded 90° elbows at K = 1.5 each (Crane TP-410, as in Munson Table 8.2, from memory)
     expect(reason({ elbows: '3' }, 'fittings-in-drive-pipe')).toContain('ΣK = 4.5');
+  });
+});
+
+describe('a question’s site sheet opens the stall check with its delivery line', () => {
+  it('carries the delivery line into the stall check', () => {
+    const props = calculatorPropsFromSiteSheet('stall-check', {
+      fall: '4 ft',
+      deliveryLength: '150 ft',
+      deliverySize: '3/4',
+      deliveryMaterial: 'hdpe-dr11',
+    });
+    expect(props).toMatchObject({ deliveryLength: '150 ft', deliverySize: '3/4', deliveryMaterial: 'hdpe-dr11' });
   });
 });
