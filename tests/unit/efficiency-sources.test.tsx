@@ -44,3 +44,15 @@ describe('gallon pickers', () => {
     expect(r.ok && (r.output.results as { deliveryM3PerDay: number }).deliveryM3PerDay).toBeCloseTo(0.454609, 9);
   });
 });
+
+describe('drive pipe check card', () => {
+  it('names the fatigue curve and the threaded-joint derating beside the results', () => {
+    render(
+      <CalculatorCard def={CALCULATORS['drive-pipe-check']} props={{ material: 'pvc-sch80', joints: 'threaded' }} />,
+    );
+    const results = screen.getByTestId('drive-pipe-check-results');
+    expect(results.textContent).toContain('Weakest rating (threaded joints)');
+    expect(results.textContent).toContain('Joints: threaded schedule 80 PVC at half its rating');
+    expect(results.textContent).toMatch(/Fatigue life: .*Vinson/);
+  });
+});

@@ -11,6 +11,10 @@ export const drivePipeCheckView: CalculatorView<DrivePipeCheckResults> = {
           {`${g.ratio} ${g.min}–${g.max}: yours ${g.value.toFixed(0)} ${g.within ? '(within)' : '(outside)'} — ${g.source}`}
         </li>
       ))}
+      {r.joint && (!r.joint.allowed || r.joint.ratingPa !== r.pressureRatingPa) ? (
+        <li>{`Joints: ${r.joint.note} — ${r.joint.source}`}</li>
+      ) : null}
+      {r.fatigue ? <li>{`Fatigue life: ${r.fatigue.source}`}</li> : null}
     </ul>
   ),
   // Surge against pipe material: the same size, fall and length in each series.
