@@ -37,6 +37,7 @@ import {
   householdRate,
   livestockRates,
   type QuantityKind,
+  type UnitSystem,
 } from '@/lib/hydraulics';
 import { CALCULATORS, computeForm, initialState, isCalculatorId } from '@/lib/calculators';
 import { listGuides } from '@/lib/guides/content';
@@ -110,7 +111,7 @@ export function roundingTolerance(written: string): number {
   return 0.5 * 10 ** Math.min(zeros, t.length - 1);
 }
 
-function resultsOf(check: Check): unknown {
+function resultsOf(check: Check, system: UnitSystem): unknown {
   if (check.calc === 'engine')
     return {
       PRACTICE,
@@ -122,7 +123,7 @@ function resultsOf(check: Check): unknown {
     };
   if (!isCalculatorId(check.calc)) throw new Error(`unknown calculator ${check.calc}`);
   const def = CALCULATORS[check.calc];
-  const state = initialState(def.fields, check.props, def.defaults, 'metric');
+  const state = initialState(def.fields, check.props, def.defaults, system);
   const out = computeForm(def as never, state);
   if (!out.ok) throw new Error(`${check.calc} refused ${JSON.stringify(check.props)}: ${JSON.stringify(out)}`);
   return out.output.results;
@@ -158,11 +159,12 @@ describe('guides agree with the engine', () => {
 
   for (const g of guides) {
     const checks = parseChecks(g.source);
-    it(`${g.slug}: every quoted figure is the engine's`, () => {
+    // a card opens on the reader's unit system (a metric reader's unnamed pipe is a metric one), so both must agree
+    it.each(['US', 'metric'] as const)(`${g.slug}: every quoted figure is the engine's (%s reader)`, (system) => {
       for (const c of checks) {
-        const results = resultsOf(c);
+        const results = resultsOf(c, system);
         for (const f of c.figures) {
-          const where = `${g.slug} ${c.calc} ${f.path} "${f.quote}"`;
+          const where = `${g.slug} (${system}) ${c.calc} ${f.path} "${f.quote}"`;
           const engine = inUnit(valueAt(results, f.path), f.unit);
           const written = Number(f.written.replace(/,/g, ''));
           const tol =
@@ -192,7 +194,7 @@ describe('guides agree with the engine', () => {
     const body =
       '{/* check: yield-estimate fall="4 ft" lift="29 ft" driveFlow="2 gal/min"\n  deliveredFlowM3s = 537 mL/min in "537 mL"\n*/}\nIt delivers 537 mL a minute.';
     const [c] = parseChecks(body);
-    const engine = inUnit(valueAt(resultsOf(c!), 'deliveredFlowM3s'), 'mL/min');
+    const engine = inUnit(valueAt(resultsOf(c!, 'US'), 'deliveredFlowM3s'), 'mL/min');
     // 537 mL/min was the old figure at efficiency 0.6; the sourced typical band gives far less.
     expect(Math.abs(engine - 537)).toBeGreaterThan(roundingTolerance('537'));
   });
