@@ -13,7 +13,7 @@ import {
   XAxis,
   YAxis,
 } from 'recharts';
-import { EFFICIENCY_BANDS } from '@/lib/hydraulics/efficiency';
+import { EFFICIENCY_BANDS, EFFICIENCY_SOURCES } from '@/lib/hydraulics/efficiency';
 import { palette } from '@/tailwind.config';
 
 export interface ChartPoint {
@@ -36,6 +36,19 @@ for (const r of EFFICIENCY_BANDS.commercial.rows) {
   const hit = band.find((b) => b.x === r.ratio);
   if (hit) hit.commercial = r.typical;
 }
+
+/** The published tables drawn as they are printed, beside the band derived from them. */
+const PUBLISHED = EFFICIENCY_SOURCES.filter(
+  (src) => src.id === 'pocketbook-table' || src.id === 'water-for-the-world-homemade',
+).map((src) => ({ ...src, data: src.points.map(([x, y]) => ({ x, published: y })) }));
+const PUBLISHED_STYLE: Record<string, { stroke: string; dash?: string; name: string }> = {
+  'pocketbook-table': { stroke: palette.creek[700], name: 'published table (Pocketbook)' },
+  'water-for-the-world-homemade': {
+    stroke: palette.clay[700],
+    dash: '8 3',
+    name: 'published home-built figure (Water for the World)',
+  },
+};
 
 /** Efficiency (D'Aubuisson) against lift ratio for every entry, the reader's own marked, over the engine's typical band. */
 export function EfficiencyChart({ points }: { points: ChartPoint[] }) {
@@ -119,6 +132,21 @@ export function EfficiencyChart({ points }: { points: ChartPoint[] }) {
             connectNulls
             isAnimationActive={false}
           />
+          {PUBLISHED.map((src) => {
+            const style = PUBLISHED_STYLE[src.id];
+            return (
+              <Line
+                key={src.id}
+                data={src.data}
+                dataKey="published"
+                name={style?.name ?? src.label}
+                stroke={style?.stroke}
+                strokeDasharray={style?.dash}
+                dot={{ r: 2 }}
+                isAnimationActive={false}
+              />
+            );
+          })}
           {/* an empty series would fall back to the chart's band rows and draw phantom points */}
           {others.length ? (
             <Scatter
@@ -145,9 +173,25 @@ export function EfficiencyChart({ points }: { points: ChartPoint[] }) {
           ) : null}
         </ComposedChart>
       </ResponsiveContainer>
-      <figcaption className="cw-muted mt-1 font-sans text-xs">
-        Band: the engine&apos;s typical efficiency for small homemade rams (from memory, see the calculators&apos;
-        notes). Each point opens its entry.
+      <figcaption className="cw-muted mt-1 flex flex-col gap-1 font-sans text-xs">
+        <span data-testid="field-log-count">
+          {points.length === 1 ? '1 field log measurement' : `${points.length} field log measurements`} beside the
+          published tables and the engine&apos;s band built from them. Each point opens its entry.
+        </span>
+        <details>
+          <summary className="cw-link cursor-pointer">Sources</summary>
+          <ul className="mt-1 flex list-disc flex-col gap-1 pl-4">
+            <li>
+              Band, {EFFICIENCY_BANDS.homemade.label}: {EFFICIENCY_BANDS.homemade.source}.
+            </li>
+            {PUBLISHED.map((src) => (
+              <li key={src.id}>
+                {PUBLISHED_STYLE[src.id]?.name ?? src.label}: {src.citation}
+                {src.note ? ` (${src.note})` : ''}.
+              </li>
+            ))}
+          </ul>
+        </details>
       </figcaption>
     </figure>
   );

@@ -112,6 +112,9 @@ const PREFILL: Record<CalculatorId, Partial<Record<SiteSheetField, string>>> = {
     delivered: 'delivered',
     bpm: 'bpm',
     symptoms: 'symptoms',
+    deliveryLength: 'deliveryLength',
+    deliverySize: 'deliverySize',
+    deliveryMaterial: 'deliveryMaterial',
   },
   'yield-estimate': { fall: 'fall', lift: 'lift', driveFlow: 'driveFlow', delivered: 'measured' },
   'drive-pipe-check': {

@@ -1,6 +1,7 @@
 import { DISPLAY_UNITS, fromSI, parseQuantity, toSI, type QuantityKind, type UnitSystem } from '@/lib/hydraulics';
 import { EngineInputError } from '@/lib/hydraulics';
 import { inputNumber } from './format';
+import { metricPipeDefault } from './pipes';
 import type { FieldDef, FieldState, FormState } from './types';
 
 /** Splits "4 ft" into { text: '4', unit: 'ft' }; a bare number keeps `unit` undefined. */
@@ -43,7 +44,29 @@ export function initialState(
       state[f.name] = { text: raw };
     }
   }
+  if (units === 'metric') metricPipeDefaults(fields, props, state);
   return state;
+}
+
+/** A pipe the MDX or share link does not name starts, for a metric reader, from the metric series. */
+function metricPipeDefaults(fields: readonly FieldDef[], props: Record<string, string | undefined>, state: FormState) {
+  for (const f of fields) {
+    if (f.type !== 'select' || f.seriesField === undefined) continue;
+    const series = fields.find((x) => x.name === f.seriesField);
+    if (!series || props[f.prop] !== undefined || props[series.prop] !== undefined) continue;
+    const size = state[f.name]?.text;
+    const from = state[series.name]?.text;
+    if (size === undefined || from === undefined) continue;
+    let pick: ReturnType<typeof metricPipeDefault>;
+    try {
+      pick = metricPipeDefault(from, size);
+    } catch {
+      continue; // a default the US tables do not know stays as it is
+    }
+    if (!pick) continue;
+    state[f.name] = { text: pick.size };
+    state[series.name] = { text: pick.series };
+  }
 }
 
 function isKnownUnit(qty: QuantityKind, unit: string): boolean {

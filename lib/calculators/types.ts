@@ -33,6 +33,8 @@ export type FieldDef =
       options: readonly { value: string; label: string }[];
       /** reads what an MDX prop or share link gives ("3/4 in") into an option value ("3/4") */
       normalize?: (raw: string) => string;
+      /** a pipe size's series field: the pair starts from the metric series for a metric reader (pipes.ts) */
+      seriesField?: string;
     }
   | {
       type: 'checks';

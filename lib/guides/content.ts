@@ -12,8 +12,10 @@ export function guidesDir(): string {
 export interface GuideFile {
   slug: string;
   meta: GuideFrontmatter;
-  /** MDX body without the frontmatter. */
+  /** MDX body without the frontmatter and without editors' comments: what the page and search see. */
   body: string;
+  /** MDX body with the editors' `{/* check: ... *\/}` comments the guides-agree test reads. */
+  source: string;
   /** sha256 of the whole file: a safety check is tied to exactly this text. */
   hash: string;
 }
@@ -37,7 +39,21 @@ export function readGuideFile(slug: string, dir = guidesDir()): GuideFile | null
     const issue = meta.error.issues[0];
     throw new Error(`content/guides/${slug}.mdx: frontmatter ${issue?.path.join('.')}: ${issue?.message}`);
   }
-  return { slug, meta: meta.data, body: parsed.content, hash: contentHash(raw) };
+  return {
+    slug,
+    meta: meta.data,
+    body: stripEditorComments(parsed.content),
+    source: parsed.content,
+    hash: contentHash(raw),
+  };
+}
+
+/**
+ * Drops MDX comments (`{/* ... *\/}`): the worked-example checks are for the test, not
+ * for readers, and search would otherwise index their engine names and props as words.
+ */
+export function stripEditorComments(mdx: string): string {
+  return mdx.replace(/\n?[ \t]*\{\/\*[\s\S]*?\*\/\}[ \t]*\n?/g, '\n');
 }
 
 /** Every guide in reading order (frontmatter `order`, then title). */

@@ -20,8 +20,21 @@ import {
 import { DEFAULT_CLOSURE_RATIO } from './ramCycle';
 import { addRangeIssue, efficiency, fallM, flowM3s, liftM, parseInput, siNumber, waterTempC } from './schemaKit';
 import { finish, step, tq, type CalcOutput, type Step, type Warning } from './steps';
+import { PRACTICE } from './practice';
 import { warn } from './warnings';
 import { waterProperties } from './water';
+
+/**
+ * Limits of the planner, one value each: up to 20 pumps listed one by one, and
+ * a staged search of up to 50 copies of the first pump, so the planner can say
+ * how many lower pumps a stage needs even past what a form lists. Both are
+ * common practice, no published source found.
+ */
+export const ARRAY_LIMITS = {
+  pumps: 20,
+  lowerCopies: 50,
+  source: 'common practice, no published source found',
+} as const;
 
 export const arrayPumpSchema = z.object({
   label: z.optional(z.string().check(z.maxLength(60))),
@@ -38,7 +51,7 @@ export const arrayPlannerSchema = z
     fallM: fallM(),
     /** lift from the pumps to the outlet of the shared delivery line (the tank, when staged), m */
     liftM: liftM(),
-    pumps: z.array(arrayPumpSchema).check(z.minLength(1), z.maxLength(20)),
+    pumps: z.array(arrayPumpSchema).check(z.minLength(1), z.maxLength(ARRAY_LIMITS.pumps)),
     deliveryLine: pipeRunSchema,
     /** flow the source can spare in the driest month, m³/s */
     sourceSpareFlowM3s: z.optional(flowM3s()),
@@ -151,8 +164,8 @@ export interface ArrayPlannerResults {
  * r.pumps[1].fittingHeadLossM  // ≈ 0.097
  * r.pumps[1].fittingHeadLossM / 1.2192  // ≈ 0.08
  * // its lift ratio against H_eff rises, so its typical efficiency falls too
- * r.pumps[1].deliveredFlowM3s / r.pumps[0].deliveredFlowM3s  // ≈ 0.89
- * r.gainOverFirstPump  // ≈ 1.89
+ * r.pumps[1].deliveredFlowM3s / r.pumps[0].deliveredFlowM3s  // ≈ 0.874
+ * r.gainOverFirstPump  // ≈ 1.870
  */
 export function planArray(input: ArrayPlannerInput): CalcOutput<ArrayPlannerResults> {
   const v = parseInput(arrayPlannerSchema, input);
@@ -311,11 +324,11 @@ export function planArray(input: ArrayPlannerInput): CalcOutput<ArrayPlannerResu
           `The pumps need ${(totalDrive * 6e4).toFixed(1)} L/min of drive water but the source spares ${(v.sourceSpareFlowM3s * 6e4).toFixed(1)} L/min. The intake will draw down, suck air and the pumps will stop; run fewer pumps or smaller ones.`,
         ),
       );
-    } else if (sourceShare > 0.9) {
+    } else if (sourceShare > PRACTICE.sourceShareCaution.value) {
       warnings.push(
         warn(
           'drive-near-source-limit',
-          `The pumps use ${(sourceShare * 100).toFixed(0)} % of what the source spares; in a dry spell the intake may draw air.`,
+          `The pumps use ${(sourceShare * 100).toFixed(0)} % of the source flow given, more than the ${PRACTICE.sourceShareCaution.value * 100} % the engine allows for (${PRACTICE.sourceShareCaution.source}); in a dry spell the intake may draw air.`,
         ),
       );
     }
@@ -413,7 +426,7 @@ function planStage(
   let needed = 0;
   const one = solveParallel([lower.pump], v.fallM, v.liftM, line, nu).combinedFlowM3s;
   const start = one > 0 ? Math.max(1, Math.ceil(Qu / one - 1e-9)) : 51;
-  for (let n = start; n <= 50; n++) {
+  for (let n = start; n <= ARRAY_LIMITS.lowerCopies; n++) {
     if (solveParallel([lower.pump], v.fallM, v.liftM, line, nu, [n]).combinedFlowM3s >= Qu * (1 - 1e-12)) {
       needed = n;
       break;
@@ -442,7 +455,7 @@ function planStage(
     warnings.push(
       warn(
         'lower-stage-limit',
-        'Even 50 lower pumps like the first cannot supply the upper pump through this delivery line; its friction limits the stage. Use a larger line or a smaller upper pump.',
+        `Even ${ARRAY_LIMITS.lowerCopies} lower pumps like the first cannot supply the upper pump through this delivery line; its friction limits the stage. Use a larger line or a smaller upper pump.`,
       ),
     );
   }

@@ -10,6 +10,7 @@ import { NOMINAL_SIZES, PIPE_SERIES, defaultSeries, resolvePipe, type NominalSiz
 import { hazenCOf, pipeRunSchema, roughnessOf } from './pipeSchemas';
 import { flowM3s, liftM, parseInput, siNumber, waterTempC } from './schemaKit';
 import { finish, step, tq, type CalcOutput, type Step, type Warning } from './steps';
+import { PRACTICE } from './practice';
 import { warn } from './warnings';
 import { G, waterProperties } from './water';
 
@@ -21,7 +22,7 @@ export const deliveryLineSchema = z.object({
   line: pipeRunSchema,
   /** series to pick the smallest standard size from; default by material */
   sizingSeries: z.optional(z.enum(PIPE_SERIES)),
-  /** largest acceptable friction-plus-fitting loss, m; default 10 % of the lift (common practice, no source) */
+  /** largest acceptable friction-plus-fitting loss, m; default 10 % of the lift (PRACTICE.deliveryLossShare: common practice, no published source found) */
   targetLossM: z.optional(siNumber({ min: 0, minExclusive: true, max: 1000, unit: 'm' })),
   /** the line runs where it freezes */
   frostRisk: z._default(z.boolean(), false),
@@ -198,7 +199,7 @@ export function checkDeliveryLine(input: DeliveryLineInput): CalcOutput<Delivery
     ),
   );
 
-  const target = v.targetLossM ?? 0.1 * h;
+  const target = v.targetLossM ?? PRACTICE.deliveryLossShare.value * h;
   const lossNow = loss.frictionHeadM + loss.minorHeadM;
   const series = v.sizingSeries ?? defaultSeries(line.material);
   let smallest: SizedPipe | null = null;

@@ -13,7 +13,9 @@
  * Stokka, G. & Mostrom, M. (2021), "Livestock Water Requirements", North
  * Dakota State University Extension AS1763 (earlier AS-954; its beef-cow
  * figures are 14–16.5 US gal at 88 °F) — our values are from memory, not
- * copied from its tables; needs rise steeply with heat and lactation.
+ * copied from its tables; needs rise steeply with heat and lactation. Milking
+ * cows follow the NDSU figures quoted at the table (found); chickens, 9 US gal
+ * per 100 birds (0.34 L each, laying hens in hot weather), stay from memory.
  * Garden: about 1 inch (25.4 mm) of water a week in the growing season —
  * common practice, no source.
  */
@@ -25,7 +27,9 @@ export type LivestockKind = (typeof LIVESTOCK_KINDS)[number];
 /** [typical, low, high] US gal per head (or per 100 birds) per day — from memory. */
 const LIVESTOCK_GAL: Record<LivestockKind, readonly [number, number, number]> = {
   'beef-cow': [15, 8, 20],
-  'dairy-cow': [35, 20, 50],
+  // NDSU Extension news release "Water Vital for Livestock During Droughts" (1 May 2008), lactating 1,400 lb
+  // cows at 80 °F: 17.9 gal (20 lb milk a day) to 45.7 gal (100 lb); 38.7 gal at 80 lb taken as typical
+  'dairy-cow': [38.7, 17.9, 45.7],
   horse: [12, 8, 15],
   sheep: [2, 1, 3],
   goat: [2, 1, 3],

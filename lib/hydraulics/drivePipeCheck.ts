@@ -5,34 +5,34 @@
  */
 import * as z from 'zod/mini';
 import { sumK, type Fitting } from './fittings';
-import { MATERIAL_PROPS } from './pipes';
+import { MATERIAL_PROPS, PIPE_SERIES } from './pipes';
+import { jointRating, pvcFatigue, type JointRating, type PvcFatigue } from './pipeRatings';
+import { shutOffPressure } from './shutOff';
 import { drivePipeSchema, roughnessOf } from './pipeSchemas';
 import { EngineInputError } from './errors';
 import { DEFAULT_ENTRANCE_K, DEFAULT_PUMP_LOSS_K, fullFlowVelocity } from './ramCycle';
 import { addRangeIssue, fallM, flowM3s, liftM, parseInput, siNumber, waterTempC } from './schemaKit';
 import { finish, step, tq, type CalcOutput, type Step, type Warning } from './steps';
 import { joukowskySurge, slowClosureSurge, waveRoundTrip, waveSpeed } from './transients';
+import { PRACTICE } from './practice';
 import { warn } from './warnings';
 import { G, waterProperties } from './water';
 
 /**
- * Published guidance on drive-pipe length. The sources disagree; all are
- * shown so the reader sees where a pipe sits against each.
- * L/H 3–12: the range given across US extension publications on ram pumps (from memory).
- * L/H 5–12: the narrower range in several ram handbooks (from memory).
- * L/D 150–1000: Calvert's drive-pipe tests as cited in ram handbooks (from memory).
- * None of the three was found in the published references searched, so each stays
- * "from memory" until a reader can cite it.
+ * Guidance on drive-pipe length, one rule each: L/H 5–10 (PRACTICE: the range
+ * ram guides repeat; no published source found) and L/D 150–1000 (Calvert's
+ * drive-pipe tests as cited in ram handbooks, from memory). The Building
+ * Trades Pocketbook's 25–50 ft of drive pipe is the one published length
+ * found; it is returned beside them (PRACTICE.driveLengthMinM/MaxM).
  */
 export const DRIVE_PIPE_GUIDES = [
   {
-    id: 'length-to-fall-extension',
+    id: 'length-to-fall',
     ratio: 'L/H',
-    min: 3,
-    max: 12,
-    source: 'US extension publications on ram pumps (from memory)',
+    min: PRACTICE.driveLengthToFallMin.value,
+    max: PRACTICE.driveLengthToFallMax.value,
+    source: PRACTICE.driveLengthToFallMin.source,
   },
-  { id: 'length-to-fall-handbooks', ratio: 'L/H', min: 5, max: 12, source: 'ram pump handbooks (from memory)' },
   {
     id: 'length-to-diameter',
     ratio: 'L/D',
@@ -41,6 +41,23 @@ export const DRIVE_PIPE_GUIDES = [
     source: 'Calvert, drive-pipe experiments, as cited in ram handbooks (from memory)',
   },
 ] as const;
+
+/** Margin wanted between the weakest rating and the peak (PRACTICE.ratingMargin: common practice, no published source found). */
+export const RATING_MARGIN = PRACTICE.ratingMargin;
+
+/**
+ * Beats per minute assumed for the fatigue life when none is given: 60, inside
+ * the 40–120 a small ram usually beats at (PRACTICE: common practice, no published source found).
+ */
+export const DEFAULT_BEATS_PER_MINUTE = 60;
+export const BEATS_PER_MINUTE_RANGE = {
+  min: PRACTICE.beatsPerMinuteMin.value,
+  max: PRACTICE.beatsPerMinuteMax.value,
+  source: PRACTICE.beatsPerMinuteMin.source,
+} as const;
+
+/** Design life a PVC drive pipe's fatigue life is held against, years (common practice, no published source found). */
+export const FATIGUE_DESIGN_LIFE_YEARS = 50;
 
 export const drivePipeCheckSchema = z
   .object({
@@ -53,8 +70,16 @@ export const drivePipeCheckSchema = z
     driveFlowM3s: z.optional(flowM3s()),
     /** waste-valve closing time, s; omit for a sudden closure (the worst case) */
     valveClosureTimeS: z.optional(siNumber({ min: 0, minExclusive: true, max: 5, unit: 's' })),
+    /** velocity when the waste valve shuts, m/s, for the shut-off pressure; omit for the full-flow velocity (the worst case) */
+    closureVelocityMs: z.optional(siNumber({ min: 0, minExclusive: true, max: 20, unit: 'm/s' })),
+    /** the series the drive pipe is, so its joints can be rated (threaded sch 40 PVC is refused) */
+    series: z.optional(z.enum(PIPE_SERIES)),
+    /** how the drive pipe's joints are made */
+    joints: z._default(z.enum(['plain', 'threaded']), 'plain'),
+    /** beats per minute, for the fatigue life of a PVC drive pipe */
+    beatsPerMinute: z._default(siNumber({ min: 10, max: 300, unit: '1/min' }), DEFAULT_BEATS_PER_MINUTE),
     /** required ratio of pipe rating to peak pressure */
-    requiredMargin: z._default(siNumber({ min: 1, max: 5, unit: '' }), 1.5),
+    requiredMargin: z._default(siNumber({ min: 1, max: 5, unit: '' }), RATING_MARGIN.value),
     waterTempC: waterTempC(),
   })
   .check(
@@ -123,6 +148,18 @@ export interface DrivePipeCheckResults {
   ratingMargin: number;
   rigid: boolean;
   youngsModulusPa: number;
+  /** pressure the ram reaches against a closed delivery (shutOff.ts), Pa */
+  shutOffPressurePa: number;
+  shutOffVelocityFrom: 'given' | 'full-flow';
+  /** the joints' rating when series and joints are given */
+  joint?: JointRating;
+  /** the lower of the pipe's and its joints' ratings, Pa */
+  weakestRatingPa: number;
+  weakestIs: 'pipe' | 'threaded joint';
+  /** weakest rating ÷ shut-off pressure */
+  shutOffMargin: number;
+  /** PVC only: Vinson's cyclic life at the shut-off pressure and the beats per minute */
+  fatigue?: PvcFatigue & { beatsPerMinute: number };
 }
 
 /**
@@ -132,7 +169,10 @@ export interface DrivePipeCheckResults {
  * v₀ = √(2gH/R), R = 1 + K_e + K_p + ΣK + f·L/D (ramCycle.ts); Korteweg wave speed
  * c = √((K/ρ)/(1 + K·D/(E·e))); Joukowsky surge Δp = ρ·c·v₀ (sudden closure at
  * full flow, the worst case — a float valve that shuts the delivery line does
- * this); peak = ρ·g·H + Δp against the rating; round trip 2L/c.
+ * this); peak = ρ·g·H + Δp against the rating; round trip 2L/c; shut-off
+ * pressure at the closure velocity (shutOff.ts) against the weaker of the pipe
+ * and its joints (pipeRatings.ts); for PVC, Vinson's cycles to failure at that
+ * peak and the years they last at the beat rate.
  * Units: SI. Range: H ≤ 100 m, L ≤ 500 m.
  * Reference: Korteweg (1878) and Joukowsky (1900) as in Wylie, Streeter & Suo,
  * Fluid Transients in Systems (1993); guidance sources in DRIVE_PIPE_GUIDES.
@@ -157,6 +197,12 @@ export interface DrivePipeCheckResults {
  * // margin 3.10 MPa / 0.87 MPa
  * r.pressureRatingPa  // ≈ 3.10e6
  * r.ratingMargin  // ≈ 3.6
+ * // against a closed delivery the chamber charges to the same peak (full-flow velocity, sudden closure)
+ * r.shutOffPressurePa  // ≈ 0.87e6
+ * // PVC fatigue (Vinson): DR = 33.40/3.378 = 9.89, S = 0.870 MPa × 8.89/2 = 3.87 MPa (561 psi)
+ * r.fatigue.cyclesToFailure  // ≈ 1.65e8 ±1%
+ * // at 60 beats a minute, 31.6 million a year
+ * r.fatigue.yearsToFailure  // ≈ 5.2 ±2%
  */
 export function checkDrivePipe(input: DrivePipeCheckInput): CalcOutput<DrivePipeCheckResults> {
   const v = parseInput(drivePipeCheckSchema, input);
@@ -193,34 +239,21 @@ export function checkDrivePipe(input: DrivePipeCheckInput): CalcOutput<DrivePipe
       source: g.source,
     };
   });
-  const lhGuides = guides.filter((g) => g.ratio === 'L/H');
-  if (lhGuides.every((g) => lh < g.min)) {
+  const lhMin = PRACTICE.driveLengthToFallMin.value;
+  const lhMax = PRACTICE.driveLengthToFallMax.value;
+  const rule = `${lhMin}–${lhMax} times the fall (${PRACTICE.driveLengthToFallMin.source})`;
+  if (lh < lhMin) {
     warnings.push(
       warn(
         'drive-length-short-for-fall',
-        `The drive pipe is ${lh.toFixed(1)} times the fall; the guides ask for at least ${Math.min(...lhGuides.map((g) => g.min))}. A short pipe returns the pressure wave too soon for a strong beat.`,
+        `The drive pipe is ${lh.toFixed(1)} times the fall; the engine asks for ${rule}. A short pipe returns the pressure wave too soon for a strong beat.`,
       ),
     );
-  } else if (lhGuides.every((g) => lh > g.max)) {
+  } else if (lh > lhMax) {
     warnings.push(
       warn(
         'drive-length-long-for-fall',
-        `The drive pipe is ${lh.toFixed(1)} times the fall, longer than the ${Math.max(...lhGuides.map((g) => g.max))} the guides suggest; friction eats the fall and the beat slows. Consider a standpipe or a larger bore.`,
-      ),
-    );
-  } else if (lhGuides.some((g) => !g.within)) {
-    const ok = lhGuides
-      .filter((g) => g.within)
-      .map((g) => `${g.min}–${g.max}`)
-      .join(', ');
-    const not = lhGuides
-      .filter((g) => !g.within)
-      .map((g) => `${g.min}–${g.max}`)
-      .join(', ');
-    warnings.push(
-      warn(
-        'drive-guides-disagree',
-        `At ${lh.toFixed(1)} times the fall the drive pipe is inside the ${ok} range of some guides but outside the ${not} of others; sources disagree here, so watch the beat.`,
+        `The drive pipe is ${lh.toFixed(1)} times the fall, longer than the engine's ${rule}; friction eats the fall and the beat slows. Consider a standpipe or a larger bore.`,
       ),
     );
   }
@@ -360,10 +393,81 @@ export function checkDrivePipe(input: DrivePipeCheckInput): CalcOutput<DrivePipe
     warnings.push(
       warn(
         'surge-margin-low',
-        `The peak of ${kPa(peak)} leaves a margin of only ${margin.toFixed(2)} on the ${kPa(rating)} rating (wanted ${v.requiredMargin}); the pipe sees this surge at every beat, and fatigue adds up.`,
+        `The peak of ${kPa(peak)} leaves a margin of only ${margin.toFixed(2)} on the ${kPa(rating)} rating (wanted ${v.requiredMargin}; ${RATING_MARGIN.source}); the pipe sees this surge at every beat, and fatigue adds up.`,
       ),
     );
   }
+  const vClose = v.closureVelocityMs ?? v0;
+  const shutOff = shutOffPressure(rho, H, L, c, vClose, v.valveClosureTimeS);
+  steps.push(
+    step(
+      'Shut-off pressure against a closed delivery',
+      'p_{so} = \\rho g H + \\Delta p(v_c)',
+      `p_{so} = ${tq(stat, 'Pa')} + ${tq(shutOff - stat, 'Pa')}`,
+      shutOff,
+      'Pa',
+      'pressure',
+      'The chamber charges toward this at every beat while the delivery is shut (shutOff.ts).',
+    ),
+  );
+  const joint = v.series === undefined ? undefined : jointRating(v.series, rating, v.joints);
+  const jointWeaker = joint !== undefined && joint.allowed && joint.ratingPa < rating;
+  const weakest = jointWeaker ? joint.ratingPa : rating;
+  if (joint && !joint.allowed && v.joints === 'threaded') {
+    warnings.push(warn('threaded-joint-refused', `Threaded joints in this drive pipe: ${joint.note}.`));
+  } else if (shutOff > weakest) {
+    warnings.push(
+      warn(
+        'shut-off-exceeds-rating',
+        `Against a closed delivery the ram can charge its chamber to ${kPa(shutOff)}, above the ${jointWeaker ? "threaded joints' " : ''}rating of ${kPa(weakest)}. Fit a relief valve set below that rating and a gauge on the pump side, and never leave the ram beating against a shut valve.`,
+      ),
+    );
+  }
+  let fatigue: DrivePipeCheckResults['fatigue'];
+  if (dp.material === 'pvc') {
+    const od = D + 2 * e;
+    const f = pvcFatigue(shutOff, od, e, v.beatsPerMinute);
+    fatigue = { ...f, beatsPerMinute: v.beatsPerMinute };
+    steps.push(
+      step(
+        'Hoop stress at the peak',
+        'S = \\frac{p\\,(DR - 1)}{2},\\ DR = \\frac{OD}{e}',
+        `S = \\frac{${tq(shutOff, 'Pa')} \\times (${tq(od / e)} - 1)}{2}`,
+        f.hoopStressPa,
+        'Pa',
+        'pressure',
+      ),
+    );
+    steps.push(
+      step(
+        'Cycles to failure (Vinson)',
+        'N = 5.05\\times10^{21}\\,S_{psi}^{-4.906}',
+        `N = 5.05\\times10^{21} \\times ${tq(f.hoopStressPa / 6894.757)}^{-4.906}`,
+        f.cyclesToFailure,
+        '',
+        undefined,
+        f.source,
+      ),
+    );
+    steps.push(
+      step(
+        'Years at this beat rate',
+        't = \\frac{N}{n \\times 525\\,960}',
+        `t = \\frac{${tq(f.cyclesToFailure)}}{${tq(v.beatsPerMinute)} \\times 525\\,960}`,
+        f.yearsToFailure,
+        'yr',
+      ),
+    );
+    if (f.yearsToFailure < FATIGUE_DESIGN_LIFE_YEARS) {
+      warnings.push(
+        warn(
+          'fatigue-life-short',
+          `At ${v.beatsPerMinute} beats a minute the drive pipe sees ${(f.beatsPerYear / 1e6).toFixed(0)} million pressure cycles a year; by Vinson's fatigue curve for PVC it may crack after about ${f.yearsToFailure < 1 ? 'less than a year' : `${f.yearsToFailure.toFixed(0)} years`}. A thicker wall (schedule 80) or steel lasts longer.`,
+        ),
+      );
+    }
+  }
+
   if (!mat.rigid) {
     warnings.push(
       warn(
@@ -389,7 +493,14 @@ export function checkDrivePipe(input: DrivePipeCheckInput): CalcOutput<DrivePipe
     ratingMargin: margin,
     rigid: mat.rigid,
     youngsModulusPa: mat.youngsModulusPa,
+    shutOffPressurePa: shutOff,
+    shutOffVelocityFrom: v.closureVelocityMs === undefined ? 'full-flow' : 'given',
+    weakestRatingPa: weakest,
+    weakestIs: jointWeaker ? 'threaded joint' : 'pipe',
+    shutOffMargin: weakest / shutOff,
   };
+  if (joint) results.joint = joint;
+  if (fatigue) results.fatigue = fatigue;
   if (meanV !== undefined) results.meanVelocityMs = meanV;
   if (v.liftM !== undefined) results.deliveryPressurePa = rho * G * v.liftM;
   return finish(results, steps, warnings);

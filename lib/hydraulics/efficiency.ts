@@ -1,6 +1,7 @@
 /**
- * Ram efficiency: the D'Aubuisson and Rankine definitions, and typical
- * bands by pump type against the lift ratio h/H.
+ * Ram efficiency: the D'Aubuisson and Rankine definitions, the published
+ * tables of efficiency against the lift ratio h/H, and the typical bands by
+ * pump type derived from them.
  *
  * Definitions (Q drive flow entering the drive pipe, q delivered flow, H
  * fall and h lift, both measured from the pump):
@@ -8,21 +9,36 @@
  *   Rankine      η_R = q·(h−H) / ((Q−q)·H)    — counts only the lift above the supply and the water wasted
  * Reference: both as defined in e.g. Krol, J. (1951), "The automatic
  * hydraulic ram", Proceedings of the Institution of Mechanical Engineers 165,
- * 53–73 (that the paper uses both definitions is from memory), and in ram
- * manuals such as Jeffery, T.D., Thomas, T.H., Smith, A.V., Glover, P.B. &
- * Fountain, P.D. (1992), Hydraulic Ram Pumps: A guide to ram pump water supply
- * systems, Intermediate Technology Publications (from memory).
+ * 53–73 (that the paper uses both definitions is from memory).
  *
- * Typical bands (D'Aubuisson) — from memory, a summary of the trend that
- * ram handbooks and extension sheets report, not one published table:
- * efficiency is highest at low lift ratios and falls as the ratio grows.
- * As anchor points, the Water for the World technical note RWS.4.D.5
- * "Designing a Hydraulic Ram Pump" (USAID) tells designers to use
- * E = 0.66 for commercial rams and 0.33 for home-built ones (from memory: the
- * note was not found in the references searched); small homemade
- * PVC or galvanized rams run roughly 0.5–0.8 at low lift ratios and fall at
- * higher ratios. Beyond the last ratio listed the pump type is not expected
- * to deliver at all.
+ * The published tables found (EFFICIENCY_SOURCES, each with its citation):
+ *  - Building Trades Pocketbook (International Textbook Company, Scranton;
+ *    editions 1899–1905), "Water Supply and Distribution — The Hydraulic Ram":
+ *    efficiency against the ratio of lift to fall, 72 % at 4 falling to 0 at 26
+ *    (the scanned copy prints "10" between 14 and 18; read as 16, the only
+ *    value that keeps the ratios in steps of 2). The same page's rule — about
+ *    1/7 of the supply to five times the fall, 1/14 to ten times — is kept as a
+ *    second, separate series.
+ *  - Water for the World, Technical Note RWS.4.D.5 (USAID): D = S·F·E/L with
+ *    E = 0.66 for commercial rams and 0.33 for home-built ones, as reproduced in
+ *    "Hydram Pump Calculations", The Free On-line Aquaculture Dictionary
+ *    (aquatext.com). Flat, no dependence on the ratio.
+ * Watt (1975, ITDG), Inversin (1985, VITA) and Jeffery et al. (1992, IT
+ * Publications) were looked for; no table of theirs was found in the
+ * references searched, so none is used.
+ *
+ * Typical bands derived from them (EFFICIENCY_BANDS):
+ *  - commercial: typical = the Pocketbook table; high = the Pocketbook's own
+ *    rule where it is higher (ratios 5–10); low = half the table (the
+ *    0.33/0.66 home-built to commercial ratio of Water for the World).
+ *  - homemade: typical = the Pocketbook table × 0.33/0.66 (Water for the World's
+ *    home-built to commercial ratio); high = the table itself (a well-made
+ *    homemade ram can match a manufactured one); low = a quarter of the table
+ *    (common practice, no published source: half the homemade typical, so only
+ *    a pump doing markedly worse is flagged).
+ * Both reach zero at a ratio of 26, where the Pocketbook table does: that is
+ * the maximum usable lift ratio. Below a ratio of 4 (the first row) the first
+ * row holds.
  */
 
 import { PUMP_TYPES, type PumpType } from '../vocabulary';
@@ -44,6 +60,88 @@ export interface EfficiencyBand {
   source: string;
 }
 
+/** One published series of efficiency against lift ratio, as printed, for a chart with its source under it. */
+export interface EfficiencySource {
+  id: string;
+  /** what the series is, in a few words */
+  label: string;
+  /** author or publisher, title, year, table or page: shown under the chart */
+  citation: string;
+  /** which pump type the series describes */
+  pumpType: PumpType;
+  /** [lift ratio h/H, D'Aubuisson efficiency] pairs, sorted by ratio */
+  points: readonly (readonly [number, number])[];
+  note?: string;
+}
+
+const POCKETBOOK =
+  'International Textbook Company, Building Trades Pocketbook (Scranton, editions 1899–1905), "Water Supply and Distribution — The Hydraulic Ram"';
+const WATER_FOR_THE_WORLD =
+  'Water for the World, Technical Note RWS.4.D.5 "Designing a Hydraulic Ram Pump" (USAID), as reproduced in "Hydram Pump Calculations", The Free On-line Aquaculture Dictionary (aquatext.com)';
+
+/** Building Trades Pocketbook: ratio of lift to fall → per cent efficiency. */
+const POCKETBOOK_TABLE: readonly (readonly [number, number])[] = [
+  [4, 0.72],
+  [6, 0.61],
+  [8, 0.52],
+  [10, 0.44],
+  [12, 0.37],
+  [14, 0.31],
+  [16, 0.25],
+  [18, 0.19],
+  [20, 0.14],
+  [22, 0.09],
+  [24, 0.04],
+  [26, 0],
+];
+
+/** The published series, as printed; the bands below are derived from them. */
+export const EFFICIENCY_SOURCES: readonly EfficiencySource[] = [
+  {
+    id: 'pocketbook-table',
+    label: 'efficiency against ratio of lift to fall',
+    pumpType: 'commercial',
+    citation: `${POCKETBOOK}, table of per cent efficiency against ratio of lift to fall`,
+    points: POCKETBOOK_TABLE,
+    note: 'the scanned copy prints "10" between 14 and 18; read as 16',
+  },
+  {
+    id: 'pocketbook-rule',
+    label: 'about 1/7 of the supply to 5 × the fall, 1/14 to 10 ×',
+    pumpType: 'commercial',
+    citation: `${POCKETBOOK}, rule for a ram with a discharge pipe 80–100 ft long`,
+    points: [
+      [5, 5 / 7],
+      [10, 10 / 14],
+    ],
+  },
+  {
+    id: 'water-for-the-world-commercial',
+    label: 'design efficiency, commercial rams',
+    pumpType: 'commercial',
+    citation: `${WATER_FOR_THE_WORLD}: E = 0.66 for commercial rams`,
+    points: [
+      [2, 0.66],
+      [26, 0.66],
+    ],
+    note: 'one figure for every ratio',
+  },
+  {
+    id: 'water-for-the-world-homemade',
+    label: 'design efficiency, home-built rams',
+    pumpType: 'homemade',
+    citation: `${WATER_FOR_THE_WORLD}: E = 0.33 for home-built rams`,
+    points: [
+      [2, 0.33],
+      [26, 0.33],
+    ],
+    note: 'one figure for every ratio',
+  },
+];
+
+/** Water for the World's home-built to commercial ratio, 0.33/0.66. */
+export const HOMEMADE_SHARE = 0.33 / 0.66;
+
 const row = (ratio: number, low: number, typical: number, high: number): EfficiencyBandRow => ({
   ratio,
   low,
@@ -51,37 +149,44 @@ const row = (ratio: number, low: number, typical: number, high: number): Efficie
   high,
 });
 
+/** The Pocketbook rule (5/7 at 5, 10/14 at 10) where it applies, else undefined. */
+function pocketbookRule(ratio: number): number | undefined {
+  return ratio >= 5 && ratio <= 10 ? 5 / 7 : undefined;
+}
+
+/** Pocketbook table at a ratio, linear between its rows (the ratio 5 row of the bands falls between 4 and 6). */
+function pocketbookAt(ratio: number): number {
+  let a = POCKETBOOK_TABLE[0] ?? [4, 0.72];
+  for (const b of POCKETBOOK_TABLE) {
+    if (b[0] >= ratio) return b[0] === a[0] ? b[1] : a[1] + ((b[1] - a[1]) * (ratio - a[0])) / (b[0] - a[0]);
+    a = b;
+  }
+  return 0;
+}
+
+const BAND_RATIOS = [4, 5, 6, 8, 10, 12, 14, 16, 18, 20, 22, 24, 26] as const;
+
+function derivedRows(pumpType: PumpType): EfficiencyBand['rows'] {
+  const rows = BAND_RATIOS.map((r) => {
+    const t = pocketbookAt(r);
+    if (pumpType === 'commercial') return row(r, t * HOMEMADE_SHARE, t, Math.max(t, pocketbookRule(r) ?? 0));
+    return row(r, t * HOMEMADE_SHARE * 0.5, t * HOMEMADE_SHARE, t);
+  });
+  return rows as unknown as EfficiencyBand['rows'];
+}
+
 export const EFFICIENCY_BANDS: Record<PumpType, EfficiencyBand> = {
   homemade: {
     label: 'small homemade ram (PVC or galvanized fittings, ½"–2")',
-    rows: [
-      row(2, 0.55, 0.7, 0.8),
-      row(3, 0.5, 0.65, 0.78),
-      row(5, 0.42, 0.58, 0.72),
-      row(7, 0.37, 0.52, 0.66),
-      row(10, 0.3, 0.45, 0.6),
-      row(15, 0.22, 0.36, 0.5),
-      row(20, 0.15, 0.28, 0.42),
-      row(30, 0.06, 0.15, 0.28),
-      row(40, 0, 0, 0.12),
-    ],
-    source: 'from memory; anchored on Water for the World RWS.4.D.5 (E = 0.33 home-built)',
+    rows: derivedRows('homemade'),
+    source:
+      'Building Trades Pocketbook table (International Textbook Co., 1899–1905) × 0.33/0.66 from Water for the World RWS.4.D.5; low edge common practice, no published source',
   },
   commercial: {
     label: 'manufactured cast or fabricated ram',
-    rows: [
-      row(2, 0.65, 0.8, 0.88),
-      row(3, 0.62, 0.76, 0.85),
-      row(5, 0.56, 0.7, 0.8),
-      row(7, 0.5, 0.65, 0.76),
-      row(10, 0.45, 0.6, 0.72),
-      row(15, 0.38, 0.52, 0.65),
-      row(20, 0.3, 0.45, 0.58),
-      row(30, 0.18, 0.33, 0.47),
-      row(45, 0.05, 0.15, 0.3),
-      row(60, 0, 0, 0.12),
-    ],
-    source: 'from memory; anchored on Water for the World RWS.4.D.5 (E = 0.66 commercial)',
+    rows: derivedRows('commercial'),
+    source:
+      'Building Trades Pocketbook table and rule (International Textbook Co., 1899–1905); low edge × 0.33/0.66 from Water for the World RWS.4.D.5',
   },
 };
 
@@ -96,13 +201,17 @@ export interface BandAtRatio {
  * interpolation in {@link EFFICIENCY_BANDS}; below the first ratio the first
  * row holds, beyond the last the pump is not expected to deliver (0).
  * Units: dimensionless. Range: ratio > 1.
- * Reference: see module comment (from memory).
- * @example homemade at h/H = 7.25, a quarter of the way from the 7 row to the 10 row
- * // typical 0.52 + (0.45 − 0.52)·(0.25/3)
- * efficiencyBand('homemade', 7.25).typical  // ≈ 0.514
- * efficiencyBand('homemade', 7.25).low  // ≈ 0.364
- * efficiencyBand('homemade', 7.25).high  // ≈ 0.655
- * efficiencyBand('homemade', 40)  // → { low: 0, typical: 0, high: 0.12 }
+ * Reference: the Building Trades Pocketbook table and Water for the World
+ * RWS.4.D.5, combined as the module comment says.
+ * @example homemade at h/H = 7.25, five eighths of the way from the 6 row to the 8 row
+ * // Pocketbook: 0.61 + (0.52 − 0.61)·0.625 = 0.5538; homemade typical = × 0.33/0.66
+ * efficiencyBand('homemade', 7.25).typical  // ≈ 0.2769
+ * efficiencyBand('homemade', 7.25).low  // ≈ 0.1384
+ * efficiencyBand('homemade', 7.25).high  // ≈ 0.5538
+ * // commercial: the table itself, and the Pocketbook rule 5/7 above it from 5 to 10
+ * efficiencyBand('commercial', 20).typical  // ≈ 0.14
+ * efficiencyBand('commercial', 8).high  // ≈ 0.7143
+ * efficiencyBand('homemade', 40)  // → { low: 0, typical: 0, high: 0 }
  */
 export function efficiencyBand(pumpType: PumpType, liftRatio: number): BandAtRatio {
   const rows = EFFICIENCY_BANDS[pumpType].rows;
@@ -131,11 +240,12 @@ function lastRow(rows: EfficiencyBand['rows']): EfficiencyBandRow {
 }
 
 /**
- * Largest lift ratio h/H at which the pump type is expected to deliver (its typical efficiency reaches 0 there).
- * Reference: EFFICIENCY_BANDS (from memory).
- * @example homemade → 40, so at a 4 ft fall the ceiling is 160 ft
- * maxLiftRatio('homemade')  // ≈ 40
- * maxLiftRatio('homemade') * 4  // ≈ 160
+ * Largest lift ratio h/H at which the pump type is expected to deliver: where
+ * the Building Trades Pocketbook table falls to zero efficiency.
+ * Reference: Building Trades Pocketbook (International Textbook Co., 1899–1905), hydraulic ram table.
+ * @example 26 for both types, so at a 4 ft fall the ceiling is 104 ft
+ * maxLiftRatio('homemade')  // ≈ 26
+ * maxLiftRatio('commercial') * 4  // ≈ 104
  */
 export function maxLiftRatio(pumpType: PumpType): number {
   return lastRow(EFFICIENCY_BANDS[pumpType].rows).ratio;

@@ -43,28 +43,65 @@ export {
   type PipeMaterial,
   type PipeSeries,
 } from './pipes';
-export { FITTING_K, sumK } from './fittings';
+export {
+  METRIC_ODS_MM,
+  METRIC_PIPE_SOURCES,
+  METRIC_SERIES,
+  defaultSeriesFor,
+  nominalPressureBar,
+  resolveMetricPipe,
+  type MetricOd,
+  type MetricPipeSpec,
+  type MetricSeries,
+} from './metricPipes';
+export { FITTING_K, sumK, type FittingKind } from './fittings';
+export {
+  PE_HDS_PSI,
+  VINSON,
+  hoopStress,
+  jointRating,
+  peRating,
+  pvcCyclesToFailure,
+  pvcFatigue,
+  type JointRating,
+  type PeGrade,
+  type PvcFatigue,
+} from './pipeRatings';
 
 // Formulas the calculators are built from, checked on their own by the tests.
 export { colebrook, darcyHeadLoss, frictionFactor, hazenWilliamsHeadLoss, swameeJain } from './friction';
 export { joukowskyHead, joukowskySurge, slowClosureSurge, waveRoundTrip, waveSpeed } from './transients';
 export {
   EFFICIENCY_BANDS,
+  EFFICIENCY_SOURCES,
   dAubuissonEfficiency,
   efficiencyBand,
+  maxLiftRatio,
   rankineEfficiency,
   type BandAtRatio,
+  type EfficiencySource,
   type PumpType,
 } from './efficiency';
-export { estimateDriveFlow } from './ramCycle';
-export { typicalDriveFlow } from './pumpSizes';
+export { estimateShutOffPressure, shutOffPressure, shutOffSchema, type ShutOffResults } from './shutOff';
+export { RAM_CYCLE_SOURCES, estimateDriveFlow } from './ramCycle';
+export { PRACTICE, fallRarelyViable, type PracticeRule } from './practice';
+export { PUMP_SIZE_SOURCE, typicalDriveFlow } from './pumpSizes';
 export { vNotch90Usbr, vNotchFlow, weirCoefficients } from './weirs';
-export { householdRate, livestockRates, type LivestockKind } from './demandRates';
+export { GARDEN_DEPTH_PER_WEEK_M, householdRate, livestockRates, type LivestockKind } from './demandRates';
 
 // The seven calculators: input schema, run function and results.
 export { estimateYield, yieldEstimateSchema, type YieldEstimateResults } from './yieldEstimate';
-export { planArray, arrayPlannerSchema, type ArrayPlannerResults } from './arrayPlanner';
-export { DRIVE_PIPE_GUIDES, checkDrivePipe, drivePipeCheckSchema, type DrivePipeCheckResults } from './drivePipeCheck';
+export { ARRAY_LIMITS, planArray, arrayPlannerSchema, type ArrayPlannerResults } from './arrayPlanner';
+export {
+  BEATS_PER_MINUTE_RANGE,
+  DEFAULT_BEATS_PER_MINUTE,
+  DRIVE_PIPE_GUIDES,
+  FATIGUE_DESIGN_LIFE_YEARS,
+  RATING_MARGIN,
+  checkDrivePipe,
+  drivePipeCheckSchema,
+  type DrivePipeCheckResults,
+} from './drivePipeCheck';
 export { checkDeliveryLine, deliveryLineSchema, type DeliveryLineResults } from './deliveryLine';
 export { measureSourceFlow, sourceFlowSchema, type SourceFlowResults } from './sourceFlow';
 export { planDemandAndStorage, demandAndStorageSchema, type DemandAndStorageResults } from './demandAndStorage';

@@ -122,13 +122,14 @@ export function pumpRuns(p: PreparedPump, fallM: number): boolean {
 /**
  * Efficiency of a pump working against head hp: the given η, else the typical
  * band value at hp/H_eff (efficiency.ts). Units: hp m; result dimensionless.
- * Reference: EFFICIENCY_BANDS (from memory).
+ * Reference: EFFICIENCY_BANDS (Building Trades Pocketbook table × 0.33/0.66, efficiency.ts).
  * @example homemade, hp = 8.884 m, H_eff = 1.2192 m → r = 7.29
+ * // Pocketbook 0.61 − 0.09 × 1.287/2 = 0.5521, × 0.5 for a homemade ram
  * const pump = {
  *   label: 'a', pumpType: 'homemade', driveFlowM3s: 1.2618e-4, driveFlowEstimated: false,
  *   closureVelocityMs: 1.124, fittingsK: 0, fittingHeadLossM: 0, effectiveFallM: 1.2192,
  * }
- * pumpEfficiency(pump, 8.884)  // ≈ 0.513
+ * pumpEfficiency(pump, 8.884)  // ≈ 0.2760
  * pumpEfficiency({ ...pump, givenEfficiency: 0.6 }, 8.884)  // ≈ 0.6
  */
 export function pumpEfficiency(p: PreparedPump, hp: number): number {
@@ -140,13 +141,13 @@ export function pumpEfficiency(p: PreparedPump, hp: number): number {
  * Delivery of one pump against head hp: q = η·Q·H_eff/hp, m³/s (0 when stopped or hp ≤ H_eff).
  * Units: hp, fallM m; result m³/s.
  * Reference: D'Aubuisson relation.
- * @example η = 0.513 (typical at r = 7.29), Q = 1.2618e-4 m³/s, H_eff = 1.2192 m, hp = 8.884 m
+ * @example η = 0.2760 (homemade typical at r = 7.29), Q = 1.2618e-4 m³/s, H_eff = 1.2192 m, hp = 8.884 m
  * const pump = {
  *   label: 'a', pumpType: 'homemade', driveFlowM3s: 1.2618e-4, driveFlowEstimated: false,
  *   closureVelocityMs: 1.124, fittingsK: 0, fittingHeadLossM: 0, effectiveFallM: 1.2192,
  * }
- * pumpDelivery(pump, 8.884, 1.2192)  // ≈ 8.89e-6
- * fromSI(pumpDelivery(pump, 8.884, 1.2192), 'mL/min', 'flow')  // ≈ 533
+ * pumpDelivery(pump, 8.884, 1.2192)  // ≈ 4.780e-6
+ * fromSI(pumpDelivery(pump, 8.884, 1.2192), 'mL/min', 'flow')  // ≈ 286.8
  */
 export function pumpDelivery(p: PreparedPump, hp: number, fallM: number): number {
   if (!pumpRuns(p, fallM) || hp <= p.effectiveFallM) return 0;
@@ -210,8 +211,8 @@ export interface PumpAtHead {
  *   label: 'a', pumpType: 'homemade', driveFlowM3s: 1.2618e-4, driveFlowEstimated: false,
  *   closureVelocityMs: 1.124, fittingsK: 0, fittingHeadLossM: 0, effectiveFallM: 1.2192,
  * }
- * pumpAtHead(pump, 8.884, 1.2192).deliveredFlowM3s  // ≈ 8.89e-6
- * pumpAtHead(pump, 8.884, 1.2192).efficiency  // ≈ 0.513
+ * pumpAtHead(pump, 8.884, 1.2192).deliveredFlowM3s  // ≈ 4.780e-6
+ * pumpAtHead(pump, 8.884, 1.2192).efficiency  // ≈ 0.2760
  * pumpAtHead({ ...pump, effectiveFallM: 0.05 }, 8.884, 1.2192).efficiency  // → 0
  */
 export function pumpAtHead(p: PreparedPump, hp: number, fallM: number): PumpAtHead {
@@ -251,10 +252,10 @@ export interface ParallelSolution {
  * const pump = preparePump(input, 0, 1.2192, 8.8392, 1.306e-6, 0.8)
  * const line = { lengthM: 30.48, insideDiameterM: 0.0158, roughnessM: 1.5e-6, sumK: 0 }
  * const s = solveParallel([pump, pump], 1.2192, 8.8392, line, 1.306e-6)
- * // friction at the combined ≈ 1.1 L/min is a few cm (see lineLoss) …
- * s.frictionHeadM  // ≈ 0.045 ±0.005
- * // … so S ≈ 2 × 537 mL/min, the single pump against the bare lift (estimateYield), a little less
- * fromSI(s.combinedFlowM3s, 'mL/min', 'flow')  // ≈ 1074 ±1%
+ * // friction at the combined ≈ 0.58 L/min is a few cm (see lineLoss) …
+ * s.frictionHeadM  // ≈ 0.025 ±0.005
+ * // … so S ≈ 2 × 289 mL/min, the single pump against the bare lift (estimateYield), a little less
+ * fromSI(s.combinedFlowM3s, 'mL/min', 'flow')  // ≈ 576 ±1%
  * // two copies of one pump are the same as the pump twice
  * solveParallel([pump], 1.2192, 8.8392, line, 1.306e-6, [2]).combinedFlowM3s / s.combinedFlowM3s  // ≈ 1 ±1e-9
  */
@@ -317,14 +318,14 @@ export function solveParallel(
 /**
  * Highest lift the array can reach, m: the largest maxLiftRatio·H_eff over its
  * running pumps. Parallel pumps add flow, not height, so this never grows with
- * the number of pumps. Reference: EFFICIENCY_BANDS (from memory).
- * @example homemade pumps (r_max = 40) with H_eff = 1.2192 m and 1.1226 m: 40 × 1.2192
+ * the number of pumps. Reference: maxLiftRatio (Building Trades Pocketbook table, efficiency.ts).
+ * @example homemade pumps (r_max = 26) with H_eff = 1.2192 m and 1.1226 m: 26 × 1.2192
  * const pump = {
  *   label: 'a', pumpType: 'homemade', driveFlowM3s: 1.2618e-4, driveFlowEstimated: false,
  *   closureVelocityMs: 1.124, fittingsK: 0, fittingHeadLossM: 0, effectiveFallM: 1.2192,
  * }
- * arrayMaxLift([pump, { ...pump, effectiveFallM: 1.1226 }], 1.2192)  // ≈ 48.768
- * arrayMaxLift([pump, pump, pump], 1.2192)  // ≈ 48.768
+ * arrayMaxLift([pump, { ...pump, effectiveFallM: 1.1226 }], 1.2192)  // ≈ 31.699
+ * arrayMaxLift([pump, pump, pump], 1.2192)  // ≈ 31.699
  */
 export function arrayMaxLift(pumps: readonly PreparedPump[], fallM: number): number {
   let best = 0;

@@ -13,9 +13,13 @@
  * ASTM D1785-15; the values from memory).
  * HDPE, IPS DR series: outside diameter per ASTM D3035 (IPS sizes, same
  * ODs as steel pipe); minimum wall = OD/DR; inside diameter computed as
- * average OD − 2 × minimum wall. Pressure class for PE4710 at 73 °F from
- * PR = 2·HDS/(DR − 1) with HDS = 1000 psi (AWWA C906 / PPI, from memory).
+ * average OD − 2 × minimum wall. Pressure class at 73 °F from
+ * PR = 2·HDS/(DR − 1): the hdpe-dr series are PE4710 (HDS 1000 psi); pass
+ * 'PE3608' to resolvePipe for the older grade (HDS 800 psi), which rates lower
+ * at the same DR (pipeRatings.ts).
+ * Metric series (ISO 4427 PE, EN 1452 PVC-U) are in metricPipes.ts.
  */
+import { peRating, type PeGrade } from './pipeRatings';
 import { toSI } from './units';
 
 export const NOMINAL_SIZES = ['1/2', '3/4', '1', '1-1/4', '1-1/2', '2', '2-1/2', '3', '4'] as const;
@@ -127,8 +131,6 @@ const STEEL_PVC: Record<NominalSize, readonly [number, number, number, number, n
 
 /** Threaded steel pipe is limited by its fittings: Class 150 malleable iron, 300 psi at ambient (ASME B16.3, from memory). */
 const STEEL_THREADED_PSI = 300;
-/** PE4710 hydrostatic design stress at 73 °F, psi (PPI TR-4 / AWWA C906, from memory). */
-const PE4710_HDS_PSI = 1000;
 
 export interface PipeSpec {
   material: PipeMaterial;
@@ -156,19 +158,31 @@ const psi = (x: number) => toSI(x, 'psi', 'pressure');
  * @example 1¼" HDPE DR 11: OD 1.660 in, wall 1.660/11 = 0.1509 in → ID = 1.358 in, 2 × 1000/(11 − 1) = 200 psi
  * fromSI(resolvePipe('hdpe-dr11', '1-1/4').insideDiameterM, 'mm', 'smallLength')  // ≈ 34.50
  * fromSI(resolvePipe('hdpe-dr11', '1-1/4').pressureRatingPa, 'psi', 'pressure')  // ≈ 200
+ * @example the same DR 11 in PE3608: 2 × 800/(11 − 1) = 160 psi
+ * fromSI(resolvePipe('hdpe-dr11', '1-1/4', undefined, 'PE3608').pressureRatingPa, 'psi', 'pressure')  // ≈ 160
  */
-export function resolvePipe(series: PipeSeries, nominal: NominalSize, material?: PipeMaterial): PipeSpec {
-  const key = `${series}|${nominal}|${material ?? ''}`;
+export function resolvePipe(
+  series: PipeSeries,
+  nominal: NominalSize,
+  material?: PipeMaterial,
+  peGrade: PeGrade = 'PE4710',
+): PipeSpec {
+  const key = `${series}|${nominal}|${material ?? ''}|${peGrade}`;
   const hit = pipeCache.get(key);
   if (hit) return { ...hit };
-  const spec = computePipe(series, nominal, material);
+  const spec = computePipe(series, nominal, material, peGrade);
   pipeCache.set(key, spec);
   return { ...spec };
 }
 
 const pipeCache = new Map<string, PipeSpec>();
 
-function computePipe(series: PipeSeries, nominal: NominalSize, material?: PipeMaterial): PipeSpec {
+function computePipe(
+  series: PipeSeries,
+  nominal: NominalSize,
+  material: PipeMaterial | undefined,
+  peGrade: PeGrade,
+): PipeSpec {
   const [odIn, w40, w80, p40, p80] = STEEL_PVC[nominal];
   let wallIn: number;
   let ratingPsi: number;
@@ -176,7 +190,7 @@ function computePipe(series: PipeSeries, nominal: NominalSize, material?: PipeMa
   if (series.startsWith('hdpe')) {
     const dr = Number(series.slice('hdpe-dr'.length));
     wallIn = odIn / dr;
-    ratingPsi = (2 * PE4710_HDS_PSI) / (dr - 1);
+    ratingPsi = peRating(peGrade, dr) / psi(1);
     mat = 'hdpe';
   } else {
     const sch80 = series.endsWith('80');

@@ -1,7 +1,7 @@
 /**
  * Typical drive flow by pump (drive pipe) size.
  *
- * From memory: the ranges are the order of magnitude that ram handbooks and
+ * Common practice, no published source found: the ranges are the order of magnitude that ram handbooks and
  * extension sheets give, roughly in proportion to the bore area (a ½-inch
  * pump uses about 1–3 US gal/min, a 4-inch pump some 45–130); the actual
  * drive flow of an installation depends on its fall, drive pipe and waste
@@ -12,7 +12,7 @@
 import type { NominalSize } from './pipes';
 import { toSI } from './units';
 
-/** [low, high] typical drive flow in US gal/min — from memory. */
+/** [low, high] typical drive flow in US gal/min — common practice, no published source found. */
 const RANGES_GPM: Record<NominalSize, readonly [number, number]> = {
   '1/2': [1, 3],
   '3/4': [2, 5],
@@ -31,10 +31,13 @@ export interface DriveFlowRange {
   source: string;
 }
 
+export const PUMP_SIZE_SOURCE =
+  'common practice, no published source found; measure the drive flow, or estimate it for the site';
+
 let table: Record<NominalSize, DriveFlowRange> | undefined;
 
 /**
- * Typical drive flow range for each pump size, m³/s (1 US gal = 231 in³). Reference: module comment (from memory).
+ * Typical drive flow range for each pump size, m³/s (1 US gal = 231 in³). Reference: module comment (common practice, no published source found).
  * @example 1¼" → 5–14 US gal/min
  * pumpSizeTable()['1-1/4'].lowM3s  // ≈ 3.15e-4
  * pumpSizeTable()['1-1/4'].highM3s  // ≈ 8.83e-4
@@ -43,14 +46,14 @@ export function pumpSizeTable(): Record<NominalSize, DriveFlowRange> {
   if (table) return table;
   const t = {} as Record<NominalSize, DriveFlowRange>;
   for (const [size, [lo, hi]] of Object.entries(RANGES_GPM) as [NominalSize, readonly [number, number]][]) {
-    t[size] = { lowM3s: toSI(lo, 'gal/min', 'flow'), highM3s: toSI(hi, 'gal/min', 'flow'), source: 'from memory' };
+    t[size] = { lowM3s: toSI(lo, 'gal/min', 'flow'), highM3s: toSI(hi, 'gal/min', 'flow'), source: PUMP_SIZE_SOURCE };
   }
   table = t;
   return t;
 }
 
 /**
- * Typical drive flow range of one size, m³/s. Reference: module comment (from memory).
+ * Typical drive flow range of one size, m³/s. Reference: module comment (common practice, no published source found).
  * @example ½" → 1–3 US gal/min
  * typicalDriveFlow('1/2').lowM3s  // ≈ 6.309e-5
  * typicalDriveFlow('1/2').highM3s  // ≈ 1.893e-4

@@ -38,6 +38,15 @@ export const DEFAULT_CLOSURE_RATIO = 0.8;
 export const DEFAULT_PUMP_LOSS_K = 2.9;
 export const DEFAULT_ENTRANCE_K = 0.5;
 
+/** What the product shows beside the waste valve's figures. */
+export const RAM_CYCLE_SOURCES = {
+  closureRatio:
+    'closure at 0.8 of full-flow velocity: common practice, no published source found (Iversen 1975, ASME J. Fluids Eng. 97(2), only that it is below 1)',
+  pumpLossK:
+    'K = 2.9, a swing check (2.0) plus a threaded tee run (0.9), Munson, Young & Okiishi Table 8.2; treating the ram body as those fittings is common practice, no published source found',
+  entranceK: 'K = 0.5, square-edged entrance, Munson, Young & Okiishi Table 8.2',
+} as const;
+
 export interface RamCycleInput {
   fallM: number;
   /** total head the pump delivers against (lift plus delivery-line losses), m; must exceed fallM */

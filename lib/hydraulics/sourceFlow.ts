@@ -6,6 +6,7 @@
 import * as z from 'zod/mini';
 import { flowM3s, parseInput, siNumber } from './schemaKit';
 import { finish, step, tq, type CalcOutput, type Step, type Warning } from './steps';
+import { PRACTICE } from './practice';
 import { warn } from './warnings';
 import { WEIR_ANGLE_RANGE, fromFeet, toFeet, vNotch90Usbr, vNotchFlow, weirCoefficients, weirLimits } from './weirs';
 
@@ -279,11 +280,11 @@ export function measureSourceFlow(input: SourceFlowInput): CalcOutput<SourceFlow
           `The plan needs ${(share * 100).toFixed(0)} % of the measured flow; the intake will run dry and draw air. Measure again in the driest month and plan for less.`,
         ),
       );
-    } else if (share > 0.5) {
+    } else if (share > PRACTICE.sourceShareCaution.value) {
       warnings.push(
         warn(
           'plan-takes-large-share',
-          `The plan takes ${(share * 100).toFixed(0)} % of the measured flow; in a dry month the source may not keep up, and the reach between intake and waste outlet runs low.`,
+          `The plan takes ${(share * 100).toFixed(0)} % of the measured flow, more than the ${PRACTICE.sourceShareCaution.value * 100} % the engine allows for (${PRACTICE.sourceShareCaution.source}); in a dry month the source may not keep up, and the reach between intake and waste outlet runs low.`,
         ),
       );
     }

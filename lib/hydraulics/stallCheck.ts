@@ -17,6 +17,7 @@ import { addRangeIssue, fallM, flowM3s, liftM, parseInput, siNumber, waterTempC 
 import { STALL_CAUSES, SYMPTOMS, type StallCauseCode, type Symptom } from './stallCauses';
 import { finish, step, tq, type CalcOutput, type Step, type Warning } from './steps';
 import { waveSpeed } from './transients';
+import { PRACTICE } from './practice';
 import { warn } from './warnings';
 import { G, waterProperties } from './water';
 
@@ -90,7 +91,7 @@ export interface StallCheckResults {
 type Evidence = { state: 'problem' | 'ok' | 'unknown'; strength?: number; reason: string };
 
 /** Usual beat rate of small rams, beats per minute — common practice, no source. */
-const BPM_RANGE = [40, 120] as const;
+const BPM_RANGE = [PRACTICE.beatsPerMinuteMin.value, PRACTICE.beatsPerMinuteMax.value] as const;
 
 function score(code: StallCauseCode, symptoms: readonly Symptom[], ev: Evidence): number {
   const weights = symptoms
@@ -112,7 +113,7 @@ const lpm = (q: number) => `${(q * 6e4).toFixed(2)} L/min`;
  *
  * Evidence worked out from the site sheet, each cause marked a problem, ruled
  * out (ok) or unknown:
- *  - drive pipe: L/H against 3–12 and L/D against 150–1000 (DRIVE_PIPE_GUIDES);
+ *  - drive pipe: L/H against 5–10 and L/D against 150–1000 (DRIVE_PIPE_GUIDES);
  *  - drive flow: n·Q₁ (Q₁ measured, or {@link estimateDriveFlow} with the
  *    fittings) against the source's spare flow — a problem above 90 %;
  *  - lift: r = h/H against the pump type's band — a problem when the typical
@@ -264,7 +265,7 @@ export function runStallCheck(input: StallCheckInput): CalcOutput<StallCheckResu
     ev['waste-valve-setting'] = {
       state: 'problem',
       strength: 0.5,
-      reason: `The measured drive flow, ${lpm(s.driveFlowM3s)}, is outside the ${lpm(sizeRange.lowM3s)}–${lpm(sizeRange.highM3s)} typical of a ${NOMINAL_LABELS[size]} pump (from memory); the waste valve's stroke or weight sets it.`,
+      reason: `The measured drive flow, ${lpm(s.driveFlowM3s)}, is outside the ${lpm(sizeRange.lowM3s)}–${lpm(sizeRange.highM3s)} typical of a ${NOMINAL_LABELS[size]} pump (common practice, no published source found); the waste valve's stroke or weight sets it.`,
     };
   } else {
     ev['waste-valve-setting'] = {
@@ -434,7 +435,7 @@ export function runStallCheck(input: StallCheckInput): CalcOutput<StallCheckResu
     warnings.push(
       warn(
         'air-chamber-safety',
-        'An air chamber holds stored energy: relieve the pressure before opening it, and never use glass or unrated parts.',
+        "An air chamber holds stored energy, and a ram beating against a closed valve keeps charging it. Stop the ram first (close the drive pipe's valve or hold the waste valve shut), then isolate the delivery, then bleed the chamber through a bleed valve of its own while watching a pressure gauge on the pump side, before opening anything. Never use glass or unrated parts.",
       ),
     );
   }

@@ -80,11 +80,11 @@ export const DISPLAY_UNITS: Record<QuantityKind, Record<UnitSystem, string>> = {
 export const UNIT_CHOICES: Record<QuantityKind, readonly string[]> = {
   length: ['m', 'ft', 'in', 'mm', 'cm', 'yd'],
   smallLength: ['mm', 'in', 'cm', 'm'],
-  flow: ['L/min', 'L/s', 'gal/min', 'gal/h', 'm^3/h', 'm^3/s', 'ft^3/s'],
-  smallFlow: ['mL/min', 'L/min', 'cup/min', 'gal/h', 'gal/min'],
+  flow: ['L/min', 'L/s', 'gal/min', 'gal/h', 'galimp/min', 'galimp/h', 'm^3/h', 'm^3/s', 'ft^3/s'],
+  smallFlow: ['mL/min', 'L/min', 'cup/min', 'gal/h', 'gal/min', 'galimp/h', 'galimp/min'],
   area: ['m^2', 'ft^2', 'acre', 'hectare'],
-  volume: ['L', 'gal', 'm^3'],
-  dailyVolume: ['L/day', 'gal/day', 'm^3/day'],
+  volume: ['L', 'gal', 'galimp', 'm^3'],
+  dailyVolume: ['L/day', 'gal/day', 'galimp/day', 'm^3/day'],
   pressure: ['kPa', 'psi', 'bar', 'Pa', 'MPa'],
   velocity: ['m/s', 'ft/s'],
   time: ['s', 'min', 'h', 'day'],
@@ -107,6 +107,10 @@ const LABELS: Record<string, string> = {
   'gal/h': 'US gal/h',
   'gal/day': 'US gal/day',
   gal: 'US gal',
+  'galimp/min': 'imp gal/min',
+  'galimp/h': 'imp gal/h',
+  'galimp/day': 'imp gal/day',
+  galimp: 'imp gal',
   'cup/min': 'US cups/min',
   tempC: '°C',
   tempF: '°F',
@@ -130,6 +134,16 @@ const ALIASES: Record<string, string> = {
   'us gal/min': 'gal/min',
   gph: 'gal/h',
   gpd: 'gal/day',
+  'imp gal': 'galimp',
+  'imperial gallon': 'galimp',
+  'imperial gallons': 'galimp',
+  'uk gal': 'galimp',
+  'imp gal/min': 'galimp/min',
+  'imp gal/h': 'galimp/h',
+  'imp gal/day': 'galimp/day',
+  igpm: 'galimp/min',
+  igph: 'galimp/h',
+  igpd: 'galimp/day',
   lpm: 'L/min',
   lps: 'L/s',
   lph: 'L/h',
@@ -283,6 +297,11 @@ function checkKind(unit: string, kind: QuantityKind): boolean {
  * @example 2 × 231 × 0.0254³ / 60
  * toSI(2, 'gal/min', 'flow')  // ≈ 1.261803928e-4
  * toSI(2, 'gpm', 'length')  // throws EngineInputError
+ * @example the imperial gallon, 4.546 09 L exactly, beside the US gallon's 3.785 411 784 L
+ * // UK Weights and Measures Act 1985, Schedule 1 (from memory); js-quantities defines it by that value
+ * toSI(1, 'galimp', 'volume')  // ≈ 0.00454609 ±1e-15
+ * toSI(1, 'imp gal', 'volume') / toSI(1, 'gal', 'volume')  // ≈ 1.200950 ±1e-6
+ * toSI(10, 'igpm', 'flow')  // ≈ 7.576817e-4
  */
 export function toSI(value: number, unit: string, kind: QuantityKind, field = 'unit'): number {
   const u = canonicalUnit(unit);

@@ -4,4 +4,5 @@
  * Bump the minor number when a table or default changes numbers, the major
  * number when a schema field changes meaning.
  */
-export const ENGINE_VERSION = '1.0.0';
+// 1.1: efficiency bands from published tables, drive pipe check with shut-off pressure and fatigue
+export const ENGINE_VERSION = '1.1.0';

@@ -5,6 +5,7 @@ import * as z from 'zod/mini';
 import {
   PUMP_TYPES,
   dAubuissonEfficiency,
+  EFFICIENCY_BANDS,
   efficiencyBand,
   maxLiftRatio,
   rankineEfficiency,
@@ -13,6 +14,7 @@ import {
 } from './efficiency';
 import { addRangeIssue, efficiency, fallM, flowM3s, liftM, parseInput, siNumber, waterTempC } from './schemaKit';
 import { finish, step, tq, type CalcOutput, type Step, type Warning } from './steps';
+import { PRACTICE, fallRarelyViable } from './practice';
 import { warn } from './warnings';
 import { G, waterProperties } from './water';
 
@@ -140,16 +142,16 @@ function deliveryCurve(
  * Units: Q, q m³/s; H, h m (both measured from the pump); η dimensionless; power W.
  * Range: 0 < H ≤ 100 m, H < h ≤ 1000 m, 0 < Q ≤ 0.1 m³/s, 0 < η ≤ 1.
  * Reference: D'Aubuisson relation as used by e.g. Water for the World RWS.4.D.5,
- * D = S·F·E/L (from memory); efficiency bands in efficiency.ts (from memory).
+ * D = S·F·E/L; efficiency bands in efficiency.ts (Building Trades Pocketbook table, × 0.33/0.66 for homemade rams).
  * @example a smallholding's ½-inch ram on a spring-fed brook
  * // Q = 2 US gal/min (1.2618e-4 m³/s), H = 4 ft (1.2192 m), h = 29 ft (8.8392 m): h/H = 7.25,
- * // typical homemade η = 0.514 → q = 0.514 × 1.2618e-4 × 1.2192/8.8392 (537 mL/min, 773 L/day)
+ * // typical homemade η = 0.5 × 0.5538 (Pocketbook) = 0.2769 → q = 0.2769 × 1.2618e-4 × 1.2192/8.8392 (289 mL/min, 416 L/day)
  * const r = estimateYield({ driveFlowM3s: toSI(2, 'gal/min', 'flow'), fallM: 1.2192, liftM: 8.8392 }).results
  * r.liftRatio  // ≈ 7.25
- * r.efficiencyUsed  // ≈ 0.514
- * r.deliveredFlowM3s  // ≈ 8.95e-6
- * fromSI(r.deliveredFlowM3s, 'mL/min', 'flow')  // ≈ 537
- * r.deliveredPerDayM3PerDay * 1000  // ≈ 773
+ * r.efficiencyUsed  // ≈ 0.2769
+ * r.deliveredFlowM3s  // ≈ 4.819e-6
+ * fromSI(r.deliveredFlowM3s, 'mL/min', 'flow')  // ≈ 289.1
+ * r.deliveredPerDayM3PerDay * 1000  // ≈ 416.3
  * // power in = 999.7 × 9.80665 × 1.2618e-4 × 1.2192
  * r.powerInW  // ≈ 1.51
  */
@@ -176,7 +178,7 @@ export function estimateYield(input: YieldEstimateInput): CalcOutput<YieldEstima
       eta,
       '',
       undefined,
-      v.efficiency === undefined ? 'Typical band for the pump type, from memory (see efficiency.ts).' : undefined,
+      v.efficiency === undefined ? `Typical band for the pump type: ${EFFICIENCY_BANDS[pumpType].source}.` : undefined,
     ),
   );
 
@@ -262,11 +264,11 @@ export function estimateYield(input: YieldEstimateInput): CalcOutput<YieldEstima
   }
 
   const maxLift = maxLiftRatio(pumpType) * H;
-  if (H < 0.5)
+  if (fallRarelyViable(H))
     warnings.push(
       warn(
         'fall-below-minimum',
-        `A fall of ${H.toFixed(2)} m is less than the 0.5 m most rams need to beat reliably (Water for the World RWS.4.D.5).`,
+        `A fall of ${H.toFixed(2)} m is at or below the ${PRACTICE.minFallM.value} m most rams need to beat reliably; such a site is rarely viable (${PRACTICE.minFallM.source}).`,
       ),
     );
   if (r < 2)

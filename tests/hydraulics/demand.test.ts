@@ -7,7 +7,11 @@ describe('demand and storage', () => {
     expect(householdRate().typicalM3PerDay).toBeCloseTo(toSI(80, 'gal', 'volume'), 12);
     // US extension livestock tables (e.g. NDSU AS-954): beef cow ≈ 15, dairy cow ≈ 35, sheep ≈ 2 US gal/day (from memory)
     expect(livestockRates()['beef-cow'].typicalM3PerDay).toBeCloseTo(toSI(15, 'gal', 'volume'), 12);
-    expect(livestockRates()['dairy-cow'].typicalM3PerDay).toBeCloseTo(toSI(35, 'gal', 'volume'), 12);
+    // milking cow: NDSU Extension news release (1 May 2008), 1,400 lb cow at 80 °F giving 80 lb of milk: 38.7 US gal
+    // (was 35, from memory)
+    expect(livestockRates()['dairy-cow'].typicalM3PerDay).toBeCloseTo(toSI(38.7, 'gal', 'volume'), 12);
+    expect(livestockRates()['dairy-cow'].lowM3PerDay).toBeCloseTo(toSI(17.9, 'gal', 'volume'), 12);
+    expect(livestockRates()['dairy-cow'].highM3PerDay).toBeCloseTo(toSI(45.7, 'gal', 'volume'), 12);
     expect(livestockRates().sheep.typicalM3PerDay).toBeCloseTo(toSI(2, 'gal', 'volume'), 12);
   });
   it('sheep farm: 40 ewes on a 1 L/min ram', () => {

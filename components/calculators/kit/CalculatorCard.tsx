@@ -289,6 +289,7 @@ function Results({
       ) : null}
       {view.extra ? view.extra(output.results, units) : null}
       {view.chart ? <div className="h-56">{view.chart(output.results, units, input)}</div> : null}
+      {view.sources ? view.sources(output.results, input) : null}
       <Working steps={output.steps} />
       <p className="cw-muted text-xs">Engine {output.engineVersion}</p>
     </div>

@@ -1,8 +1,10 @@
 import type { ArrayPlannerResults } from '@/lib/hydraulics';
 import { displayQuantity } from '@/lib/calculators';
+import { EfficiencySources, pumpTypeOf } from '../kit/EfficiencySources';
 import type { CalculatorView } from './types';
 
 export const arrayPlannerView: CalculatorView<ArrayPlannerResults> = {
+  sources: (_r, input) => <EfficiencySources pumpType={pumpTypeOf(input.pumpType)} />,
   extra: (r, units) => (
     <table className="w-full text-sm">
       <caption className="cw-muted text-left text-xs">Each pump on the shared line</caption>

@@ -1,5 +1,5 @@
 import { DISPLAY_UNITS, fromSI, unitLabel, type DrivePipeCheckResults } from '@/lib/hydraulics';
-import { SERIES_LABELS, surgeByMaterial } from '@/lib/calculators';
+import { surgeByMaterial } from '@/lib/calculators';
 import { BarChartCard } from '../charts';
 import type { CalculatorView } from './types';
 
@@ -11,13 +11,17 @@ export const drivePipeCheckView: CalculatorView<DrivePipeCheckResults> = {
           {`${g.ratio} ${g.min}–${g.max}: yours ${g.value.toFixed(0)} ${g.within ? '(within)' : '(outside)'} — ${g.source}`}
         </li>
       ))}
+      {r.joint && (!r.joint.allowed || r.joint.ratingPa !== r.pressureRatingPa) ? (
+        <li>{`Joints: ${r.joint.note} — ${r.joint.source}`}</li>
+      ) : null}
+      {r.fatigue ? <li>{`Fatigue life: ${r.fatigue.source}`}</li> : null}
     </ul>
   ),
   // Surge against pipe material: the same size, fall and length in each series.
   chart: (_r, units, input) => {
     const pu = DISPLAY_UNITS.pressure[units];
     const bars = surgeByMaterial(input).map((b) => ({
-      name: SERIES_LABELS[b.series].replace('schedule ', 'sch '),
+      name: b.label.replace('schedule ', 'sch ').replace(/ \((ISO 4427|EN 1452)\)/, ''),
       value: fromSI(b.surgePa, pu, 'pressure'),
       highlight: b.current,
     }));

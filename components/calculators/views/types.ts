@@ -10,4 +10,6 @@ export interface CalculatorView<R> {
   /** `input` is the form's fields as read (SI), before the definition's toInput */
   chart?(results: R, units: UnitSystem, input: Record<string, unknown>): ReactNode;
   extra?(results: R, units: UnitSystem): ReactNode;
+  /** where the chart's curves come from, shown under it */
+  sources?(results: R, input: Record<string, unknown>): ReactNode;
 }

@@ -1,8 +1,10 @@
 import { DISPLAY_UNITS, fromSI, unitLabel, type YieldEstimateResults } from '@/lib/hydraulics';
 import { LineChartCard } from '../charts';
+import { EfficiencySources, pumpTypeOf } from '../kit/EfficiencySources';
 import type { CalculatorView } from './types';
 
 export const yieldEstimateView: CalculatorView<YieldEstimateResults> = {
+  sources: (_r, input) => <EfficiencySources pumpType={pumpTypeOf(input.pumpType)} />,
   chart: (r, units, input) => {
     const lu = DISPLAY_UNITS.length[units];
     const fu = DISPLAY_UNITS.smallFlow[units];

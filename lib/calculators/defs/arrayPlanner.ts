@@ -1,8 +1,16 @@
-import { arrayPlannerSchema, planArray } from '@/lib/hydraulics';
+import { ARRAY_LIMITS, arrayPlannerSchema, planArray } from '@/lib/hydraulics';
 import { defineCalculator, type FormState } from '../types';
 import { pipeFields, resolvePipeRun, yesNo } from '../pipes';
+import { PUMP_TYPE_OPTIONS } from '../options';
 
-const STAGED_ONLY = new Set(['staged.upperFallM', 'staged.upperLiftM']);
+const STAGED_ONLY = new Set([
+  'staged.upperFallM',
+  'staged.upperLiftM',
+  'staged.upperDriveFlowM3s',
+  'staged.upperDeliveryLine.lengthM',
+  'staged.upperDeliveryLine.nominal',
+  'staged.upperDeliveryLine.series',
+]);
 
 /**
  * Identical pumps side by side, each on its own drive pipe, into one delivery line;
@@ -46,6 +54,21 @@ export const arrayPlanner = defineCalculator(planArray, {
       qty: 'flow',
       help: 'Leave empty to estimate it from the fall and the drive pipe.',
     },
+    {
+      type: 'select',
+      name: 'pumpType',
+      prop: 'pumpType',
+      label: 'Kind of pump',
+      options: PUMP_TYPE_OPTIONS,
+    },
+    {
+      type: 'number',
+      name: 'efficiency',
+      prop: 'efficiency',
+      label: 'Efficiency of each pump (optional)',
+      percent: true,
+      help: 'As 0.6 or 60 %. Leave empty to use the typical value for the lift ratio.',
+    },
     ...pipeFields(
       'drivePipe',
       { length: 'driveLength', size: 'driveSize', series: 'driveMaterial' },
@@ -81,6 +104,21 @@ export const arrayPlanner = defineCalculator(planArray, {
       help: 'Empty: the same as the lower fall.',
     },
     { type: 'quantity', name: 'staged.upperLiftM', prop: 'upperLift', label: 'Upper pump: lift', qty: 'length' },
+    {
+      type: 'quantity',
+      name: 'staged.upperDriveFlowM3s',
+      prop: 'upperDriveFlow',
+      label: 'Upper pump: drive flow (optional)',
+      qty: 'flow',
+      help: 'Empty: estimated from its fall and drive pipe.',
+    },
+    ...pipeFields(
+      'staged.upperDeliveryLine',
+      { length: 'upperDeliveryLength', size: 'upperDeliverySize', series: 'upperDeliveryMaterial' },
+      'Upper pump: delivery line',
+    ).map((f) =>
+      f.type === 'quantity' ? { ...f, label: `${f.label} (optional)`, help: 'Empty: its friction is left out.' } : f,
+    ),
   ],
   defaults: {
     mode: 'parallel',
@@ -95,31 +133,52 @@ export const arrayPlanner = defineCalculator(planArray, {
     deliverySize: '3/4',
     deliveryMaterial: 'hdpe-dr11',
     upperLift: '65 ft',
+    pumpType: 'homemade',
+    upperDeliverySize: '3/4',
+    upperDeliveryMaterial: 'hdpe-dr11',
   },
   visible: (name: string, state: FormState) => !STAGED_ONLY.has(name) || state.mode?.text === 'staged',
   toInput: (v) => {
     const count = Math.max(1, Math.round(Number(v.pumpCount ?? 1)));
     const elbows = Math.max(0, Math.round(Number(v.extraElbows ?? 0)));
+    const pumpType = typeof v.pumpType === 'string' ? v.pumpType : 'homemade';
+    const efficiency = v.efficiency !== undefined ? { efficiency: v.efficiency } : {};
     const pump = (i: number) => ({
       label: `Pump ${i + 1}`,
+      pumpType,
+      ...efficiency,
       ...(v.driveFlowEach !== undefined ? { driveFlowM3s: v.driveFlowEach } : {}),
-      drivePipe: resolvePipeRun(v.drivePipe, {
-        fittings: i === 0 && elbows > 0 ? [{ kind: 'elbow-90-threaded', count: elbows }] : [],
-      }),
+      drivePipe: resolvePipeRun(
+        v.drivePipe,
+        {
+          fittings: i === 0 && elbows > 0 ? [{ kind: 'elbow-90-threaded', count: elbows }] : [],
+        },
+        'drivePipe.nominal',
+      ),
     });
     const staged = v.mode === 'staged' ? (v.staged as Record<string, unknown> | undefined) : undefined;
+    const upperLine = staged?.upperDeliveryLine as Record<string, unknown> | undefined;
     return {
       fallM: v.fallM,
       liftM: v.liftM,
       pumps: Array.from({ length: count }, (_, i) => pump(i)),
-      deliveryLine: resolvePipeRun(v.deliveryLine),
+      deliveryLine: resolvePipeRun(v.deliveryLine, {}, 'deliveryLine.nominal'),
       ...(v.sourceSpareFlowM3s !== undefined ? { sourceSpareFlowM3s: v.sourceSpareFlowM3s } : {}),
       ...(staged
         ? {
             staged: {
               upperFallM: staged.upperFallM ?? v.fallM,
               upperLiftM: staged.upperLiftM,
-              upperPump: { label: 'Upper pump', drivePipe: resolvePipeRun(v.drivePipe) },
+              upperPump: {
+                label: 'Upper pump',
+                pumpType,
+                ...efficiency,
+                ...(staged.upperDriveFlowM3s !== undefined ? { driveFlowM3s: staged.upperDriveFlowM3s } : {}),
+                drivePipe: resolvePipeRun(v.drivePipe, {}, 'drivePipe.nominal'),
+              },
+              ...(upperLine?.lengthM !== undefined
+                ? { upperDeliveryLine: resolvePipeRun(upperLine, {}, 'staged.upperDeliveryLine.nominal') }
+                : {}),
             },
           }
         : {}),
@@ -151,7 +210,10 @@ export const arrayPlanner = defineCalculator(planArray, {
           { label: 'Share of the day the upper pump runs', value: r.staged.dutyFraction * 100, unit: '%' },
           {
             label: 'Lower pumps needed to run it all day',
-            value: r.staged.lowerPumpsNeeded > 0 ? String(r.staged.lowerPumpsNeeded) : 'more than 20',
+            value:
+              r.staged.lowerPumpsNeeded > 0
+                ? String(r.staged.lowerPumpsNeeded)
+                : `more than ${ARRAY_LIMITS.lowerCopies}`,
           },
         ]
       : []),

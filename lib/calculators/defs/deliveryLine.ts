@@ -23,7 +23,7 @@ export const deliveryLine = defineCalculator(checkDeliveryLine, {
     },
   ],
   defaults: { flow: '0.5 L/min', lift: '29 ft', length: '150 ft', size: '3/4', material: 'hdpe-dr11' },
-  toInput: (v) => ({ ...v, line: resolvePipeRun(v.line) }),
+  toInput: (v) => ({ ...v, line: resolvePipeRun(v.line, {}, 'line.nominal') }),
   rows: (r) => [
     { label: 'Total head at the pump', value: r.totalHeadM, qty: 'length', emphasis: true },
     { label: 'Pressure at the pump', value: r.pumpPressurePa, qty: 'pressure', emphasis: true },

@@ -2,11 +2,14 @@ import Qty from 'js-quantities';
 import {
   demandAndStorageSchema,
   EngineInputError,
+  fromSI,
+  GARDEN_DEPTH_PER_WEEK_M,
+  householdRate,
   livestockRates,
   planDemandAndStorage,
   type LivestockKind,
 } from '@/lib/hydraulics';
-import { defineCalculator, type FieldDef } from '../types';
+import { defineCalculator, type FieldDef, type FormState } from '../types';
 
 /** MDX prop → livestock kind; chickens are counted per bird and the table is per 100 birds. */
 const ANIMALS: { prop: string; kind: LivestockKind; label: string; perHundred?: boolean }[] = [
@@ -37,6 +40,19 @@ export function parseArea(text: string): number {
 
 const count = (v: unknown) => Math.max(0, Math.round(Number(v ?? 0)));
 
+/**
+ * The engine's rates as the form's defaults, in the US gallons its tables are
+ * written in, so the default reads back exactly and a form saved before the
+ * rates were inputs recomputes unchanged.
+ */
+const usGalPerDay = (m3PerDay: number) => `${+fromSI(m3PerDay, 'gal/day', 'dailyVolume').toFixed(6)} gal/day`;
+const RATE_DEFAULTS: Record<string, string> = Object.fromEntries(
+  ANIMALS.map((a) => [`${a.prop}Rate`, usGalPerDay(livestockRates()[a.kind].typicalM3PerDay)]),
+);
+const same = (a: number, b: number) => Math.abs(a - b) <= 1e-9 * Math.max(Math.abs(a), Math.abs(b));
+const rateField = (name: string) => `rate.${name}`;
+const RATE_OF = new Map(ANIMALS.map((a) => [rateField(a.prop), `animal.${a.prop}`]));
+
 export const demandAndStorage = defineCalculator(planDemandAndStorage, {
   id: 'demand-and-storage',
   name: 'Demand and storage',
@@ -48,12 +64,27 @@ export const demandAndStorage = defineCalculator(planDemandAndStorage, {
     { type: 'quantity', name: 'deliveryPerDay', prop: 'delivery', label: 'Ram delivery per day', qty: 'dailyVolume' },
     { type: 'number', name: 'people', prop: 'people', label: 'People', min: 0, step: 1 },
     {
+      type: 'quantity',
+      name: 'perPersonM3PerDay',
+      prop: 'perPerson',
+      label: 'Water per person a day',
+      qty: 'dailyVolume',
+      help: 'About 80 US gal (303 L) in a US home with mains habits (USGS); a frugal off-grid home uses far less.',
+    },
+    {
       type: 'text',
       name: 'garden',
       prop: 'garden',
       label: 'Garden area',
       placeholder: '200 ft2',
-      help: 'Watered about an inch a week.',
+    },
+    {
+      type: 'quantity',
+      name: 'gardenDepthPerWeekM',
+      prop: 'gardenDepth',
+      label: 'Garden watering depth per week',
+      qty: 'smallLength',
+      help: 'About an inch (25 mm) a week in the growing season (common practice, no source).',
     },
     ...ANIMALS.map((a): FieldDef => ({
       type: 'number',
@@ -63,26 +94,53 @@ export const demandAndStorage = defineCalculator(planDemandAndStorage, {
       min: 0,
       step: 1,
     })),
+    ...ANIMALS.map((a): FieldDef => ({
+      type: 'quantity',
+      name: rateField(a.prop),
+      prop: `${a.prop}Rate`,
+      label: a.perHundred ? `${a.label}: water per 100 birds a day` : `${a.label}: water per head a day`,
+      qty: 'dailyVolume',
+    })),
     { type: 'number', name: 'reserveDays', prop: 'reserveDays', label: 'Days of reserve', min: 0, max: 60 },
     { type: 'quantity', name: 'tankVolumeM3', prop: 'tank', label: 'Tank you have (optional)', qty: 'volume' },
   ],
-  defaults: { delivery: '800 L/day', people: '0', reserveDays: '3' },
+  defaults: {
+    delivery: '800 L/day',
+    people: '0',
+    perPerson: usGalPerDay(householdRate().typicalM3PerDay),
+    gardenDepth: `${GARDEN_DEPTH_PER_WEEK_M * 1000} mm`,
+    reserveDays: '3',
+    ...RATE_DEFAULTS,
+  },
+  // a rate is asked only for the stock the reader keeps
+  visible: (name: string, state: FormState) => {
+    const countField = RATE_OF.get(name);
+    return countField === undefined || count(state[countField]?.text) > 0;
+  },
   toInput: (v) => {
     const animals = (v.animal ?? {}) as Record<string, unknown>;
+    const given = (v.rate ?? {}) as Record<string, unknown>;
+    const rateOf = (a: (typeof ANIMALS)[number]) =>
+      typeof given[a.prop] === 'number' ? (given[a.prop] as number) : livestockRates()[a.kind].typicalM3PerDay;
     const rates = ANIMALS.filter((a) => count(animals[a.prop]) > 0);
     return {
       deliveredFlowM3s: Number(v.deliveryPerDay) / 86_400,
       people: count(v.people),
+      // the engine's own rate when the reader kept it, so its working still names the source
+      ...(typeof v.perPersonM3PerDay === 'number' && !same(v.perPersonM3PerDay, householdRate().typicalM3PerDay)
+        ? { perPersonM3PerDay: v.perPersonM3PerDay }
+        : {}),
       gardenAreaM2: parseArea(String(v.garden ?? '')),
+      ...(v.gardenDepthPerWeekM !== undefined ? { gardenDepthPerWeekM: v.gardenDepthPerWeekM } : {}),
       livestock: rates.map((a) =>
         // The table is per 100 birds and counts are whole: 12 chickens go in as one flock at 12/100 of the table's rate.
         a.perHundred
           ? {
               kind: a.kind,
               count: 1,
-              perHeadM3PerDay: (livestockRates()[a.kind].typicalM3PerDay * count(animals[a.prop])) / 100,
+              perHeadM3PerDay: (rateOf(a) * count(animals[a.prop])) / 100,
             }
-          : { kind: a.kind, count: count(animals[a.prop]) },
+          : { kind: a.kind, count: count(animals[a.prop]), perHeadM3PerDay: rateOf(a) },
       ),
       reserveDays: v.reserveDays === undefined ? 3 : Number(v.reserveDays),
       ...(v.tankVolumeM3 !== undefined ? { tankVolumeM3: v.tankVolumeM3 } : {}),

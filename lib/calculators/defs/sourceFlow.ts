@@ -3,9 +3,11 @@ import { defineCalculator, type FormState } from '../types';
 
 const BY_METHOD: Record<string, string[]> = {
   bucket: ['trials'],
-  'v-notch': ['notchHeadM', 'angleDeg'],
-  float: ['distanceM', 'times', 'widthM', 'meanDepthM'],
+  'v-notch': ['notchHeadM', 'angleDeg', 'crestHeightM', 'approachWidthM'],
+  float: ['distanceM', 'times', 'widthM', 'meanDepthM', 'coefficient'],
 };
+/** The engine's own float coefficient (sourceFlow.ts), so a saved float reading recomputes unchanged. */
+const FLOAT_COEFFICIENT = 0.85;
 const ALL = new Set(Object.values(BY_METHOD).flat());
 
 /** "5 L in 12 s, 5 L in 11.5 s" → [{ volumeM3, timeS }]; the message names the trial that does not read. */
@@ -69,10 +71,36 @@ export const sourceFlow = defineCalculator(measureSourceFlow, {
       help: 'Measured upstream, at least four heads back from the notch.',
     },
     { type: 'number', name: 'angleDeg', prop: 'angle', label: 'Notch angle (degrees)' },
+    {
+      type: 'quantity',
+      name: 'crestHeightM',
+      prop: 'crestHeight',
+      label: 'Notch height above the pool bed (optional)',
+      qty: 'length',
+      help: 'For the check that the pool is deep enough (at least 0.46 m, 1.5 ft).',
+    },
+    {
+      type: 'quantity',
+      name: 'approachWidthM',
+      prop: 'poolWidth',
+      label: 'Pool width behind the weir (optional)',
+      qty: 'length',
+      help: 'For the check that the pool is wide enough (at least 0.91 m, 3 ft).',
+    },
     { type: 'quantity', name: 'distanceM', prop: 'distance', label: 'Float run distance', qty: 'length' },
     { type: 'text', name: 'times', prop: 'time', label: 'Float times', placeholder: '8 s, 9 s, 8.5 s' },
     { type: 'quantity', name: 'widthM', prop: 'width', label: 'Stream width', qty: 'length' },
     { type: 'quantity', name: 'meanDepthM', prop: 'depth', label: 'Mean depth', qty: 'length' },
+    {
+      type: 'number',
+      name: 'coefficient',
+      prop: 'floatK',
+      label: 'Float coefficient (mean ÷ surface speed)',
+      min: 0.5,
+      max: 1,
+      step: 0.05,
+      help: 'About 0.85 in a smooth channel, lower over a rough or shallow bed.',
+    },
     {
       type: 'quantity',
       name: 'plannedDrawM3s',
@@ -81,7 +109,12 @@ export const sourceFlow = defineCalculator(measureSourceFlow, {
       qty: 'flow',
     },
   ],
-  defaults: { method: 'bucket', trials: '5 gal in 42 s, 5 gal in 40 s, 5 gal in 44 s', angle: '90' },
+  defaults: {
+    method: 'bucket',
+    trials: '5 gal in 42 s, 5 gal in 40 s, 5 gal in 44 s',
+    angle: '90',
+    floatK: String(FLOAT_COEFFICIENT),
+  },
   visible: (name: string, state: FormState) =>
     !ALL.has(name) || (BY_METHOD[state.method?.text ?? 'bucket'] ?? []).includes(name),
   toInput: (v) => {

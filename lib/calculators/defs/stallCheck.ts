@@ -7,7 +7,18 @@ import {
   SYMPTOMS,
 } from '@/lib/hydraulics';
 import { defineCalculator } from '../types';
-import { normalizeSeries, normalizeSize, resolvePipeRun, seriesOptions, sizeOptions } from '../pipes';
+import {
+  driveFittingFields,
+  driveFittings,
+  normalizePipeSize,
+  normalizeSeries,
+  normalizeSize,
+  pipeFields,
+  pipeSeriesOptions,
+  pipeSizeOptions,
+  resolvePipeRun,
+} from '../pipes';
+import { PUMP_TYPE_OPTIONS } from '../options';
 
 /** Words people and older links use for a symptom → the engine's code. */
 const SYMPTOM_ALIASES: Record<string, string> = { 'frost-stopped': 'delivery-stops-in-frost' };
@@ -55,15 +66,16 @@ export const stallCheck = defineCalculator(runStallCheck, {
       name: 'site.drivePipe.nominal',
       prop: 'driveSize',
       label: 'Drive pipe size',
-      options: sizeOptions,
-      normalize: normalizeSize,
+      options: pipeSizeOptions,
+      normalize: normalizePipeSize,
+      seriesField: 'site.drivePipe.series',
     },
     {
       type: 'select',
       name: 'site.drivePipe.series',
       prop: 'driveMaterial',
       label: 'Drive pipe material',
-      options: seriesOptions,
+      options: pipeSeriesOptions,
       normalize: normalizeSeries,
     },
     {
@@ -74,7 +86,22 @@ export const stallCheck = defineCalculator(runStallCheck, {
       options: NOMINAL_SIZES.map((s) => ({ value: s, label: NOMINAL_LABELS[s] })),
       normalize: normalizeSize,
     },
+    ...driveFittingFields,
+    { type: 'select', name: 'site.pumpType', prop: 'pumpType', label: 'Pump', options: PUMP_TYPE_OPTIONS },
     { type: 'number', name: 'site.pumpCount', prop: 'pumps', label: 'Pumps', min: 1, max: 20, step: 1 },
+    {
+      type: 'quantity',
+      name: 'site.intakeSubmergenceM',
+      prop: 'submergence',
+      label: 'Water over the drive pipe’s intake (optional)',
+      qty: 'smallLength',
+      help: 'Too little and the intake draws air.',
+    },
+    ...pipeFields(
+      'site.deliveryLine',
+      { length: 'deliveryLength', size: 'deliverySize', series: 'deliveryMaterial' },
+      'Delivery line',
+    ).map((f) => (f.type === 'quantity' ? { ...f, label: `${f.label} (optional)` } : f)),
     {
       type: 'quantity',
       name: 'site.sourceSpareFlowM3s',
@@ -122,6 +149,11 @@ export const stallCheck = defineCalculator(runStallCheck, {
     driveMaterial: 'pvc-sch40',
     pumpSize: '1/2',
     pumps: '1',
+    elbows: '0',
+    valve: 'none',
+    pumpType: 'homemade',
+    deliverySize: '3/4',
+    deliveryMaterial: 'hdpe-dr11',
   },
   toInput: (v) => {
     const site = { ...((v.site ?? {}) as Record<string, unknown>) };
@@ -130,7 +162,15 @@ export const stallCheck = defineCalculator(runStallCheck, {
       else if (site[k] === 'no') site[k] = false;
       else delete site[k];
     }
-    site.drivePipe = resolvePipeRun(site.drivePipe);
+    site.drivePipe = resolvePipeRun(
+      site.drivePipe,
+      { fittings: driveFittings(v.elbows, v.valve) },
+      'site.drivePipe.nominal',
+    );
+    // a delivery line counts only when its length is given; the size and material alone say nothing
+    const line = site.deliveryLine as Record<string, unknown> | undefined;
+    if (line?.lengthM !== undefined) site.deliveryLine = resolvePipeRun(line, {}, 'site.deliveryLine.nominal');
+    else delete site.deliveryLine;
     const symptoms = normalizeSymptoms(((v.symptoms as string[] | undefined) ?? []).join(','));
     return { site, symptoms: symptoms ? symptoms.split(',') : [] };
   },

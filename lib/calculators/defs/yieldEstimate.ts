@@ -1,4 +1,5 @@
 import { estimateYield, yieldEstimateSchema } from '@/lib/hydraulics';
+import { PUMP_TYPE_OPTIONS } from '../options';
 import { defineCalculator } from '../types';
 
 export const yieldEstimate = defineCalculator(estimateYield, {
@@ -46,10 +47,7 @@ export const yieldEstimate = defineCalculator(estimateYield, {
       name: 'pumpType',
       prop: 'pumpType',
       label: 'Pump',
-      options: [
-        { value: 'homemade', label: 'Home-built from fittings' },
-        { value: 'commercial', label: 'Cast, factory-made' },
-      ],
+      options: PUMP_TYPE_OPTIONS,
     },
     {
       type: 'quantity',
