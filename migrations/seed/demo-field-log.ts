@@ -151,7 +151,7 @@ const SITES: SiteRecipe[] = [
     fallM: 4,
     liftM: 16,
     driveLengthM: 24,
-    driveMaterial: 'hdpe',
+    driveMaterial: 'galvanized-steel',
     deliveryLengthM: 140,
     deliverySize: '3/4',
     tests: 3,
