@@ -7,13 +7,13 @@ import * as z from 'zod/mini';
 import { sumK, type Fitting } from './fittings';
 import { MATERIAL_PROPS, PIPE_SERIES } from './pipes';
 import { jointRating, pvcFatigue, type JointRating, type PvcFatigue } from './pipeRatings';
-import { shutOffPressure } from './shutOff';
+import { shutOffPressure, waveSteps } from './shutOff';
 import { drivePipeSchema, roughnessOf } from './pipeSchemas';
 import { EngineInputError } from './errors';
 import { DEFAULT_ENTRANCE_K, DEFAULT_PUMP_LOSS_K, fullFlowVelocity } from './ramCycle';
 import { addRangeIssue, fallM, flowM3s, liftM, parseInput, siNumber, waterTempC } from './schemaKit';
 import { finish, step, tq, type CalcOutput, type Step, type Warning } from './steps';
-import { joukowskySurge, slowClosureSurge, waveRoundTrip, waveSpeed } from './transients';
+import { joukowskySurge, slowClosureSurge } from './transients';
 import { PRACTICE } from './practice';
 import { warn } from './warnings';
 import { G, waterProperties } from './water';
@@ -309,30 +309,11 @@ export function checkDrivePipe(input: DrivePipeCheckInput): CalcOutput<DrivePipe
   }
 
   const K = water.bulkModulusPa;
-  const c = waveSpeed(K, rho, D, mat.youngsModulusPa, e);
   const cRigid = Math.sqrt(K / rho);
-  steps.push(
-    step(
-      'Pressure-wave speed (Korteweg)',
-      'c = \\sqrt{\\frac{K/\\rho}{1 + \\frac{K D}{E e}}}',
-      `c = \\sqrt{\\frac{${tq(K, 'Pa')}/${tq(rho, 'kg/m³')}}{1 + \\frac{${tq(K, 'Pa')} \\times ${tq(D, 'm')}}{${tq(mat.youngsModulusPa, 'Pa')} \\times ${tq(e, 'm')}}}}`,
-      c,
-      'm/s',
-      'velocity',
-      `E for ${mat.label}: ${mat.source}.`,
-    ),
-  );
-  const t2 = waveRoundTrip(L, c);
-  steps.push(
-    step(
-      'Wave round trip',
-      't_r = \\frac{2L}{c}',
-      `t_r = \\frac{2 \\times ${tq(L, 'm')}}{${tq(c, 'm/s')}}`,
-      t2,
-      's',
-      'time',
-    ),
-  );
+  const wave = waveSteps({ insideDiameterM: D, wallThicknessM: e, lengthM: L }, mat, K, rho);
+  steps.push(...wave.steps);
+  const c = wave.c;
+  const t2 = wave.roundTripS;
 
   const surge =
     v.valveClosureTimeS === undefined

@@ -171,29 +171,10 @@ export function estimateShutOffPressure(input: ShutOffInput): CalcOutput<ShutOff
     );
   }
 
-  const c = waveSpeed(water.bulkModulusPa, rho, D, mat.youngsModulusPa, e);
-  steps.push(
-    step(
-      'Pressure-wave speed (Korteweg)',
-      'c = \\sqrt{\\frac{K/\\rho}{1 + \\frac{K D}{E e}}}',
-      `c = \\sqrt{\\frac{${tq(water.bulkModulusPa, 'Pa')}/${tq(rho, 'kg/m³')}}{1 + \\frac{${tq(water.bulkModulusPa, 'Pa')} \\times ${tq(D, 'm')}}{${tq(mat.youngsModulusPa, 'Pa')} \\times ${tq(e, 'm')}}}}`,
-      c,
-      'm/s',
-      'velocity',
-      `E for ${mat.label}: ${mat.source}.`,
-    ),
-  );
-  const tr = waveRoundTrip(L, c);
-  steps.push(
-    step(
-      'Wave round trip',
-      't_r = \\frac{2L}{c}',
-      `t_r = \\frac{2 \\times ${tq(L, 'm')}}{${tq(c, 'm/s')}}`,
-      tr,
-      's',
-      'time',
-    ),
-  );
+  const wave = waveSteps({ insideDiameterM: D, wallThicknessM: e, lengthM: L }, mat, water.bulkModulusPa, rho);
+  steps.push(...wave.steps);
+  const c = wave.c;
+  const tr = wave.roundTripS;
   const slow = v.valveClosureTimeS !== undefined && v.valveClosureTimeS > tr;
   const stat = rho * G * H;
   const total = shutOffPressure(rho, H, L, c, vel, v.valveClosureTimeS);
@@ -248,4 +229,48 @@ export function estimateShutOffPressure(input: ShutOffInput): CalcOutput<ShutOff
     steps,
     warnings,
   );
+}
+
+/**
+ * The pressure wave in a drive pipe, with its two working steps: Korteweg's wave speed
+ * c = √((K/ρ)/(1 + K·D/(E·e))) and the round trip t_r = 2L/c (m/s and s; D, e, L in m,
+ * K and E in Pa, ρ in kg/m³). Shared by the drive pipe check and the shut-off estimate
+ * so both show the same working. References as for {@link waveSpeed}.
+ * @example 20 ft of 1" sch 40 PVC, water at 20 °C (as in waveSpeed's example)
+ * waveSteps({ insideDiameterM: 0.02664, wallThicknessM: 0.003378, lengthM: 6.1 }, { label: 'PVC', youngsModulusPa: 2.76e9, source: 'typical' }, 2.19e9, 998.2).c  // ≈ 550
+ * waveSteps({ insideDiameterM: 0.02664, wallThicknessM: 0.003378, lengthM: 6.1 }, { label: 'PVC', youngsModulusPa: 2.76e9, source: 'typical' }, 2.19e9, 998.2).roundTripS  // ≈ 0.0222
+ */
+export function waveSteps(
+  pipe: { insideDiameterM: number; wallThicknessM: number; lengthM: number },
+  mat: { label: string; youngsModulusPa: number; source: string },
+  bulkModulusPa: number,
+  densityKgM3: number,
+): { c: number; roundTripS: number; steps: [Step, Step] } {
+  const { insideDiameterM: D, wallThicknessM: e, lengthM: L } = pipe;
+  const K = bulkModulusPa;
+  const c = waveSpeed(K, densityKgM3, D, mat.youngsModulusPa, e);
+  const roundTripS = waveRoundTrip(L, c);
+  return {
+    c,
+    roundTripS,
+    steps: [
+      step(
+        'Pressure-wave speed (Korteweg)',
+        'c = \\sqrt{\\frac{K/\\rho}{1 + \\frac{K D}{E e}}}',
+        `c = \\sqrt{\\frac{${tq(K, 'Pa')}/${tq(densityKgM3, 'kg/m³')}}{1 + \\frac{${tq(K, 'Pa')} \\times ${tq(D, 'm')}}{${tq(mat.youngsModulusPa, 'Pa')} \\times ${tq(e, 'm')}}}}`,
+        c,
+        'm/s',
+        'velocity',
+        `E for ${mat.label}: ${mat.source}.`,
+      ),
+      step(
+        'Wave round trip',
+        't_r = \\frac{2L}{c}',
+        `t_r = \\frac{2 \\times ${tq(L, 'm')}}{${tq(c, 'm/s')}}`,
+        roundTripS,
+        's',
+        'time',
+      ),
+    ],
+  };
 }
