@@ -7,15 +7,9 @@ import { clientIp, limitMessage, refund, spend, type LimitName } from '@/lib/aut
 
 /** Members younger than this are "new": fewer posts an hour and fewer links a post. */
 export const NEW_MEMBER_DAYS = 7;
-export const NEW_MEMBER_MAX_LINKS = 2;
 
 export function isNewMember(user: SessionUser, now = Date.now()): boolean {
   return now - user.memberSince.getTime() < NEW_MEMBER_DAYS * 86_400_000;
-}
-
-/** Links in a Markdown text: bare URLs and [text](url). */
-export function countLinks(text: string): number {
-  return (text.match(/https?:\/\/[^\s)]+/g) ?? []).length;
 }
 
 export type FloodKind = 'post' | 'flag' | 'upload' | 'calculation';
