@@ -4,13 +4,7 @@ import { currentUser, type SessionUser } from '@/lib/auth/session';
 import { refusedBySuspension, REFUSAL, roleMayTry, type Action } from '@/lib/auth/policy';
 import { ForumError } from '@/lib/questions/errors';
 import { clientIp, limitMessage, refund, spend, type LimitName } from '@/lib/auth/rate-limit';
-
-/** Members younger than this are "new": fewer posts an hour and fewer links a post. */
-export const NEW_MEMBER_DAYS = 7;
-
-export function isNewMember(user: SessionUser, now = Date.now()): boolean {
-  return now - user.memberSince.getTime() < NEW_MEMBER_DAYS * 86_400_000;
-}
+import { isNewMember } from '@/lib/accounts/new-member';
 
 export type FloodKind = 'post' | 'flag' | 'upload' | 'calculation';
 

@@ -5,7 +5,7 @@ import { initModels } from '@/models';
 import { ForumError } from '@/lib/questions/errors';
 import type { SessionUser } from '@/lib/auth/session';
 import { can } from '@/lib/auth/policy';
-import { NEW_MEMBER_DAYS } from '@/lib/http/guard';
+import { NEW_MEMBER_DAYS } from '@/lib/accounts/new-member';
 import type { FlagReason } from '@/models/Flag';
 import { recordAudit } from './audit';
 import { loadPost, type ModeratedType } from './posts';

@@ -1,5 +1,5 @@
 import type { SessionUser } from '@/lib/auth/session';
-import { isNewMember } from '@/lib/http/guard';
+import { isNewMember } from '@/lib/accounts/new-member';
 import { ForumError } from './errors';
 import type { PostType } from './visibility';
 

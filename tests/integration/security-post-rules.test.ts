@@ -26,7 +26,7 @@ describe('the new-member link limit and the length rules hold for edits as for n
   let oldAnswer: number;
   beforeAll(async () => {
     await freshDemoDatabase();
-    // joined today: a new member (lib/http/guard NEW_MEMBER_DAYS)
+    // joined today: a new member (lib/accounts/new-member NEW_MEMBER_DAYS)
     await User.create({
       handle: NEWCOMER,
       displayName: 'Brookside Newcomer',
