@@ -10,6 +10,6 @@ npx tsx scripts/migrate.ts up
 npx tsx scripts/seed.ts
 npx maildev --smtp "$SMTP_PORT" --web "$MAILDEV_WEB_PORT" --ip 127.0.0.1 --web-ip 127.0.0.1 --silent >"$ROOT/.data/maildev.log" 2>&1 &
 MAIL_PID=$!
-log "mail catcher: http://localhost:$MAILDEV_WEB_PORT/index.html"
+log "mail catcher: http://localhost:$MAILDEV_WEB_PORT/"
 trap 'kill $MAIL_PID 2>/dev/null; bash "$ROOT/scripts/db.sh" stop' EXIT
 npx next dev -p "$PORT"

@@ -46,5 +46,5 @@ for _ in $(seq 1 60); do
   sleep 1
 done
 log "ready: open http://localhost:$PORT"
-log "mail the app sends (notifications, digests, sign-in links): http://localhost:$MAILDEV_WEB_PORT/index.html"
+log "mail the app sends (notifications, digests, sign-in links): http://localhost:$MAILDEV_WEB_PORT/"
 wait "$APP_PID"
