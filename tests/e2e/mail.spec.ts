@@ -68,14 +68,15 @@ test('an answer in the browser reaches the asker’s inbox within a minute; its 
 
   // the asker's settings show the switch off, and can turn it back on
   await page.goto('/settings');
-  const box = page.getByLabel('An answer to one of my questions');
+  // by role, not label: while the page streams in, React holds a hidden copy of the form for a moment
+  const box = page.getByRole('checkbox', { name: 'An answer to one of my questions' });
   await expect(box).not.toBeChecked();
   await box.check();
   await page.getByLabel('Weekly').check();
   await page.getByRole('button', { name: 'Save e-mail settings' }).click();
   await expect(page.getByRole('status').filter({ hasText: 'Saved.' })).toBeVisible();
   await page.reload();
-  await expect(page.getByLabel('An answer to one of my questions')).toBeChecked();
+  await expect(page.getByRole('checkbox', { name: 'An answer to one of my questions' })).toBeChecked();
 });
 
 test('an admin sees the outbox, with what was sent', async ({ page }) => {
