@@ -1,12 +1,11 @@
-import { toDisplay, unitLabel, type QuantityKind, type UnitSystem } from '@/lib/hydraulics';
+import { readableDisplay, toDisplay, unitLabel, type QuantityKind, type UnitSystem } from '@/lib/hydraulics';
 
 const sig3 = new Intl.NumberFormat('en', { maximumSignificantDigits: 3 });
 const sig4 = new Intl.NumberFormat('en', { maximumSignificantDigits: 4, useGrouping: false });
 
-/** A result for reading: three significant figures, grouped thousands. */
+/** A result for reading: three significant figures, grouped thousands, never e-notation. */
 export function formatNumber(x: number): string {
   if (!Number.isFinite(x)) return '—';
-  if (x !== 0 && Math.abs(x) < 1e-4) return x.toExponential(2);
   return sig3.format(x);
 }
 
@@ -19,6 +18,16 @@ export function inputNumber(x: number): string {
 export function displayQuantity(qty: QuantityKind, si: number, units: UnitSystem): { value: string; unit: string } {
   const d = toDisplay(qty, si, units);
   return { value: formatNumber(d.value), unit: d.label };
+}
+
+/**
+ * An SI quantity as a person would write it in the reader's units, unit chosen by size:
+ * '30 US gal/h', '2.5 L/min', '8 in'. For results, working and text; inputs keep fixed units.
+ */
+export function formatQuantity(qty: QuantityKind, si: number, units: UnitSystem): string {
+  const d = readableDisplay(qty, si, units);
+  const v = formatNumber(d.value);
+  return d.label ? `${v} ${d.label}` : v;
 }
 
 export { unitLabel };

@@ -33,7 +33,7 @@ export {
   type Recomputed,
 } from './recompute';
 export { convertState, hasOwnUnit, initialState, readForm, shareQuery, splitTyped } from './state';
-export { displayQuantity, formatNumber, inputNumber } from './format';
+export { displayQuantity, formatNumber, formatQuantity, inputNumber } from './format';
 export { SERIES_LABELS, seriesOptions, sizeOptions } from './pipes';
 export { lossAgainstFlow } from './defs/deliveryLine';
 export { surgeByMaterial } from './defs/drivePipeCheck';

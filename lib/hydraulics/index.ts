@@ -23,6 +23,7 @@ export {
   fromSI,
   kindOfField,
   parseQuantity,
+  readableDisplay,
   toDisplay,
   toSI,
   unitLabel,

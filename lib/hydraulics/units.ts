@@ -518,3 +518,36 @@ export function fieldToDisplay(field: string, si: number, system: UnitSystem): D
 export function fieldFromDisplay(field: string, value: number, system: UnitSystem): number {
   return fromDisplay(kindOfField(field) ?? 'dimensionless', value, system);
 }
+
+/**
+ * Units a person would write a value in, by size: larger or smaller units are used where the
+ * plain display unit would give a long tail of zeros or a huge number. Flows under 1 gal/min or
+ * 1 L/min read as per hour; lengths under a foot read in inches, under 0.1 m in mm; volumes of
+ * 10,000 L and more in m³. Each entry: [threshold in the plain display unit, unit to use below it].
+ */
+const BY_SIZE: Partial<Record<QuantityKind, Record<UnitSystem, { below: number; unit: string }[]>>> = {
+  flow: { US: [{ below: 1, unit: 'gal/h' }], metric: [{ below: 1, unit: 'L/h' }] },
+  smallFlow: { US: [{ below: 1, unit: 'gal/h' }], metric: [{ below: 1, unit: 'L/h' }] },
+  length: { US: [{ below: 1, unit: 'in' }], metric: [{ below: 0.1, unit: 'mm' }] },
+};
+/** The plain unit for small flows is per minute, so cups and millilitres never head a result. */
+const PLAIN: Partial<Record<QuantityKind, Record<UnitSystem, string>>> = {
+  smallFlow: { US: 'gal/min', metric: 'L/min' },
+};
+
+/**
+ * SI → the unit a person would write this value in (see BY_SIZE), for results and text.
+ * Inputs keep {@link toDisplay}'s fixed units so a typed value does not jump units.
+ * @example 0.5 US gal/min reads as 30 US gal/h (NIST SP 811: 1 gal = 3.785411784 L)
+ * readableDisplay('smallFlow', 3.15450982e-5, 'US').label  // → 'US gal/h'
+ * readableDisplay('smallFlow', 3.15450982e-5, 'US').value  // ≈ 30 ±1e-6
+ * readableDisplay('flow', 1e-3, 'metric').label  // → 'L/min'
+ * readableDisplay('length', 0.05, 'metric').label  // → 'mm'
+ */
+export function readableDisplay(kind: QuantityKind, si: number, system: UnitSystem): DisplayValue {
+  const plainUnit = PLAIN[kind]?.[system] ?? DISPLAY_UNITS[kind][system];
+  const plain = fromSI(si, plainUnit, kind);
+  const smaller = BY_SIZE[kind]?.[system].find((s) => Math.abs(plain) < s.below && si !== 0);
+  const unit = smaller?.unit ?? plainUnit;
+  return { value: unit === plainUnit ? plain : fromSI(si, unit, kind), unit, label: unitLabel(unit) };
+}
