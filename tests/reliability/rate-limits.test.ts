@@ -1,5 +1,6 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import { RateLimiterRes } from 'rate-limiter-flexible';
+import { QueryTypes } from 'sequelize';
 import { createSequelize } from '@/lib/db';
 import { RateLimiterMariaDB } from '@/lib/auth/rate-limit-store';
 import { freshDemoDatabase } from '../support/db';
@@ -37,5 +38,25 @@ describe('flood limits hold across app instances sharing MariaDB (RATE_LIMIT_STO
     await expect(b.consume('ip:10.0.0.1')).resolves.toMatchObject({ remainingPoints: 1 });
     await a.delete('ip:10.0.0.1');
     await expect(b.get('ip:10.0.0.1')).resolves.toBeNull();
+  });
+
+  it('clears expired rows every time without keeping a pooled connection (the pool stays usable)', async () => {
+    const sequelize = createSequelize();
+    const max = (sequelize.connectionManager as unknown as { config: { pool?: { max?: number } } }).config.pool?.max;
+    const a = new RateLimiterMariaDB({ points: 1, duration: 60, keyPrefix: 'cleanup', sequelize });
+    await a.consume('gone');
+    await sequelize.query("UPDATE rate_limits SET expire = 1 WHERE `key` = 'cleanup:gone'");
+    // more cleanups than the pool has connections: a cleanup that kept its connection would stall the last ones
+    const rounds = (max ?? 10) + 2;
+    const inTime = async (p: Promise<void>) =>
+      Promise.race([p.then(() => 'done'), new Promise((r) => setTimeout(() => r('stalled'), 3000))]);
+    for (let i = 0; i < rounds; i++) expect(await inTime(a.clearExpired(Date.now()))).toBe('done');
+    const rows = await sequelize.query<{ n: number }>(
+      "SELECT COUNT(*) AS n FROM rate_limits WHERE `key` = 'cleanup:gone'",
+      { type: QueryTypes.SELECT },
+    );
+    expect(Number(rows[0]!.n)).toBe(0);
+    await expect(sequelize.query('SELECT 1 AS one', { type: QueryTypes.SELECT })).resolves.toEqual([{ one: 1 }]);
+    await sequelize.close();
   });
 });
