@@ -44,12 +44,32 @@ async function visibleBlocks(page: Page): Promise<string[]> {
       blocks.set(block, (blocks.get(block) ?? '') + n.textContent);
     }
     const out = [...blocks.values()];
-    for (const math of document.querySelectorAll('.katex-mathml math')) {
-      const copy = math.cloneNode(true) as Element;
-      copy.querySelectorAll('annotation').forEach((a) => a.remove());
-      // MathML runs glyphs together; a space between its pieces keeps "4" and "ft" apart
-      out.push([...copy.querySelectorAll('mi, mn, mo, mtext')].map((x) => x.textContent).join(' '));
-    }
+    // KaTeX by its MathML, written out as a person would type it: 10^(−4) m^(3)/s, so an
+    // exponent is never read as a number before a unit
+    const tex = (e: Element): string => {
+      const kids = [...e.children];
+      switch (e.localName) {
+        case 'annotation':
+          return '';
+        case 'mi':
+        case 'mn':
+        case 'mo':
+        case 'mtext':
+          return e.textContent ?? '';
+        case 'msup': {
+          const sup = tex(kids[1]);
+          // squares and cubes as a unit writes them (m³), other powers bracketed
+          return `${tex(kids[0])}${{ '2': '²', '3': '³' }[sup] ?? `^(${sup})`}`;
+        }
+        case 'msub':
+          return `${tex(kids[0])}_(${tex(kids[1])})`;
+        case 'mfrac':
+          return `(${tex(kids[0])})/(${tex(kids[1])})`;
+        default:
+          return kids.map(tex).join(' ');
+      }
+    };
+    for (const math of document.querySelectorAll('.katex-mathml math')) out.push(tex(math));
     for (const el of document.querySelectorAll('select, input, textarea')) {
       if (!(el as HTMLElement).checkVisibility()) continue;
       if (el instanceof HTMLSelectElement) out.push(el.selectedOptions[0]?.textContent ?? '');
@@ -86,7 +106,11 @@ async function demo(page: Page) {
 async function setAccountUnits(page: Page, system: System) {
   await page.goto('/settings');
   await settled(page);
-  await page.getByRole('radio', { name: system === 'US' ? /^US/ : /^Metric/ }).check();
+  // the settings form's choice, not the header's switch
+  await page
+    .locator('#main')
+    .getByRole('radio', { name: system === 'US' ? /^US/ : /^Metric/ })
+    .check();
   await page.getByRole('button', { name: 'Save settings' }).click();
   await expect(page.getByRole('status').filter({ hasText: 'Saved' }).first()).toBeVisible();
 }
@@ -138,7 +162,8 @@ for (const system of ['US', 'metric'] as const) {
       // search snippets: sizes and lengths in posts and guides
       for (const q of ['drive pipe length', '19 mm drive line']) {
         await page.goto(`/search?${new URLSearchParams({ q })}`);
-        await expect(page.getByRole('option').first()).toBeVisible();
+        // results mark the words they matched
+        await expect(page.locator('#main mark').first()).toBeVisible();
         await check(page, `/search?q=${q}`, system, found);
       }
 

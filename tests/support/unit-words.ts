@@ -10,11 +10,11 @@ import { demoFieldLog } from '../../migrations/seed/demo-field-log';
  */
 export type System = 'US' | 'metric';
 
-const NUM = String.raw`(?<![\p{L}\p{N}.])(\d*[¼½¾⅛⅜⅝⅞]|\d+(?:[.,]\d+)*(?:[-/]\d+)?)`;
+const NUM = String.raw`(?<![\p{L}\p{N}.^])(\d*[¼½¾⅛⅜⅝⅞]|\d+(?:[.,]\d+)*(?:[-/]\d+)?)`;
 const END = String.raw`(?![\p{L}\p{N}²³])`;
 
 /** What a US reader must not see. */
-const METRIC_AFTER_NUMBER = String.raw`mm|cm|km|m³|m3|m\/s|m|mL|ml|L\/min|L\/h|L\/day|L\/d|L\/s|L|kPa|bar|°C|litres?|liters?|metres?|meters?|millimetres?|kilometres?`;
+const METRIC_AFTER_NUMBER = String.raw`mm|cm|km|m³|m3|m\/s|m(?!\/)|mL|ml|L\/min|L\/h|L\/day|L\/d|L\/s|L(?!\/)|kPa|bar|°C|litres?|liters?|metres?|meters?|millimetres?|kilometres?`;
 const METRIC_ANYWHERE = String.raw`mL|m³|m\/s|L\/min|L\/h|L\/day|L\/s|kPa|°C|litres?|metres?`;
 /** What a metric reader must not see ("in" only after a number, see below). */
 const US_AFTER_NUMBER = String.raw`ft\/s|ft|feet|foot|in|inch(?:es)?|"|″|US gal\/\w+|US gal|gal|gallons?|gpm|psi|°F|US cups|cups?|yd|yards?`;
@@ -42,9 +42,20 @@ const E_NOTATION = /(?<![\p{L}\p{N}])\d(?:\.\d+)?e[-+]?\d/giu;
  * measurement. ("1-inch pump" never matches: the hyphen joins it into one word.) A length
  * the site computes is written in decimals ("8 in", "0.75 in"), so it is still caught.
  */
-function isNominalSize(match: string): boolean {
-  return /[¼½¾⅛⅜⅝⅞]|\d\/\d/.test(match);
+function isNominalSize(match: string, before: string, after: string): boolean {
+  if (/[¼½¾⅛⅜⅝⅞]|\d\/\d/.test(match)) return true;
+  // a whole-inch size named as such: "pump size 1 inch", 'the 1" pump', "2 in pipe"
+  return /\bsize:?\s*$/i.test(before) || /^\s*(?:pumps?|pipes?|drive|delivery|line|fittings?|valves?)\b/i.test(after);
 }
+
+/**
+ * Strings shown on purpose in both systems, each with its reason.
+ * - the guide sentence that lists how one pipe size is written, to say search finds any of them
+ */
+const EXPLAINED = [/\(¾", 0\.75 in, 19 mm, DN20\)/];
+
+/** The field log shows what a member typed beside the converted value: “typed "2.4 m"” is their own words. */
+const TYPED = /typed [“"][^”"]*[”"]/g;
 
 /**
  * A member's own words are quoted as written (DESIGN.md: we never rewrite a post): the
@@ -76,10 +87,13 @@ function isMemberWords(text: string, index: number, length: number): boolean {
 /** Every unit of the other system, and every e-notation, in one block of text. */
 export function wrongUnits(text: string, system: System): string[] {
   const hits: string[] = [];
+  const excused: [number, number][] = [];
+  for (const re of [...EXPLAINED.map((r) => new RegExp(r.source, 'g')), TYPED])
+    for (const m of text.matchAll(re)) excused.push([m.index, m.index + m[0].length]);
   // one unit matched by several patterns ("4 ft", "ft") is reported once
   const seen: [number, number][] = [];
   const report = (i: number, len: number, what = '') => {
-    if (seen.some(([a, b]) => i < b && a < i + len)) return;
+    if ([...seen, ...excused].some(([a, b]) => i < b && a < i + len)) return;
     seen.push([i, i + len]);
     hits.push(`“${text.slice(Math.max(0, i - 30), i + len + 30).trim()}” (${text.slice(i, i + len).trim()})${what}`);
   };
@@ -90,7 +104,8 @@ export function wrongUnits(text: string, system: System): string[] {
     for (const m of text.matchAll(re)) {
       const i = m.index;
       if (system === 'metric' && m[1] !== undefined && IN_AS_WORD.test(text.slice(i + m[1].length))) continue;
-      if (system === 'metric' && isNominalSize(m[0])) continue;
+      if (system === 'metric' && isNominalSize(m[0], text.slice(Math.max(0, i - 12), i), text.slice(i + m[0].length)))
+        continue;
       if (isMemberWords(text, i, m[0].length)) continue;
       report(i, m[0].length);
     }
