@@ -23,6 +23,9 @@ async function violations(page: Page, where: string): Promise<string[]> {
     await page.emulateMedia({ colorScheme: scheme });
     // let transitions settle on the new colours before measuring contrast
     await page.waitForTimeout(50);
+    expect(await page.evaluate(() => matchMedia('(prefers-color-scheme: dark)').matches), `${where} in ${scheme}`).toBe(
+      scheme === 'dark',
+    );
     const results = await new AxeBuilder({ page }).withTags(WCAG).analyze();
     expect(results.passes.length, `axe ran on ${where}`).toBeGreaterThan(5);
     for (const v of results.violations) {
