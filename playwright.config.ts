@@ -33,6 +33,17 @@ export function serverEnv(at: string): Record<string, string> {
   };
 }
 
+/** Specs that check the server rather than the screen: run once, in the desktop project. */
+const PHONE_SKIPS = [
+  'two-instances.spec.ts',
+  'csp.spec.ts',
+  'hostile-input.spec.ts',
+  'security-auth.spec.ts',
+  'mail.spec.ts',
+  'thread-cache.spec.ts',
+  'units-everywhere.spec.ts',
+].map((f) => `**/${f}`);
+
 export default defineConfig({
   testDir: 'tests/e2e',
   fullyParallel: false,
@@ -45,7 +56,21 @@ export default defineConfig({
     launchOptions: { executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium', args: CHROMIUM_ARGS },
     trace: 'off',
   },
-  projects: [{ name: 'desktop', use: { viewport: { width: 1280, height: 900 } } }],
+  projects: [
+    // `@phone-only`: a test of the phone's screen itself (nothing wider than 390 px)
+    { name: 'desktop', use: { viewport: { width: 1280, height: 900 } }, grepInvert: /@phone-only/ },
+    {
+      // a common phone's CSS viewport (390 × 844 at 3× density), touched rather than clicked
+      name: 'phone',
+      use: { viewport: { width: 390, height: 844 }, deviceScaleFactor: 3, isMobile: true, hasTouch: true },
+      // the main journeys run here too; what depends on the server rather than the screen
+      // (two instances, headers, hostile input, sign-in limits, mail, the page cache) and the
+      // units check (the same words at any width) run once, on desktop
+      testIgnore: PHONE_SKIPS,
+      // single tests a spec marks as needing no second screen
+      grepInvert: /@desktop-only/,
+    },
+  ],
   // scripts/test.sh builds the app first; this only serves the build.
   webServer: process.env.E2E_BASE_URL
     ? undefined

@@ -1,6 +1,7 @@
 import { test, expect } from '@playwright/test';
 import { SmtpCatcher, linkIn } from '../support/smtp-catcher';
 import { E2E_SMTP_PORT } from '../../playwright.config';
+import { openAccountMenu } from '../support/session';
 
 const catcher = new SmtpCatcher(E2E_SMTP_PORT);
 test.beforeAll(() => catcher.start());
@@ -30,10 +31,9 @@ test('sign up, confirm the e-mail from the catcher, sign in with a link, sign ou
   const link = linkIn(await catcher.waitFor(email, /sign-in link/), '/api/auth/callback/email?');
   await page.goto(link.url);
   await expect(page).toHaveURL(/\/$/);
-  const menu = page.getByTestId('account-menu');
-  await expect(menu).toContainText('Heron at Linnet Mill');
+  await expect(page.getByTestId('account-menu')).toContainText('Heron at Linnet Mill');
 
-  await menu.locator('summary').click();
+  const menu = await openAccountMenu(page);
   await menu.getByRole('button', { name: 'Sign out' }).click();
   await expect(page.getByRole('banner').getByRole('link', { name: 'Sign in' })).toBeVisible();
 });
@@ -47,7 +47,7 @@ test('a wrong password gets a plain message', async ({ page }) => {
   await expect(form.getByRole('alert')).toContainText('do not match an account');
 });
 
-test('every page carries the security headers', async ({ request }) => {
+test('every page carries the security headers', { tag: '@desktop-only' }, async ({ request }) => {
   const res = await request.get('/guides');
   const h = res.headers();
   expect(h['content-security-policy']).toContain("frame-ancestors 'none'");
@@ -74,10 +74,9 @@ async function signInWithPassword(page: import('@playwright/test').Page, email: 
 for (const d of DEMO) {
   test(`the demo ${d.name} signs in with the demo password`, async ({ page }) => {
     await signInWithPassword(page, d.email);
-    const menu = page.getByTestId('account-menu');
-    await expect(menu).toContainText(d.name);
+    await expect(page.getByTestId('account-menu')).toContainText(d.name);
     if (d.extra) {
-      await menu.locator('summary').click();
+      const menu = await openAccountMenu(page);
       await expect(menu.getByRole('link', { name: d.extra })).toBeVisible();
     }
   });

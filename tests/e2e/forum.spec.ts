@@ -1,13 +1,16 @@
 import { test, expect } from '@playwright/test';
 import sharp from 'sharp';
-import { settled, signIn } from '../support/session';
-
-const TITLE = `Pump stops after a few beats since the creek dropped ${Date.now() % 100000}`;
+import { newContext, settled, signIn } from '../support/session';
 
 test.describe.serial('the forum', () => {
   let questionUrl = '';
+  // each project asks its own question on the shared database
+  const title = () =>
+    `Pump stops after a few beats since the creek dropped (${test.info().project.name} ${Date.now() % 100000})`;
+  let TITLE = '';
 
   test('the asking journey: a site sheet, the stall check, a photo, posted and listed', async ({ page }) => {
+    TITLE = title();
     await signIn(page, 'cabin@sorrelcreek.example');
     await page.goto('/questions/ask');
     await settled(page);
@@ -72,7 +75,7 @@ test.describe.serial('the forum', () => {
     await expect(answer.getByTestId('answer-calculation')).toBeVisible();
 
     // The asker marks it fixed it.
-    const asker = await browser.newContext();
+    const asker = await newContext(browser);
     const askerPage = await asker.newPage();
     await signIn(askerPage, 'cabin@sorrelcreek.example');
     await askerPage.goto(questionUrl);
@@ -89,7 +92,7 @@ test.describe.serial('the forum', () => {
     await asker.close();
 
     // A visitor tries the worked calculation with their own numbers.
-    const visitor = await browser.newContext();
+    const visitor = await newContext(browser);
     const v = await visitor.newPage();
     await v.goto(questionUrl);
     await settled(v);

@@ -1,5 +1,5 @@
 import { test, expect, type Page } from '@playwright/test';
-import AxeBuilder from '@axe-core/playwright';
+import { newContext, press } from '../support/session';
 
 const firstCard = (page: Page) => page.locator('[data-calculator="yield-estimate"]').first();
 const delivered = (page: Page) => firstCard(page).locator('[data-result="Delivered"]');
@@ -24,7 +24,7 @@ test('the beginner’s journey: a checked guide, its caution, a live calculator,
   await expect(delivered(page)).toContainText('US cups/min');
 
   // Switch units for the whole site: the same fall shows in metres.
-  await page.getByRole('banner').getByText('Metric').click();
+  await press(page.getByRole('banner').getByText('Metric'));
   await expect(card.getByLabel('Fall (supply head)', { exact: true })).toHaveValue('1.219');
   await expect(card.getByLabel('Fall (supply head) unit')).toHaveValue('m');
   await expect(card.getByLabel('Lift (delivery head)', { exact: true })).toHaveValue('12.19');
@@ -34,7 +34,7 @@ test('the beginner’s journey: a checked guide, its caution, a live calculator,
   // The share link opens the same inputs and result in a fresh page.
   const href = await card.getByTestId('yield-estimate-share').getAttribute('href');
   expect(href).toMatch(/^\/calculators\/yield-estimate\?/);
-  const fresh = await browser.newContext({ baseURL: page.url() });
+  const fresh = await newContext(browser);
   await fresh.addCookies([{ name: 'cw_units', value: 'metric', url: new URL(page.url()).origin }]);
   const other = await fresh.newPage();
   await other.goto(new URL(href!, page.url()).toString());
@@ -75,25 +75,12 @@ test('a saved worked calculation recomputes with the current engine', async ({ p
   await expect(page.locator('[data-calculator="yield-estimate"]')).toBeVisible();
 });
 
-for (const path of ['/guides', '/guides/the-drive-pipe', '/calculators/delivery-line']) {
-  test(`no serious or critical accessibility violations on ${path}`, async ({ page }) => {
-    await page.goto(path);
-    await page.waitForLoadState('networkidle');
-    const results = await new AxeBuilder({ page }).analyze();
-    expect(results.passes.length).toBeGreaterThan(10); // axe really ran
-    const bad = results.violations.filter((v) => v.impact === 'serious' || v.impact === 'critical');
-    expect(bad.map((v) => `${v.id}: ${v.nodes.length} × ${v.nodes[0]?.target.join(' ')}`)).toEqual([]);
-  });
-}
-
-test('at phone width a guide with calculators fits the screen', async ({ browser }) => {
-  const ctx = await browser.newContext({ viewport: { width: 390, height: 844 } });
-  const page = await ctx.newPage();
+// accessibility of these pages: tests/e2e/a11y.spec.ts
+test('at phone width a guide with calculators fits the screen', { tag: '@phone-only' }, async ({ page }) => {
   for (const path of ['/guides/pumps-in-parallel-and-in-stages', '/guides/when-it-stops-cycling', '/questions']) {
     await page.goto(path);
     await page.waitForLoadState('networkidle');
     const overflow = await page.evaluate(() => document.documentElement.scrollWidth - window.innerWidth);
     expect(overflow, `${path} is wider than the phone`).toBeLessThanOrEqual(0);
   }
-  await ctx.close();
 });

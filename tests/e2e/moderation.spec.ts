@@ -1,5 +1,5 @@
 import { test, expect, type Browser, type Page } from '@playwright/test';
-import { settled, signIn } from '../support/session';
+import { newContext, settled, signIn } from '../support/session';
 
 /**
  * The moderator's journey on the seeded demo: a member flags an answer as unsafe
@@ -8,13 +8,27 @@ import { settled, signIn } from '../support/session';
  * in the audit log. Needs a freshly seeded database (scripts/reset-db.ts): the flag
  * and the hide happen once.
  */
-const QUESTION = 'Creek only runs March to October — how do I drain the pump for winter?';
-const ANSWER_TEXT = 'Drain the drive pipe, the pump body and the lowest run of the delivery line';
+const DEMO = {
+  desktop: {
+    tag: 'frost',
+    question: 'Creek only runs March to October — how do I drain the pump for winter?',
+    answer: 'Drain the drive pipe, the pump body and the lowest run of the delivery line',
+  },
+  // the phone runs the same journey after the desktop on the same database: another of
+  // Ironwheel's answers, as the first is hidden by then
+  phone: {
+    tag: 'stall',
+    question: 'Air chamber keeps water-logging after a week',
+    answer: 'Check the snifter hole just below the delivery valve',
+  },
+};
+/** This project's demo thread (read inside a test, where the project is known). */
+const demo = () => DEMO[test.info().project.name as keyof typeof DEMO] ?? DEMO.desktop;
 const HIDE_REASON = `Leaves water in the air chamber over winter; see the frost guide (${Date.now() % 100000})`;
 
 /** A fresh, signed-out browser context on the thread. */
 async function asVisitor(browser: Browser, url: string, check: (page: Page) => Promise<void>) {
-  const context = await browser.newContext();
+  const context = await newContext(browser);
   const page = await context.newPage();
   await page.goto(url);
   await settled(page);
@@ -26,8 +40,9 @@ test.describe.serial('moderation', () => {
   let questionUrl = '';
 
   test('a member flags an answer as unsafe advice, and readers see the caution', async ({ page, browser }) => {
+    const { tag: TAG, question: QUESTION, answer: ANSWER_TEXT } = demo();
     await signIn(page, 'tamsin@ferncombe.example');
-    await page.goto('/tags/frost');
+    await page.goto(`/tags/${TAG}`);
     await page.getByRole('link', { name: QUESTION }).click();
     await expect(page.getByRole('heading', { level: 1, name: QUESTION })).toBeVisible();
     await settled(page);
@@ -52,6 +67,7 @@ test.describe.serial('moderation', () => {
   });
 
   test('a moderator reads it in the review queue and hides it with a reason', async ({ page, browser }) => {
+    const { question: QUESTION, answer: ANSWER_TEXT } = demo();
     await signIn(page, 'moss@clackwater.example');
     await page.goto('/review');
     await settled(page);

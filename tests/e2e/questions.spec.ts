@@ -2,6 +2,7 @@ import { execFileSync } from 'node:child_process';
 import { test, expect } from '@playwright/test';
 import { demoQuestions as baseQuestions } from '../../migrations/seed/demo-data';
 import { demoThreads } from '../../migrations/seed/demo-forum-data';
+import { headerSearch } from '../support/session';
 
 const demoQuestions = [...baseQuestions, ...demoThreads];
 
@@ -33,8 +34,7 @@ test('the header carries the site sections, a search box and the safety notice',
   for (const name of ['Guides', 'Calculators', 'Questions', 'Field log']) {
     await expect(nav.getByRole('link', { name })).toBeVisible();
   }
-  await page.getByRole('searchbox', { name: 'Search Clackwater' }).fill('winter');
-  await page.keyboard.press('Enter');
+  await headerSearch(page, 'winter');
   await expect(page).toHaveURL(/\/search\?q=winter/);
   await expect(page.locator('#main').getByText(/drain the pump for winter/)).toBeVisible();
   await page.getByRole('link', { name: 'safety notice' }).last().click();
@@ -47,25 +47,30 @@ test('an unknown page gets the not-found page', async ({ page }) => {
   await expect(page.getByRole('heading', { name: 'Nothing here' })).toBeVisible();
 });
 
-test('with the database stopped, pages explain in plain words and recover when it returns', async ({
-  page,
-  request,
-}) => {
-  const db = (action: string) =>
-    execFileSync('bash', ['scripts/db.sh', action], { env: { ...process.env, CLACKWATER_ENV: 'test' }, stdio: 'pipe' });
-  db('stop');
-  try {
+// the server's answer to an outage, not the screen's: once is enough
+test(
+  'with the database stopped, pages explain in plain words and recover when it returns',
+  { tag: '@desktop-only' },
+  async ({ page, request }) => {
+    const db = (action: string) =>
+      execFileSync('bash', ['scripts/db.sh', action], {
+        env: { ...process.env, CLACKWATER_ENV: 'test' },
+        stdio: 'pipe',
+      });
+    db('stop');
+    try {
+      await page.goto('/questions');
+      await expect(page.getByRole('alert').filter({ hasText: 'can’t reach the database' })).toBeVisible();
+      await expect(page.locator('body')).not.toContainText(/at \S+\.(js|ts):\d+/);
+      const health = await request.get('/api/health');
+      expect(health.status()).toBe(503);
+      const api = await request.get('/api/questions');
+      expect(api.status()).toBe(503);
+      expect((await api.json()).error.code).toBe('database_unavailable');
+    } finally {
+      db('start');
+    }
     await page.goto('/questions');
-    await expect(page.getByRole('alert').filter({ hasText: 'can’t reach the database' })).toBeVisible();
-    await expect(page.locator('body')).not.toContainText(/at \S+\.(js|ts):\d+/);
-    const health = await request.get('/api/health');
-    expect(health.status()).toBe(503);
-    const api = await request.get('/api/questions');
-    expect(api.status()).toBe(503);
-    expect((await api.json()).error.code).toBe('database_unavailable');
-  } finally {
-    db('start');
-  }
-  await page.goto('/questions');
-  await expect(page.getByTestId('question-list').getByRole('heading').first()).toBeVisible();
-});
+    await expect(page.getByTestId('question-list').getByRole('heading').first()).toBeVisible();
+  },
+);

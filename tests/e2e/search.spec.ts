@@ -1,13 +1,11 @@
 import { test, expect } from '@playwright/test';
+import { headerSearch } from '../support/session';
 
 test('the header search finds the thread and the guide section for a builder’s question, with the words marked', async ({
   page,
 }) => {
   await page.goto('/guides');
-  await page
-    .getByRole('searchbox', { name: 'Search Clackwater' })
-    .fill('Has anyone had a 1-inch pump stop when the creek drops?');
-  await page.keyboard.press('Enter');
+  await headerSearch(page, 'Has anyone had a 1-inch pump stop when the creek drops?');
   await expect(page).toHaveURL(/\/search\?q=Has\+anyone/);
   const results = page.getByRole('listbox', { name: 'Results' });
   const first = results.getByRole('option').first();
