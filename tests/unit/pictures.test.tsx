@@ -2,6 +2,8 @@ import { describe, expect, it } from 'vitest';
 import { renderToStaticMarkup } from 'react-dom/server';
 import { renderGuide } from '@/components/guides/GuideBody';
 import { readGuideFile } from '@/lib/guides/content';
+import { CALCULATORS, initialState, type CalculatorId } from '@/lib/calculators';
+import { SiteSketchDrawing } from '@/components/calculators/kit/SiteSketch';
 
 const PARTS = ['drive pipe', 'waste valve', 'delivery valve', 'air chamber', 'snifter', 'delivery line'];
 
@@ -31,5 +33,82 @@ describe('the ram diagram in "How a ram pump works"', () => {
     expect(at('data-ram-diagram="3"')).toBeGreaterThan(at('id="4-the-delivery-valve-opens"'));
     expect(at('data-ram-diagram="4"')).toBeGreaterThan(at('id="8-the-waste-valve-reopens"'));
     expect(at('data-ram-diagram="4"')).toBeLessThan(at('id="beats-per-minute-and-stroke"'));
+  });
+});
+
+/** The sketch as the card draws it for a calculator's form, with some fields as typed. */
+function sketch(id: CalculatorId, units: 'US' | 'metric', props: Record<string, string> = {}) {
+  const def = CALCULATORS[id];
+  const state = initialState(def.fields, props, def.defaults, units);
+  const html = renderToStaticMarkup(<SiteSketchDrawing fields={def.fields} state={state} units={units} />);
+  const label = /aria-label="([^"]*)"/.exec(html)?.[1] ?? '';
+  const part = (name: string) =>
+    new RegExp(`<text[^>]*data-sketch-part="${name}"[^>]*>([\\s\\S]*?)</text>`)
+      .exec(html)?.[1]
+      ?.replace(/<[^>]+>/g, ' ')
+      .replace(/\s+/g, ' ')
+      .trim();
+  return { html, label, part };
+}
+
+describe('the site sketch on the calculators', () => {
+  const site = { fall: '4 ft', lift: '29 ft', driveLength: '24 ft', deliveryLength: '150 ft' };
+
+  it('labels fall, lift, drive pipe and delivery line with the form’s values in US units', () => {
+    const s = sketch('array-planner', 'US', site);
+    // the values as typed, in feet: nothing to convert
+    expect([s.part('fall'), s.part('drive'), s.part('lift'), s.part('delivery')]).toEqual([
+      'fall 4 ft',
+      'drive pipe 24 ft',
+      'lift 29 ft',
+      'delivery line 150 ft',
+    ]);
+    expect(s.html).toMatch(/<svg[^>]*role="img"/);
+    expect(s.label).toContain('fall 4 ft from the source’s surface down to the pump');
+    expect(s.label).toContain('delivery line 150 ft from the pump up to the tank');
+  });
+
+  it('shows the same site in metric', () => {
+    const s = sketch('array-planner', 'metric', site);
+    // 1 ft = 0.3048 m exactly (NIST SP 811, 2008, appendix B): 4 ft = 1.2192 m, 24 ft = 7.3152 m,
+    // 29 ft = 8.8392 m, 150 ft = 45.72 m, to three significant figures
+    expect([s.part('fall'), s.part('drive'), s.part('lift'), s.part('delivery')]).toEqual([
+      'fall 1.22 m',
+      'drive pipe 7.32 m',
+      'lift 8.84 m',
+      'delivery line 45.7 m',
+    ]);
+    expect(s.label).toContain('lift 8.84 m from the pump up to the outlet at the tank');
+  });
+
+  it('follows the reader’s units whatever unit a value was typed in', () => {
+    // 1.5 m ÷ 0.3048 m/ft = 4.921 ft (NIST SP 811, 2008, appendix B)
+    expect(sketch('yield-estimate', 'US', { fall: '1.5 m' }).part('fall')).toBe('fall 4.92 ft');
+    // 1,200 ft × 0.3048 = 365.76 m (NIST SP 811, 2008, appendix B)
+    expect(sketch('array-planner', 'metric', { deliveryLength: '1200 ft' }).part('delivery')).toBe(
+      'delivery line 366 m',
+    );
+  });
+
+  it('keeps plain labels for a value that is missing, unreadable or not asked for', () => {
+    const yieldSketch = sketch('yield-estimate', 'US', { fall: '' });
+    expect(yieldSketch.part('fall')).toBe('fall');
+    // the yield estimate asks for no pipe lengths
+    expect(yieldSketch.part('drive')).toBe('drive pipe');
+    expect(yieldSketch.part('delivery')).toBe('delivery line');
+    expect(yieldSketch.label).toMatch(/^Site sketch: fall from the source’s surface/);
+    expect(sketch('drive-pipe-check', 'US', { fall: 'four' }).part('fall')).toBe('fall');
+    expect(sketch('delivery-line', 'US').part('lift')).toBe('lift 29 ft');
+  });
+
+  it('is drawn only for calculators that ask for a fall, lift or pipe length', () => {
+    const drawn = (Object.keys(CALCULATORS) as CalculatorId[]).filter((id) => sketch(id, 'US').html !== '');
+    expect(drawn.sort()).toEqual([
+      'array-planner',
+      'delivery-line',
+      'drive-pipe-check',
+      'stall-check',
+      'yield-estimate',
+    ]);
   });
 });
