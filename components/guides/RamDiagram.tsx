@@ -15,6 +15,8 @@ type Phase = 'parts' | '1' | '2' | '3' | '4';
 interface PhaseText {
   title: string;
   caption: string;
+  /** what the drawing shows, for a reader who cannot see it (the caption says what happens) */
+  desc: string;
   /** the short note under the drawing, in the colour of moving water */
   note: string;
   wasteOpen: boolean;
@@ -28,6 +30,7 @@ const PHASES: Record<Phase, PhaseText> = {
     title: 'The parts of a ram pump',
     caption:
       'The parts of a ram pump, in section: the drive pipe brings water from the source into the pump body; the waste valve lets it out; the delivery valve lets it up into the air chamber, and the delivery line takes it to the tank. The snifter is a tiny hole just below the delivery valve.',
+    desc: "Section through the pump. The drive pipe comes in from the left and becomes the pump body. On top of the body, from left to right: the waste valve, its disc hanging open below its seat with a weight on its stem; the snifter, a tiny hole; and the air chamber, a tall closed vessel with air above water, with the delivery valve's disc resting over the hole in its floor. The delivery line leaves the air chamber to the right.",
     note: '',
     wasteOpen: true,
     deliveryOpen: false,
@@ -36,6 +39,7 @@ const PHASES: Record<Phase, PhaseText> = {
   '1': {
     title: 'Step 1: water speeds up',
     caption: 'Step 1: with the waste valve open, water speeds up down the drive pipe and runs out of the waste valve.',
+    desc: 'The same section. Arrows run along the drive pipe towards the pump and spill out of the open waste valve; the delivery valve rests shut.',
     note: 'water speeds up →',
     wasteOpen: true,
     deliveryOpen: false,
@@ -44,6 +48,7 @@ const PHASES: Record<Phase, PhaseText> = {
   '2': {
     title: 'Step 2: the waste valve slams shut',
     caption: 'Step 2: the rushing water drags the waste valve up against its seat and it slams shut with a clack.',
+    desc: "The waste valve's disc is pressed up against its seat, marked clack; the arrows in the drive pipe still point towards the pump; the delivery valve rests shut.",
     note: 'waste valve slams shut',
     wasteOpen: false,
     deliveryOpen: false,
@@ -53,6 +58,7 @@ const PHASES: Record<Phase, PhaseText> = {
     title: 'Steps 3 to 5: the pressure rise opens the delivery valve',
     caption:
       'Steps 3 to 5: the moving column cannot stop at once, the pressure in the body jumps, the delivery valve opens and water is pushed into the air chamber, squeezing its air.',
+    desc: "The waste valve is shut; the delivery valve's disc is lifted off its seat with arrows going up into the air chamber, whose water stands higher and whose air is squeezed smaller.",
     note: 'pressure rises, water goes up',
     wasteOpen: false,
     deliveryOpen: true,
@@ -62,6 +68,7 @@ const PHASES: Record<Phase, PhaseText> = {
     title: 'Steps 6 to 8: recoil, a sip of air, and the waste valve reopens',
     caption:
       'Steps 6 to 8: the column recoils towards the source, the delivery valve closes, the snifter draws in a little air and the waste valve drops open for the next beat.',
+    desc: "The arrow in the drive pipe points back towards the source; the delivery valve rests shut; an arrow goes in through the snifter with a small bubble below it; the waste valve's disc has dropped open again.",
     note: '← recoil, air in',
     wasteOpen: true,
     deliveryOpen: false,
@@ -98,11 +105,12 @@ export function RamDiagram({ phase = 'parts' }: { phase?: string }) {
       <svg
         viewBox="0 0 360 220"
         role="img"
-        aria-labelledby={`${id}-title ${id}-desc`}
+        aria-labelledby={`${id}-title`}
+        aria-describedby={`${id}-desc`}
         className="h-auto w-full rounded-md border border-limestone-300 bg-limestone-50 dark:border-creek-600 dark:bg-creek-900"
       >
         <title id={`${id}-title`}>{p.title}</title>
-        <desc id={`${id}-desc`}>{p.caption}</desc>
+        <desc id={`${id}-desc`}>{p.desc}</desc>
 
         {/* water inside the drive pipe, body, waste outlet, chamber and delivery line */}
         <g className={WATER_FILL}>

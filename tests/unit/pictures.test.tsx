@@ -15,7 +15,9 @@ describe('the ram diagram in "How a ram pump works"', () => {
     const figures = [...html.matchAll(/<figure[^>]*data-ram-diagram="([^"]+)"[\s\S]*?<\/figure>/g)];
     expect(figures.map((f) => f[1])).toEqual(['parts', '1', '2', '3', '4']);
     for (const [figure, phase] of figures) {
-      expect(figure, phase).toMatch(/<svg[^>]*role="img"[^>]*aria-labelledby="ram-[\w]+-title ram-[\w]+-desc"/);
+      expect(figure, phase).toMatch(
+        /<svg[^>]*role="img"[^>]*aria-labelledby="ram-[\w]+-title" aria-describedby="ram-[\w]+-desc"/,
+      );
       expect(figure, phase).toMatch(
         /<title id="ram-[\w]+-title">[^<]+<\/title><desc id="ram-[\w]+-desc">[^<]+<\/desc>/,
       );
