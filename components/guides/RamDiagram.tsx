@@ -1,3 +1,5 @@
+import { AREA, LINE, PAPER, TEXT } from '@/components/drawing-colours';
+
 /**
  * Our own section through a ram pump, for the guides: the parts, or one phase of a
  * beat. A server component (plain SVG, no script). MDX hands it strings only:
@@ -76,14 +78,6 @@ const PHASES: Record<Phase, PhaseText> = {
   },
 };
 
-const INK = 'stroke-creek-700 dark:stroke-limestone-200';
-const INK_FILL = 'fill-creek-700 dark:fill-limestone-200';
-const WATER_FILL = 'fill-creek-100 dark:fill-creek-700';
-const WATER_LINE = 'stroke-creek-400 dark:stroke-creek-300';
-const AIR_FILL = 'fill-limestone-50 dark:fill-creek-950';
-const MOVING = 'stroke-clay-600 dark:stroke-clay-300';
-const MOVING_FILL = 'fill-clay-600 dark:fill-clay-300';
-
 /** Pump geometry (viewBox 360 × 220): the body's walls, the outlets cut in its top wall. */
 const TOP = 140;
 const BOTTOM = 166;
@@ -91,7 +85,7 @@ const END = 262;
 const WASTE = { left: 96, right: 128, top: 104, seat: 114 };
 const SNIFTER = 158;
 const CHAMBER = { left: 190, right: 262, top: 30, holeLeft: 212, holeRight: 240 };
-const LINE = { top: 96, bottom: 110 };
+const PIPE_OUT = { top: 96, bottom: 110 };
 
 export function RamDiagram({ phase = 'parts' }: { phase?: string }) {
   const key: Phase = phase in PHASES ? (phase as Phase) : 'parts';
@@ -103,42 +97,47 @@ export function RamDiagram({ phase = 'parts' }: { phase?: string }) {
   return (
     <figure className="not-prose my-6 max-w-md font-sans" data-ram-diagram={key}>
       <svg
-        viewBox="0 0 360 220"
+        viewBox={`0 0 360 ${key === 'parts' ? 194 : 212}`}
         role="img"
         aria-labelledby={`${id}-title`}
         aria-describedby={`${id}-desc`}
-        className="h-auto w-full rounded-md border border-limestone-300 bg-limestone-50 dark:border-creek-600 dark:bg-creek-900"
+        className={`h-auto w-full rounded-md border border-limestone-300 dark:border-creek-600 ${PAPER}`}
       >
         <title id={`${id}-title`}>{p.title}</title>
         <desc id={`${id}-desc`}>{p.desc}</desc>
 
         {/* water inside the drive pipe, body, waste outlet, chamber and delivery line */}
-        <g className={WATER_FILL}>
+        <g className={AREA.water}>
           <rect x="0" y={TOP} width={END} height={BOTTOM - TOP} />
           <rect x={WASTE.left} y={WASTE.top} width={WASTE.right - WASTE.left} height={TOP - WASTE.top} />
           <rect x={CHAMBER.left} y={level} width={CHAMBER.right - CHAMBER.left} height={TOP - level} />
-          <rect x={CHAMBER.right} y={LINE.top} width={360 - CHAMBER.right} height={LINE.bottom - LINE.top} />
+          <rect
+            x={CHAMBER.right}
+            y={PIPE_OUT.top}
+            width={360 - CHAMBER.right}
+            height={PIPE_OUT.bottom - PIPE_OUT.top}
+          />
         </g>
         <path
           d={`M${CHAMBER.left} ${TOP} V48 Q${CHAMBER.left} ${CHAMBER.top} 208 ${CHAMBER.top} H244 Q${CHAMBER.right} ${CHAMBER.top} ${CHAMBER.right} 48 V${level} H${CHAMBER.left} Z`}
-          className={AIR_FILL}
+          className={AREA.air}
         />
-        <line x1={CHAMBER.left} x2={CHAMBER.right} y1={level} y2={level} className={WATER_LINE} strokeWidth="2" />
+        <line x1={CHAMBER.left} x2={CHAMBER.right} y1={level} y2={level} className={LINE.water} strokeWidth="2" />
 
         {/* walls: the body's top wall is cut for the waste outlet, the snifter and the chamber's hole */}
-        <g className={INK} strokeWidth="3" fill="none" strokeLinecap="square">
+        <g className={LINE.ink} strokeWidth="3" fill="none" strokeLinecap="square">
           <path
             d={`M0 ${TOP} H${WASTE.left} V${WASTE.top} M${WASTE.right} ${WASTE.top} V${TOP} H${SNIFTER - 2} M${SNIFTER + 2} ${TOP} H${CHAMBER.holeLeft} M${CHAMBER.holeRight} ${TOP} H${END} V${BOTTOM} H0`}
           />
           <path
-            d={`M${CHAMBER.left} ${TOP} V48 Q${CHAMBER.left} ${CHAMBER.top} 208 ${CHAMBER.top} H244 Q${CHAMBER.right} ${CHAMBER.top} ${CHAMBER.right} 48 V${LINE.top} H360 M360 ${LINE.bottom} H${CHAMBER.right} V${TOP}`}
+            d={`M${CHAMBER.left} ${TOP} V48 Q${CHAMBER.left} ${CHAMBER.top} 208 ${CHAMBER.top} H244 Q${CHAMBER.right} ${CHAMBER.top} ${CHAMBER.right} 48 V${PIPE_OUT.top} H360 M360 ${PIPE_OUT.bottom} H${CHAMBER.right} V${TOP}`}
           />
           {/* the waste valve's seat: two lips narrower than its disc */}
           <path d={`M${WASTE.left} ${WASTE.seat} H106 M118 ${WASTE.seat} H${WASTE.right}`} />
         </g>
 
         {/* waste valve: disc below the seat, stem through it, weight on top */}
-        <g className={INK_FILL}>
+        <g className={TEXT.ink}>
           <rect x="100" y={disc} width="24" height="4" />
           <rect x="111" y={disc - 40} width="2" height="40" />
           <rect x="104" y={disc - 50} width="16" height="10" rx="1" />
@@ -149,7 +148,7 @@ export function RamDiagram({ phase = 'parts' }: { phase?: string }) {
         <Labels wasteTop={disc - 50} snifterLeader={key !== '4'} />
 
         {key === 'parts' ? (
-          <g className={INK_FILL} fontSize="12">
+          <g className={TEXT.ink} fontSize="12">
             <text x="4" y="182">
               ← from the source
             </text>
@@ -165,7 +164,7 @@ export function RamDiagram({ phase = 'parts' }: { phase?: string }) {
 
 function Labels({ wasteTop, snifterLeader }: { wasteTop: number; snifterLeader: boolean }) {
   return (
-    <g className={INK_FILL} fontSize="13">
+    <g className={TEXT.ink} fontSize="13">
       <text x="112" y={wasteTop - 8} textAnchor="middle">
         waste valve
       </text>
@@ -176,7 +175,7 @@ function Labels({ wasteTop, snifterLeader }: { wasteTop: number; snifterLeader: 
         snifter
       </text>
       {snifterLeader ? (
-        <line x1={SNIFTER} x2={SNIFTER} y1="120" y2={TOP - 4} className={INK} strokeWidth="1.5" />
+        <line x1={SNIFTER} x2={SNIFTER} y1="120" y2={TOP - 4} className={LINE.ink} strokeWidth="1.5" />
       ) : null}
       <text x={CHAMBER.right + 6} y="46">
         air chamber
@@ -184,7 +183,7 @@ function Labels({ wasteTop, snifterLeader }: { wasteTop: number; snifterLeader: 
       <text x={(CHAMBER.left + CHAMBER.right) / 2} y="52" textAnchor="middle" fontSize="12">
         air
       </text>
-      <text x={CHAMBER.right + 6} y={LINE.top - 6}>
+      <text x={CHAMBER.right + 6} y={PIPE_OUT.top - 6}>
         delivery line
       </text>
       <text x={CHAMBER.right + 10} y={TOP + 8}>
@@ -193,7 +192,7 @@ function Labels({ wasteTop, snifterLeader }: { wasteTop: number; snifterLeader: 
       <text x={CHAMBER.right + 10} y={TOP + 23}>
         valve
       </text>
-      <line x1="244" x2={CHAMBER.right + 6} y1={TOP - 3} y2={TOP + 4} className={INK} strokeWidth="1.5" />
+      <line x1="244" x2={CHAMBER.right + 6} y1={TOP - 3} y2={TOP + 4} className={LINE.ink} strokeWidth="1.5" />
     </g>
   );
 }
@@ -214,10 +213,10 @@ function PhaseMarks({ phase, p }: { phase: Phase; p: PhaseText }) {
           markerHeight="5"
           orient="auto"
         >
-          <path d="M0 0 L10 5 L0 10 Z" className={MOVING_FILL} />
+          <path d="M0 0 L10 5 L0 10 Z" className={TEXT.moving} />
         </marker>
       </defs>
-      <g className={MOVING} strokeWidth="3" fill="none" markerEnd={`url(#ram-arrow-${phase})`}>
+      <g className={LINE.moving} strokeWidth="3" fill="none" markerEnd={`url(#ram-arrow-${phase})`}>
         {p.flow === 'in' ? <line x1="14" x2="80" y1={mid} y2={mid} /> : null}
         {p.flow === 'back' ? <line x1="80" x2="14" y1={mid} y2={mid} /> : null}
         {p.wasteOpen && p.flow === 'in' ? (
@@ -235,14 +234,14 @@ function PhaseMarks({ phase, p }: { phase: Phase; p: PhaseText }) {
         {phase === '4' ? <line x1={SNIFTER} x2={SNIFTER} y1="121" y2={TOP + 10} /> : null}
       </g>
       {phase === '2' ? (
-        <text x={WASTE.right + 6} y="100" fontSize="13" fontWeight="700" className={MOVING_FILL}>
+        <text x={WASTE.right + 6} y="100" fontSize="13" fontWeight="700" className={TEXT.moving}>
           clack!
         </text>
       ) : null}
       {phase === '4' ? (
-        <circle cx={SNIFTER + 8} cy={TOP + 14} r="3" className={`${INK} ${AIR_FILL}`} strokeWidth="1.5" />
+        <circle cx={SNIFTER + 8} cy={TOP + 14} r="3" className={`${LINE.ink} ${AREA.air}`} strokeWidth="1.5" />
       ) : null}
-      <text x="4" y="200" fontSize="13" fontWeight="600" className={MOVING_FILL}>
+      <text x="4" y="200" fontSize="13" fontWeight="600" className={TEXT.moving}>
         {p.note}
       </text>
     </g>

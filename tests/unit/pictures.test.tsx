@@ -4,6 +4,8 @@ import { renderGuide } from '@/components/guides/GuideBody';
 import { readGuideFile } from '@/lib/guides/content';
 import { CALCULATORS, initialState, type CalculatorId } from '@/lib/calculators';
 import { SiteSketchDrawing } from '@/components/calculators/kit/SiteSketch';
+import { AREA, LINE, PAPER, TEXT } from '@/components/drawing-colours';
+import { palette } from '@/tailwind.config';
 
 const PARTS = ['drive pipe', 'waste valve', 'delivery valve', 'air chamber', 'snifter', 'delivery line'];
 
@@ -112,5 +114,54 @@ describe('the site sketch on the calculators', () => {
       'stall-check',
       'yield-estimate',
     ]);
+  });
+});
+
+/** A class pair such as 'stroke-creek-700 dark:stroke-limestone-200' as its two hex colours. */
+function hexes(classes: string): { light: string; dark: string } {
+  const pick = (c: string | undefined) => {
+    const [, hue, shade] = /^(?:dark:)?(?:stroke|fill|bg)-([a-z]+)-(\d+)$/.exec(c ?? '') ?? [];
+    const hex = (palette as Record<string, Record<string, string>>)[hue ?? '']?.[shade ?? ''];
+    if (!hex) throw new Error(`not a palette colour: ${c}`);
+    return hex;
+  };
+  const parts = classes.split(/\s+/);
+  return {
+    light: pick(parts.find((c) => !c.startsWith('dark:'))),
+    dark: pick(parts.find((c) => c.startsWith('dark:'))),
+  };
+}
+
+/** Contrast ratio as WCAG 2.1 defines it (relative luminance, sRGB; W3C, 2018, "contrast ratio"). */
+function contrast(a: string, b: string): number {
+  const lum = (hex: string) => {
+    const [r, g, bl] = [1, 3, 5].map((i) => {
+      const c = parseInt(hex.slice(i, i + 2), 16) / 255;
+      return c <= 0.03928 ? c / 12.92 : ((c + 0.055) / 1.055) ** 2.4;
+    });
+    return 0.2126 * r! + 0.7152 * g! + 0.0722 * bl!;
+  };
+  const [hi, lo] = [lum(a), lum(b)].sort((x, y) => y - x);
+  return (hi! + 0.05) / (lo! + 0.05);
+}
+
+describe('the drawings’ colours', () => {
+  it('contrast against the paper and the water in both themes', () => {
+    // WCAG 2.1: 3:1 for graphical objects (1.4.11), 4.5:1 for text (1.4.3)
+    // black on white is 21:1 (WCAG 2.1, the formula's own end point), a check of the formula
+    expect(contrast('#000000', '#ffffff')).toBeCloseTo(21, 6);
+    const grounds = [PAPER, AREA.water].map(hexes);
+    for (const [need, set] of [
+      [3, LINE],
+      [4.5, TEXT],
+    ] as const) {
+      for (const [name, classes] of Object.entries(set)) {
+        const c = hexes(classes);
+        for (const g of grounds) {
+          expect(contrast(c.light, g.light), `${name} light on ${g.light}`).toBeGreaterThanOrEqual(need);
+          expect(contrast(c.dark, g.dark), `${name} dark on ${g.dark}`).toBeGreaterThanOrEqual(need);
+        }
+      }
+    }
   });
 });

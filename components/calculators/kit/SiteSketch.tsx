@@ -1,6 +1,7 @@
 import { formatQuantity, readForm, type FieldDef, type FormState } from '@/lib/calculators';
 import type { UnitSystem } from '@/lib/hydraulics';
 import { useUnits } from '@/components/units/UnitsProvider';
+import { AREA, LINE, TEXT } from '@/components/drawing-colours';
 
 /**
  * A sketch of the site beside a calculator's inputs: what the fall, the lift, the
@@ -48,12 +49,6 @@ export function sketchValues(fields: readonly FieldDef[], state: FormState, unit
   return { asked, written };
 }
 
-const INK = 'stroke-creek-700 dark:stroke-limestone-200';
-const INK_FILL = 'fill-creek-700 dark:fill-limestone-200';
-const GROUND = 'stroke-moss-600 dark:stroke-moss-300';
-const WATER_LINE = 'stroke-creek-400 dark:stroke-creek-300';
-const WATER_FILL = 'fill-creek-100 dark:fill-creek-700';
-
 /** Heights in the drawing (viewBox 360 × 200): the source's surface, the pump, the outlet at the tank. */
 const SURFACE = 62;
 const PUMP = 164;
@@ -88,38 +83,38 @@ export function SiteSketchDrawing({
       >
         <title>{label}</title>
         {/* the pond at the source, and the ground: down to the pump, up to the tank */}
-        <path d={`M16 ${SURFACE} L22 84 H78 L84 ${SURFACE} Z`} className={WATER_FILL} />
-        <line x1="14" x2="86" y1={SURFACE} y2={SURFACE} className={WATER_LINE} strokeWidth="2" />
+        <path d={`M16 ${SURFACE} L22 84 H78 L84 ${SURFACE} Z`} className={AREA.water} />
+        <line x1="14" x2="86" y1={SURFACE} y2={SURFACE} className={LINE.water} strokeWidth="2" />
         <path
           d={`M0 ${SURFACE} H12 L22 86 H78 L90 ${SURFACE} L150 170 H200 L290 52 H360`}
-          className={GROUND}
+          className={LINE.ground}
           strokeWidth="2.5"
           fill="none"
           strokeLinejoin="round"
         />
         {/* pipes: drive pipe from the intake down to the pump, delivery line up and over the tank's rim */}
-        <g className={INK} strokeWidth="5" fill="none" strokeLinecap="round" strokeLinejoin="round">
+        <g className={LINE.ink} strokeWidth="5" fill="none" strokeLinecap="round" strokeLinejoin="round">
           <path d={`M64 78 H94 L154 ${PUMP}`} />
           <path d={`M186 ${PUMP - 2} H204 L284 46 L300 12 H318 V${OUTLET + 4}`} />
         </g>
         {/* the pump: body, air chamber; the tank */}
-        <g className={INK} strokeWidth="2.5">
-          <rect x="154" y="156" width="34" height="14" rx="2" className="fill-limestone-50 dark:fill-creek-900" />
-          <rect x="172" y="136" width="13" height="20" rx="4" className="fill-limestone-50 dark:fill-creek-900" />
-          <rect x="300" y="24" width="44" height="28" rx="2" className="fill-limestone-50 dark:fill-creek-900" />
+        <g className={LINE.ink} strokeWidth="2.5">
+          <rect x="154" y="156" width="34" height="14" rx="2" className={AREA.paper} />
+          <rect x="172" y="136" width="13" height="20" rx="4" className={AREA.paper} />
+          <rect x="300" y="24" width="44" height="28" rx="2" className={AREA.paper} />
         </g>
         {/* dimension lines: fall on the left, lift on the right, to the pump's level */}
-        <g className={INK} strokeWidth="1.2" strokeDasharray="4 3">
+        <g className={LINE.ink} strokeWidth="1.2" strokeDasharray="4 3">
           <line x1="2" x2="14" y1={SURFACE} y2={SURFACE} />
           <line x1="2" x2="150" y1={PUMP} y2={PUMP} />
           <line x1="192" x2="358" y1={PUMP} y2={PUMP} />
           <line x1="322" x2="358" y1={OUTLET} y2={OUTLET} />
         </g>
-        <g className={INK} strokeWidth="1.5">
+        <g className={LINE.ink} strokeWidth="1.5">
           <Arrow x={7} from={SURFACE} to={PUMP} />
           <Arrow x={352} from={PUMP} to={OUTLET} />
         </g>
-        <g className={INK_FILL} fontSize="14">
+        <g className={TEXT.ink} fontSize="14">
           <text x="50" y="54" textAnchor="middle">
             source
           </text>
