@@ -103,6 +103,9 @@ describe('the site sketch on the calculators', () => {
     expect(yieldSketch.label).toMatch(/^Site sketch: fall from the source’s surface/);
     expect(sketch('drive-pipe-check', 'US', { fall: 'four' }).part('fall')).toBe('fall');
     expect(sketch('delivery-line', 'US').part('lift')).toBe('lift 29 ft');
+    // the stall check's delivery line is optional and starts empty, but is asked for
+    expect(sketch('stall-check', 'US').part('delivery')).toBe('delivery line');
+    expect(sketch('stall-check', 'metric', { deliveryLength: '150 ft' }).part('delivery')).toBe('delivery line 45.7 m');
   });
 
   it('is drawn only for calculators that ask for a fall, lift or pipe length', () => {

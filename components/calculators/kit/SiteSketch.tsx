@@ -21,7 +21,7 @@ const PART_FIELDS: Record<Part, RegExp> = {
   fall: /^(site\.)?fallM$/,
   lift: /^(site\.)?liftM$/,
   drive: /^(site\.)?drivePipe\.lengthM$/,
-  delivery: /^(deliveryLine|line)\.lengthM$/,
+  delivery: /^(site\.)?(deliveryLine|line)\.lengthM$/,
 };
 
 const NAMES: Record<Part, string> = { fall: 'fall', lift: 'lift', drive: 'drive pipe', delivery: 'delivery line' };
@@ -37,7 +37,7 @@ function siValue(fields: readonly FieldDef[], state: FormState, part: Part): num
 }
 
 /** The parts this calculator asks for, each with its value as written, if any. */
-export function sketchValues(fields: readonly FieldDef[], state: FormState, units: UnitSystem) {
+function sketchValues(fields: readonly FieldDef[], state: FormState, units: UnitSystem) {
   const asked = (Object.keys(PART_FIELDS) as Part[]).filter((p) =>
     fields.some((f) => f.type === 'quantity' && PART_FIELDS[p].test(f.name)),
   );
