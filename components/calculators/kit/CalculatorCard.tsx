@@ -19,6 +19,7 @@ import { useUnits } from '@/components/units/UnitsProvider';
 import { calculatorView } from '../views';
 import { Working } from './Working';
 import { SaveCalculation } from './SaveCalculation';
+import { SiteSketch } from './SiteSketch';
 
 /**
  * A live calculator: inputs with unit pickers on one side, large results with units
@@ -74,6 +75,7 @@ export function CalculatorCard({
           onSubmit={(e) => e.preventDefault()}
           aria-label={`${def.name} inputs`}
         >
+          <SiteSketch fields={def.fields} state={state} />
           {visibleFields(def, state).map((f) => (
             <Field
               key={f.name}
