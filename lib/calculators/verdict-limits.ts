@@ -15,6 +15,8 @@ export interface Verdict {
   reason: string;
   /** the result lies outside the range the engine's published figures cover */
   beyondRange: boolean;
+  /** where the lines this verdict draws come from, for the card's Sources */
+  sources: readonly string[];
 }
 
 /** The headline words for each level, as the site plan uses them (DESIGN.md). */
@@ -81,6 +83,7 @@ export const verdict = (level: VerdictLevel, reason: string, beyondRange = false
   level,
   reason,
   beyondRange,
+  sources: [],
 });
 
 /** A ratio as a person says it: "7.3 times", "26 times". */

@@ -1,10 +1,17 @@
 import { describe, expect, it } from 'vitest';
-import { CALCULATORS, recompute, verdictFor, VERDICT_LIMITS, type CalculatorId, type Verdict } from '@/lib/calculators';
+import {
+  getCalculator,
+  recompute,
+  verdictFor,
+  VERDICT_LIMITS,
+  type CalculatorId,
+  type Verdict,
+} from '@/lib/calculators';
 import type { UnitSystem } from '@/lib/hydraulics';
 
 /** The verdict for a calculator's defaults with these inputs (as a share link gives them). */
 function judge(id: CalculatorId, form: Record<string, string>, units: UnitSystem = 'US'): Verdict {
-  const def = CALCULATORS[id];
+  const def = getCalculator(id)!;
   const r = recompute(def, { ...def.defaults, ...form });
   if (!r.ok) throw new Error(`refused: ${r.message}`);
   return verdictFor(id, r.output, units);
