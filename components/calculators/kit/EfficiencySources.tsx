@@ -13,7 +13,7 @@ export const pumpTypeOf = (v: unknown): PumpType | undefined =>
 export function SourcesDisclosure({ lines, children }: { lines: readonly string[]; children?: ReactNode }) {
   return (
     <details className="text-xs" data-testid="calculator-sources">
-      <summary className="cw-link inline-flex min-h-6 cursor-pointer items-center text-sm">Sources</summary>
+      <summary className="cw-link cursor-pointer py-1 text-sm">Sources</summary>
       <ul className="mt-1 flex list-disc flex-col gap-1 pl-4">
         {lines.map((l) => (
           <li key={l}>{l}.</li>
