@@ -133,8 +133,8 @@ export function CalculatorCard({
 /** Footer links and buttons: at least 24 × 24 px to touch (WCAG 2.2, 2.5.8). */
 const TARGET = 'cw-link inline-flex min-h-6 min-w-6 items-center';
 
-/** Rows the engine cannot vouch for: set apart from the calm result boxes by a dashed clay edge. */
-const BEYOND_ROWS = 'rounded-md border-2 border-dashed border-clay-700 p-2 dark:border-clay-300';
+/** Rows the engine cannot vouch for: a dashed clay edge, and none of the calm fill a trusted result sits in. */
+const BEYOND_ROWS = 'rounded-md border-2 border-dashed border-clay-700 p-2 dark:border-clay-300 [&>div]:bg-transparent';
 
 function Field({
   id,

@@ -5,14 +5,14 @@ import { BEYOND_RANGE_WORDS, VERDICT_WORDS, type Verdict, type VerdictLevel } fr
  * it (and a reader who cannot tell moss from amber still reads the word).
  * Every pair of text and background here is at least 4.5:1 in both themes.
  */
-const LOOK: Record<VerdictLevel, { symbol: string; box: string }> = {
+export const LOOK: Record<VerdictLevel, { symbol: string; box: string }> = {
   works: {
     symbol: '✓',
     box: 'border-l-8 border-moss-600 bg-moss-100 text-creek-900 dark:border-moss-300 dark:bg-creek-800 dark:text-moss-100',
   },
   marginal: {
     symbol: '◐',
-    box: 'border-l-8 border-signal bg-signal-100 text-creek-900 dark:border-signal-300 dark:bg-signal-900 dark:text-signal-100',
+    box: 'border-l-8 border-signal-700 bg-signal-100 text-creek-900 dark:border-signal-300 dark:bg-signal-900 dark:text-signal-100',
   },
   'wont-work': {
     symbol: '✕',
@@ -25,8 +25,10 @@ const LOOK: Record<VerdictLevel, { symbol: string; box: string }> = {
 };
 
 /** A result the engine cannot vouch for: no calm fill, a heavy dashed edge and a dark label that says so. */
-const BEYOND_BOX =
+export const BEYOND_BOX =
   'border-4 border-dashed border-clay-700 bg-limestone-50 text-creek-900 dark:border-clay-300 dark:bg-creek-950 dark:text-limestone-100';
+
+export const BEYOND_BADGE = 'bg-creek-900 text-limestone-50 dark:bg-limestone-100 dark:text-creek-950';
 
 /** The card's headline: what the numbers mean for this site, and why, in one sentence. */
 export function VerdictLine({ verdict, id }: { verdict: Verdict; id: string }) {
@@ -45,10 +47,7 @@ export function VerdictLine({ verdict, id }: { verdict: Verdict; id: string }) {
           {VERDICT_WORDS[verdict.level]}
         </strong>
         {verdict.beyondRange ? (
-          <span
-            className="rounded bg-creek-900 px-2 py-0.5 text-sm font-semibold text-limestone-50 dark:bg-limestone-100 dark:text-creek-950"
-            data-testid="beyond-range"
-          >
+          <span className={`rounded px-2 py-0.5 text-sm font-semibold ${BEYOND_BADGE}`} data-testid="beyond-range">
             <span aria-hidden="true">⚠ </span>
             {BEYOND_RANGE_WORDS}
           </span>
