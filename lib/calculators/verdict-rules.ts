@@ -157,6 +157,13 @@ export const arrayVerdict: Rule<ArrayPlannerResults> = (output, u) => {
       `The pumps would have to lift ${formatQuantity('length', r.pumpHeadM, u)}, past the ${ceiling} where the published efficiency table ends for this fall, so the engine cannot vouch for any delivery: pump in stages or find more fall.`,
       true,
     );
+  // the upper pump has no fittings of its own, so it delivers nothing only past the table's last ratio
+  if (r.staged && r.staged.upperDeliveredFlowM3s <= 0)
+    return verdict(
+      'wont-work',
+      `The upper pump's lift is past the ${L.maxLiftRatio.value} times its fall where the published efficiency table ends, so the engine cannot vouch for any water at the top: add a stage or give it more fall.`,
+      true,
+    );
   if (running === 0 || r.combinedDeliveryM3s <= 0)
     return verdict('wont-work', 'None of the pumps runs as laid out: take the fittings out of the drive pipes.');
   if (r.sourceShare !== undefined && r.sourceShare > 1)

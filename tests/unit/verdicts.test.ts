@@ -115,6 +115,19 @@ describe('array planner verdict', () => {
   });
 });
 
+describe('array planner verdict, in stages', () => {
+  it('cannot vouch for an upper pump lifting 150 times its fall', () => {
+    // 600 ft ÷ 4 ft (the upper fall defaults to the fall) = 150 > 26: Building Trades Pocketbook table ends at 26
+    const v = judge('array-planner', { mode: 'staged', upperLift: '600 ft' });
+    expect(v.level).toBe('wont-work');
+    expect(v.beyondRange).toBe(true);
+  });
+  it('is marginal when the lower pumps keep the upper one going part of the day', () => {
+    // 65 ft ÷ 4 ft = 16 < 26 (Building Trades Pocketbook); two lower pumps fill the tank slower than the upper one drinks
+    expect(judge('array-planner', { mode: 'staged' }).level).toBe('marginal');
+  });
+});
+
 describe('stall check verdict', () => {
   it('works when nothing points to a cause', () => {
     // the default site: 4 ft fall, 29 ft lift, 24 ft drive pipe (L/H 6, PRACTICE 5–10, common practice, no source)
