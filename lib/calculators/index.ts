@@ -40,3 +40,12 @@ export { surgeByMaterial } from './defs/drivePipeCheck';
 export { normalizeSymptoms } from './defs/stallCheck';
 export { parseTrials } from './defs/sourceFlow';
 export { parseArea } from './defs/demandAndStorage';
+export {
+  BEYOND_RANGE_WORDS,
+  causeStrength,
+  verdictFor,
+  VERDICT_LIMITS,
+  VERDICT_WORDS,
+  type Verdict,
+  type VerdictLevel,
+} from './verdict';

@@ -1,6 +1,6 @@
 'use client';
 
-import { useEffect, useMemo, useRef, useState } from 'react';
+import { useEffect, useId, useMemo, useRef, useState } from 'react';
 import { UNIT_CHOICES, unitLabel } from '@/lib/hydraulics';
 import type { CalcOutput } from '@/lib/hydraulics';
 import {
@@ -10,6 +10,7 @@ import {
   formatNumber,
   initialState,
   shareQuery,
+  verdictFor,
   visibleFields,
   type Calculator,
   type FieldDef,
@@ -20,10 +21,12 @@ import { calculatorView } from '../views';
 import { Working } from './Working';
 import { SaveCalculation } from './SaveCalculation';
 import { SiteSketch } from './SiteSketch';
+import { SourcesDisclosure } from './EfficiencySources';
+import { VerdictLine } from './VerdictLine';
 
 /**
- * A live calculator: inputs with unit pickers on one side, large results with units
- * on the other, warnings in amber, the working in KaTeX, a chart where a curve says
+ * A live calculator: inputs with unit pickers on one side, a verdict in a sentence
+ * and large results with units on the other, warnings in amber, the working in KaTeX, a chart where a curve says
  * more, and a share link that reopens the same inputs.
  */
 export function CalculatorCard({
@@ -36,6 +39,8 @@ export function CalculatorCard({
   onOutput?: (state: FormState, output: CalcOutput<unknown> | null) => void;
 }) {
   const { units } = useUnits();
+  // every id from useId, so the same calculator twice on one page keeps its labels to itself
+  const uid = useId();
   const [state, setState] = useState<FormState>(() => initialState(def.fields, props, def.defaults, units));
   const lastUnits = useRef(units);
   const [copied, setCopied] = useState(false);
@@ -61,10 +66,10 @@ export function CalculatorCard({
     <section
       className="cw-card my-6 min-w-0 max-w-full overflow-hidden font-sans not-prose"
       data-calculator={def.id}
-      aria-labelledby={`${def.id}-title`}
+      aria-labelledby={`${uid}-title`}
     >
       <header className="mb-3 flex flex-wrap items-baseline justify-between gap-2">
-        <h3 id={`${def.id}-title`} className="text-lg font-semibold">
+        <h3 id={`${uid}-title`} className="text-lg font-semibold">
           {def.name}
         </h3>
         <p className="cw-muted text-xs">{def.blurb}</p>
@@ -79,7 +84,7 @@ export function CalculatorCard({
           {visibleFields(def, state).map((f) => (
             <Field
               key={f.name}
-              id={`${def.id}-${f.name}`}
+              id={`${uid}-${f.name}`}
               field={f}
               state={state[f.name]}
               error={outcome.ok ? undefined : outcome.fieldErrors[f.name]}
@@ -89,7 +94,7 @@ export function CalculatorCard({
         </form>
         <div className="min-w-0" aria-live="polite" data-testid={`${def.id}-results`}>
           {outcome.ok ? (
-            <Results def={def} output={outcome.output} units={units} input={outcome.input} />
+            <Results def={def} output={outcome.output} units={units} input={outcome.input} uid={uid} />
           ) : (
             <p
               className="rounded-md border border-signal bg-signal-100 p-3 text-sm text-creek-900 dark:bg-signal-900 dark:text-signal-100"
@@ -104,12 +109,12 @@ export function CalculatorCard({
         data-print-hide
         className="mt-4 flex flex-wrap items-center gap-3 border-t border-limestone-300 pt-3 text-sm dark:border-creek-700"
       >
-        <a href={shareHref} className="cw-link" data-testid={`${def.id}-share`}>
+        <a href={shareHref} className={TARGET} data-testid={`${def.id}-share`}>
           Share link
         </a>
         <button
           type="button"
-          className="cw-link"
+          className={TARGET}
           onClick={() => {
             void navigator.clipboard
               ?.writeText(new URL(shareHref, window.location.href).toString())
@@ -119,13 +124,19 @@ export function CalculatorCard({
           {copied ? 'Copied' : 'Copy link'}
         </button>
         {outcome.ok ? <SaveCalculation tool={def.id} inputs={shareQuery(def.fields, state)} /> : null}
-        <a href={`/guides/${def.guide}`} className="cw-link ml-auto">
+        <a href={`/guides/${def.guide}`} className={`${TARGET} ml-auto`}>
           Read the guide
         </a>
       </footer>
     </section>
   );
 }
+
+/** Footer links and buttons: at least 24 × 24 px to touch (WCAG 2.2, 2.5.8). */
+const TARGET = 'cw-link inline-flex min-h-6 min-w-6 items-center';
+
+/** Rows the engine cannot vouch for: a dashed clay edge, and none of the calm fill a trusted result sits in. */
+const BEYOND_ROWS = 'rounded-md border-2 border-dashed border-clay-700 p-2 dark:border-clay-300 [&>div]:bg-transparent';
 
 function Field({
   id,
@@ -169,14 +180,14 @@ function Field({
                 .filter(Boolean);
               const on = chosen.includes(o.value);
               return (
-                <label key={o.value} className="flex items-center gap-1.5 text-sm">
+                <label key={o.value} className="flex min-h-6 items-center gap-1.5 text-sm">
                   <input
                     type="checkbox"
                     checked={on}
                     onChange={() =>
                       onChange({ text: (on ? chosen.filter((c) => c !== o.value) : [...chosen, o.value]).join(',') })
                     }
-                    className="accent-clay"
+                    className="h-6 w-6 shrink-0 accent-clay"
                   />
                   {o.label}
                 </label>
@@ -244,17 +255,26 @@ function Results({
   output,
   units,
   input,
+  uid,
 }: {
   def: Calculator;
   output: CalcOutput<unknown>;
   units: 'US' | 'metric';
   input: Record<string, unknown>;
+  uid: string;
 }) {
   const rows = def.rows(output.results);
   const view = calculatorView(def.id);
+  const verdict = verdictFor(def.id, output, units);
+  // nothing to judge yet: ask for what is needed rather than show zeros beside a warning
+  if (verdict.level === 'ask') return <VerdictLine verdict={verdict} id={`${uid}-verdict`} />;
   return (
     <div className="flex flex-col gap-3">
-      <dl className="grid grid-cols-1 gap-2">
+      <VerdictLine verdict={verdict} id={`${uid}-verdict`} />
+      <dl
+        className={`grid grid-cols-1 gap-2 ${verdict.beyondRange ? BEYOND_ROWS : ''}`}
+        aria-describedby={verdict.beyondRange ? `${uid}-verdict` : undefined}
+      >
         {rows.map((r) => {
           const v =
             typeof r.value === 'string'
@@ -291,9 +311,10 @@ function Results({
       ) : null}
       {view.extra ? view.extra(output.results, units) : null}
       {view.chart ? <div className="h-56">{view.chart(output.results, units, input)}</div> : null}
-      {view.sources ? view.sources(output.results, input) : null}
       <Working steps={output.steps} />
-      <p className="cw-muted text-xs">Engine {output.engineVersion}</p>
+      <SourcesDisclosure lines={verdict.sources}>
+        {view.sources ? view.sources(output.results, input) : null}
+      </SourcesDisclosure>
     </div>
   );
 }

@@ -5,6 +5,10 @@ import Link from 'next/link';
 import { SessionContext } from 'next-auth/react';
 import { can } from '@/lib/auth/policy';
 import { sendJson } from '@/components/forms/api';
+import { ENGINE_VERSION } from '@/lib/hydraulics';
+
+/** At least 24 × 24 px to touch (WCAG 2.2, 2.5.8). */
+const TARGET = 'cw-link inline-flex min-h-6 items-center';
 
 /**
  * "Save as a worked calculation": posts the inputs as typed; the server recomputes
@@ -18,23 +22,29 @@ export function SaveCalculation({ tool, inputs }: { tool: string; inputs: URLSea
   const actor = user ? { id: Number(user.id), role: user.role as 'member' } : null;
   if (!can(actor, 'calculation.save')) {
     return (
-      <Link href="/sign-in" className="cw-link">
+      <Link href="/sign-in" className={TARGET}>
         Sign in to save
       </Link>
     );
   }
   if (state.url) {
+    // the engine version belongs to the saved record, not to every card: it says which engine a later recompute is held against
     return (
-      <Link href={state.url} className="cw-link font-semibold" data-testid="saved-calculation">
-        Saved: open the worked calculation
-      </Link>
+      <span className="flex flex-wrap items-center gap-x-2">
+        <Link href={state.url} className={`${TARGET} font-semibold`} data-testid="saved-calculation">
+          Saved: open the worked calculation
+        </Link>
+        <span className="cw-muted text-xs" data-testid="saved-engine">
+          computed with engine {ENGINE_VERSION}
+        </span>
+      </span>
     );
   }
   return (
     <span className="flex items-center gap-2">
       <button
         type="button"
-        className="cw-link"
+        className={TARGET}
         disabled={state.busy}
         onClick={async () => {
           setState({ busy: true });

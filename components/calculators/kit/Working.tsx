@@ -21,7 +21,9 @@ export function Working({ steps }: { steps: Step[] }) {
 
   return (
     <details className="mt-3" onToggle={(e) => setOpen((e.target as HTMLDetailsElement).open)}>
-      <summary className="cw-link cursor-pointer font-sans text-sm font-semibold">Show the working</summary>
+      <summary className="cw-link min-h-6 cursor-pointer py-0.5 font-sans text-sm font-semibold">
+        Show the working
+      </summary>
       <ol className="mt-2 flex flex-col gap-3" data-testid="working">
         {steps.map((s, i) => (
           <li key={`${i}-${s.title}`} className="border-l-2 border-creek-200 pl-3 dark:border-creek-600">

@@ -8,14 +8,23 @@ export const drivePipeCheckView: CalculatorView<DrivePipeCheckResults> = {
     <ul className="flex flex-col gap-1 text-xs">
       {r.guides.map((g) => (
         <li key={g.id} className={g.within ? '' : 'font-semibold text-signal-700 dark:text-signal-300'}>
-          {`${g.ratio} ${g.min}–${g.max}: yours ${g.value.toFixed(0)} ${g.within ? '(within)' : '(outside)'} — ${g.source}`}
+          {`${g.ratio} ${g.min}–${g.max}: yours ${g.value.toFixed(0)} ${g.within ? '(within)' : '(outside)'}`}
         </li>
       ))}
       {r.joint && (!r.joint.allowed || r.joint.ratingPa !== r.pressureRatingPa) ? (
-        <li>{`Joints: ${r.joint.note} — ${r.joint.source}`}</li>
+        <li>{`Joints: ${r.joint.note}`}</li>
       ) : null}
-      {r.fatigue ? <li>{`Fatigue life: ${r.fatigue.source}`}</li> : null}
     </ul>
+  ),
+  // the rules' and ratings' sources go behind the card's Sources, so "from memory" is not on its face
+  sources: (r) => (
+    <>
+      {r.guides.map((g) => (
+        <li key={g.id}>{`Drive pipe ${g.ratio} ${g.min}–${g.max}: ${g.source}.`}</li>
+      ))}
+      {r.joint ? <li>{`Joints: ${r.joint.source}.`}</li> : null}
+      {r.fatigue ? <li>{`Fatigue life: ${r.fatigue.source}.`}</li> : null}
+    </>
   ),
   // Surge against pipe material: the same size, fall and length in each series.
   chart: (_r, units, input) => {

@@ -1,4 +1,5 @@
 import type { StallCheckResults } from '@/lib/hydraulics';
+import { causeStrength } from '@/lib/calculators';
 import { RelatedThreads } from '@/components/search/RelatedThreads';
 import type { CalculatorView } from './types';
 
@@ -18,10 +19,10 @@ export const stallCheckView: CalculatorView<StallCheckResults> = {
               data-cause={c.code}
             >
               <p className="font-semibold">
-                {i + 1}. {c.title} <span className="cw-muted text-xs">({strength(c.score)})</span>
+                {i + 1}. {c.title} <span className="cw-muted text-xs">({causeStrength(c.score)})</span>
               </p>
               <p className="cw-muted">{c.reason}</p>
-              <a href={`/guides/${c.guide}`} className="cw-link text-xs">
+              <a href={`/guides/${c.guide}`} className="cw-link inline-flex min-h-6 items-center text-xs">
                 How to fix it
               </a>
             </li>
@@ -36,8 +37,3 @@ export const stallCheckView: CalculatorView<StallCheckResults> = {
       </>
     ),
 };
-
-/** How strongly the numbers and symptoms point at a cause, in words rather than a number to chase. */
-function strength(score: number) {
-  return score >= 0.6 ? 'strong sign' : score >= 0.3 ? 'some sign' : 'faint sign';
-}
