@@ -4,6 +4,7 @@ import remarkMath from 'remark-math';
 import rehypeKatex from 'rehype-katex';
 import rehypeSlug from 'rehype-slug';
 import { rehypeCollectHeadings, type Heading } from '@/lib/guides/headings';
+import { rehypeFocusableMath } from '@/lib/guides/focusable-math';
 import { guideComponents } from './mdx-components';
 
 /** Compiles a guide's MDX on the server (at build time for static pages). */
@@ -19,6 +20,7 @@ export async function renderGuide(body: string) {
         rehypePlugins: [
           rehypeSlug,
           [rehypeKatex, { throwOnError: true, strict: 'ignore' }],
+          rehypeFocusableMath,
           rehypeCollectHeadings(headings),
         ],
       },

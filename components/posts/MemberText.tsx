@@ -1,6 +1,7 @@
 import type { ComponentProps } from 'react';
 import Markdown, { type Components, type UrlTransform } from 'react-markdown';
 import rehypeKatex from 'rehype-katex';
+import { rehypeFocusableMath } from '@/lib/guides/focusable-math';
 import rehypeSanitize, { defaultSchema, type Options as SanitizeSchema } from 'rehype-sanitize';
 import remarkGfm from 'remark-gfm';
 import remarkMath from 'remark-math';
@@ -105,6 +106,7 @@ export function MemberText({ children }: { children: string }) {
         rehypePlugins={[
           [rehypeSanitize, memberSchema],
           [rehypeKatex, { throwOnError: false, strict: 'ignore', trust: false }],
+          rehypeFocusableMath,
         ]}
         urlTransform={memberUrlTransform}
         components={components}
