@@ -52,9 +52,9 @@ export function QuestionList({ items, units }: { items: QuestionSummary[]; units
           <li
             key={q.id}
             data-question={q.id}
-            className="grid gap-x-5 gap-y-2 border-t border-limestone-300 py-4 first:border-t-0 sm:grid-cols-[13rem_1fr] dark:border-creek-700"
+            className="grid gap-x-5 gap-y-2 border-t border-limestone-300 py-4 first:border-t-0 sm:grid-cols-[15rem_1fr] sm:grid-rows-[auto_1fr] dark:border-creek-700"
           >
-            <div className="flex flex-col gap-1.5 sm:order-2">
+            <div className="flex flex-col gap-1.5 sm:col-start-2 sm:row-start-1">
               <h3 className="font-serif text-lg font-semibold leading-snug">
                 <Link href={`/questions/${q.id}`} className="no-underline hover:underline">
                   {q.title}
@@ -62,34 +62,17 @@ export function QuestionList({ items, units }: { items: QuestionSummary[]; units
               </h3>
               <StateLine id={q.id} state={q.state} />
               {!glance ? <p className="cw-muted line-clamp-2 font-serif text-sm">{q.excerpt}</p> : null}
-              <p className="cw-muted text-xs">
-                asked by {q.author.displayName} on{' '}
-                <time dateTime={q.createdAt}>{dateFmt.format(new Date(q.createdAt))}</time>
-                {q.tags.length ? (
-                  <>
-                    {' · filed under '}
-                    {q.tags.map((t, i) => (
-                      <span key={t.slug}>
-                        {i ? ', ' : ''}
-                        <Link href={`/tags/${t.slug}`} className="cw-link">
-                          {t.name}
-                        </Link>
-                      </span>
-                    ))}
-                  </>
-                ) : null}
-              </p>
             </div>
             {glance ? (
               <div
-                className="rounded-md bg-creek-50 px-3 py-2 text-sm sm:order-1 sm:self-start dark:bg-creek-800"
+                className="self-start rounded-md bg-creek-50 px-3 py-2 text-sm sm:col-start-1 sm:row-span-2 sm:row-start-1 dark:bg-creek-800"
                 data-testid="site-glance"
               >
-                <dl className="cw-num grid grid-cols-[auto_1fr] gap-x-3 gap-y-0.5 font-sans">
+                <dl className="cw-num flex flex-wrap gap-x-4 gap-y-0.5 font-sans sm:grid sm:grid-cols-[auto_1fr] sm:gap-x-3">
                   {glance.numbers.map((n) => (
-                    <div key={n.key} className="contents" data-glance={n.key}>
+                    <div key={n.key} className="flex gap-1.5 sm:contents" data-glance={n.key}>
                       <dt className="cw-muted">{n.label}</dt>
-                      <dd className="font-semibold">{n.value}</dd>
+                      <dd className="whitespace-nowrap font-semibold">{n.value}</dd>
                     </div>
                   ))}
                 </dl>
@@ -100,8 +83,27 @@ export function QuestionList({ items, units }: { items: QuestionSummary[]; units
                 ) : null}
               </div>
             ) : (
-              <p className="cw-muted hidden text-xs italic sm:order-1 sm:block">no site sheet</p>
+              <p className="cw-muted hidden text-xs italic sm:col-start-1 sm:row-span-2 sm:row-start-1 sm:block">
+                no site sheet
+              </p>
             )}
+            <p className="cw-muted self-start text-xs sm:col-start-2 sm:row-start-2">
+              asked by {q.author.displayName} on{' '}
+              <time dateTime={q.createdAt}>{dateFmt.format(new Date(q.createdAt))}</time>
+              {q.tags.length ? (
+                <>
+                  {' · filed under '}
+                  {q.tags.map((t, i) => (
+                    <span key={t.slug}>
+                      {i ? ', ' : ''}
+                      <Link href={`/tags/${t.slug}`} className="cw-link">
+                        {t.name}
+                      </Link>
+                    </span>
+                  ))}
+                </>
+              ) : null}
+            </p>
           </li>
         );
       })}
