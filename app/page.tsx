@@ -4,6 +4,7 @@ import { isDatabaseUnavailable } from '@/lib/db/errors';
 import { QuestionList } from '@/components/QuestionList';
 import { ServiceUnavailable } from '@/components/ServiceUnavailable';
 import { Caution } from '@/components/Caution';
+import { readUnitPreference } from '@/lib/units/server';
 
 export const dynamic = 'force-dynamic';
 
@@ -27,6 +28,7 @@ const PATHS = [
 ];
 
 export default async function HomePage() {
+  const units = await readUnitPreference();
   let latest: QuestionPage | null = null;
   let dbDown = false;
   try {
@@ -63,7 +65,11 @@ export default async function HomePage() {
       </Caution>
       <section>
         <h2 className="mb-3 font-serif text-2xl font-semibold">Latest questions</h2>
-        {dbDown || !latest ? <ServiceUnavailable what="the latest questions" /> : <QuestionList items={latest.items} />}
+        {dbDown || !latest ? (
+          <ServiceUnavailable what="the latest questions" />
+        ) : (
+          <QuestionList items={latest.items} units={units} />
+        )}
       </section>
     </div>
   );

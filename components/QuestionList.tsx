@@ -1,47 +1,112 @@
 import Link from 'next/link';
-import type { QuestionSummary } from '@/lib/questions/list';
+import type { QuestionState, QuestionSummary } from '@/lib/questions/list';
+import { siteGlance } from '@/lib/questions/site-glance';
+import type { UnitSystem } from '@/lib/hydraulics';
+import { STATE_WORDS } from '@/components/questions/state-words';
+import { StateDrop } from '@/components/questions/StateDrop';
 
 const dateFmt = new Intl.DateTimeFormat('en', { day: 'numeric', month: 'short', year: 'numeric', timeZone: 'UTC' });
 
-export function QuestionList({ items }: { items: QuestionSummary[] }) {
-  if (items.length === 0) return <p className="cw-muted">No questions yet.</p>;
+function StateLine({ id, state }: { id: number; state: QuestionState }) {
+  if (state.kind === 'fixed') {
+    return (
+      <p className="flex items-start gap-1.5 text-sm text-moss-700 dark:text-moss-300" data-state="fixed">
+        <StateDrop kind="fixed" className="mt-0.5" />
+        <span>
+          <span className="font-semibold">{STATE_WORDS.fixed}</span>
+          {state.line ? (
+            <>
+              {' — '}
+              <Link href={`/questions/${id}#answer-${state.answerId}`} className="font-serif underline-offset-2">
+                {state.line}
+              </Link>
+            </>
+          ) : null}
+        </span>
+      </p>
+    );
+  }
   return (
-    <ol className="flex flex-col gap-3" data-testid="question-list">
-      {items.map((q) => (
-        <li key={q.id} className="cw-card">
-          <div className="flex flex-wrap items-baseline justify-between gap-2">
-            <h3 className="font-serif text-lg font-semibold leading-snug">
-              <Link href={`/questions/${q.id}`} className="no-underline hover:underline">
-                {q.title}
-              </Link>
-            </h3>
-            <span className="cw-num flex-none text-sm">
-              {q.fixed ? (
-                <span className="rounded bg-moss px-2 py-0.5 font-semibold text-limestone-50">fixed it</span>
-              ) : (
-                <span className="cw-muted">
-                  {q.answerCount} {q.answerCount === 1 ? 'answer' : 'answers'}
-                </span>
-              )}
-            </span>
-          </div>
-          <p className="cw-muted mt-1 font-serif text-sm">{q.excerpt}</p>
-          <div className="mt-2 flex flex-wrap items-center gap-2 text-xs">
-            {q.tags.map((t) => (
-              <Link
-                key={t.slug}
-                href={`/tags/${t.slug}`}
-                className="rounded-full border border-creek-300 px-2 py-0.5 no-underline dark:border-creek-500"
+    <p
+      className={`flex items-center gap-1.5 text-sm ${state.kind === 'waiting' ? 'text-clay-600 dark:text-clay-300' : 'text-creek-500 dark:text-creek-200'}`}
+      data-state={state.kind}
+    >
+      <StateDrop kind={state.kind} />
+      <span>{STATE_WORDS[state.kind]}</span>
+    </p>
+  );
+}
+
+/**
+ * Questions as builders scan them: the site's numbers in the reader's units next to
+ * the title, where the question stands in our words, then who asked and where it is
+ * filed. Questions without a site sheet show the start of their text instead.
+ */
+export function QuestionList({ items, units }: { items: QuestionSummary[]; units: UnitSystem }) {
+  if (items.length === 0) return <p className="cw-muted">No questions here yet.</p>;
+  return (
+    <ol className="flex flex-col" data-testid="question-list">
+      {items.map((q) => {
+        const glance = siteGlance(q.siteSheet, units);
+        return (
+          <li
+            key={q.id}
+            data-question={q.id}
+            className="grid gap-x-5 gap-y-2 border-t border-limestone-300 py-4 first:border-t-0 sm:grid-cols-[15rem_1fr] sm:grid-rows-[auto_1fr] dark:border-creek-700"
+          >
+            <div className="flex flex-col gap-1.5 sm:col-start-2 sm:row-start-1">
+              <h3 className="font-serif text-lg font-semibold leading-snug">
+                <Link href={`/questions/${q.id}`} className="no-underline hover:underline">
+                  {q.title}
+                </Link>
+              </h3>
+              <StateLine id={q.id} state={q.state} />
+              {!glance ? <p className="cw-muted line-clamp-2 font-serif text-sm">{q.excerpt}</p> : null}
+            </div>
+            {glance ? (
+              <div
+                className="self-start rounded-md bg-creek-50 px-3 py-2 text-sm sm:col-start-1 sm:row-span-2 sm:row-start-1 dark:bg-creek-800"
+                data-testid="site-glance"
               >
-                {t.name}
-              </Link>
-            ))}
-            <span className="cw-muted ml-auto">
-              {q.author.displayName} · <time dateTime={q.createdAt}>{dateFmt.format(new Date(q.createdAt))}</time>
-            </span>
-          </div>
-        </li>
-      ))}
+                <dl className="cw-num flex flex-wrap gap-x-4 gap-y-0.5 font-sans sm:grid sm:grid-cols-[auto_1fr] sm:gap-x-3">
+                  {glance.numbers.map((n) => (
+                    <div key={n.key} className="flex gap-1.5 sm:contents" data-glance={n.key}>
+                      <dt className="cw-muted">{n.label}</dt>
+                      <dd className="whitespace-nowrap font-semibold">{n.value}</dd>
+                    </div>
+                  ))}
+                </dl>
+                {glance.symptom ? (
+                  <p className="mt-1 text-xs text-signal-700 dark:text-signal-200" data-glance="symptom">
+                    {glance.symptom}
+                  </p>
+                ) : null}
+              </div>
+            ) : (
+              <p className="cw-muted hidden text-xs italic sm:col-start-1 sm:row-span-2 sm:row-start-1 sm:block">
+                no site sheet
+              </p>
+            )}
+            <p className="cw-muted self-start text-xs sm:col-start-2 sm:row-start-2">
+              asked by {q.author.displayName} on{' '}
+              <time dateTime={q.createdAt}>{dateFmt.format(new Date(q.createdAt))}</time>
+              {q.tags.length ? (
+                <>
+                  {' · filed under '}
+                  {q.tags.map((t, i) => (
+                    <span key={t.slug}>
+                      {i ? ', ' : ''}
+                      <Link href={`/tags/${t.slug}`} className="cw-link">
+                        {t.name}
+                      </Link>
+                    </span>
+                  ))}
+                </>
+              ) : null}
+            </p>
+          </li>
+        );
+      })}
     </ol>
   );
 }

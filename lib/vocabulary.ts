@@ -7,6 +7,13 @@
  * components/moderation/words.ts); these are the stored values.
  */
 
+/**
+ * Where a question stands, derived from its answers and the asker's choice: nobody
+ * has answered yet, answers are coming in, or the asker chose what fixed it.
+ */
+export const QUESTION_STATES = ['waiting', 'worked-on', 'fixed'] as const;
+export type QuestionStateKind = (typeof QUESTION_STATES)[number];
+
 /** Posts that have text, revisions and helpful marks. */
 export const POST_TYPES = ['question', 'answer', 'reply'] as const;
 export type PostType = (typeof POST_TYPES)[number];

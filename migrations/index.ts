@@ -10,6 +10,7 @@ import * as mail from './008-mail';
 import * as listIndexes from './009-list-indexes';
 import * as rateLimits from './010-rate-limits';
 import * as sessionVersion from './011-session-version';
+import * as whatFixedIt from './012-what-fixed-it';
 
 type Step = (params: { context: QueryInterface }) => Promise<void>;
 
@@ -29,4 +30,5 @@ export const migrations: { name: string; up: Step; down: Step }[] = [
   { name: '009-list-indexes', ...listIndexes },
   { name: '010-rate-limits', ...rateLimits },
   { name: '011-session-version', ...sessionVersion },
+  { name: '012-what-fixed-it', ...whatFixedIt },
 ];

@@ -20,6 +20,8 @@ export class Question extends Model<InferAttributes<Question>, InferCreationAttr
   /** Denormalised count so lists need no join; kept in step by the code that adds answers. */
   declare answerCount: CreationOptional<number>;
   declare fixedAnswerId: number | null;
+  /** the asker's one line saying what fixed it, saved with fixedAnswerId */
+  declare whatFixedIt: CreationOptional<string | null>;
   /** the site sheet as the asker typed it (stall-check form fields with their units) */
   declare siteSheet: CreationOptional<Record<string, string> | null>;
   declare helpfulCount: CreationOptional<number>;
@@ -45,6 +47,7 @@ export class Question extends Model<InferAttributes<Question>, InferCreationAttr
         body: { type: DataTypes.TEXT('medium'), allowNull: false },
         answerCount: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false, defaultValue: 0 },
         fixedAnswerId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: true },
+        whatFixedIt: { type: DataTypes.STRING(140), allowNull: true },
         siteSheet: { type: DataTypes.JSON, allowNull: true },
         helpfulCount: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false, defaultValue: 0 },
         guideSlug: { type: DataTypes.STRING(80), allowNull: true },

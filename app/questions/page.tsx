@@ -5,6 +5,8 @@ import Link from 'next/link';
 import { listQuestions, type ListFilter } from '@/lib/questions/list';
 import { currentUserInPage } from '@/lib/auth/session';
 import { QuestionList, Pager } from '@/components/QuestionList';
+import { STATE_WORDS } from '@/components/questions/state-words';
+import { readUnitPreference } from '@/lib/units/server';
 
 export const metadata: Metadata = {
   title: 'Questions',
@@ -32,40 +34,49 @@ export default async function QuestionsPage({
         : show === 'followed' && viewer
           ? { kind: 'followed', userId: viewer.id }
           : { kind: 'newest' };
-  const data = await listQuestions(parsed.data, filter);
+  const [data, units] = await Promise.all([listQuestions(parsed.data, filter), readUnitPreference()]);
   if (parsed.data.page > data.totalPages) notFound();
+
+  const choices: [string, string][] = [
+    ['newest', 'all questions'],
+    ['unanswered', STATE_WORDS.waiting],
+    ...(signedIn
+      ? ([
+          ['mine', 'the ones I asked'],
+          ['followed', 'the ones I follow'],
+        ] as [string, string][])
+      : []),
+  ];
 
   return (
     <div>
-      <div className="mb-4 flex flex-wrap items-baseline justify-between gap-2">
-        <h1 className="font-serif text-3xl font-semibold">Questions</h1>
-        <p className="cw-muted cw-num text-sm">{data.total} questions, newest first</p>
-        <Link href="/questions/ask" className="cw-button">
-          Ask a question
-        </Link>
-      </div>
-      <nav aria-label="Which questions" className="mb-4 flex flex-wrap gap-3 text-sm">
-        {[
-          ['newest', 'Newest'],
-          ['unanswered', 'Unanswered'],
-          ...(signedIn
-            ? [
-                ['mine', 'My questions'],
-                ['followed', 'Followed'],
-              ]
-            : []),
-        ].map(([k, label]) => (
-          <Link
-            key={k}
-            href={k === 'newest' ? '/questions' : `/questions?show=${k}`}
-            aria-current={show === k ? 'page' : undefined}
-            className={show === k ? 'font-semibold' : 'cw-link'}
-          >
-            {label}
-          </Link>
+      <h1 className="font-serif text-3xl font-semibold">Questions</h1>
+      <p className="cw-prose mt-2">
+        Builders’ questions with their site’s numbers, and the answers that worked them out. Stuck at your own water?{' '}
+        <Link href="/questions/ask" className="cw-link">
+          Ask the builders
+        </Link>{' '}
+        — bring your fall, lift and flow.
+      </p>
+      <nav aria-label="Which questions" className="mt-4 mb-2 text-sm">
+        <span className="cw-muted">Show: </span>
+        {choices.map(([k, label], i) => (
+          <span key={k}>
+            {i ? <span className="cw-muted"> · </span> : null}
+            {show === k ? (
+              <span aria-current="page" className="font-semibold">
+                {label}
+              </span>
+            ) : (
+              <Link href={k === 'newest' ? '/questions' : `/questions?show=${k}`} className="cw-link">
+                {label}
+              </Link>
+            )}
+          </span>
         ))}
       </nav>
-      <QuestionList items={data.items} />
+      <p className="cw-muted cw-num mb-2 text-sm">{data.total} questions, newest first</p>
+      <QuestionList items={data.items} units={units} />
       <Pager
         page={data.page}
         totalPages={data.totalPages}

@@ -14,6 +14,8 @@ import { AnswerComposer, ReplyComposer } from './AnswerComposer';
 import { getJson, sendJson } from '@/components/forms/api';
 import { FlagButton } from '@/components/moderation/FlagButton';
 import { PostMarks } from '@/components/moderation/PostMarks';
+import { ChooseFix } from './FixedIt';
+import { StateDrop } from './StateDrop';
 
 type Viewer = { id: number; handle: string; role: 'member' | 'expert' | 'moderator' | 'admin' } | null;
 
@@ -177,13 +179,19 @@ function Answer({
 }) {
   return (
     <article
-      className={`cw-card flex flex-col gap-3 ${a.fixed ? 'border-2 border-moss' : ''}`}
+      className="cw-card flex flex-col gap-3"
       data-answer={a.id}
+      data-fixed={a.fixed || undefined}
       id={`answer-${a.id}`}
       aria-label={`Answer by ${a.author.displayName}`}
     >
       {a.fixed ? (
-        <p className="self-start rounded bg-moss px-2 py-0.5 text-xs font-semibold text-limestone-50">fixed it</p>
+        <p className="-mx-4 -mt-4 flex items-center gap-2 rounded-t-lg bg-moss-100 px-4 py-1.5 text-sm text-moss-700 dark:bg-moss-700 dark:text-moss-100">
+          <StateDrop kind="fixed" />
+          <span>
+            <span className="font-semibold">What fixed it</span> · chosen by {t.author.displayName}, who asked
+          </span>
+        </p>
       ) : null}
       <PostMarks post={a} kind="answer" />
       <MemberText>{a.body}</MemberText>
@@ -220,16 +228,7 @@ function Answer({
           }
         />
         {isAsker ? (
-          <button
-            type="button"
-            className="rounded-full border border-moss px-3 py-0.5 text-xs font-semibold text-moss-600 hover:bg-moss hover:text-limestone-50 dark:text-moss-300"
-            onClick={async () => {
-              await sendJson(`/api/questions/${t.id}/fixed`, 'PUT', { answerId: a.fixed ? null : a.id });
-              onChange();
-            }}
-          >
-            {a.fixed ? 'Not the fix after all' : 'This fixed it'}
-          </button>
+          <ChooseFix questionId={t.id} answerId={a.id} fixed={a.fixed} line={t.whatFixedIt} onChange={onChange} />
         ) : null}
         {can(viewer, 'answer.edit', viewer && a.author.handle === viewer.handle ? viewer.id : -1) ? (
           <EditBody url={`/api/answers/${a.id}`} initial={a.body} onSaved={onChange} />

@@ -160,7 +160,7 @@ export async function notifyReply(
 /** The asker chose your answer as the one that fixed it. */
 export async function notifyFixed(
   transaction: Transaction,
-  f: { questionId: number; answerId: number; askerId: number },
+  f: { questionId: number; answerId: number; askerId: number; whatFixedIt: string },
 ) {
   const { Question, Answer, User } = initModels();
   const [q, a] = await Promise.all([
@@ -182,6 +182,7 @@ export async function notifyFixed(
       heading: 'Your answer fixed it',
       paragraphs: [
         `${by} marked your answer to “${q.title}” as the one that fixed it. It now shows first in the thread, for the next builder with the same trouble.`,
+        `What fixed it, in ${by}’s words: “${f.whatFixedIt}”`,
       ],
       action: { label: 'Open the thread', url: threadUrl(q.id, `answer-${a.id}`) },
       reason: 'You get this because you answered this question on Clackwater.',

@@ -8,9 +8,30 @@ export interface QuestionSummary {
   excerpt: string;
   answerCount: number;
   fixed: boolean;
+  /** where the question stands, in our words (components/questions/state-words.ts) */
+  state: QuestionState;
+  /** the site sheet as the asker typed it; the list shows it in the reader's units */
+  siteSheet: Record<string, string> | null;
   author: { handle: string; displayName: string };
   tags: { slug: string; name: string }[];
   createdAt: string;
+}
+
+/**
+ * Where a question stands: nobody has answered yet, answers are coming in, or the
+ * asker chose the answer that fixed it (with their line, and the answer to link to).
+ */
+export type QuestionState =
+  { kind: 'waiting' } | { kind: 'worked-on' } | { kind: 'fixed'; line: string | null; answerId: number };
+
+export function questionState(q: { answerCount: number; fixedAnswerId: number | null; whatFixedIt: string | null }) {
+  const state: QuestionState =
+    q.fixedAnswerId !== null
+      ? { kind: 'fixed', line: q.whatFixedIt, answerId: q.fixedAnswerId }
+      : q.answerCount === 0
+        ? { kind: 'waiting' }
+        : { kind: 'worked-on' };
+  return state;
 }
 
 export interface QuestionPage {
@@ -121,6 +142,8 @@ export async function listQuestions(
       excerpt: q.body.length > EXCERPT ? `${q.body.slice(0, EXCERPT).trimEnd()}…` : q.body,
       answerCount: q.answerCount,
       fixed: q.fixedAnswerId !== null,
+      state: questionState(q),
+      siteSheet: (q.siteSheet as Record<string, string> | null) ?? null,
       author: { handle: q.author?.handle ?? 'unknown', displayName: q.author?.displayName ?? 'unknown' },
       tags: (q.tags ?? []).map((t) => ({ slug: t.slug, name: t.name })),
       createdAt: q.createdAt.toISOString(),

@@ -269,24 +269,40 @@ export async function markHelpful(user: SessionUser, postType: PostType, postId:
   return out.count;
 }
 
-/** The asker's choice of the answer that fixed it (or none). */
-export async function chooseFixed(user: SessionUser, questionId: number, answerId: number | null) {
+/**
+ * The asker's choice of the answer that fixed it, with their one line saying what the
+ * fix was (or none: `null` takes the choice back and clears the line). The mark, the
+ * line and the mail to the answer's author are one transaction.
+ */
+export async function chooseFixed(
+  user: SessionUser,
+  questionId: number,
+  choice: { answerId: number; whatFixedIt: string } | null,
+) {
   const { Answer } = initModels();
   const write = getSequelize().transaction(async (transaction) => {
     const q = await writableQuestion(user, questionId, transaction);
     if (!can(user, 'question.markFixed', q.authorId)) throw new ForumError(403, REFUSAL['question.markFixed']);
-    if (answerId !== null) {
+    if (choice !== null) {
       namedInBody(
         user,
-        await Answer.findOne({ where: { id: answerId, questionId }, transaction }),
+        await Answer.findOne({ where: { id: choice.answerId, questionId }, transaction }),
         'answerId',
         'answerId: no such answer on this question',
       );
     }
     const before = q.fixedAnswerId;
-    await q.update({ fixedAnswerId: answerId }, { transaction });
-    if (answerId !== null && answerId !== before)
-      await notifyFixed(transaction, { questionId, answerId, askerId: user.id });
+    await q.update(
+      { fixedAnswerId: choice?.answerId ?? null, whatFixedIt: choice?.whatFixedIt ?? null },
+      { transaction },
+    );
+    if (choice !== null && choice.answerId !== before)
+      await notifyFixed(transaction, {
+        questionId,
+        answerId: choice.answerId,
+        askerId: user.id,
+        whatFixedIt: choice.whatFixedIt,
+      });
     return q;
   });
   return thenIndex(write, (q) => q.id);

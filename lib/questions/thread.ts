@@ -61,6 +61,8 @@ export interface ThreadView {
   helpfulCount: number;
   markedByViewer: boolean;
   fixedAnswerId: number | null;
+  /** the asker's one line saying what fixed it (null when nothing is chosen, or chosen before the line existed) */
+  whatFixedIt: string | null;
   followedByViewer: boolean;
   photos: PhotoView[];
   answers: AnswerView[];
@@ -217,6 +219,7 @@ export async function loadThread(id: number, viewer: Actor | null): Promise<Thre
     helpfulCount: q.helpfulCount,
     markedByViewer: marked.has(`question:${q.id}`),
     fixedAnswerId: q.fixedAnswerId,
+    whatFixedIt: q.fixedAnswerId === null ? null : (q.whatFixedIt ?? null),
     followedByViewer: follow !== null,
     photos: photoView((q as unknown as { photos?: never[] }).photos),
     answers: answerViews,

@@ -108,3 +108,28 @@ export const helpfulSchema = z.object({
   postType: z.enum(POST_TYPES),
   postId: z.number({ error: 'postId must be a number' }).int().positive(),
 });
+
+/** "What fixed it": the asker's one line, saved with the answer they chose. */
+export const WHAT_FIXED_IT_MIN = 10;
+export const WHAT_FIXED_IT_MAX = 140;
+export const whatFixedItLine = z
+  .string({ error: 'whatFixedIt: say in one line what fixed it' })
+  .trim()
+  .min(WHAT_FIXED_IT_MIN, `whatFixedIt must be at least ${WHAT_FIXED_IT_MIN} characters`)
+  .max(WHAT_FIXED_IT_MAX, `whatFixedIt must be at most ${WHAT_FIXED_IT_MAX} characters`)
+  .refine((s) => !/[\r\n]/.test(s), 'whatFixedIt must be one line');
+
+/**
+ * PUT /api/questions/:id/fixed. Choosing an answer needs the line; taking the choice
+ * back (answerId null) needs none and clears it.
+ */
+export const fixedItSchema = z
+  .object({
+    answerId: z.number({ error: 'answerId must be a number or null' }).int().positive().nullable(),
+    whatFixedIt: whatFixedItLine.optional(),
+  })
+  .superRefine((v, ctx) => {
+    if (v.answerId !== null && v.whatFixedIt === undefined)
+      ctx.addIssue({ code: 'custom', path: ['whatFixedIt'], message: 'whatFixedIt: say in one line what fixed it' });
+  });
+export type FixedIt = z.input<typeof fixedItSchema>;

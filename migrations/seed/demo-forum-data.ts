@@ -1,6 +1,7 @@
 /**
  * More invented threads for the demo forum, across the whole job. Site sheets are
- * as a member would type them; `fixed` names the answer (by index) that fixed it.
+ * as a member would type them; `fixed` names the answer (by index) that fixed it
+ * and the asker's one line saying what fixed it.
  */
 type DemoThread = {
   author: string;
@@ -11,7 +12,8 @@ type DemoThread = {
   siteSheet?: Record<string, string>;
   photo?: { alt: string; caption: string };
   answers: { author: string; body: string; hoursLater: number; calculation?: string; helpfulFrom?: string[] }[];
-  fixed?: number;
+  /** the answer (by index) that fixed it, and the asker's line saying what the fix was */
+  fixed?: { answer: number; line: string };
   replies?: { author: string; body: string; toAnswer?: number; hoursLater: number }[];
 };
 
@@ -52,7 +54,7 @@ export const demoThreads: DemoThread[] = [
         body: 'Ours went from one to two and nearly doubled, but both drive pipes are dead straight.',
       },
     ],
-    fixed: 0,
+    fixed: { answer: 0, line: 'Moved the pump a yard upstream so the second drive pipe runs straight, no elbow' },
     replies: [
       {
         author: 'ferncombe_tamsin',
@@ -76,7 +78,7 @@ export const demoThreads: DemoThread[] = [
         helpfulFrom: ['sorrel_cabin'],
       },
     ],
-    fixed: 0,
+    fixed: { answer: 0, line: 'Divided the upper pump’s drive flow by one lower pump’s delivery and rounded up' },
   },
   {
     author: 'highcrag_shepherd',
@@ -107,7 +109,7 @@ export const demoThreads: DemoThread[] = [
         helpfulFrom: ['highcrag_shepherd', 'ferncombe_tamsin'],
       },
     ],
-    fixed: 0,
+    fixed: { answer: 0, line: 'Shortened the waste valve stroke and swapped the tee for a pressure-rated one' },
   },
   {
     author: 'ferncombe_tamsin',
@@ -150,7 +152,7 @@ export const demoThreads: DemoThread[] = [
         helpfulFrom: ['sorrel_cabin'],
       },
     ],
-    fixed: 0,
+    fixed: { answer: 0, line: 'Cleaned grit off the delivery valve seat and fitted a new rubber flap' },
   },
   {
     author: 'highcrag_shepherd',
@@ -166,7 +168,10 @@ export const demoThreads: DemoThread[] = [
         helpfulFrom: ['highcrag_shepherd'],
       },
     ],
-    fixed: 0,
+    fixed: {
+      answer: 0,
+      line: 'Float valve moved to a trough fed from the overflowing tank; the pump never dead-heads',
+    },
   },
   {
     author: 'ferncombe_tamsin',
@@ -196,7 +201,7 @@ export const demoThreads: DemoThread[] = [
         helpfulFrom: ['sorrel_cabin'],
       },
     ],
-    fixed: 0,
+    fixed: { answer: 0, line: 'Rigid pipe for the drive, the garden hose kept for the delivery only' },
   },
   {
     author: 'highcrag_shepherd',
@@ -257,7 +262,7 @@ export const demoThreads: DemoThread[] = [
         body: 'At a litre a minute almost anything will carry it; use at least the size of the delivery pipe so it never backs up, and lead it away from the tank base.',
       },
     ],
-    fixed: 0,
+    fixed: { answer: 0, line: 'Overflow pipe the same size as the delivery, led away from the tank base' },
   },
   {
     author: 'ferncombe_tamsin',
@@ -283,7 +288,7 @@ export const demoThreads: DemoThread[] = [
         helpfulFrom: ['ferncombe_tamsin'],
       },
     ],
-    fixed: 0,
+    fixed: { answer: 0, line: 'Raised the pump so the waste valve outlet sits clear of the water' },
   },
   {
     author: 'sorrel_cabin',
@@ -337,7 +342,7 @@ export const demoThreads: DemoThread[] = [
         body: 'Most likely an exposed stretch of the delivery line froze. Thaw it gently and check for splits; insulate or bury that run.',
       },
     ],
-    fixed: 0,
+    fixed: { answer: 0, line: 'Thawed the exposed stretch of delivery line, then buried and insulated it' },
   },
   {
     author: 'sorrel_cabin',
@@ -407,7 +412,7 @@ export const demoThreads: DemoThread[] = [
         helpfulFrom: ['highcrag_shepherd'],
       },
     ],
-    fixed: 0,
+    fixed: { answer: 0, line: 'Lowered the intake box 14 inches below the dry-week water level' },
     replies: [
       {
         author: 'highcrag_shepherd',

@@ -193,7 +193,8 @@ export async function seedDemo(sequelize: Sequelize, now = new Date()): Promise<
             { transaction },
           );
       }
-      if (t.fixed !== undefined) await q.update({ fixedAnswerId: answerIds[t.fixed] }, { transaction });
+      if (t.fixed !== undefined)
+        await q.update({ fixedAnswerId: answerIds[t.fixed.answer], whatFixedIt: t.fixed.line }, { transaction });
       for (const r of t.replies ?? []) {
         const at = new Date(createdAt.getTime() + r.hoursLater * 3_600_000);
         const answerId = r.toAnswer !== undefined ? answerIds[r.toAnswer] : null;

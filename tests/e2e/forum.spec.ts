@@ -80,15 +80,20 @@ test.describe.serial('the forum', () => {
     await signIn(askerPage, 'cabin@sorrelcreek.example');
     await askerPage.goto(questionUrl);
     await settled(askerPage);
-    // the mark shows at once (optimistic): wait for the server to save it before closing the context
+    // wait for the server to save the choice and its line before closing the context
     const saved = askerPage.waitForResponse((r) => r.request().method() !== 'GET' && r.url().endsWith('/fixed'));
     await askerPage
       .locator('[data-answer]')
       .filter({ hasText: 'Twelve feet is short' })
       .getByRole('button', { name: 'This fixed it' })
       .click();
+    await askerPage
+      .getByLabel('What fixed it, in one line')
+      .fill('A drive pipe long enough for the fall: 30 ft, not 12');
+    await askerPage.getByRole('button', { name: 'Save what fixed it' }).click();
     expect((await saved).ok()).toBe(true);
-    await expect(askerPage.locator('[data-answer]').first()).toContainText('fixed it');
+    await expect(askerPage.locator('[data-answer]').first()).toContainText('What fixed it · chosen by');
+    await expect(askerPage.getByRole('region', { name: 'What fixed it' })).toContainText('30 ft, not 12');
     await asker.close();
 
     // A visitor tries the worked calculation with their own numbers.

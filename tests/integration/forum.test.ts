@@ -237,7 +237,7 @@ describe('questions, answers, replies, marks and fixed it (real MariaDB)', () =>
           'PUT',
           `/api/questions/${qid}/fixed`,
           'ironwheel_builds',
-          { answerId: second.body.id },
+          { answerId: second.body.id, whatFixedIt: 'Cleaned grit off the delivery valve seat' },
           { id: String(qid) },
         )
       ).status,
@@ -249,7 +249,7 @@ describe('questions, answers, replies, marks and fixed it (real MariaDB)', () =>
           'PUT',
           `/api/questions/${qid}/fixed`,
           'ferncombe_tamsin',
-          { answerId: second.body.id },
+          { answerId: second.body.id, whatFixedIt: 'Cleaned grit off the delivery valve seat' },
           { id: String(qid) },
         )
       ).status,
@@ -265,7 +265,7 @@ describe('questions, answers, replies, marks and fixed it (real MariaDB)', () =>
       'PUT',
       `/api/questions/${qid}/fixed`,
       'ferncombe_tamsin',
-      { answerId: 1 },
+      { answerId: 1, whatFixedIt: 'Cleaned grit off the delivery valve seat' },
       { id: String(qid) },
     );
     expect(wrongThread.status).toBe(422);

@@ -69,7 +69,7 @@ const SAMPLE: Record<string, Record<string, unknown>> = {
   },
   '/api/questions/[id]/answers': { body: 'Drain the drive pipe and the pump body before the first frost.' },
   '/api/questions/[id]/replies': { body: 'Same here on our creek.', answerId: 1 },
-  '/api/questions/[id]/fixed': { answerId: 1 },
+  '/api/questions/[id]/fixed': { answerId: 1, whatFixedIt: 'Lowered the intake below the dry-week level' },
   '/api/answers/[id]': { body: 'We run two side by side; size the line for both.' },
   '/api/replies/[id]': { body: 'Thanks, that did it.' },
   '/api/helpful': { postType: 'question', postId: 1 },

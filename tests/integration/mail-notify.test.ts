@@ -94,7 +94,9 @@ describe('notifications are queued with their event, once, and only when wanted'
             'PUT',
             `/api/questions/${qid}/fixed`,
             'ferncombe_tamsin',
-            { answerId },
+            answerId === null
+              ? { answerId }
+              : { answerId, whatFixedIt: 'Drained the air chamber and fitted a snifter' },
             { id: String(qid) },
           )
         ).status,

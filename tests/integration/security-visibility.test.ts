@@ -329,12 +329,28 @@ describe('hidden and deleted posts take no answers, replies, marks, follows or f
   });
 
   it('fixed it: not on a hidden question, and never a hidden or deleted answer', async () => {
+    const LINE = 'Cleared the drive pipe intake screen';
     expect(
-      (await call(fixedPUT, 'PUT', `/api/questions/${hiddenQ}/fixed`, ASKER, { answerId: answerInHiddenQ }, p(hiddenQ)))
-        .status,
+      (
+        await call(
+          fixedPUT,
+          'PUT',
+          `/api/questions/${hiddenQ}/fixed`,
+          ASKER,
+          { answerId: answerInHiddenQ, whatFixedIt: LINE },
+          p(hiddenQ),
+        )
+      ).status,
     ).toBe(404);
     for (const answerId of [hiddenAnswer, deletedAnswer]) {
-      const res = await call(fixedPUT, 'PUT', `/api/questions/${open}/fixed`, ASKER, { answerId }, p(open));
+      const res = await call(
+        fixedPUT,
+        'PUT',
+        `/api/questions/${open}/fixed`,
+        ASKER,
+        { answerId, whatFixedIt: LINE },
+        p(open),
+      );
       expect(res.status).toBe(422);
       expect(res.body.error.field).toBe('answerId');
     }

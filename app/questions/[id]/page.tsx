@@ -8,6 +8,7 @@ import { ForumError } from '@/lib/questions/errors';
 import { idParam } from '@/lib/http/guard';
 import { SiteSheetCard } from '@/components/questions/SiteSheetCard';
 import { Thread } from '@/components/questions/Thread';
+import { WhatFixedIt } from '@/components/questions/FixedIt';
 import { Caution } from '@/components/Caution';
 
 type Params = Promise<{ id: string }>;
@@ -64,9 +65,7 @@ export default async function QuestionPage({ params }: { params: Params }) {
         ))}
       </nav>
       <h1 className="font-serif text-3xl font-semibold leading-tight">{thread.title}</h1>
-      {thread.fixedAnswerId ? (
-        <p className="self-start rounded bg-moss px-2 py-0.5 text-sm font-semibold text-limestone-50">fixed it</p>
-      ) : null}
+      <WhatFixedIt initial={thread} />
       <SiteSheetCard sheet={thread.siteSheet} fieldLogEntryId={thread.fieldLogEntryId} />
       <Thread initial={thread} />
       <Caution title="Advice from members">
