@@ -54,7 +54,9 @@ export function BarRows({
     true,
   );
   const left = 2;
-  const right = 14;
+  // the last tick's label is centred on the axis end, so half of it hangs past the bars
+  const first = horizontalTicks(lo, hi, width - left - 14, FONT);
+  const right = Math.max(14, Math.ceil(textWidth(first.labels.at(-1) ?? '', FONT) / 2) + 2);
   const plotW = Math.max(40, width - left - right);
   const ticks = horizontalTicks(lo, hi, plotW, FONT);
   const sx = (v: number) => left + ((v - ticks.min) / (ticks.max - ticks.min || 1)) * plotW;

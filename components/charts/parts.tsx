@@ -10,7 +10,7 @@ export interface LegendItem {
 /** The key to a chart's series, in HTML so it wraps at the width of a phone. */
 export function Legend({ items }: { items: LegendItem[] }) {
   return (
-    <ul className="grid grid-cols-1 gap-x-4 gap-y-1 font-sans text-xs sm:grid-cols-2" aria-label="Key">
+    <ul className="grid grid-cols-2 gap-x-3 gap-y-1 font-sans text-xs sm:flex sm:flex-wrap sm:gap-x-5" aria-label="Key">
       {items.map((item) => (
         <li key={item.label} className="flex items-center gap-2">
           <svg width={22} height={12} aria-hidden="true" className="shrink-0">

@@ -24,7 +24,7 @@ const PUBLISHED: (XYLine & { citation: string; note?: string })[] = EFFICIENCY_S
   (src) => src.id === 'pocketbook-table' || src.id === 'water-for-the-world-homemade',
 ).map((src) => ({
   id: src.id,
-  label: src.id === 'pocketbook-table' ? 'Pocketbook table' : 'Water for the World, home-built',
+  label: src.id === 'pocketbook-table' ? 'Pocketbook table' : 'Water for the World',
   tone: src.id === 'pocketbook-table' ? 'tableA' : 'tableB',
   dash: src.id === 'pocketbook-table' ? undefined : '8 3',
   markers: true,
@@ -41,8 +41,9 @@ const LINES: XYLine[] = [
     dash: '5 4',
     points: band.map((b) => ({ x: b.x, y: b.typical })),
   },
-  { id: 'commercial', label: 'commercial typical', tone: 'commercial', dash: '2 3', points: commercial },
   ...PUBLISHED,
+  // drawn last: where it follows the Pocketbook table its dots still show on top
+  { id: 'commercial', label: 'commercial typical', tone: 'commercial', dash: '2 3', points: commercial },
 ];
 
 const two = (v: number) => v.toFixed(2);

@@ -128,3 +128,17 @@ describe('on the calculator card', () => {
     expect(screen.getByRole('img', { name: /^yours: / })).toBeTruthy();
   });
 });
+
+describe('tick labels stay inside the chart', () => {
+  it('the last tick of a bar chart, centred on the axis end, fits in the svg', () => {
+    const bars = [
+      { name: 'steel', value: 1540 },
+      { name: 'PVC', value: 731, highlight: true },
+    ];
+    const { container } = render(<BarChartCard title="Surge" axis={{ name: 'surge', unit: 'kPa' }} bars={bars} />);
+    const width = num(container.querySelector('svg')!, 'width');
+    const last = [...container.querySelectorAll('[data-tick="x"]')].at(-1)!;
+    // half the label's estimated width (0.62 em a character, as lib/charts/layout.ts estimates) right of its x
+    expect(num(last, 'x') + (last.textContent!.length * 12 * 0.62) / 2).toBeLessThanOrEqual(width);
+  });
+});
