@@ -89,7 +89,7 @@ export function EfficiencyChart({ points }: { points: ChartPoint[] }) {
       dots={dots}
       legend={legend}
       table={{
-        caption: 'Field log entries on the chart',
+        caption: 'Measurements on the chart: site, lift ratio and efficiency',
         columns: ['Site', 'Lift ratio h/H', "Efficiency (D'Aubuisson)"],
         rows: points.map((p) => ({ key: p.id, cells: [p.mine ? `${p.site} (yours)` : p.site, one(p.x), two(p.y)] })),
       }}
