@@ -8,7 +8,8 @@ import { fieldLogFilterSchema, PIPE_MATERIAL_CHOICES, type FieldLogFilter } from
 import { filteredEntries, sortAndPage, type EntryView } from '@/lib/field-log/store';
 import { Pager } from '@/components/QuestionList';
 import { EfficiencyChart } from '@/components/field-log/EfficiencyChart';
-import { material, pumpsWords, shown, shownValue, size, unitOf } from '@/components/field-log/format';
+import { material, pumpsWords, shown, size } from '@/components/field-log/format';
+import { EntryCards } from '@/components/field-log/EntryCards';
 import { readUnitPreference } from '@/lib/units/server';
 import { inputClass, labelClass } from '@/components/forms/api';
 
@@ -19,13 +20,13 @@ export const metadata: Metadata = {
 };
 export const dynamic = 'force-dynamic';
 
-const columns = (flowUnit: string): { key: FieldLogFilter['sort'] | null; label: string }[] => [
+const columns: { key: FieldLogFilter['sort'] | null; label: string }[] = [
   { key: 'site', label: 'Site' },
   { key: 'testedOn', label: 'Tested' },
   { key: null, label: 'Pumps' },
   { key: null, label: 'Drive pipe' },
   { key: 'liftRatio', label: 'h/H' },
-  { key: 'delivered', label: `Delivered (${flowUnit})` },
+  { key: 'delivered', label: 'Delivered' },
   { key: 'efficiency', label: 'Efficiency' },
 ];
 
@@ -143,20 +144,26 @@ export default async function FieldLogPage({
           Efficiency against lift ratio
         </h2>
         <EfficiencyChart points={points} />
-        {viewerId !== null ? (
-          <p className="cw-muted font-sans text-xs">Your own entries are the larger dark points.</p>
-        ) : null}
       </section>
 
       <section aria-labelledby="table-heading">
         <h2 id="table-heading" className="mb-2 font-serif text-xl font-semibold">
           Every test
         </h2>
-        <div className="overflow-x-auto">
+        <EntryCards
+          entries={page.items}
+          viewerId={viewerId}
+          units={units}
+          sorts={columns.flatMap((c) => (c.key ? [{ key: c.key, label: c.label, href: sortHref(c.key) }] : []))}
+          sort={f.sort}
+          dir={f.dir}
+        />
+        {/* on a phone the cards above carry every column; the table returns where it fits */}
+        <div className="hidden overflow-x-auto sm:block">
           <table className="w-full border-collapse font-sans text-sm" aria-label="Field log entries">
             <thead>
               <tr className="border-b border-limestone-400 text-left dark:border-creek-500">
-                {columns(unitOf('flow', units)).map((c) => (
+                {columns.map((c) => (
                   <th
                     key={c.label}
                     scope="col"
@@ -190,7 +197,7 @@ export default async function FieldLogPage({
                     {shown('length', e.driveLengthM, units)} of {size(e.driveSize)} {material(e.driveMaterial)}
                   </td>
                   <td className="cw-num px-2 py-1">{e.performance.liftRatio.toFixed(1)}</td>
-                  <td className="cw-num px-2 py-1">{shownValue('flow', e.deliveredFlowM3s, units)}</td>
+                  <td className="cw-num px-2 py-1">{shown('flow', e.deliveredFlowM3s, units)}</td>
                   <td className="cw-num px-2 py-1">{e.performance.dAubuisson.toFixed(2)}</td>
                 </tr>
               ))}

@@ -8,21 +8,20 @@ test('the community page shows the demo entries on the chart and in the table', 
   await expect(page.getByRole('heading', { level: 1, name: 'Field log' })).toBeVisible();
   const chart = page.getByTestId('field-log-chart');
   await expect(chart.locator('[data-entry-id]')).toHaveCount(api.total);
-  await expect(page.getByRole('table', { name: 'Field log entries' }).locator('tbody tr')).toHaveCount(20);
+  // the entries' table, not the chart's own table of its points for screen readers
+  const entries = page.getByRole('table', { name: 'Field log entries', exact: true });
+  await expect(entries.locator('tbody tr')).toHaveCount(20);
   // sorting by efficiency, highest first, puts the API's best entry on top
   const best = (await (await request.get('/api/field-log?sort=efficiency&dir=desc&perPage=1')).json()).items[0];
-  await page
-    .getByRole('table', { name: 'Field log entries' })
-    .getByRole('link', { name: 'Efficiency', exact: true })
-    .click();
+  await entries.getByRole('link', { name: 'Efficiency', exact: true }).click();
   await expect(page).toHaveURL(/sort=efficiency/);
-  await expect(page.locator('tbody tr').first()).toHaveAttribute('data-entry-row', String(best.id));
+  await expect(entries.locator('tbody tr').first()).toHaveAttribute('data-entry-row', String(best.id));
   // the next page keeps the sort
   await page.getByRole('link', { name: 'Next →' }).click();
   await expect(page).toHaveURL(/sort=efficiency.*page=2|page=2.*sort=efficiency/);
   const second = (await (await request.get('/api/field-log?sort=efficiency&dir=desc&perPage=20&page=2')).json())
     .items[0];
-  await expect(page.locator('tbody tr').first()).toHaveAttribute('data-entry-row', String(second.id));
+  await expect(entries.locator('tbody tr').first()).toHaveAttribute('data-entry-row', String(second.id));
 });
 
 test('record a test with three bucket trials, see it on the chart, link it as the after of an earlier test and read the ratio', async ({
@@ -61,7 +60,13 @@ test('record a test with three bucket trials, see it on the chart, link it as th
   await expect(page.getByTestId('efficiency-d')).toHaveText('0.715');
 
   await page.goto('/field-log');
-  await expect(page.getByTestId('field-log-chart').locator(`[data-entry-id="${id}"]`)).toHaveCount(1);
+  const chart = page.getByTestId('field-log-chart');
+  await expect(chart.locator(`[data-entry-id="${id}"]`)).toHaveCount(1);
+  // the reader's newest entry carries its own label on the chart, and the key names the reader's points
+  await expect(chart.locator(`[data-chart-label="pinned-${id}"]`)).toHaveText(
+    /^yours, Ferncombe top garden: 0\.71 at h\/H 3\.0$/,
+  );
+  await expect(chart.getByRole('list', { name: 'Key' })).toContainText('your entries');
 
   await page.goto(`/field-log/${id}`);
   const linkForm = page.getByRole('form', { name: 'Link as the after of an earlier test' });
@@ -106,4 +111,44 @@ test('an entry opens the ask form with the site sheet filled from it', async ({ 
   // the demo entry's fall and lift as recorded (2.4 m and 12 m)
   await expect(page.getByLabel('Fall', { exact: true })).toHaveValue('2.4 m');
   await expect(page.getByLabel('Lift', { exact: true })).toHaveValue('12 m');
+});
+
+test('on a phone the chart fits, its points answer focus, and the entries are cards with their numbers in view', async ({
+  page,
+  baseURL,
+}) => {
+  await page.setViewportSize({ width: 390, height: 844 });
+  await page.context().addCookies([{ name: 'cw_units', value: 'metric', url: baseURL! }]);
+  await page.goto('/field-log');
+  const chart = page.getByTestId('field-log-chart');
+  const svg = chart.getByRole('group', { name: 'Field log: efficiency against lift ratio' });
+  // laid out at the box's own width once measured: nothing wider than the phone, so no sideways scrolling
+  const box = (await svg.boundingBox())!;
+  expect(box.x).toBeGreaterThanOrEqual(0);
+  expect(box.x + box.width).toBeLessThanOrEqual(390);
+  expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(390);
+  // ticks are round numbers (Heckbert 1990): the efficiency axis reads 0.0 to 1.0 in steps of 0.2
+  await expect(svg.locator('[data-tick="y"]')).toHaveText(['0.0', '0.2', '0.4', '0.6', '0.8', '1.0']);
+  // every axis title whole, inside the svg
+  for (const title of await svg.locator('[data-axis-title]').all()) {
+    const t = (await title.boundingBox())!;
+    expect(t.x).toBeGreaterThanOrEqual(box.x);
+    expect(t.x + t.width).toBeLessThanOrEqual(box.x + box.width + 0.5);
+  }
+  // a point reached by the keyboard shows its numbers beside it; its target is at least 24 px (WCAG 2.2 SC 2.5.8)
+  const point = svg.locator('a[data-entry-id]').first();
+  const target = (await point.boundingBox())!;
+  expect(Math.min(target.width, target.height)).toBeGreaterThanOrEqual(24);
+  await point.focus();
+  await expect(svg.locator('[data-chart-label="active"]')).toHaveText(/: \d\.\d\d at h\/H\s*\d+\.\d$/);
+
+  // the table gives way to cards that keep the delivery (in the reader's units), efficiency and h/H
+  await expect(page.getByRole('table', { name: 'Field log entries' })).toBeHidden();
+  const cards = page.getByRole('list', { name: 'Field log entries, as cards' }).getByRole('listitem');
+  await expect(cards).toHaveCount(20);
+  await expect(cards.first()).toContainText(/Delivered\s*[\d.,]+ L\/(min|h)/);
+  await expect(cards.first()).toContainText(/Efficiency\s*0\.\d\d/);
+  // the sort row keeps the table's sorts
+  await page.getByRole('navigation', { name: 'Sort the field log' }).getByRole('link', { name: 'Efficiency' }).click();
+  await expect(page).toHaveURL(/sort=efficiency/);
 });

@@ -1,61 +1,50 @@
 'use client';
 
-import { CartesianGrid, Line, LineChart, ReferenceDot, ResponsiveContainer, Tooltip, XAxis, YAxis } from 'recharts';
-import { palette } from '@/tailwind.config';
+import { XYChart } from '@/components/charts/XYChart';
+import { valueText } from '@/components/charts/XYChart';
 
 export interface LinePoint {
   x: number;
   y: number;
 }
 
-/** A small line chart of one curve, with an optional marked point (the reader's own case). */
+export interface ChartAxis {
+  /** What is measured, e.g. 'lift'. */
+  name: string;
+  /** The reader's unit for it, e.g. 'ft'. */
+  unit: string;
+}
+
+/** One curve from the engine, the reader's own case marked and named on it. */
 export default function LineChartCard({
   points,
-  xLabel,
-  yLabel,
+  x,
+  y,
   mark,
-  ariaLabel,
+  title,
 }: {
   points: LinePoint[];
-  xLabel: string;
-  yLabel: string;
+  x: ChartAxis;
+  y: ChartAxis;
   mark?: LinePoint;
-  ariaLabel: string;
+  title: string;
 }) {
-  const fmt = (v: number) => (Math.abs(v) >= 100 ? v.toFixed(0) : Math.abs(v) >= 10 ? v.toFixed(1) : v.toPrecision(2));
+  const at = (p: LinePoint) => `${valueText(p.y, y.unit)} at ${x.name} ${valueText(p.x, x.unit)}`;
   return (
-    <figure className="h-full w-full" aria-label={ariaLabel} role="img">
-      <ResponsiveContainer width="100%" height="100%">
-        <LineChart data={points} margin={{ top: 8, right: 12, bottom: 24, left: 8 }}>
-          <CartesianGrid stroke={palette.limestone[300]} strokeDasharray="3 3" />
-          <XAxis
-            dataKey="x"
-            type="number"
-            domain={['dataMin', 'dataMax']}
-            tickFormatter={fmt}
-            label={{ value: xLabel, position: 'insideBottom', offset: -12, fontSize: 12 }}
-            tick={{ fontSize: 11 }}
-          />
-          <YAxis
-            tickFormatter={fmt}
-            label={{ value: yLabel, angle: -90, position: 'insideLeft', fontSize: 12 }}
-            tick={{ fontSize: 11 }}
-            width={56}
-          />
-          <Tooltip formatter={(v) => fmt(Number(v))} labelFormatter={(l) => `${xLabel}: ${fmt(Number(l))}`} />
-          <Line
-            type="monotone"
-            dataKey="y"
-            stroke={palette.clay.DEFAULT}
-            strokeWidth={2}
-            dot={false}
-            isAnimationActive={false}
-          />
-          {mark ? (
-            <ReferenceDot x={mark.x} y={mark.y} r={5} fill={palette.creek.DEFAULT} stroke={palette.limestone[50]} />
-          ) : null}
-        </LineChart>
-      </ResponsiveContainer>
-    </figure>
+    <XYChart
+      title={title}
+      x={{ title: `${x.name} (${x.unit})`, unit: x.unit }}
+      y={{ title: `${y.name} (${y.unit})`, unit: y.unit, include: [0] }}
+      lines={[{ id: 'curve', label: title, tone: 'curve', points, readouts: true }]}
+      mark={mark ? { ...mark, label: `yours: ${at(mark)}` } : undefined}
+      table={{
+        caption: title,
+        columns: [`${x.name} (${x.unit})`, `${y.name} (${y.unit})`],
+        rows: [
+          ...points.map((p, i) => ({ key: i, cells: [valueText(p.x), valueText(p.y)] })),
+          ...(mark ? [{ key: 'yours', cells: [`${valueText(mark.x)} (yours)`, valueText(mark.y)] }] : []),
+        ],
+      }}
+    />
   );
 }

@@ -310,7 +310,7 @@ function Results({
         </ul>
       ) : null}
       {view.extra ? view.extra(output.results, units) : null}
-      {view.chart ? <div className="h-56">{view.chart(output.results, units, input)}</div> : null}
+      {view.chart ? <div className="min-w-0">{view.chart(output.results, units, input)}</div> : null}
       <Working steps={output.steps} />
       <SourcesDisclosure lines={verdict.sources}>
         {view.sources ? view.sources(output.results, input) : null}

@@ -1,24 +1,23 @@
-import { DISPLAY_UNITS, fromSI, unitLabel, type DeliveryLineResults } from '@/lib/hydraulics';
+import type { DeliveryLineResults } from '@/lib/hydraulics';
 import { lossAgainstFlow } from '@/lib/calculators';
-import { LineChartCard } from '../charts';
+import { chartUnit, LineChartCard } from '../charts';
 import type { CalculatorView } from './types';
 
 export const deliveryLineView: CalculatorView<DeliveryLineResults> = {
   // Friction loss against flow in this pipe, from a third of the flow to three times it.
   chart: (r, units, input) => {
-    const fu = DISPLAY_UNITS.flow[units];
-    const lu = DISPLAY_UNITS.length[units];
-    const points = lossAgainstFlow(input).map((p) => ({
-      x: fromSI(p.flowM3s, fu, 'flow'),
-      y: fromSI(p.lossM, lu, 'length'),
-    }));
+    const curve = lossAgainstFlow(input);
+    const flow = Number(input.flowM3s);
+    const loss = r.frictionHeadM + r.minorHeadM;
+    const fu = chartUnit('flow', [...curve.map((p) => p.flowM3s), flow], units);
+    const lu = chartUnit('length', [...curve.map((p) => p.lossM), loss], units);
     return (
       <LineChartCard
-        ariaLabel="Friction loss against flow"
-        xLabel={`flow (${unitLabel(fu)})`}
-        yLabel={`loss (${unitLabel(lu)})`}
-        points={points}
-        mark={{ x: fromSI(Number(input.flowM3s), fu, 'flow'), y: fromSI(r.frictionHeadM + r.minorHeadM, lu, 'length') }}
+        title="Friction loss against flow"
+        x={{ name: 'flow', unit: fu.label }}
+        y={{ name: 'loss', unit: lu.label }}
+        points={curve.map((p) => ({ x: fu.of(p.flowM3s), y: lu.of(p.lossM) }))}
+        mark={Number.isFinite(flow) ? { x: fu.of(flow), y: lu.of(loss) } : undefined}
       />
     );
   },

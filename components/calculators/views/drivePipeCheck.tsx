@@ -1,6 +1,6 @@
-import { DISPLAY_UNITS, fromSI, unitLabel, type DrivePipeCheckResults } from '@/lib/hydraulics';
+import type { DrivePipeCheckResults } from '@/lib/hydraulics';
 import { surgeByMaterial } from '@/lib/calculators';
-import { BarChartCard } from '../charts';
+import { BarChartCard, chartUnit } from '../charts';
 import type { CalculatorView } from './types';
 
 export const drivePipeCheckView: CalculatorView<DrivePipeCheckResults> = {
@@ -28,12 +28,17 @@ export const drivePipeCheckView: CalculatorView<DrivePipeCheckResults> = {
   ),
   // Surge against pipe material: the same size, fall and length in each series.
   chart: (_r, units, input) => {
-    const pu = DISPLAY_UNITS.pressure[units];
-    const bars = surgeByMaterial(input).map((b) => ({
+    const series = surgeByMaterial(input);
+    const pu = chartUnit(
+      'pressure',
+      series.map((b) => b.surgePa),
+      units,
+    );
+    const bars = series.map((b) => ({
       name: b.label.replace('schedule ', 'sch ').replace(/ \((ISO 4427|EN 1452)\)/, ''),
-      value: fromSI(b.surgePa, pu, 'pressure'),
+      value: pu.of(b.surgePa),
       highlight: b.current,
     }));
-    return <BarChartCard ariaLabel="Surge against pipe material" yLabel={`surge (${unitLabel(pu)})`} bars={bars} />;
+    return <BarChartCard title="Surge against pipe material" axis={{ name: 'surge', unit: pu.label }} bars={bars} />;
   },
 };

@@ -1,25 +1,22 @@
-import { DISPLAY_UNITS, fromSI, unitLabel, type YieldEstimateResults } from '@/lib/hydraulics';
-import { LineChartCard } from '../charts';
+import type { YieldEstimateResults } from '@/lib/hydraulics';
+import { chartUnit, LineChartCard } from '../charts';
 import { EfficiencySources, pumpTypeOf } from '../kit/EfficiencySources';
 import type { CalculatorView } from './types';
 
 export const yieldEstimateView: CalculatorView<YieldEstimateResults> = {
   sources: (_r, input) => <EfficiencySources pumpType={pumpTypeOf(input.pumpType)} />,
   chart: (r, units, input) => {
-    const lu = DISPLAY_UNITS.length[units];
-    const fu = DISPLAY_UNITS.smallFlow[units];
     const lift = Number(input.liftM);
+    const hasLift = Number.isFinite(lift);
+    const lu = chartUnit('length', [...r.curve.map((p) => p.liftM), ...(hasLift ? [lift] : [])], units);
+    const fu = chartUnit('smallFlow', [...r.curve.map((p) => p.deliveryM3s), r.deliveredFlowM3s], units);
     return (
       <LineChartCard
-        ariaLabel="Delivery against lift"
-        xLabel={`lift (${unitLabel(lu)})`}
-        yLabel={`delivery (${unitLabel(fu)})`}
-        points={r.curve.map((p) => ({ x: fromSI(p.liftM, lu, 'length'), y: fromSI(p.deliveryM3s, fu, 'smallFlow') }))}
-        mark={
-          Number.isFinite(lift)
-            ? { x: fromSI(lift, lu, 'length'), y: fromSI(r.deliveredFlowM3s, fu, 'smallFlow') }
-            : undefined
-        }
+        title="Delivery against lift"
+        x={{ name: 'lift', unit: lu.label }}
+        y={{ name: 'delivery', unit: fu.label }}
+        points={r.curve.map((p) => ({ x: lu.of(p.liftM), y: fu.of(p.deliveryM3s) }))}
+        mark={hasLift ? { x: lu.of(lift), y: fu.of(r.deliveredFlowM3s) } : undefined}
       />
     );
   },
