@@ -25,9 +25,14 @@ export function displayQuantity(qty: QuantityKind, si: number, units: UnitSystem
  * '30 US gal/h', '2.5 L/min', '8 in'. For results, working and text; inputs keep fixed units.
  */
 export function formatQuantity(qty: QuantityKind, si: number, units: UnitSystem): string {
+  const { value, unit } = readableQuantity(qty, si, units);
+  return unit ? `${value} ${unit}` : value;
+}
+
+/** {@link formatQuantity} in two parts, for a result drawn with its unit in smaller type. */
+export function readableQuantity(qty: QuantityKind, si: number, units: UnitSystem): { value: string; unit: string } {
   const d = readableDisplay(qty, si, units);
-  const v = formatNumber(d.value);
-  return d.label ? `${v} ${d.label}` : v;
+  return { value: formatNumber(d.value), unit: d.label };
 }
 
 export { unitLabel };

@@ -51,7 +51,7 @@ export type Recomputed<R = unknown> =
  * names the field by its form name (`prop`) and label.
  */
 export function recompute<R>(def: CalculatorDef<R>, form: Record<string, string>): Recomputed<R> {
-  const state = initialState(def.fields, form, def.defaults, DEFAULT_UNITS);
+  const state = initialState(def.fields, form, def.defaults, DEFAULT_UNITS, 'none');
   const { values, errors } = readForm(visibleFields(def, state), state);
   const firstError = Object.entries(errors)[0];
   if (firstError) {

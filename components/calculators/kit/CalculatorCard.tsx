@@ -6,14 +6,15 @@ import type { CalcOutput } from '@/lib/hydraulics';
 import {
   computeForm,
   convertState,
-  displayQuantity,
   formatNumber,
   initialState,
+  readableQuantity,
   shareQuery,
   visibleFields,
   type Calculator,
   type FieldDef,
   type FormState,
+  type OpenIn,
 } from '@/lib/calculators';
 import { useUnits } from '@/components/units/UnitsProvider';
 import { calculatorView } from '../views';
@@ -28,14 +29,17 @@ import { SaveCalculation } from './SaveCalculation';
 export function CalculatorCard({
   def,
   props = {},
+  openIn = 'all',
   onOutput,
 }: {
   def: Calculator;
   props?: Record<string, string | undefined>;
+  /** 'defaults' for a share link, whose values open exactly as the sharer typed them */
+  openIn?: OpenIn;
   onOutput?: (state: FormState, output: CalcOutput<unknown> | null) => void;
 }) {
   const { units } = useUnits();
-  const [state, setState] = useState<FormState>(() => initialState(def.fields, props, def.defaults, units));
+  const [state, setState] = useState<FormState>(() => initialState(def.fields, props, def.defaults, units, openIn));
   const lastUnits = useRef(units);
   const [copied, setCopied] = useState(false);
 
@@ -258,7 +262,7 @@ function Results({
             typeof r.value === 'string'
               ? { value: r.value, unit: r.unit ?? '' }
               : r.qty
-                ? displayQuantity(r.qty, r.value, units)
+                ? readableQuantity(r.qty, r.value, units)
                 : { value: formatNumber(r.value), unit: r.unit ?? '' };
           return (
             <div key={r.label} className={r.emphasis ? 'rounded-md bg-creek-50 p-2 dark:bg-creek-800' : ''}>
