@@ -1,0 +1,59 @@
+import { beforeAll, describe, expect, it } from 'vitest';
+import { initModels } from '@/models';
+import { authOptions } from '@/lib/auth/options';
+import { freshDemoDatabase } from '../support/db';
+import { actAs } from '../support/act-as';
+import { PUT as putUnits } from '@/app/api/account/units/route';
+
+const { raw, call } = actAs('10.77.3');
+const unitsOf = async (handle: string) => (await initModels().User.findOne({ where: { handle } }))!.units;
+
+describe('PUT /api/account/units: the header’s switch saves one preference', () => {
+  beforeAll(freshDemoDatabase);
+
+  it('needs a session and sets no cookie without one', async () => {
+    const res = await raw(putUnits, 'PUT', '/api/account/units', null, { units: 'metric' });
+    expect(res.status).toBe(401);
+    expect(res.headers.get('set-cookie')).toBeNull();
+  });
+
+  it('refuses a unit system it does not know, naming the field, and changes nothing', async () => {
+    const before = await unitsOf('ferncombe_tamsin');
+    const res = await call(putUnits, 'PUT', '/api/account/units', 'ferncombe_tamsin', { units: 'imperial' });
+    expect(res.status).toBe(400);
+    expect(res.body.error.field).toBe('units');
+    expect(await unitsOf('ferncombe_tamsin')).toBe(before);
+  });
+
+  it('saves on the caller’s own account only, and sets the cookie', async () => {
+    const shepherd = await unitsOf('highcrag_shepherd');
+    const other = await initModels().User.findOne({ where: { handle: 'highcrag_shepherd' } });
+    const res = await raw(putUnits, 'PUT', '/api/account/units', 'ferncombe_tamsin', {
+      units: 'metric',
+      // the session decides whose preference this is, never the body
+      id: other!.id,
+      handle: 'highcrag_shepherd',
+    });
+    expect(res.status).toBe(200);
+    expect(await res.json()).toEqual({ units: 'metric' });
+    expect(res.headers.get('set-cookie')).toMatch(/cw_units=metric;.*Path=\//i);
+    expect(await unitsOf('ferncombe_tamsin')).toBe('metric');
+    expect(await unitsOf('highcrag_shepherd')).toBe(shepherd);
+    // saving the same choice again is still a success, not "account gone"
+    const again = await call(putUnits, 'PUT', '/api/account/units', 'ferncombe_tamsin', { units: 'metric' });
+    expect(again.status).toBe(200);
+  });
+
+  it('the session carries the saved choice, read fresh, so another browser takes it up', async () => {
+    // what /api/auth/session runs on every read: the jwt callback on the cookie's token, then the session callback
+    const session = async () => {
+      const u = (await initModels().User.findOne({ where: { handle: 'ferncombe_tamsin' } }))!;
+      const cookieToken = { uid: u.id, role: u.role, handle: u.handle, sv: u.sessionVersion };
+      const token = await authOptions.callbacks!.jwt!({ token: cookieToken } as never);
+      return authOptions.callbacks!.session!({ session: { user: {}, expires: '' }, token } as never);
+    };
+    expect((await session()).user?.units).toBe('metric');
+    await call(putUnits, 'PUT', '/api/account/units', 'ferncombe_tamsin', { units: 'US' });
+    expect((await session()).user?.units).toBe('US');
+  });
+});
