@@ -1,4 +1,12 @@
-import { readableDisplay, toDisplay, unitLabel, type QuantityKind, type UnitSystem } from '@/lib/hydraulics';
+import {
+  readableDisplay,
+  renderMessage,
+  toDisplay,
+  unitLabel,
+  type MessagePart,
+  type QuantityKind,
+  type UnitSystem,
+} from '@/lib/hydraulics';
 
 const sig3 = new Intl.NumberFormat('en', { maximumSignificantDigits: 3 });
 const sig4 = new Intl.NumberFormat('en', { maximumSignificantDigits: 4, useGrouping: false });
@@ -36,3 +44,8 @@ export function readableQuantity(qty: QuantityKind, si: number, units: UnitSyste
 }
 
 export { unitLabel };
+
+/** A warning or message from the engine with its numbers in the reader's units; its SI text when it has no parts. */
+export function formatMessage(m: { message: string; parts?: readonly MessagePart[] }, units: UnitSystem): string {
+  return m.parts ? renderMessage(m.parts, (kind, si) => formatQuantity(kind, si, units)) : m.message;
+}

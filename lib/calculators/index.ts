@@ -26,6 +26,7 @@ export {
 export {
   computeForm,
   computeFromForm,
+  issueMessage,
   recompute,
   resultsDiffer,
   visibleFields,
@@ -33,7 +34,7 @@ export {
   type Recomputed,
 } from './recompute';
 export { convertState, hasOwnUnit, initialState, readForm, shareQuery, splitTyped, type OpenIn } from './state';
-export { displayQuantity, formatNumber, formatQuantity, inputNumber, readableQuantity } from './format';
+export { displayQuantity, formatMessage, formatNumber, formatQuantity, inputNumber, readableQuantity } from './format';
 export { SERIES_LABELS, seriesOptions, sizeOptions } from './pipes';
 export { lossAgainstFlow } from './defs/deliveryLine';
 export { surgeByMaterial } from './defs/drivePipeCheck';

@@ -1,6 +1,8 @@
-import { ENGINE_VERSION } from '@/lib/hydraulics';
+import { ENGINE_VERSION, renderMessage } from '@/lib/hydraulics';
 import { EngineInputError } from '@/lib/hydraulics';
-import type { CalcOutput } from '@/lib/hydraulics';
+import type { CalcOutput, UnitSystem } from '@/lib/hydraulics';
+import type { FieldIssue } from '@/lib/hydraulics';
+import { formatQuantity } from './format';
 import { DEFAULT_UNITS } from '@/lib/units/preference';
 import { getCalculator } from './registry';
 import { initialState, readForm } from './state';
@@ -17,10 +19,20 @@ export type FormOutcome<R> =
   | { ok: false; fieldErrors: Record<string, string>; general?: string };
 
 /**
- * One keystroke in a card: read the visible fields, run the engine, and put each
- * engine complaint beside the field it names (the rest go in `general`).
+ * An engine complaint in the reader's units: "at most 328 ft" for a US reader where the
+ * engine says "at most 100 m". Without a reader's system, the engine's own words.
  */
-export function computeForm<R>(def: CalculatorDef<R>, state: FormState): FormOutcome<R> {
+export function issueMessage(issue: FieldIssue, units?: UnitSystem): string {
+  if (!units || !issue.parts) return issue.message;
+  return renderMessage(issue.parts, (kind, si) => formatQuantity(kind, si, units));
+}
+
+/**
+ * One keystroke in a card: read the visible fields, run the engine, and put each
+ * engine complaint beside the field it names (the rest go in `general`), its numbers
+ * in the reader's units when `units` is given.
+ */
+export function computeForm<R>(def: CalculatorDef<R>, state: FormState, units?: UnitSystem): FormOutcome<R> {
   const { values, errors } = readForm(visibleFields(def, state), state);
   if (Object.keys(errors).length > 0) return { ok: false, fieldErrors: errors };
   try {
@@ -32,8 +44,8 @@ export function computeForm<R>(def: CalculatorDef<R>, state: FormState): FormOut
       const general: string[] = [];
       for (const issue of err.issues) {
         const field = [...known].find((k) => issue.field === k || issue.field.startsWith(`${k}.`));
-        if (field) fieldErrors[field] ??= issue.message;
-        else general.push(`${issue.field}: ${issue.message}`);
+        if (field) fieldErrors[field] ??= issueMessage(issue, units);
+        else general.push(`${issue.field}: ${issueMessage(issue, units)}`);
       }
       return { ok: false, fieldErrors, general: general.join('; ') || undefined };
     }

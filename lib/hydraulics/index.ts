@@ -9,9 +9,10 @@
 
 // What every calculator returns, and the error a bad input throws.
 export { ENGINE_VERSION } from './version';
-export { EngineInputError } from './errors';
+export { EngineInputError, type FieldIssue } from './errors';
 export { texNum, type CalcOutput, type Step } from './steps';
 export { WARNING_CODES } from './warnings';
+export { metricText, qty, renderMessage, said, say, type MessagePart, type MessageQuantity } from './message';
 
 // Units at the edges: what people type → SI, SI → the reader's units.
 export {

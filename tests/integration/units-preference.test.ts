@@ -50,7 +50,8 @@ describe('PUT /api/account/units: the header’s switch saves one preference', (
       const u = (await initModels().User.findOne({ where: { handle: 'ferncombe_tamsin' } }))!;
       const cookieToken = { uid: u.id, role: u.role, handle: u.handle, sv: u.sessionVersion };
       const token = await authOptions.callbacks!.jwt!({ token: cookieToken } as never);
-      return authOptions.callbacks!.session!({ session: { user: {}, expires: '' }, token } as never);
+      const s = await authOptions.callbacks!.session!({ session: { user: {}, expires: '' }, token } as never);
+      return s as { user?: { units?: string } };
     };
     expect((await session()).user?.units).toBe('metric');
     await call(putUnits, 'PUT', '/api/account/units', 'ferncombe_tamsin', { units: 'US' });

@@ -6,6 +6,7 @@ import type { CalcOutput } from '@/lib/hydraulics';
 import {
   computeForm,
   convertState,
+  formatMessage,
   formatNumber,
   initialState,
   readableQuantity,
@@ -51,7 +52,7 @@ export function CalculatorCard({
     }
   }, [units, def.fields]);
 
-  const outcome = useMemo(() => computeForm(def, state), [def, state]);
+  const outcome = useMemo(() => computeForm(def, state, units), [def, state, units]);
   useEffect(() => {
     onOutput?.(state, outcome.ok ? outcome.output : null);
   }, [state, outcome, onOutput]);
@@ -283,7 +284,7 @@ function Results({
               data-warning={w.code}
             >
               <span aria-hidden="true">⚠ </span>
-              {w.message}{' '}
+              {formatMessage(w, units)}{' '}
               <a href={`/guides/${w.guide}`} className="cw-link">
                 Read more
               </a>
