@@ -5,12 +5,13 @@ import {
   computeFromForm,
   formatMessage,
   initialState,
+  type Calculator,
   type FormState,
 } from '@/lib/calculators';
 
 /** The card's outcome for a form typed as given, for a reader in `units`. */
 function card(id: keyof typeof CALCULATORS, typed: Record<string, string>, units: 'US' | 'metric') {
-  const def = CALCULATORS[id];
+  const def: Calculator = CALCULATORS[id];
   const state: FormState = initialState(def.fields, typed, def.defaults, units, 'none');
   return computeForm(def, state, units);
 }
@@ -66,7 +67,7 @@ describe('input errors in the reader’s units', () => {
 
   it('the engine’s own message, for callers with no reader, stays metric', () => {
     const out = card('yield-estimate', { fall: '4 ft', lift: '3 ft' }, 'US');
-    const def = CALCULATORS['yield-estimate'];
+    const def: Calculator = CALCULATORS['yield-estimate'];
     const plain = computeForm(
       def,
       initialState(def.fields, { fall: '4 ft', lift: '3 ft' }, def.defaults, 'US', 'none'),
