@@ -60,9 +60,9 @@ export type Recomputed<R = unknown> =
  * Runs a calculator on the inputs as a reader typed them (each with its unit, as in
  * a share link), exactly as the live card does. Saving and permalinks use this, so
  * a stored result is always the engine's, never the browser's. The first refusal
- * names the field by its form name (`prop`) and label.
+ * names the field by its form name (`prop`) and label, its numbers in `units` when given.
  */
-export function recompute<R>(def: CalculatorDef<R>, form: Record<string, string>): Recomputed<R> {
+export function recompute<R>(def: CalculatorDef<R>, form: Record<string, string>, units?: UnitSystem): Recomputed<R> {
   const state = initialState(def.fields, form, def.defaults, DEFAULT_UNITS, 'none');
   const { values, errors } = readForm(visibleFields(def, state), state);
   const firstError = Object.entries(errors)[0];
@@ -75,17 +75,21 @@ export function recompute<R>(def: CalculatorDef<R>, form: Record<string, string>
   } catch (err) {
     if (err instanceof EngineInputError) {
       const f = def.fields.find((x) => err.field === x.name || err.field.startsWith(`${x.name}.`));
-      return { ok: false, field: f?.prop ?? err.field, message: `${f?.label ?? err.field}: ${err.issues[0].message}` };
+      return {
+        ok: false,
+        field: f?.prop ?? err.field,
+        message: `${f?.label ?? err.field}: ${issueMessage(err.issues[0], units)}`,
+      };
     }
     throw err;
   }
 }
 
 /** {@link recompute} by the calculator's id, as stored or sent (an unknown id is refused naming `tool`). */
-export function computeFromForm(tool: string, form: Record<string, string>): Recomputed {
+export function computeFromForm(tool: string, form: Record<string, string>, units?: UnitSystem): Recomputed {
   const def = getCalculator(tool);
   if (!def) return { ok: false, field: 'tool', message: `no calculator called ${tool}` };
-  return recompute(def, form);
+  return recompute(def, form, units);
 }
 
 /** Whether two results differ beyond rounding (relative 1e-9), ignoring key order. */

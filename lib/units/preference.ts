@@ -9,3 +9,9 @@ export const UNITS_COOKIE_OPTIONS = { path: '/', maxAge: 60 * 60 * 24 * 365, sam
 export function parseUnitPreference(value: string | undefined | null): UnitPreference {
   return value === 'metric' ? 'metric' : value === 'US' ? 'US' : DEFAULT_UNITS;
 }
+
+/** The reader's unit system from a request's Cookie header (route handlers, which read no page cookies). */
+export function unitPreferenceOf(request: Request): UnitPreference {
+  const m = (request.headers.get('cookie') ?? '').match(new RegExp(`(?:^|;\\s*)${UNITS_COOKIE}=([^;]*)`));
+  return parseUnitPreference(m?.[1]);
+}

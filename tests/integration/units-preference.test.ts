@@ -2,7 +2,10 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import { initModels } from '@/models';
 import { authOptions } from '@/lib/auth/options';
 import { freshDemoDatabase } from '../support/db';
-import { actAs } from '../support/act-as';
+import { NextRequest } from 'next/server';
+import { siteUrl } from '@/lib/site';
+import { actAs, sessionCookie } from '../support/act-as';
+import { POST as saveCalculation } from '@/app/api/calculations/route';
 import { PUT as putUnits } from '@/app/api/account/units/route';
 
 const { raw, call } = actAs('10.77.3');
@@ -56,5 +59,38 @@ describe('PUT /api/account/units: the header’s switch saves one preference', (
     expect((await session()).user?.units).toBe('metric');
     await call(putUnits, 'PUT', '/api/account/units', 'ferncombe_tamsin', { units: 'US' });
     expect((await session()).user?.units).toBe('US');
+  });
+});
+
+describe('an API refusal shown in a form names its numbers in the reader’s units', () => {
+  beforeAll(freshDemoDatabase);
+
+  const save = async (units: string) => {
+    const res = await saveCalculation(
+      new NextRequest(`${siteUrl()}/api/calculations`, {
+        method: 'POST',
+        headers: {
+          'content-type': 'application/json',
+          origin: new URL(siteUrl()).origin,
+          'x-forwarded-for': '10.77.4.1',
+          cookie: `${await sessionCookie('ferncombe_tamsin')}; cw_units=${units}`,
+        },
+        body: JSON.stringify({
+          tool: 'yield-estimate',
+          inputs: { fall: '400 ft', lift: '900 ft', driveFlow: '2 gpm' },
+        }),
+      }),
+    );
+    return { status: res.status, body: (await res.json()) as { error: { field?: string; message: string } } };
+  };
+
+  it('a fall past 100 m is refused in feet for a US reader, in metres for a metric one', async () => {
+    const us = await save('US');
+    expect(us.status).toBe(422);
+    expect(us.body.error.field).toBe('inputs.fall');
+    // 100 m = 328.08 ft (1 ft = 0.3048 m, NIST SP 811, 2008), three figures
+    expect(us.body.error.message).toBe('Fall (supply head): must be a number greater than 0 ft and at most 328 ft');
+    const metric = await save('metric');
+    expect(metric.body.error.message).toBe('Fall (supply head): must be a number greater than 0 m and at most 100 m');
   });
 });
