@@ -3,7 +3,15 @@ import 'next-auth/jwt';
 
 declare module 'next-auth' {
   interface Session {
-    user: { id: number; role: string; handle: string; name?: string | null; email?: string | null };
+    user: {
+      id: number;
+      role: string;
+      handle: string;
+      /** the member's saved unit system, read fresh with every session */
+      units: 'US' | 'metric';
+      name?: string | null;
+      email?: string | null;
+    };
   }
 }
 
@@ -14,5 +22,7 @@ declare module 'next-auth/jwt' {
     handle?: string;
     /** the account's session version at sign-in (lib/auth/session-version.ts) */
     sv?: number;
+    /** the saved unit system ('US' | 'metric') */
+    units?: string;
   }
 }

@@ -19,8 +19,8 @@ export const DemandAndStorage = (props: Props) => (
 );
 export const StallCheck = (props: Props) => <CalculatorCard def={CALCULATORS['stall-check']} props={props} />;
 
-/** A calculator chosen by id, e.g. on /calculators/[tool] with the share link's inputs. */
+/** A calculator chosen by id, e.g. on /calculators/[tool] with the share link's inputs, kept as typed. */
 export function CalculatorById({ id, props }: { id: string; props: Props }) {
   const def = getCalculator(id);
-  return def ? <CalculatorCard def={def} props={props} /> : null;
+  return def ? <CalculatorCard def={def} props={props} openIn="defaults" /> : null;
 }

@@ -1,7 +1,18 @@
 'use client';
 
-import { createContext, useCallback, useContext, useMemo, useSyncExternalStore, type ReactNode } from 'react';
+import {
+  createContext,
+  useCallback,
+  useContext,
+  useEffect,
+  useMemo,
+  useRef,
+  useSyncExternalStore,
+  type ReactNode,
+} from 'react';
 import { useRouter } from 'next/navigation';
+import { useSession } from 'next-auth/react';
+import { sendJson } from '@/lib/http/client';
 import { DEFAULT_UNITS, parseUnitPreference, UNITS_COOKIE, type UnitPreference } from '@/lib/units/preference';
 
 const listeners = new Set<() => void>();
@@ -17,28 +28,63 @@ function subscribe(cb: () => void) {
   return () => listeners.delete(cb);
 }
 
-const UnitsContext = createContext<{ units: UnitPreference; setUnits: (u: UnitPreference) => void }>({
-  units: DEFAULT_UNITS,
-  setUnits: () => {},
-});
+interface UnitsApi {
+  units: UnitPreference;
+  /** the reader's choice: remembered in this browser, and saved on the account when signed in */
+  setUnits: (u: UnitPreference) => void;
+  /** follow a choice already saved (Settings' own save): this browser only */
+  adoptUnits: (u: UnitPreference) => void;
+}
+
+const UnitsContext = createContext<UnitsApi>({ units: DEFAULT_UNITS, setUnits: () => {}, adoptUnits: () => {} });
 
 /**
- * Holds the site-wide unit switch. Static pages (guides) render with the default
- * and follow the cookie once hydrated; dynamic pages re-render on the server
- * after a switch (router.refresh) so server-drawn numbers follow too.
+ * The one unit preference: saved on the account for members, a cookie for visitors
+ * (and for members, so server-drawn pages read it). The header's switch saves it,
+ * Settings saves it, and a saved choice that differs from this browser's cookie (a
+ * first sign-in here, a change made in another browser) is taken up when the session
+ * brings it. Static pages (guides) render with the default and follow the cookie once
+ * hydrated; dynamic pages re-render on the server after a change (router.refresh).
  */
 export function UnitsProvider({ children }: { children: ReactNode }) {
   const router = useRouter();
+  const { data: session, update } = useSession();
   const units = useSyncExternalStore(subscribe, readCookie, () => DEFAULT_UNITS);
-  const setUnits = useCallback(
+
+  const adoptUnits = useCallback(
     (u: UnitPreference) => {
+      const changed = readCookie() !== u;
       document.cookie = `${UNITS_COOKIE}=${u}; path=/; max-age=${ONE_YEAR}; samesite=lax`;
       listeners.forEach((l) => l());
-      router.refresh();
+      if (changed) router.refresh();
     },
     [router],
   );
-  const value = useMemo(() => ({ units, setUnits }), [units, setUnits]);
+
+  const signedIn = session?.user?.id !== undefined;
+  const setUnits = useCallback(
+    (u: UnitPreference) => {
+      adoptUnits(u);
+      if (!signedIn) return;
+      // The session then carries the new choice, so the alignment below sees no change to undo.
+      void sendJson<{ units: UnitPreference }>('/api/account/units', 'PUT', { units: u }).then((out) => {
+        if (out.ok) void update();
+      });
+    },
+    [adoptUnits, signedIn, update],
+  );
+
+  // Take up the saved choice each time the session brings a different one, not on every render:
+  // between a switch and its save the session still holds the old choice.
+  const saved = session?.user?.units;
+  const seen = useRef<UnitPreference | undefined>(undefined);
+  useEffect(() => {
+    if (saved === undefined || seen.current === saved) return;
+    seen.current = saved;
+    if (readCookie() !== saved) adoptUnits(saved);
+  }, [saved, adoptUnits]);
+
+  const value = useMemo(() => ({ units, setUnits, adoptUnits }), [units, setUnits, adoptUnits]);
   return <UnitsContext.Provider value={value}>{children}</UnitsContext.Provider>;
 }
 

@@ -15,6 +15,8 @@ import { sameSiteRedirect } from './return-path';
 import { tokenVersion } from './session-version';
 import { authLogger, SessionRevoked } from './auth-logger';
 import { inBackground } from '@/lib/accounts/background';
+import { rememberUnits } from '@/lib/units/server';
+import { parseUnitPreference } from '@/lib/units/preference';
 
 /** Errors sign-in forms show; next-auth passes the message through as `error`. */
 export const SIGN_IN_ERRORS = {
@@ -94,12 +96,17 @@ export const authOptions: NextAuthOptions = {
       const { User } = initModels();
       if (user) {
         // A link sign-in hands us the adapter's view of the user; read role and handle from ours.
-        const u = await User.findByPk(Number(user.id), { attributes: ['id', 'role', 'handle', 'sessionVersion'] });
+        const u = await User.findByPk(Number(user.id), {
+          attributes: ['id', 'role', 'handle', 'sessionVersion', 'units'],
+        });
         if (u) {
           token.uid = u.id;
           token.role = u.role;
           token.handle = u.handle;
           token.sv = u.sessionVersion;
+          token.units = u.units;
+          // a fresh browser's first page after signing in is drawn in the member's saved units
+          await rememberUnits(u.units);
         }
         return token;
       }
@@ -107,8 +114,12 @@ export const authOptions: NextAuthOptions = {
       // a token behind the account's session version is over, and next-auth clears its cookie.
       const uid = Number(token.uid);
       const u =
-        Number.isInteger(uid) && uid > 0 ? await User.findByPk(uid, { attributes: ['id', 'sessionVersion'] }) : null;
+        Number.isInteger(uid) && uid > 0
+          ? await User.findByPk(uid, { attributes: ['id', 'sessionVersion', 'units'] })
+          : null;
       if (!u || u.sessionVersion !== tokenVersion(token)) throw new SessionRevoked();
+      // the saved units as they are now, so a change made in another browser reaches this one
+      token.units = u.units;
       return token;
     },
     redirect({ url, baseUrl }) {
@@ -120,6 +131,7 @@ export const authOptions: NextAuthOptions = {
         id: Number(token.uid),
         role: String(token.role),
         handle: String(token.handle),
+        units: parseUnitPreference(token.units),
       } as typeof session.user;
       return session;
     },

@@ -44,6 +44,8 @@ export const POLICY = {
   'profile.read': read(signedIn('own')),
   /** edit display name, units, e-mail choices and the like: one's own only */
   'profile.edit': signedIn('own'),
+  /** save one's unit system (the header's switch): a display choice that publishes nothing, so suspended members keep it */
+  'profile.units': { ...signedIn('own'), keptWhenSuspended: true },
   /** end every session of one's own account ("sign out everywhere"): it only takes power away, so suspended members keep it */
   'session.revokeAll': { ...signedIn(), keptWhenSuspended: true },
   /** one's own notices */
@@ -170,6 +172,7 @@ export const REFUSAL: Record<Action, string> = {
   'user.changeRole': 'Only admins can change roles.',
   'profile.read': 'You can only see your own settings.',
   'profile.edit': 'You can only change your own profile.',
+  'profile.units': 'Sign in to save your units on your account.',
   'session.revokeAll': 'Sign in to sign out everywhere.',
   'notice.read': 'You can only read your own notices.',
   'question.ask': 'Sign in to ask a question.',

@@ -21,6 +21,7 @@ export const API_ROUTES: Record<string, Action | 'public' | 'session'> = {
   'PUT /api/admin/users/[id]/role': 'user.changeRole',
   'GET /api/account/settings': 'profile.read',
   'PUT /api/account/settings': 'profile.edit',
+  'PUT /api/account/units': 'profile.units',
   'POST /api/account/sign-out-everywhere': 'session.revokeAll',
   'GET /api/auth/[...nextauth]': 'session',
   'POST /api/auth/[...nextauth]': 'session',

@@ -1,4 +1,12 @@
-import { readableDisplay, toDisplay, unitLabel, type QuantityKind, type UnitSystem } from '@/lib/hydraulics';
+import {
+  readableDisplay,
+  renderMessage,
+  toDisplay,
+  unitLabel,
+  type MessagePart,
+  type QuantityKind,
+  type UnitSystem,
+} from '@/lib/hydraulics';
 
 const sig3 = new Intl.NumberFormat('en', { maximumSignificantDigits: 3 });
 const sig4 = new Intl.NumberFormat('en', { maximumSignificantDigits: 4, useGrouping: false });
@@ -25,9 +33,19 @@ export function displayQuantity(qty: QuantityKind, si: number, units: UnitSystem
  * '30 US gal/h', '2.5 L/min', '8 in'. For results, working and text; inputs keep fixed units.
  */
 export function formatQuantity(qty: QuantityKind, si: number, units: UnitSystem): string {
+  const { value, unit } = readableQuantity(qty, si, units);
+  return unit ? `${value} ${unit}` : value;
+}
+
+/** {@link formatQuantity} in two parts, for a result drawn with its unit in smaller type. */
+export function readableQuantity(qty: QuantityKind, si: number, units: UnitSystem): { value: string; unit: string } {
   const d = readableDisplay(qty, si, units);
-  const v = formatNumber(d.value);
-  return d.label ? `${v} ${d.label}` : v;
+  return { value: formatNumber(d.value), unit: d.label };
 }
 
 export { unitLabel };
+
+/** A warning or message from the engine with its numbers in the reader's units; its SI text when it has no parts. */
+export function formatMessage(m: { message: string; parts?: readonly MessagePart[] }, units: UnitSystem): string {
+  return m.parts ? renderMessage(m.parts, (kind, si) => formatQuantity(kind, si, units)) : m.message;
+}

@@ -26,14 +26,15 @@ export {
 export {
   computeForm,
   computeFromForm,
+  issueMessage,
   recompute,
   resultsDiffer,
   visibleFields,
   type FormOutcome,
   type Recomputed,
 } from './recompute';
-export { convertState, hasOwnUnit, initialState, readForm, shareQuery, splitTyped } from './state';
-export { displayQuantity, formatNumber, formatQuantity, inputNumber } from './format';
+export { convertState, hasOwnUnit, initialState, readForm, shareQuery, splitTyped, type OpenIn } from './state';
+export { displayQuantity, formatMessage, formatNumber, formatQuantity, inputNumber, readableQuantity } from './format';
 export { SERIES_LABELS, seriesOptions, sizeOptions } from './pipes';
 export { lossAgainstFlow } from './defs/deliveryLine';
 export { surgeByMaterial } from './defs/drivePipeCheck';

@@ -1,6 +1,8 @@
-import { ENGINE_VERSION } from '@/lib/hydraulics';
+import { ENGINE_VERSION, renderMessage } from '@/lib/hydraulics';
 import { EngineInputError } from '@/lib/hydraulics';
-import type { CalcOutput } from '@/lib/hydraulics';
+import type { CalcOutput, UnitSystem } from '@/lib/hydraulics';
+import type { FieldIssue } from '@/lib/hydraulics';
+import { formatQuantity } from './format';
 import { DEFAULT_UNITS } from '@/lib/units/preference';
 import { getCalculator } from './registry';
 import { initialState, readForm } from './state';
@@ -17,10 +19,20 @@ export type FormOutcome<R> =
   | { ok: false; fieldErrors: Record<string, string>; general?: string };
 
 /**
- * One keystroke in a card: read the visible fields, run the engine, and put each
- * engine complaint beside the field it names (the rest go in `general`).
+ * An engine complaint in the reader's units: "at most 328 ft" for a US reader where the
+ * engine says "at most 100 m". Without a reader's system, the engine's own words.
  */
-export function computeForm<R>(def: CalculatorDef<R>, state: FormState): FormOutcome<R> {
+export function issueMessage(issue: FieldIssue, units?: UnitSystem): string {
+  if (!units || !issue.parts) return issue.message;
+  return renderMessage(issue.parts, (kind, si) => formatQuantity(kind, si, units));
+}
+
+/**
+ * One keystroke in a card: read the visible fields, run the engine, and put each
+ * engine complaint beside the field it names (the rest go in `general`), its numbers
+ * in the reader's units when `units` is given.
+ */
+export function computeForm<R>(def: CalculatorDef<R>, state: FormState, units?: UnitSystem): FormOutcome<R> {
   const { values, errors } = readForm(visibleFields(def, state), state);
   if (Object.keys(errors).length > 0) return { ok: false, fieldErrors: errors };
   try {
@@ -32,8 +44,8 @@ export function computeForm<R>(def: CalculatorDef<R>, state: FormState): FormOut
       const general: string[] = [];
       for (const issue of err.issues) {
         const field = [...known].find((k) => issue.field === k || issue.field.startsWith(`${k}.`));
-        if (field) fieldErrors[field] ??= issue.message;
-        else general.push(`${issue.field}: ${issue.message}`);
+        if (field) fieldErrors[field] ??= issueMessage(issue, units);
+        else general.push(`${issue.field}: ${issueMessage(issue, units)}`);
       }
       return { ok: false, fieldErrors, general: general.join('; ') || undefined };
     }
@@ -48,10 +60,10 @@ export type Recomputed<R = unknown> =
  * Runs a calculator on the inputs as a reader typed them (each with its unit, as in
  * a share link), exactly as the live card does. Saving and permalinks use this, so
  * a stored result is always the engine's, never the browser's. The first refusal
- * names the field by its form name (`prop`) and label.
+ * names the field by its form name (`prop`) and label, its numbers in `units` when given.
  */
-export function recompute<R>(def: CalculatorDef<R>, form: Record<string, string>): Recomputed<R> {
-  const state = initialState(def.fields, form, def.defaults, DEFAULT_UNITS);
+export function recompute<R>(def: CalculatorDef<R>, form: Record<string, string>, units?: UnitSystem): Recomputed<R> {
+  const state = initialState(def.fields, form, def.defaults, DEFAULT_UNITS, 'none');
   const { values, errors } = readForm(visibleFields(def, state), state);
   const firstError = Object.entries(errors)[0];
   if (firstError) {
@@ -63,17 +75,21 @@ export function recompute<R>(def: CalculatorDef<R>, form: Record<string, string>
   } catch (err) {
     if (err instanceof EngineInputError) {
       const f = def.fields.find((x) => err.field === x.name || err.field.startsWith(`${x.name}.`));
-      return { ok: false, field: f?.prop ?? err.field, message: `${f?.label ?? err.field}: ${err.issues[0].message}` };
+      return {
+        ok: false,
+        field: f?.prop ?? err.field,
+        message: `${f?.label ?? err.field}: ${issueMessage(err.issues[0], units)}`,
+      };
     }
     throw err;
   }
 }
 
 /** {@link recompute} by the calculator's id, as stored or sent (an unknown id is refused naming `tool`). */
-export function computeFromForm(tool: string, form: Record<string, string>): Recomputed {
+export function computeFromForm(tool: string, form: Record<string, string>, units?: UnitSystem): Recomputed {
   const def = getCalculator(tool);
   if (!def) return { ok: false, field: 'tool', message: `no calculator called ${tool}` };
-  return recompute(def, form);
+  return recompute(def, form, units);
 }
 
 /** Whether two results differ beyond rounding (relative 1e-9), ignoring key order. */

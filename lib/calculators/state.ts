@@ -1,4 +1,13 @@
-import { DISPLAY_UNITS, fromSI, parseQuantity, toSI, type QuantityKind, type UnitSystem } from '@/lib/hydraulics';
+import {
+  asWritten,
+  inputUnit,
+  parseQuantity,
+  toSI,
+  UNIT_CHOICES,
+  unitSystemOf,
+  type QuantityKind,
+  type UnitSystem,
+} from '@/lib/hydraulics';
 import { EngineInputError } from '@/lib/hydraulics';
 import { inputNumber } from './format';
 import { metricPipeDefault } from './pipes';
@@ -19,22 +28,35 @@ export function hasOwnUnit(text: string): boolean {
   return /[a-zA-Z"'″′%]|\//.test(t) || /[½¼¾]/.test(t);
 }
 
+/**
+ * Which given values open in the reader's units: 'defaults' re-expresses the calculator's
+ * own defaults written in the other system ("4 ft" opens as 1.22 m for a metric reader);
+ * 'all' does the same for MDX props; 'none' keeps everything as written (a share link,
+ * a saved calculation, the server's recompute, which must read exactly what was typed).
+ */
+export type OpenIn = 'defaults' | 'all' | 'none';
+
 /** The form's starting state from MDX props or a share link, in the reader's units. */
 export function initialState(
   fields: readonly FieldDef[],
   props: Record<string, string | undefined>,
   defaults: Record<string, string>,
   units: UnitSystem,
+  openIn: OpenIn = 'defaults',
 ): FormState {
   const state: FormState = {};
   for (const f of fields) {
-    const raw = props[f.prop] ?? defaults[f.prop] ?? '';
+    const given = props[f.prop];
+    const raw = given ?? defaults[f.prop] ?? '';
     if (f.type === 'quantity') {
       const { text, unit } = splitTyped(raw);
       const pick = unit && isKnownUnit(f.qty, unit) ? unit : undefined;
+      const convert = openIn === 'all' || (openIn === 'defaults' && given === undefined);
       state[f.name] = pick
-        ? { text, unit: pick }
-        : { text: raw && !pick && unit ? raw : text, unit: DISPLAY_UNITS[f.qty][units] };
+        ? convert
+          ? inReaderUnits(f, { text, unit: pick }, units)
+          : { text, unit: pick }
+        : { text: raw && !pick && unit ? raw : text, unit: inputUnit(f.qty, units) };
     } else if (f.type === 'checks') {
       state[f.name] = { text: f.normalize ? f.normalize(raw) : raw };
     } else if (f.type === 'select') {
@@ -46,6 +68,18 @@ export function initialState(
   }
   if (units === 'metric') metricPipeDefaults(fields, props, state);
   return state;
+}
+
+/** A value written in the other system, re-expressed as the reader would write it; anything else as it is. */
+function inReaderUnits(f: FieldDef & { type: 'quantity' }, s: FieldState, units: UnitSystem): FieldState {
+  const system = s.unit === undefined ? undefined : unitSystemOf(s.unit);
+  if (system === undefined || system === units) return s;
+  try {
+    const d = asWritten(f.qty, readQuantity(f.qty, s, f.name), units, f.units ?? UNIT_CHOICES[f.qty]);
+    return { text: inputNumber(d.value), unit: d.unit };
+  } catch {
+    return s;
+  }
 }
 
 /** A pipe the MDX or share link does not name starts, for a metric reader, from the metric series. */
@@ -78,17 +112,23 @@ function isKnownUnit(qty: QuantityKind, unit: string): boolean {
   }
 }
 
-/** Re-expresses every quantity field in the other unit system (4 ft → 1.219 m). Fields that do not parse are left alone. */
+/**
+ * Re-expresses every quantity field in the other unit system as a tape would give it
+ * (4 ft → 1.22 m, 0.5 US gal/min → 1.9 L/min). Fields that do not parse are left alone.
+ */
 export function convertState(fields: readonly FieldDef[], state: FormState, units: UnitSystem): FormState {
   const next: FormState = { ...state };
   for (const f of fields) {
     if (f.type !== 'quantity') continue;
     const s = state[f.name];
     if (!s) continue;
+    if (s.text.trim() === '') {
+      next[f.name] = { ...s, unit: inputUnit(f.qty, units) };
+      continue;
+    }
     try {
-      const si = readQuantity(f.qty, s, f.name);
-      const unit = DISPLAY_UNITS[f.qty][units];
-      next[f.name] = { text: inputNumber(fromSI(si, unit, f.qty)), unit };
+      const d = asWritten(f.qty, readQuantity(f.qty, s, f.name), units, f.units ?? UNIT_CHOICES[f.qty]);
+      next[f.name] = { text: inputNumber(d.value), unit: d.unit };
     } catch {
       /* leave what the reader typed */
     }

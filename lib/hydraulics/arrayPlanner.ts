@@ -22,6 +22,7 @@ import { addRangeIssue, efficiency, fallM, flowM3s, liftM, parseInput, siNumber,
 import { finish, step, tq, type CalcOutput, type Step, type Warning } from './steps';
 import { PRACTICE } from './practice';
 import { warn } from './warnings';
+import { qty, say } from './message';
 import { waterProperties } from './water';
 
 /**
@@ -73,7 +74,7 @@ export const arrayPlannerSchema = z
   .check(
     z.superRefine((v, ctx) => {
       if (v.liftM <= v.fallM) {
-        addRangeIssue(ctx, ['liftM'], `must be greater than the fall (${v.fallM} m)`, {
+        addRangeIssue(ctx, ['liftM'], say`must be greater than the fall (${qty('length', v.fallM)})`, {
           min: v.fallM,
           minExclusive: true,
           max: 1000,
@@ -81,12 +82,17 @@ export const arrayPlannerSchema = z
         });
       }
       if (v.staged && v.staged.upperLiftM <= v.staged.upperFallM) {
-        addRangeIssue(ctx, ['staged', 'upperLiftM'], `must be greater than the upper fall (${v.staged.upperFallM} m)`, {
-          min: v.staged.upperFallM,
-          minExclusive: true,
-          max: 1000,
-          unit: 'm',
-        });
+        addRangeIssue(
+          ctx,
+          ['staged', 'upperLiftM'],
+          say`must be greater than the upper fall (${qty('length', v.staged.upperFallM)})`,
+          {
+            min: v.staged.upperFallM,
+            minExclusive: true,
+            max: 1000,
+            unit: 'm',
+          },
+        );
       }
     }),
   );
@@ -229,7 +235,7 @@ export function planArray(input: ArrayPlannerInput): CalcOutput<ArrayPlannerResu
         warnings.push(
           warn(
             'fitting-in-drive-pipe',
-            `The fittings in ${p.label}'s drive pipe (ΣK = ${p.fittingsK.toFixed(2)}) cost about ${p.fittingHeadLossM.toFixed(3)} m of the ${H.toFixed(3)} m fall (${(share * 100).toFixed(1)} %) at the closing velocity of ${p.closureVelocityMs.toFixed(2)} m/s, and about as much of its delivery. Keep drive pipes straight.`,
+            say`The fittings in ${p.label}'s drive pipe (ΣK = ${p.fittingsK.toFixed(2)}) cost about ${qty('length', p.fittingHeadLossM)} of the ${qty('length', H)} fall (${(share * 100).toFixed(1)} %) at the closing velocity of ${qty('velocity', p.closureVelocityMs)}, and about as much of its delivery. Keep drive pipes straight.`,
           ),
         );
       }
@@ -300,7 +306,7 @@ export function planArray(input: ArrayPlannerInput): CalcOutput<ArrayPlannerResu
     warnings.push(
       warn(
         'delivery-friction-high',
-        `The shared delivery line loses ${(sol.frictionHeadM + sol.minorHeadM).toFixed(2)} m at the combined flow, ${(lossShare * 100).toFixed(0)} % of the lift; every pump pushes against it. A larger line would let each pump deliver more.`,
+        say`The shared delivery line loses ${qty('length', sol.frictionHeadM + sol.minorHeadM)} at the combined flow, ${(lossShare * 100).toFixed(0)} % of the lift; every pump pushes against it. A larger line would let each pump deliver more.`,
       ),
     );
   }
@@ -321,7 +327,7 @@ export function planArray(input: ArrayPlannerInput): CalcOutput<ArrayPlannerResu
       warnings.push(
         warn(
           'drive-exceeds-source',
-          `The pumps need ${(totalDrive * 6e4).toFixed(1)} L/min of drive water but the source spares ${(v.sourceSpareFlowM3s * 6e4).toFixed(1)} L/min. The intake will draw down, suck air and the pumps will stop; run fewer pumps or smaller ones.`,
+          say`The pumps need ${qty('flow', totalDrive)} of drive water but the source spares ${qty('flow', v.sourceSpareFlowM3s)}. The intake will draw down, suck air and the pumps will stop; run fewer pumps or smaller ones.`,
         ),
       );
     } else if (sourceShare > PRACTICE.sourceShareCaution.value) {
@@ -335,7 +341,7 @@ export function planArray(input: ArrayPlannerInput): CalcOutput<ArrayPlannerResu
     warnings.push(
       warn(
         'diversion-rules',
-        `This plan takes ${(totalDrive * 6e4).toFixed(1)} L/min through the pumps (most of it returns below them); local rules decide how much may be diverted and whether a permit is needed.`,
+        say`This plan takes ${qty('flow', totalDrive)} through the pumps (most of it returns below them); local rules decide how much may be diverted and whether a permit is needed.`,
       ),
     );
   }
@@ -447,7 +453,7 @@ function planStage(
     warnings.push(
       warn(
         'upper-pump-part-time',
-        `The lower pumps fill the tank at ${(S * 6e4).toFixed(2)} L/min but the upper pump uses ${(Qu * 6e4).toFixed(2)} L/min; it can run only about ${(duty * 100).toFixed(0)} % of the time${needed > 0 ? `. About ${needed} lower pumps like ${lower.pump.label} would keep it running around the clock` : ''}.`,
+        say`The lower pumps fill the tank at ${qty('flow', S)} but the upper pump uses ${qty('flow', Qu)}; it can run only about ${(duty * 100).toFixed(0)} % of the time${needed > 0 ? `. About ${needed} lower pumps like ${lower.pump.label} would keep it running around the clock` : ''}.`,
       ),
     );
   }

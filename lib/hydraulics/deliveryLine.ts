@@ -12,6 +12,7 @@ import { flowM3s, liftM, parseInput, siNumber, waterTempC } from './schemaKit';
 import { finish, step, tq, type CalcOutput, type Step, type Warning } from './steps';
 import { PRACTICE } from './practice';
 import { warn } from './warnings';
+import { qty, say } from './message';
 import { G, waterProperties } from './water';
 
 export const deliveryLineSchema = z.object({
@@ -226,7 +227,7 @@ export function checkDeliveryLine(input: DeliveryLineInput): CalcOutput<Delivery
     warnings.push(
       warn(
         'no-standard-pipe-meets-target',
-        `No ${series} size from ½" to 4" keeps the loss under ${target.toFixed(2)} m at this flow and length.`,
+        say`No ${series} size from ½" to 4" keeps the loss under ${qty('length', target)} at this flow and length.`,
       ),
     );
   }
@@ -235,14 +236,14 @@ export function checkDeliveryLine(input: DeliveryLineInput): CalcOutput<Delivery
     warnings.push(
       warn(
         'delivery-loss-high',
-        `The line loses ${lossNow.toFixed(2)} m, more than the target of ${target.toFixed(2)} m (${((lossNow / h) * 100).toFixed(0)} % of the lift); the pump must push against it.${smallest ? ` ${smallest.nominal}" ${series} would keep it to ${smallest.lossM.toFixed(2)} m.` : ''}`,
+        say`The line loses ${qty('length', lossNow)}, more than the target of ${qty('length', target)} (${((lossNow / h) * 100).toFixed(0)} % of the lift); the pump must push against it.${smallest ? say` ${smallest.nominal}" ${series} would keep it to ${qty('length', smallest.lossM)}.` : ''}`,
       ),
     );
   if (loss.velocityMs > HIGH_VELOCITY)
     warnings.push(
       warn(
         'delivery-velocity-high',
-        `Water moves at ${loss.velocityMs.toFixed(2)} m/s, above the 1.5 m/s (5 ft/s) usual for plastic lines; losses and surges grow with speed.`,
+        say`Water moves at ${qty('velocity', loss.velocityMs)}, above the ${qty('velocity', 1.5)} usual for plastic lines; losses and surges grow with speed.`,
       ),
     );
   if (fr.regime === 'transitional')
@@ -256,7 +257,7 @@ export function checkDeliveryLine(input: DeliveryLineInput): CalcOutput<Delivery
     warnings.push(
       warn(
         'hazen-williams-outside-range',
-        `Hazen-Williams was fitted to turbulent water flow in larger mains; here (Re = ${loss.reynolds.toFixed(0)}, D = ${(D * 1000).toFixed(1)} mm) its ${hw.toFixed(3)} m is only a second opinion — the Darcy-Weisbach ${loss.frictionHeadM.toFixed(3)} m is the one to use.`,
+        say`Hazen-Williams was fitted to turbulent water flow in larger mains; here (Re = ${loss.reynolds.toFixed(0)}, D = ${qty('smallLength', D)}) its ${qty('length', hw)} is only a second opinion — the Darcy-Weisbach ${qty('length', loss.frictionHeadM)} is the one to use.`,
       ),
     );
   }
@@ -264,7 +265,7 @@ export function checkDeliveryLine(input: DeliveryLineInput): CalcOutput<Delivery
     warnings.push(
       warn(
         'delivery-pressure-above-rating',
-        `The pressure at the pump, ${(p / 1000).toFixed(0)} kPa (${(p / 6894.757).toFixed(0)} psi), is above the line's rating of ${(line.pressureRatingPa / 1000).toFixed(0)} kPa; use a higher-rated pipe for the lower part of the run.`,
+        say`The pressure at the pump, ${qty('pressure', p)}, is above the line's rating of ${qty('pressure', line.pressureRatingPa)}; use a higher-rated pipe for the lower part of the run.`,
       ),
     );
   }

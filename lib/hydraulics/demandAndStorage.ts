@@ -8,6 +8,7 @@ import { GARDEN_DEPTH_PER_WEEK_M, LIVESTOCK_KINDS, householdRate, livestockRates
 import { flowM3s, parseInput, siNumber } from './schemaKit';
 import { finish, step, tq, type CalcOutput, type Step, type Warning } from './steps';
 import { warn } from './warnings';
+import { qty, say } from './message';
 
 export const demandAndStorageSchema = z.object({
   /** ram delivery averaged over 24 hours, m³/s */
@@ -210,7 +211,7 @@ export function planDemandAndStorage(input: DemandAndStorageInput): CalcOutput<D
     warnings.push(
       warn(
         'demand-exceeds-delivery',
-        `The demand of ${(total * 1000).toFixed(0)} L/day is more than the ${(delivery * 1000).toFixed(0)} L/day the ram delivers; add a pump, find more fall or trim the demand.`,
+        say`The demand of ${qty('dailyVolume', total)} is more than the ${qty('dailyVolume', delivery)} the ram delivers; add a pump, find more fall or trim the demand.`,
       ),
     );
   }
@@ -226,7 +227,7 @@ export function planDemandAndStorage(input: DemandAndStorageInput): CalcOutput<D
     warnings.push(
       warn(
         'overflow-needed',
-        `The ram delivers ${(surplus * 1000).toFixed(0)} L/day more than is used and never stops; give the tank an overflow back to the stream rather than shutting the delivery line, which makes the ram hammer.`,
+        say`The ram delivers ${qty('dailyVolume', surplus)} more than is used and never stops; give the tank an overflow back to the stream rather than shutting the delivery line, which makes the ram hammer.`,
       ),
     );
   }

@@ -16,6 +16,7 @@ import { finish, step, tq, type CalcOutput, type Step, type Warning } from './st
 import { joukowskySurge, slowClosureSurge } from './transients';
 import { PRACTICE } from './practice';
 import { warn } from './warnings';
+import { qty, say } from './message';
 import { G, waterProperties } from './water';
 
 /**
@@ -107,7 +108,7 @@ export const drivePipeCheckSchema = z
         );
       }
       if (v.liftM !== undefined && v.liftM <= v.fallM) {
-        addRangeIssue(ctx, ['liftM'], `must be greater than the fall (${v.fallM} m)`, {
+        addRangeIssue(ctx, ['liftM'], say`must be greater than the fall (${qty('length', v.fallM)})`, {
           min: v.fallM,
           minExclusive: true,
           max: 1000,
@@ -362,19 +363,19 @@ export function checkDrivePipe(input: DrivePipeCheckInput): CalcOutput<DrivePipe
       '',
     ),
   );
-  const kPa = (p: number) => `${(p / 1000).toFixed(0)} kPa (${(p / 6894.757).toFixed(0)} psi)`;
+  const kPa = (p: number) => qty('pressure', p);
   if (peak > rating) {
     warnings.push(
       warn(
         'surge-exceeds-rating',
-        `A sudden stop from full flow can reach ${kPa(peak)}, above the pipe's rating of ${kPa(rating)}; the drive pipe or its fittings can burst.`,
+        say`A sudden stop from full flow can reach ${kPa(peak)}, above the pipe's rating of ${kPa(rating)}; the drive pipe or its fittings can burst.`,
       ),
     );
   } else if (margin < v.requiredMargin) {
     warnings.push(
       warn(
         'surge-margin-low',
-        `The peak of ${kPa(peak)} leaves a margin of only ${margin.toFixed(2)} on the ${kPa(rating)} rating (wanted ${v.requiredMargin}; ${RATING_MARGIN.source}); the pipe sees this surge at every beat, and fatigue adds up.`,
+        say`The peak of ${kPa(peak)} leaves a margin of only ${margin.toFixed(2)} on the ${kPa(rating)} rating (wanted ${v.requiredMargin}; ${RATING_MARGIN.source}); the pipe sees this surge at every beat, and fatigue adds up.`,
       ),
     );
   }
@@ -400,7 +401,7 @@ export function checkDrivePipe(input: DrivePipeCheckInput): CalcOutput<DrivePipe
     warnings.push(
       warn(
         'shut-off-exceeds-rating',
-        `Against a closed delivery the ram can charge its chamber to ${kPa(shutOff)}, above the ${jointWeaker ? "threaded joints' " : ''}rating of ${kPa(weakest)}. Fit a relief valve set below that rating and a gauge on the pump side, and never leave the ram beating against a shut valve.`,
+        say`Against a closed delivery the ram can charge its chamber to ${kPa(shutOff)}, above the ${jointWeaker ? "threaded joints' " : ''}rating of ${kPa(weakest)}. Fit a relief valve set below that rating and a gauge on the pump side, and never leave the ram beating against a shut valve.`,
       ),
     );
   }
@@ -453,7 +454,7 @@ export function checkDrivePipe(input: DrivePipeCheckInput): CalcOutput<DrivePipe
     warnings.push(
       warn(
         'flexible-drive-pipe',
-        `${mat.label} stretches under the surge: the wave travels at ${c.toFixed(0)} m/s instead of about ${cRigid.toFixed(0)} m/s in a rigid pipe, and the pipe soaks up the energy the pump needs. Use steel or PVC for the drive pipe.`,
+        say`${mat.label} stretches under the surge: the wave travels at ${qty('velocity', c)} instead of about ${qty('velocity', cRigid)} in a rigid pipe, and the pipe soaks up the energy the pump needs. Use steel or PVC for the drive pipe.`,
       ),
     );
   }

@@ -1,3 +1,5 @@
+import type { MessagePart } from './message';
+
 /**
  * Typed input errors. Every calculator validates its own input and throws
  * {@link EngineInputError} naming the field and the range it accepts, so a
@@ -19,8 +21,11 @@ export interface FieldRange {
 export interface FieldIssue {
   /** Dotted path of the field, e.g. "fallM" or "drivePipe.lengthM" or "trials.0.timeS". */
   field: string;
+  /** in SI units */
   message: string;
   range?: FieldRange;
+  /** the message with its numbers as quantities, for showing in the reader's units (message.ts) */
+  parts?: MessagePart[];
 }
 
 /** Thrown for invalid input. `field` and `range` describe the first issue; `issues` lists all. */

@@ -9,24 +9,29 @@
 
 // What every calculator returns, and the error a bad input throws.
 export { ENGINE_VERSION } from './version';
-export { EngineInputError } from './errors';
+export { EngineInputError, type FieldIssue } from './errors';
 export { texNum, type CalcOutput, type Step } from './steps';
 export { WARNING_CODES } from './warnings';
+export { metricText, qty, renderMessage, said, say, type MessagePart, type MessageQuantity } from './message';
 
 // Units at the edges: what people type → SI, SI → the reader's units.
 export {
   DISPLAY_UNITS,
   UNIT_CHOICES,
+  asWritten,
   fieldFromDisplay,
   fieldToDisplay,
   fromDisplay,
   fromSI,
+  inputUnit,
   kindOfField,
   parseQuantity,
   readableDisplay,
+  roundAsWritten,
   toDisplay,
   toSI,
   unitLabel,
+  unitSystemOf,
   type QuantityKind,
   type UnitSystem,
 } from './units';

@@ -5,6 +5,8 @@
  */
 import * as z from 'zod/mini';
 import { EngineInputError, describeRange, type FieldIssue, type FieldRange } from './errors';
+import { metricText, qty, renderMessage, say, type MessagePart } from './message';
+import { kindOfField, type QuantityKind } from './units';
 
 /** Ranges keyed by the message they produced; the message is built from the range, so the map is exact. */
 const RANGE_BY_MESSAGE = new Map<string, FieldRange>();
@@ -58,22 +60,61 @@ export const flowM3s = () => siNumber({ min: 0, minExclusive: true, max: 0.1, un
 /** A ram efficiency (D'Aubuisson), dimensionless. */
 export const efficiency = () => siNumber({ min: 0, minExclusive: true, max: 1, unit: '' });
 
-/** Adds a cross-field issue (e.g. lift at or below the fall) with its range, for schemas' superRefine. */
+/**
+ * Adds a cross-field issue (e.g. lift at or below the fall) with its range, for schemas'
+ * superRefine. A message with numbers is written with `say`, so it reaches the reader in
+ * their units.
+ */
 export function addRangeIssue(
   ctx: z.core.$RefinementCtx,
   path: (string | number)[],
-  message: string,
+  message: string | MessagePart[],
   range: FieldRange,
 ): void {
-  ctx.addIssue({ code: 'custom', message, path, params: { range } });
+  const parts = typeof message === 'string' ? undefined : message;
+  const text = parts ? renderMessage(parts, metricText) : (message as string);
+  ctx.addIssue({ code: 'custom', message: text, path, params: { range, parts } });
 }
 
-function issueRange(issue: z.core.$ZodIssue): FieldRange | undefined {
+function issueParams(issue: z.core.$ZodIssue): { range?: FieldRange; parts?: MessagePart[] } {
   if (issue.code === 'custom') {
-    const params = (issue as { params?: { range?: FieldRange } }).params;
-    if (params?.range) return params.range;
+    const params = (issue as { params?: { range?: FieldRange; parts?: MessagePart[] } }).params;
+    if (params?.range) return params;
   }
-  return RANGE_BY_MESSAGE.get(issue.message);
+  return { range: RANGE_BY_MESSAGE.get(issue.message) };
+}
+
+/** The SI unit a range is written in, read back as a quantity kind when the field name does not say. */
+const KIND_OF_SI_UNIT: Record<string, QuantityKind> = {
+  m: 'length',
+  'm³/s': 'flow',
+  'm³/day': 'dailyVolume',
+  'm³': 'volume',
+  'm²': 'area',
+  Pa: 'pressure',
+  'm/s': 'velocity',
+  s: 'time',
+  '°C': 'temperature',
+};
+
+/**
+ * A range in words with its ends as quantities, e.g. "greater than 0 m and at most 100 m".
+ * @example
+ * rangeParts({ min: 0, minExclusive: true, max: 100, unit: 'm' }, 'length')  // → ['greater than ', { kind: 'length', si: 0 }, ' and at most ', { kind: 'length', si: 100 }]
+ */
+export function rangeParts(r: FieldRange, kind: QuantityKind): MessagePart[] {
+  const lo = r.min === undefined ? undefined : say`${r.minExclusive ? 'greater than' : 'at least'} ${qty(kind, r.min)}`;
+  const hi = r.max === undefined ? undefined : say`${r.maxExclusive ? 'less than' : 'at most'} ${qty(kind, r.max)}`;
+  return lo && hi ? say`${lo} and ${hi}` : (lo ?? hi ?? []);
+}
+
+/** An issue's words with quantities: the schema's own, or its range's ends where the message is the range's. */
+function issueParts(field: string, message: string, range: FieldRange | undefined): MessagePart[] | undefined {
+  if (!range || range.unit === '') return undefined;
+  const kind = kindOfField(field) ?? KIND_OF_SI_UNIT[range.unit];
+  const words = describeRange(range);
+  if (!kind || !message.endsWith(words)) return undefined;
+  return say`${message.slice(0, message.length - words.length)}${rangeParts(range, kind)}`;
 }
 
 /**
@@ -84,14 +125,18 @@ function issueRange(issue: z.core.$ZodIssue): FieldRange | undefined {
  * const refused = (() => { try { parseInput(yieldEstimateSchema, input) } catch (e) { return e } })()
  * refused.field  // → 'fallM'
  * [refused.range.min, refused.range.minExclusive, refused.range.max, refused.range.unit]  // → [0, true, 100, 'm']
+ * @example the message keeps its numbers as quantities, for the reader's units
+ * const tooHigh = (() => { try { parseInput(yieldEstimateSchema, { driveFlowM3s: 1e-4, fallM: 101, liftM: 200 }) } catch (e) { return e } })()
+ * tooHigh.issues[0].parts  // → ['must be a number greater than ', { kind: 'length', si: 0 }, ' and at most ', { kind: 'length', si: 100 }]
  */
 export function parseInput<S extends z.ZodMiniType>(schema: S, input: unknown): z.output<S> {
   const r = schema.safeParse(input);
   if (r.success) return r.data;
-  const issues: FieldIssue[] = r.error.issues.map((issue) => ({
-    field: issue.path.length > 0 ? issue.path.map(String).join('.') : '(input)',
-    message: issue.message,
-    range: issueRange(issue),
-  }));
+  const issues: FieldIssue[] = r.error.issues.map((issue) => {
+    const field = issue.path.length > 0 ? issue.path.map(String).join('.') : '(input)';
+    const { range, parts } = issueParams(issue);
+    const withParts = parts ?? issueParts(field, issue.message, range);
+    return { field, message: issue.message, range, ...(withParts ? { parts: withParts } : {}) };
+  });
   throw new EngineInputError(issues);
 }

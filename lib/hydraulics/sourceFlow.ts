@@ -8,6 +8,7 @@ import { flowM3s, parseInput, siNumber } from './schemaKit';
 import { finish, step, tq, type CalcOutput, type Step, type Warning } from './steps';
 import { PRACTICE } from './practice';
 import { warn } from './warnings';
+import { qty, say } from './message';
 import { WEIR_ANGLE_RANGE, fromFeet, toFeet, vNotch90Usbr, vNotchFlow, weirCoefficients, weirLimits } from './weirs';
 
 const base = {
@@ -209,7 +210,7 @@ export function measureSourceFlow(input: SourceFlowInput): CalcOutput<SourceFlow
       warnings.push(
         warn(
           'weir-head-out-of-range',
-          `A head of ${(v.notchHeadM * 1000).toFixed(0)} mm is outside the 61–381 mm (0.2–1.25 ft) the weir equations hold for; ${v.notchHeadM < lim.minHeadM ? 'use a narrower notch' : 'use a wider notch or a larger weir'}.`,
+          say`A head of ${qty('smallLength', v.notchHeadM)} is outside the ${qty('smallLength', 0.061)} to ${qty('smallLength', 0.381)} the weir equations hold for; ${v.notchHeadM < lim.minHeadM ? 'use a narrower notch' : 'use a wider notch or a larger weir'}.`,
         ),
       );
     }

@@ -14,6 +14,7 @@ import { typicalDriveFlow } from './pumpSizes';
 import { estimateDriveFlow } from './ramCycle';
 import { EngineInputError } from './errors';
 import { addRangeIssue, fallM, flowM3s, liftM, parseInput, siNumber, waterTempC } from './schemaKit';
+import { qty, said, say } from './message';
 import { STALL_CAUSES, SYMPTOMS, type StallCauseCode, type Symptom } from './stallCauses';
 import { finish, step, tq, type CalcOutput, type Step, type Warning } from './steps';
 import { waveSpeed } from './transients';
@@ -52,7 +53,7 @@ export const stallCheckSchema = z
   .check(
     z.superRefine((v, ctx) => {
       if (v.site.liftM <= v.site.fallM) {
-        addRangeIssue(ctx, ['site', 'liftM'], `must be greater than the fall (${v.site.fallM} m)`, {
+        addRangeIssue(ctx, ['site', 'liftM'], say`must be greater than the fall (${qty('length', v.site.fallM)})`, {
           min: v.site.fallM,
           minExclusive: true,
           max: 1000,
@@ -282,7 +283,9 @@ export function runStallCheck(input: StallCheckInput): CalcOutput<StallCheckResu
       throw new EngineInputError([
         {
           field: 'site.deliveredFlowM3s',
-          message: `implies an efficiency above 1 with the measured drive flow; at this fall and lift it can be at most ${maxQ.toPrecision(4)} m³/s — check the measurements`,
+          ...said(
+            say`implies an efficiency above 1 with the measured drive flow; at this fall and lift it can be at most ${qty('smallFlow', maxQ)} — check the measurements`,
+          ),
           range: { min: 0, minExclusive: true, max: maxQ, unit: 'm³/s' },
         },
       ]);

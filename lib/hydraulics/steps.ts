@@ -3,6 +3,7 @@
  * in TeX (KaTeX-ready) so a reader can redo each number by hand.
  */
 import type { QuantityKind } from './units';
+import type { MessagePart } from './message';
 import { ENGINE_VERSION } from './version';
 import { EngineInputError } from './errors';
 
@@ -32,8 +33,10 @@ export interface Warning {
   /** stable code, listed in WARNING_CODES */
   code: string;
   severity: Severity;
-  /** plain words, with the numbers that triggered it */
+  /** plain words, with the numbers that triggered it (in SI units) */
   message: string;
+  /** the same words with each number as a quantity, for showing in the reader's units (message.ts) */
+  parts?: MessagePart[];
   /** guide topic slug to read */
   guide: string;
 }

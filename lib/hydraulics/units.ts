@@ -80,8 +80,8 @@ export const DISPLAY_UNITS: Record<QuantityKind, Record<UnitSystem, string>> = {
 export const UNIT_CHOICES: Record<QuantityKind, readonly string[]> = {
   length: ['m', 'ft', 'in', 'mm', 'cm', 'yd'],
   smallLength: ['mm', 'in', 'cm', 'm'],
-  flow: ['L/min', 'L/s', 'gal/min', 'gal/h', 'galimp/min', 'galimp/h', 'm^3/h', 'm^3/s', 'ft^3/s'],
-  smallFlow: ['mL/min', 'L/min', 'cup/min', 'gal/h', 'gal/min', 'galimp/h', 'galimp/min'],
+  flow: ['L/min', 'L/h', 'L/s', 'gal/min', 'gal/h', 'galimp/min', 'galimp/h', 'm^3/h', 'm^3/s', 'ft^3/s'],
+  smallFlow: ['L/h', 'L/min', 'gal/h', 'gal/min', 'mL/min', 'cup/min', 'galimp/h', 'galimp/min'],
   area: ['m^2', 'ft^2', 'acre', 'hectare'],
   volume: ['L', 'gal', 'galimp', 'm^3'],
   dailyVolume: ['L/day', 'gal/day', 'galimp/day', 'm^3/day'],
@@ -148,6 +148,10 @@ const ALIASES: Record<string, string> = {
   lps: 'L/s',
   lph: 'L/h',
   lpd: 'L/day',
+  ft2: 'ft^2',
+  'sq ft': 'ft^2',
+  m2: 'm^2',
+  yd2: 'yd^2',
   cfs: 'ft^3/s',
   cms: 'm^3/s',
   'cu ft': 'ft^3',
@@ -550,4 +554,136 @@ export function readableDisplay(kind: QuantityKind, si: number, system: UnitSyst
   const smaller = BY_SIZE[kind]?.[system].find((s) => Math.abs(plain) < s.below && si !== 0);
   const unit = smaller?.unit ?? plainUnit;
   return { value: unit === plainUnit ? plain : fromSI(si, unit, kind), unit, label: unitLabel(unit) };
+}
+
+/**
+ * The unit an input of this kind opens on when it holds no value yet. Measured delivery
+ * (smallFlow) opens on a unit people time a bucket in, never cups or millilitres a minute.
+ * @example
+ * inputUnit('smallFlow', 'US')  // → 'gal/h'
+ * inputUnit('smallFlow', 'metric')  // → 'L/h'
+ * inputUnit('length', 'metric')  // → 'm'
+ */
+export function inputUnit(kind: QuantityKind, system: UnitSystem): string {
+  return PLAIN_INPUT[kind]?.[system] ?? DISPLAY_UNITS[kind][system];
+}
+const PLAIN_INPUT: Partial<Record<QuantityKind, Record<UnitSystem, string>>> = {
+  smallFlow: { US: 'gal/h', metric: 'L/h' },
+};
+
+/** Unit words of each system; time (s, min, h, day) belongs to both, the imperial gallon to neither. */
+const US_WORDS = new Set(['ft', 'in', 'yd', 'mi', 'gal', 'cup', 'qt', 'pint', 'floz', 'psi', 'lbf', 'acre', 'tempF']);
+const METRIC_WORDS = new Set([
+  'm',
+  'mm',
+  'cm',
+  'km',
+  'L',
+  'l',
+  'mL',
+  'ml',
+  'Pa',
+  'kPa',
+  'MPa',
+  'GPa',
+  'bar',
+  'hectare',
+]);
+METRIC_WORDS.add('tempC');
+
+/**
+ * Which system a unit belongs to, so an input in the other one can be re-expressed:
+ * 'US', 'metric', 'imperial' (the imperial gallon, foreign to both) or undefined for
+ * units both share (seconds, hours, a plain number).
+ * @example
+ * unitSystemOf('gpm')  // → 'US'
+ * unitSystemOf('L/min')  // → 'metric'
+ * unitSystemOf('m^3/day')  // → 'metric'
+ * unitSystemOf('igpm')  // → 'imperial'
+ * unitSystemOf('min')  // → undefined
+ */
+export function unitSystemOf(unit: string): UnitSystem | 'imperial' | undefined {
+  const words = canonicalUnit(unit)
+    .split(/[/*^\s\d]+/)
+    .filter(Boolean);
+  if (words.some((w) => w.startsWith('galimp'))) return 'imperial';
+  if (words.some((w) => US_WORDS.has(w))) return 'US';
+  if (words.some((w) => METRIC_WORDS.has(w))) return 'metric';
+  return undefined;
+}
+
+const roundTo = (x: number, step: number) => Math.round(x / step) * step;
+const significant = (x: number, digits: number) => (x === 0 ? 0 : Number(x.toPrecision(digits)));
+
+/**
+ * A value in `unit` rounded as a person writes it off a tape, a gauge or a bucket:
+ * metres to the centimetre under 5 m, then to 0.1 m, whole metres from 100 m; feet to
+ * 0.1 ft under 10 ft, then whole feet; inches to the eighth from half an inch (finer
+ * as two figures); millimetres whole from 10 mm; degrees whole; flows and volumes to two
+ * significant figures under 10 and three above; velocities to two; anything else three.
+ * Rules of common practice, no source. For converted defaults and values re-expressed
+ * after a unit switch, never for what the reader typed.
+ * @example 2 ft, 4 ft and 24 ft in metres; 0.6 m in feet
+ * roundAsWritten(0.6096, 'm', 'length')  // → 0.61
+ * roundAsWritten(1.2192, 'm', 'length')  // → 1.22
+ * roundAsWritten(7.3152, 'm', 'length')  // → 7.3
+ * roundAsWritten(1.9685, 'ft', 'length')  // → 2
+ * @example 3/4 in in mm; 25 mm in inches; 2 US gal/min in L/min
+ * roundAsWritten(19.05, 'mm', 'smallLength')  // → 19
+ * roundAsWritten(0.98425, 'in', 'smallLength')  // → 1
+ * roundAsWritten(7.5708, 'L/min', 'flow')  // → 7.6
+ */
+export function roundAsWritten(value: number, unit: string, kind: QuantityKind): number {
+  if (!Number.isFinite(value)) return value;
+  const a = Math.abs(value);
+  let r: number;
+  switch (canonicalUnit(unit)) {
+    case 'm':
+      r = roundTo(value, a < 5 ? 0.01 : a < 100 ? 0.1 : 1);
+      break;
+    case 'ft':
+      r = roundTo(value, a < 10 ? 0.1 : 1);
+      break;
+    case 'in':
+      r = a >= 0.5 ? roundTo(value, 0.125) : significant(value, 2);
+      break;
+    case 'mm':
+      r = a >= 10 ? Math.round(value) : significant(value, 2);
+      break;
+    case 'cm':
+      r = a >= 10 ? Math.round(value) : roundTo(value, 0.1);
+      break;
+    case 'tempC':
+    case 'tempF':
+      r = Math.round(value);
+      break;
+    default:
+      if (kind === 'flow' || kind === 'smallFlow' || kind === 'dailyVolume' || kind === 'volume')
+        r = significant(value, a < 10 ? 2 : 3);
+      else r = significant(value, kind === 'velocity' ? 2 : 3);
+  }
+  // 1.22 rather than 1.2200000000000002: the step's own rounding error is far below the digits kept
+  return Number(r.toPrecision(12));
+}
+
+/**
+ * An SI value as an input would open on it in a reader's system: the unit a person
+ * writes it in by size ({@link readableDisplay}), unless the field offers only other
+ * units, and the value rounded by {@link roundAsWritten}.
+ * @example 4 ft for a metric reader; 0.5 US gal/min of delivery for a metric reader
+ * asWritten('length', 1.2192, 'metric')  // → { value: 1.22, unit: 'm', label: 'm' }
+ * asWritten('smallFlow', 3.15450982e-5, 'metric')  // → { value: 1.9, unit: 'L/min', label: 'L/min' }
+ */
+export function asWritten(
+  kind: QuantityKind,
+  si: number,
+  system: UnitSystem,
+  offered: readonly string[] = UNIT_CHOICES[kind],
+): DisplayValue {
+  let unit = readableDisplay(kind, si, system).unit;
+  if (!offered.includes(unit)) {
+    const plain = inputUnit(kind, system);
+    unit = offered.includes(plain) ? plain : (offered.find((u) => unitSystemOf(u) === system) ?? plain);
+  }
+  return { value: roundAsWritten(fromSI(si, unit, kind), unit, kind), unit, label: unitLabel(unit) };
 }

@@ -4,6 +4,7 @@
  * raised so they can carry the numbers.
  */
 import type { Severity, Warning } from './steps';
+import { metricText, renderMessage, type MessagePart } from './message';
 
 /** Guide topic slugs (content/guides). */
 export const GUIDES = [
@@ -102,15 +103,28 @@ const SAFETY: ReadonlySet<WarningCode> = new Set<WarningCode>([
 ]);
 
 /**
- * Builds a warning; safety warnings get the deferral sentence appended.
+ * Builds a warning; safety warnings get the deferral sentence appended. A message with
+ * quantities (written with `say`) keeps them as parts, so the reader sees them in their
+ * own units; `message` is its metric reading.
  * @example
  * warn('frost-risk', 'Drain it.').severity  // → 'caution'
  * warn('frost-risk', 'Drain it.').guide  // → 'care-frost-floods-and-water-rights'
  * warn('frost-risk', 'Drain it.').message  // → `Drain it. ${DEFER}`
  * warn('few-trials', 'Time three fills.').message  // → 'Time three fills.'
+ * @example a quantity in the words
+ * warn('fall-below-minimum', ['A fall of ', qty('length', 0.5), '.']).message  // → 'A fall of 0.5 m.'
+ * warn('fall-below-minimum', ['A fall of ', qty('length', 0.5), '.']).parts[1]  // → { kind: 'length', si: 0.5 }
  */
-export function warn(code: WarningCode, message: string): Warning {
+export function warn(code: WarningCode, message: string | MessagePart[]): Warning {
   const info = WARNING_INFO[code];
-  const text = SAFETY.has(code) ? `${message} ${DEFER}` : message;
-  return { code, severity: info.severity, message: text, guide: info.guide };
+  const parts: MessagePart[] = typeof message === 'string' ? [message] : [...message];
+  if (SAFETY.has(code)) parts.push(` ${DEFER}`);
+  const warning: Warning = {
+    code,
+    severity: info.severity,
+    message: renderMessage(parts, metricText),
+    guide: info.guide,
+  };
+  if (parts.some((p) => typeof p !== 'string')) warning.parts = parts;
+  return warning;
 }

@@ -16,6 +16,7 @@ import { addRangeIssue, efficiency, fallM, flowM3s, liftM, parseInput, siNumber,
 import { finish, step, tq, type CalcOutput, type Step, type Warning } from './steps';
 import { PRACTICE, fallRarelyViable } from './practice';
 import { warn } from './warnings';
+import { qty, say } from './message';
 import { G, waterProperties } from './water';
 
 export const yieldEstimateSchema = z
@@ -41,7 +42,7 @@ export const yieldEstimateSchema = z
         addRangeIssue(
           ctx,
           ['liftM'],
-          `must be greater than the fall (${v.fallM} m): a ram lifts water above its source`,
+          say`must be greater than the fall (${qty('length', v.fallM)}): a ram lifts water above its source`,
           {
             min: v.fallM,
             minExclusive: true,
@@ -70,7 +71,7 @@ export const yieldEstimateSchema = z
           addRangeIssue(
             ctx,
             ['measuredDeliveredFlowM3s'],
-            `implies an efficiency above 1; at this fall and lift it can be at most ${maxQ.toPrecision(4)} m³/s — check the measurements`,
+            say`implies an efficiency above 1; at this fall and lift it can be at most ${qty('smallFlow', maxQ)} — check the measurements`,
             {
               min: 0,
               minExclusive: true,
@@ -268,7 +269,7 @@ export function estimateYield(input: YieldEstimateInput): CalcOutput<YieldEstima
     warnings.push(
       warn(
         'fall-below-minimum',
-        `A fall of ${H.toFixed(2)} m is at or below the ${PRACTICE.minFallM.value} m most rams need to beat reliably; such a site is rarely viable (${PRACTICE.minFallM.source}).`,
+        say`A fall of ${qty('length', H)} is at or below the ${qty('length', PRACTICE.minFallM.value)} most rams need to beat reliably; such a site is rarely viable (${PRACTICE.minFallM.source}).`,
       ),
     );
   if (r < 2)
@@ -282,7 +283,7 @@ export function estimateYield(input: YieldEstimateInput): CalcOutput<YieldEstima
     warnings.push(
       warn(
         'lift-ratio-beyond-range',
-        `A lift of ${r.toFixed(1)} times the fall is beyond what a ${pumpType} ram is expected to manage (about ${maxLiftRatio(pumpType)} times, ${maxLift.toFixed(1)} m here). Look for more fall or lift in stages.`,
+        say`A lift of ${r.toFixed(1)} times the fall is beyond what a ${pumpType} ram is expected to manage (about ${maxLiftRatio(pumpType)} times, ${qty('length', maxLift)} here). Look for more fall or lift in stages.`,
       ),
     );
   }

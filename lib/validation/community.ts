@@ -67,6 +67,9 @@ export const accountSettingsSchema = z.object({
 });
 export type AccountSettingsInput = z.output<typeof accountSettingsSchema>;
 
+/** The header's unit switch, saved for a member. */
+export const unitsChoiceSchema = z.object({ units: accountSettingsSchema.shape.units });
+
 export const safetyCheckSchema = z.object({
   verdict: z.enum(SAFETY_VERDICTS, { error: "verdict must be 'sound' or 'needs changes'" }),
   notes: optionalText('notes', 4000),

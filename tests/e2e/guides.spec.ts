@@ -21,14 +21,14 @@ test('the beginner’s journey: a checked guide, its caution, a live calculator,
   const before = await delivered(page).textContent();
   await card.getByLabel('Lift (delivery head)', { exact: true }).fill('40');
   await expect(delivered(page)).not.toHaveText(before ?? '');
-  await expect(delivered(page)).toContainText('US cups/min');
+  await expect(delivered(page)).toContainText('US gal/h');
 
-  // Switch units for the whole site: the same fall shows in metres.
+  // Switch units for the whole site: the same fall shows in metres, as a tape gives it (4 ft = 1.22 m).
   await press(page.getByRole('banner').getByText('Metric'));
-  await expect(card.getByLabel('Fall (supply head)', { exact: true })).toHaveValue('1.219');
+  await expect(card.getByLabel('Fall (supply head)', { exact: true })).toHaveValue('1.22');
   await expect(card.getByLabel('Fall (supply head) unit')).toHaveValue('m');
-  await expect(card.getByLabel('Lift (delivery head)', { exact: true })).toHaveValue('12.19');
-  await expect(delivered(page)).toContainText('mL/min');
+  await expect(card.getByLabel('Lift (delivery head)', { exact: true })).toHaveValue('12.2');
+  await expect(delivered(page)).toContainText('L/h');
   const metricResult = await delivered(page).textContent();
 
   // The share link opens the same inputs and result in a fresh page.
@@ -39,8 +39,8 @@ test('the beginner’s journey: a checked guide, its caution, a live calculator,
   const other = await fresh.newPage();
   await other.goto(new URL(href!, page.url()).toString());
   const card2 = firstCard(other);
-  await expect(card2.getByLabel('Fall (supply head)', { exact: true })).toHaveValue('1.219');
-  await expect(card2.getByLabel('Lift (delivery head)', { exact: true })).toHaveValue('12.19');
+  await expect(card2.getByLabel('Fall (supply head)', { exact: true })).toHaveValue('1.22');
+  await expect(card2.getByLabel('Lift (delivery head)', { exact: true })).toHaveValue('12.2');
   await expect(delivered(other)).toHaveText(metricResult ?? '');
   await fresh.close();
 });

@@ -103,6 +103,7 @@ const SAMPLES: Record<string, (ids: Record<string, number>) => Sample> = {
   'PUT /api/admin/users/[id]/role': (ids) => ({ params: { id: String(ids.member) }, body: { role: 'member' } }),
   'GET /api/account/settings': () => ({}),
   'PUT /api/account/settings': () => ({ body: { displayName: 'Same Name', region: '', bio: '', units: 'US' } }),
+  'PUT /api/account/units': () => ({ body: { units: 'US' } }),
   'POST /api/account/sign-out-everywhere': () => ({}),
   // multipart cannot be sent as JSON: an allowed caller gets 400 for the JSON body, never 401/403
   'POST /api/photos': () => ({ body: {} }),
@@ -188,6 +189,7 @@ const SAMPLES: Record<string, (ids: Record<string, number>) => Sample> = {
 const SELF_ONLY = new Set([
   'GET /api/account/settings',
   'PUT /api/account/settings',
+  'PUT /api/account/units',
   'GET /api/account/mail',
   'PUT /api/account/mail',
 ]);

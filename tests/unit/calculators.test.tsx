@@ -71,13 +71,14 @@ describe('share links', () => {
     expect(a.ok).toBe(true);
   });
 
-  it('survives a switch of units: 4 ft becomes 1.219 m and reads back the same', () => {
+  it('survives a switch of units: 4 ft becomes 1.22 m, as a tape gives it', () => {
     const def = calculatorDefs['yield-estimate'];
     const us = initialState(def.fields, { fall: '4 ft', lift: '29 ft', driveFlow: '2 gal/min' }, {}, 'US');
     const metric = convertState(def.fields, us, 'metric');
-    // 4 × 0.3048 = 1.2192 m (NIST SP 811, 2008), shown to 4 significant figures
-    expect(metric.fallM).toEqual({ text: '1.219', unit: 'm' });
-    // 2 US gal/min × 3.785411784 L = 7.571 L/min (NIST Handbook 44, Appendix C: 1 US gallon = 231 in³)
-    expect(metric.driveFlowM3s).toEqual({ text: '7.571', unit: 'L/min' });
+    // 4 × 0.3048 = 1.2192 m (NIST SP 811, 2008), to the centimetre (common practice, no source)
+    expect(metric.fallM).toEqual({ text: '1.22', unit: 'm' });
+    // 2 US gal/min × 3.785411784 L = 7.571 L/min (NIST Handbook 44, Appendix C: 1 US gallon = 231 in³),
+    // to two significant figures (common practice, no source)
+    expect(metric.driveFlowM3s).toEqual({ text: '7.6', unit: 'L/min' });
   });
 });

@@ -1,6 +1,7 @@
 'use client';
 
 import { useState, type FormEvent } from 'react';
+import { useSession } from 'next-auth/react';
 import { useUnits } from '@/components/units/UnitsProvider';
 import { FieldError, inputClass, labelClass, SaveRow, sendJson, type FormError } from '@/components/forms/api';
 
@@ -13,7 +14,13 @@ export interface SettingsValues {
 
 /** Display name, region, bio and units; the units also switch the whole site at once. */
 export function SettingsForm({ initial }: { initial: SettingsValues }) {
-  const { setUnits } = useUnits();
+  const { units: live, adoptUnits } = useUnits();
+  const { update } = useSession();
+  // The header's switch saves the same preference: the radios follow it while this page is open.
+  const [choice, setChoice] = useState({ units: initial.units, live });
+  if (choice.live !== live) setChoice({ units: live, live });
+  const units = choice.units;
+  const setUnitsChoice = (u: SettingsValues['units']) => setChoice({ units: u, live });
   const [error, setError] = useState<FormError | null>(null);
   const [busy, setBusy] = useState(false);
   const [saved, setSaved] = useState(false);
@@ -25,7 +32,7 @@ export function SettingsForm({ initial }: { initial: SettingsValues }) {
       displayName: String(f.get('displayName') ?? ''),
       region: String(f.get('region') ?? ''),
       bio: String(f.get('bio') ?? ''),
-      units: f.get('units') === 'metric' ? 'metric' : 'US',
+      units,
     };
     setBusy(true);
     setError(null);
@@ -34,8 +41,10 @@ export function SettingsForm({ initial }: { initial: SettingsValues }) {
     setBusy(false);
     if (!out.ok) return setError(out.error);
     setSaved(true);
-    // The response set the cookie too; this tells the header's switch and refreshes server-drawn numbers.
-    setUnits(out.data.units);
+    // The response set the cookie too; this tells the header's switch, refreshes server-drawn
+    // numbers and brings the session up to date, so every part of the site agrees at once.
+    adoptUnits(out.data.units);
+    void update();
   }
 
   return (
@@ -73,10 +82,24 @@ export function SettingsForm({ initial }: { initial: SettingsValues }) {
         <legend className={labelClass}>Units</legend>
         <div className="mt-1 flex gap-4">
           <label className="flex items-center gap-2">
-            <input type="radio" name="units" value="US" defaultChecked={initial.units === 'US'} /> US (ft, gal)
+            <input
+              type="radio"
+              name="units"
+              value="US"
+              checked={units === 'US'}
+              onChange={() => setUnitsChoice('US')}
+            />{' '}
+            US (ft, gal)
           </label>
           <label className="flex items-center gap-2">
-            <input type="radio" name="units" value="metric" defaultChecked={initial.units === 'metric'} /> Metric (m, L)
+            <input
+              type="radio"
+              name="units"
+              value="metric"
+              checked={units === 'metric'}
+              onChange={() => setUnitsChoice('metric')}
+            />{' '}
+            Metric (m, L)
           </label>
         </div>
         <FieldError error={error} field="units" />

@@ -5,6 +5,7 @@ import { apiError } from '@/lib/http/errors';
 import { guarded } from '@/lib/http/guard';
 import { keepToolFields, saveWorkedCalculation } from '@/lib/calculations/store';
 import { calculatorInputNames, computeFromForm } from '@/lib/calculators';
+import { unitPreferenceOf } from '@/lib/units/preference';
 
 export const dynamic = 'force-dynamic';
 
@@ -22,7 +23,8 @@ export async function POST(request: Request) {
       if ('response' in body) return body.response;
       const { tool, title } = body.data;
       const form = keepToolFields(body.data.inputs, calculatorInputNames(tool));
-      const computed = computeFromForm(tool, form);
+      // a refusal names its numbers in the reader's units, as the card beside the form does
+      const computed = computeFromForm(tool, form, unitPreferenceOf(request));
       if (!computed.ok)
         return apiError(
           422,

@@ -6,15 +6,17 @@ import type { CalcOutput } from '@/lib/hydraulics';
 import {
   computeForm,
   convertState,
-  displayQuantity,
+  formatMessage,
   formatNumber,
   initialState,
+  readableQuantity,
   shareQuery,
   verdictFor,
   visibleFields,
   type Calculator,
   type FieldDef,
   type FormState,
+  type OpenIn,
 } from '@/lib/calculators';
 import { useUnits } from '@/components/units/UnitsProvider';
 import { calculatorView } from '../views';
@@ -32,16 +34,19 @@ import { VerdictLine } from './VerdictLine';
 export function CalculatorCard({
   def,
   props = {},
+  openIn = 'all',
   onOutput,
 }: {
   def: Calculator;
   props?: Record<string, string | undefined>;
+  /** 'defaults' for a share link, whose values open exactly as the sharer typed them */
+  openIn?: OpenIn;
   onOutput?: (state: FormState, output: CalcOutput<unknown> | null) => void;
 }) {
   const { units } = useUnits();
   // every id from useId, so the same calculator twice on one page keeps its labels to itself
   const uid = useId();
-  const [state, setState] = useState<FormState>(() => initialState(def.fields, props, def.defaults, units));
+  const [state, setState] = useState<FormState>(() => initialState(def.fields, props, def.defaults, units, openIn));
   const lastUnits = useRef(units);
   const [copied, setCopied] = useState(false);
 
@@ -53,7 +58,7 @@ export function CalculatorCard({
     }
   }, [units, def.fields]);
 
-  const outcome = useMemo(() => computeForm(def, state), [def, state]);
+  const outcome = useMemo(() => computeForm(def, state, units), [def, state, units]);
   useEffect(() => {
     onOutput?.(state, outcome.ok ? outcome.output : null);
   }, [state, outcome, onOutput]);
@@ -280,7 +285,7 @@ function Results({
             typeof r.value === 'string'
               ? { value: r.value, unit: r.unit ?? '' }
               : r.qty
-                ? displayQuantity(r.qty, r.value, units)
+                ? readableQuantity(r.qty, r.value, units)
                 : { value: formatNumber(r.value), unit: r.unit ?? '' };
           return (
             <div key={r.label} className={r.emphasis ? 'rounded-md bg-creek-50 p-2 dark:bg-creek-800' : ''}>
@@ -301,7 +306,7 @@ function Results({
               data-warning={w.code}
             >
               <span aria-hidden="true">⚠ </span>
-              {w.message}{' '}
+              {formatMessage(w, units)}{' '}
               <a href={`/guides/${w.guide}`} className="cw-link">
                 Read more
               </a>

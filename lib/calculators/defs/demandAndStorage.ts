@@ -7,6 +7,7 @@ import {
   householdRate,
   livestockRates,
   planDemandAndStorage,
+  roundAsWritten,
   type LivestockKind,
 } from '@/lib/hydraulics';
 import { defineCalculator, type FieldDef, type FormState } from '../types';
@@ -49,7 +50,17 @@ const usGalPerDay = (m3PerDay: number) => `${+fromSI(m3PerDay, 'gal/day', 'daily
 const RATE_DEFAULTS: Record<string, string> = Object.fromEntries(
   ANIMALS.map((a) => [`${a.prop}Rate`, usGalPerDay(livestockRates()[a.kind].typicalM3PerDay)]),
 );
-const same = (a: number, b: number) => Math.abs(a - b) <= 1e-9 * Math.max(Math.abs(a), Math.abs(b));
+/**
+ * A rate stands for the table's when it reads the same as the table's written in litres
+ * or US gallons a day: a metric reader's default opens as 303 L/day for the table's
+ * 80 US gal, and the working should still name the table.
+ */
+const same = (a: number, b: number) =>
+  (['L/day', 'gal/day'] as const).some(
+    (u) =>
+      roundAsWritten(fromSI(a, u, 'dailyVolume'), u, 'dailyVolume') ===
+      roundAsWritten(fromSI(b, u, 'dailyVolume'), u, 'dailyVolume'),
+  );
 const rateField = (name: string) => `rate.${name}`;
 const RATE_OF = new Map(ANIMALS.map((a) => [rateField(a.prop), `animal.${a.prop}`]));
 
@@ -71,13 +82,7 @@ export const demandAndStorage = defineCalculator(planDemandAndStorage, {
       qty: 'dailyVolume',
       help: 'About 80 US gal (303 L) in a US home with mains habits (USGS); a frugal off-grid home uses far less.',
     },
-    {
-      type: 'text',
-      name: 'garden',
-      prop: 'garden',
-      label: 'Garden area',
-      placeholder: '200 ft2',
-    },
+    { type: 'quantity', name: 'gardenAreaM2', prop: 'garden', label: 'Garden area (optional)', qty: 'area' },
     {
       type: 'quantity',
       name: 'gardenDepthPerWeekM',
@@ -120,8 +125,11 @@ export const demandAndStorage = defineCalculator(planDemandAndStorage, {
   toInput: (v) => {
     const animals = (v.animal ?? {}) as Record<string, unknown>;
     const given = (v.rate ?? {}) as Record<string, unknown>;
-    const rateOf = (a: (typeof ANIMALS)[number]) =>
-      typeof given[a.prop] === 'number' ? (given[a.prop] as number) : livestockRates()[a.kind].typicalM3PerDay;
+    const rateOf = (a: (typeof ANIMALS)[number]) => {
+      const table = livestockRates()[a.kind].typicalM3PerDay;
+      const rate = given[a.prop];
+      return typeof rate === 'number' && !same(rate, table) ? rate : table;
+    };
     const rates = ANIMALS.filter((a) => count(animals[a.prop]) > 0);
     return {
       deliveredFlowM3s: Number(v.deliveryPerDay) / 86_400,
@@ -130,7 +138,7 @@ export const demandAndStorage = defineCalculator(planDemandAndStorage, {
       ...(typeof v.perPersonM3PerDay === 'number' && !same(v.perPersonM3PerDay, householdRate().typicalM3PerDay)
         ? { perPersonM3PerDay: v.perPersonM3PerDay }
         : {}),
-      gardenAreaM2: parseArea(String(v.garden ?? '')),
+      gardenAreaM2: typeof v.gardenAreaM2 === 'number' ? v.gardenAreaM2 : 0,
       ...(v.gardenDepthPerWeekM !== undefined ? { gardenDepthPerWeekM: v.gardenDepthPerWeekM } : {}),
       livestock: rates.map((a) =>
         // The table is per 100 birds and counts are whole: 12 chickens go in as one flock at 12/100 of the table's rate.

@@ -7,11 +7,9 @@ import { apiError } from '@/lib/http/errors';
 import { guarded } from '@/lib/http/guard';
 import { accountSettingsSchema } from '@/lib/validation/community';
 import { displayNameSchema } from '@/lib/validation/account';
-import { UNITS_COOKIE } from '@/lib/units/preference';
+import { UNITS_COOKIE, UNITS_COOKIE_OPTIONS } from '@/lib/units/preference';
 
 export const dynamic = 'force-dynamic';
-
-const ONE_YEAR_S = 60 * 60 * 24 * 365;
 
 function settingsView(u: User) {
   return {
@@ -52,8 +50,8 @@ export async function PUT(request: Request) {
     });
     if (!saved) return apiError(401, 'Sign in to change your settings.', undefined, 'unauthenticated');
     const res = NextResponse.json(settingsView(saved));
-    // Not httpOnly: the header's unit switch reads and writes the same cookie in the browser.
-    res.cookies.set(UNITS_COOKIE, units, { path: '/', maxAge: ONE_YEAR_S, sameSite: 'lax' });
+    // the one unit preference: saved above, and the cookie every page and the header's switch read
+    res.cookies.set(UNITS_COOKIE, units, UNITS_COOKIE_OPTIONS);
     return res;
   });
 }
