@@ -1,7 +1,6 @@
 import Link from 'next/link';
 import type { QuestionSummary } from '@/lib/questions/list';
-
-const dateFmt = new Intl.DateTimeFormat('en', { day: 'numeric', month: 'short', year: 'numeric', timeZone: 'UTC' });
+import { formatDate } from '@/lib/dates';
 
 export function QuestionList({ items }: { items: QuestionSummary[] }) {
   if (items.length === 0) return <p className="cw-muted">No questions yet.</p>;
@@ -37,7 +36,7 @@ export function QuestionList({ items }: { items: QuestionSummary[] }) {
               </Link>
             ))}
             <span className="cw-muted ml-auto">
-              {q.author.displayName} · <time dateTime={q.createdAt}>{dateFmt.format(new Date(q.createdAt))}</time>
+              {q.author.displayName} · <time dateTime={q.createdAt}>{formatDate(q.createdAt)}</time>
             </span>
           </div>
         </li>

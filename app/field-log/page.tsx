@@ -11,6 +11,7 @@ import { EfficiencyChart } from '@/components/field-log/EfficiencyChart';
 import { material, pumpsWords, shown, shownValue, size, unitOf } from '@/components/field-log/format';
 import { readUnitPreference } from '@/lib/units/server';
 import { inputClass, labelClass } from '@/components/forms/api';
+import { formatDate } from '@/lib/dates';
 
 export const metadata: Metadata = {
   title: 'Field log',
@@ -184,7 +185,7 @@ export default async function FieldLogPage({
                     </Link>
                     {e.authorId === viewerId ? <span className="cw-muted"> (yours)</span> : null}
                   </td>
-                  <td className="cw-num px-2 py-1">{e.testedOn}</td>
+                  <td className="cw-num whitespace-nowrap px-2 py-1">{formatDate(e.testedOn)}</td>
                   <td className="px-2 py-1">{pumpsWords(e.pumpCount, e.arrangement, e.pumpSize)}</td>
                   <td className="px-2 py-1">
                     {shown('length', e.driveLengthM, units)} of {size(e.driveSize)} {material(e.driveMaterial)}

@@ -14,6 +14,7 @@ import { AnswerComposer, ReplyComposer } from './AnswerComposer';
 import { getJson, sendJson } from '@/components/forms/api';
 import { FlagButton } from '@/components/moderation/FlagButton';
 import { PostMarks } from '@/components/moderation/PostMarks';
+import { formatDate } from '@/lib/dates';
 
 type Viewer = { id: number; handle: string; role: 'member' | 'expert' | 'moderator' | 'admin' } | null;
 
@@ -24,7 +25,7 @@ export function useViewer(): Viewer {
   if (!u?.id || !u.handle || !u.role) return null;
   return { id: u.id, handle: u.handle, role: u.role as NonNullable<Viewer>['role'] };
 }
-const when = (iso: string) => new Date(iso).toUTCString().slice(5, 16);
+const when = formatDate;
 
 function Byline({ person, at }: { person: { handle: string; displayName: string; expert: boolean }; at: string }) {
   return (

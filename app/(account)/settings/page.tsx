@@ -6,11 +6,10 @@ import { loadSettingsPage } from '@/lib/accounts/settings-page';
 import { SettingsForm } from './SettingsForm';
 import { MailSettingsForm } from './MailSettingsForm';
 import { SignOutEverywhere } from '@/components/account/SignOutEverywhere';
+import { formatDate } from '@/lib/dates';
 
 export const metadata: Metadata = { title: 'Settings' };
 export const dynamic = 'force-dynamic';
-
-const dateFmt = new Intl.DateTimeFormat('en', { day: 'numeric', month: 'long', year: 'numeric', timeZone: 'UTC' });
 
 export default async function SettingsPage() {
   const user = await currentUserInPage();
@@ -76,7 +75,7 @@ export default async function SettingsPage() {
               <li key={n.id} className="cw-card py-3">
                 <p className="whitespace-pre-line">{n.message}</p>
                 <p className="cw-muted mt-1 text-sm">
-                  {dateFmt.format(n.createdAt)}
+                  {formatDate(n.createdAt)}
                   {n.link && n.link !== '/settings' ? (
                     <>
                       {' · '}

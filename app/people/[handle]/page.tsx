@@ -5,11 +5,9 @@ import { cache } from 'react';
 import { publicProfile } from '@/lib/accounts/profile';
 import type { Role } from '@/models/User';
 import { getCalculator } from '@/lib/calculators';
+import { formatDate, formatMonth } from '@/lib/dates';
 
 export const dynamic = 'force-dynamic';
-
-const dateFmt = new Intl.DateTimeFormat('en', { day: 'numeric', month: 'long', year: 'numeric', timeZone: 'UTC' });
-const monthFmt = new Intl.DateTimeFormat('en', { month: 'long', year: 'numeric', timeZone: 'UTC' });
 
 // one query for the metadata and the page of a render
 const findPerson = cache(publicProfile);
@@ -55,7 +53,7 @@ export default async function PersonPage({ params }: { params: Promise<{ handle:
         </h1>
         <p className="cw-muted font-sans text-sm">
           @{person.handle}
-          {person.region ? ` · ${person.region}` : ''} · member since {monthFmt.format(person.createdAt)}
+          {person.region ? ` · ${person.region}` : ''} · member since {formatMonth(person.createdAt)}
         </p>
       </header>
       {person.bio ? <p className="cw-prose whitespace-pre-line">{person.bio}</p> : null}
@@ -73,7 +71,7 @@ export default async function PersonPage({ params }: { params: Promise<{ handle:
                   {c.title ?? `${getCalculator(c.tool)?.name ?? c.tool}: worked calculation`}
                 </Link>
                 <p className="cw-muted text-sm">
-                  {getCalculator(c.tool)?.name ?? c.tool} · {dateFmt.format(c.createdAt)}
+                  {getCalculator(c.tool)?.name ?? c.tool} · {formatDate(c.createdAt)}
                 </p>
               </li>
             ))}

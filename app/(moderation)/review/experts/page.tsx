@@ -5,11 +5,10 @@ import { can, REFUSAL } from '@/lib/auth/policy';
 import { listPendingApplications, type PendingApplicationView } from '@/lib/accounts/roles';
 import { Refused } from '@/components/account/Refused';
 import { DecisionForm } from './DecisionForm';
+import { formatDate } from '@/lib/dates';
 
 export const metadata: Metadata = { title: 'Expert applications' };
 export const dynamic = 'force-dynamic';
-
-const dateFmt = new Intl.DateTimeFormat('en', { day: 'numeric', month: 'long', year: 'numeric', timeZone: 'UTC' });
 
 export default async function ReviewExpertsPage() {
   let applications: PendingApplicationView[] | null = null;
@@ -52,9 +51,8 @@ export default async function ReviewExpertsPage() {
                 <span className="cw-muted text-sm font-normal">@{a.applicant.handle}</span>
               </h2>
               <p className="cw-muted text-sm">
-                applied {dateFmt.format(new Date(a.createdAt))} · {a.region} ·{' '}
-                <span className="cw-num">{a.pumpsBuilt}</span> pumps built · <span className="cw-num">{a.years}</span>{' '}
-                years
+                applied {formatDate(a.createdAt)} · {a.region} · <span className="cw-num">{a.pumpsBuilt}</span> pumps
+                built · <span className="cw-num">{a.years}</span> years
               </p>
             </div>
             <p className="cw-prose whitespace-pre-line">{a.experience}</p>
