@@ -68,7 +68,10 @@ export default async function SettingsPage() {
           Notices
         </h2>
         {loaded.notices.length === 0 ? (
-          <p className="cw-muted font-sans text-sm">Nothing yet.</p>
+          <p className="cw-muted font-sans text-sm">
+            No notices yet. A moderator’s decision about one of your posts, a change to your role and the answer to an
+            expert application arrive here. Answers and replies to your questions come by e-mail, as chosen above.
+          </p>
         ) : (
           <ol className="flex flex-col gap-2 font-sans">
             {loaded.notices.map((n) => (

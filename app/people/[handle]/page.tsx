@@ -62,7 +62,13 @@ export default async function PersonPage({ params }: { params: Promise<{ handle:
           Worked calculations
         </h2>
         {calculations.length === 0 ? (
-          <p className="cw-muted font-sans text-sm">{`${person.displayName} has not saved a worked calculation yet.`}</p>
+          <p className="cw-muted font-sans text-sm">
+            {`${person.displayName} has not saved a worked calculation yet. Any member can save one from a calculator’s results, and it is listed here; `}
+            <Link href="/calculators" className="cw-link">
+              open the calculators
+            </Link>
+            .
+          </p>
         ) : (
           <ul className="flex flex-col gap-2 font-sans">
             {calculations.map((c) => (

@@ -113,7 +113,7 @@ export default async function AuditPage({ searchParams }: { searchParams: Search
       ) : null}
       <p className="cw-muted font-sans text-sm">
         {data.total === 0
-          ? 'Nothing recorded matches.'
+          ? 'Nothing recorded matches. Widen the dates or clear a filter; moderators’ and admins’ actions appear here as they happen.'
           : `${data.total} ${data.total === 1 ? 'entry' : 'entries'}, newest first · page ${data.page} of ${totalPages}. Times are UTC.`}
       </p>
       {data.items.length ? (

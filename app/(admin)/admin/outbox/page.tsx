@@ -55,7 +55,16 @@ export default async function OutboxPage({
         ))}
       </nav>
       {data.rows.length === 0 ? (
-        <p className="cw-card font-sans">No messages{status ? ` ${STATUS_WORDS[status]}` : ''}.</p>
+        <div className="cw-card flex flex-col gap-1 font-sans">
+          <p>No messages{status ? ` ${STATUS_WORDS[status]}` : ''}.</p>
+          <p className="cw-muted text-sm">
+            {status === 'failed'
+              ? 'Nothing to send again: every message either went out or is still being tried.'
+              : status
+                ? 'Choose “all” above to see every message.'
+                : 'Messages appear here as soon as something needs one sent: a sign-up, a reset, a notice, a digest.'}
+          </p>
+        </div>
       ) : (
         <div className="overflow-x-auto">
           <table className="w-full border-collapse font-sans text-sm">

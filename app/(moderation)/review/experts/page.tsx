@@ -37,7 +37,7 @@ export default async function ReviewExpertsPage() {
       <h1 className="font-serif text-3xl font-semibold">Expert applications</h1>
       <p className="cw-muted font-sans text-sm">
         {applications.length === 0
-          ? 'No applications are waiting.'
+          ? 'No applications are waiting. Members apply from their settings; each new one appears here, and the review queue has any flagged posts.'
           : `${applications.length} waiting, oldest first. Your note is sent to the applicant with the decision.`}
       </p>
       <ol className="flex flex-col gap-4">
