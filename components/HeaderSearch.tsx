@@ -23,18 +23,12 @@ export function HeaderSearch() {
   const phoneBox = useRef<HTMLInputElement>(null);
   return (
     <>
-      <form action="/search" method="get" role="search" className="relative hidden lg:block">
+      <form action="/search" method="get" role="search" className="relative hidden w-full lg:block">
         <label htmlFor="site-search" className="sr-only">
           Search Clackwater
         </label>
         <SearchIcon className="pointer-events-none absolute top-1/2 left-3 h-4 w-4 -translate-y-1/2 text-creek-200" />
-        <input
-          id="site-search"
-          name="q"
-          type="search"
-          placeholder="Search guides, threads, logs"
-          className={`${FIELD} w-60`}
-        />
+        <input id="site-search" name="q" type="search" placeholder="Search guides, threads, logs" className={FIELD} />
       </form>
       <details
         className="group lg:hidden"

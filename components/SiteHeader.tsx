@@ -19,30 +19,33 @@ const NAV = [
 export function SiteHeader() {
   return (
     <header data-site-header className="relative bg-creek text-limestone-100 dark:bg-creek-900">
-      <div className="mx-auto grid max-w-5xl grid-cols-[minmax(0,1fr)_auto_auto] items-center gap-x-3 gap-y-1 px-4 py-2 lg:flex lg:gap-x-5 lg:py-3">
+      <div className="mx-auto grid max-w-5xl grid-cols-[1fr_auto_auto] items-center gap-x-2 gap-y-1 px-4 py-2 lg:flex lg:gap-x-5 lg:py-3">
         <Link
           href="/"
-          className="col-start-1 row-start-1 flex min-h-10 items-center gap-2 justify-self-start rounded text-lg font-semibold tracking-wide no-underline"
+          className="col-start-1 row-start-1 flex min-h-10 shrink-0 items-center gap-2 justify-self-start rounded text-lg font-semibold tracking-wide whitespace-nowrap no-underline"
         >
           <Logo className="h-7 w-7 shrink-0 text-limestone-100" />
           <span className="font-serif">Clackwater</span>
         </Link>
-        <nav aria-label="Main" className="col-span-2 col-start-1 row-start-2 min-w-0">
-          <ul className="flex flex-wrap gap-x-3 text-sm font-medium min-[400px]:gap-x-4 lg:gap-x-5">
-            {NAV.map((item) => (
-              <li key={item.href}>
-                <Link
-                  href={item.href}
-                  className="inline-flex min-h-10 items-center rounded px-0.5 whitespace-nowrap no-underline hover:text-clay-200 hover:underline"
-                >
-                  {item.label}
-                </Link>
-              </li>
-            ))}
-          </ul>
-        </nav>
-        <div className="col-start-3 row-start-2 justify-self-end lg:ml-auto">
-          <HeaderSearch />
+        {/* a row of its own on a phone; on a wide screen its two parts join the header's one row */}
+        <div className="col-span-3 row-start-2 flex items-center justify-between gap-3 lg:contents">
+          <nav aria-label="Main" className="min-w-0 lg:shrink-0">
+            <ul className="flex flex-wrap gap-x-3 text-sm font-medium min-[400px]:gap-x-4 lg:flex-nowrap lg:gap-x-5">
+              {NAV.map((item) => (
+                <li key={item.href}>
+                  <Link
+                    href={item.href}
+                    className="inline-flex min-h-10 items-center rounded px-0.5 whitespace-nowrap no-underline hover:text-clay-200 hover:underline"
+                  >
+                    {item.label}
+                  </Link>
+                </li>
+              ))}
+            </ul>
+          </nav>
+          <div className="shrink-0 lg:ml-auto lg:min-w-40 lg:flex-1 lg:shrink lg:basis-60 lg:grow-0">
+            <HeaderSearch />
+          </div>
         </div>
         <div className="col-start-2 row-start-1">
           <UnitSwitch />

@@ -67,7 +67,7 @@ export function AccountMenu() {
   return (
     <details ref={menu} className="group relative text-sm" data-testid="account-menu">
       <summary
-        className="flex min-h-10 max-w-[7.5rem] cursor-pointer list-none items-center gap-1 rounded-md px-2 font-medium group-open:bg-creek-600 hover:bg-creek-600 sm:max-w-[12rem] [&::-webkit-details-marker]:hidden"
+        className="flex min-h-10 max-w-[6rem] cursor-pointer list-none items-center gap-1 rounded-md px-2 font-medium group-open:bg-creek-600 hover:bg-creek-600 sm:max-w-[12rem] lg:max-w-[10rem] [&::-webkit-details-marker]:hidden"
         title={name}
       >
         <span className="truncate">{name}</span>
@@ -80,8 +80,10 @@ export function AccountMenu() {
         </svg>
       </summary>
       <div className="absolute right-0 z-30 mt-2 flex w-60 flex-col gap-0.5 rounded-md border border-creek-400 bg-creek-800 p-2 shadow-lg dark:bg-creek-950">
-        <p className="cw-num truncate px-3 pt-1 pb-2 text-xs text-creek-100">
-          Signed in as <span className="font-semibold text-limestone-50">@{data.user.handle}</span>
+        <p className="flex flex-col px-3 pt-1 pb-2 text-xs text-creek-100">
+          <span>Signed in as</span>
+          <span className="truncate text-sm font-semibold text-limestone-50">{name}</span>
+          <span className="truncate">@{data.user.handle}</span>
         </p>
         <Link href={`/people/${data.user.handle}`} className={ITEM} onClick={close}>
           Profile

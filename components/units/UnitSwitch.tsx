@@ -14,7 +14,7 @@ export function UnitSwitch() {
       {UNIT_SYSTEMS.map((u) => (
         <label
           key={u}
-          className={`inline-flex min-h-7 cursor-pointer items-center rounded px-2 has-[input:focus-visible]:outline-2 has-[input:focus-visible]:outline-offset-2 has-[input:focus-visible]:outline-clay-300 ${units === u ? 'bg-limestone-100 font-semibold text-creek' : 'text-limestone-100 hover:bg-creek-600'}`}
+          className={`inline-flex min-h-7 cursor-pointer items-center rounded px-1.5 has-[input:focus-visible]:outline-2 has-[input:focus-visible]:outline-offset-2 has-[input:focus-visible]:outline-clay-300 ${units === u ? 'bg-limestone-100 font-semibold text-creek' : 'text-limestone-100 hover:bg-creek-600'}`}
         >
           <input
             type="radio"
