@@ -28,7 +28,7 @@ export function HeaderSearch() {
           Search Clackwater
         </label>
         <SearchIcon className="pointer-events-none absolute top-1/2 left-3 h-4 w-4 -translate-y-1/2 text-creek-200" />
-        <input id="site-search" name="q" type="search" placeholder="Search guides, threads, logs" className={FIELD} />
+        <input id="site-search" name="q" type="search" placeholder="Search Clackwater" className={FIELD} />
       </form>
       <details
         className="group lg:hidden"

@@ -35,7 +35,7 @@ export function SiteHeader() {
                 <li key={item.href}>
                   <Link
                     href={item.href}
-                    className="inline-flex min-h-10 items-center rounded px-0.5 whitespace-nowrap no-underline hover:text-clay-200 hover:underline"
+                    className="inline-flex min-h-10 items-center rounded whitespace-nowrap no-underline hover:text-clay-200 hover:underline"
                   >
                     {item.label}
                   </Link>
