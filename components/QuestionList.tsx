@@ -4,8 +4,8 @@ import { siteGlance } from '@/lib/questions/site-glance';
 import type { UnitSystem } from '@/lib/hydraulics';
 import { STATE_WORDS } from '@/components/questions/state-words';
 import { StateDrop } from '@/components/questions/StateDrop';
+import { formatDate } from '@/lib/dates';
 
-const dateFmt = new Intl.DateTimeFormat('en', { day: 'numeric', month: 'short', year: 'numeric', timeZone: 'UTC' });
 
 function StateLine({ id, state }: { id: number; state: QuestionState }) {
   if (state.kind === 'fixed') {
@@ -89,7 +89,7 @@ export function QuestionList({ items, units }: { items: QuestionSummary[]; units
             )}
             <p className="cw-muted self-start text-xs sm:col-start-2 sm:row-start-2">
               asked by {q.author.displayName} on{' '}
-              <time dateTime={q.createdAt}>{dateFmt.format(new Date(q.createdAt))}</time>
+              <time dateTime={q.createdAt}>{formatDate(q.createdAt)}</time>
               {q.tags.length ? (
                 <>
                   {' · filed under '}

@@ -12,6 +12,7 @@ import { material, pumpsWords, shown, size } from '@/components/field-log/format
 import { EntryCards } from '@/components/field-log/EntryCards';
 import { readUnitPreference } from '@/lib/units/server';
 import { inputClass, labelClass } from '@/components/forms/api';
+import { formatDate } from '@/lib/dates';
 
 export const metadata: Metadata = {
   title: 'Field log',
@@ -191,7 +192,7 @@ export default async function FieldLogPage({
                     </Link>
                     {e.authorId === viewerId ? <span className="cw-muted"> (yours)</span> : null}
                   </td>
-                  <td className="cw-num px-2 py-1">{e.testedOn}</td>
+                  <td className="cw-num whitespace-nowrap px-2 py-1">{formatDate(e.testedOn)}</td>
                   <td className="px-2 py-1">{pumpsWords(e.pumpCount, e.arrangement, e.pumpSize)}</td>
                   <td className="px-2 py-1">
                     {shown('length', e.driveLengthM, units)} of {size(e.driveSize)} {material(e.driveMaterial)}

@@ -1,51 +1,120 @@
 'use client';
 
 import Link from 'next/link';
+import { usePathname } from 'next/navigation';
+import { useEffect, useRef } from 'react';
 import { signOut, useSession } from 'next-auth/react';
-import { can, sessionActor } from '@/lib/auth/policy';
+import { can, sessionActor, type Action } from '@/lib/auth/policy';
 
-/** Sign in, or the member's name with settings and sign out. */
+/** The workspaces a role may open, each behind the policy row that opens it. */
+const TOOLS: { href: string; label: string; action: Action }[] = [
+  { href: '/review', label: 'Review queue', action: 'moderation.act' },
+  { href: '/review/experts', label: 'Expert applications', action: 'expertApplication.decide' },
+  { href: '/admin/users', label: 'Members and roles', action: 'user.changeRole' },
+  { href: '/admin/audit', label: 'Audit log', action: 'audit.read' },
+  { href: '/admin/outbox', label: 'E-mail outbox', action: 'mail.outbox' },
+];
+
+const ITEM =
+  'flex min-h-10 items-center rounded px-3 text-left no-underline hover:bg-creek-600 hover:underline focus-visible:-outline-offset-2';
+
+/** Sign in, or the member's name opening their pages, the tools their role may use, and sign out. */
 export function AccountMenu() {
   const { data, status } = useSession();
   const actor = sessionActor(data?.user);
-  if (status === 'loading') return <span className="w-16" aria-hidden="true" />;
+  const menu = useRef<HTMLDetailsElement>(null);
+  const pathname = usePathname();
+
+  // the header stays while pages change under it: close the menu once the page has changed
+  useEffect(() => {
+    if (menu.current) menu.current.open = false;
+  }, [pathname]);
+
+  // a click elsewhere or Escape closes it, as a menu does
+  useEffect(() => {
+    const onPointer = (e: PointerEvent) => {
+      if (menu.current?.open && !menu.current.contains(e.target as Node)) menu.current.open = false;
+    };
+    const onKey = (e: KeyboardEvent) => {
+      if (e.key !== 'Escape' || !menu.current?.open) return;
+      menu.current.open = false;
+      menu.current.querySelector('summary')?.focus();
+    };
+    document.addEventListener('pointerdown', onPointer);
+    document.addEventListener('keydown', onKey);
+    return () => {
+      document.removeEventListener('pointerdown', onPointer);
+      document.removeEventListener('keydown', onKey);
+    };
+  }, []);
+
+  if (status === 'loading') return <span className="inline-block min-h-10 w-16" aria-hidden="true" />;
   if (!data?.user) {
     return (
-      <Link href="/sign-in" className="whitespace-nowrap text-sm font-medium no-underline hover:underline">
+      <Link
+        href="/sign-in"
+        className="inline-flex min-h-10 items-center rounded px-1 text-sm font-medium whitespace-nowrap no-underline hover:underline"
+      >
         Sign in
       </Link>
     );
   }
+  const name = data.user.name ?? data.user.handle;
+  const tools = TOOLS.filter((t) => can(actor, t.action));
+  const close = () => {
+    if (menu.current) menu.current.open = false;
+  };
   return (
-    <details className="relative text-sm" data-testid="account-menu">
-      <summary className="cursor-pointer list-none whitespace-nowrap font-medium">
-        {data.user.name ?? data.user.handle}
+    <details ref={menu} className="group relative text-sm" data-testid="account-menu">
+      <summary
+        className="flex min-h-10 max-w-[6rem] cursor-pointer list-none items-center gap-1 rounded-md px-2 font-medium group-open:bg-creek-600 hover:bg-creek-600 sm:max-w-[12rem] lg:max-w-[10rem] [&::-webkit-details-marker]:hidden"
+        title={name}
+      >
+        <span className="truncate">{name}</span>
+        <svg
+          viewBox="0 0 12 12"
+          className="h-3 w-3 shrink-0 transition-transform group-open:rotate-180"
+          aria-hidden="true"
+        >
+          <path d="M2 4l4 4 4-4" fill="none" stroke="currentColor" strokeWidth="1.6" />
+        </svg>
       </summary>
-      <div className="absolute right-0 z-20 mt-2 flex w-44 flex-col gap-2 rounded-md border border-creek-400 bg-creek-800 p-3 shadow-lg">
-        <Link href={`/people/${data.user.handle}`} className="no-underline hover:underline">
+      <div className="absolute right-0 z-30 mt-2 flex w-60 flex-col gap-0.5 rounded-md border border-creek-400 bg-creek-800 p-2 shadow-lg dark:bg-creek-950">
+        <p className="flex flex-col px-3 pt-1 pb-2 text-xs text-creek-100">
+          <span>Signed in as</span>
+          <span className="truncate text-sm font-semibold text-limestone-50">{name}</span>
+          <span className="truncate">@{data.user.handle}</span>
+        </p>
+        <Link href={`/people/${data.user.handle}`} className={ITEM} onClick={close}>
           Profile
         </Link>
-        <Link href="/settings" className="no-underline hover:underline">
-          Settings
+        <Link href="/settings" className={ITEM} onClick={close}>
+          Settings and notices
         </Link>
-        {can(actor, 'expertApplication.decide') ? (
-          <Link href="/review/experts" className="no-underline hover:underline">
-            Expert applications
-          </Link>
+        {tools.length ? (
+          <div
+            role="group"
+            aria-labelledby="account-menu-tools"
+            className="mt-1 flex flex-col gap-0.5 border-t border-creek-600 pt-2"
+          >
+            <p
+              id="account-menu-tools"
+              className="px-3 pb-1 text-xs font-semibold tracking-wide text-creek-100 uppercase"
+            >
+              {can(actor, 'user.changeRole') ? 'Moderation and admin' : 'Moderation'}
+            </p>
+            {tools.map((t) => (
+              <Link key={t.href} href={t.href} className={ITEM} onClick={close}>
+                {t.label}
+              </Link>
+            ))}
+          </div>
         ) : null}
-        {can(actor, 'user.changeRole') ? (
-          <>
-            <Link href="/admin/users" className="no-underline hover:underline">
-              Members and roles
-            </Link>
-            <Link href="/admin/outbox" className="no-underline hover:underline">
-              E-mail outbox
-            </Link>
-          </>
-        ) : null}
-        <button type="button" className="text-left hover:underline" onClick={() => void signOut({ callbackUrl: '/' })}>
-          Sign out
-        </button>
+        <div className="mt-1 border-t border-creek-600 pt-1">
+          <button type="button" className={`${ITEM} w-full`} onClick={() => void signOut({ callbackUrl: '/' })}>
+            Sign out
+          </button>
+        </div>
       </div>
     </details>
   );

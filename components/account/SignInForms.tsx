@@ -5,12 +5,47 @@ import Link from 'next/link';
 import { signIn } from 'next-auth/react';
 import { Field } from './Field';
 import { safeReturnPath } from '@/lib/auth/return-path';
+import { SIGN_IN_ERRORS } from '@/lib/auth/sign-in-errors';
+import { sendJson } from '@/components/forms/api';
+
+/** "Confirm your e-mail first", with a way out: a new link, for the link lost or past its 48 hours. */
+function ConfirmAgain({ email }: { email: string }) {
+  const [note, setNote] = useState<{ ok: boolean; text: string } | null>(null);
+  const [busy, setBusy] = useState(false);
+  return (
+    <div className="flex flex-col gap-2" data-testid="confirm-again">
+      <p role="alert" className="text-sm font-semibold text-signal-700 dark:text-signal-300">
+        {SIGN_IN_ERRORS.unverified}
+      </p>
+      {note ? (
+        <p role="status" className={`text-sm ${note.ok ? 'text-moss-600 dark:text-moss-300' : 'font-semibold'}`}>
+          {note.text}
+        </p>
+      ) : (
+        <button
+          type="button"
+          className="cw-link self-start text-left text-sm"
+          disabled={busy}
+          onClick={async () => {
+            setBusy(true);
+            const res = await sendJson<{ message: string }>('/api/account/verify-email/resend', 'POST', { email });
+            setBusy(false);
+            setNote(res.ok ? { ok: true, text: res.data.message } : { ok: false, text: res.error.message });
+          }}
+        >
+          Lost the link, or is it over 48 hours old? E-mail me a new one
+        </button>
+      )}
+    </div>
+  );
+}
 
 /** Password sign-in, and a passwordless link by e-mail. */
 export function SignInForms({ callbackUrl: asked = '/' }: { callbackUrl?: string }) {
   // checked again here: whatever renders this form, the browser only ever goes to a path on this site
   const callbackUrl = safeReturnPath(asked);
   const [error, setError] = useState<string | null>(null);
+  const [unconfirmed, setUnconfirmed] = useState<string | null>(null);
   const [busy, setBusy] = useState(false);
   const [linkNote, setLinkNote] = useState<string | null>(null);
   const [linkError, setLinkError] = useState<string | undefined>();
@@ -25,19 +60,13 @@ export function SignInForms({ callbackUrl: asked = '/' }: { callbackUrl?: string
           const f = new FormData(e.currentTarget);
           setBusy(true);
           setError(null);
-          const res = await signIn('password', {
-            email: String(f.get('email')),
-            password: String(f.get('password')),
-            redirect: false,
-          });
+          setUnconfirmed(null);
+          const email = String(f.get('email'));
+          const res = await signIn('password', { email, password: String(f.get('password')), redirect: false });
           setBusy(false);
           if (res?.ok && !res.error) window.location.assign(callbackUrl);
-          else
-            setError(
-              res?.error && res.error !== 'CredentialsSignin'
-                ? res.error
-                : 'That e-mail and password do not match an account.',
-            );
+          else if (res?.error === SIGN_IN_ERRORS.unverified) setUnconfirmed(email);
+          else setError(res?.error && res.error !== 'CredentialsSignin' ? res.error : SIGN_IN_ERRORS.wrong);
         }}
       >
         <h2 className="text-lg font-semibold">With your password</h2>
@@ -55,6 +84,7 @@ export function SignInForms({ callbackUrl: asked = '/' }: { callbackUrl?: string
             {error}
           </p>
         ) : null}
+        {unconfirmed ? <ConfirmAgain key={unconfirmed} email={unconfirmed} /> : null}
         <button type="submit" className="cw-button self-start" disabled={busy}>
           Sign in
         </button>

@@ -3,6 +3,7 @@
 import { useState } from 'react';
 import { Field } from './Field';
 import { sendJson } from '@/components/forms/api';
+import { HANDLE_RULE, signUpSchema } from '@/lib/validation/account';
 
 export function SignUpForm() {
   const [errors, setErrors] = useState<Record<string, string>>({});
@@ -23,6 +24,13 @@ export function SignUpForm() {
       onSubmit={async (e) => {
         e.preventDefault();
         const f = new FormData(e.currentTarget);
+        // the handle's rule in our words before anything is sent, not the browser's "match the requested format"
+        const handle = signUpSchema.shape.handle.safeParse(String(f.get('handle') ?? ''));
+        if (!handle.success) {
+          setErrors({ handle: handle.error.issues[0]?.message ?? HANDLE_RULE });
+          e.currentTarget.querySelector<HTMLInputElement>('#signup-handle')?.focus();
+          return;
+        }
         setBusy(true);
         const res = await sendJson<{ message: string; note?: string }>(
           '/api/account/sign-up',
@@ -46,11 +54,14 @@ export function SignUpForm() {
       <Field
         id="signup-handle"
         name="handle"
-        label="Handle (public, lower case)"
+        label="Handle (public, on your posts)"
+        hint={HANDLE_RULE}
         autoComplete="username"
+        autoCapitalize="none"
+        spellCheck={false}
         required
-        pattern="[a-z0-9_]{3,30}"
         error={errors.handle}
+        onChange={() => (errors.handle ? setErrors((all) => ({ ...all, handle: '' })) : undefined)}
       />
       <Field
         id="signup-name"

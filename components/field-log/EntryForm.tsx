@@ -8,6 +8,7 @@ import { PUMP_TYPES } from '@/lib/vocabulary';
 import { FieldError, inputClass, labelClass, sendJson, type FormError } from '@/components/forms/api';
 import { PhotoPicker } from '@/components/photos/PhotoPicker';
 import { MATERIAL_LABELS } from './format';
+import { isoDay } from '@/lib/dates';
 
 type Trial = { volume: string; seconds: string };
 
@@ -24,7 +25,7 @@ export function EntryForm() {
   const router = useRouter();
   const [v, setV] = useState<Record<string, string>>({
     siteName: '',
-    testedOn: new Date().toISOString().slice(0, 10),
+    testedOn: isoDay(new Date()),
     pumpType: 'homemade',
     pumpSize: '1',
     pumpCount: '1',

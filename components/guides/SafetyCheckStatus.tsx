@@ -6,14 +6,14 @@ import { useSession } from 'next-auth/react';
 import { RecordSafetyCheck } from './RecordSafetyCheck';
 import type { SafetyCheckView, SafetyStatus } from '@/lib/guides/safety';
 import { can, sessionActor } from '@/lib/auth/policy';
+import { formatDate } from '@/lib/dates';
 
 interface Payload {
   status: SafetyStatus;
   checks: SafetyCheckView[];
 }
 
-const dateFmt = new Intl.DateTimeFormat('en', { day: 'numeric', month: 'long', year: 'numeric', timeZone: 'UTC' });
-const day = (iso: string) => dateFmt.format(new Date(iso));
+const day = formatDate;
 
 /**
  * The guide's safety check line. The page itself is static; the checks are read

@@ -3,12 +3,13 @@
 import { useId, useState, type FormEvent } from 'react';
 import { FieldError, inputClass, labelClass, sendJson, type FormError } from '@/components/forms/api';
 import { ACTION_WORDS, QUESTION_ONLY, type ModerationAction, type PostType } from './words';
+import { isoDay } from '@/lib/dates';
 
 const ACTIONS = Object.keys(ACTION_WORDS) as ModerationAction[];
 
 /** Tomorrow in UTC as YYYY-MM-DD: the earliest day a suspension can end. */
 function tomorrow(): string {
-  return new Date(Date.now() + 86_400_000).toISOString().slice(0, 10);
+  return isoDay(Date.now() + 86_400_000);
 }
 
 /**

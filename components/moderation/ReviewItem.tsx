@@ -5,6 +5,7 @@ import { MemberText } from '@/components/posts/MemberText';
 import { FLAG_REASON_WORDS, type FlagReason, type PostType } from './words';
 import { ActionPanel } from './ActionPanel';
 import { can, MODERATING, REFUSAL, type Role } from '@/lib/auth/policy';
+import { formatDateTime } from '@/lib/dates';
 
 /** One entry of GET /api/review. */
 export interface ReviewItemView {
@@ -32,7 +33,7 @@ export interface ReviewItemView {
   revisions: { body: string; at: string; editor: string }[];
 }
 
-const when = (iso: string) => new Date(iso).toUTCString().slice(5, 22);
+const when = formatDateTime;
 
 /** A flagged post in context: where it sits, who wrote it, who flagged it and why, how it changed. */
 export function ReviewItem({

@@ -1,6 +1,7 @@
 'use client';
 
 import { useId, useState } from 'react';
+import Link from 'next/link';
 import useSWR from 'swr';
 import { getJson } from '@/components/forms/api';
 import { FLAG_REASON_WORDS, type FlagReason } from './words';
@@ -92,9 +93,32 @@ export function ReviewQueue({ viewer }: { viewer: { id: number; handle: string; 
       ) : isLoading || !data ? (
         <p className="cw-muted font-sans text-sm">Loading the review queue…</p>
       ) : data.items.length === 0 ? (
-        <p className="cw-muted font-sans text-sm">
-          Nothing is waiting{reason || age ? ' that matches these filters' : ''}.
-        </p>
+        <div className="cw-card flex flex-col gap-2 font-sans text-sm" data-testid="review-empty">
+          {reason || age ? (
+            <p>
+              Nothing waiting matches these filters.{' '}
+              <button
+                type="button"
+                className="cw-link"
+                onClick={() => {
+                  setReason('');
+                  setAge('');
+                }}
+              >
+                Show every flag
+              </button>{' '}
+              to see the rest of the queue.
+            </p>
+          ) : (
+            <p>
+              Nothing is waiting: every flag has been dealt with. New flags appear here as members send them; check{' '}
+              <Link href="/review/experts" className="cw-link">
+                expert applications
+              </Link>{' '}
+              and the suspended accounts below while it is quiet.
+            </p>
+          )}
+        </div>
       ) : (
         <>
           <p className="cw-muted font-sans text-sm">

@@ -3,6 +3,7 @@
 import { useId, useState, type FormEvent } from 'react';
 import useSWR from 'swr';
 import { FieldError, inputClass, labelClass, sendJson, type FormError } from '@/components/forms/api';
+import { formatDate } from '@/lib/dates';
 
 export interface SuspendedView {
   id: number;
@@ -20,7 +21,7 @@ async function fetcher(url: string): Promise<{ items: SuspendedView[] }> {
   return json;
 }
 
-const day = (iso: string) => new Date(iso).toUTCString().slice(5, 16);
+const day = formatDate;
 
 /** One suspended account and the form that lifts its suspension, with the reason the member will read. */
 function LiftForm({ member, onDone }: { member: SuspendedView; onDone: (message: string) => void }) {

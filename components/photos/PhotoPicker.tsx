@@ -1,7 +1,7 @@
 'use client';
 
 import { useId, useRef, useState, type ChangeEvent } from 'react';
-import { PHOTO_LIMITS } from '@/lib/photos/limits';
+import { PHOTO_LIMITS, PHOTO_MESSAGES } from '@/lib/photos/limits';
 
 export interface PickedPhoto {
   id: string;
@@ -12,7 +12,6 @@ export interface PickedPhoto {
 }
 
 const ACCEPT = 'image/jpeg,image/png,image/webp';
-const MB = 1024 * 1024;
 
 /**
  * Chooses photos for a question or an answer. Each choice is uploaded at once to
@@ -48,8 +47,9 @@ export function PhotoPicker({
     if (chosen.length > room)
       return setError(`You can add ${room} more photo${room === 1 ? '' : 's'} (${max} at most).`);
     const tooBig = chosen.find((f) => f.size > PHOTO_LIMITS.maxFileBytes);
-    if (tooBig)
-      return setError(`“${tooBig.name}” is larger than ${PHOTO_LIMITS.maxFileBytes / MB} MB, the limit for one photo.`);
+    if (tooBig) return setError(PHOTO_MESSAGES.fileTooLarge(tooBig.name));
+    if (chosen.reduce((sum, f) => sum + f.size, 0) > PHOTO_LIMITS.maxTotalBytes)
+      return setError(PHOTO_MESSAGES.uploadTooLarge());
 
     const form = new FormData();
     for (const f of chosen) form.append('photos', f);
@@ -76,8 +76,7 @@ export function PhotoPicker({
         Photos (optional)
       </label>
       <p id={`${id}-hint`} className="cw-muted text-sm">
-        JPEG, PNG or WebP, up to {max} photos of {PHOTO_LIMITS.maxFileBytes / MB} MB each. Location and camera details
-        are removed.
+        {PHOTO_MESSAGES.hint(max)}
       </p>
       <input
         ref={input}

@@ -5,6 +5,7 @@ import { MemberText } from '@/components/posts/MemberText';
 import { RevisionDiff } from '@/components/posts/RevisionDiff';
 import { sendJson } from '@/components/forms/api';
 import type { PostType } from '@/lib/vocabulary';
+import { formatDateTime } from '@/lib/dates';
 
 /** "Helpful": one per member, never on one's own post; the count moves at once and settles on the server's. */
 export function HelpfulButton({
@@ -138,7 +139,7 @@ export function RevisionHistory({
         {(revisions ?? []).map((rev, i, all) => (
           <li key={rev.id} className="border-l-2 border-creek-200 pl-2">
             <p className="cw-muted">
-              {i === 0 ? 'First posted' : 'Edited'} by {rev.editor}, {new Date(rev.at).toUTCString().slice(5, 22)}
+              {i === 0 ? 'First posted' : 'Edited'} by {rev.editor}, {formatDateTime(rev.at)}
             </p>
             {i === 0 ? <MemberText>{rev.body}</MemberText> : <RevisionDiff before={all[i - 1].body} after={rev.body} />}
           </li>

@@ -16,6 +16,7 @@ import { FlagButton } from '@/components/moderation/FlagButton';
 import { PostMarks } from '@/components/moderation/PostMarks';
 import { ChooseFix } from './FixedIt';
 import { StateDrop } from './StateDrop';
+import { formatDate } from '@/lib/dates';
 
 type Viewer = { id: number; handle: string; role: 'member' | 'expert' | 'moderator' | 'admin' } | null;
 
@@ -26,7 +27,7 @@ export function useViewer(): Viewer {
   if (!u?.id || !u.handle || !u.role) return null;
   return { id: u.id, handle: u.handle, role: u.role as NonNullable<Viewer>['role'] };
 }
-const when = (iso: string) => new Date(iso).toUTCString().slice(5, 16);
+const when = formatDate;
 
 function Byline({ person, at }: { person: { handle: string; displayName: string; expert: boolean }; at: string }) {
   return (

@@ -1,9 +1,8 @@
 'use client';
 
 import Link from 'next/link';
-import { useRouter } from 'next/navigation';
 import { useCallback, useEffect, useId, useRef, useState } from 'react';
-import type { SearchItem, SearchResult, Segment } from '@/lib/search';
+import type { SearchResult, Segment } from '@/lib/search';
 import { KIND_FILTERS, KIND_LABEL } from './kinds';
 import { sendJson } from '@/components/forms/api';
 
@@ -84,7 +83,7 @@ type Status = { kind: 'idle' } | { kind: 'loading' } | { kind: 'error'; message:
 
 /**
  * The /search page's box, filters and results: results follow each keystroke
- * (GET /api/search), ↑/↓ move through them and Enter opens one; the address bar
+ * (GET /api/search), the arrow keys walk through them and Enter opens one; the address bar
  * keeps the query so a result list can be shared and the back button works.
  */
 export function SearchResults({
@@ -100,11 +99,9 @@ export function SearchResults({
   levels: readonly string[];
   suggestions: { href: string; title: string }[];
 }) {
-  const router = useRouter();
   const [state, setState] = useState(initial);
   const [result, setResult] = useState<SearchResult | null>(initialResult);
   const [status, setStatus] = useState<Status>({ kind: 'idle' });
-  const [active, setActive] = useState(-1);
   const listRef = useRef<HTMLOListElement>(null);
   const pending = useRef<{ timer?: ReturnType<typeof setTimeout>; ctl?: AbortController }>({});
   const id = useId();
@@ -135,7 +132,6 @@ export function SearchResults({
         return;
       }
       setResult(r.data);
-      setActive(-1);
       setStatus({ kind: 'idle' });
     }, 120);
   }, []);
@@ -149,35 +145,32 @@ export function SearchResults({
   );
 
   const items = result?.items ?? [];
-  const open = useCallback((item: SearchItem) => router.push(item.url), [router]);
+  const boxRef = useRef<HTMLInputElement>(null);
 
+  /**
+   * The arrow keys walk from the box into the results and between them; each result
+   * is a plain link, so Enter opens it as any link opens and nothing is nested in it.
+   */
   const onKeyDown = (e: React.KeyboardEvent) => {
-    if (!items.length) return;
-    if (e.key === 'ArrowDown') {
-      e.preventDefault();
-      setActive((a) => Math.min(items.length - 1, a + 1));
-    } else if (e.key === 'ArrowUp') {
-      e.preventDefault();
-      setActive((a) => Math.max(-1, a - 1));
-    } else if (e.key === 'Enter' && active >= 0) {
-      e.preventDefault();
-      open(items[active]);
-    } else if (e.key === 'Escape') {
-      setActive(-1);
+    if (e.key !== 'ArrowDown' && e.key !== 'ArrowUp' && e.key !== 'Escape') return;
+    const links = Array.from(listRef.current?.querySelectorAll<HTMLAnchorElement>('a[data-result]') ?? []);
+    if (!links.length) return;
+    const at = links.indexOf(document.activeElement as HTMLAnchorElement);
+    if (e.key === 'Escape') {
+      if (at >= 0) boxRef.current?.focus();
+      return;
     }
+    e.preventDefault();
+    if (e.key === 'ArrowDown') links[Math.min(links.length - 1, at + 1)]?.focus();
+    else if (at <= 0) boxRef.current?.focus();
+    else links[at - 1]?.focus();
   };
-
-  useEffect(() => {
-    if (active >= 0)
-      listRef.current?.querySelector<HTMLElement>(`[data-index="${active}"]`)?.scrollIntoView({ block: 'nearest' });
-  }, [active]);
 
   const set = (patch: Partial<SearchState>) => {
     const next = { ...state, ...patch };
     setState(next);
     run(next);
   };
-  const activeId = active >= 0 ? `${id}-r${active}` : undefined;
 
   return (
     <div className="flex flex-col gap-4" onKeyDown={onKeyDown}>
@@ -193,6 +186,7 @@ export function SearchResults({
         </label>
         <input
           id={`${id}-q`}
+          ref={boxRef}
           name="q"
           type="search"
           autoFocus
@@ -200,11 +194,7 @@ export function SearchResults({
           value={state.q}
           onChange={(e) => set({ q: e.target.value })}
           placeholder="A symptom, a size, a part: “1-inch pump stops when the creek drops”"
-          role="combobox"
-          aria-expanded={items.length > 0}
-          aria-controls={`${id}-results`}
-          aria-activedescendant={activeId}
-          aria-autocomplete="list"
+          aria-describedby={`${id}-count`}
           className="w-full rounded-md border border-creek-300 bg-white px-3 py-2 text-base dark:border-creek-500 dark:bg-creek-900"
         />
         <fieldset className="flex flex-wrap items-center gap-3 text-sm">
@@ -228,14 +218,15 @@ export function SearchResults({
         </fieldset>
       </form>
 
-      <p className="cw-muted text-sm" aria-live="polite">
-        {status.kind === 'loading'
-          ? 'Searching…'
-          : status.kind === 'error'
-            ? ''
-            : result && state.q.trim()
-              ? `${result.total === 1 ? '1 result' : `${result.total} results`} · ↑ ↓ to move, Enter to open`
-              : ''}
+      <p id={`${id}-count`} className="font-sans text-sm" aria-live="polite">
+        {status.kind === 'loading' ? (
+          <span className="cw-muted">Searching…</span>
+        ) : status.kind === 'error' || !result || !state.q.trim() || !items.length ? null : (
+          <>
+            <span className="font-semibold">{result.total === 1 ? '1 result' : `${result.total} results`}</span>
+            <span className="cw-muted">. The down arrow takes you through them from the box; Enter opens one.</span>
+          </>
+        )}
       </p>
       {status.kind === 'error' ? (
         <p role="alert" className="cw-card border-signal-500 text-sm">
@@ -281,36 +272,37 @@ export function SearchResults({
           </p>
         </section>
       ) : (
-        <ol ref={listRef} id={`${id}-results`} role="listbox" aria-label="Results" className="flex flex-col gap-2">
+        <ol ref={listRef} id={`${id}-results`} aria-label="Results" className="flex flex-col gap-2">
           {items.map((item, i) => (
-            <li
-              key={item.id}
-              id={`${id}-r${i}`}
-              data-index={i}
-              role="option"
-              aria-selected={i === active}
-              className={`cw-card flex flex-col gap-1 ${i === active ? 'ring-2 ring-clay-400' : ''}`}
-              onMouseEnter={() => setActive(i)}
-            >
-              <div className="flex flex-wrap items-baseline gap-x-2 text-xs uppercase tracking-wide">
-                <span className="font-semibold text-creek-500 dark:text-creek-200">{KIND_LABEL[item.kind]}</span>
-                {item.solved ? <span className="text-moss-700 dark:text-moss-300">fixed</span> : null}
-                {item.level ? <span className="cw-muted normal-case">{item.level}</span> : null}
-                {item.hidden ? <span className="text-signal-700">hidden: moderators only</span> : null}
-              </div>
+            <li key={item.id} data-index={i}>
               <Link
                 href={item.url}
-                className="font-serif text-lg font-semibold no-underline hover:underline"
-                tabIndex={-1}
+                data-result
+                aria-labelledby={`${id}-k${i} ${id}-t${i}`}
+                aria-describedby={item.snippet.length ? `${id}-s${i}` : undefined}
+                className="cw-card flex flex-col gap-1 no-underline hover:border-clay-400 focus-visible:border-clay-500 dark:hover:border-clay-300"
               >
-                <Marked segments={item.title} />
+                <span className="flex flex-wrap items-baseline gap-x-2 font-sans text-xs uppercase tracking-wide">
+                  <span id={`${id}-k${i}`} className="font-semibold text-creek-500 dark:text-creek-200">
+                    {KIND_LABEL[item.kind]}
+                  </span>
+                  {item.solved ? <span className="text-moss-700 dark:text-moss-300">fixed</span> : null}
+                  {item.level ? <span className="cw-muted normal-case">{item.level}</span> : null}
+                  {item.hidden ? <span className="text-signal-700">hidden: moderators only</span> : null}
+                </span>
+                <span
+                  id={`${id}-t${i}`}
+                  className="font-serif text-lg font-semibold text-clay-600 underline-offset-2 dark:text-clay-300"
+                >
+                  <Marked segments={item.title} />
+                </span>
+                {item.snippet.length ? (
+                  <span id={`${id}-s${i}`} className="text-sm text-creek dark:text-limestone-200">
+                    <Marked segments={item.snippet} />
+                  </span>
+                ) : null}
+                {item.tags.length ? <span className="cw-muted font-sans text-xs">{item.tags.join(' · ')}</span> : null}
               </Link>
-              {item.snippet.length ? (
-                <p className="text-sm">
-                  <Marked segments={item.snippet} />
-                </p>
-              ) : null}
-              {item.tags.length ? <p className="cw-muted text-xs">{item.tags.join(' · ')}</p> : null}
             </li>
           ))}
         </ol>

@@ -90,6 +90,22 @@ export async function verifyEmail(token: string): Promise<{ ok: true } | { ok: f
 }
 
 /**
+ * E-mails a new confirmation link when the address has an account still waiting
+ * for one (the first link lost, or past its 48 hours). Like a reset, it answers
+ * before looking, so neither the answer nor its timing says whether the account
+ * exists or is already confirmed.
+ */
+export function requestConfirmationAgain(email: string): void {
+  sendLater('confirmation sent again', async () => {
+    const { User } = initModels();
+    const user = await User.findOne({ where: { email } });
+    if (!user || user.emailVerifiedAt || !sameAddress(email, user.email)) return null;
+    const token = await getSequelize().transaction((t) => issueToken(user.id, 'verify-email', t));
+    return verifyEmailMessage(user.email, user.displayName, token);
+  });
+}
+
+/**
  * E-mails a reset link when the address has an account. Returns at once, before
  * even looking: the look-up, the token and the SMTP wait run after the answer, so
  * neither the answer nor its timing says whether the account exists.

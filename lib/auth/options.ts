@@ -18,11 +18,9 @@ import { inBackground } from '@/lib/accounts/background';
 import { rememberUnits } from '@/lib/units/server';
 import { parseUnitPreference } from '@/lib/units/preference';
 
-/** Errors sign-in forms show; next-auth passes the message through as `error`. */
-export const SIGN_IN_ERRORS = {
-  wrong: 'That e-mail and password do not match an account.',
-  unverified: 'Confirm your e-mail first: follow the link we sent when you signed up.',
-} as const;
+import { SIGN_IN_ERRORS } from './sign-in-errors';
+
+export { SIGN_IN_ERRORS };
 
 type AuthedUser = { id: string; name: string; email: string; role: string; handle: string };
 

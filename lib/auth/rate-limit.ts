@@ -24,6 +24,8 @@ function makeLimits() {
     resetAccount: limiter(3, 60 * 60, 'reset-account'),
     linkIp: limiter(10, 60 * 60, 'link-ip'),
     linkAccount: limiter(3, 60 * 60, 'link-account'),
+    confirmIp: limiter(10, 60 * 60, 'confirm-ip'),
+    confirmAccount: limiter(3, 60 * 60, 'confirm-account'),
     // flood limits on writing: posts (new members get fewer), flags
     postAccount: limiter(30, 60 * 60, 'post-account'),
     postNewAccount: limiter(6, 60 * 60, 'post-new-account'),

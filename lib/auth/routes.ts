@@ -27,6 +27,7 @@ export const API_ROUTES: Record<string, Action | 'public' | 'session'> = {
   'POST /api/auth/[...nextauth]': 'session',
   'POST /api/account/sign-up': 'public',
   'POST /api/account/verify-email': 'public',
+  'POST /api/account/verify-email/resend': 'public',
   'POST /api/account/password-reset': 'public',
   'POST /api/account/password-reset/confirm': 'public',
   'POST /api/photos': 'photo.upload',

@@ -5,6 +5,7 @@ import { refusedBySuspension, REFUSAL, roleMayTry, type Action } from '@/lib/aut
 import { ForumError } from '@/lib/questions/errors';
 import { clientIp, limitMessage, refund, spend, type LimitName } from '@/lib/auth/rate-limit';
 import { isNewMember } from '@/lib/accounts/new-member';
+import { formatDate } from '@/lib/dates';
 
 export type FloodKind = 'post' | 'flag' | 'upload' | 'calculation';
 
@@ -36,7 +37,7 @@ export async function guarded(
   if (refusedBySuspension(user, action)) {
     return apiError(
       403,
-      `Your account is suspended until ${user.suspendedUntil!.toUTCString().slice(5, 16)}. See your notices in Settings for the reason.`,
+      `Your account is suspended until ${formatDate(user.suspendedUntil!)}. See your notices in Settings for the reason.`,
       undefined,
       'suspended',
     );

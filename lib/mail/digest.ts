@@ -9,6 +9,7 @@ import { enqueue, type OutgoingMail } from './outbox';
 import { renderMail, type MailItem, type MailSection } from './templates';
 import { unsubscribeHeaders, unsubscribePageUrl } from './unsubscribe';
 import { can } from '@/lib/auth/policy';
+import { formatDate } from '@/lib/dates';
 
 /**
  * Digests. A run for one frequency builds each member's message from what changed
@@ -77,8 +78,6 @@ async function tagNames(questionIds: number[]): Promise<Map<number, string[]>> {
   return out;
 }
 
-const dayFmt = new Intl.DateTimeFormat('en', { day: 'numeric', month: 'short', timeZone: 'UTC' });
-
 function questionItems(rows: QuestionRow[], tags: Map<number, string[]>, now: Date): MailItem[] {
   return rows.map((q) => {
     const days = Math.floor((now.getTime() - new Date(q.created_at).getTime()) / DAY);
@@ -113,7 +112,7 @@ async function staleGuides(guides: ReturnType<typeof listGuides>): Promise<MailI
     .map((g) => ({
       title: g.meta.title,
       url: `${siteUrl()}/guides/${g.slug}`,
-      meta: `last checked ${dayFmt.format(newest.get(g.slug)!.createdAt)}, on an earlier wording`,
+      meta: `last checked ${formatDate(newest.get(g.slug)!.createdAt)}, on an earlier wording`,
     }));
 }
 

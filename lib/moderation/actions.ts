@@ -12,6 +12,7 @@ import { bumpSessionVersion } from '@/lib/auth/session-version';
 
 export { MODERATION_ACTIONS, type ModerationAction } from '@/lib/vocabulary';
 import type { ModerationAction } from '@/lib/vocabulary';
+import { formatDate } from '@/lib/dates';
 
 const WORDS: Record<ModerationAction, string> = {
   dismiss: 'The flags on your post were reviewed and dismissed',
@@ -141,8 +142,7 @@ export async function moderate(
       },
       transaction,
     );
-    const untilWords =
-      input.action === 'suspend' ? ` until ${new Date(details.until as string).toUTCString().slice(5, 16)}` : '';
+    const untilWords = input.action === 'suspend' ? ` until ${formatDate(details.until as string)}` : '';
     await Notice.create(
       {
         userId: post.authorId,

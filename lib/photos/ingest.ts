@@ -9,7 +9,7 @@ import sharp, { type Metadata } from 'sharp';
 import { z } from 'zod';
 import type { CreationAttributes } from 'sequelize';
 import { initModels, type Photo } from '@/models';
-import { PHOTO_LIMITS } from './limits';
+import { displayName, PHOTO_LIMITS, PHOTO_MESSAGES } from './limits';
 import {
   isStorageUnavailable,
   makeRequestTmpDir,
@@ -47,17 +47,7 @@ export interface IngestedPhoto {
   thumbUrl: string;
 }
 
-const mb = (bytes: number) => `${Math.round(bytes / (1024 * 1024))} MB`;
-
-/** A file's name fit to quote back in a message: no path, no control characters, bounded. */
-export function displayName(original: string | null | undefined): string {
-  const base = (original ?? '')
-    .split(/[\\/]/)
-    .pop()!
-    .replace(/[\u0000-\u001f\u007f]/g, '')
-    .trim();
-  return base ? `“${base.length > 80 ? `${base.slice(0, 77)}…` : base}”` : 'a file with no name';
-}
+export { displayName };
 
 const ALT_TOO_LONG = `Describe each photo in ${PHOTO_LIMITS.maxAltChars} characters or fewer.`;
 const altSchema = z.array(z.string().trim().max(PHOTO_LIMITS.maxAltChars, ALT_TOO_LONG));
@@ -76,11 +66,7 @@ export async function ingestUpload(request: Request, ownerId: number): Promise<I
   const declared = Number(request.headers.get('content-length') ?? NaN);
   // room for the multipart framing and the alt texts around the file data
   if (Number.isFinite(declared) && declared > PHOTO_LIMITS.maxTotalBytes + 64 * 1024) {
-    throw new UploadRefused(
-      413,
-      `Photos can come to ${mb(PHOTO_LIMITS.maxTotalBytes)} at most in one upload.`,
-      'too_large',
-    );
+    throw new UploadRefused(413, PHOTO_MESSAGES.uploadTooLarge(), 'too_large');
   }
 
   let tmpDir: string;
@@ -202,19 +188,11 @@ function formidableRefusal(err: unknown, current: string | null): unknown {
   if (typeof code !== 'number') return err; // a Node error (disk full, …), classified by the caller
   switch (code) {
     case formidableErrors.biggerThanMaxFileSize:
-      return new UploadRefused(
-        413,
-        `${displayName(current)} is larger than ${mb(PHOTO_LIMITS.maxFileBytes)}, the limit for one photo.`,
-        'too_large',
-      );
+      return new UploadRefused(413, PHOTO_MESSAGES.fileTooLarge(current), 'too_large');
     case formidableErrors.biggerThanTotalMaxFileSize:
-      return new UploadRefused(
-        413,
-        `Photos can come to ${mb(PHOTO_LIMITS.maxTotalBytes)} at most in one upload.`,
-        'too_large',
-      );
+      return new UploadRefused(413, PHOTO_MESSAGES.uploadTooLarge(), 'too_large');
     case formidableErrors.maxFilesExceeded:
-      return new UploadRefused(413, `Send up to ${PHOTO_LIMITS.maxFiles} photos at a time.`, 'too_many_files');
+      return new UploadRefused(413, PHOTO_MESSAGES.tooMany(), 'too_many_files');
     case formidableErrors.noEmptyFiles:
     case formidableErrors.smallerThanMinFileSize:
       return new UploadRefused(400, `${displayName(current)} is empty.`, 'empty_file');

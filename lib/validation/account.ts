@@ -161,13 +161,15 @@ export function displayNameSchema(role: Role = 'member') {
     });
 }
 
+/** The handle's rule, in the words the sign-up form shows beside the field and the API answers with. */
+export const HANDLE_RULE = '3 to 30 characters: lower-case letters, digits or underscores (_)';
+export const HANDLE_MESSAGE = `handle must be ${HANDLE_RULE}`;
+const HANDLE_PATTERN = /^[a-z0-9_]{3,30}$/;
+
 export const signUpSchema = z.object({
   email,
   password: z.string({ error: 'password is required' }),
-  handle: z
-    .string({ error: 'handle is required' })
-    .trim()
-    .regex(/^[a-z0-9_]{3,30}$/, 'handle must be 3–30 lower-case letters, digits or underscores'),
+  handle: z.string({ error: 'handle is required' }).trim().regex(HANDLE_PATTERN, HANDLE_MESSAGE),
   displayName: displayNameSchema('member'),
 });
 

@@ -7,13 +7,13 @@ test('the header search finds the thread and the guide section for a builder’s
   await page.goto('/guides');
   await headerSearch(page, 'Has anyone had a 1-inch pump stop when the creek drops?');
   await expect(page).toHaveURL(/\/search\?q=Has\+anyone/);
-  const results = page.getByRole('listbox', { name: 'Results' });
-  const first = results.getByRole('option').first();
+  const results = page.getByRole('list', { name: 'Results' });
+  const first = results.getByRole('link').first();
   await expect(first).toContainText('1-inch pump stops every dry spell when the creek drops');
   await expect(first.locator('mark').first()).toBeVisible();
   await expect(
     results
-      .getByRole('option')
+      .getByRole('link')
       .filter({ hasText: /^Guide/ })
       .first(),
   ).toBeVisible();
@@ -22,24 +22,31 @@ test('the header search finds the thread and the guide section for a builder’s
 test('results follow each keystroke; arrows and Enter open one; filters narrow them', async ({ page }) => {
   await page.goto('/search');
   await expect(page.getByText('Results appear as you type')).toBeVisible();
-  const box = page.getByRole('combobox', { name: 'Search' });
+  const box = page.getByRole('searchbox', { name: 'Search', exact: true });
   await box.pressSequentially('impulse valve', { delay: 30 });
-  const results = page.getByRole('listbox', { name: 'Results' });
+  const results = page.getByRole('list', { name: 'Results' });
   // another name for the waste valve still finds the thread about its weight
   await expect(
-    results.getByRole('option').filter({ hasText: 'What weight on the waste valve for 4 ft of fall?' }),
+    results.getByRole('link').filter({ hasText: 'What weight on the waste valve for 4 ft of fall?' }),
   ).toBeVisible();
   await expect(page).toHaveURL(/q=impulse\+valve/);
 
   await page.getByLabel('Show').selectOption({ label: 'Guides' });
-  await expect(results.getByRole('option').first()).toContainText('Guide');
-  await expect(results.getByRole('option').filter({ hasText: /^Question/ })).toHaveCount(0);
+  await expect(results.getByRole('link').first()).toContainText('Guide');
+  await expect(results.getByRole('link').filter({ hasText: /^Question/ })).toHaveCount(0);
   await expect(page).toHaveURL(/kind=guide/);
 
   await box.focus();
   await page.keyboard.press('ArrowDown');
-  await expect(results.getByRole('option').first()).toHaveAttribute('aria-selected', 'true');
-  const title = (await results.getByRole('option').first().getByRole('link').textContent())!;
+  await expect(results.getByRole('link').first()).toBeFocused();
+  await page.keyboard.press('ArrowDown');
+  await expect(results.getByRole('link').nth(1)).toBeFocused();
+  await page.keyboard.press('ArrowUp');
+  await page.keyboard.press('ArrowUp');
+  await expect(box).toBeFocused();
+  await page.keyboard.press('ArrowDown');
+  // each result is one link, named by its kind and title
+  const title = (await results.getByRole('link').first().locator('[id$="t0"]').textContent())!;
   await page.keyboard.press('Enter');
   await expect(page).toHaveURL(/\/guides\//);
   await expect(page.getByRole('heading', { level: 1 })).toContainText(title.split(':')[0]);
@@ -48,7 +55,10 @@ test('results follow each keystroke; arrows and Enter open one; filters narrow t
 test('sizes match however they are written; nothing found suggests guides and the ask form', async ({ page }) => {
   await page.goto('/search?q=19%20mm%20drive%20line&kind=question');
   // the demo thread's drive pipe is written ¾" (19.05 mm: ASME B36.10M-2018 nominal sizes)
-  const thread = page.getByRole('option').filter({ hasText: 'drive pipe too short?' });
+  const thread = page
+    .getByRole('list', { name: 'Results' })
+    .getByRole('link')
+    .filter({ hasText: 'drive pipe too short?' });
   await expect(thread).toBeVisible();
   await expect(
     thread

@@ -99,6 +99,7 @@ const SAMPLE: Record<string, Record<string, unknown>> = {
   '/api/account/password-reset': { email: 'fuzz@example.test' },
   '/api/account/password-reset/confirm': { token: 'x'.repeat(43), password: 'a long and unusual passphrase 42' },
   '/api/account/verify-email': { token: 'x'.repeat(43) },
+  '/api/account/verify-email/resend': { email: 'fuzz@example.test' },
   '/api/guides/[slug]/safety-checks': { verdict: 'sound', notes: '' },
   '/api/field-log': {
     siteName: 'Fuzz spring',

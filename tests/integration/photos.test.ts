@@ -10,6 +10,7 @@ import { GET as getWeb } from '@/app/api/photos/[id]/route';
 import { GET as getThumb } from '@/app/api/photos/[id]/thumb/route';
 import { limits } from '@/lib/auth/rate-limit';
 import { ingestUpload } from '@/lib/photos/ingest';
+import { PHOTO_MESSAGES } from '@/lib/photos/limits';
 import { attachPhotos } from '@/lib/photos/store';
 import { isStorageUnavailable, photoPath } from '@/lib/photos/storage';
 import { initModels } from '@/models';
@@ -198,6 +199,8 @@ describe('POST /api/photos', () => {
     const { error } = await res.json();
     expect(error.message).toContain('8 MB'); // limit chosen in lib/photos/ingest.ts
     expect(error.message).toContain('huge.png');
+    // the picker refuses with the same sentence before uploading (tests/unit/photo-picker.test.tsx)
+    expect(error.message).toBe(PHOTO_MESSAGES.fileTooLarge('huge.png'));
     await expectNothingKept(before);
   });
 

@@ -5,7 +5,7 @@ import { describe, expect, it } from 'vitest';
 /*
  * Modules that must never reach a browser bundle start with `import 'server-only'`, so
  * `next build` fails when a client component pulls one in. Pure helpers the browser
- * uses (the permission table, the route→action table, the sign-in return path, the search text helpers) are the
+ * uses (the permission table, the route→action table, the sign-in return path and error words, the search text helpers) are the
  * listed exceptions.
  */
 const root = path.resolve(__dirname, '../..');
@@ -14,6 +14,7 @@ const BROWSER_SAFE = new Set([
   'lib/auth/policy.ts',
   'lib/auth/routes.ts',
   'lib/auth/return-path.ts',
+  'lib/auth/sign-in-errors.ts',
   'lib/search/normalize.ts',
   'lib/search/snippet.ts',
 ]);

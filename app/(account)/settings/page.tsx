@@ -6,11 +6,10 @@ import { loadSettingsPage } from '@/lib/accounts/settings-page';
 import { SettingsForm } from './SettingsForm';
 import { MailSettingsForm } from './MailSettingsForm';
 import { SignOutEverywhere } from '@/components/account/SignOutEverywhere';
+import { formatDate } from '@/lib/dates';
 
 export const metadata: Metadata = { title: 'Settings' };
 export const dynamic = 'force-dynamic';
-
-const dateFmt = new Intl.DateTimeFormat('en', { day: 'numeric', month: 'long', year: 'numeric', timeZone: 'UTC' });
 
 export default async function SettingsPage() {
   const user = await currentUserInPage();
@@ -69,14 +68,17 @@ export default async function SettingsPage() {
           Notices
         </h2>
         {loaded.notices.length === 0 ? (
-          <p className="cw-muted font-sans text-sm">Nothing yet.</p>
+          <p className="cw-muted font-sans text-sm">
+            No notices yet. A moderator’s decision about one of your posts, a change to your role and the answer to an
+            expert application arrive here. Answers and replies to your questions come by e-mail, as chosen above.
+          </p>
         ) : (
           <ol className="flex flex-col gap-2 font-sans">
             {loaded.notices.map((n) => (
               <li key={n.id} className="cw-card py-3">
                 <p className="whitespace-pre-line">{n.message}</p>
                 <p className="cw-muted mt-1 text-sm">
-                  {dateFmt.format(n.createdAt)}
+                  {formatDate(n.createdAt)}
                   {n.link && n.link !== '/settings' ? (
                     <>
                       {' · '}

@@ -5,10 +5,9 @@ import 'katex/dist/katex.min.css';
 import { findWorkedCalculation } from '@/lib/calculations/store';
 import { computeFromForm, getCalculator, resultsDiffer } from '@/lib/calculators';
 import { CalculatorById } from '@/components/calculators/Calculators';
+import { formatDate } from '@/lib/dates';
 
 export const metadata: Metadata = { title: 'Worked calculation' };
-
-const dateFmt = new Intl.DateTimeFormat('en', { day: 'numeric', month: 'long', year: 'numeric', timeZone: 'UTC' });
 
 export default async function WorkedCalculationPage({ params }: { params: Promise<{ id: string }> }) {
   const { id } = await params;
@@ -32,7 +31,7 @@ export default async function WorkedCalculationPage({ params }: { params: Promis
       </h1>
       <p className="cw-muted text-sm">
         {entry?.name ?? saved.tool} · saved {saved.author ? `by ${saved.author.displayName} ` : ''}on{' '}
-        {dateFmt.format(saved.createdAt)} with engine {saved.engineVersion}
+        {formatDate(saved.createdAt)} with engine {saved.engineVersion}
       </p>
       {changed ? (
         <p

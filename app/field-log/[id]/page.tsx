@@ -11,6 +11,7 @@ import { Caution } from '@/components/Caution';
 import { LinkForm } from '@/components/field-log/LinkForm';
 import { material, pumpsWords, shown, size } from '@/components/field-log/format';
 import { readUnitPreference } from '@/lib/units/server';
+import { formatDate } from '@/lib/dates';
 
 type Params = Promise<{ id: string }>;
 export const dynamic = 'force-dynamic';
@@ -20,7 +21,7 @@ export async function generateMetadata({ params }: { params: Params }): Promise<
   const e = id ? await getEntry(id, null).catch(() => null) : null;
   return e
     ? {
-        title: `${e.siteName}, ${e.testedOn}`,
+        title: `${e.siteName}, ${formatDate(e.testedOn)}`,
         description: `Field log: ${pumpsWords(e.pumpCount, e.arrangement, e.pumpSize)}, efficiency ${e.performance.dAubuisson.toFixed(2)}`,
       }
     : { title: 'Field log entry' };
@@ -43,7 +44,7 @@ export default async function FieldLogEntryPage({ params }: { params: Params }) 
   const { entry: e, links, photos, mayLink, mayAsk } = loaded;
   const candidates = loaded.linkCandidates.map((r) => ({
     id: r.id,
-    label: `${r.testedOn}: ${pumpsWords(r.pumpCount, r.arrangement, r.pumpSize)} (entry ${r.id})`,
+    label: `${formatDate(r.testedOn)}: ${pumpsWords(r.pumpCount, r.arrangement, r.pumpSize)} (entry ${r.id})`,
   }));
   const p = e.performance;
   const units = await readUnitPreference();
@@ -60,7 +61,7 @@ export default async function FieldLogEntryPage({ params }: { params: Params }) 
         </p>
         <h1 className="font-serif text-3xl font-semibold">{e.siteName}</h1>
         <p className="cw-muted font-sans text-sm">
-          Tested {e.testedOn} by{' '}
+          Tested {formatDate(e.testedOn)} by{' '}
           <Link href={`/people/${e.author.handle}`} className="cw-link">
             {e.author.displayName}
           </Link>{' '}

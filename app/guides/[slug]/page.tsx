@@ -6,6 +6,7 @@ import { listGuides, neighbours, readGuideFile } from '@/lib/guides/content';
 import { renderGuide } from '@/components/guides/GuideBody';
 import { LevelBadge } from '@/components/guides/LevelBadge';
 import { SafetyCheckStatusLazy as SafetyCheckStatus } from '@/components/guides/SafetyCheckStatusLazy';
+import { formatDate } from '@/lib/dates';
 
 export const dynamicParams = false;
 
@@ -17,8 +18,6 @@ export async function generateMetadata({ params }: { params: Promise<{ slug: str
   const guide = readGuideFile((await params).slug);
   return guide ? { title: guide.meta.title, description: guide.meta.summary } : {};
 }
-
-const dateFmt = new Intl.DateTimeFormat('en', { day: 'numeric', month: 'long', year: 'numeric', timeZone: 'UTC' });
 
 export default async function GuidePage({ params }: { params: Promise<{ slug: string }> }) {
   const { slug } = await params;
@@ -44,7 +43,7 @@ export default async function GuidePage({ params }: { params: Promise<{ slug: st
         <p className="cw-prose cw-muted">{guide.meta.summary}</p>
         <div className="flex flex-wrap items-center gap-3 text-sm">
           <LevelBadge level={guide.meta.level} />
-          <span className="cw-muted">Updated {dateFmt.format(new Date(`${guide.meta.updated}T00:00:00Z`))}</span>
+          <span className="cw-muted">Updated {formatDate(guide.meta.updated)}</span>
           {guide.meta.tags.map((t) => (
             <Link
               key={t}

@@ -5,11 +5,9 @@ import { cache } from 'react';
 import { publicProfile } from '@/lib/accounts/profile';
 import type { Role } from '@/models/User';
 import { getCalculator } from '@/lib/calculators';
+import { formatDate, formatMonth } from '@/lib/dates';
 
 export const dynamic = 'force-dynamic';
-
-const dateFmt = new Intl.DateTimeFormat('en', { day: 'numeric', month: 'long', year: 'numeric', timeZone: 'UTC' });
-const monthFmt = new Intl.DateTimeFormat('en', { month: 'long', year: 'numeric', timeZone: 'UTC' });
 
 // one query for the metadata and the page of a render
 const findPerson = cache(publicProfile);
@@ -55,7 +53,7 @@ export default async function PersonPage({ params }: { params: Promise<{ handle:
         </h1>
         <p className="cw-muted font-sans text-sm">
           @{person.handle}
-          {person.region ? ` · ${person.region}` : ''} · member since {monthFmt.format(person.createdAt)}
+          {person.region ? ` · ${person.region}` : ''} · member since {formatMonth(person.createdAt)}
         </p>
       </header>
       {person.bio ? <p className="cw-prose whitespace-pre-line">{person.bio}</p> : null}
@@ -64,7 +62,13 @@ export default async function PersonPage({ params }: { params: Promise<{ handle:
           Worked calculations
         </h2>
         {calculations.length === 0 ? (
-          <p className="cw-muted font-sans text-sm">{`${person.displayName} has not saved a worked calculation yet.`}</p>
+          <p className="cw-muted font-sans text-sm">
+            {`${person.displayName} has not saved a worked calculation yet. Any member can save one from a calculator’s results, and it is listed here; `}
+            <Link href="/calculators" className="cw-link">
+              open the calculators
+            </Link>
+            .
+          </p>
         ) : (
           <ul className="flex flex-col gap-2 font-sans">
             {calculations.map((c) => (
@@ -73,7 +77,7 @@ export default async function PersonPage({ params }: { params: Promise<{ handle:
                   {c.title ?? `${getCalculator(c.tool)?.name ?? c.tool}: worked calculation`}
                 </Link>
                 <p className="cw-muted text-sm">
-                  {getCalculator(c.tool)?.name ?? c.tool} · {dateFmt.format(c.createdAt)}
+                  {getCalculator(c.tool)?.name ?? c.tool} · {formatDate(c.createdAt)}
                 </p>
               </li>
             ))}

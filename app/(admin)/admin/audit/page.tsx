@@ -7,6 +7,7 @@ import { listAudit } from '@/lib/moderation/audit';
 import { Refused } from '@/components/account/Refused';
 import { AUDIT_ACTION_WORDS } from '@/components/moderation/words';
 import { inputClass, labelClass } from '@/components/forms/api';
+import { formatDateTime } from '@/lib/dates';
 
 export const metadata: Metadata = { title: 'Audit log' };
 export const dynamic = 'force-dynamic';
@@ -16,15 +17,6 @@ type AuditPage = Awaited<ReturnType<typeof listAudit>>;
 type AuditItem = AuditPage['items'][number];
 
 const FIELDS = ['action', 'actor', 'from', 'to', 'page'] as const;
-const whenFmt = new Intl.DateTimeFormat('en', {
-  day: 'numeric',
-  month: 'short',
-  year: 'numeric',
-  hour: '2-digit',
-  minute: '2-digit',
-  timeZone: 'UTC',
-  hour12: false,
-});
 
 /** The query as typed: one value per field, blanks dropped (an empty GET form field means "any"). */
 function readQuery(raw: Record<string, string | string[] | undefined>) {
@@ -121,7 +113,7 @@ export default async function AuditPage({ searchParams }: { searchParams: Search
       ) : null}
       <p className="cw-muted font-sans text-sm">
         {data.total === 0
-          ? 'Nothing recorded matches.'
+          ? 'Nothing recorded matches. Widen the dates or clear a filter; moderators’ and admins’ actions appear here as they happen.'
           : `${data.total} ${data.total === 1 ? 'entry' : 'entries'}, newest first · page ${data.page} of ${totalPages}. Times are UTC.`}
       </p>
       {data.items.length ? (
@@ -153,7 +145,7 @@ export default async function AuditPage({ searchParams }: { searchParams: Search
                   key={item.id}
                   className="border-b border-limestone-200 align-top last:border-0 dark:border-creek-700"
                 >
-                  <td className="cw-num whitespace-nowrap px-3 py-2">{whenFmt.format(new Date(item.at))}</td>
+                  <td className="cw-num whitespace-nowrap px-3 py-2">{formatDateTime(item.at)}</td>
                   <td className="px-3 py-2">
                     {item.actor ? (
                       <Link href={`/people/${item.actor.handle}`} className="cw-link">

@@ -5,18 +5,11 @@ import { outboxView } from '@/lib/mail/outbox';
 import { MAIL_STATUSES, type MailStatus } from '@/models/MailMessage';
 import { Refused } from '@/components/account/Refused';
 import { RetryButton } from './RetryButton';
+import { formatDateTime } from '@/lib/dates';
 
 export const metadata: Metadata = { title: 'E-mail outbox' };
 export const dynamic = 'force-dynamic';
 
-const whenFmt = new Intl.DateTimeFormat('en', {
-  day: 'numeric',
-  month: 'short',
-  hour: '2-digit',
-  minute: '2-digit',
-  timeZone: 'UTC',
-  hour12: false,
-});
 const STATUS_WORDS: Record<MailStatus, string> = {
   pending: 'waiting',
   sending: 'being sent',
@@ -62,7 +55,16 @@ export default async function OutboxPage({
         ))}
       </nav>
       {data.rows.length === 0 ? (
-        <p className="cw-card font-sans">No messages{status ? ` ${STATUS_WORDS[status]}` : ''}.</p>
+        <div className="cw-card flex flex-col gap-1 font-sans">
+          <p>No messages{status ? ` ${STATUS_WORDS[status]}` : ''}.</p>
+          <p className="cw-muted text-sm">
+            {status === 'failed'
+              ? 'Nothing to send again: every message either went out or is still being tried.'
+              : status
+                ? 'Choose “all” above to see every message.'
+                : 'Messages appear here as soon as something needs one sent: a sign-up, a reset, a notice, a digest.'}
+          </p>
+        </div>
       ) : (
         <div className="overflow-x-auto">
           <table className="w-full border-collapse font-sans text-sm">
@@ -83,7 +85,7 @@ export default async function OutboxPage({
                   className="border-b border-limestone-300 align-top dark:border-creek-600"
                   data-outbox-status={m.status}
                 >
-                  <td className="p-2 whitespace-nowrap">{whenFmt.format(m.createdAt)}</td>
+                  <td className="p-2 whitespace-nowrap">{formatDateTime(m.createdAt)}</td>
                   <td className="p-2">{m.toAddress}</td>
                   <td className="p-2">
                     <span className="cw-muted">{m.kind}</span>
@@ -93,10 +95,10 @@ export default async function OutboxPage({
                   <td className="p-2">
                     {STATUS_WORDS[m.status as MailStatus]}
                     {m.status === 'sent' && m.sentAt ? (
-                      <span className="cw-muted"> {whenFmt.format(m.sentAt)}</span>
+                      <span className="cw-muted"> {formatDateTime(m.sentAt)}</span>
                     ) : null}
                     {m.status === 'pending' && m.attempts > 0 ? (
-                      <span className="cw-muted"> — next try {whenFmt.format(m.nextAttemptAt)}</span>
+                      <span className="cw-muted"> — next try {formatDateTime(m.nextAttemptAt)}</span>
                     ) : null}
                   </td>
                   <td className="p-2">{m.attempts}</td>

@@ -38,42 +38,52 @@ export default async function AdminUsersPage({
       <p className="cw-muted font-sans text-sm">
         {`${data.total} members · page ${page} of ${data.totalPages}. A role change takes effect on the member’s next request, and they get a notice.`}
       </p>
-      <div className="cw-card overflow-x-auto p-0">
-        <table className="w-full font-sans text-sm">
-          <thead>
-            <tr className="border-b border-limestone-300 text-left dark:border-creek-600">
-              <th scope="col" className="px-3 py-2">
-                Handle
-              </th>
-              <th scope="col" className="px-3 py-2">
-                Display name
-              </th>
-              <th scope="col" className="px-3 py-2">
-                Role
-              </th>
-            </tr>
-          </thead>
-          <tbody>
-            {data.members.map((m) => (
-              <tr key={m.id} className="border-b border-limestone-200 last:border-0 dark:border-creek-700">
-                <td className="px-3 py-2">
-                  <Link href={`/people/${m.handle}`} className="cw-link">
-                    @{m.handle}
-                  </Link>
-                </td>
-                <td className="px-3 py-2">{m.displayName}</td>
-                <td className="px-3 py-2">
-                  {m.id === viewerId ? (
-                    <span title="Another admin can change your role">{m.role} (you)</span>
-                  ) : (
-                    <RolePicker userId={m.id} handle={m.handle} role={m.role} />
-                  )}
-                </td>
+      {data.members.length === 0 ? (
+        <p className="cw-card font-sans">
+          No members on this page.{' '}
+          <Link href="/admin/users" className="cw-link">
+            Go to the first page
+          </Link>
+          ; new members appear there as they sign up.
+        </p>
+      ) : (
+        <div className="cw-card overflow-x-auto p-0">
+          <table className="w-full font-sans text-sm">
+            <thead>
+              <tr className="border-b border-limestone-300 text-left dark:border-creek-600">
+                <th scope="col" className="px-3 py-2">
+                  Handle
+                </th>
+                <th scope="col" className="px-3 py-2">
+                  Display name
+                </th>
+                <th scope="col" className="px-3 py-2">
+                  Role
+                </th>
               </tr>
-            ))}
-          </tbody>
-        </table>
-      </div>
+            </thead>
+            <tbody>
+              {data.members.map((m) => (
+                <tr key={m.id} className="border-b border-limestone-200 last:border-0 dark:border-creek-700">
+                  <td className="px-3 py-2">
+                    <Link href={`/people/${m.handle}`} className="cw-link">
+                      @{m.handle}
+                    </Link>
+                  </td>
+                  <td className="px-3 py-2">{m.displayName}</td>
+                  <td className="px-3 py-2">
+                    {m.id === viewerId ? (
+                      <span title="Another admin can change your role">{m.role} (you)</span>
+                    ) : (
+                      <RolePicker userId={m.id} handle={m.handle} role={m.role} />
+                    )}
+                  </td>
+                </tr>
+              ))}
+            </tbody>
+          </table>
+        </div>
+      )}
       {data.totalPages > 1 ? (
         <nav aria-label="Pages" className="flex gap-4 font-sans text-sm">
           {page > 1 ? (

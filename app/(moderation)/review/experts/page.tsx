@@ -5,11 +5,10 @@ import { can, REFUSAL } from '@/lib/auth/policy';
 import { listPendingApplications, type PendingApplicationView } from '@/lib/accounts/roles';
 import { Refused } from '@/components/account/Refused';
 import { DecisionForm } from './DecisionForm';
+import { formatDate } from '@/lib/dates';
 
 export const metadata: Metadata = { title: 'Expert applications' };
 export const dynamic = 'force-dynamic';
-
-const dateFmt = new Intl.DateTimeFormat('en', { day: 'numeric', month: 'long', year: 'numeric', timeZone: 'UTC' });
 
 export default async function ReviewExpertsPage() {
   let applications: PendingApplicationView[] | null = null;
@@ -38,7 +37,7 @@ export default async function ReviewExpertsPage() {
       <h1 className="font-serif text-3xl font-semibold">Expert applications</h1>
       <p className="cw-muted font-sans text-sm">
         {applications.length === 0
-          ? 'No applications are waiting.'
+          ? 'No applications are waiting. Members apply from their settings; each new one appears here, and the review queue has any flagged posts.'
           : `${applications.length} waiting, oldest first. Your note is sent to the applicant with the decision.`}
       </p>
       <ol className="flex flex-col gap-4">
@@ -52,9 +51,8 @@ export default async function ReviewExpertsPage() {
                 <span className="cw-muted text-sm font-normal">@{a.applicant.handle}</span>
               </h2>
               <p className="cw-muted text-sm">
-                applied {dateFmt.format(new Date(a.createdAt))} · {a.region} ·{' '}
-                <span className="cw-num">{a.pumpsBuilt}</span> pumps built · <span className="cw-num">{a.years}</span>{' '}
-                years
+                applied {formatDate(a.createdAt)} · {a.region} · <span className="cw-num">{a.pumpsBuilt}</span> pumps
+                built · <span className="cw-num">{a.years}</span> years
               </p>
             </div>
             <p className="cw-prose whitespace-pre-line">{a.experience}</p>

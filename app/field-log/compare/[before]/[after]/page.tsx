@@ -6,6 +6,7 @@ import { idParam } from '@/lib/http/guard';
 import { getComparison, type Comparison } from '@/lib/field-log/store';
 import { pumpsWords, shown } from '@/components/field-log/format';
 import { readUnitPreference } from '@/lib/units/server';
+import { formatDate } from '@/lib/dates';
 
 export const metadata: Metadata = { title: 'Before and after' };
 export const dynamic = 'force-dynamic';
@@ -24,7 +25,7 @@ export default async function ComparePage({ params }: { params: Promise<{ before
       <h2 className="font-serif text-lg font-semibold">
         {label}:{' '}
         <Link href={`/field-log/${e.id}`} className="cw-link">
-          {e.testedOn}
+          {formatDate(e.testedOn)}
         </Link>
       </h2>
       <p>
