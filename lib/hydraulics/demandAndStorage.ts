@@ -6,7 +6,7 @@
 import * as z from 'zod/mini';
 import { GARDEN_DEPTH_PER_WEEK_M, LIVESTOCK_KINDS, householdRate, livestockRates } from './demandRates';
 import { flowM3s, parseInput, siNumber } from './schemaKit';
-import { finish, step, tq, type CalcOutput, type Step, type Warning } from './steps';
+import { finish, step, sub, tq, type CalcOutput, type Step, type Warning } from './steps';
 import { warn } from './warnings';
 
 export const demandAndStorageSchema = z.object({
@@ -89,7 +89,7 @@ export function planDemandAndStorage(input: DemandAndStorageInput): CalcOutput<D
       step(
         'Household',
         'D_h = n \\times r_p',
-        `D_h = ${v.people} \\times ${tq(perPerson, 'm³/day')}`,
+        sub`D_h = ${v.people} \\times ${tq(perPerson, 'm³/day')}`,
         house,
         'm³/day',
         'dailyVolume',
@@ -103,7 +103,7 @@ export function planDemandAndStorage(input: DemandAndStorageInput): CalcOutput<D
       step(
         'Garden',
         'D_g = \\frac{A\\,d_{week}}{7}',
-        `D_g = \\frac{${tq(v.gardenAreaM2, 'm²')} \\times ${tq(v.gardenDepthPerWeekM, 'm')}}{7}`,
+        sub`D_g = \\frac{${tq(v.gardenAreaM2, 'm²')} \\times ${tq(v.gardenDepthPerWeekM, 'm', 'smallLength')}}{7}`,
         garden,
         'm³/day',
         'dailyVolume',
@@ -120,7 +120,7 @@ export function planDemandAndStorage(input: DemandAndStorageInput): CalcOutput<D
       step(
         `Livestock: ${a.kind}`,
         'D_i = n_i \\times r_i',
-        `D_i = ${a.count} \\times ${tq(r, 'm³/day')}`,
+        sub`D_i = ${a.count} \\times ${tq(r, 'm³/day')}`,
         d,
         'm³/day',
         'dailyVolume',
@@ -132,7 +132,7 @@ export function planDemandAndStorage(input: DemandAndStorageInput): CalcOutput<D
     step(
       'Total demand',
       'D = D_h + D_g + \\sum D_i + D_o',
-      `D = ${tq(house)} + ${tq(garden)} + ${tq(stock)} + ${tq(v.otherM3PerDay)}\\,\\mathrm{m^3/day}`,
+      sub`D = ${tq(house)} + ${tq(garden)} + ${tq(stock)} + ${tq(v.otherM3PerDay)}\\,\\mathrm{m^3/day}`,
       total,
       'm³/day',
       'dailyVolume',
@@ -143,7 +143,7 @@ export function planDemandAndStorage(input: DemandAndStorageInput): CalcOutput<D
     step(
       'Delivered in 24 hours',
       'V = q \\times 86\\,400\\,\\mathrm{s}',
-      `V = ${tq(v.deliveredFlowM3s, 'm³/s')} \\times 86\\,400\\,\\mathrm{s}`,
+      sub`V = ${tq(v.deliveredFlowM3s, 'm³/s')} \\times 86\\,400\\,\\mathrm{s}`,
       delivery,
       'm³/day',
       'dailyVolume',
@@ -151,14 +151,14 @@ export function planDemandAndStorage(input: DemandAndStorageInput): CalcOutput<D
   );
   const surplus = delivery - total;
   steps.push(
-    step('Surplus', 'V - D', `${tq(delivery, 'm³/day')} - ${tq(total, 'm³/day')}`, surplus, 'm³/day', 'dailyVolume'),
+    step('Surplus', 'V - D', sub`${tq(delivery, 'm³/day')} - ${tq(total, 'm³/day')}`, surplus, 'm³/day', 'dailyVolume'),
   );
   const reserve = v.reserveDays * total;
   steps.push(
     step(
       'Tank for the reserve',
       'V_t = n_d \\times D',
-      `V_t = ${tq(v.reserveDays, 'day')} \\times ${tq(total, 'm³/day')}`,
+      sub`V_t = ${tq(v.reserveDays, 'day')} \\times ${tq(total, 'm³/day')}`,
       reserve,
       'm³',
       'volume',
@@ -182,7 +182,7 @@ export function planDemandAndStorage(input: DemandAndStorageInput): CalcOutput<D
       step(
         'Time to refill the reserve from empty',
         't = \\frac{V_t}{V - D}',
-        `t = \\frac{${tq(reserve, 'm³')}}{${tq(surplus, 'm³/day')}}`,
+        sub`t = \\frac{${tq(reserve, 'm³')}}{${tq(surplus, 'm³/day')}}`,
         results.reserveRefillTimeS,
         's',
         'time',
@@ -197,7 +197,7 @@ export function planDemandAndStorage(input: DemandAndStorageInput): CalcOutput<D
         step(
           'Time to refill the existing tank',
           't = \\frac{V_{tank}}{V - D}',
-          `t = \\frac{${tq(v.tankVolumeM3, 'm³')}}{${tq(surplus, 'm³/day')}}`,
+          sub`t = \\frac{${tq(v.tankVolumeM3, 'm³')}}{${tq(surplus, 'm³/day')}}`,
           results.tankRefillTimeS,
           's',
           'time',
