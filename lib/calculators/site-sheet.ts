@@ -16,7 +16,7 @@ import {
 import { ForumError } from '@/lib/questions/errors';
 import { DEFAULT_UNITS } from '@/lib/units/preference';
 import type { SiteSheetField } from '@/lib/validation/question';
-import { displayQuantity } from './format';
+import { formatQuantity } from './format';
 import type { CalculatorId } from './ids';
 import { SERIES_LABELS } from './pipes';
 import { computeFromForm } from './recompute';
@@ -178,14 +178,18 @@ export const SITE_SHEET_LABELS: Record<SiteSheetField, string> = {
   symptoms: 'What it does',
 };
 
-/** The site sheet for reading, each measurement in the reader's units. */
+/**
+ * The site sheet for reading, each measurement in the reader's units as a person would write
+ * it, whatever units the asker typed. A bare number is read as the server reads it when the
+ * question is asked (DEFAULT_UNITS), so every reader sees the same length.
+ */
 export function siteSheetRows(
   sheet: Record<string, string> | null,
   units: UnitSystem,
 ): { label: string; value: string }[] {
   if (!sheet) return [];
   const def = CALCULATORS['stall-check'];
-  const state = initialState(def.fields, sheet, {}, units);
+  const state = initialState(def.fields, sheet, {}, DEFAULT_UNITS);
   const rows: { label: string; value: string }[] = [];
   for (const [key, raw] of Object.entries(sheet)) {
     if (!raw) continue;
@@ -196,7 +200,7 @@ export function siteSheetRows(
       const si = field.name
         .split('.')
         .reduce<unknown>((o, k) => (o as Record<string, unknown> | undefined)?.[k], values);
-      if (typeof si === 'number') value = Object.values(displayQuantity(field.qty, si, units)).join(' ');
+      if (typeof si === 'number') value = formatQuantity(field.qty, si, units);
     } else if (key === 'driveSize' || key === 'pumpSize' || key === 'deliverySize') {
       value = NOMINAL_LABELS[raw as NominalSize] ?? raw;
     } else if (key === 'driveMaterial' || key === 'deliveryMaterial') {
