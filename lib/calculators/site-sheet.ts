@@ -8,6 +8,7 @@ import {
   defaultSeries,
   NOMINAL_LABELS,
   SYMPTOM_LABELS,
+  toDisplay,
   type NominalSize,
   type PipeMaterial,
   type Symptom,
@@ -76,22 +77,29 @@ export interface MeasuredSite {
 
 const short = (x: number) => String(Number(x.toPrecision(4)));
 
-/** A field log entry as a question's site sheet, so the ask form can be filled from a measured test. */
-export function entrySiteSheet(e: MeasuredSite): SiteSheet {
+/**
+ * A field log entry as a question's site sheet, so the ask form can be filled from a measured
+ * test; typed in the asker's units (ft and gal/min, or m and L/min), as they would type it.
+ */
+export function entrySiteSheet(e: MeasuredSite, units: UnitSystem = 'metric'): SiteSheet {
+  const typed = (kind: 'length' | 'flow', si: number) => {
+    const d = toDisplay(kind, si, units);
+    return `${short(d.value)} ${d.unit}`;
+  };
   const sheet: SiteSheet = {
-    fall: `${short(e.fallM)} m`,
-    lift: `${short(e.liftM)} m`,
-    driveLength: `${short(e.driveLengthM)} m`,
+    fall: typed('length', e.fallM),
+    lift: typed('length', e.liftM),
+    driveLength: typed('length', e.driveLengthM),
     driveSize: e.driveSize,
     driveMaterial: defaultSeries(e.driveMaterial as PipeMaterial),
     pumpSize: e.pumpSize,
     pumps: String(e.pumpCount),
     // the site sheet asks for one pump's drive flow
-    driveFlow: `${short((e.driveFlowM3s / e.pumpCount) * 60_000)} L/min`,
-    delivered: `${short(e.deliveredFlowM3s * 60_000)} L/min`,
+    driveFlow: typed('flow', e.driveFlowM3s / e.pumpCount),
+    delivered: typed('flow', e.deliveredFlowM3s),
   };
   if (e.beatsPerMinute !== null) sheet.bpm = String(e.beatsPerMinute);
-  if (e.deliveryLengthM !== null) sheet.deliveryLength = `${short(e.deliveryLengthM)} m`;
+  if (e.deliveryLengthM !== null) sheet.deliveryLength = typed('length', e.deliveryLengthM);
   if (e.deliverySize) sheet.deliverySize = e.deliverySize;
   if (e.deliveryMaterial) sheet.deliveryMaterial = defaultSeries(e.deliveryMaterial as PipeMaterial);
   return sheet;
