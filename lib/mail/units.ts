@@ -1,3 +1,4 @@
+import 'server-only';
 import type { UnitSystem } from '@/lib/hydraulics';
 import { quantitiesInUnits } from '@/lib/units/in-text';
 import type { MailContent } from './templates';

@@ -4,6 +4,7 @@
  * list dashes, heading hashes, quote marks, link targets and code fences go; a formula
  * becomes its plain reading (\frac{L}{D} → L/D, \times → ×, Greek letters as letters).
  */
+import 'server-only';
 
 const TEX_SYMBOLS: Record<string, string> = {
   times: '×',
