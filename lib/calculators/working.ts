@@ -4,7 +4,16 @@
  * e-notation). The engine keeps the values in SI with their kinds; this is where they meet
  * the reader.
  */
-import { partsTex, readableDisplay, type Step, type StepValue, type UnitSystem } from '@/lib/hydraulics';
+import {
+  fromSI,
+  partsTex,
+  readableDisplay,
+  unitLabel,
+  type QuantityKind,
+  type Step,
+  type StepValue,
+  type UnitSystem,
+} from '@/lib/hydraulics';
 import { formatNumber, formatQuantity } from './format';
 
 /** A unit label in TeX: "US gal/h" → \mathrm{US\ gal/h}, "m³" → \mathrm{m^{3}}. */
@@ -30,9 +39,32 @@ const FIXED_READABLE: Record<string, { factor: number; label: string }> = {
   'm²/s': { factor: 1e6, label: 'mm²/s' },
 };
 
+/** The unit each kind is written in within one step: a sum reads "29 ft + 0.03 ft", not "29 ft + 0.36 in". */
+type StepUnits = Partial<Record<QuantityKind, string>>;
+
+/** For each kind in a step's numbers, the unit a person would write the largest of them in. */
+function stepUnits(step: Step, units: UnitSystem): StepUnits {
+  const largest: Partial<Record<QuantityKind, number>> = {};
+  for (const p of step.substituted) {
+    if (typeof p === 'string' || !p.kind || p.kind === 'dimensionless') continue;
+    const seen = largest[p.kind];
+    if (seen === undefined || Math.abs(p.value) > Math.abs(seen)) largest[p.kind] = p.value;
+  }
+  const out: StepUnits = {};
+  for (const [kind, si] of Object.entries(largest) as [QuantityKind, number][])
+    out[kind] = readableDisplay(kind, si, units).unit;
+  return out;
+}
+
 /** One value of a step, shown: { number, unit label } in the reader's units where it has a kind. */
-export function stepValueDisplay(v: StepValue, units: UnitSystem): { value: number; label: string } {
+export function stepValueDisplay(
+  v: StepValue,
+  units: UnitSystem,
+  inStep?: StepUnits,
+): { value: number; label: string } {
   if (v.kind && v.kind !== 'dimensionless') {
+    const unit = inStep?.[v.kind];
+    if (unit) return { value: fromSI(v.value, unit, v.kind), label: unitLabel(unit) };
     const d = readableDisplay(v.kind, v.value, units);
     return { value: d.value, label: d.label };
   }
@@ -42,14 +74,15 @@ export function stepValueDisplay(v: StepValue, units: UnitSystem): { value: numb
 }
 
 /** A value in TeX in the reader's units. */
-export function stepValueTex(v: StepValue, units: UnitSystem): string {
-  const d = stepValueDisplay(v, units);
+export function stepValueTex(v: StepValue, units: UnitSystem, inStep?: StepUnits): string {
+  const d = stepValueDisplay(v, units, inStep);
   return `${texNumber(d.value)}${texUnitLabel(d.label)}`;
 }
 
-/** The substituted formula of a step in TeX, every number in the reader's units. */
+/** The substituted formula of a step in TeX, every number in the reader's units (one unit per kind). */
 export function substitutedTex(step: Step, units: UnitSystem): string {
-  return partsTex(step.substituted, (v) => stepValueTex(v, units));
+  const inStep = stepUnits(step, units);
+  return partsTex(step.substituted, (v) => stepValueTex(v, units, inStep));
 }
 
 /** A step's answer as plain text in the reader's units, e.g. "30 US gal/h" or "7.25". */

@@ -215,7 +215,7 @@ export function checkDeliveryLine(input: DeliveryLineInput): CalcOutput<Delivery
   if (smallest) {
     steps.push(
       step(
-        `Smallest ${series} size with loss under ${target.toFixed(2)} m`,
+        'Smallest size in this series that keeps the loss within the target',
         'h_f + h_m \\le h_{target}',
         sub`${smallest.nominal}\\text{ in: } ${tq(smallest.lossM, 'm')} \\le ${tq(target, 'm')}`,
         smallest.insideDiameterM,

@@ -1,6 +1,7 @@
 /** "Show the working" in the reader's units: the numbers put into each rule and the answer. */
 import { describe, expect, it } from 'vitest';
 import { checkDeliveryLine, estimateYield, siTex, type Step } from '@/lib/hydraulics';
+import { step, sub, tq } from '@/lib/hydraulics/steps';
 import { stepAnswer, substitutedTex, workingLines } from '@/lib/calculators/working';
 import { FALL, LIFT, deliveryLine, gpm } from '../hydraulics/fixtures';
 
@@ -62,5 +63,20 @@ describe('velocity in 100 ft of ½-inch schedule 40 PVC carrying 2 US gal/min', 
         // Hazen-Williams' constant 10.67 only holds in metres and m³/s, so that rule keeps them
         if (!l.title.includes('Hazen-Williams')) expect(l.substituted).not.toMatch(/m\^\{3\}\/s/);
       }
+  });
+});
+
+describe('one unit per kind within a step', () => {
+  it('a sum of heads reads in feet throughout, not feet plus inches', () => {
+    // 29 ft of lift plus 0.36 in (0.00914 m) of friction: 0.00914 m ÷ 0.3048 = 0.0300 ft (NIST SP 811, 2008)
+    const s = step(
+      'Head at the pump',
+      'h_p = h + h_f',
+      sub`h_p = ${tq(8.8392, 'm')} + ${tq(0.00914, 'm')}`,
+      8.84834,
+      'm',
+    );
+    expect(substitutedTex(s, 'US')).toBe('h_p = 29\\,\\mathrm{ft} + 0.03\\,\\mathrm{ft}');
+    expect(substitutedTex(s, 'metric')).toBe('h_p = 8.84\\,\\mathrm{m} + 0.00914\\,\\mathrm{m}');
   });
 });
