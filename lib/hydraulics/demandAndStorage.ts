@@ -4,10 +4,27 @@
  * reserve, and how long it takes to refill.
  */
 import * as z from 'zod/mini';
-import { GARDEN_DEPTH_PER_WEEK_M, LIVESTOCK_KINDS, householdRate, livestockRates } from './demandRates';
+import {
+  GARDEN_DEPTH_PER_WEEK_M,
+  LIVESTOCK_KINDS,
+  householdRate,
+  livestockRates,
+  type LivestockKind,
+} from './demandRates';
 import { flowM3s, parseInput, siNumber } from './schemaKit';
 import { finish, step, sub, tq, type CalcOutput, type Step, type Warning } from './steps';
 import { warn } from './warnings';
+
+/** The animals as a step's title names them (the kinds are stored codes). */
+const LIVESTOCK_WORDS: Record<LivestockKind, string> = {
+  'beef-cow': 'beef cattle',
+  'dairy-cow': 'dairy cows',
+  horse: 'horses',
+  sheep: 'sheep',
+  goat: 'goats',
+  pig: 'pigs',
+  'chickens-per-100': 'chickens, per hundred',
+};
 
 export const demandAndStorageSchema = z.object({
   /** ram delivery averaged over 24 hours, m³/s */
@@ -118,7 +135,7 @@ export function planDemandAndStorage(input: DemandAndStorageInput): CalcOutput<D
     stock += d;
     steps.push(
       step(
-        `Livestock: ${a.kind}`,
+        `Livestock: ${LIVESTOCK_WORDS[a.kind]}`,
         'D_i = n_i \\times r_i',
         sub`D_i = ${a.count} \\times ${tq(r, 'm³/day')}`,
         d,
