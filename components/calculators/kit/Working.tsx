@@ -1,6 +1,6 @@
 'use client';
 
-import { useEffect, useMemo, useState } from 'react';
+import { useCallback, useEffect, useMemo, useRef, useState } from 'react';
 import type { Step } from '@/lib/hydraulics';
 import { workingLines } from '@/lib/calculators/working';
 import { useUnits } from '@/components/units/UnitsProvider';
@@ -10,8 +10,7 @@ type Katex = Pick<typeof import('katex'), 'renderToString'>;
 /**
  * "Show the working" as a field notebook: for each step the rule, the reader's numbers put
  * into it, and what that comes to, in the reader's units. KaTeX loads on first open; a long
- * formula scrolls inside its own strip (shaded at the edge that hides more) rather than
- * being cut off on a phone.
+ * formula scrolls inside its own strip rather than being cut off on a phone.
  */
 export function Working({ steps }: { steps: Step[] }) {
   const { units } = useUnits();
@@ -26,14 +25,9 @@ export function Working({ steps }: { steps: Step[] }) {
 
   const formula = (tex: string, label: string) =>
     katex ? (
-      <div
-        className="cw-scroll-x py-1"
-        tabIndex={0}
-        role="group"
-        aria-label={label}
-        dangerouslySetInnerHTML={{
-          __html: katex.renderToString(tex, { throwOnError: false, displayMode: true, output: 'htmlAndMathml' }),
-        }}
+      <FormulaStrip
+        label={label}
+        html={katex.renderToString(tex, { throwOnError: false, displayMode: true, output: 'htmlAndMathml' })}
       />
     ) : (
       <code className="cw-scroll-x block py-1 text-xs" tabIndex={0} role="group" aria-label={label}>
@@ -76,5 +70,49 @@ export function Working({ steps }: { steps: Step[] }) {
         ))}
       </ol>
     </details>
+  );
+}
+
+/**
+ * A formula that scrolls sideways inside the card when it is wider than the phone; while more
+ * of it is hidden to the right, that edge fades and shows a chevron, so nobody takes the cut for
+ * the end of the equation.
+ */
+function FormulaStrip({ html, label }: { html: string; label: string }) {
+  const ref = useRef<HTMLDivElement>(null);
+  const [more, setMore] = useState(false);
+  const update = useCallback(() => {
+    const el = ref.current;
+    if (el) setMore(el.scrollLeft + el.clientWidth < el.scrollWidth - 2);
+  }, []);
+  useEffect(() => {
+    const el = ref.current;
+    if (!el) return;
+    update();
+    const ro = new ResizeObserver(update);
+    ro.observe(el);
+    return () => ro.disconnect();
+  }, [html, update]);
+  return (
+    <div className="relative">
+      <div
+        ref={ref}
+        className="cw-scroll-x py-1"
+        tabIndex={0}
+        role="group"
+        aria-label={label}
+        onScroll={update}
+        dangerouslySetInnerHTML={{ __html: html }}
+      />
+      {more ? (
+        <span
+          aria-hidden
+          data-testid="working-more"
+          className="pointer-events-none absolute inset-y-0 right-0 flex w-10 items-center justify-end bg-linear-to-l from-limestone-100 from-40% to-transparent pr-0.5 font-sans text-lg font-semibold text-clay-600 dark:from-creek-950 dark:text-clay-300"
+        >
+          ›
+        </span>
+      ) : null}
+    </div>
   );
 }
