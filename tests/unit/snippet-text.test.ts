@@ -12,6 +12,11 @@ describe('quantities in text, in the reader’s units', () => {
     // 20 L/min ÷ 3.785411784 = 5.283 US gal/min (NIST SP 811, 2008)
     expect(quantitiesInUnits('about 20 L/min through 90 metres', 'US')).toBe('about 5.28 US gal/min through 295 ft');
   });
+  it('bucket volumes', () => {
+    // 2 L ÷ 3.785411784 L/gal = 0.528 US gal; 5 gal × 3.785411784 = 18.93 L (NIST SP 811, 2008)
+    expect(quantitiesInUnits('bucket trials 2 L in 31.6 s', 'US')).toBe('bucket trials 0.528 US gal in 31.6 s');
+    expect(quantitiesInUnits('a 5 gallon bucket', 'metric')).toBe('a 18.9 L bucket');
+  });
   it('US to metric, grouped thousands and pressure', () => {
     // 1,200 ft × 0.3048 = 365.8 m; 60 psi × 6.894757 kPa/psi = 413.7 kPa (NIST SP 811, 2008)
     expect(quantitiesInUnits('a 1,200 ft line at 60 psi', 'metric')).toBe('a 366 m line at 414 kPa');
