@@ -6,6 +6,7 @@ import { listGuides } from '@/lib/guides/content';
 import { currentUserInPage } from '@/lib/auth/session';
 import { can } from '@/lib/auth/policy';
 import { initModels } from '@/models';
+import { readUnitPreference } from '@/lib/units/server';
 import { SearchResults, type SearchState } from '@/components/search/SearchResults';
 
 export const metadata: Metadata = { title: 'Search', robots: { index: false } };
@@ -34,7 +35,8 @@ export default async function SearchPage({
   }));
   if (query.q) {
     const { q, kind, ...rest } = query;
-    result = await search({ q, kinds: kind, ...rest }, { seeHidden: can(viewer, 'moderation.seeHidden') }).catch(
+    const units = await readUnitPreference();
+    result = await search({ q, kinds: kind, ...rest }, { seeHidden: can(viewer, 'moderation.seeHidden'), units }).catch(
       (err) => {
         if (err instanceof SearchUnavailableError) {
           unavailable = err.message;

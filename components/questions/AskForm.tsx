@@ -4,33 +4,74 @@ import { useDeferredValue, useEffect, useId, useMemo, useState, type ReactNode }
 import { Controller, useForm, useWatch, type FieldPath } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import type { z } from 'zod';
-import { SYMPTOM_LABELS, SYMPTOMS } from '@/lib/hydraulics';
+import { SYMPTOM_LABELS, SYMPTOMS, type UnitSystem } from '@/lib/hydraulics';
 import { askQuestionSchema, SITE_SHEET_FIELDS, type SiteSheetField } from '@/lib/validation/question';
 import { CALCULATORS, recompute, seriesOptions, sizeOptions } from '@/lib/calculators';
 import { CALCULATOR_VIEWS } from '@/components/calculators/views';
 import { inputClass, labelClass, sendJson } from '@/components/forms/api';
 import { MemberText } from '@/components/posts/MemberText';
 import { PhotoPicker } from '@/components/photos/PhotoPicker';
+import { useUnits } from '@/components/units/UnitsProvider';
 
 type AskInput = z.input<typeof askQuestionSchema>;
 type AskOutput = z.output<typeof askQuestionSchema>;
 type SiteSheet = Partial<Record<SiteSheetField, string>>;
 
-/** The site sheet's boxes, labelled as the trade says them; `hint` shows how to type a value with its unit. */
-const MEASUREMENTS: { name: SiteSheetField; label: string; hint: string }[] = [
-  { name: 'fall', label: 'Fall', hint: 'from the intake’s water surface down to the pump, e.g. “4 ft” or “1.2 m”' },
-  { name: 'lift', label: 'Lift', hint: 'from the pump up to the tank’s inlet, e.g. “29 ft”' },
-  { name: 'driveLength', label: 'Drive pipe length', hint: 'e.g. “24 ft”' },
+/**
+ * The site sheet's boxes, labelled as the trade says them; `hint` shows how to type a value with
+ * its unit, with an example in the reader's own units (any unit is accepted).
+ */
+const MEASUREMENTS: { name: SiteSheetField; label: string; hint: Record<UnitSystem, string> }[] = [
+  {
+    name: 'fall',
+    label: 'Fall',
+    hint: {
+      US: 'from the intake’s water surface down to the pump, e.g. “4 ft”',
+      metric: 'from the intake’s water surface down to the pump, e.g. “1.2 m”',
+    },
+  },
+  {
+    name: 'lift',
+    label: 'Lift',
+    hint: {
+      US: 'from the pump up to the tank’s inlet, e.g. “29 ft”',
+      metric: 'from the pump up to the tank’s inlet, e.g. “9 m”',
+    },
+  },
+  { name: 'driveLength', label: 'Drive pipe length', hint: { US: 'e.g. “24 ft”', metric: 'e.g. “7.5 m”' } },
   {
     name: 'sourceFlow',
     label: 'Source flow the source can spare',
-    hint: 'in the driest month, e.g. “5 gal/min” or “20 L/min”',
+    hint: { US: 'in the driest month, e.g. “5 gal/min”', metric: 'in the driest month, e.g. “20 L/min”' },
   },
-  { name: 'pumps', label: 'Pumps', hint: 'how many rams share the source' },
-  { name: 'driveFlow', label: 'Measured drive flow of one pump', hint: 'optional, e.g. “4 gal/min”' },
-  { name: 'delivered', label: 'Measured delivery', hint: 'optional, at the tank, e.g. “0.5 gal/min”' },
-  { name: 'bpm', label: 'Beats per minute', hint: 'optional, count the waste valve for a minute' },
-  { name: 'deliveryLength', label: 'Delivery pipe length', hint: 'optional, e.g. “300 ft”' },
+  {
+    name: 'pumps',
+    label: 'Pumps',
+    hint: { US: 'how many rams share the source', metric: 'how many rams share the source' },
+  },
+  {
+    name: 'driveFlow',
+    label: 'Measured drive flow of one pump',
+    hint: { US: 'optional, e.g. “4 gal/min”', metric: 'optional, e.g. “15 L/min”' },
+  },
+  {
+    name: 'delivered',
+    label: 'Measured delivery',
+    hint: { US: 'optional, at the tank, e.g. “30 gal/h”', metric: 'optional, at the tank, e.g. “2 L/min”' },
+  },
+  {
+    name: 'bpm',
+    label: 'Beats per minute',
+    hint: {
+      US: 'optional, count the waste valve for a minute',
+      metric: 'optional, count the waste valve for a minute',
+    },
+  },
+  {
+    name: 'deliveryLength',
+    label: 'Delivery pipe length',
+    hint: { US: 'optional, e.g. “300 ft”', metric: 'optional, e.g. “90 m”' },
+  },
 ];
 const PUMP_AND_PIPES: { name: SiteSheetField; label: string; options: readonly { value: string; label: string }[] }[] =
   [
@@ -72,7 +113,7 @@ type StallView =
   | { kind: 'refused'; field?: string; message: string }
   | { kind: 'causes'; node: ReactNode };
 
-function runStall(sheet: SiteSheet): StallView {
+function runStall(sheet: SiteSheet, units: UnitSystem): StallView {
   const props = siteSheetAsStallProps(sheet);
   if (blank(props.fall) && blank(props.lift)) return { kind: 'idle' };
   const missing = STALL_NEEDS.filter((k) => blank(props[k]));
@@ -88,7 +129,7 @@ function runStall(sheet: SiteSheet): StallView {
         ? needs(missing)
         : { kind: 'refused', field: r.field, message: r.message };
     if (missing.length) return needs(missing);
-    return { kind: 'causes', node: CALCULATOR_VIEWS['stall-check']?.extra?.(r.output.results, 'US') };
+    return { kind: 'causes', node: CALCULATOR_VIEWS['stall-check']?.extra?.(r.output.results, units) };
   } catch {
     return missing.length ? needs(missing) : { kind: 'idle' };
   }
@@ -154,6 +195,7 @@ export function AskForm({
   fromFieldLog?: { id: number; siteSheet: SiteSheet };
 }) {
   const uid = useId();
+  const { units } = useUnits();
   const id = (name: string) => `${uid}-${name.replace('.', '-')}`;
   const {
     register,
@@ -181,8 +223,8 @@ export function AskForm({
   // keyed on the values, not the object: the engine runs once per change to the site sheet
   const sheetKey = JSON.stringify(STALL_PROPS.map((k) => sheet[k] ?? ''));
   const stall = useMemo(
-    () => runStall(Object.fromEntries(STALL_PROPS.map((k, i) => [k, (JSON.parse(sheetKey) as string[])[i]]))),
-    [sheetKey],
+    () => runStall(Object.fromEntries(STALL_PROPS.map((k, i) => [k, (JSON.parse(sheetKey) as string[])[i]])), units),
+    [sheetKey, units],
   );
   const similar = useSimilarQuestions(title, chosenTags, sheet.fall ?? '', sheet.lift ?? '');
 
@@ -330,7 +372,7 @@ export function AskForm({
                     className={`${inputClass} cw-num`}
                   />
                   <p id={`${id(name)}-hint`} className="cw-muted mt-1 text-xs">
-                    {m.hint}
+                    {m.hint[units]}
                   </p>
                   <FieldMessage id={`${id(name)}-error`} message={errorAt(name)} />
                 </div>

@@ -8,6 +8,7 @@ import {
   defaultSeries,
   NOMINAL_LABELS,
   SYMPTOM_LABELS,
+  toDisplay,
   type NominalSize,
   type PipeMaterial,
   type Symptom,
@@ -16,7 +17,7 @@ import {
 import { ForumError } from '@/lib/questions/errors';
 import { DEFAULT_UNITS } from '@/lib/units/preference';
 import type { SiteSheetField } from '@/lib/validation/question';
-import { displayQuantity } from './format';
+import { formatQuantity } from './format';
 import type { CalculatorId } from './ids';
 import { SERIES_LABELS } from './pipes';
 import { computeFromForm } from './recompute';
@@ -76,22 +77,29 @@ export interface MeasuredSite {
 
 const short = (x: number) => String(Number(x.toPrecision(4)));
 
-/** A field log entry as a question's site sheet, so the ask form can be filled from a measured test. */
-export function entrySiteSheet(e: MeasuredSite): SiteSheet {
+/**
+ * A field log entry as a question's site sheet, so the ask form can be filled from a measured
+ * test; typed in the asker's units (ft and gal/min, or m and L/min), as they would type it.
+ */
+export function entrySiteSheet(e: MeasuredSite, units: UnitSystem = 'metric'): SiteSheet {
+  const typed = (kind: 'length' | 'flow', si: number) => {
+    const d = toDisplay(kind, si, units);
+    return `${short(d.value)} ${d.unit}`;
+  };
   const sheet: SiteSheet = {
-    fall: `${short(e.fallM)} m`,
-    lift: `${short(e.liftM)} m`,
-    driveLength: `${short(e.driveLengthM)} m`,
+    fall: typed('length', e.fallM),
+    lift: typed('length', e.liftM),
+    driveLength: typed('length', e.driveLengthM),
     driveSize: e.driveSize,
     driveMaterial: defaultSeries(e.driveMaterial as PipeMaterial),
     pumpSize: e.pumpSize,
     pumps: String(e.pumpCount),
     // the site sheet asks for one pump's drive flow
-    driveFlow: `${short((e.driveFlowM3s / e.pumpCount) * 60_000)} L/min`,
-    delivered: `${short(e.deliveredFlowM3s * 60_000)} L/min`,
+    driveFlow: typed('flow', e.driveFlowM3s / e.pumpCount),
+    delivered: typed('flow', e.deliveredFlowM3s),
   };
   if (e.beatsPerMinute !== null) sheet.bpm = String(e.beatsPerMinute);
-  if (e.deliveryLengthM !== null) sheet.deliveryLength = `${short(e.deliveryLengthM)} m`;
+  if (e.deliveryLengthM !== null) sheet.deliveryLength = typed('length', e.deliveryLengthM);
   if (e.deliverySize) sheet.deliverySize = e.deliverySize;
   if (e.deliveryMaterial) sheet.deliveryMaterial = defaultSeries(e.deliveryMaterial as PipeMaterial);
   return sheet;
@@ -178,14 +186,18 @@ export const SITE_SHEET_LABELS: Record<SiteSheetField, string> = {
   symptoms: 'What it does',
 };
 
-/** The site sheet for reading, each measurement in the reader's units. */
+/**
+ * The site sheet for reading, each measurement in the reader's units as a person would write
+ * it, whatever units the asker typed. A bare number is read as the server reads it when the
+ * question is asked (DEFAULT_UNITS), so every reader sees the same length.
+ */
 export function siteSheetRows(
   sheet: Record<string, string> | null,
   units: UnitSystem,
 ): { label: string; value: string }[] {
   if (!sheet) return [];
   const def = CALCULATORS['stall-check'];
-  const state = initialState(def.fields, sheet, {}, units);
+  const state = initialState(def.fields, sheet, {}, DEFAULT_UNITS);
   const rows: { label: string; value: string }[] = [];
   for (const [key, raw] of Object.entries(sheet)) {
     if (!raw) continue;
@@ -196,7 +208,7 @@ export function siteSheetRows(
       const si = field.name
         .split('.')
         .reduce<unknown>((o, k) => (o as Record<string, unknown> | undefined)?.[k], values);
-      if (typeof si === 'number') value = Object.values(displayQuantity(field.qty, si, units)).join(' ');
+      if (typeof si === 'number') value = formatQuantity(field.qty, si, units);
     } else if (key === 'driveSize' || key === 'pumpSize' || key === 'deliverySize') {
       value = NOMINAL_LABELS[raw as NominalSize] ?? raw;
     } else if (key === 'driveMaterial' || key === 'deliveryMaterial') {

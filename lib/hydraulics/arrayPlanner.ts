@@ -19,7 +19,7 @@ import {
 } from './parallelPumps';
 import { DEFAULT_CLOSURE_RATIO } from './ramCycle';
 import { addRangeIssue, efficiency, fallM, flowM3s, liftM, parseInput, siNumber, waterTempC } from './schemaKit';
-import { finish, step, tq, type CalcOutput, type Step, type Warning } from './steps';
+import { finish, joinParts, step, sub, tq, type CalcOutput, type Step, type Warning } from './steps';
 import { PRACTICE } from './practice';
 import { warn } from './warnings';
 import { qty, say } from './message';
@@ -194,7 +194,7 @@ export function planArray(input: ArrayPlannerInput): CalcOutput<ArrayPlannerResu
         step(
           `${p.label}: drive flow (estimated)`,
           'Q = A\\,\\frac{x_a + x_d}{t_a + t_d}',
-          `Q \\approx ${tq(p.driveFlowM3s, 'm³/s')}`,
+          sub`Q \\approx ${tq(p.driveFlowM3s, 'm³/s')}`,
           p.driveFlowM3s,
           'm³/s',
           'flow',
@@ -207,7 +207,7 @@ export function planArray(input: ArrayPlannerInput): CalcOutput<ArrayPlannerResu
         step(
           `${p.label}: fittings in the drive pipe`,
           '\\Delta H = \\Sigma K\\,\\frac{v_c^2}{2g}',
-          `\\Delta H = ${tq(p.fittingsK)} \\times \\frac{(${tq(p.closureVelocityMs, 'm/s')})^2}{2 \\times 9.807\\,\\mathrm{m/s^2}}`,
+          sub`\\Delta H = ${tq(p.fittingsK)} \\times \\frac{(${tq(p.closureVelocityMs, 'm/s')})^2}{2 \\times 9.807\\,\\mathrm{m/s^2}}`,
           p.fittingHeadLossM,
           'm',
           'length',
@@ -217,7 +217,7 @@ export function planArray(input: ArrayPlannerInput): CalcOutput<ArrayPlannerResu
         step(
           `${p.label}: effective fall`,
           'H_{eff} = H - \\Delta H',
-          `H_{eff} = ${tq(H, 'm')} - ${tq(p.fittingHeadLossM, 'm')}`,
+          sub`H_{eff} = ${tq(H, 'm')} - ${tq(p.fittingHeadLossM, 'm')}`,
           p.effectiveFallM,
           'm',
           'length',
@@ -246,7 +246,7 @@ export function planArray(input: ArrayPlannerInput): CalcOutput<ArrayPlannerResu
     step(
       'Losses in the shared delivery line at the combined flow',
       'h_f = f\\,\\frac{L}{D}\\,\\frac{v^2}{2g} + \\Sigma K\\,\\frac{v^2}{2g}',
-      `h_f = ${tq(sol.loss.friction.f)} \\times \\frac{${tq(line.lengthM, 'm')}}{${tq(line.insideDiameterM, 'm')}} \\times \\frac{(${tq(sol.loss.velocityMs, 'm/s')})^2}{2g} + ${tq(line.sumK)}\\,\\frac{v^2}{2g}`,
+      sub`h_f = ${tq(sol.loss.friction.f)} \\times \\frac{${tq(line.lengthM, 'm')}}{${tq(line.insideDiameterM, 'm', 'smallLength')}} \\times \\frac{(${tq(sol.loss.velocityMs, 'm/s')})^2}{2g} + ${tq(line.sumK)}\\,\\frac{v^2}{2g}`,
       sol.frictionHeadM + sol.minorHeadM,
       'm',
       'length',
@@ -256,7 +256,7 @@ export function planArray(input: ArrayPlannerInput): CalcOutput<ArrayPlannerResu
     step(
       'Head at each pump',
       'h_p = h + h_f',
-      `h_p = ${tq(h, 'm')} + ${tq(sol.frictionHeadM + sol.minorHeadM, 'm')}`,
+      sub`h_p = ${tq(h, 'm')} + ${tq(sol.frictionHeadM + sol.minorHeadM, 'm')}`,
       sol.pumpHeadM,
       'm',
       'length',
@@ -267,7 +267,7 @@ export function planArray(input: ArrayPlannerInput): CalcOutput<ArrayPlannerResu
       step(
         `${p.label}: delivery`,
         'q_i = \\eta_i\\,Q_i\\,\\frac{H_{eff,i}}{h_p}',
-        `q_i = ${tq(eta)} \\times ${tq(p.driveFlowM3s, 'm³/s')} \\times \\frac{${tq(p.effectiveFallM, 'm')}}{${tq(sol.pumpHeadM, 'm')}}`,
+        sub`q_i = ${tq(eta)} \\times ${tq(p.driveFlowM3s, 'm³/s')} \\times \\frac{${tq(p.effectiveFallM, 'm')}}{${tq(sol.pumpHeadM, 'm')}}`,
         q,
         'm³/s',
         'flow',
@@ -278,7 +278,10 @@ export function planArray(input: ArrayPlannerInput): CalcOutput<ArrayPlannerResu
     step(
       'Combined delivery',
       'S = \\sum_i q_i',
-      `S = ${sol.pumps.map((x) => tq(x.deliveredFlowM3s, 'm³/s')).join(' + ')}`,
+      sub`S = ${joinParts(
+        sol.pumps.map((x) => tq(x.deliveredFlowM3s, 'm³/s')),
+        ' + ',
+      )}`,
       sol.combinedFlowM3s,
       'm³/s',
       'flow',
@@ -293,7 +296,7 @@ export function planArray(input: ArrayPlannerInput): CalcOutput<ArrayPlannerResu
     step(
       'Highest lift the array can reach',
       'h_{max} = \\max_i\\; r_{max}\\,H_{eff,i}',
-      `h_{max} = ${tq(maxLift, 'm')}`,
+      sub`h_{max} = ${tq(maxLift, 'm')}`,
       maxLift,
       'm',
       'length',
@@ -318,7 +321,7 @@ export function planArray(input: ArrayPlannerInput): CalcOutput<ArrayPlannerResu
       step(
         'Drive flow against what the source can spare',
         '\\frac{\\Sigma Q}{Q_{spare}}',
-        `\\frac{${tq(totalDrive, 'm³/s')}}{${tq(v.sourceSpareFlowM3s, 'm³/s')}}`,
+        sub`\\frac{${tq(totalDrive, 'm³/s')}}{${tq(v.sourceSpareFlowM3s, 'm³/s')}}`,
         sourceShare,
         '',
       ),
@@ -402,7 +405,7 @@ function planStage(
     step(
       'Upper pump: delivery while running',
       'q_u = \\eta_u\\,Q_u\\,\\frac{H_u}{h_u}',
-      `q_u = ${tq(upperAt.efficiency)} \\times ${tq(Qu, 'm³/s')} \\times \\frac{${tq(upper.effectiveFallM, 'm')}}{${tq(up.pumpHeadM, 'm')}}`,
+      sub`q_u = ${tq(upperAt.efficiency)} \\times ${tq(Qu, 'm³/s')} \\times \\frac{${tq(upper.effectiveFallM, 'm')}}{${tq(up.pumpHeadM, 'm')}}`,
       up.combinedFlowM3s,
       'm³/s',
       'flow',
@@ -412,7 +415,7 @@ function planStage(
     step(
       'Share of the day the upper pump can run',
       'd = \\min\\left(1, \\frac{S}{Q_u}\\right)',
-      `d = \\min\\left(1, \\frac{${tq(S, 'm³/s')}}{${tq(Qu, 'm³/s')}}\\right)`,
+      sub`d = \\min\\left(1, \\frac{${tq(S, 'm³/s')}}{${tq(Qu, 'm³/s')}}\\right)`,
       duty,
       '',
     ),
@@ -421,7 +424,7 @@ function planStage(
     step(
       'Average yield at the top',
       '\\bar q_{top} = d\\,q_u',
-      `\\bar q_{top} = ${tq(duty)} \\times ${tq(up.combinedFlowM3s, 'm³/s')}`,
+      sub`\\bar q_{top} = ${tq(duty)} \\times ${tq(up.combinedFlowM3s, 'm³/s')}`,
       top,
       'm³/s',
       'flow',
@@ -442,7 +445,7 @@ function planStage(
     step(
       'Lower pumps needed to run the upper pump around the clock',
       'n = \\min\\{n : S(n) \\ge Q_u\\}',
-      `S(n) \\ge ${tq(Qu, 'm³/s')}`,
+      sub`S(n) \\ge ${tq(Qu, 'm³/s')}`,
       needed,
       '',
       undefined,

@@ -9,7 +9,7 @@ import { hazenWilliamsHeadLoss, pipeLoss, type FlowRegime } from './friction';
 import { NOMINAL_SIZES, PIPE_SERIES, defaultSeries, resolvePipe, type NominalSize, type PipeSeries } from './pipes';
 import { hazenCOf, pipeRunSchema, roughnessOf } from './pipeSchemas';
 import { flowM3s, liftM, parseInput, siNumber, waterTempC } from './schemaKit';
-import { finish, step, tq, type CalcOutput, type Step, type Warning } from './steps';
+import { finish, step, sub, tq, type CalcOutput, type Step, type Warning } from './steps';
 import { PRACTICE } from './practice';
 import { warn } from './warnings';
 import { qty, say } from './message';
@@ -103,7 +103,7 @@ export function checkDeliveryLine(input: DeliveryLineInput): CalcOutput<Delivery
     step(
       'Velocity',
       'v = \\frac{4Q}{\\pi D^2}',
-      `v = \\frac{4 \\times ${tq(Q, 'm³/s')}}{\\pi \\times (${tq(D, 'm')})^2}`,
+      sub`v = \\frac{4 \\times ${tq(Q, 'm³/s')}}{\\pi \\times (${tq(D, 'm', 'smallLength')})^2}`,
       loss.velocityMs,
       'm/s',
       'velocity',
@@ -113,21 +113,21 @@ export function checkDeliveryLine(input: DeliveryLineInput): CalcOutput<Delivery
     step(
       'Reynolds number',
       'Re = \\frac{v D}{\\nu}',
-      `Re = \\frac{${tq(loss.velocityMs, 'm/s')} \\times ${tq(D, 'm')}}{${tq(nu, 'm²/s')}}`,
+      sub`Re = \\frac{${tq(loss.velocityMs, 'm/s')} \\times ${tq(D, 'm', 'smallLength')}}{${tq(nu, 'm²/s')}}`,
       loss.reynolds,
       '',
     ),
   );
   if (fr.regime === 'laminar') {
     steps.push(
-      step('Friction factor (laminar)', 'f = \\frac{64}{Re}', `f = \\frac{64}{${tq(loss.reynolds)}}`, fr.f, ''),
+      step('Friction factor (laminar)', 'f = \\frac{64}{Re}', sub`f = \\frac{64}{${tq(loss.reynolds)}}`, fr.f, ''),
     );
   } else {
     steps.push(
       step(
         'Friction factor (Colebrook-White)',
         '\\frac{1}{\\sqrt f} = -2\\log_{10}\\left(\\frac{\\varepsilon}{3.7D} + \\frac{2.51}{Re\\sqrt f}\\right)',
-        `\\varepsilon/D = ${tq(eps / D)},\\; Re = ${tq(loss.reynolds)}`,
+        sub`\\varepsilon/D = ${tq(eps / D)},\\; Re = ${tq(loss.reynolds)}`,
         fr.f,
         '',
         undefined,
@@ -140,7 +140,7 @@ export function checkDeliveryLine(input: DeliveryLineInput): CalcOutput<Delivery
       step(
         'Friction factor (Swamee-Jain cross-check)',
         'f = \\frac{0.25}{\\left[\\log_{10}\\left(\\frac{\\varepsilon}{3.7D} + \\frac{5.74}{Re^{0.9}}\\right)\\right]^2}',
-        `\\varepsilon/D = ${tq(eps / D)},\\; Re = ${tq(loss.reynolds)}`,
+        sub`\\varepsilon/D = ${tq(eps / D)},\\; Re = ${tq(loss.reynolds)}`,
         fr.fSwameeJain,
         '',
       ),
@@ -150,7 +150,7 @@ export function checkDeliveryLine(input: DeliveryLineInput): CalcOutput<Delivery
     step(
       'Friction loss (Darcy-Weisbach)',
       'h_f = f\\,\\frac{L}{D}\\,\\frac{v^2}{2g}',
-      `h_f = ${tq(fr.f)} \\times \\frac{${tq(line.lengthM, 'm')}}{${tq(D, 'm')}} \\times \\frac{(${tq(loss.velocityMs, 'm/s')})^2}{2 \\times 9.807\\,\\mathrm{m/s^2}}`,
+      sub`h_f = ${tq(fr.f)} \\times \\frac{${tq(line.lengthM, 'm')}}{${tq(D, 'm', 'smallLength')}} \\times \\frac{(${tq(loss.velocityMs, 'm/s')})^2}{2 \\times 9.807\\,\\mathrm{m/s^2}}`,
       loss.frictionHeadM,
       'm',
       'length',
@@ -161,17 +161,18 @@ export function checkDeliveryLine(input: DeliveryLineInput): CalcOutput<Delivery
     step(
       'Friction loss (Hazen-Williams, second opinion)',
       'h_f = \\frac{10.67\\,L\\,Q^{1.852}}{C^{1.852}\\,D^{4.87}}',
-      `h_f = \\frac{10.67 \\times ${tq(line.lengthM, 'm')} \\times (${tq(Q, 'm³/s')})^{1.852}}{${tq(C)}^{1.852} \\times (${tq(D, 'm')})^{4.87}}`,
+      sub`h_f = \\frac{10.67 \\times ${tq(line.lengthM, 'm', null)} \\times (${tq(Q, 'm³/s', null)})^{1.852}}{${tq(C)}^{1.852} \\times (${tq(D, 'm', null)})^{4.87}}`,
       hw,
       'm',
       'length',
+      'The constant 10.67 holds for metres and cubic metres a second, so this rule keeps its numbers in those units.',
     ),
   );
   steps.push(
     step(
       'Fitting losses',
       'h_m = \\Sigma K\\,\\frac{v^2}{2g}',
-      `h_m = ${tq(k)} \\times \\frac{(${tq(loss.velocityMs, 'm/s')})^2}{2g}`,
+      sub`h_m = ${tq(k)} \\times \\frac{(${tq(loss.velocityMs, 'm/s')})^2}{2g}`,
       loss.minorHeadM,
       'm',
       'length',
@@ -182,7 +183,7 @@ export function checkDeliveryLine(input: DeliveryLineInput): CalcOutput<Delivery
     step(
       'Head at the pump',
       'h_p = h + h_f + h_m',
-      `h_p = ${tq(h, 'm')} + ${tq(loss.frictionHeadM, 'm')} + ${tq(loss.minorHeadM, 'm')}`,
+      sub`h_p = ${tq(h, 'm')} + ${tq(loss.frictionHeadM, 'm')} + ${tq(loss.minorHeadM, 'm')}`,
       total,
       'm',
       'length',
@@ -193,7 +194,7 @@ export function checkDeliveryLine(input: DeliveryLineInput): CalcOutput<Delivery
     step(
       'Pressure at the pump',
       'p = \\rho\\,g\\,h_p',
-      `p = ${tq(rho, 'kg/m³')} \\times ${tq(G, 'm/s²')} \\times ${tq(total, 'm')}`,
+      sub`p = ${tq(rho, 'kg/m³')} \\times ${tq(G, 'm/s²')} \\times ${tq(total, 'm')}`,
       p,
       'Pa',
       'pressure',
@@ -215,9 +216,9 @@ export function checkDeliveryLine(input: DeliveryLineInput): CalcOutput<Delivery
   if (smallest) {
     steps.push(
       step(
-        `Smallest ${series} size with loss under ${target.toFixed(2)} m`,
+        'Smallest size in this series that keeps the loss within the target',
         'h_f + h_m \\le h_{target}',
-        `${smallest.nominal}\\text{ in: } ${tq(smallest.lossM, 'm')} \\le ${tq(target, 'm')}`,
+        sub`${smallest.nominal}\\text{ in: } ${tq(smallest.lossM, 'm')} \\le ${tq(target, 'm')}`,
         smallest.insideDiameterM,
         'm',
         'smallLength',

@@ -4,11 +4,28 @@
  * reserve, and how long it takes to refill.
  */
 import * as z from 'zod/mini';
-import { GARDEN_DEPTH_PER_WEEK_M, LIVESTOCK_KINDS, householdRate, livestockRates } from './demandRates';
+import {
+  GARDEN_DEPTH_PER_WEEK_M,
+  LIVESTOCK_KINDS,
+  householdRate,
+  livestockRates,
+  type LivestockKind,
+} from './demandRates';
 import { flowM3s, parseInput, siNumber } from './schemaKit';
-import { finish, step, tq, type CalcOutput, type Step, type Warning } from './steps';
+import { finish, step, sub, tq, type CalcOutput, type Step, type Warning } from './steps';
 import { warn } from './warnings';
 import { qty, say } from './message';
+
+/** The animals as a step's title names them (the kinds are stored codes). */
+const LIVESTOCK_WORDS: Record<LivestockKind, string> = {
+  'beef-cow': 'beef cattle',
+  'dairy-cow': 'dairy cows',
+  horse: 'horses',
+  sheep: 'sheep',
+  goat: 'goats',
+  pig: 'pigs',
+  'chickens-per-100': 'chickens, per hundred',
+};
 
 export const demandAndStorageSchema = z.object({
   /** ram delivery averaged over 24 hours, m³/s */
@@ -90,7 +107,7 @@ export function planDemandAndStorage(input: DemandAndStorageInput): CalcOutput<D
       step(
         'Household',
         'D_h = n \\times r_p',
-        `D_h = ${v.people} \\times ${tq(perPerson, 'm³/day')}`,
+        sub`D_h = ${v.people} \\times ${tq(perPerson, 'm³/day')}`,
         house,
         'm³/day',
         'dailyVolume',
@@ -104,7 +121,7 @@ export function planDemandAndStorage(input: DemandAndStorageInput): CalcOutput<D
       step(
         'Garden',
         'D_g = \\frac{A\\,d_{week}}{7}',
-        `D_g = \\frac{${tq(v.gardenAreaM2, 'm²')} \\times ${tq(v.gardenDepthPerWeekM, 'm')}}{7}`,
+        sub`D_g = \\frac{${tq(v.gardenAreaM2, 'm²')} \\times ${tq(v.gardenDepthPerWeekM, 'm', 'smallLength')}}{7}`,
         garden,
         'm³/day',
         'dailyVolume',
@@ -119,9 +136,9 @@ export function planDemandAndStorage(input: DemandAndStorageInput): CalcOutput<D
     stock += d;
     steps.push(
       step(
-        `Livestock: ${a.kind}`,
+        `Livestock: ${LIVESTOCK_WORDS[a.kind]}`,
         'D_i = n_i \\times r_i',
-        `D_i = ${a.count} \\times ${tq(r, 'm³/day')}`,
+        sub`D_i = ${a.count} \\times ${tq(r, 'm³/day')}`,
         d,
         'm³/day',
         'dailyVolume',
@@ -133,7 +150,7 @@ export function planDemandAndStorage(input: DemandAndStorageInput): CalcOutput<D
     step(
       'Total demand',
       'D = D_h + D_g + \\sum D_i + D_o',
-      `D = ${tq(house)} + ${tq(garden)} + ${tq(stock)} + ${tq(v.otherM3PerDay)}\\,\\mathrm{m^3/day}`,
+      sub`D = ${tq(house)} + ${tq(garden)} + ${tq(stock)} + ${tq(v.otherM3PerDay)}\\,\\mathrm{m^3/day}`,
       total,
       'm³/day',
       'dailyVolume',
@@ -144,7 +161,7 @@ export function planDemandAndStorage(input: DemandAndStorageInput): CalcOutput<D
     step(
       'Delivered in 24 hours',
       'V = q \\times 86\\,400\\,\\mathrm{s}',
-      `V = ${tq(v.deliveredFlowM3s, 'm³/s')} \\times 86\\,400\\,\\mathrm{s}`,
+      sub`V = ${tq(v.deliveredFlowM3s, 'm³/s')} \\times 86\\,400\\,\\mathrm{s}`,
       delivery,
       'm³/day',
       'dailyVolume',
@@ -152,14 +169,14 @@ export function planDemandAndStorage(input: DemandAndStorageInput): CalcOutput<D
   );
   const surplus = delivery - total;
   steps.push(
-    step('Surplus', 'V - D', `${tq(delivery, 'm³/day')} - ${tq(total, 'm³/day')}`, surplus, 'm³/day', 'dailyVolume'),
+    step('Surplus', 'V - D', sub`${tq(delivery, 'm³/day')} - ${tq(total, 'm³/day')}`, surplus, 'm³/day', 'dailyVolume'),
   );
   const reserve = v.reserveDays * total;
   steps.push(
     step(
       'Tank for the reserve',
       'V_t = n_d \\times D',
-      `V_t = ${tq(v.reserveDays, 'day')} \\times ${tq(total, 'm³/day')}`,
+      sub`V_t = ${tq(v.reserveDays, 'day')} \\times ${tq(total, 'm³/day')}`,
       reserve,
       'm³',
       'volume',
@@ -183,7 +200,7 @@ export function planDemandAndStorage(input: DemandAndStorageInput): CalcOutput<D
       step(
         'Time to refill the reserve from empty',
         't = \\frac{V_t}{V - D}',
-        `t = \\frac{${tq(reserve, 'm³')}}{${tq(surplus, 'm³/day')}}`,
+        sub`t = \\frac{${tq(reserve, 'm³')}}{${tq(surplus, 'm³/day')}}`,
         results.reserveRefillTimeS,
         's',
         'time',
@@ -198,7 +215,7 @@ export function planDemandAndStorage(input: DemandAndStorageInput): CalcOutput<D
         step(
           'Time to refill the existing tank',
           't = \\frac{V_{tank}}{V - D}',
-          `t = \\frac{${tq(v.tankVolumeM3, 'm³')}}{${tq(surplus, 'm³/day')}}`,
+          sub`t = \\frac{${tq(v.tankVolumeM3, 'm³')}}{${tq(surplus, 'm³/day')}}`,
           results.tankRefillTimeS,
           's',
           'time',

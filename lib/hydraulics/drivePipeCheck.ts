@@ -12,7 +12,7 @@ import { drivePipeSchema, roughnessOf } from './pipeSchemas';
 import { EngineInputError } from './errors';
 import { DEFAULT_ENTRANCE_K, DEFAULT_PUMP_LOSS_K, fullFlowVelocity } from './ramCycle';
 import { addRangeIssue, fallM, flowM3s, liftM, parseInput, siNumber, waterTempC } from './schemaKit';
-import { finish, step, tq, type CalcOutput, type Step, type Warning } from './steps';
+import { finish, step, sub, tq, type CalcOutput, type Step, type Warning } from './steps';
 import { joukowskySurge, slowClosureSurge } from './transients';
 import { PRACTICE } from './practice';
 import { warn } from './warnings';
@@ -226,8 +226,10 @@ export function checkDrivePipe(input: DrivePipeCheckInput): CalcOutput<DrivePipe
 
   const lh = L / H;
   const ld = L / D;
-  steps.push(step('Length against fall', '\\frac{L}{H}', `\\frac{${tq(L, 'm')}}{${tq(H, 'm')}}`, lh, ''));
-  steps.push(step('Length against bore', '\\frac{L}{D}', `\\frac{${tq(L, 'm')}}{${tq(D, 'm')}}`, ld, ''));
+  steps.push(step('Length against fall', '\\frac{L}{H}', sub`\\frac{${tq(L, 'm')}}{${tq(H, 'm')}}`, lh, ''));
+  steps.push(
+    step('Length against bore', '\\frac{L}{D}', sub`\\frac{${tq(L, 'm')}}{${tq(D, 'm', 'smallLength')}}`, ld, ''),
+  );
   const guides: DrivePipeGuideResult[] = DRIVE_PIPE_GUIDES.map((g) => {
     const value = g.ratio === 'L/H' ? lh : ld;
     return {
@@ -287,7 +289,7 @@ export function checkDrivePipe(input: DrivePipeCheckInput): CalcOutput<DrivePipe
     step(
       'Full-flow velocity (waste valve held open)',
       'v_0 = \\sqrt{\\frac{2gH}{1 + K_e + K_p + \\Sigma K + f\\,L/D}}',
-      `v_0 = \\sqrt{\\frac{2 \\times 9.807 \\times ${tq(H, 'm')}}{1 + ${DEFAULT_ENTRANCE_K} + ${DEFAULT_PUMP_LOSS_K} + ${tq(sumK(dp.fittings as Fitting[]))} + ${tq(ff.f)} \\times ${tq(ld)}}}`,
+      sub`v_0 = \\sqrt{\\frac{2 \\times 9.807 \\times ${tq(H, 'm')}}{1 + ${DEFAULT_ENTRANCE_K} + ${DEFAULT_PUMP_LOSS_K} + ${tq(sumK(dp.fittings as Fitting[]))} + ${tq(ff.f)} \\times ${tq(ld)}}}`,
       v0,
       'm/s',
       'velocity',
@@ -301,7 +303,7 @@ export function checkDrivePipe(input: DrivePipeCheckInput): CalcOutput<DrivePipe
       step(
         'Mean velocity from the measured drive flow',
         '\\bar v = \\frac{4Q}{\\pi D^2}',
-        `\\bar v = \\frac{4 \\times ${tq(v.driveFlowM3s, 'm³/s')}}{\\pi \\times (${tq(D, 'm')})^2}`,
+        sub`\\bar v = \\frac{4 \\times ${tq(v.driveFlowM3s, 'm³/s')}}{\\pi \\times (${tq(D, 'm', 'smallLength')})^2}`,
         meanV,
         'm/s',
         'velocity',
@@ -324,7 +326,7 @@ export function checkDrivePipe(input: DrivePipeCheckInput): CalcOutput<DrivePipe
     step(
       'Surge (Joukowsky) for a stop from full flow',
       '\\Delta p = \\rho\\,c\\,\\Delta v',
-      `\\Delta p = ${tq(rho, 'kg/m³')} \\times ${tq(c, 'm/s')} \\times ${tq(v0, 'm/s')}`,
+      sub`\\Delta p = ${tq(rho, 'kg/m³')} \\times ${tq(c, 'm/s')} \\times ${tq(v0, 'm/s')}`,
       surge,
       'Pa',
       'pressure',
@@ -347,7 +349,7 @@ export function checkDrivePipe(input: DrivePipeCheckInput): CalcOutput<DrivePipe
     step(
       'Peak pressure at the pump',
       'p_{peak} = \\rho g H + \\Delta p',
-      `p_{peak} = ${tq(stat, 'Pa')} + ${tq(surge, 'Pa')}`,
+      sub`p_{peak} = ${tq(stat, 'Pa')} + ${tq(surge, 'Pa')}`,
       peak,
       'Pa',
       'pressure',
@@ -358,7 +360,7 @@ export function checkDrivePipe(input: DrivePipeCheckInput): CalcOutput<DrivePipe
     step(
       'Rating margin',
       'm = \\frac{p_{rating}}{p_{peak}}',
-      `m = \\frac{${tq(rating, 'Pa')}}{${tq(peak, 'Pa')}}`,
+      sub`m = \\frac{${tq(rating, 'Pa')}}{${tq(peak, 'Pa')}}`,
       margin,
       '',
     ),
@@ -385,7 +387,7 @@ export function checkDrivePipe(input: DrivePipeCheckInput): CalcOutput<DrivePipe
     step(
       'Shut-off pressure against a closed delivery',
       'p_{so} = \\rho g H + \\Delta p(v_c)',
-      `p_{so} = ${tq(stat, 'Pa')} + ${tq(shutOff - stat, 'Pa')}`,
+      sub`p_{so} = ${tq(stat, 'Pa')} + ${tq(shutOff - stat, 'Pa')}`,
       shutOff,
       'Pa',
       'pressure',
@@ -414,7 +416,7 @@ export function checkDrivePipe(input: DrivePipeCheckInput): CalcOutput<DrivePipe
       step(
         'Hoop stress at the peak',
         'S = \\frac{p\\,(DR - 1)}{2},\\ DR = \\frac{OD}{e}',
-        `S = \\frac{${tq(shutOff, 'Pa')} \\times (${tq(od / e)} - 1)}{2}`,
+        sub`S = \\frac{${tq(shutOff, 'Pa')} \\times (${tq(od / e)} - 1)}{2}`,
         f.hoopStressPa,
         'Pa',
         'pressure',
@@ -424,7 +426,7 @@ export function checkDrivePipe(input: DrivePipeCheckInput): CalcOutput<DrivePipe
       step(
         'Cycles to failure (Vinson)',
         'N = 5.05\\times10^{21}\\,S_{psi}^{-4.906}',
-        `N = 5.05\\times10^{21} \\times ${tq(f.hoopStressPa / 6894.757)}^{-4.906}`,
+        sub`N = 5.05\\times10^{21} \\times ${tq(f.hoopStressPa / 6894.757)}^{-4.906}`,
         f.cyclesToFailure,
         '',
         undefined,
@@ -435,7 +437,7 @@ export function checkDrivePipe(input: DrivePipeCheckInput): CalcOutput<DrivePipe
       step(
         'Years at this beat rate',
         't = \\frac{N}{n \\times 525\\,960}',
-        `t = \\frac{${tq(f.cyclesToFailure)}}{${tq(v.beatsPerMinute)} \\times 525\\,960}`,
+        sub`t = \\frac{${tq(f.cyclesToFailure)}}{${tq(v.beatsPerMinute)} \\times 525\\,960}`,
         f.yearsToFailure,
         'yr',
       ),

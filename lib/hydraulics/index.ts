@@ -10,7 +10,7 @@
 // What every calculator returns, and the error a bad input throws.
 export { ENGINE_VERSION } from './version';
 export { EngineInputError, type FieldIssue } from './errors';
-export { texNum, type CalcOutput, type Step } from './steps';
+export { partsTex, siTex, texNum, type CalcOutput, type Step, type StepPart, type StepValue } from './steps';
 export { WARNING_CODES } from './warnings';
 export { metricText, qty, renderMessage, said, say, type MessagePart, type MessageQuantity } from './message';
 

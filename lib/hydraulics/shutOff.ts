@@ -25,7 +25,7 @@ import { EngineInputError } from './errors';
 import { sumK, type Fitting } from './fittings';
 import { fullFlowVelocity } from './ramCycle';
 import { addRangeIssue, fallM, flowM3s, parseInput, siNumber, waterTempC } from './schemaKit';
-import { finish, step, tq, type CalcOutput, type Step, type Warning } from './steps';
+import { finish, step, sub, tq, type CalcOutput, type Step, type Warning } from './steps';
 import { joukowskySurge, slowClosureSurge, waveRoundTrip, waveSpeed } from './transients';
 import { G, waterProperties } from './water';
 
@@ -141,7 +141,7 @@ export function estimateShutOffPressure(input: ShutOffInput): CalcOutput<ShutOff
       step(
         'Velocity from the drive flow',
         'v = \\frac{4Q}{\\pi D^2}',
-        `v = \\frac{4 \\times ${tq(v.driveFlowM3s, 'm³/s')}}{\\pi \\times (${tq(D, 'm')})^2}`,
+        sub`v = \\frac{4 \\times ${tq(v.driveFlowM3s, 'm³/s')}}{\\pi \\times (${tq(D, 'm', 'smallLength')})^2}`,
         vel,
         'm/s',
         'velocity',
@@ -163,7 +163,7 @@ export function estimateShutOffPressure(input: ShutOffInput): CalcOutput<ShutOff
       step(
         'Full-flow velocity (the most the pipe can reach)',
         'v_0 = \\sqrt{\\frac{2gH}{R}}',
-        `v_0 = \\sqrt{\\frac{2 \\times 9.807 \\times ${tq(H, 'm')}}{${tq(ff.R)}}}`,
+        sub`v_0 = \\sqrt{\\frac{2 \\times 9.807 \\times ${tq(H, 'm')}}{${tq(ff.R)}}}`,
         vel,
         'm/s',
         'velocity',
@@ -184,7 +184,7 @@ export function estimateShutOffPressure(input: ShutOffInput): CalcOutput<ShutOff
       step(
         'Surge for a closure slower than 2L/c (Michaud)',
         '\\Delta p = \\frac{2\\rho L v}{t_c}',
-        `\\Delta p = \\frac{2 \\times ${tq(rho, 'kg/m³')} \\times ${tq(L, 'm')} \\times ${tq(vel, 'm/s')}}{${tq(v.valveClosureTimeS, 's')}}`,
+        sub`\\Delta p = \\frac{2 \\times ${tq(rho, 'kg/m³')} \\times ${tq(L, 'm')} \\times ${tq(vel, 'm/s')}}{${tq(v.valveClosureTimeS, 's')}}`,
         surge,
         'Pa',
         'pressure',
@@ -195,7 +195,7 @@ export function estimateShutOffPressure(input: ShutOffInput): CalcOutput<ShutOff
       step(
         'Surge for a closure within 2L/c (Joukowsky)',
         '\\Delta p = \\rho\\,c\\,v',
-        `\\Delta p = ${tq(rho, 'kg/m³')} \\times ${tq(c, 'm/s')} \\times ${tq(vel, 'm/s')}`,
+        sub`\\Delta p = ${tq(rho, 'kg/m³')} \\times ${tq(c, 'm/s')} \\times ${tq(vel, 'm/s')}`,
         surge,
         'Pa',
         'pressure',
@@ -206,7 +206,7 @@ export function estimateShutOffPressure(input: ShutOffInput): CalcOutput<ShutOff
     step(
       'Shut-off pressure against a closed delivery',
       'p_{so} = \\rho g H + \\Delta p',
-      `p_{so} = ${tq(stat, 'Pa')} + ${tq(surge, 'Pa')}`,
+      sub`p_{so} = ${tq(stat, 'Pa')} + ${tq(surge, 'Pa')}`,
       total,
       'Pa',
       'pressure',
@@ -257,7 +257,7 @@ export function waveSteps(
       step(
         'Pressure-wave speed (Korteweg)',
         'c = \\sqrt{\\frac{K/\\rho}{1 + \\frac{K D}{E e}}}',
-        `c = \\sqrt{\\frac{${tq(K, 'Pa')}/${tq(densityKgM3, 'kg/m³')}}{1 + \\frac{${tq(K, 'Pa')} \\times ${tq(D, 'm')}}{${tq(mat.youngsModulusPa, 'Pa')} \\times ${tq(e, 'm')}}}}`,
+        sub`c = \\sqrt{\\frac{${tq(K, 'Pa', 'modulus')}/${tq(densityKgM3, 'kg/m³')}}{1 + \\frac{${tq(K, 'Pa', 'modulus')} \\times ${tq(D, 'm', 'smallLength')}}{${tq(mat.youngsModulusPa, 'Pa', 'modulus')} \\times ${tq(e, 'm', 'smallLength')}}}}`,
         c,
         'm/s',
         'velocity',
@@ -266,7 +266,7 @@ export function waveSteps(
       step(
         'Wave round trip',
         't_r = \\frac{2L}{c}',
-        `t_r = \\frac{2 \\times ${tq(L, 'm')}}{${tq(c, 'm/s')}}`,
+        sub`t_r = \\frac{2 \\times ${tq(L, 'm')}}{${tq(c, 'm/s')}}`,
         roundTripS,
         's',
         'time',

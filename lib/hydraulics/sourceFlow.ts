@@ -5,7 +5,7 @@
  */
 import * as z from 'zod/mini';
 import { flowM3s, parseInput, siNumber } from './schemaKit';
-import { finish, step, tq, type CalcOutput, type Step, type Warning } from './steps';
+import { finish, joinParts, step, sub, tq, type CalcOutput, type Step, type Warning } from './steps';
 import { PRACTICE } from './practice';
 import { warn } from './warnings';
 import { qty, say } from './message';
@@ -133,7 +133,7 @@ export function measureSourceFlow(input: SourceFlowInput): CalcOutput<SourceFlow
         step(
           `Trial ${i + 1}`,
           'q_i = \\frac{V_i}{t_i}',
-          `q_{${i + 1}} = \\frac{${tq(t.volumeM3, 'm³')}}{${tq(t.timeS, 's')}}`,
+          sub`q_{${i + 1}} = \\frac{${tq(t.volumeM3, 'm³')}}{${tq(t.timeS, 's')}}`,
           t.volumeM3 / t.timeS,
           'm³/s',
           'flow',
@@ -145,7 +145,10 @@ export function measureSourceFlow(input: SourceFlowInput): CalcOutput<SourceFlow
       step(
         'Mean of the trials',
         '\\bar q = \\frac{1}{n}\\sum q_i',
-        `\\bar q = \\frac{${q.map((x) => tq(x)).join(' + ')}}{${s.n}}`,
+        sub`\\bar q = \\frac{${joinParts(
+          q.map((x) => tq(x, 'm³/s')),
+          ' + ',
+        )}}{${s.n}}`,
         s.meanM3s,
         'm³/s',
         'flow',
@@ -182,7 +185,7 @@ export function measureSourceFlow(input: SourceFlowInput): CalcOutput<SourceFlow
       step(
         'V-notch discharge (Kindsvater-Shen)',
         'Q = 4.28\\,C_e\\tan\\tfrac{\\theta}{2}\\,(h_1 + k_h)^{2.5}',
-        `Q = 4.28 \\times ${tq(ce)} \\times \\tan ${tq(v.angleDeg / 2)}^{\\circ} \\times (${tq(hFt, 'ft')} + ${tq(khFt, 'ft')})^{2.5}`,
+        sub`Q = 4.28 \\times ${tq(ce)} \\times \\tan ${tq(v.angleDeg / 2)}^{\\circ} \\times (${tq(hFt, 'ft')} + ${tq(khFt, 'ft')})^{2.5}`,
         flow,
         'm³/s',
         'flow',
@@ -198,7 +201,7 @@ export function measureSourceFlow(input: SourceFlowInput): CalcOutput<SourceFlow
         step(
           'Cross-check: USBR 90° equation',
           'Q = 2.49\\,h_1^{2.48}',
-          `Q = 2.49 \\times (${tq(hFt, 'ft')})^{2.48}`,
+          sub`Q = 2.49 \\times (${tq(hFt, 'ft')})^{2.48}`,
           u,
           'm³/s',
           'flow',
@@ -235,7 +238,7 @@ export function measureSourceFlow(input: SourceFlowInput): CalcOutput<SourceFlow
       step(
         'Surface velocity (mean of runs)',
         'v_s = \\frac{1}{n}\\sum \\frac{L}{t_i}',
-        `v_s = \\frac{1}{${s.n}}\\sum \\frac{${tq(v.distanceM, 'm')}}{t_i}`,
+        sub`v_s = \\frac{1}{${s.n}}\\sum \\frac{${tq(v.distanceM, 'm')}}{t_i}`,
         vMean,
         'm/s',
         'velocity',
@@ -246,7 +249,7 @@ export function measureSourceFlow(input: SourceFlowInput): CalcOutput<SourceFlow
       step(
         'Flow (float method)',
         'Q = k\\,v_s\\,w\\,\\bar d',
-        `Q = ${tq(v.coefficient)} \\times ${tq(vMean, 'm/s')} \\times ${tq(v.widthM, 'm')} \\times ${tq(v.meanDepthM, 'm')}`,
+        sub`Q = ${tq(v.coefficient)} \\times ${tq(vMean, 'm/s')} \\times ${tq(v.widthM, 'm')} \\times ${tq(v.meanDepthM, 'm', 'smallLength')}`,
         flow,
         'm³/s',
         'flow',
@@ -269,7 +272,7 @@ export function measureSourceFlow(input: SourceFlowInput): CalcOutput<SourceFlow
       step(
         'Share of the flow the plan takes',
         '\\frac{Q_{plan}}{Q_{source}}',
-        `\\frac{${tq(v.plannedDrawM3s, 'm³/s')}}{${tq(flow, 'm³/s')}}`,
+        sub`\\frac{${tq(v.plannedDrawM3s, 'm³/s')}}{${tq(flow, 'm³/s')}}`,
         share,
         '',
       ),

@@ -16,7 +16,7 @@ import { EngineInputError } from './errors';
 import { addRangeIssue, fallM, flowM3s, liftM, parseInput, siNumber, waterTempC } from './schemaKit';
 import { qty, said, say } from './message';
 import { STALL_CAUSES, SYMPTOMS, type StallCauseCode, type Symptom } from './stallCauses';
-import { finish, step, tq, type CalcOutput, type Step, type Warning } from './steps';
+import { finish, step, sub, tq, type CalcOutput, type Step, type Warning } from './steps';
 import { waveSpeed } from './transients';
 import { PRACTICE } from './practice';
 import { warn } from './warnings';
@@ -172,7 +172,7 @@ export function runStallCheck(input: StallCheckInput): CalcOutput<StallCheckResu
 
   const lh = L / H;
   const ld = L / D;
-  steps.push(step('Drive pipe length against fall', '\\frac{L}{H}', `\\frac{${tq(L, 'm')}}{${tq(H, 'm')}}`, lh, ''));
+  steps.push(step('Drive pipe length against fall', '\\frac{L}{H}', sub`\\frac{${tq(L, 'm')}}{${tq(H, 'm')}}`, lh, ''));
   const lhMin = Math.min(...DRIVE_PIPE_GUIDES.filter((g) => g.ratio === 'L/H').map((g) => g.min));
   const lhMax = Math.max(...DRIVE_PIPE_GUIDES.filter((g) => g.ratio === 'L/H').map((g) => g.max));
   const outLH = lh < lhMin || lh > lhMax;
@@ -194,7 +194,7 @@ export function runStallCheck(input: StallCheckInput): CalcOutput<StallCheckResu
     step(
       s.driveFlowM3s === undefined ? 'Drive flow of all pumps (estimated)' : 'Drive flow of all pumps (measured)',
       'Q = n\\,Q_1',
-      `Q = ${s.pumpCount} \\times ${tq(qEach, 'm³/s')}`,
+      sub`Q = ${s.pumpCount} \\times ${tq(qEach, 'm³/s')}`,
       totalDrive,
       'm³/s',
       'flow',
@@ -218,7 +218,7 @@ export function runStallCheck(input: StallCheckInput): CalcOutput<StallCheckResu
   const r = h / H;
   const band = efficiencyBand(s.pumpType, r);
   const rMax = maxLiftRatio(s.pumpType);
-  steps.push(step('Lift ratio', 'r = \\frac{h}{H}', `r = \\frac{${tq(h, 'm')}}{${tq(H, 'm')}}`, r, ''));
+  steps.push(step('Lift ratio', 'r = \\frac{h}{H}', sub`r = \\frac{${tq(h, 'm')}}{${tq(H, 'm')}}`, r, ''));
   ev['lift-too-high'] = {
     state: band.typical <= 0 || r > rMax / 2 ? 'problem' : 'ok',
     strength: band.typical <= 0 ? 1 : 0.6,
@@ -242,7 +242,7 @@ export function runStallCheck(input: StallCheckInput): CalcOutput<StallCheckResu
     step(
       'Beat rate the model expects',
       'n = \\frac{60}{t_a + t_d}',
-      `n = \\frac{60}{${tq(actual.cycleTimeS, 's')}}`,
+      sub`n = \\frac{60}{${tq(actual.cycleTimeS, 's')}}`,
       bpmModel,
       '',
     ),
@@ -300,7 +300,7 @@ export function runStallCheck(input: StallCheckInput): CalcOutput<StallCheckResu
       step(
         "Measured efficiency (D'Aubuisson)",
         '\\eta_D = \\frac{q\\,h}{Q\\,H}',
-        `\\eta_D = \\frac{${tq(s.deliveredFlowM3s, 'm³/s')} \\times ${tq(h, 'm')}}{${tq(totalDrive, 'm³/s')} \\times ${tq(H, 'm')}}`,
+        sub`\\eta_D = \\frac{${tq(s.deliveredFlowM3s, 'm³/s')} \\times ${tq(h, 'm')}}{${tq(totalDrive, 'm³/s')} \\times ${tq(H, 'm')}}`,
         measuredEff,
         '',
       ),
@@ -325,7 +325,7 @@ export function runStallCheck(input: StallCheckInput): CalcOutput<StallCheckResu
       step(
         'Intake submergence needed (HI 9.8)',
         'S = D\\,(1 + 2.3\\,Fr),\\; Fr = \\frac{v}{\\sqrt{gD}}',
-        `S = ${tq(D, 'm')} \\times (1 + 2.3 \\times ${tq(fr)})`,
+        sub`S = ${tq(D, 'm', 'smallLength')} \\times (1 + 2.3 \\times ${tq(fr)})`,
         need,
         'm',
         'length',

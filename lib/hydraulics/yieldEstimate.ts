@@ -13,7 +13,7 @@ import {
   type PumpType,
 } from './efficiency';
 import { addRangeIssue, efficiency, fallM, flowM3s, liftM, parseInput, siNumber, waterTempC } from './schemaKit';
-import { finish, step, tq, type CalcOutput, type Step, type Warning } from './steps';
+import { finish, step, sub, tq, type CalcOutput, type Step, type Warning } from './steps';
 import { PRACTICE, fallRarelyViable } from './practice';
 import { warn } from './warnings';
 import { qty, say } from './message';
@@ -165,7 +165,7 @@ export function estimateYield(input: YieldEstimateInput): CalcOutput<YieldEstima
   const warnings: Warning[] = [];
 
   const r = h / H;
-  steps.push(step('Lift ratio', 'r = \\frac{h}{H}', `r = \\frac{${tq(h, 'm')}}{${tq(H, 'm')}}`, r, ''));
+  steps.push(step('Lift ratio', 'r = \\frac{h}{H}', sub`r = \\frac{${tq(h, 'm')}}{${tq(H, 'm')}}`, r, ''));
 
   const band = efficiencyBand(pumpType, r);
   const eta = v.efficiency ?? band.typical;
@@ -174,8 +174,8 @@ export function estimateYield(input: YieldEstimateInput): CalcOutput<YieldEstima
       v.efficiency === undefined ? 'Typical efficiency at this lift ratio' : 'Efficiency (given)',
       '\\eta',
       v.efficiency === undefined
-        ? `\\eta_{\\text{typ}}(r = ${tq(r)}) = ${tq(band.typical)}\\quad(\\text{band } ${tq(band.low)}\\text{--}${tq(band.high)})`
-        : `\\eta = ${tq(eta)}`,
+        ? sub`\\eta_{\\text{typ}}(r = ${tq(r)}) = ${tq(band.typical)}\\quad(\\text{band } ${tq(band.low)}\\text{--}${tq(band.high)})`
+        : sub`\\eta = ${tq(eta)}`,
       eta,
       '',
       undefined,
@@ -188,20 +188,20 @@ export function estimateYield(input: YieldEstimateInput): CalcOutput<YieldEstima
     step(
       'Delivered flow',
       'q = \\eta\\,Q\\,\\frac{H}{h}',
-      `q = ${tq(eta)} \\times ${tq(Q, 'm³/s')} \\times \\frac{${tq(H, 'm')}}{${tq(h, 'm')}}`,
+      sub`q = ${tq(eta)} \\times ${tq(Q, 'm³/s')} \\times \\frac{${tq(H, 'm')}}{${tq(h, 'm')}}`,
       q,
       'm³/s',
       'flow',
     ),
   );
   const waste = Q - q;
-  steps.push(step('Waste flow', 'Q_w = Q - q', `Q_w = ${tq(Q, 'm³/s')} - ${tq(q, 'm³/s')}`, waste, 'm³/s', 'flow'));
+  steps.push(step('Waste flow', 'Q_w = Q - q', sub`Q_w = ${tq(Q, 'm³/s')} - ${tq(q, 'm³/s')}`, waste, 'm³/s', 'flow'));
   const perDay = q * 86400;
   steps.push(
     step(
       'Delivered per day',
       'V_{24h} = q \\times 86\\,400\\,\\mathrm{s}',
-      `V_{24h} = ${tq(q, 'm³/s')} \\times 86\\,400\\,\\mathrm{s}`,
+      sub`V_{24h} = ${tq(q, 'm³/s')} \\times 86\\,400\\,\\mathrm{s}`,
       perDay,
       'm³/day',
       'dailyVolume',
@@ -212,7 +212,7 @@ export function estimateYield(input: YieldEstimateInput): CalcOutput<YieldEstima
     step(
       'Hydraulic power in',
       'P_{in} = \\rho\\,g\\,Q\\,H',
-      `P_{in} = ${tq(rho, 'kg/m³')} \\times ${tq(G, 'm/s²')} \\times ${tq(Q, 'm³/s')} \\times ${tq(H, 'm')}`,
+      sub`P_{in} = ${tq(rho, 'kg/m³')} \\times ${tq(G, 'm/s²')} \\times ${tq(Q, 'm³/s')} \\times ${tq(H, 'm')}`,
       pIn,
       'W',
       'power',
@@ -223,7 +223,7 @@ export function estimateYield(input: YieldEstimateInput): CalcOutput<YieldEstima
     step(
       'Hydraulic power out',
       'P_{out} = \\rho\\,g\\,q\\,h',
-      `P_{out} = ${tq(rho, 'kg/m³')} \\times ${tq(G, 'm/s²')} \\times ${tq(q, 'm³/s')} \\times ${tq(h, 'm')}`,
+      sub`P_{out} = ${tq(rho, 'kg/m³')} \\times ${tq(G, 'm/s²')} \\times ${tq(q, 'm³/s')} \\times ${tq(h, 'm')}`,
       pOut,
       'W',
       'power',
@@ -240,7 +240,7 @@ export function estimateYield(input: YieldEstimateInput): CalcOutput<YieldEstima
       step(
         "Measured efficiency (D'Aubuisson)",
         '\\eta_D = \\frac{q\\,h}{Q\\,H}',
-        `\\eta_D = \\frac{${tq(qm, 'm³/s')} \\times ${tq(h, 'm')}}{${tq(Q, 'm³/s')} \\times ${tq(H, 'm')}}`,
+        sub`\\eta_D = \\frac{${tq(qm, 'm³/s')} \\times ${tq(h, 'm')}}{${tq(Q, 'm³/s')} \\times ${tq(H, 'm')}}`,
         d,
         '',
       ),
@@ -249,7 +249,7 @@ export function estimateYield(input: YieldEstimateInput): CalcOutput<YieldEstima
       step(
         'Measured efficiency (Rankine)',
         '\\eta_R = \\frac{q\\,(h - H)}{(Q - q)\\,H}',
-        `\\eta_R = \\frac{${tq(qm, 'm³/s')} \\times ${tq(h - H, 'm')}}{${tq(Q - qm, 'm³/s')} \\times ${tq(H, 'm')}}`,
+        sub`\\eta_R = \\frac{${tq(qm, 'm³/s')} \\times ${tq(h - H, 'm')}}{${tq(Q - qm, 'm³/s')} \\times ${tq(H, 'm')}}`,
         rk,
         '',
       ),

@@ -6,6 +6,7 @@ import type { User } from '@/models/User';
 import { listGuides } from '@/lib/guides/content';
 import { siteUrl } from '@/lib/site';
 import { enqueue, type OutgoingMail } from './outbox';
+import { mailInUnits } from './units';
 import { renderMail, type MailItem, type MailSection } from './templates';
 import { unsubscribeHeaders, unsubscribePageUrl } from './unsubscribe';
 import { can } from '@/lib/auth/policy';
@@ -198,7 +199,7 @@ export async function runDigests(frequency: DigestFrequency, now = new Date()): 
   for (;;) {
     const members = await User.findAll({
       where: { digestFrequency: frequency, emailVerifiedAt: { [Op.ne]: null }, id: { [Op.gt]: afterId } },
-      attributes: ['id', 'email', 'displayName', 'role'],
+      attributes: ['id', 'email', 'displayName', 'role', 'units'],
       order: [['id', 'ASC']],
       limit: BATCH,
     });
@@ -215,14 +216,19 @@ export async function runDigests(frequency: DigestFrequency, now = new Date()): 
       }
       const count = sections.reduce((n, s) => n + s.items.length, 0);
       const mail = await renderMail({
-        subject: `Your ${frequency} Clackwater digest: ${count} thing${count === 1 ? '' : 's'} to read`,
-        preview: sections.map((s) => `${s.title} (${s.items.length})`).join(' · '),
-        heading: `Your ${frequency} digest`,
-        paragraphs: [
-          `Hello ${m.displayName}, here is what happened on Clackwater in the ${frequency === 'weekly' ? 'last seven days' : 'last day'}.`,
-        ],
-        sections,
-        action: { label: 'Ask a question', url: `${siteUrl()}/questions/ask` },
+        ...mailInUnits(
+          {
+            subject: `Your ${frequency} Clackwater digest: ${count} thing${count === 1 ? '' : 's'} to read`,
+            preview: sections.map((s) => `${s.title} (${s.items.length})`).join(' · '),
+            heading: `Your ${frequency} digest`,
+            paragraphs: [
+              `Hello ${m.displayName}, here is what happened on Clackwater in the ${frequency === 'weekly' ? 'last seven days' : 'last day'}.`,
+            ],
+            sections,
+            action: { label: 'Ask a question', url: `${siteUrl()}/questions/ask` },
+          },
+          m.units,
+        ),
         footer: {
           reason: `You get this ${frequency} because you chose a ${frequency} digest in your settings. Follow or unfollow tags there to change what it holds.`,
           settingsUrl: `${siteUrl()}/settings#email`,

@@ -5,6 +5,7 @@ import type { User } from '@/models/User';
 import { siteUrl } from '@/lib/site';
 import { enqueue } from './outbox';
 import { renderMail, type MailContent } from './templates';
+import { mailInUnits } from './units';
 import { unsubscribeHeaders, unsubscribePageUrl, type UnsubscribeScope } from './unsubscribe';
 
 /**
@@ -56,7 +57,7 @@ async function queue(
   const scope = SCOPE_OF[flag];
   const { reason, ...rest } = content;
   const mail = await renderMail({
-    ...rest,
+    ...mailInUnits(rest, to.units),
     footer: {
       reason,
       settingsUrl: `${siteUrl()}/settings#email`,

@@ -3,6 +3,12 @@ import GithubSlugger from 'github-slugger';
 import { Op } from 'sequelize';
 import { listGuides, type GuideFile } from '@/lib/guides/content';
 import { initModels } from '@/models';
+import { SYMPTOM_LABELS, type PipeSeries, type Symptom } from '@/lib/hydraulics';
+import { SERIES_LABELS } from '@/lib/calculators/pipes';
+import { SITE_SHEET_LABELS } from '@/lib/calculators/site-sheet';
+import type { SiteSheetField } from '@/lib/validation/question';
+import { entryTitle } from '@/lib/field-log/title';
+import { markdownToPlain, texToPlain } from './plain-text';
 
 export const SEARCH_KINDS = ['guide', 'question', 'answer', 'reply', 'field-log'] as const;
 export type SearchKind = (typeof SEARCH_KINDS)[number];
@@ -45,7 +51,8 @@ export function mdxToText(mdx: string): string {
     .replace(/<\/?[A-Za-z][\w.]*(?:\s[^>]*?)?>/gs, ' ')
     .replace(/!\[([^\]]*)\]\([^)]*\)/g, '$1')
     .replace(/\[([^\]]*)\]\([^)]*\)/g, '$1')
-    .replace(/\$\$?([^$]*)\$\$?/g, ' $1 ')
+    .replace(/\$\$?([^$]*)\$\$?/g, (_, tex: string) => ` ${texToPlain(tex)} `)
+    .replace(/^\s*(?:[-+*]|\d+[.)])\s+/gm, '')
     .replace(/[*_`>#|~]+/g, ' ')
     .replace(/[ \t]+/g, ' ')
     .replace(/\n{2,}/g, '\n')
@@ -94,20 +101,37 @@ export function allGuideDocs(): SearchDoc[] {
   return listGuides().flatMap(guideSections);
 }
 
-/** "drivePipeSize" → "drive pipe size" */
-const words = (key: string) => key.replace(/([a-z])([A-Z])/g, '$1 $2').toLowerCase();
-
+/**
+ * A site sheet as the words a reader sees on the thread: its labels, materials and symptoms
+ * in words (never the stored codes), measurements as typed (the search page puts them in the
+ * reader's units). Nominal sizes keep "inch" so a search in millimetres finds them.
+ */
 export function siteSheetText(sheet: Record<string, unknown> | null | undefined): string {
   if (!sheet) return '';
   return Object.entries(sheet)
     .filter(([, v]) => v !== null && v !== undefined && v !== '')
     .map(([k, v]) => {
       const value = Array.isArray(v) ? v.join(', ') : String(v);
-      // nominal sizes are stored as inches without the unit ("3/4", "1-1/4")
-      return `${words(k)} ${/size$/i.test(k) && /^\d[\d/.\s-]*$/.test(value) ? `${value} inch` : value}`;
+      const label = SITE_SHEET_LABELS[k as SiteSheetField] ?? k.replace(/([a-z])([A-Z])/g, '$1 $2').toLowerCase();
+      return `${label} ${siteSheetValueWords(k, value)}`;
     })
     .join('; ');
 }
+
+function siteSheetValueWords(key: string, value: string): string {
+  // nominal sizes are stored as inches without the unit ("3/4", "1-1/4")
+  if (/size$/i.test(key) && /^\d[\d/.\s-]*$/.test(value)) return `${value} inch`;
+  if (/material$/i.test(key)) return SERIES_LABELS[value as PipeSeries] ?? materialWords(value);
+  if (key === 'symptoms')
+    return value
+      .split(',')
+      .map((x) => SYMPTOM_LABELS[x.trim() as Symptom] ?? x.trim().replace(/-/g, ' '))
+      .join(', ');
+  return value;
+}
+
+/** "galvanized-steel" → "galvanized steel", "pvc" → "PVC". */
+const materialWords = (m: string) => m.replace(/-/g, ' ').replace(/\b(pvc|hdpe)\b/g, (x) => x.toUpperCase());
 
 interface QuestionRow {
   id: number;
@@ -130,7 +154,7 @@ function questionDoc(q: QuestionRow): SearchDoc {
     title: q.title,
     head: `${q.title}\n${tagWords(tags)}`,
     url: `/questions/${q.id}`,
-    text: sheet ? `${sheet}\n${q.body}` : q.body,
+    text: sheet ? `${sheet}\n${markdownToPlain(q.body)}` : markdownToPlain(q.body),
     tags,
     solved: q.fixedAnswerId !== null,
     level: null,
@@ -156,7 +180,7 @@ function postDoc(kind: 'answer' | 'reply', p: PostRow, q: SearchDoc): SearchDoc 
     title: q.title,
     head: '',
     url: `${q.url}#${kind}-${p.id}`,
-    text: p.body,
+    text: markdownToPlain(p.body),
     tags: q.tags,
     solved: q.solved,
     level: null,
@@ -195,8 +219,6 @@ export async function threadDocs(questionIds: number[]): Promise<SearchDoc[]> {
   return out;
 }
 
-const ARRANGEMENT_WORDS: Record<string, string> = { single: '', parallel: ' in parallel', staged: ' in stages' };
-
 /** Field log entries as search documents: site, pumps and measurements as typed, notes. */
 export async function fieldLogDocs(ids?: number[]): Promise<SearchDoc[]> {
   const { FieldLogEntry } = initModels();
@@ -207,6 +229,8 @@ export async function fieldLogDocs(ids?: number[]): Promise<SearchDoc[]> {
       'testedOn',
       'pumpType',
       'pumpSize',
+      'fallM',
+      'liftM',
       'pumpCount',
       'arrangement',
       'driveMaterial',
@@ -223,8 +247,8 @@ export async function fieldLogDocs(ids?: number[]): Promise<SearchDoc[]> {
   });
   return rows.map((e) => {
     const t = (e.typed ?? {}) as Record<string, string>;
-    const pumps = `${e.pumpCount > 1 ? `${e.pumpCount} × ` : ''}${e.pumpSize} inch ${e.pumpType} pump${e.pumpCount > 1 ? 's' : ''}${ARRANGEMENT_WORDS[e.arrangement] ?? ''}`;
-    const title = `${e.siteName}: ${pumps}, ${t.fall ?? ''} fall, ${t.lift ?? ''} lift`;
+    // indexed in metric; search() puts the numbers into each reader's units
+    const title = entryTitle(e, 'metric');
     return {
       id: `field-log-${e.id}`,
       kind: 'field-log' as const,
@@ -232,8 +256,8 @@ export async function fieldLogDocs(ids?: number[]): Promise<SearchDoc[]> {
       head: title,
       url: `/field-log/${e.id}`,
       text: [
-        e.notes,
-        `drive pipe ${t.driveLength ?? ''} of ${t.driveSize ?? e.driveSize} inch ${e.driveMaterial}`,
+        e.notes ? markdownToPlain(e.notes) : '',
+        `drive pipe ${t.driveLength ?? ''} of ${t.driveSize ?? e.driveSize} inch ${materialWords(e.driveMaterial)}`,
         `drive flow ${t.driveFlow ?? ''} (${e.driveFlowMethod}${e.driveFlowHow ? `: ${e.driveFlowHow}` : ''})`,
         t.trials ? `bucket trials ${t.trials}` : '',
         e.wasteValveSetting ? `waste valve ${e.wasteValveSetting}` : '',

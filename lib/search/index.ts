@@ -6,6 +6,8 @@ import type { SearchEngine, SearchFilters } from './engine';
 import { FlexEngine } from './flex-engine';
 import { MeiliEngine } from './meili-engine';
 import { queryTerms } from './normalize';
+import type { UnitSystem } from '@/lib/hydraulics';
+import { quantitiesInUnits } from '@/lib/units/in-text';
 import { highlight, snippet, type Segment } from './snippet';
 
 export { SEARCH_KINDS, type SearchKind, type SearchDoc } from './documents';
@@ -196,7 +198,14 @@ export interface SearchResult {
   ms: number;
 }
 
-export async function search(params: SearchParams, viewer: { seeHidden: boolean }): Promise<SearchResult> {
+/**
+ * `viewer.units`: the reader's unit system; every quantity in a title or snippet is shown in it
+ * (the index keeps the words as typed, one copy for every reader).
+ */
+export async function search(
+  params: SearchParams,
+  viewer: { seeHidden: boolean; units?: UnitSystem },
+): Promise<SearchResult> {
   const t0 = performance.now();
   const terms = queryTerms(params.q);
   const filters: SearchFilters = {
@@ -219,12 +228,13 @@ export async function search(params: SearchParams, viewer: { seeHidden: boolean 
   }
   const { docs, total } = found;
   const set = new Set(terms);
+  const units = viewer.units;
   const items = docs.map((d) => ({
     id: d.id,
     kind: d.kind,
     url: d.url,
-    title: highlight(d.title, set),
-    snippet: snippet(d.text, set),
+    title: highlight(units ? quantitiesInUnits(d.title, units) : d.title, set),
+    snippet: snippet(units ? quantitiesInUnits(d.text, units) : d.text, set),
     tags: d.tags,
     solved: d.solved,
     level: d.level,

@@ -9,9 +9,11 @@ import {
   planArray,
   planDemandAndStorage,
   runStallCheck,
+  siTex,
   texNum,
   type CalcOutput,
 } from '@/lib/hydraulics';
+import { stepValueTex, substitutedTex } from '@/lib/calculators/working';
 import { FALL, LIFT, deliveryLine, drivePipe, gpm, mlPerMin } from './fixtures';
 
 const outputs: [string, CalcOutput<unknown>][] = [
@@ -93,7 +95,14 @@ describe('steps are KaTeX-ready', () => {
       expect(out.steps.length).toBeGreaterThan(0);
       for (const s of out.steps) {
         expect(() => katex.renderToString(s.formula, { throwOnError: true, strict: 'error' })).not.toThrow();
-        expect(() => katex.renderToString(s.substituted, { throwOnError: true, strict: 'error' })).not.toThrow();
+        expect(() => katex.renderToString(siTex(s.substituted), { throwOnError: true, strict: 'error' })).not.toThrow();
+        for (const units of ['US', 'metric'] as const) {
+          const tex = substitutedTex(s, units);
+          expect(() => katex.renderToString(tex, { throwOnError: true, strict: 'error' })).not.toThrow();
+          // the reader's numbers never fall back to scientific notation (a rule's own constant may)
+          for (const p of s.substituted)
+            if (typeof p !== 'string') expect(stepValueTex(p, units)).not.toMatch(/\\times ?10\^|\de[-+]?\d/);
+        }
       }
     });
   }

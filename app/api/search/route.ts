@@ -4,6 +4,7 @@ import { searchQuerySchema } from '@/lib/validation/search';
 import { search, SearchUnavailableError } from '@/lib/search';
 import { currentUser } from '@/lib/auth/session';
 import { can } from '@/lib/auth/policy';
+import { parseUnitPreference, UNITS_COOKIE } from '@/lib/units/preference';
 
 export const dynamic = 'force-dynamic';
 
@@ -18,7 +19,8 @@ export async function GET(request: NextRequest) {
   try {
     const viewer = await currentUser(request);
     const { q, kind, ...rest } = parsed.data;
-    const result = await search({ q, kinds: kind, ...rest }, { seeHidden: can(viewer, 'moderation.seeHidden') });
+    const units = parseUnitPreference(request.cookies.get(UNITS_COOKIE)?.value);
+    const result = await search({ q, kinds: kind, ...rest }, { seeHidden: can(viewer, 'moderation.seeHidden'), units });
     return NextResponse.json(result, { headers: { 'Cache-Control': 'private, no-store' } });
   } catch (err) {
     if (err instanceof SearchUnavailableError) return apiError(503, err.message, undefined, 'search_unavailable');

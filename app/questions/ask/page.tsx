@@ -7,6 +7,7 @@ import { initModels } from '@/models';
 import { AskForm } from '@/components/questions/AskForm';
 import { getEntry } from '@/lib/field-log/store';
 import { entrySiteSheet } from '@/lib/calculators/site-sheet';
+import { readUnitPreference } from '@/lib/units/server';
 import { idParam } from '@/lib/http/guard';
 
 export const metadata: Metadata = { title: 'Ask a question' };
@@ -32,7 +33,8 @@ export default async function AskQuestionPage({
     const rows = await initModels().Tag.findAll({ attributes: ['slug', 'name'], order: [['name', 'ASC']] });
     state = { kind: 'form', tags: rows.map((t) => ({ slug: t.slug, name: t.name })) };
     const entry = fieldLogId ? await getEntry(fieldLogId, user) : null;
-    if (entry && !entry.hidden && !entry.deleted) fromFieldLog = { id: entry.id, siteSheet: entrySiteSheet(entry) };
+    if (entry && !entry.hidden && !entry.deleted)
+      fromFieldLog = { id: entry.id, siteSheet: entrySiteSheet(entry, await readUnitPreference()) };
   }
 
   const tag = one(sp.tag);

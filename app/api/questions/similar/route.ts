@@ -2,6 +2,7 @@ import { NextResponse, type NextRequest } from 'next/server';
 import { z } from 'zod';
 import { apiError, queryObject, serverError, validationError } from '@/lib/http/errors';
 import { similarQuestions } from '@/lib/search/similar';
+import { parseUnitPreference, UNITS_COOKIE } from '@/lib/units/preference';
 import { SearchUnavailableError } from '@/lib/search';
 
 export const dynamic = 'force-dynamic';
@@ -21,7 +22,8 @@ export async function GET(request: NextRequest) {
     .map((t) => t.trim())
     .filter((t) => /^[a-z0-9-]{2,40}$/.test(t));
   try {
-    return NextResponse.json({ items: await similarQuestions({ ...parsed.data, tags }) });
+    const units = parseUnitPreference(request.cookies.get(UNITS_COOKIE)?.value);
+    return NextResponse.json({ items: await similarQuestions({ ...parsed.data, tags }, 5, units) });
   } catch (err) {
     if (err instanceof SearchUnavailableError) return apiError(503, err.message, undefined, 'search_unavailable');
     return serverError(err);

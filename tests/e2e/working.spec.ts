@@ -1,0 +1,39 @@
+import { test, expect } from '@playwright/test';
+
+/**
+ * "Show the working" on a phone: the numbers in the reader's units, each step numbered once,
+ * and a long formula scrolls inside the card with a cue instead of being cut off.
+ */
+test.use({ viewport: { width: 390, height: 844 } });
+
+for (const [units, flow, notFlow] of [
+  ['metric', /L\/min|L\/h/, /gal\//],
+  ['US', /US\\ gal\/(min|h)/, /L\/min|L\/h/],
+] as const) {
+  test(`the delivery line's working reads in ${units} units on a phone`, async ({ page, context, baseURL }) => {
+    await context.addCookies([{ name: 'cw_units', value: units, url: baseURL! }]);
+    // 100 ft of ½" line carrying 2 US gal/min up 29 ft (common practice, no source)
+    await page.goto(
+      '/calculators/delivery-line?flow=2+gal%2Fmin&lift=29+ft&length=100+ft&size=1%2F2&material=pvc-sch40',
+    );
+    await page.getByText('Show the working').click();
+    const working = page.getByTestId('working');
+    await expect(working.locator('.katex').first()).toBeVisible();
+    // the TeX KaTeX keeps beside its drawing (the drawn text is split glyph by glyph)
+    const numbers = await working.getByTestId('working-numbers').locator('annotation').allTextContents();
+    const answers = await working.getByTestId('working-answer').allInnerTexts();
+    const all = [...numbers, ...answers].join('\n');
+    expect(all).toMatch(flow);
+    // Hazen-Williams keeps its SI numbers on purpose; every other step is in the reader's units
+    const velocity = numbers[0] ?? '';
+    expect(velocity).not.toMatch(notFlow);
+    expect(all).not.toMatch(/\de[-+]?\d/);
+    // numbered once: no step title starts with a typed number
+    for (const t of await working.locator('li > p').first().allInnerTexts()) expect(t).not.toMatch(/^\d+\./);
+    // nothing is cut off: the page never scrolls sideways, and a wide formula says there is more
+    expect(await page.evaluate(() => document.documentElement.scrollWidth - document.documentElement.clientWidth)).toBe(
+      0,
+    );
+    await expect(working.getByTestId('working-more').first()).toBeVisible();
+  });
+}
