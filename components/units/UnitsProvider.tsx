@@ -33,6 +33,7 @@ export function UnitsProvider({ children }: { children: ReactNode }) {
   const setUnits = useCallback(
     (u: UnitPreference) => {
       document.cookie = `${UNITS_COOKIE}=${u}; path=/; max-age=${ONE_YEAR}; samesite=lax`;
+      document.documentElement.setAttribute('data-units', u); // guides' both-systems text (ForUnits.tsx)
       listeners.forEach((l) => l());
       router.refresh();
     },
