@@ -33,9 +33,9 @@ function seenBy(html: string, system: System): string {
 const TRADE_SIZE = /(?:\d+[¼½¾]?|[¼½¾])-inch\b/g;
 // a number and then a unit of one system (the writing conventions of NIST SP 811, 2008, and common US usage)
 const US_ONLY =
-  /(?:\d|[¼½¾])\s*(?:ft|in|inch|inches|feet|foot|yd|yards?|mi|miles?|psi|gal|gallons?|US gal|US cups?|lb|°F|ft²|ft³|″)(?![A-Za-z])|\bpsi\b|\bUS gal\b/;
+  /(?:\d|[¼½¾])[\s-]*(?:ft|in|inch|inches|feet|foot|yd|yards?|mi|miles?|psi|gal|gallons?|US gal|US cups?|lb|°F|ft²|ft³|″)(?![A-Za-z])|\bpsi\b|\bUS gal\b/;
 const METRIC_ONLY =
-  /(?:\d|[¼½¾])\s*(?:mm|cm|m|km|m²|m³|L|mL|kPa|MPa|bar|kg|°C|metres?|litres?)(?![A-Za-z])|\bkPa\b|\bcentimetres?\b|\bmillimetres?\b/;
+  /(?:\d|[¼½¾])[\s-]*(?:mm|cm|m|km|m²|m³|L|mL|kPa|MPa|bar|kg|°C|metres?|litres?)(?![A-Za-z])|\bkPa\b|\bcentimetres?\b|\bmillimetres?\b/;
 const FORBIDDEN: Record<System, RegExp> = { US: METRIC_ONLY, metric: US_ONLY };
 
 /** Each match with a little context, so a failure says where. */
@@ -65,6 +65,7 @@ describe('guides in the reader’s units', () => {
     expect(offending('lift 29 ft (8.8 m)', 'metric')).toHaveLength(1);
     expect(offending('about 0.58 L/min through ¾-inch HDPE and a 1-inch line', 'metric')).toEqual([]);
     expect(offending('12.6 psi', 'metric')).toHaveLength(1);
+    expect(offending('a 1-litre jug', 'US')).toHaveLength(1);
     expect(offending('in the morning, 5 min later, 10 s', 'metric')).toEqual([]);
   });
 
@@ -98,6 +99,8 @@ describe('guides in the reader’s units', () => {
         const text = seenBy(html, system);
         expect(offending(text, system), `${g.slug} (${system})`).toEqual([]);
         expect(text, `${g.slug} (${system}) uses e-notation`).not.toMatch(/\d[eE][+-]?\d/);
+        // TeX left in a prop string is not typeset: the reader would see the dollar signs
+        expect(text, `${g.slug} (${system}) shows raw TeX`).not.toMatch(/\$/);
       },
       30_000,
     );
