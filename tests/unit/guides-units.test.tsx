@@ -18,6 +18,7 @@ import { renderGuide } from '@/components/guides/GuideBody';
 import { ForUnits, U } from '@/components/guides/ForUnits';
 import { listGuides } from '@/lib/guides/content';
 import { UNITS_FIRST_PAINT_SCRIPT } from '@/lib/units/first-paint';
+import { mdxToText } from '@/lib/search/documents';
 
 type System = 'US' | 'metric';
 const other = (s: System): System => (s === 'US' ? 'metric' : 'US');
@@ -89,6 +90,15 @@ describe('guides in the reader’s units', () => {
       dom.window.eval(UNITS_FIRST_PAINT_SCRIPT);
       expect(dom.window.document.documentElement.getAttribute('data-units'), cookie).toBe(want);
     }
+  });
+
+  it('search indexes one system, the default, so a snippet has no holes and no number twice', () => {
+    const text = mdxToText(
+      'With <U us="29 ft" metric="8.84 m" /> of lift.\n\n<ForUnits system="US">\n\nq ≈ 0.08 US gal/min\n\n</ForUnits>\n\n<ForUnits system="metric">\n\nq ≈ 0.29 L/min\n\n</ForUnits>',
+    );
+    expect(text).toContain('With 29 ft of lift.');
+    expect(text).toContain('0.08 US gal/min');
+    expect(text).not.toMatch(/8\.84|0\.29/);
   });
 
   for (const g of listGuides()) {
