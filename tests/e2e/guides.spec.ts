@@ -97,3 +97,30 @@ test('at phone width a guide with calculators fits the screen', async ({ browser
   }
   await ctx.close();
 });
+
+test('a guide shows only the reader’s units, from the first paint, and follows the switch', async ({
+  browser,
+  baseURL,
+}) => {
+  const ctx = await browser.newContext({ baseURL });
+  const page = await ctx.newPage();
+  await ctx.addCookies([{ name: 'cw_units', value: 'metric', url: new URL(baseURL!).origin }]);
+  // scripts other than the first-paint one never run here: the units must not wait for hydration
+  await page.route('**/_next/static/**/*.js', (route) => route.abort());
+  await page.goto('/guides/how-a-ram-pump-works');
+  await expect(page.locator('html')).toHaveAttribute('data-units', 'metric');
+  const body = page.locator('.guide-body');
+  await expect(body.getByText('8.84 × 9.81 ≈ 87 kPa')).toBeVisible();
+  await expect(body.getByText('29 × 0.434 ≈ 12.6 psi')).toBeHidden();
+  expect(await body.innerText()).not.toMatch(/\bpsi\b|US gal/);
+  await page.unrouteAll();
+
+  // hydrated, the switch in the header brings the US text back without a reload
+  await page.goto('/guides/how-a-ram-pump-works');
+  await page.waitForLoadState('networkidle');
+  await page.getByRole('banner').getByText('US', { exact: true }).click();
+  await expect(page.locator('html')).toHaveAttribute('data-units', 'US');
+  await expect(body.getByText('29 × 0.434 ≈ 12.6 psi')).toBeVisible();
+  expect(await body.innerText()).not.toMatch(/\bkPa\b|L\/min/);
+  await ctx.close();
+});

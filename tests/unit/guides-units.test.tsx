@@ -11,7 +11,7 @@
  */
 import { readFileSync } from 'node:fs';
 import path from 'node:path';
-import { JSDOM } from 'jsdom';
+import { Window } from 'happy-dom';
 import { describe, expect, it } from 'vitest';
 import { renderToStaticMarkup } from 'react-dom/server';
 import { renderGuide } from '@/components/guides/GuideBody';
@@ -25,7 +25,8 @@ const other = (s: System): System => (s === 'US' ? 'metric' : 'US');
 
 /** The text a reader of `system` sees: the other system's parts gone, as display:none removes them. */
 function seenBy(html: string, system: System): string {
-  const doc = new JSDOM(`<!doctype html><html data-units="${system}"><body>${html}</body></html>`).window.document;
+  const doc = new Window().document;
+  doc.write(`<!doctype html><html data-units="${system}"><body>${html}</body></html>`);
   for (const sel of [`[data-units-only="${other(system)}"]`, '[data-calculator]', '.katex-mathml'])
     doc.querySelectorAll(sel).forEach((el) => el.remove());
   return (doc.body.textContent ?? '').replace(/\s+/g, ' ');
@@ -82,13 +83,11 @@ describe('guides in the reader’s units', () => {
       ['cw_units=metrical', 'US'],
       ['', 'US'],
     ] as const) {
-      const dom = new JSDOM('<!doctype html><html><head></head><body></body></html>', {
-        url: 'http://127.0.0.1/',
-        runScripts: 'outside-only',
-      });
-      for (const c of cookie.split('; ').filter(Boolean)) dom.window.document.cookie = c;
-      dom.window.eval(UNITS_FIRST_PAINT_SCRIPT);
-      expect(dom.window.document.documentElement.getAttribute('data-units'), cookie).toBe(want);
+      const { document } = new Window({ url: 'http://127.0.0.1/' });
+      for (const c of cookie.split('; ').filter(Boolean)) document.cookie = c;
+      // the script reads only `document`, handed in here as the page's own
+      new Function('document', UNITS_FIRST_PAINT_SCRIPT)(document);
+      expect(document.documentElement.getAttribute('data-units'), cookie).toBe(want);
     }
   });
 
