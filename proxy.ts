@@ -1,6 +1,10 @@
 import { NextResponse, type NextRequest } from 'next/server';
-import { contentSecurityPolicy, HSTS, newNonce, servedOverHttps, type ScriptSource } from '@/lib/http/csp';
+import { contentSecurityPolicy, HSTS, newNonce, scriptHash, servedOverHttps, type ScriptSource } from '@/lib/http/csp';
+import { UNITS_FIRST_PAINT_SCRIPT } from '@/lib/units/first-paint';
 import { pageKind, type PageKind } from '@/lib/http/page-cache-map';
+
+// the root layout's one inline script of its own (no nonce: the layout stays static)
+const FIRST_PAINT_HASH = scriptHash(UNITS_FIRST_PAINT_SCRIPT);
 
 /**
  * Runs before every page (not the API, not static files): sets the page's
@@ -13,7 +17,8 @@ export function proxy(request: NextRequest) {
   const page: PageKind = dev ? { kind: 'rendered', hashes: [] } : pageKind(request.nextUrl.pathname);
   let scripts: ScriptSource;
   let nonce: string | undefined;
-  if (page.kind === 'rendered') scripts = { nonce: (nonce = newNonce()), hashes: page.hashes };
+  if (page.kind === 'rendered')
+    scripts = { nonce: (nonce = newNonce()), hashes: [...new Set([...page.hashes, FIRST_PAINT_HASH])] };
   else if (page.kind === 'static') scripts = { hashes: page.hashes };
   else scripts = { unsafeInline: true };
   const csp = contentSecurityPolicy(scripts, dev);

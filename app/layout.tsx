@@ -9,6 +9,7 @@ import { SiteFooter } from '@/components/SiteFooter';
 import { UnitsProvider } from '@/components/units/UnitsProvider';
 import { Providers } from '@/components/account/Providers';
 import { palette } from '@/tailwind.config';
+import { UNITS_FIRST_PAINT_SCRIPT } from '@/lib/units/first-paint';
 import { SITE_DESCRIPTION, SITE_NAME, siteUrl } from '@/lib/site';
 
 export const metadata: Metadata = {
@@ -30,7 +31,11 @@ export const viewport: Viewport = {
 
 export default function RootLayout({ children }: { children: ReactNode }) {
   return (
-    <html lang="en">
+    // the first-paint script sets data-units before React hydrates
+    <html lang="en" suppressHydrationWarning>
+      <head>
+        <script dangerouslySetInnerHTML={{ __html: UNITS_FIRST_PAINT_SCRIPT }} />
+      </head>
       <body>
         <a
           href="#main"

@@ -55,6 +55,7 @@ export function UnitsProvider({ children }: { children: ReactNode }) {
     (u: UnitPreference) => {
       const changed = readCookie() !== u;
       document.cookie = `${UNITS_COOKIE}=${u}; path=/; max-age=${ONE_YEAR}; samesite=lax`;
+      document.documentElement.setAttribute('data-units', u); // guides' both-systems text (ForUnits.tsx)
       listeners.forEach((l) => l());
       if (changed) router.refresh();
     },

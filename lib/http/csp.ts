@@ -60,9 +60,14 @@ export function inlineScriptHashes(html: string): string[] {
     if (/\bsrc\s*=/i.test(attrs)) continue;
     const type = /\btype\s*=\s*["']?([^"'\s>]+)/i.exec(attrs)?.[1]?.toLowerCase();
     if (type && type !== 'text/javascript' && type !== 'module' && type !== 'application/javascript') continue;
-    out.add(`sha256-${createHash('sha256').update(code, 'utf8').digest('base64')}`);
+    out.add(scriptHash(code));
   }
   return [...out];
+}
+
+/** The CSP hash source of one inline script's code ('sha256-…'). */
+export function scriptHash(code: string): string {
+  return `sha256-${createHash('sha256').update(code, 'utf8').digest('base64')}`;
 }
 
 /** Two years, the preload list's minimum (hstspreload.org), on the site and its subdomains. */

@@ -45,18 +45,24 @@ const tagWords = (tags: string[]) => tags.map((t) => t.replace(/-/g, ' ')).join(
 
 /** MDX to readable words: drop imports, JSX tags (keep their text), Markdown marks. */
 export function mdxToText(mdx: string): string {
-  return mdx
-    .replace(/^(import|export)\s.*$/gm, '')
-    .replace(/<[A-Z][\w.]*(?:\s[^>]*?)?\/>/gs, ' ')
-    .replace(/<\/?[A-Za-z][\w.]*(?:\s[^>]*?)?>/gs, ' ')
-    .replace(/!\[([^\]]*)\]\([^)]*\)/g, '$1')
-    .replace(/\[([^\]]*)\]\([^)]*\)/g, '$1')
-    .replace(/\$\$?([^$]*)\$\$?/g, (_, tex: string) => ` ${texToPlain(tex)} `)
-    .replace(/^\s*(?:[-+*]|\d+[.)])\s+/gm, '')
-    .replace(/[*_`>#|~]+/g, ' ')
-    .replace(/[ \t]+/g, ' ')
-    .replace(/\n{2,}/g, '\n')
-    .trim();
+  return (
+    mdx
+      // a guide carries both unit systems (<U>, <ForUnits>); index one, the default, so
+      // a snippet reads as one sentence rather than with holes or every number twice
+      .replace(/<ForUnits system="metric">[\s\S]*?<\/ForUnits>/g, ' ')
+      .replace(/<U\s+us="([^"]*)"\s+metric="[^"]*"\s*\/>/g, '$1')
+      .replace(/^(import|export)\s.*$/gm, '')
+      .replace(/<[A-Z][\w.]*(?:\s[^>]*?)?\/>/gs, ' ')
+      .replace(/<\/?[A-Za-z][\w.]*(?:\s[^>]*?)?>/gs, ' ')
+      .replace(/!\[([^\]]*)\]\([^)]*\)/g, '$1')
+      .replace(/\[([^\]]*)\]\([^)]*\)/g, '$1')
+      .replace(/\$\$?([^$]*)\$\$?/g, (_, tex: string) => ` ${texToPlain(tex)} `)
+      .replace(/^\s*(?:[-+*]|\d+[.)])\s+/gm, '')
+      .replace(/[*_`>#|~]+/g, ' ')
+      .replace(/[ \t]+/g, ' ')
+      .replace(/\n{2,}/g, '\n')
+      .trim()
+  );
 }
 
 /** A guide cut at its h2/h3 headings; anchors as rehype-slug makes them (github-slugger). */

@@ -84,3 +84,38 @@ test('at phone width a guide with calculators fits the screen', { tag: '@phone-o
     expect(overflow, `${path} is wider than the phone`).toBeLessThanOrEqual(0);
   }
 });
+
+/** How many of one system's passages a reader can see (display:none hides them from sight and screen readers). */
+const shown = (page: Page, system: 'US' | 'metric') =>
+  page
+    .locator(`[data-units-only="${system}"]`)
+    .evaluateAll((els) => els.filter((e) => getComputedStyle(e).display !== 'none').length);
+
+test('a guide shows only the reader’s units, from the first paint, and follows the switch', async ({
+  browser,
+  baseURL,
+}) => {
+  const ctx = await browser.newContext({ baseURL });
+  const page = await ctx.newPage();
+  await ctx.addCookies([{ name: 'cw_units', value: 'metric', url: new URL(baseURL!).origin }]);
+  // scripts other than the first-paint one never run here: the units must not wait for hydration
+  await page.route('**/_next/static/**/*.js', (route) => route.abort());
+  await page.goto('/guides/how-a-ram-pump-works');
+  await expect(page.locator('html')).toHaveAttribute('data-units', 'metric');
+  const body = page.locator('.guide-body');
+  await expect(body.getByText('8.84 × 9.81 ≈ 87 kPa')).toBeVisible();
+  await expect(body.getByText('29 × 0.434 ≈ 12.6 psi')).toBeHidden();
+  expect(await shown(page, 'US')).toBe(0);
+  expect(await shown(page, 'metric')).toBeGreaterThan(5);
+  await page.unrouteAll();
+
+  // hydrated, the switch in the header brings the US text back without a reload
+  await page.goto('/guides/how-a-ram-pump-works');
+  await page.waitForLoadState('networkidle');
+  await page.getByRole('banner').getByText('US', { exact: true }).click();
+  await expect(page.locator('html')).toHaveAttribute('data-units', 'US');
+  await expect(body.getByText('29 × 0.434 ≈ 12.6 psi')).toBeVisible();
+  expect(await shown(page, 'metric')).toBe(0);
+  expect(await shown(page, 'US')).toBeGreaterThan(5);
+  await ctx.close();
+});
