@@ -6,7 +6,6 @@ import { STATE_WORDS } from '@/components/questions/state-words';
 import { StateDrop } from '@/components/questions/StateDrop';
 import { formatDate } from '@/lib/dates';
 
-
 function StateLine({ id, state }: { id: number; state: QuestionState }) {
   if (state.kind === 'fixed') {
     return (
@@ -88,8 +87,7 @@ export function QuestionList({ items, units }: { items: QuestionSummary[]; units
               </p>
             )}
             <p className="cw-muted self-start text-xs sm:col-start-2 sm:row-start-2">
-              asked by {q.author.displayName} on{' '}
-              <time dateTime={q.createdAt}>{formatDate(q.createdAt)}</time>
+              asked by {q.author.displayName} on <time dateTime={q.createdAt}>{formatDate(q.createdAt)}</time>
               {q.tags.length ? (
                 <>
                   {' · filed under '}

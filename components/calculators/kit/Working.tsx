@@ -37,7 +37,9 @@ export function Working({ steps }: { steps: Step[] }) {
 
   return (
     <details className="mt-3" onToggle={(e) => setOpen((e.target as HTMLDetailsElement).open)}>
-      <summary className="cw-link min-h-6 cursor-pointer py-0.5 font-sans text-sm font-semibold">Show the working</summary>
+      <summary className="cw-link min-h-6 cursor-pointer py-0.5 font-sans text-sm font-semibold">
+        Show the working
+      </summary>
       <ol
         className="mt-3 flex list-none flex-col gap-0 rounded-md border border-limestone-300 bg-limestone-100 p-0 dark:border-creek-600 dark:bg-creek-950"
         data-testid="working"
