@@ -58,8 +58,9 @@ export async function openAccountMenu(page: Page): Promise<Locator> {
 
 /** Searches from the header's search box as a reader would: type, then Enter (the phone keyboard's Go). */
 export async function headerSearch(page: Page, query: string) {
+  // on a phone the field sits behind the header's "Search" button
+  if (onPhone()) await press(page.getByRole('banner').locator('summary', { hasText: 'Search' }));
   const box = page.getByRole('banner').getByRole('searchbox', { name: 'Search Clackwater' });
-  if (onPhone()) await box.tap();
   await box.fill(query);
   await box.press('Enter');
 }
