@@ -105,7 +105,8 @@ export function MemberText({ children }: { children: string }) {
         // sanitize first, then typeset: KaTeX's markup is ours, the member's HTML is not
         rehypePlugins={[
           [rehypeSanitize, memberSchema],
-          [rehypeKatex, { throwOnError: false, strict: 'ignore', trust: false }],
+          // a member's TeX that does not parse shows as its source in the text colour (KaTeX's red fails contrast in dark mode)
+          [rehypeKatex, { throwOnError: false, strict: 'ignore', trust: false, errorColor: 'currentColor' }],
           rehypeFocusableMath,
         ]}
         urlTransform={memberUrlTransform}

@@ -19,7 +19,7 @@ function Marked({ segments }: { segments: Segment[] }) {
     <>
       {segments.map((s, i) =>
         s.hit ? (
-          <mark key={i} className="rounded-sm bg-clay-200 px-0.5 text-inherit dark:bg-clay-700/60">
+          <mark key={i} className="rounded-sm bg-clay-200 px-0.5 text-clay-700 dark:bg-clay-700/60 dark:text-inherit">
             {s.text}
           </mark>
         ) : (

@@ -8,6 +8,7 @@ import {
   defaultSeries,
   NOMINAL_LABELS,
   SYMPTOM_LABELS,
+  roundAsWritten,
   toDisplay,
   type NominalSize,
   type PipeMaterial,
@@ -83,8 +84,9 @@ const short = (x: number) => String(Number(x.toPrecision(4)));
  */
 export function entrySiteSheet(e: MeasuredSite, units: UnitSystem = 'metric'): SiteSheet {
   const typed = (kind: 'length' | 'flow', si: number) => {
+    // re-expressed in the asker's units, rounded as a tape or a bucket gives it (7.9 ft, not 7.874 ft)
     const d = toDisplay(kind, si, units);
-    return `${short(d.value)} ${d.unit}`;
+    return `${short(roundAsWritten(d.value, d.unit, kind))} ${d.unit}`;
   };
   const sheet: SiteSheet = {
     fall: typed('length', e.fallM),

@@ -11,7 +11,7 @@ test('sign up, confirm the e-mail from the catcher, sign in with a link, sign ou
   const email = `heron${Date.now()}@linnetmill.example`;
   await page.goto('/sign-up');
   await page.getByLabel('E-mail').fill(email);
-  await page.getByLabel('Handle (public, lower case)').fill(`heron_${Date.now() % 100000}`);
+  await page.getByLabel('Handle (public, on your posts)').fill(`heron_${Date.now() % 100000}`);
   await page.getByLabel('Display name').fill('Heron at Linnet Mill');
   await page.getByLabel('Password (10 characters or more)').fill('weir plank thistle ember');
   await page.getByRole('button', { name: 'Sign up' }).click();

@@ -1,5 +1,5 @@
 import { test, expect } from '@playwright/test';
-import { signIn } from '../support/session';
+import { onPhone, press, signIn } from '../support/session';
 
 test('the community page shows the demo entries on the chart and in the table', async ({ page, request }) => {
   const api = await (await request.get('/api/field-log?perPage=100')).json();
@@ -8,6 +8,11 @@ test('the community page shows the demo entries on the chart and in the table', 
   await expect(page.getByRole('heading', { level: 1, name: 'Field log' })).toBeVisible();
   const chart = page.getByTestId('field-log-chart');
   await expect(chart.locator('[data-entry-id]')).toHaveCount(api.total);
+  // on a phone the entries are cards (the sorts and pages are checked by the phone test below)
+  if (onPhone()) {
+    await expect(page.getByRole('list', { name: 'Field log entries, as cards' }).getByRole('listitem')).toHaveCount(20);
+    return;
+  }
   // the entries' table, not the chart's own table of its points for screen readers
   const entries = page.getByRole('table', { name: 'Field log entries', exact: true });
   await expect(entries.locator('tbody tr')).toHaveCount(20);
@@ -27,11 +32,12 @@ test('the community page shows the demo entries on the chart and in the table', 
 test('record a test with three bucket trials, see it on the chart, link it as the after of an earlier test and read the ratio', async ({
   page,
   request,
-  baseURL,
 }) => {
-  await page.context().addCookies([{ name: 'cw_units', value: 'metric', url: baseURL! }]);
   await signIn(page, 'tamsin@ferncombe.example');
+  // signing in applies the member's saved units (US); the header's switch makes them metric, as a member would
   await page.goto('/field-log/new');
+  await press(page.getByRole('banner').getByText('Metric'));
+  await expect(page.getByText('A bare number is litres')).toBeVisible();
   const form = page.getByRole('form', { name: 'Record a field log test' });
   await form.getByLabel('Site name').fill('Ferncombe top garden');
   await form.getByLabel('Pump size').selectOption('3/4');
@@ -108,9 +114,10 @@ test('an entry opens the ask form with the site sheet filled from it', async ({ 
   await page.getByRole('link', { name: 'Ask a question about this test' }).click();
   await expect(page).toHaveURL(new RegExp(`/questions/ask\\?fieldLog=${one.id}$`));
   await expect(page.getByTestId('from-field-log')).toContainText(`field log entry ${one.id}`);
-  // the demo entry's fall and lift as recorded (2.4 m and 12 m)
-  await expect(page.getByLabel('Fall', { exact: true })).toHaveValue('2.4 m');
-  await expect(page.getByLabel('Lift', { exact: true })).toHaveValue('12 m');
+  // the demo entry's fall and lift (2.4 m and 12 m) in the asker's saved units, US: 2.4 ÷ 0.3048 = 7.87 ft and
+  // 12 ÷ 0.3048 = 39.4 ft (NIST SP 811, 2008), rounded as a tape gives them (common practice, no source)
+  await expect(page.getByLabel('Fall', { exact: true })).toHaveValue('7.9 ft');
+  await expect(page.getByLabel('Lift', { exact: true })).toHaveValue('39 ft');
 });
 
 test('on a phone the chart fits, its points answer focus, and the entries are cards with their numbers in view', async ({

@@ -22,9 +22,11 @@ const entry = {
 describe('entrySiteSheet', () => {
   it('types feet and gallons a minute for a US asker', () => {
     const s = entrySiteSheet(entry, 'US');
-    expect(s.fall).toBe('4.921 ft'); // 1.5 m ÷ 0.3048 (NIST SP 811, 2008)
-    expect(s.deliveryLength).toBe('295.3 ft'); // 90 m ÷ 0.3048 (NIST SP 811, 2008)
-    expect(s.driveFlow).toBe('5.283 gal/min'); // 20 L/min ÷ 3.785411784 (NIST SP 811, 2008)
+    // converted with NIST SP 811 (2008), then rounded as a tape or a bucket gives it: feet to 0.1 ft under
+    // 10 ft and whole feet above, flows to two significant figures under 10 (common practice, no source)
+    expect(s.fall).toBe('4.9 ft'); // 1.5 m ÷ 0.3048 = 4.921 ft
+    expect(s.deliveryLength).toBe('295 ft'); // 90 m ÷ 0.3048 = 295.3 ft
+    expect(s.driveFlow).toBe('5.3 gal/min'); // 20 L/min ÷ 3.785411784 = 5.283 gal/min
   });
   it('types metres and litres a minute for a metric asker', () => {
     const s = entrySiteSheet(entry, 'metric');
