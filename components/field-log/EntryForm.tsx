@@ -9,20 +9,49 @@ import { FieldError, inputClass, labelClass, sendJson, type FormError } from '@/
 import { PhotoPicker } from '@/components/photos/PhotoPicker';
 import { MATERIAL_LABELS } from './format';
 import { isoDay } from '@/lib/dates';
+import { useUnits } from '@/components/units/UnitsProvider';
+import type { UnitSystem } from '@/lib/hydraulics';
 
 type Trial = { volume: string; seconds: string };
 
-const TEXT_FIELDS: { name: string; label: string; hint: string }[] = [
-  { name: 'fall', label: 'Fall', hint: 'intake water surface down to the pump, e.g. “4 ft” or “1.2 m”' },
-  { name: 'lift', label: 'Lift', hint: 'pump up to the delivery outlet, e.g. “29 ft”' },
-  { name: 'driveLength', label: 'Drive pipe length', hint: 'e.g. “30 ft”' },
-  { name: 'deliveryLength', label: 'Delivery line length', hint: 'optional, e.g. “200 ft”' },
-  { name: 'driveFlow', label: 'Drive flow (all pumps)', hint: 'e.g. “8 gal/min” or “30 L/min”' },
+/** Hints show an example in the reader's own units; any unit typed is accepted. */
+const TEXT_FIELDS: { name: string; label: string; hint: Record<UnitSystem, string> }[] = [
+  {
+    name: 'fall',
+    label: 'Fall',
+    hint: {
+      US: 'intake water surface down to the pump, e.g. “4 ft”',
+      metric: 'intake water surface down to the pump, e.g. “1.2 m”',
+    },
+  },
+  {
+    name: 'lift',
+    label: 'Lift',
+    hint: { US: 'pump up to the delivery outlet, e.g. “29 ft”', metric: 'pump up to the delivery outlet, e.g. “9 m”' },
+  },
+  { name: 'driveLength', label: 'Drive pipe length', hint: { US: 'e.g. “30 ft”', metric: 'e.g. “9 m”' } },
+  {
+    name: 'deliveryLength',
+    label: 'Delivery line length',
+    hint: { US: 'optional, e.g. “200 ft”', metric: 'optional, e.g. “60 m”' },
+  },
+  { name: 'driveFlow', label: 'Drive flow (all pumps)', hint: { US: 'e.g. “8 gal/min”', metric: 'e.g. “30 L/min”' } },
 ];
+
+/** What a bare number in a trial's volume box means, in the reader's units. */
+const BARE_VOLUME: Record<UnitSystem, { unit: string; words: string; example: string }> = {
+  US: { unit: 'gal', words: 'US gallons', example: '“0.5 gal”' },
+  metric: { unit: 'L', words: 'litres', example: '“1.5 L”' },
+};
+
+/** °F typed by a US reader, as the °C the field log keeps. */
+const toCelsius = (t: number | undefined, units: UnitSystem) =>
+  t === undefined || units === 'metric' ? t : Math.round((((t - 32) * 5) / 9) * 10) / 10;
 
 /** Records one test: the installation, the drive flow and each bucket trial. */
 export function EntryForm() {
   const router = useRouter();
+  const { units } = useUnits();
   const [v, setV] = useState<Record<string, string>>({
     siteName: '',
     testedOn: isoDay(new Date()),
@@ -76,12 +105,12 @@ export function EntryForm() {
       driveFlowMethod: v.driveFlowMethod,
       driveFlowHow: v.driveFlowHow,
       trials: trials.map((t) => ({
-        volume: /^\s*[\d.]+\s*$/.test(t.volume) ? `${t.volume.trim()} L` : t.volume,
+        volume: /^\s*[\d.]+\s*$/.test(t.volume) ? `${t.volume.trim()} ${BARE_VOLUME[units].unit}` : t.volume,
         seconds: Number(t.seconds),
       })),
       bpm: num(v.bpm),
       wasteValveSetting: v.wasteValveSetting,
-      waterTempC: num(v.waterTempC),
+      waterTempC: toCelsius(num(v.waterTempC), units),
       notes: v.notes,
       photoIds,
     });
@@ -157,17 +186,17 @@ export function EntryForm() {
       <fieldset className="grid gap-4 sm:grid-cols-2">
         <legend className="mb-2 font-serif text-lg font-semibold">Heads and pipes</legend>
         {TEXT_FIELDS.slice(0, 3).map((f) => (
-          <div key={f.name}>{text(f.name, f.label, f.hint)}</div>
+          <div key={f.name}>{text(f.name, f.label, f.hint[units])}</div>
         ))}
         {select('driveSize', 'Drive pipe size', sizes)}
         {select('driveMaterial', 'Drive pipe material', materials)}
-        {text('deliveryLength', 'Delivery line length', TEXT_FIELDS[3].hint)}
+        {text('deliveryLength', 'Delivery line length', TEXT_FIELDS[3]!.hint[units])}
         {select('deliverySize', 'Delivery line size', [{ value: '', label: 'not recorded' }, ...sizes])}
         {select('deliveryMaterial', 'Delivery line material', [{ value: '', label: 'not recorded' }, ...materials])}
       </fieldset>
       <fieldset className="grid gap-4 sm:grid-cols-2">
         <legend className="mb-2 font-serif text-lg font-semibold">Drive flow and the pump</legend>
-        {text('driveFlow', TEXT_FIELDS[4].label, TEXT_FIELDS[4].hint)}
+        {text('driveFlow', TEXT_FIELDS[4]!.label, TEXT_FIELDS[4]!.hint[units])}
         {select('driveFlowMethod', 'Drive flow was', [
           { value: 'measured', label: 'measured' },
           { value: 'estimated', label: 'estimated' },
@@ -175,12 +204,13 @@ export function EntryForm() {
         {text('driveFlowHow', 'How', 'e.g. waste and delivery caught in a bucket, timed')}
         {text('bpm', 'Beats per minute', 'optional', 'number')}
         {text('wasteValveSetting', 'Waste valve setting', 'optional, in words')}
-        {text('waterTempC', 'Water temperature (°C)', 'optional', 'number')}
+        {text('waterTempC', `Water temperature (${units === 'US' ? '°F' : '°C'})`, 'optional', 'number')}
       </fieldset>
       <fieldset className="flex flex-col gap-3">
         <legend className="mb-2 font-serif text-lg font-semibold">Bucket trials at the delivery outlet</legend>
         <p className="cw-muted text-sm">
-          One row a trial: what the bucket caught and how long it took. A bare number is litres; “1.5 gal” works too.
+          One row a trial: what the bucket caught and how long it took. A bare number is {BARE_VOLUME[units].words}; a
+          unit such as {BARE_VOLUME[units].example} works too.
         </p>
         {trials.map((t, i) => (
           <div key={i} className="flex flex-wrap items-end gap-3" data-trial={i}>

@@ -1,5 +1,5 @@
 import type * as z from 'zod/mini';
-import type { CalcOutput, QuantityKind } from '@/lib/hydraulics';
+import type { CalcOutput, QuantityKind, UnitSystem } from '@/lib/hydraulics';
 import type { CalculatorId } from './ids';
 
 /** One input of a calculator. `name` is the engine's (dotted) field; `prop` the MDX/share-link name. */
@@ -45,7 +45,15 @@ export type FieldDef =
       options: readonly { value: string; label: string }[];
       normalize?: (raw: string) => string;
     }
-  | { type: 'text'; name: string; prop: string; label: string; help?: string; placeholder?: string };
+  | {
+      type: 'text';
+      name: string;
+      prop: string;
+      label: string;
+      help?: string;
+      /** an example, in each system where it names units */
+      placeholder?: string | Readonly<Record<UnitSystem, string>>;
+    };
 
 /** What the reader typed: text per field, and the unit picked for quantity fields. */
 export interface FieldState {
@@ -87,6 +95,11 @@ export interface CalculatorDef<R = unknown, Id extends CalculatorId = Calculator
   readonly fields: readonly FieldDef[];
   /** starting values as MDX props would give them, e.g. { fall: '4 ft' } */
   readonly defaults: Readonly<Record<string, string>>;
+  /**
+   * defaults a metric reader starts from instead, for free-text fields the unit switch cannot
+   * re-express (a bucket trial "5 gal in 42 s" is written "10 L in 22 s" by a metric reader)
+   */
+  readonly metricDefaults?: Readonly<Record<string, string>>;
   /** turns parsed fields into the engine input (extra fields, defaults, arrays) */
   toInput?(values: Record<string, unknown>): unknown;
   /** the engine call, on an engine input (SI); throws EngineInputError naming the field */

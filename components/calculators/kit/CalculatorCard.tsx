@@ -46,7 +46,15 @@ export function CalculatorCard({
   const { units } = useUnits();
   // every id from useId, so the same calculator twice on one page keeps its labels to itself
   const uid = useId();
-  const [state, setState] = useState<FormState>(() => initialState(def.fields, props, def.defaults, units, openIn));
+  const [state, setState] = useState<FormState>(() =>
+    initialState(
+      def.fields,
+      props,
+      units === 'metric' ? { ...def.defaults, ...def.metricDefaults } : def.defaults,
+      units,
+      openIn,
+    ),
+  );
   const lastUnits = useRef(units);
   const [copied, setCopied] = useState(false);
 
@@ -156,6 +164,7 @@ function Field({
   error?: string;
   onChange: (p: Partial<{ text: string; unit: string }>) => void;
 }) {
+  const { units } = useUnits();
   const s = state ?? { text: '' };
   const describedBy =
     [field.help ? `${id}-help` : null, error ? `${id}-error` : null].filter(Boolean).join(' ') || undefined;
@@ -223,7 +232,13 @@ function Field({
             className={box}
             aria-invalid={error ? true : undefined}
             aria-describedby={describedBy}
-            placeholder={field.type === 'text' ? field.placeholder : undefined}
+            placeholder={
+              field.type !== 'text' || field.placeholder === undefined
+                ? undefined
+                : typeof field.placeholder === 'string'
+                  ? field.placeholder
+                  : field.placeholder[units]
+            }
           />
         )}
         {field.type === 'quantity' ? (

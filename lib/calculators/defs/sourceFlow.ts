@@ -59,7 +59,7 @@ export const sourceFlow = defineCalculator(measureSourceFlow, {
       name: 'trials',
       prop: 'trials',
       label: 'Trials',
-      placeholder: '5 gal in 42 s, 5 gal in 40 s',
+      placeholder: { US: '5 gal in 42 s, 5 gal in 40 s', metric: '10 L in 22 s, 10 L in 21 s' },
       help: 'Each trial as “volume in time”, separated by commas.',
     },
     {
@@ -115,6 +115,7 @@ export const sourceFlow = defineCalculator(measureSourceFlow, {
     angle: '90',
     floatK: String(FLOAT_COEFFICIENT),
   },
+  metricDefaults: { trials: '10 L in 22 s, 10 L in 21 s, 10 L in 23 s' },
   visible: (name: string, state: FormState) =>
     !ALL.has(name) || (BY_METHOD[state.method?.text ?? 'bucket'] ?? []).includes(name),
   toInput: (v) => {
