@@ -87,6 +87,10 @@ test('record a test with three bucket trials, see it on the chart, link it as th
     `${(after.deliveredFlowM3s / before.deliveredFlowM3s).toFixed(2)}×`,
   );
   await expect(page.getByText('What changed: drive pipe re-laid straighter')).toBeVisible();
+  // put the member's saved units back for the tests after this one
+  const saved = page.waitForResponse((r) => r.url().endsWith('/api/account/units') && r.ok());
+  await press(page.getByRole('banner').getByText('US', { exact: true }));
+  await saved;
 });
 
 test('the demo one-pump against two-pump comparison shows both ratios', async ({ page, request }) => {

@@ -41,8 +41,9 @@ test('the site sketch shows the calculator’s values in the reader’s units an
   await page.goto('/calculators/array-planner?fall=4%20ft&lift=29%20ft&driveLength=24%20ft&deliveryLength=150%20ft');
   const card = page.locator('[data-calculator="array-planner"]');
   const sketch = card.getByRole('img', { name: /^Site sketch:/ });
-  // 1 ft = 0.3048 m exactly (NIST SP 811, 2008): 4 ft = 1.22 m, 24 ft = 7.32 m, 29 ft = 8.84 m, 150 ft = 45.7 m
-  for (const text of ['1.22 m', '7.32 m', '8.84 m', '45.7 m'])
+  // 1 ft = 0.3048 m exactly (NIST SP 811, 2008): 4 ft = 1.219 m, 24 ft = 7.315 m, 29 ft = 8.839 m, 150 ft = 45.72 m,
+  // re-expressed as a tape gives them: to the cm under 5 m, to 0.1 m under 100 m (common practice, no source)
+  for (const text of ['1.22 m', '7.3 m', '8.8 m', '45.7 m'])
     await expect(sketch.getByText(text, { exact: true })).toBeVisible();
   await card.getByLabel('Fall', { exact: true }).fill('2 m');
   await expect(sketch).toHaveAttribute('aria-label', /fall 2 m from the source’s surface/);
