@@ -123,7 +123,7 @@ export function BarRows({
                     className={TONES.ink.fill}
                     fontWeight={r.highlight ? 700 : 400}
                   >
-                    {l}
+                    {i < r.nameLines.length - 1 ? `${l} ` : l}
                   </text>
                 ))}
                 <text
@@ -156,7 +156,7 @@ export function BarRows({
               fontWeight={600}
               data-axis-title="x"
             >
-              {l}
+              {i < titleLines.length - 1 ? `${l} ` : l}
             </text>
           ))}
         </svg>

@@ -138,6 +138,7 @@ export function XYChart({
   const targets = [...readouts, ...dots];
   const shown = targets.find((t) => String(t.key) === active);
 
+  // wrapped lines are separate <text>s: each but the last keeps its space, so the words do not run together when read
   const labelBox = (text: string, px: number, py: number, tone: ToneName, key: string) => {
     const lines = wrapText(text, plotW - 8, FONT);
     const w = Math.max(...lines.map((l) => textWidth(l, FONT))) + 8;
@@ -161,7 +162,7 @@ export function XYChart({
             className={TONES.ink.fill}
             fontWeight={600}
           >
-            {l}
+            {i < lines.length - 1 ? `${l} ` : l}
           </text>
         ))}
       </g>
@@ -182,7 +183,7 @@ export function XYChart({
         >
           {yTitle.map((l, i) => (
             <text key={i} x={2} y={(i + 1) * LINE - 2} className={TONES.ink.fill} fontWeight={600} data-axis-title="y">
-              {l}
+              {i < yTitle.length - 1 ? `${l} ` : l}
             </text>
           ))}
           {yt.values.map((v, i) => (
@@ -226,7 +227,7 @@ export function XYChart({
               fontWeight={600}
               data-axis-title="x"
             >
-              {l}
+              {i < xTitle.length - 1 ? `${l} ` : l}
             </text>
           ))}
           {band && band.points.length > 1 ? (

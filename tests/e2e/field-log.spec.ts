@@ -115,6 +115,8 @@ test('an entry opens the ask form with the site sheet filled from it', async ({ 
   const one = list.find((e) => e.siteName === 'Ferncombe lower meadow')!;
   await signIn(page, 'tamsin@ferncombe.example');
   await page.goto(`/field-log/${one.id}`);
+  // this member reads in US units (the header's switch saves it, whatever an earlier test left)
+  await press(page.getByRole('banner').getByText('US', { exact: true }));
   await page.getByRole('link', { name: 'Ask a question about this test' }).click();
   await expect(page).toHaveURL(new RegExp(`/questions/ask\\?fieldLog=${one.id}$`));
   await expect(page.getByTestId('from-field-log')).toContainText(`field log entry ${one.id}`);
