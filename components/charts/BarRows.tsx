@@ -3,10 +3,10 @@
 import { useState } from 'react';
 import { horizontalTicks, textWidth, wrapText } from '@/lib/charts/layout';
 import { spanOf } from '@/lib/charts/ticks';
-import { ChartTable } from './parts';
+import { ChartTable, TextLines } from './parts';
 import { TONES } from './tones';
 import { useWidth } from './useWidth';
-import { valueText } from './XYChart';
+import { FONT, LINE, valueText } from './XYChart';
 
 export interface BarRow {
   name: string;
@@ -15,8 +15,6 @@ export interface BarRow {
   highlight?: boolean;
 }
 
-const FONT = 12;
-const LINE = 15;
 const BAR = 14;
 
 /** Each row's name lines and heights, stacked from the top. */
@@ -115,17 +113,14 @@ export function BarRows({
                   className={TONES.ink.stroke}
                   strokeWidth={focused === r.name ? 2 : 0}
                 />
-                {r.nameLines.map((l, i) => (
-                  <text
-                    key={i}
-                    x={left}
-                    y={r.top + (i + 1) * LINE - 3}
-                    className={TONES.ink.fill}
-                    fontWeight={r.highlight ? 700 : 400}
-                  >
-                    {i < r.nameLines.length - 1 ? `${l} ` : l}
-                  </text>
-                ))}
+                <TextLines
+                  lines={r.nameLines}
+                  x={left}
+                  y={r.top + LINE - 3}
+                  step={LINE}
+                  className={TONES.ink.fill}
+                  fontWeight={r.highlight ? 700 : 400}
+                />
                 <text
                   x={left + plotW}
                   y={r.top + LINE - 3}
@@ -146,19 +141,16 @@ export function BarRows({
               </g>
             );
           })}
-          {titleLines.map((l, i) => (
-            <text
-              key={i}
-              x={left + plotW / 2}
-              y={plotBottom + LINE + 6 + (i + 1) * LINE - 2}
-              textAnchor="middle"
-              className={TONES.ink.fill}
-              fontWeight={600}
-              data-axis-title="x"
-            >
-              {i < titleLines.length - 1 ? `${l} ` : l}
-            </text>
-          ))}
+          <TextLines
+            lines={titleLines}
+            x={left + plotW / 2}
+            y={plotBottom + 2 * LINE + 4}
+            step={LINE}
+            textAnchor="middle"
+            className={TONES.ink.fill}
+            fontWeight={600}
+            data-axis-title="x"
+          />
         </svg>
       </div>
       <figcaption className="sr-only">

@@ -4,7 +4,7 @@ import { useState, type ReactNode } from 'react';
 import { formatNumber } from '@/lib/calculators/format';
 import { horizontalTicks, placeLabel, textWidth, verticalTicks, wrapText } from '@/lib/charts/layout';
 import { spanOf } from '@/lib/charts/ticks';
-import { ChartTable, Legend, type ChartTableData, type LegendItem } from './parts';
+import { ChartTable, Legend, TextLines, type ChartTableData, type LegendItem } from './parts';
 import { TONES, type ToneName } from './tones';
 import { useWidth } from './useWidth';
 
@@ -52,8 +52,9 @@ export interface XYMark {
   label: string;
 }
 
-const FONT = 12;
-const LINE = 15;
+/** The charts' type size and line step, in px (BarRows draws with the same). */
+export const FONT = 12;
+export const LINE = 15;
 const HIT = 12; // radius of the invisible target: 24 px across (WCAG 2.2, 2.5.8)
 
 export function valueText(v: number, unit?: string) {
@@ -138,7 +139,6 @@ export function XYChart({
   const targets = [...readouts, ...dots];
   const shown = targets.find((t) => String(t.key) === active);
 
-  // wrapped lines are separate <text>s: each but the last keeps its space, so the words do not run together when read
   const labelBox = (text: string, px: number, py: number, tone: ToneName, key: string) => {
     const lines = wrapText(text, plotW - 8, FONT);
     const w = Math.max(...lines.map((l) => textWidth(l, FONT))) + 8;
@@ -154,17 +154,14 @@ export function XYChart({
           rx={3}
           className={`${TONES.card.fill} ${TONES[tone].stroke}`}
         />
-        {lines.map((l, i) => (
-          <text
-            key={i}
-            x={left + at.x + 4}
-            y={top + at.y + 2 + (i + 1) * LINE - 4}
-            className={TONES.ink.fill}
-            fontWeight={600}
-          >
-            {i < lines.length - 1 ? `${l} ` : l}
-          </text>
-        ))}
+        <TextLines
+          lines={lines}
+          x={left + at.x + 4}
+          y={top + at.y - 2 + LINE}
+          step={LINE}
+          className={TONES.ink.fill}
+          fontWeight={600}
+        />
       </g>
     );
   };
@@ -181,11 +178,15 @@ export function XYChart({
           className="block max-w-full select-none font-sans"
           fontSize={FONT}
         >
-          {yTitle.map((l, i) => (
-            <text key={i} x={2} y={(i + 1) * LINE - 2} className={TONES.ink.fill} fontWeight={600} data-axis-title="y">
-              {i < yTitle.length - 1 ? `${l} ` : l}
-            </text>
-          ))}
+          <TextLines
+            lines={yTitle}
+            x={2}
+            y={LINE - 2}
+            step={LINE}
+            className={TONES.ink.fill}
+            fontWeight={600}
+            data-axis-title="y"
+          />
           {yt.values.map((v, i) => (
             <g key={`y${v}`}>
               <line
@@ -217,19 +218,16 @@ export function XYChart({
             </g>
           ))}
           <path d={`M${left},${top}V${top + plotH}H${left + plotW}`} fill="none" className={TONES.axis.stroke} />
-          {xTitle.map((l, i) => (
-            <text
-              key={i}
-              x={left + plotW / 2}
-              y={top + plotH + 6 + LINE * (i + 2) - 2}
-              textAnchor="middle"
-              className={TONES.ink.fill}
-              fontWeight={600}
-              data-axis-title="x"
-            >
-              {i < xTitle.length - 1 ? `${l} ` : l}
-            </text>
-          ))}
+          <TextLines
+            lines={xTitle}
+            x={left + plotW / 2}
+            y={top + plotH + 4 + 2 * LINE}
+            step={LINE}
+            textAnchor="middle"
+            className={TONES.ink.fill}
+            fontWeight={600}
+            data-axis-title="x"
+          />
           {band && band.points.length > 1 ? (
             <g aria-hidden="true">
               <path

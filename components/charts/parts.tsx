@@ -1,3 +1,4 @@
+import type { SVGProps } from 'react';
 import { TONES, type ToneName } from './tones';
 
 export interface LegendItem {
@@ -81,5 +82,28 @@ export function ChartTable({ data }: { data: ChartTableData }) {
         </tbody>
       </table>
     </div>
+  );
+}
+
+/**
+ * Wrapped text drawn one <text> per line, the first baseline at `y`, each next one `step` lower.
+ * Every line but the last keeps its trailing space, so the words do not run together when the
+ * chart's text is read (screen readers, textContent).
+ */
+export function TextLines({
+  lines,
+  x,
+  y,
+  step,
+  ...attrs
+}: { lines: string[]; x: number; y: number; step: number } & Omit<SVGProps<SVGTextElement>, 'x' | 'y'>) {
+  return (
+    <>
+      {lines.map((l, i) => (
+        <text key={i} x={x} y={y + i * step} {...attrs}>
+          {i < lines.length - 1 ? `${l} ` : l}
+        </text>
+      ))}
+    </>
   );
 }
