@@ -3,11 +3,10 @@ import { afterEach, describe, expect, it, vi } from 'vitest';
 import { cleanup, fireEvent, render, screen } from '@testing-library/react';
 import { CALCULATORS } from '@/lib/calculators';
 import { UNITS_COOKIE } from '@/lib/units/preference';
-import { SessionProvider } from 'next-auth/react';
 
 vi.mock('next/navigation', () => ({ useRouter: () => ({ refresh: () => {}, push: () => {} }) }));
 const { CalculatorCard } = await import('@/components/calculators/kit/CalculatorCard');
-const { UnitsProvider } = await import('@/components/units/UnitsProvider');
+const { renderWithUnits } = await import('../support/render-with-units');
 
 afterEach(() => {
   cleanup();
@@ -19,12 +18,8 @@ const sketchName = () => screen.getByRole('img', { name: /^Site sketch:/ }).getA
 describe('the site sketch in a calculator card', () => {
   it('reads the card’s form in the reader’s units and follows what is typed', () => {
     document.cookie = `${UNITS_COOKIE}=metric; path=/`;
-    render(
-      <SessionProvider session={null}>
-        <UnitsProvider>
-          <CalculatorCard def={CALCULATORS['drive-pipe-check']} props={{ fall: '4 ft', driveLength: '24 ft' }} />
-        </UnitsProvider>
-      </SessionProvider>,
+    renderWithUnits(
+      <CalculatorCard def={CALCULATORS['drive-pipe-check']} props={{ fall: '4 ft', driveLength: '24 ft' }} />,
     );
     // 4 ft = 1.2192 m, 24 ft = 7.3152 m (NIST SP 811, 2008: 1 ft = 0.3048 m); the card re-expresses a
     // default as a tape gives it, to the cm under 5 m and the 0.1 m under 100 m (common practice, no source)
@@ -37,13 +32,7 @@ describe('the site sketch in a calculator card', () => {
   });
 
   it('speaks US units to a US reader', () => {
-    render(
-      <SessionProvider session={null}>
-        <UnitsProvider>
-          <CalculatorCard def={CALCULATORS['delivery-line']} props={{ lift: '29 ft', length: '150 ft' }} />
-        </UnitsProvider>
-      </SessionProvider>,
-    );
+    renderWithUnits(<CalculatorCard def={CALCULATORS['delivery-line']} props={{ lift: '29 ft', length: '150 ft' }} />);
     // the values as typed, in feet
     expect(sketchName()).toContain('lift 29 ft');
     expect(sketchName()).toContain('delivery line 150 ft');

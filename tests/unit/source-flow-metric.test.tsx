@@ -1,27 +1,19 @@
 // @vitest-environment happy-dom
 import { afterEach, describe, expect, it, vi } from 'vitest';
-import { cleanup, render, screen } from '@testing-library/react';
-import { SessionProvider } from 'next-auth/react';
+import { cleanup, screen } from '@testing-library/react';
 import { CALCULATORS } from '@/lib/calculators';
 import { UNITS_COOKIE } from '@/lib/units/preference';
 
 vi.mock('next/navigation', () => ({ useRouter: () => ({ refresh: () => {}, push: () => {} }) }));
 const { CalculatorCard } = await import('@/components/calculators/kit/CalculatorCard');
-const { UnitsProvider } = await import('@/components/units/UnitsProvider');
+const { renderWithUnits } = await import('../support/render-with-units');
 
 afterEach(() => {
   cleanup();
   document.cookie = `${UNITS_COOKIE}=; max-age=0; path=/`;
 });
 
-const card = () =>
-  render(
-    <SessionProvider session={null}>
-      <UnitsProvider>
-        <CalculatorCard def={CALCULATORS['source-flow']} />
-      </UnitsProvider>
-    </SessionProvider>,
-  );
+const card = () => renderWithUnits(<CalculatorCard def={CALCULATORS['source-flow']} />);
 
 /** Bucket trials are free text the unit switch cannot re-express: each reader starts from trials in their own units. */
 describe('the source flow card’s bucket trials', () => {
