@@ -5,8 +5,9 @@ import type { UnitSystem } from '@/lib/hydraulics';
 import { STATE_WORDS } from '@/components/questions/state-words';
 import { StateDrop } from '@/components/questions/StateDrop';
 import { formatDate } from '@/lib/dates';
+import { withReadings } from '@/lib/units/in-text';
 
-function StateLine({ id, state }: { id: number; state: QuestionState }) {
+function StateLine({ id, state, units }: { id: number; state: QuestionState; units: UnitSystem }) {
   if (state.kind === 'fixed') {
     return (
       <p className="flex items-start gap-1.5 text-sm text-moss-700 dark:text-moss-300" data-state="fixed">
@@ -17,7 +18,7 @@ function StateLine({ id, state }: { id: number; state: QuestionState }) {
             <>
               {' — '}
               <Link href={`/questions/${id}#answer-${state.answerId}`} className="font-serif underline-offset-2">
-                {state.line}
+                {withReadings(state.line, units)}
               </Link>
             </>
           ) : null}
@@ -59,7 +60,7 @@ export function QuestionList({ items, units }: { items: QuestionSummary[]; units
                   {q.title}
                 </Link>
               </h3>
-              <StateLine id={q.id} state={q.state} />
+              <StateLine id={q.id} state={q.state} units={units} />
               {!glance ? <p className="cw-muted line-clamp-2 font-serif text-sm">{q.excerpt}</p> : null}
             </div>
             {glance ? (

@@ -7,6 +7,8 @@ import { fixedItSchema, WHAT_FIXED_IT_MAX, WHAT_FIXED_IT_MIN } from '@/lib/valid
 import { FieldError, getJson, inputClass, labelClass, sendJson, type FormError } from '@/components/forms/api';
 import { StateDrop } from './StateDrop';
 import { useViewer } from './Thread';
+import { useUnits } from '@/components/units/UnitsProvider';
+import { withReadings } from '@/lib/units/in-text';
 
 /**
  * The line a fixed thread opens with: the asker's words for what fixed it, linked to
@@ -14,6 +16,7 @@ import { useViewer } from './Thread';
  */
 export function WhatFixedIt({ initial }: { initial: ThreadView }) {
   const viewer = useViewer();
+  const { units } = useUnits();
   const { data } = useSWR<ThreadView>(viewer ? `/api/questions/${initial.id}` : null, getJson<ThreadView>, {
     fallbackData: initial,
     revalidateOnMount: false,
@@ -31,7 +34,7 @@ export function WhatFixedIt({ initial }: { initial: ThreadView }) {
       <StateDrop kind="fixed" className="mt-1 h-5 w-5 text-moss-600 dark:text-moss-300" />
       <div className="flex flex-col gap-1">
         <p className="text-xs font-semibold uppercase tracking-wide text-moss-700 dark:text-moss-100">What fixed it</p>
-        {t.whatFixedIt ? <p className="font-serif text-lg leading-snug">{t.whatFixedIt}</p> : null}
+        {t.whatFixedIt ? <p className="font-serif text-lg leading-snug">{withReadings(t.whatFixedIt, units)}</p> : null}
         <p className="text-sm">
           {t.whatFixedIt ? `— ${t.author.displayName}, who asked. ` : `${t.author.displayName}, who asked, chose `}
           <a href={`#answer-${answer.id}`} className="font-semibold underline underline-offset-2">

@@ -2,8 +2,9 @@
  * Quantities written inside text (a title, a post's words, a typed site sheet) put into a
  * reader's units, for the places the server writes text for one reader: search snippets,
  * e-mails, field log titles. "1.5 m fall" reads "4.92 ft fall" to a US reader and stays as
- * typed for a metric one. Inches are left alone: "1-1/4 inch" is a pipe's name (a nominal
- * size), not a measurement. Pure, no framework.
+ * typed for a metric one. An inch size that names a pipe or pump ("1-1/4 inch", "a 1 inch
+ * pump") is a nominal size, not a measurement, and stays; "0.622 in" or "14 inches below"
+ * is measured and is converted. Pure, no framework.
  */
 import { toSI, type QuantityKind, type UnitSystem } from '@/lib/hydraulics';
 import { formatQuantity } from '@/lib/calculators/format';
@@ -35,6 +36,9 @@ const WORDS: Record<string, UnitWord> = {
   'gallons a day': { unit: 'gal/day', kind: 'dailyVolume', system: 'US' },
   'gallons per day': { unit: 'gal/day', kind: 'dailyVolume', system: 'US' },
   psi: { unit: 'psi', kind: 'pressure', system: 'US' },
+  in: { unit: 'in', kind: 'smallLength', system: 'US' },
+  inch: { unit: 'in', kind: 'smallLength', system: 'US' },
+  inches: { unit: 'in', kind: 'smallLength', system: 'US' },
   gal: { unit: 'gal', kind: 'volume', system: 'US' },
   'us gal': { unit: 'gal', kind: 'volume', system: 'US' },
   gallon: { unit: 'gal', kind: 'volume', system: 'US' },
@@ -48,6 +52,8 @@ const WORDS: Record<string, UnitWord> = {
   cm: { unit: 'cm', kind: 'smallLength', system: 'metric' },
   'm/s': { unit: 'm/s', kind: 'velocity', system: 'metric' },
   'l/min': { unit: 'L/min', kind: 'flow', system: 'metric' },
+  'ml/min': { unit: 'mL/min', kind: 'smallFlow', system: 'metric' },
+  ml: { unit: 'mL', kind: 'volume', system: 'metric' },
   'litres per minute': { unit: 'L/min', kind: 'flow', system: 'metric' },
   'liters per minute': { unit: 'L/min', kind: 'flow', system: 'metric' },
   'litres a minute': { unit: 'L/min', kind: 'flow', system: 'metric' },
@@ -82,6 +88,50 @@ const QUANTITY = new RegExp(
   'gi',
 );
 
+/** "2 in parallel", "1 in 10", "3 in the tank": "in" after a number as a preposition, not inches. */
+const IN_AS_WORD = /^\s+(?:parallel|series|stages?|a|an|the|each|every|all|one|two|three|\d)\b/i;
+/** What an inch size names when it is a nominal size: "a 1 inch pump", "2 in homemade pumps", "size 1 in". */
+const SIZE_AFTER = /^[\s-]+(?:[a-z]+\s+)?(?:pumps?|pipes?|drive|delivery|line|fittings?|valves?|hose|ram)\b/i;
+const SIZE_BEFORE = /\bsize:?\s*$/i;
+
+interface Found {
+  /** the quantity as written */
+  whole: string;
+  /** where it starts in the text */
+  at: number;
+  /** its reading in the reader's units, or undefined where it stays as written */
+  reading: string | undefined;
+}
+
+/** Each quantity of the other system in `text`, read in `units`. */
+function readings(text: string, units: UnitSystem, visit: (f: Found) => string): string {
+  return text.replace(
+    QUANTITY,
+    (whole, int: string, frac: string | undefined, _gap: string, word: string, at: number, all: string) => {
+      const w = WORDS[word.toLowerCase().replace(/\s+/g, ' ')];
+      if (!w || w.system === units) return whole;
+      const after = all.slice(at + whole.length);
+      if (w.unit === 'in') {
+        if (word.toLowerCase() === 'in' && IN_AS_WORD.test(after)) return whole;
+        // a whole number of inches before "pump" or "pipe" names a size (a decimal is measured)
+        if (!frac && (SIZE_AFTER.test(after) || SIZE_BEFORE.test(all.slice(Math.max(0, at - 12), at)))) return whole;
+      }
+      const value = Number(`${int.replace(/,/g, '')}${frac ?? ''}`);
+      let reading: string | undefined;
+      try {
+        if (Number.isFinite(value)) {
+          const si = toSI(value, w.unit, w.kind);
+          // 288 inches reads 7.32 m, not 7,320 mm
+          reading = formatQuantity(w.kind === 'smallLength' && si >= 1 ? 'length' : w.kind, si, units);
+        }
+      } catch {
+        reading = undefined;
+      }
+      return visit({ whole, at, reading });
+    },
+  );
+}
+
 /**
  * The text with every quantity written in the other system put into `units`, rounded as a
  * person writes it; quantities already in the reader's system stay exactly as typed.
@@ -90,15 +140,17 @@ const QUANTITY = new RegExp(
  */
 export function quantitiesInUnits(text: string, units: UnitSystem): string {
   if (!text) return text;
-  return text.replace(QUANTITY, (whole, int: string, frac: string | undefined, _gap: string, word: string) => {
-    const w = WORDS[word.toLowerCase().replace(/\s+/g, ' ')];
-    if (!w || w.system === units) return whole;
-    const value = Number(`${int.replace(/,/g, '')}${frac ?? ''}`);
-    if (!Number.isFinite(value)) return whole;
-    try {
-      return formatQuantity(w.kind, toSI(value, w.unit, w.kind), units);
-    } catch {
-      return whole;
-    }
-  });
+  return readings(text, units, (f) => f.reading ?? f.whole);
+}
+
+/**
+ * A member's words kept as written, each quantity of the other system followed by its
+ * reading in the reader's units in brackets: for the places their words are quoted (a
+ * field log entry's notes, the line saying what fixed it), where we never rewrite them.
+ * @example
+ * withReadings('stroke 9 mm, one washer', 'US')  // → 'stroke 9 mm (0.354 in), one washer'
+ */
+export function withReadings(text: string, units: UnitSystem): string {
+  if (!text) return text;
+  return readings(text, units, (f) => (f.reading ? `${f.whole} (${f.reading})` : f.whole));
 }

@@ -1,7 +1,7 @@
 /** The words search and e-mail show: rendered text in the reader's units, never markup or codes. */
 import { describe, expect, it } from 'vitest';
 import { markdownToPlain, texToPlain } from '@/lib/search/plain-text';
-import { quantitiesInUnits } from '@/lib/units/in-text';
+import { quantitiesInUnits, withReadings } from '@/lib/units/in-text';
 import { siteSheetText } from '@/lib/search/documents';
 import { entryTitle } from '@/lib/field-log/title';
 
@@ -26,6 +26,30 @@ describe('quantities in text, in the reader’s units', () => {
   it('leaves the reader’s own system, nominal inch sizes and minutes alone', () => {
     expect(quantitiesInUnits('29 ft of lift', 'US')).toBe('29 ft of lift');
     expect(quantitiesInUnits('a 1-1/4 inch pump beats for 5 min', 'metric')).toBe('a 1-1/4 inch pump beats for 5 min');
+    expect(quantitiesInUnits('2 × 1 inch homemade pumps in parallel', 'metric')).toBe(
+      '2 × 1 inch homemade pumps in parallel',
+    );
+    expect(quantitiesInUnits('pump size 2 in', 'metric')).toBe('pump size 2 in');
+  });
+  it('measured inches are converted, by size', () => {
+    // 0.622 in × 25.4 = 15.80 mm; 288 in × 0.0254 = 7.315 m; 14 in × 25.4 = 355.6 mm (NIST SP 811, 2008: 1 in = 25.4 mm exactly)
+    expect(quantitiesInUnits('inside diameter 0.622 in, a run of 288 in', 'metric')).toBe(
+      'inside diameter 15.8 mm, a run of 7.32 m',
+    );
+    expect(quantitiesInUnits('Lowered the intake box 14 inches below', 'metric')).toBe(
+      'Lowered the intake box 356 mm below',
+    );
+  });
+  it('millilitres a minute', () => {
+    // 850 mL/min × 60 ÷ 3,785.411784 mL/gal = 13.47 US gal/h (NIST SP 811, 2008)
+    expect(quantitiesInUnits('Delivered 850 mL/min', 'US')).toBe('Delivered 13.5 US gal/h');
+  });
+  it('a member’s words kept, with the reader’s reading in brackets', () => {
+    // 9 mm ÷ 25.4 = 0.354 in; 20 L ÷ 3.785411784 = 5.28 US gal (NIST SP 811, 2008)
+    expect(withReadings('stroke 9 mm, one washer, a 20 L bucket', 'US')).toBe(
+      'stroke 9 mm (0.354 in), one washer, a 20 L (5.28 US gal) bucket',
+    );
+    expect(withReadings('2 in parallel, 29 ft of lift', 'US')).toBe('2 in parallel, 29 ft of lift');
   });
 });
 

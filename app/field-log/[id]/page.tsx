@@ -11,6 +11,7 @@ import { Caution } from '@/components/Caution';
 import { LinkForm } from '@/components/field-log/LinkForm';
 import { material, pumpsWords, shown, size } from '@/components/field-log/format';
 import { readUnitPreference } from '@/lib/units/server';
+import { withReadings } from '@/lib/units/in-text';
 import { formatDate } from '@/lib/dates';
 
 type Params = Promise<{ id: string }>;
@@ -108,7 +109,7 @@ export default async function FieldLogEntryPage({ params }: { params: Params }) 
           <thead>
             <tr className="border-b border-limestone-400 text-left">
               <th className="px-2 py-1">Trial</th>
-              <th className="px-2 py-1">Volume (L)</th>
+              <th className="px-2 py-1">Volume</th>
               <th className="px-2 py-1">Seconds</th>
               <th className="px-2 py-1">Flow</th>
             </tr>
@@ -117,7 +118,7 @@ export default async function FieldLogEntryPage({ params }: { params: Params }) 
             {e.trials.map((t, i) => (
               <tr key={i} className="border-b border-limestone-300 dark:border-creek-600">
                 <td className="px-2 py-1">{i + 1}</td>
-                <td className="cw-num px-2 py-1">{Number(t.volumeL.toPrecision(6))}</td>
+                <td className="cw-num px-2 py-1">{shown('volume', t.volumeL / 1000, units)}</td>
                 <td className="cw-num px-2 py-1">{t.seconds}</td>
                 <td className="cw-num px-2 py-1">{flow(trialFlowM3s(t))}</td>
               </tr>
@@ -148,12 +149,12 @@ export default async function FieldLogEntryPage({ params }: { params: Params }) 
               : 'not recorded'}
           </Row>
           <Row label={`Drive flow (${e.driveFlowMethod})`}>{flow(e.driveFlowM3s)}</Row>
-          <Row label="How the drive flow was found">{e.driveFlowHow || '—'}</Row>
+          <Row label="How the drive flow was found">{withReadings(e.driveFlowHow, units) || '—'}</Row>
           <Row label="Beats per minute">{e.beatsPerMinute ?? '—'}</Row>
-          <Row label="Waste valve setting">{e.wasteValveSetting || '—'}</Row>
-          <Row label="Water temperature">{e.waterTempC !== null ? `${e.waterTempC} °C` : '—'}</Row>
+          <Row label="Waste valve setting">{withReadings(e.wasteValveSetting, units) || '—'}</Row>
+          <Row label="Water temperature">{e.waterTempC !== null ? shown('temperature', e.waterTempC, units) : '—'}</Row>
         </dl>
-        {e.notes ? <p className="cw-prose mt-3 whitespace-pre-line">{e.notes}</p> : null}
+        {e.notes ? <p className="cw-prose mt-3 whitespace-pre-line">{withReadings(e.notes, units)}</p> : null}
       </section>
 
       {photos.length ? (
