@@ -33,10 +33,19 @@ export function texNumber(x: number): string {
   return formatNumber(x).replace(/,/g, '{,}');
 }
 
-/** Units bound to no kind but still shown in a readable size. */
-const FIXED_READABLE: Record<string, { factor: number; label: string }> = {
+/**
+ * Units bound to no kind (a rule's constants and material properties), written in each
+ * system's own unit and a readable size. Factors are exact from the foot (0.3048 m) and
+ * the pound (0.45359237 kg) of NIST SP 811; a centistoke is a mm²/s.
+ */
+const FIXED_READABLE: Record<string, Record<UnitSystem, { factor: number; label: string }>> = {
   // water's kinematic viscosity is about one of these at room temperature (common practice, no source)
-  'm²/s': { factor: 1e6, label: 'mm²/s' },
+  'm²/s': { US: { factor: 1e6, label: 'cSt' }, metric: { factor: 1e6, label: 'mm²/s' } },
+  'kg/m³': {
+    US: { factor: 0.3048 ** 3 / 0.45359237, label: 'lb/ft³' },
+    metric: { factor: 1, label: 'kg/m³' },
+  },
+  'm/s²': { US: { factor: 1 / 0.3048, label: 'ft/s²' }, metric: { factor: 1, label: 'm/s²' } },
 };
 
 /** The unit each kind is written in within one step: a sum reads "29 ft + 0.03 ft", not "29 ft + 0.36 in". */
@@ -68,7 +77,7 @@ export function stepValueDisplay(
     const d = readableDisplay(v.kind, v.value, units);
     return { value: d.value, label: d.label };
   }
-  const fixed = FIXED_READABLE[v.unit];
+  const fixed = FIXED_READABLE[v.unit]?.[units];
   if (fixed) return { value: v.value * fixed.factor, label: fixed.label };
   return { value: v.value, label: v.unit };
 }
@@ -81,8 +90,15 @@ export function stepValueTex(v: StepValue, units: UnitSystem, inStep?: StepUnits
 
 /** The substituted formula of a step in TeX, every number in the reader's units (one unit per kind). */
 export function substitutedTex(step: Step, units: UnitSystem): string {
-  const inStep = stepUnits(step, units);
-  return partsTex(step.substituted, (v) => stepValueTex(v, units, inStep));
+  const s = inSystem(step, units);
+  const inStep = stepUnits(s, units);
+  return partsTex(s.substituted, (v) => stepValueTex(v, units, inStep));
+}
+
+/** The step as the reader's system writes its rule, where the engine gives it a form of its own. */
+function inSystem(step: Step, units: UnitSystem): Step {
+  const own = step.inSystem?.[units];
+  return own ? { ...step, ...own, note: own.note ?? step.note } : step;
 }
 
 /** A step's answer as plain text in the reader's units, e.g. "30 US gal/h" or "7.25". */
@@ -103,11 +119,14 @@ export interface WorkingLine {
 }
 
 export function workingLines(steps: readonly Step[], units: UnitSystem): WorkingLine[] {
-  return steps.map((s) => ({
-    title: s.title,
-    formula: s.formula,
-    substituted: substitutedTex(s, units),
-    answer: stepAnswer(s, units),
-    ...(s.note ? { note: s.note } : {}),
-  }));
+  return steps.map((step) => {
+    const s = inSystem(step, units);
+    return {
+      title: s.title,
+      formula: s.formula,
+      substituted: substitutedTex(s, units),
+      answer: stepAnswer(s, units),
+      ...(s.note ? { note: s.note } : {}),
+    };
+  });
 }

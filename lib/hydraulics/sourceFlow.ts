@@ -181,32 +181,47 @@ export function measureSourceFlow(input: SourceFlowInput): CalcOutput<SourceFlow
     const { ce, khFt } = weirCoefficients(v.angleDeg);
     flow = vNotchFlow(v.notchHeadM, v.angleDeg);
     const hFt = toFeet(v.notchHeadM);
-    steps.push(
-      step(
-        'V-notch discharge (Kindsvater-Shen)',
-        'Q = 4.28\\,C_e\\tan\\tfrac{\\theta}{2}\\,(h_1 + k_h)^{2.5}',
-        sub`Q = 4.28 \\times ${tq(ce)} \\times \\tan ${tq(v.angleDeg / 2)}^{\\circ} \\times (${tq(hFt, 'ft')} + ${tq(khFt, 'ft')})^{2.5}`,
-        flow,
-        'm³/s',
-        'flow',
-        'USBR Water Measurement Manual ch. 7; result in ft³/s converted to m³/s.',
-      ),
-    );
     const khM = fromFeet(khFt);
+    const ks = step(
+      'V-notch discharge (Kindsvater-Shen)',
+      'Q = 4.28\\,C_e\\tan\\tfrac{\\theta}{2}\\,(h_1 + k_h)^{2.5}',
+      sub`Q = 4.28 \\times ${tq(ce)} \\times \\tan ${tq(v.angleDeg / 2)}^{\\circ} \\times (${tq(hFt, 'ft', null)} + ${tq(khFt, 'ft', null)})^{2.5}`,
+      flow,
+      'm³/s',
+      'flow',
+      'USBR Water Measurement Manual ch. 7, its rule in feet and cubic feet a second.',
+    );
+    // 4.28 is 8/15·√(2g) in feet; in metres it is 8/15·√(2 × 9.81) = 2.36, the same rule
+    ks.inSystem = {
+      metric: {
+        formula: 'Q = 2.36\\,C_e\\tan\\tfrac{\\theta}{2}\\,(h_1 + k_h)^{2.5}',
+        substituted: sub`Q = 2.36 \\times ${tq(ce)} \\times \\tan ${tq(v.angleDeg / 2)}^{\\circ} \\times (${tq(v.notchHeadM, 'm', null)} + ${tq(khM, 'm', null)})^{2.5}`,
+        note: 'USBR Water Measurement Manual ch. 7, its rule written in metres and cubic metres a second (4.28 in feet is 8/15·√(2g); in metres, 2.36).',
+      },
+    };
+    steps.push(ks);
     results.weir = { ce, khM };
     if (v.angleDeg === 90) {
       const u = vNotch90Usbr(v.notchHeadM);
       results.weir.usbr90M3s = u;
-      steps.push(
-        step(
-          'Cross-check: USBR 90° equation',
-          'Q = 2.49\\,h_1^{2.48}',
-          sub`Q = 2.49 \\times (${tq(hFt, 'ft')})^{2.48}`,
-          u,
-          'm³/s',
-          'flow',
-        ),
+      const cross = step(
+        'Cross-check: USBR 90° equation',
+        'Q = 2.49\\,h_1^{2.48}',
+        sub`Q = 2.49 \\times (${tq(hFt, 'ft', null)})^{2.48}`,
+        u,
+        'm³/s',
+        'flow',
+        'In feet and cubic feet a second.',
       );
+      // in metres: 2.49 × 0.3048^(3 − 2.48) = 1.34
+      cross.inSystem = {
+        metric: {
+          formula: 'Q = 1.34\\,h_1^{2.48}',
+          substituted: sub`Q = 1.34 \\times (${tq(v.notchHeadM, 'm', null)})^{2.48}`,
+          note: 'In metres and cubic metres a second.',
+        },
+      };
+      steps.push(cross);
     }
     const lim = weirLimits();
     if (v.notchHeadM < lim.minHeadM || v.notchHeadM > lim.maxHeadM) {
@@ -226,7 +241,7 @@ export function measureSourceFlow(input: SourceFlowInput): CalcOutput<SourceFlow
       warnings.push(
         warn(
           'weir-not-fully-contracted',
-          'The pool behind the weir is too shallow or narrow for a fully contracted notch (h/P ≤ 0.4, h/B ≤ 0.2, P ≥ 0.46 m, B ≥ 0.91 m); the reading will run a few per cent low or high.',
+          say`The pool behind the weir is too shallow or narrow for a fully contracted notch (h/P ≤ 0.4, h/B ≤ 0.2, P ≥ ${qty('length', lim.minCrestM)}, B ≥ ${qty('length', lim.minWidthM)}); the reading will run a few per cent low or high.`,
         ),
       );
     }

@@ -5,7 +5,7 @@
  * the page can show it in the reader's units; the TeX around the numbers is
  * KaTeX-ready.
  */
-import type { QuantityKind } from './units';
+import type { QuantityKind, UnitSystem } from './units';
 import type { MessagePart } from './message';
 import { ENGINE_VERSION } from './version';
 import { EngineInputError } from './errors';
@@ -38,6 +38,11 @@ export interface Step {
   result: StepValue;
   /** a reference or a note on the assumption, plain words */
   note?: string;
+  /**
+   * The same rule as one system's reader writes it, where the published rule holds only
+   * in the other system's units (a weir equation in feet): its constant changes with them.
+   */
+  inSystem?: Partial<Record<UnitSystem, { formula: string; substituted: StepPart[]; note?: string }>>;
 }
 
 export type Severity = 'info' | 'caution' | 'danger';

@@ -1,6 +1,6 @@
 /** "Show the working" in the reader's units: the numbers put into each rule and the answer. */
 import { describe, expect, it } from 'vitest';
-import { checkDeliveryLine, estimateYield, siTex, type Step } from '@/lib/hydraulics';
+import { checkDeliveryLine, estimateYield, measureSourceFlow, siTex, type Step } from '@/lib/hydraulics';
 import { step, sub, tq } from '@/lib/hydraulics/steps';
 import { stepAnswer, substitutedTex, workingLines } from '@/lib/calculators/working';
 import { FALL, LIFT, deliveryLine, gpm } from '../hydraulics/fixtures';
@@ -78,5 +78,53 @@ describe('one unit per kind within a step', () => {
     );
     expect(substitutedTex(s, 'US')).toBe('h_p = 29\\,\\mathrm{ft} + 0.03\\,\\mathrm{ft}');
     expect(substitutedTex(s, 'metric')).toBe('h_p = 8.84\\,\\mathrm{m} + 0.00914\\,\\mathrm{m}');
+  });
+});
+
+describe('the hydraulic power rule’s constants in the reader’s system', () => {
+  // 4 ft of fall, 29 ft of lift, about 2 US gal/min of drive (common practice, no source)
+  const out = estimateYield({ driveFlowM3s: gpm(2), fallM: FALL, liftM: LIFT });
+  const power = byTitle(out.steps, 'Hydraulic power in');
+
+  it('US: water at 62.4 lb/ft³ and gravity at 32.2 ft/s², nothing metric', () => {
+    const tex = substitutedTex(power, 'US');
+    // 1,000 kg/m³ = 62.43 lb/ft³; 9.81 m/s² ÷ 0.3048 = 32.19 ft/s² (NIST SP 811, 2008: exact foot and pound)
+    expect(tex).toContain('62.4\\,\\mathrm{lb/ft^{3}}');
+    expect(tex).toContain('32.2\\,\\mathrm{ft/s^{2}}');
+    expect(tex).not.toMatch(/kg|m\/s|\\mathrm\{m/);
+  });
+
+  it('metric: 1,000 kg/m³ and 9.81 m/s² as the rule is written', () => {
+    const tex = substitutedTex(power, 'metric');
+    // water about 1,000 kg/m³, g = 9.81 m/s² (common practice, no source)
+    expect(tex).toContain('1{,}000\\,\\mathrm{kg/m^{3}}');
+    expect(tex).toContain('9.81\\,\\mathrm{m/s^{2}}');
+  });
+});
+
+describe('a 90° V-notch with 0.5 ft of head: the weir rules in each system', () => {
+  // 0.5 ft = 0.1524 m of head (NIST SP 811, 2008, exact foot)
+  const out = measureSourceFlow({ method: 'v-notch', notchHeadM: 0.1524 });
+  const lines = (units: 'US' | 'metric') => workingLines(out.steps, units);
+
+  it('a metric reader gets the rules written in metres, no feet', () => {
+    const text = lines('metric')
+      .map((l) => `${l.formula} ${l.substituted} ${l.note ?? ''}`)
+      .join(' ');
+    expect(text).not.toMatch(/ft/);
+    // 8/15 × √(2 × 9.81) = 2.36 (Bos, Discharge Measurement Structures, 1989: the V-notch rule); 2.49 × 0.3048^0.52 = 1.34 (USBR Water Measurement Manual, 2001)
+    expect(text).toContain('Q = 2.36');
+    expect(text).toContain('Q = 1.34');
+  });
+
+  it('the metric rules give the engine’s flows: USBR 90° at 0.1524 m is 1.34 × 0.1524^2.48', () => {
+    // 1.34 × 0.1524^2.48 = 0.01260 m³/s, within the rounding of the constant (arithmetic from the USBR rule)
+    expect(out.results.weir?.usbr90M3s).toBeCloseTo(1.34 * 0.1524 ** 2.48, 4);
+  });
+
+  it('a US reader keeps the rules as published, in feet', () => {
+    const ks = lines('US').find((l) => l.title.startsWith('V-notch'));
+    expect(ks?.formula).toContain('4.28');
+    expect(ks?.substituted).toContain('0.5\\,\\mathrm{ft}'); // 0.1524 m ÷ 0.3048 = 0.5 ft (NIST SP 811, 2008)
   });
 });
