@@ -7,6 +7,8 @@
 export { CALCULATOR_IDS, isCalculatorId, type CalculatorId } from './ids';
 export {
   defineCalculator,
+  inUnits,
+  type ByUnits,
   type Calculator,
   type CalculatorDef,
   type FieldDef,

@@ -2,6 +2,14 @@ import type * as z from 'zod/mini';
 import type { CalcOutput, QuantityKind, UnitSystem } from '@/lib/hydraulics';
 import type { CalculatorId } from './ids';
 
+/** Words that name quantities, written once for each system's reader. */
+export type ByUnits = Readonly<Record<UnitSystem, string>>;
+
+/** The reader's words from words written once or once per system. */
+export function inUnits(text: string | ByUnits | undefined, units: UnitSystem): string | undefined {
+  return text === undefined || typeof text === 'string' ? text : text[units];
+}
+
 /** One input of a calculator. `name` is the engine's (dotted) field; `prop` the MDX/share-link name. */
 export type FieldDef =
   | {
@@ -10,7 +18,7 @@ export type FieldDef =
       prop: string;
       label: string;
       qty: QuantityKind;
-      help?: string;
+      help?: string | ByUnits;
       units?: readonly string[];
     }
   | {
@@ -18,7 +26,7 @@ export type FieldDef =
       name: string;
       prop: string;
       label: string;
-      help?: string;
+      help?: string | ByUnits;
       min?: number;
       max?: number;
       step?: number;
@@ -29,7 +37,7 @@ export type FieldDef =
       name: string;
       prop: string;
       label: string;
-      help?: string;
+      help?: string | ByUnits;
       options: readonly { value: string; label: string }[];
       /** reads what an MDX prop or share link gives ("3/4 in") into an option value ("3/4") */
       normalize?: (raw: string) => string;
@@ -41,7 +49,7 @@ export type FieldDef =
       name: string;
       prop: string;
       label: string;
-      help?: string;
+      help?: string | ByUnits;
       options: readonly { value: string; label: string }[];
       normalize?: (raw: string) => string;
     }
@@ -50,9 +58,9 @@ export type FieldDef =
       name: string;
       prop: string;
       label: string;
-      help?: string;
+      help?: string | ByUnits;
       /** an example, in each system where it names units */
-      placeholder?: string | Readonly<Record<UnitSystem, string>>;
+      placeholder?: string | ByUnits;
     };
 
 /** What the reader typed: text per field, and the unit picked for quantity fields. */

@@ -9,6 +9,7 @@ import {
   formatMessage,
   formatNumber,
   initialState,
+  inUnits,
   readableQuantity,
   shareQuery,
   verdictFor,
@@ -46,14 +47,9 @@ export function CalculatorCard({
   const { units } = useUnits();
   // every id from useId, so the same calculator twice on one page keeps its labels to itself
   const uid = useId();
+  const defaultsIn = (u: typeof units) => (u === 'metric' ? { ...def.defaults, ...def.metricDefaults } : def.defaults);
   const [state, setState] = useState<FormState>(() =>
-    initialState(
-      def.fields,
-      props,
-      units === 'metric' ? { ...def.defaults, ...def.metricDefaults } : def.defaults,
-      units,
-      openIn,
-    ),
+    initialState(def.fields, props, defaultsIn(units), units, openIn),
   );
   const lastUnits = useRef(units);
   const [copied, setCopied] = useState(false);
@@ -61,10 +57,19 @@ export function CalculatorCard({
   // The site-wide unit switch re-expresses what is in the boxes, so the same quantity shows converted.
   useEffect(() => {
     if (lastUnits.current !== units) {
+      const [from, to] = [defaultsIn(lastUnits.current), defaultsIn(units)];
       lastUnits.current = units;
-      setState((s) => convertState(def.fields, s, units));
+      setState((s) => {
+        const next = convertState(def.fields, s, units);
+        // a worded default in the other system ("5 gal in 42 s") still untouched opens as this system's own
+        for (const f of def.fields)
+          if (f.type === 'text' && s[f.name]?.text === from[f.prop] && to[f.prop] !== undefined)
+            next[f.name] = { ...next[f.name], text: to[f.prop] };
+        return next;
+      });
     }
-  }, [units, def.fields]);
+    // eslint-disable-next-line react-hooks/exhaustive-deps -- defaultsIn reads only def, listed through its parts
+  }, [units, def.fields, def.defaults, def.metricDefaults]);
 
   const outcome = useMemo(() => computeForm(def, state, units), [def, state, units]);
   useEffect(() => {
@@ -232,13 +237,7 @@ function Field({
             className={box}
             aria-invalid={error ? true : undefined}
             aria-describedby={describedBy}
-            placeholder={
-              field.type !== 'text' || field.placeholder === undefined
-                ? undefined
-                : typeof field.placeholder === 'string'
-                  ? field.placeholder
-                  : field.placeholder[units]
-            }
+            placeholder={field.type === 'text' ? inUnits(field.placeholder, units) : undefined}
           />
         )}
         {field.type === 'quantity' ? (
@@ -258,7 +257,7 @@ function Field({
       </div>
       {field.help ? (
         <p id={`${id}-help`} className="cw-muted text-xs">
-          {field.help}
+          {inUnits(field.help, units)}
         </p>
       ) : null}
       {error ? (

@@ -80,7 +80,10 @@ export const demandAndStorage = defineCalculator(planDemandAndStorage, {
       prop: 'perPerson',
       label: 'Water per person a day',
       qty: 'dailyVolume',
-      help: 'About 80 US gal (303 L) in a US home with mains habits (USGS); a frugal off-grid home uses far less.',
+      help: {
+        US: 'About 80 US gal in a US home with mains habits (USGS); a frugal off-grid home uses far less.',
+        metric: 'About 300 L in a US home with mains habits (USGS); a frugal off-grid home uses far less.',
+      },
     },
     { type: 'quantity', name: 'gardenAreaM2', prop: 'garden', label: 'Garden area (optional)', qty: 'area' },
     {
@@ -89,7 +92,10 @@ export const demandAndStorage = defineCalculator(planDemandAndStorage, {
       prop: 'gardenDepth',
       label: 'Garden watering depth per week',
       qty: 'smallLength',
-      help: 'About an inch (25 mm) a week in the growing season (common practice, no source).',
+      help: {
+        US: 'About an inch a week in the growing season (common practice, no source).',
+        metric: 'About 25 mm a week in the growing season (common practice, no source).',
+      },
     },
     ...ANIMALS.map((a): FieldDef => ({
       type: 'number',

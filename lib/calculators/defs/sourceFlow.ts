@@ -77,7 +77,10 @@ export const sourceFlow = defineCalculator(measureSourceFlow, {
       prop: 'crestHeight',
       label: 'Notch height above the pool bed (optional)',
       qty: 'length',
-      help: 'For the check that the pool is deep enough (at least 0.46 m, 1.5 ft).',
+      help: {
+        US: 'For the check that the pool is deep enough (at least 1.5 ft).',
+        metric: 'For the check that the pool is deep enough (at least 0.46 m).',
+      },
     },
     {
       type: 'quantity',
@@ -85,7 +88,10 @@ export const sourceFlow = defineCalculator(measureSourceFlow, {
       prop: 'poolWidth',
       label: 'Pool width behind the weir (optional)',
       qty: 'length',
-      help: 'For the check that the pool is wide enough (at least 0.91 m, 3 ft).',
+      help: {
+        US: 'For the check that the pool is wide enough (at least 3 ft).',
+        metric: 'For the check that the pool is wide enough (at least 0.91 m).',
+      },
     },
     { type: 'quantity', name: 'distanceM', prop: 'distance', label: 'Float run distance', qty: 'length' },
     { type: 'text', name: 'times', prop: 'time', label: 'Float times', placeholder: '8 s, 9 s, 8.5 s' },
