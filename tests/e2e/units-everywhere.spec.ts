@@ -63,18 +63,27 @@ async function visibleBlocks(page: Page): Promise<string[]> {
         }
         case 'msub':
           return `${tex(kids[0])}_(${tex(kids[1])})`;
-        case 'mfrac':
-          return `(${tex(kids[0])})/(${tex(kids[1])})`;
+        case 'mfrac': {
+          // one symbol or number needs no brackets: L/D, as a person types it
+          const side = (k: Element) => {
+            const t = tex(k);
+            return /^[\p{L}\p{N}.,]+$/u.test(t) ? t : `(${t})`;
+          };
+          return `${side(kids[0])}/${side(kids[1])}`;
+        }
         default:
           return kids.map(tex).join(' ');
       }
     };
-    for (const math of document.querySelectorAll('.katex-mathml math')) out.push(tex(math));
+    // a formula in the other system's passage (ForUnits) is hidden with it
+    for (const math of document.querySelectorAll('.katex-mathml math'))
+      if (math.closest('.katex')?.checkVisibility()) out.push(tex(math));
     for (const el of document.querySelectorAll('select, input, textarea')) {
       if (!(el as HTMLElement).checkVisibility()) continue;
       if (el instanceof HTMLSelectElement) out.push(el.selectedOptions[0]?.textContent ?? '');
       else if (el instanceof HTMLInputElement || el instanceof HTMLTextAreaElement) {
-        if (!['checkbox', 'radio', 'hidden', 'password'].includes(el.type)) out.push(el.value);
+        // what the reader typed into search is their own words
+        if (!['checkbox', 'radio', 'hidden', 'password', 'search'].includes(el.type)) out.push(el.value);
         if (el.placeholder) out.push(el.placeholder);
       }
     }

@@ -44,8 +44,11 @@ const E_NOTATION = /(?<![\p{L}\p{N}])\d(?:\.\d+)?e[-+]?\d/giu;
  */
 function isNominalSize(match: string, before: string, after: string): boolean {
   if (/[¼½¾⅛⅜⅝⅞]|\d\/\d/.test(match)) return true;
-  // a whole-inch size named as such: "pump size 1 inch", 'the 1" pump', "2 in pipe"
-  return /\bsize:?\s*$/i.test(before) || /^\s*(?:pumps?|pipes?|drive|delivery|line|fittings?|valves?)\b/i.test(after);
+  // a whole-inch size named as such: "pump size 1 inch", 'the 1" pump', "2 in pipe", "1 inch homemade pumps"
+  return (
+    /\bsize:?\s*$/i.test(before) ||
+    /^[\s-]*(?:[a-z]+\s+)?(?:pumps?|pipes?|drive|delivery|line|fittings?|valves?)\b/i.test(after)
+  );
 }
 
 /**
@@ -58,11 +61,49 @@ const EXPLAINED = [/\(¾", 0\.75 in, 19 mm, DN20\)/];
 const TYPED = /typed [“"][^”"]*[”"]/g;
 
 /**
+ * A member's quantity quoted as written, its reading in the reader's units in brackets
+ * right after it: "stroke 9 mm (0.354 in)". The bracket must hold a number in the reader's
+ * own units for the quantity before it to be excused.
+ */
+const READING_AFTER = /^\s?\((\d[\d.,]*\s?[^()]+)\)/u;
+
+const READINGS = /\s?\(\d[\d.,]*\s?[^()]+\)/gu;
+
+/** A member's quantity at text[i, i + length) followed by its reading, their words once the readings are taken out. */
+function quotedWithReading(text: string, i: number, length: number, system: System): boolean {
+  const end = i + length;
+  const reading = READING_AFTER.exec(text.slice(end));
+  if (!reading || !/\p{L}/u.test(reading[1]) || wrongUnits(reading[1], system).length > 0) return false;
+  const before = text.slice(0, i).replace(READINGS, '');
+  const words = before + text.slice(i, end) + text.slice(end + reading[0].length).replace(READINGS, '');
+  return isMemberWords(words, before.length, length);
+}
+
+/**
+ * A size drawn on its own (a question's pump size at a glance, a pipe size picked in a
+ * select) is the size's name as pipes are sold ("1\"", "2 × 1\""), in both systems.
+ */
+const SIZE_ALONE = /^(?:\d+ × )?\d*[¼½¾⅛⅜⅝⅞]?"$/u;
+
+/**
  * A member's own words are quoted as written (DESIGN.md: we never rewrite a post): the
  * demo posts' titles, bodies, captions and notes. A hit is theirs when the text around it
  * (at least 16 characters, so a bare "4 ft" in a site sheet is never excused) is in one of them.
  */
-const MEMBER_KEYS = new Set(['title', 'body', 'caption', 'alt', 'notes', 'siteName', 'whatChanged', 'changed']);
+const MEMBER_KEYS = new Set([
+  'title',
+  'body',
+  'caption',
+  'alt',
+  'notes',
+  'siteName',
+  'whatChanged',
+  'changed',
+  'driveFlowHow',
+  'wasteValveSetting',
+  // what fixed it, in the asker's words
+  'line',
+]);
 function memberStrings(): string[] {
   const out: string[] = [];
   const walk = (v: unknown, key = '') => {
@@ -87,6 +128,7 @@ function isMemberWords(text: string, index: number, length: number): boolean {
 /** Every unit of the other system, and every e-notation, in one block of text. */
 export function wrongUnits(text: string, system: System): string[] {
   const hits: string[] = [];
+  if (SIZE_ALONE.test(text.trim())) return hits;
   const excused: [number, number][] = [];
   for (const re of [...EXPLAINED.map((r) => new RegExp(r.source, 'g')), TYPED])
     for (const m of text.matchAll(re)) excused.push([m.index, m.index + m[0].length]);
@@ -107,6 +149,7 @@ export function wrongUnits(text: string, system: System): string[] {
       if (system === 'metric' && isNominalSize(m[0], text.slice(Math.max(0, i - 12), i), text.slice(i + m[0].length)))
         continue;
       if (isMemberWords(text, i, m[0].length)) continue;
+      if (m[1] !== undefined && quotedWithReading(text, i, m[0].length, system)) continue;
       report(i, m[0].length);
     }
   }
