@@ -60,3 +60,7 @@ export type PumpType = (typeof PUMP_TYPES)[number];
 /** Pipe materials the engine knows the roughness and wave speed of. */
 export const PIPE_MATERIALS = ['steel', 'galvanized-steel', 'pvc', 'hdpe', 'hose'] as const;
 export type PipeMaterial = (typeof PIPE_MATERIALS)[number];
+
+/** Who may see a site: its owner only, anyone with its link, or anyone (listed on the owner's page). */
+export const SITE_VISIBILITIES = ['private', 'link', 'public'] as const;
+export type SiteVisibility = (typeof SITE_VISIBILITIES)[number];

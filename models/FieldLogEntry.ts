@@ -3,6 +3,7 @@ import {
   DataTypes,
   Model,
   type CreationOptional,
+  type ForeignKey,
   type InferAttributes,
   type InferCreationAttributes,
   type NonAttribute,
@@ -16,6 +17,8 @@ import type { FieldLogTrial } from './FieldLogTrial';
 export class FieldLogEntry extends Model<InferAttributes<FieldLogEntry>, InferCreationAttributes<FieldLogEntry>> {
   declare id: CreationOptional<number>;
   declare authorId: number;
+  /** the site it is about (sites.ts), set by its association */
+  declare siteId?: ForeignKey<number> | null;
   declare siteName: string;
   declare testedOn: string;
   declare pumpType: PumpType;

@@ -33,6 +33,8 @@ export class Question extends Model<InferAttributes<Question>, InferCreationAttr
   declare lockedAt: CreationOptional<Date | null>;
   /** the field log entry the site sheet was filled from, if any */
   declare fieldLogEntryId: CreationOptional<number | null>;
+  /** the site it is about (sites.ts), set by its association */
+  declare siteId?: ForeignKey<number> | null;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 

@@ -24,6 +24,8 @@ export class WorkedCalculation extends Model<
   declare engineVersion: string;
   declare title: string | null;
   declare authorId: ForeignKey<User['id']> | null;
+  /** the site it is about (sites.ts), set by its association */
+  declare siteId?: ForeignKey<number> | null;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 

@@ -8,6 +8,8 @@ import { Answer } from './Answer';
 import { QuestionTag } from './QuestionTag';
 import { SafetyCheck } from './SafetyCheck';
 import { WorkedCalculation } from './WorkedCalculation';
+import { Site } from './Site';
+import { SiteVersion } from './SiteVersion';
 import { AuthToken } from './AuthToken';
 import { ExpertApplication } from './ExpertApplication';
 import { Notice } from './Notice';
@@ -47,6 +49,8 @@ export {
   FieldLogLink,
   TagFollow,
   MailMessage,
+  Site,
+  SiteVersion,
 };
 
 const initialised = new WeakSet<Sequelize>();
@@ -76,6 +80,8 @@ export function initModels(sequelize: Sequelize = getSequelize()) {
     FieldLogLink.initModel(sequelize);
     TagFollow.initModel(sequelize);
     MailMessage.initModel(sequelize);
+    Site.initModel(sequelize);
+    SiteVersion.initModel(sequelize);
 
     Question.belongsTo(User, { as: 'author', foreignKey: 'authorId' });
     User.hasMany(Question, { as: 'questions', foreignKey: 'authorId' });
@@ -97,6 +103,12 @@ export function initModels(sequelize: Sequelize = getSequelize()) {
     AuditEntry.belongsTo(User, { as: 'actor', foreignKey: 'actorId' });
     FieldLogEntry.belongsTo(User, { as: 'author', foreignKey: 'authorId' });
     FieldLogEntry.hasMany(FieldLogTrial, { as: 'trials', foreignKey: 'entryId' });
+    Site.belongsTo(User, { as: 'owner', foreignKey: 'ownerId' });
+    Site.hasMany(SiteVersion, { as: 'versions', foreignKey: 'siteId' });
+    // what was asked, tested or worked out about a site: it stays when the site is deleted (SET NULL)
+    Question.belongsTo(Site, { as: 'site', foreignKey: 'siteId', constraints: false });
+    FieldLogEntry.belongsTo(Site, { as: 'site', foreignKey: 'siteId', constraints: false });
+    WorkedCalculation.belongsTo(Site, { as: 'site', foreignKey: 'siteId', constraints: false });
     initialised.add(sequelize);
   }
   return {
@@ -123,5 +135,7 @@ export function initModels(sequelize: Sequelize = getSequelize()) {
     FieldLogLink,
     TagFollow,
     MailMessage,
+    Site,
+    SiteVersion,
   };
 }

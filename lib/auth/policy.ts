@@ -32,6 +32,14 @@ export const POLICY = {
   'content.read': read(row({ anonymous: true, member: true, expert: true, moderator: true, admin: true })),
   /** save a worked calculation */
   'calculation.save': signedIn(),
+  /** save a planned site (one's installation) */
+  'site.save': signedIn(),
+  /** change one's own site: a new survey version, its name, who may see it; attach a question or test to it */
+  'site.edit': signedIn('own'),
+  /** see a private site: its owner only */
+  'site.readPrivate': read(signedIn('own')),
+  /** see a site shared by link or made public: anyone */
+  'site.readShared': read(row({ anonymous: true, member: true, expert: true, moderator: true, admin: true })),
   /** record a safety check on a guide version: experts only */
   'safetyCheck.record': row({ expert: true }),
   /** ask for expert standing */
@@ -166,6 +174,10 @@ export const MODERATING: Record<Role, Action> = {
 export const REFUSAL: Record<Action, string> = {
   'content.read': 'This is not available.',
   'calculation.save': 'Sign in to save a worked calculation.',
+  'site.save': 'Sign in to save a site.',
+  'site.edit': 'Only its owner can change this site.',
+  'site.readPrivate': 'This site is private.',
+  'site.readShared': 'This is not available.',
   'safetyCheck.record': 'Only experts can record a safety check.',
   'expertApplication.submit': 'Only members who are not yet experts can apply for expert standing.',
   'expertApplication.decide': 'Only moderators can decide expert applications.',
