@@ -73,6 +73,14 @@ describe('a site that works with one pump', () => {
     for (const kind of ['valve', 'gauge', 'union', 'fitting', 'screen', 'vessel'])
       expect(r.parts.some((p) => p.kind === kind)).toBe(true);
   });
+  it('brings water from an intake 40 m away to a standpipe, with a drive pipe of 10 × the fall', () => {
+    const far = planSite({ ...brook, sourceToPumpRunM: 40 });
+    const path = Math.hypot(40, H); // 40.02 m, more than 10 × 1.2192 m
+    expect(far.results.supply?.standpipe).toBe(true);
+    expect(far.results.stages[0]?.drivePipe.lengthM).toBeCloseTo(10 * H, 9);
+    expect(far.results.supply?.supplyPipe?.lengthM).toBeCloseTo(path - 10 * H, 9); // 27.83 m
+    expect(far.warnings.map((w) => w.code)).toContain('plan-standpipe-needed');
+  });
   it('shows the working of each part', () => {
     for (const part of ['Demand', 'Pumps drive pipe', 'Pumps delivery line', 'Delivery', 'Storage'])
       expect(out.steps.some((s) => s.title.startsWith(`${part}: `))).toBe(true);
@@ -134,6 +142,14 @@ describe('a site that cannot work', () => {
     expect(r.verdict.verdict).toBe('wont-work');
     expect(text(r.verdict.reason)).toMatch(/fall of 0\.4 m is at or below the 0\.5 m/);
     expect(r.deliveredM3PerDay).toBe(0);
+  });
+  it('is marginal when it meets the demand with less than a fifth to spare', () => {
+    // one ½" pump at most on 3 gal/min: 3 × 0.208 = 0.62 m³/day (less 1 % of friction) against 0.55, under 1.2 × 0.55 = 0.66
+    const r = planSite({ ...brook, demand: { otherM3PerDay: 0.55 }, largestSize: '1/2', maxPumps: 1 }).results;
+    expect(r.deliveredM3PerDay).toBeGreaterThan(0.55);
+    expect(r.deliveredM3PerDay).toBeLessThan(0.66);
+    expect(r.verdict.verdict).toBe('marginal');
+    expect(text(r.verdict.reason)).toMatch(/less than a fifth to spare/);
   });
   it("is marginal, not won't work, when the design falls short by less than half", () => {
     // one ½" pump at most on 3 gal/min: 3 × 0.208 = 0.62 m³/day against 0.7 m³/day
