@@ -113,3 +113,47 @@ export { measureSourceFlow, sourceFlowSchema, type SourceFlowResults } from './s
 export { planDemandAndStorage, demandAndStorageSchema, type DemandAndStorageResults } from './demandAndStorage';
 export { runStallCheck, stallCheckSchema, type StallCheckInput, type StallCheckResults } from './stallCheck';
 export { STALL_CAUSE_CODES, SYMPTOMS, SYMPTOM_LABELS, type StallCauseCode, type Symptom } from './stallCauses';
+
+// The site plan: from a survey to a verdict, a design and a parts list, chaining the calculators.
+export {
+  DESIGN_MARGIN,
+  choosePump,
+  pumpChoiceSchema,
+  type PumpChoiceInput,
+  type PumpChoiceResults,
+  type PumpSet,
+} from './pumpChoice';
+export {
+  FALL_METHODS,
+  planSite,
+  sitePlanSchema,
+  type SitePlanInput,
+  type SitePlanResults,
+  type SitePlanSurvey,
+  type StageDesign,
+} from './sitePlan';
+export {
+  AIR_CHAMBER_RULE,
+  SCREEN_APPROACH_VELOCITY,
+  SNIFTER_HOLE,
+  SUPPLY_LOSS_SHARE,
+  airChamberVolume,
+  monthlyFlows,
+} from './siteDesign';
+export {
+  MONTHLY_METHOD,
+  VERDICTS,
+  WONT_WORK_SHARE,
+  type MonthlyDelivery,
+  type Verdict,
+  type VerdictWord,
+} from './siteVerdict';
+export {
+  PART_GROUPS,
+  PART_KINDS,
+  PIPE_ALLOWANCE,
+  buildPartsList,
+  type PartGroup,
+  type PartKind,
+  type PartsListItem,
+} from './partsList';

@@ -31,8 +31,15 @@ export interface DriveFlowRange {
   source: string;
 }
 
+/**
+ * Searched for (Dec 2026): a table of drive flow by ram size in an extension bulletin or handbook. The
+ * University of Georgia Cooperative Extension bulletin "Hydraulic Rams for Off-Stream Livestock Watering"
+ * was found but its table could not be read to check; the one table found in a period handbook was a
+ * pump maker's and is not used. Watt (1975) and Jeffery et al. (1992) were not found. So the ranges stay
+ * common practice.
+ */
 export const PUMP_SIZE_SOURCE =
-  'common practice, no published source found; measure the drive flow, or estimate it for the site';
+  'common practice, no published source found (no extension or handbook table of drive flow by size could be verified); measure the drive flow, or estimate it for the site';
 
 let table: Record<NominalSize, DriveFlowRange> | undefined;
 

@@ -76,6 +76,11 @@ const CATALOGUE = {
   // stall check
   'high-water-safety': ['danger', 'care-frost-floods-and-water-rights'],
   'air-chamber-safety': ['danger', 'when-it-stops-cycling'],
+  // site plan
+  'plan-pressure': ['danger', 'first-start-and-tuning'],
+  'plan-water-in-motion': ['danger', 'care-frost-floods-and-water-rights'],
+  'plan-freezes': ['caution', 'care-frost-floods-and-water-rights'],
+  'plan-standpipe-needed': ['info', 'the-drive-pipe'],
 } as const satisfies Record<string, readonly [Severity, GuideSlug]>;
 
 export type WarningCode = keyof typeof CATALOGUE;
@@ -100,6 +105,9 @@ const SAFETY: ReadonlySet<WarningCode> = new Set<WarningCode>([
   'frost-risk',
   'high-water-safety',
   'air-chamber-safety',
+  'plan-pressure',
+  'plan-water-in-motion',
+  'plan-freezes',
 ]);
 
 /**

@@ -13,6 +13,7 @@ import {
   measureSourceFlow,
   planArray,
   planDemandAndStorage,
+  planSite,
   resolvePipe,
   runStallCheck,
   toSI,
@@ -184,6 +185,19 @@ describe('warning codes', () => {
         symptoms: ['hammering'],
       }),
     ); // high-water-safety, air-chamber-safety
+
+    // site plan: a freezing site whose intake is 40 m from the pump (more than 10 × the 1.22 m fall)
+    collect(
+      planSite({
+        fallM: FALL,
+        liftM: LIFT,
+        spareFlowM3s: gpm(10),
+        sourceToPumpRunM: 40,
+        pumpToTankRunM: 60,
+        demand: { people: 1 },
+        freezes: true,
+      }),
+    ); // plan-pressure, plan-water-in-motion, plan-freezes, plan-standpipe-needed
 
     const missing = WARNING_CODES.filter((c) => !produced.has(c));
     expect(missing).toEqual([]);

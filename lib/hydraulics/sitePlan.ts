@@ -1,0 +1,319 @@
+/**
+ * Site plan: from a survey to a verdict, a design and a parts list. It
+ * chains the calculators (demand and storage, pump choice, drive pipe check,
+ * delivery line, array planner) and adds only what none of them gives
+ * (siteDesign.ts); its working is theirs, each step titled with its part.
+ */
+import * as z from 'zod/mini';
+import { arrayPlannerSchema, planArray, type ArrayPlannerResults } from './arrayPlanner';
+import { demandAndStorageSchema, planDemandAndStorage, type DemandAndStorageResults } from './demandAndStorage';
+import { PUMP_TYPES } from './efficiency';
+import { qty, say } from './message';
+import { NOMINAL_SIZES } from './pipes';
+import { choosePump, type PumpChoiceResults } from './pumpChoice';
+import { PRACTICE, fallRarelyViable } from './practice';
+import { addRangeIssue, fallM, flowM3s, liftM, parseInput, siNumber, waterTempC } from './schemaKit';
+import {
+  AIR_CHAMBER_RULE,
+  SNIFTER_HOLE,
+  airChamberVolume,
+  designDeliveryLine,
+  designDrivePipe,
+  designSupply,
+  type DeliveryDesign,
+  type DrivePipeDesign,
+  type SupplyDesign,
+} from './siteDesign';
+import { finish, type CalcOutput, type Step, type Warning } from './steps';
+import { monthlyDelivery, siteCautions, verdictFor, type MonthlyDelivery, type Verdict } from './siteVerdict';
+import { buildPartsList, type PartsListItem } from './partsList';
+
+export const FALL_METHODS = ['level-and-staff', 'hose-level', 'pressure-gauge', 'gps-or-map', 'other'] as const;
+
+const demandFields = z.pick(demandAndStorageSchema, {
+  people: true,
+  perPersonM3PerDay: true,
+  gardenAreaM2: true,
+  livestock: true,
+  otherM3PerDay: true,
+});
+
+export const sitePlanSchema = z
+  .object({
+    fallM: fallM(),
+    fallMethod: z._default(z.enum(FALL_METHODS), 'other'),
+    /** flow the source can spare in the driest month, m³/s */
+    spareFlowM3s: flowM3s(),
+    /** flow it can spare in the wettest month, m³/s (for the month-by-month delivery) */
+    wetFlowM3s: z.optional(flowM3s()),
+    driestMonth: z._default(siNumber({ min: 1, max: 12, unit: '', integer: true }), 8),
+    liftM: liftM(),
+    /** horizontal run from the intake to the pump, m */
+    sourceToPumpRunM: siNumber({ min: 0, max: 2000, unit: 'm' }),
+    /** horizontal run from the pump to the tank, m */
+    pumpToTankRunM: siNumber({ min: 0, max: 10000, unit: 'm' }),
+    demand: demandFields,
+    freezes: z._default(z.boolean(), false),
+    drinkingWater: z._default(z.boolean(), false),
+    reserveDays: z._default(siNumber({ min: 0, max: 60, unit: 'day' }), 3),
+    /** delivery-line friction accepted, as a share of the lift */
+    deliveryLossShare: z._default(siNumber({ min: 0.01, max: 0.5, unit: '' }), PRACTICE.deliveryLossShare.value),
+    pumpType: z._default(z.enum(PUMP_TYPES), 'homemade'),
+    largestSize: z._default(z.enum(NOMINAL_SIZES), '4'),
+    maxPumps: z._default(siNumber({ min: 1, max: 20, unit: '', integer: true }), 6),
+    waterTempC: waterTempC(),
+  })
+  .check(
+    z.superRefine((v, ctx) => {
+      if (v.liftM <= v.fallM)
+        addRangeIssue(ctx, ['liftM'], say`must be greater than the fall (${qty('length', v.fallM)})`, {
+          min: v.fallM,
+          minExclusive: true,
+          max: 1000,
+          unit: 'm',
+        });
+      if (v.wetFlowM3s !== undefined && v.wetFlowM3s < v.spareFlowM3s)
+        addRangeIssue(ctx, ['wetFlowM3s'], say`must be at least the driest month's ${qty('flow', v.spareFlowM3s)}`, {
+          min: v.spareFlowM3s,
+          max: 0.1,
+          unit: 'm³/s',
+        });
+      const d = v.demand;
+      if (d.people === 0 && d.gardenAreaM2 === 0 && d.otherM3PerDay === 0 && d.livestock.every((a) => a.count === 0))
+        ctx.addIssue({
+          code: 'custom',
+          path: ['demand'],
+          message: 'needs at least one use: people, animals, a garden or other',
+        });
+    }),
+  );
+
+export type SitePlanInput = z.input<typeof sitePlanSchema>;
+export type SitePlanSurvey = z.output<typeof sitePlanSchema>;
+
+export interface StageDesign {
+  stage: 'source' | 'upper';
+  drivePipe: DrivePipeDesign['check']['results'] & {
+    nominal: DrivePipeDesign['nominal'];
+    series: DrivePipeDesign['series'];
+    lengthM: number;
+    pathM: number;
+  };
+  deliveryLine: {
+    nominal: DeliveryDesign['nominal'];
+    series: DeliveryDesign['series'];
+    lengthM: number;
+    lossM: number;
+    pressureRatingPa: number;
+    pumpPressurePa: number;
+  };
+  airChamberM3: number;
+}
+
+export interface SitePlanResults {
+  verdict: Verdict;
+  demandM3PerDay: number;
+  /** what the design delivers each day at the top */
+  deliveredM3PerDay: number;
+  pump: PumpChoiceResults;
+  stages: StageDesign[];
+  supply: SupplyDesign | null;
+  airChamberRule: string;
+  snifterHoleM: number;
+  snifterSource: string;
+  fittingsToAvoid: string[];
+  storage: DemandAndStorageResults | null;
+  array: ArrayPlannerResults | null;
+  monthly: MonthlyDelivery | null;
+  parts: PartsListItem[];
+}
+
+const FITTINGS_TO_AVOID = [
+  'elbows, bends and tees anywhere in the drive pipe: lay it straight',
+  'reducers in the drive pipe: one bore from intake to pump',
+  'a valve in the drive pipe left part-closed: the isolating valve runs fully open',
+  'hose or polyethylene for the drive pipe: it soaks up the beat',
+  'threaded joints in schedule 40 PVC at the pump',
+];
+
+const titled = (part: string, steps: Step[]) => steps.map((s) => ({ ...s, title: `${part}: ${s.title}` }));
+
+/**
+ * Plans a site from its survey.
+ *
+ * Formulas: as the calculators it chains: demand (planDemandAndStorage), pump size and arrangement
+ * (choosePump), drive pipe length 5–10 × fall and its surge (designDrivePipe → checkDrivePipe), the
+ * delivery line within the accepted loss (designDeliveryLine → checkDeliveryLine), delivery with both
+ * lines' losses (planArray), storage for the reserve days, the supply and screen (designSupply).
+ * Units: SI. Range: as the schema.
+ * Reference: the calculators' own; verdict rules siteVerdict.ts.
+ * @example the smallholding's brook: 4 ft fall, 10 US gal/min spare, 29 ft lift, one person
+ * const demand = { people: 1, perPersonM3PerDay: 0.1 }
+ * const r = planSite({ fallM: 1.2192, spareFlowM3s: toSI(10, 'gal/min', 'flow'), liftM: 8.8392, sourceToPumpRunM: 9, pumpToTankRunM: 60, demand }).results
+ * r.pump.arrangement  // → 'single'
+ * r.demandM3PerDay  // ≈ 0.1
+ * r.verdict.verdict  // → 'works'
+ */
+export function planSite(input: SitePlanInput): CalcOutput<SitePlanResults> {
+  const v = parseInput(sitePlanSchema, input);
+  const steps: Step[] = [];
+  const warnings: Warning[] = [];
+  const demandOnly = planDemandAndStorage({
+    deliveredFlowM3s: v.spareFlowM3s,
+    ...v.demand,
+    reserveDays: v.reserveDays,
+  });
+  const demand = demandOnly.results.totalDemandM3PerDay;
+  steps.push(
+    ...titled(
+      'Demand',
+      demandOnly.steps.filter((s) => !/^Delivered|^Surplus|^Time/.test(s.title)),
+    ),
+  );
+
+  const pump = choosePump({
+    fallM: v.fallM,
+    liftM: v.liftM,
+    spareFlowM3s: v.spareFlowM3s,
+    demandM3PerDay: demand,
+    pumpType: v.pumpType,
+    deliveryLossShare: v.deliveryLossShare,
+    maxPumps: v.maxPumps,
+    largestSize: v.largestSize,
+  });
+  const stages: StageDesign[] = [];
+  let supply: SupplyDesign | null = null;
+  let array: ArrayPlannerResults | null = null;
+  let storage: DemandAndStorageResults | null = null;
+  let delivered = 0;
+  const lower = pump.pumps;
+
+  if (lower && !fallRarelyViable(v.fallM)) {
+    const staged = pump.upper;
+    // the lower stage lifts to the stage tank, partway up the run in proportion to its height
+    const lowerLift = staged ? staged.tankHeightM : v.liftM;
+    const lowerRun = staged ? (v.pumpToTankRunM * staged.tankHeightM) / v.liftM : v.pumpToTankRunM;
+    const drive = designDrivePipe(v.fallM, v.sourceToPumpRunM, lower.size, lowerLift, lower.driveFlowEachM3s);
+    const line = designDeliveryLine(
+      lower.deliveredM3PerDay / 86400,
+      lowerLift,
+      lowerRun,
+      v.deliveryLossShare,
+      v.freezes,
+    );
+    supply = designSupply(lower.totalDriveFlowM3s, v.fallM, drive.supplyLengthM);
+    const stage = (which: StageDesign['stage'], d: DrivePipeDesign, l: DeliveryDesign): StageDesign => ({
+      stage: which,
+      drivePipe: { ...d.check.results, nominal: d.nominal, series: d.series, lengthM: d.lengthM, pathM: d.pathM },
+      deliveryLine: {
+        nominal: l.nominal,
+        series: l.series,
+        lengthM: l.lengthM,
+        lossM: l.check.results.frictionHeadM + l.check.results.minorHeadM,
+        pressureRatingPa: l.spec.pressureRatingPa,
+        pumpPressurePa: l.check.results.pumpPressurePa,
+      },
+      airChamberM3: airChamberVolume(l.spec.insideDiameterM, l.lengthM),
+    });
+    stages.push(stage('source', drive, line));
+    const part = staged ? 'Lower stage' : 'Pumps';
+    steps.push(
+      ...titled(`${part} drive pipe`, drive.check.steps),
+      ...titled(`${part} delivery line`, line.check.steps),
+    );
+    warnings.push(...drive.check.warnings, ...line.check.warnings);
+    const pipeOf = (d: DrivePipeDesign) => ({
+      lengthM: d.lengthM,
+      insideDiameterM: d.spec.insideDiameterM,
+      wallThicknessM: d.spec.wallThicknessM,
+      pressureRatingPa: d.spec.pressureRatingPa,
+      material: d.spec.material,
+    });
+    const lineOf = (l: DeliveryDesign) => ({
+      lengthM: l.lengthM,
+      insideDiameterM: l.spec.insideDiameterM,
+      pressureRatingPa: l.spec.pressureRatingPa,
+      material: l.spec.material,
+    });
+    const arrayInput: z.input<typeof arrayPlannerSchema> = {
+      fallM: v.fallM,
+      liftM: lowerLift,
+      pumps: Array.from({ length: lower.count }, (_, i) => ({
+        label: `pump ${i + 1}`,
+        pumpType: v.pumpType,
+        driveFlowM3s: lower.driveFlowEachM3s,
+        drivePipe: pipeOf(drive),
+      })),
+      deliveryLine: lineOf(line),
+      sourceSpareFlowM3s: v.spareFlowM3s,
+      waterTempC: v.waterTempC,
+    };
+    if (staged) {
+      const upperRun = (v.pumpToTankRunM * staged.tankHeightM) / v.liftM;
+      const upDrive = designDrivePipe(staged.fallM, upperRun, staged.size, v.liftM, staged.driveFlowEachM3s);
+      const upLine = designDeliveryLine(
+        staged.deliveredM3PerDay / 86400,
+        v.liftM,
+        v.pumpToTankRunM,
+        v.deliveryLossShare,
+        v.freezes,
+      );
+      stages.push(stage('upper', upDrive, upLine));
+      steps.push(
+        ...titled('Upper stage drive pipe', upDrive.check.steps),
+        ...titled('Upper stage delivery line', upLine.check.steps),
+      );
+      warnings.push(...upDrive.check.warnings, ...upLine.check.warnings);
+      arrayInput.staged = {
+        upperFallM: staged.fallM,
+        upperLiftM: v.liftM,
+        upperPump: {
+          label: 'upper pump',
+          pumpType: v.pumpType,
+          driveFlowM3s: staged.driveFlowEachM3s,
+          drivePipe: pipeOf(upDrive),
+        },
+        upperDeliveryLine: lineOf(upLine),
+      };
+    }
+    const planned = planArray(arrayInput);
+    array = planned.results;
+    steps.push(...titled('Delivery', planned.steps));
+    warnings.push(...planned.warnings);
+    delivered = staged ? (array.staged?.topYieldPerDayM3PerDay ?? 0) : array.combinedPerDayM3PerDay;
+    if (delivered > 0) {
+      const st = planDemandAndStorage({ deliveredFlowM3s: delivered / 86400, ...v.demand, reserveDays: v.reserveDays });
+      storage = st.results;
+      steps.push(
+        ...titled(
+          'Storage',
+          st.steps.filter((s) => !/^Household|^Garden|^Livestock|^Total demand/.test(s.title)),
+        ),
+      );
+      warnings.push(...st.warnings);
+    }
+  }
+
+  const verdict = verdictFor(v, pump, demand, delivered);
+  warnings.push(...siteCautions(v, stages, supply, array));
+  const seen = new Set<string>();
+  const unique = warnings.filter((w) => (seen.has(w.code + w.message) ? false : (seen.add(w.code + w.message), true)));
+  const monthly = v.wetFlowM3s !== undefined && array ? monthlyDelivery(v, pump, delivered, demand) : null;
+  const results: SitePlanResults = {
+    verdict,
+    demandM3PerDay: demand,
+    deliveredM3PerDay: delivered,
+    pump,
+    stages,
+    supply,
+    airChamberRule: AIR_CHAMBER_RULE.source,
+    snifterHoleM: SNIFTER_HOLE.diameterM,
+    snifterSource: SNIFTER_HOLE.source,
+    fittingsToAvoid: FITTINGS_TO_AVOID,
+    storage,
+    array,
+    monthly,
+    parts: buildPartsList({ survey: v, pump, stages, supply, storage }),
+  };
+  return finish(results, steps, unique);
+}
