@@ -9,7 +9,7 @@ import { initialState, readForm } from './state';
 import type { CalculatorDef, FormState } from './types';
 
 /** The fields a form shows in this state (e.g. the staged pump's only when staged). */
-export function visibleFields<R>(def: CalculatorDef<R>, state: FormState) {
+export function visibleFields<R>(def: CalculatorDef<R, string>, state: FormState) {
   return def.visible ? def.fields.filter((f) => def.visible!(f.name, state)) : def.fields;
 }
 
@@ -32,7 +32,7 @@ export function issueMessage(issue: FieldIssue, units?: UnitSystem): string {
  * engine complaint beside the field it names (the rest go in `general`), its numbers
  * in the reader's units when `units` is given.
  */
-export function computeForm<R>(def: CalculatorDef<R>, state: FormState, units?: UnitSystem): FormOutcome<R> {
+export function computeForm<R>(def: CalculatorDef<R, string>, state: FormState, units?: UnitSystem): FormOutcome<R> {
   const { values, errors } = readForm(visibleFields(def, state), state);
   if (Object.keys(errors).length > 0) return { ok: false, fieldErrors: errors };
   try {
@@ -62,7 +62,7 @@ export type Recomputed<R = unknown> =
  * a stored result is always the engine's, never the browser's. The first refusal
  * names the field by its form name (`prop`) and label, its numbers in `units` when given.
  */
-export function recompute<R>(def: CalculatorDef<R>, form: Record<string, string>, units?: UnitSystem): Recomputed<R> {
+export function recompute<R>(def: CalculatorDef<R, string>, form: Record<string, string>, units?: UnitSystem): Recomputed<R> {
   const state = initialState(def.fields, form, def.defaults, DEFAULT_UNITS, 'none');
   const { values, errors } = readForm(visibleFields(def, state), state);
   const firstError = Object.entries(errors)[0];

@@ -88,7 +88,7 @@ export interface ResultRow {
  * type then stands in for `Calculator` (results `unknown`) without a cast, and
  * `rows` is only ever handed what the same definition's `run` returned.
  */
-export interface CalculatorDef<R = unknown, Id extends CalculatorId = CalculatorId> {
+export interface CalculatorDef<R = unknown, Id extends string = CalculatorId> {
   readonly id: Id;
   /** as the site lists it and as the card's heading */
   readonly name: string;
@@ -129,7 +129,7 @@ export type Calculator = CalculatorDef<unknown>;
  * EngineInputError naming the field, so what a form produced may go in unchecked:
  * the engine function's typed parameter is for callers who build an input by hand.
  */
-export function defineCalculator<I, R, const Id extends CalculatorId>(
+export function defineCalculator<I, R, const Id extends string>(
   engine: (input: I) => CalcOutput<R>,
   def: Omit<CalculatorDef<R, Id>, 'run'>,
 ): CalculatorDef<R, Id> {

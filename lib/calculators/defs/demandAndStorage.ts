@@ -13,7 +13,7 @@ import {
 import { defineCalculator, type FieldDef, type FormState } from '../types';
 
 /** MDX prop → livestock kind; chickens are counted per bird and the table is per 100 birds. */
-const ANIMALS: { prop: string; kind: LivestockKind; label: string; perHundred?: boolean }[] = [
+export const ANIMALS: { prop: string; kind: LivestockKind; label: string; perHundred?: boolean }[] = [
   { prop: 'sheep', kind: 'sheep', label: 'Sheep' },
   { prop: 'goats', kind: 'goat', label: 'Goats' },
   { prop: 'beefCattle', kind: 'beef-cow', label: 'Beef cattle' },
