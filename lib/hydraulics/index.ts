@@ -123,15 +123,8 @@ export {
   type PumpChoiceResults,
   type PumpSet,
 } from './pumpChoice';
-export {
-  FALL_METHODS,
-  planSite,
-  sitePlanSchema,
-  type SitePlanInput,
-  type SitePlanResults,
-  type SitePlanSurvey,
-  type StageDesign,
-} from './sitePlan';
+export { planSite, type SitePlanResults, type StageDesign } from './sitePlan';
+export { FALL_METHODS, sitePlanSchema, type SitePlanInput, type SitePlanSurvey } from './siteSurvey';
 export {
   AIR_CHAMBER_RULE,
   SCREEN_APPROACH_VELOCITY,

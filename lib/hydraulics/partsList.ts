@@ -7,7 +7,8 @@ import type { DemandAndStorageResults } from './demandAndStorage';
 import { NOMINAL_SIZES, type NominalSize, type PipeSeries } from './pipes';
 import type { PumpChoiceResults, PumpSet } from './pumpChoice';
 import { SNIFTER_HOLE, type SupplyDesign } from './siteDesign';
-import type { SitePlanSurvey, StageDesign } from './sitePlan';
+import type { StageDesign } from './sitePlan';
+import type { SitePlanSurvey } from './siteSurvey';
 
 export const PART_KINDS = ['pipe', 'fitting', 'valve', 'gauge', 'union', 'tank', 'screen', 'vessel'] as const;
 export type PartKind = (typeof PART_KINDS)[number];

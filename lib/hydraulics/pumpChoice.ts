@@ -15,7 +15,7 @@ import * as z from 'zod/mini';
 import { PUMP_TYPES, efficiencyBand, maxLiftRatio, type PumpType } from './efficiency';
 import { qty, say, type MessagePart } from './message';
 import { NOMINAL_LABELS, NOMINAL_SIZES, type NominalSize } from './pipes';
-import { PRACTICE } from './practice';
+import { PRACTICE, fallRarelyViable } from './practice';
 import { PUMP_SIZE_SOURCE, typicalDriveFlow } from './pumpSizes';
 import { fallM, flowM3s, liftM, parseInput, siNumber, addRangeIssue } from './schemaKit';
 
@@ -206,6 +206,10 @@ export function choosePump(input: PumpChoiceInput): PumpChoiceResults {
     nextSizeDown: [],
     driveFlowSource: PUMP_SIZE_SOURCE,
   });
+  if (fallRarelyViable(H))
+    return none(
+      say`A fall of ${qty('length', H)} is at or below the ${qty('length', PRACTICE.minFallM.value)} a ram needs to beat reliably (${PRACTICE.minFallM.source}).`,
+    );
   const smallest = typicalDriveFlow('1/2').lowM3s;
   if (v.spareFlowM3s < smallest)
     return none(

@@ -6,13 +6,9 @@
  */
 import * as z from 'zod/mini';
 import { arrayPlannerSchema, planArray, type ArrayPlannerResults } from './arrayPlanner';
-import { demandAndStorageSchema, planDemandAndStorage, type DemandAndStorageResults } from './demandAndStorage';
-import { PUMP_TYPES } from './efficiency';
-import { qty, say } from './message';
-import { NOMINAL_SIZES } from './pipes';
+import { planDemandAndStorage, type DemandAndStorageResults } from './demandAndStorage';
 import { choosePump, type PumpChoiceResults } from './pumpChoice';
-import { PRACTICE, fallRarelyViable } from './practice';
-import { addRangeIssue, fallM, flowM3s, liftM, parseInput, siNumber, waterTempC } from './schemaKit';
+import { parseInput } from './schemaKit';
 import {
   AIR_CHAMBER_RULE,
   SNIFTER_HOLE,
@@ -27,69 +23,7 @@ import {
 import { finish, type CalcOutput, type Step, type Warning } from './steps';
 import { monthlyDelivery, siteCautions, verdictFor, type MonthlyDelivery, type Verdict } from './siteVerdict';
 import { buildPartsList, type PartsListItem } from './partsList';
-
-export const FALL_METHODS = ['level-and-staff', 'hose-level', 'pressure-gauge', 'gps-or-map', 'other'] as const;
-
-const demandFields = z.pick(demandAndStorageSchema, {
-  people: true,
-  perPersonM3PerDay: true,
-  gardenAreaM2: true,
-  livestock: true,
-  otherM3PerDay: true,
-});
-
-export const sitePlanSchema = z
-  .object({
-    fallM: fallM(),
-    fallMethod: z._default(z.enum(FALL_METHODS), 'other'),
-    /** flow the source can spare in the driest month, m³/s */
-    spareFlowM3s: flowM3s(),
-    /** flow it can spare in the wettest month, m³/s (for the month-by-month delivery) */
-    wetFlowM3s: z.optional(flowM3s()),
-    driestMonth: z._default(siNumber({ min: 1, max: 12, unit: '', integer: true }), 8),
-    liftM: liftM(),
-    /** horizontal run from the intake to the pump, m */
-    sourceToPumpRunM: siNumber({ min: 0, max: 2000, unit: 'm' }),
-    /** horizontal run from the pump to the tank, m */
-    pumpToTankRunM: siNumber({ min: 0, max: 10000, unit: 'm' }),
-    demand: demandFields,
-    freezes: z._default(z.boolean(), false),
-    drinkingWater: z._default(z.boolean(), false),
-    reserveDays: z._default(siNumber({ min: 0, max: 60, unit: 'day' }), 3),
-    /** delivery-line friction accepted, as a share of the lift */
-    deliveryLossShare: z._default(siNumber({ min: 0.01, max: 0.5, unit: '' }), PRACTICE.deliveryLossShare.value),
-    pumpType: z._default(z.enum(PUMP_TYPES), 'homemade'),
-    largestSize: z._default(z.enum(NOMINAL_SIZES), '4'),
-    maxPumps: z._default(siNumber({ min: 1, max: 20, unit: '', integer: true }), 6),
-    waterTempC: waterTempC(),
-  })
-  .check(
-    z.superRefine((v, ctx) => {
-      if (v.liftM <= v.fallM)
-        addRangeIssue(ctx, ['liftM'], say`must be greater than the fall (${qty('length', v.fallM)})`, {
-          min: v.fallM,
-          minExclusive: true,
-          max: 1000,
-          unit: 'm',
-        });
-      if (v.wetFlowM3s !== undefined && v.wetFlowM3s < v.spareFlowM3s)
-        addRangeIssue(ctx, ['wetFlowM3s'], say`must be at least the driest month's ${qty('flow', v.spareFlowM3s)}`, {
-          min: v.spareFlowM3s,
-          max: 0.1,
-          unit: 'm³/s',
-        });
-      const d = v.demand;
-      if (d.people === 0 && d.gardenAreaM2 === 0 && d.otherM3PerDay === 0 && d.livestock.every((a) => a.count === 0))
-        ctx.addIssue({
-          code: 'custom',
-          path: ['demand'],
-          message: 'needs at least one use: people, animals, a garden or other',
-        });
-    }),
-  );
-
-export type SitePlanInput = z.input<typeof sitePlanSchema>;
-export type SitePlanSurvey = z.output<typeof sitePlanSchema>;
+import { sitePlanSchema, type SitePlanInput, type SitePlanSurvey } from './siteSurvey';
 
 export interface StageDesign {
   stage: 'source' | 'upper';
@@ -111,6 +45,8 @@ export interface StageDesign {
 }
 
 export interface SitePlanResults {
+  /** the survey as read, defaults filled: what a saved site keeps */
+  survey: SitePlanSurvey;
   verdict: Verdict;
   demandM3PerDay: number;
   /** what the design delivers each day at the top */
@@ -188,7 +124,7 @@ export function planSite(input: SitePlanInput): CalcOutput<SitePlanResults> {
   let delivered = 0;
   const lower = pump.pumps;
 
-  if (lower && !fallRarelyViable(v.fallM)) {
+  if (lower) {
     const staged = pump.upper;
     // the lower stage lifts to the stage tank, partway up the run in proportion to its height
     const lowerLift = staged ? staged.tankHeightM : v.liftM;
@@ -296,10 +232,14 @@ export function planSite(input: SitePlanInput): CalcOutput<SitePlanResults> {
 
   const verdict = verdictFor(v, pump, demand, delivered);
   warnings.push(...siteCautions(v, stages, supply, array));
-  const seen = new Set<string>();
-  const unique = warnings.filter((w) => (seen.has(w.code + w.message) ? false : (seen.add(w.code + w.message), true)));
+  // the plan sizes lines by Darcy-Weisbach, so the Hazen-Williams aside would only be noise here
+  const seen = new Set<string>(['hazen-williams-outside-range']);
+  const unique = warnings.filter((w) =>
+    seen.has(w.code) || seen.has(w.code + w.message) ? false : (seen.add(w.code + w.message), true),
+  );
   const monthly = v.wetFlowM3s !== undefined && array ? monthlyDelivery(v, pump, delivered, demand) : null;
   const results: SitePlanResults = {
+    survey: v,
     verdict,
     demandM3PerDay: demand,
     deliveredM3PerDay: delivered,
