@@ -47,6 +47,17 @@ export default async function HomePage() {
           and the builders who help them work out whether a ram will do, build it, tune it and keep it beating.
         </p>
       </section>
+      <Link
+        href="/plan"
+        className="cw-card flex flex-col gap-1 border-2 border-clay-600 no-underline hover:border-clay-700 dark:border-clay-300"
+        data-testid="plan-a-site"
+      >
+        <h2 className="font-serif text-2xl font-semibold text-clay-700 dark:text-clay-200">Plan a site</h2>
+        <p className="text-sm">
+          Your fall, flow, lift and what the water is for: whether a ram works there, what to build and the parts to
+          buy, on one page you can print for the creek.
+        </p>
+      </Link>
       <section className="grid gap-3 sm:grid-cols-2">
         {PATHS.map((p) => (
           <Link key={p.href} href={p.href} className="cw-card block no-underline hover:border-clay">

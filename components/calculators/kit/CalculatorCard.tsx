@@ -156,7 +156,7 @@ const TARGET = 'cw-link inline-flex min-h-6 min-w-6 items-center';
 /** Rows the engine cannot vouch for: a dashed clay edge, and none of the calm fill a trusted result sits in. */
 const BEYOND_ROWS = 'rounded-md border-2 border-dashed border-clay-700 p-2 dark:border-clay-300 [&>div]:bg-transparent';
 
-function Field({
+export function Field({
   id,
   field,
   state,

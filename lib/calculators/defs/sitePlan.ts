@@ -191,7 +191,10 @@ export const sitePlanner = defineCalculator(planSite, {
     const animals = (v.animal ?? {}) as Record<string, unknown>;
     const demand = (v.demand ?? {}) as Record<string, unknown>;
     const conditions = (v.conditions ?? []) as string[];
-    const { animal: _a, conditions: _c, demand: _d, driestMonth, ...rest } = v;
+    const rest = Object.fromEntries(
+      Object.entries(v).filter(([k]) => !['animal', 'conditions', 'demand', 'driestMonth'].includes(k)),
+    );
+    const driestMonth = v.driestMonth;
     return {
       ...rest,
       ...(driestMonth !== undefined ? { driestMonth: Number(driestMonth) } : {}),
