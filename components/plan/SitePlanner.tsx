@@ -60,10 +60,23 @@ export function SitePlanner({ props }: { props: Record<string, string | undefine
   const set = (name: string, patch: Partial<{ text: string; unit: string }>) =>
     setState((s) => ({ ...s, [name]: { ...s[name], ...patch } as FormState[string] }));
 
+  const failed = outcome.ok ? null : (
+    <p
+      className="rounded-md border border-signal bg-signal-100 p-3 font-sans text-sm text-creek-900 dark:bg-signal-900 dark:text-signal-100"
+      role="status"
+    >
+      {outcome.general ?? 'Fix the fields marked in amber to see the plan.'}
+    </p>
+  );
+  // On a phone the verdict comes first, above the survey it answers; on a wide screen it
+  // heads the right-hand column beside the survey.
   return (
     <div className="grid gap-6 lg:grid-cols-[minmax(0,22rem)_minmax(0,1fr)]">
+      <div className="min-w-0 lg:col-start-2 lg:row-start-1" aria-live="polite">
+        {outcome.ok ? <PlanVerdict verdict={outcome.output.results.verdict} /> : failed}
+      </div>
       <form
-        className="flex min-w-0 flex-col gap-5 font-sans"
+        className="flex min-w-0 flex-col gap-5 font-sans lg:col-start-1 lg:row-span-2 lg:row-start-1"
         aria-label="Your survey"
         onSubmit={(e) => e.preventDefault()}
         data-print-hide
@@ -89,19 +102,39 @@ export function SitePlanner({ props }: { props: Record<string, string | undefine
           </fieldset>
         ))}
       </form>
-      <div className="flex min-w-0 flex-col gap-5" aria-live="polite" data-testid="plan">
-        {outcome.ok ? (
-          <Plan results={outcome.output.results} output={outcome.output} query={query} />
-        ) : (
-          <p
-            className="rounded-md border border-signal bg-signal-100 p-3 font-sans text-sm text-creek-900 dark:bg-signal-900 dark:text-signal-100"
-            role="status"
-          >
-            {outcome.general ?? 'Fix the fields marked in amber to see the plan.'}
-          </p>
-        )}
+      <div className="flex min-w-0 flex-col gap-5 lg:col-start-2 lg:row-start-2" data-testid="plan">
+        {outcome.ok ? <Plan results={outcome.output.results} output={outcome.output} query={query} /> : null}
       </div>
     </div>
+  );
+}
+
+function PlanVerdict({ verdict }: { verdict: SitePlanResults['verdict'] }) {
+  const { units } = useUnits();
+  const look = LOOK[verdict.verdict];
+  return (
+    <section
+      aria-labelledby="plan-verdict"
+      className={`rounded-md p-4 font-sans ${look.box}`}
+      data-testid="plan-verdict"
+      data-verdict={verdict.verdict}
+    >
+      <h2 id="plan-verdict" className="text-2xl font-semibold">
+        <span aria-hidden="true">{look.symbol} </span>
+        {VERDICT_WORDS[verdict.verdict]}
+      </h2>
+      <p className="mt-1">{formatMessage({ message: '', parts: verdict.reason }, units)}</p>
+      {verdict.wouldChange.length ? (
+        <>
+          <h3 className="mt-3 text-sm font-semibold uppercase tracking-wide">What would change it</h3>
+          <ul className="mt-1 list-disc pl-5 text-sm">
+            {verdict.wouldChange.map((w, i) => (
+              <li key={i}>{formatMessage({ message: '', parts: w }, units)}</li>
+            ))}
+          </ul>
+        </>
+      ) : null}
+    </section>
   );
 }
 
@@ -115,34 +148,10 @@ function Plan({
   query: string;
 }) {
   const { units } = useUnits();
-  const look = LOOK[r.verdict.verdict];
   const sections = designSections(r, units);
   const rows = partRows(r.parts, units);
   return (
     <>
-      <section
-        aria-labelledby="plan-verdict"
-        className={`rounded-md p-4 font-sans ${look.box}`}
-        data-testid="plan-verdict"
-        data-verdict={r.verdict.verdict}
-      >
-        <h2 id="plan-verdict" className="text-2xl font-semibold">
-          <span aria-hidden="true">{look.symbol} </span>
-          {VERDICT_WORDS[r.verdict.verdict]}
-        </h2>
-        <p className="mt-1">{formatMessage({ message: '', parts: r.verdict.reason }, units)}</p>
-        {r.verdict.wouldChange.length ? (
-          <>
-            <h3 className="mt-3 text-sm font-semibold uppercase tracking-wide">What would change it</h3>
-            <ul className="mt-1 list-disc pl-5 text-sm">
-              {r.verdict.wouldChange.map((w, i) => (
-                <li key={i}>{formatMessage({ message: '', parts: w }, units)}</li>
-              ))}
-            </ul>
-          </>
-        ) : null}
-      </section>
-
       {output.warnings.length ? (
         <section aria-labelledby="plan-cautions" className="font-sans">
           <h2 id="plan-cautions" className="mb-2 font-serif text-xl font-semibold">
