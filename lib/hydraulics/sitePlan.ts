@@ -103,7 +103,7 @@ export function planSite(input: SitePlanInput): CalcOutput<SitePlanResults> {
   steps.push(
     ...titled(
       'Demand',
-      demandOnly.steps.filter((s) => !/^Delivered|^Surplus|^Time/.test(s.title)),
+      demandOnly.steps.filter((s) => !/^Delivered|^Surplus|^Time|^Tank/.test(s.title)),
     ),
   );
 
