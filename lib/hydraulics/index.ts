@@ -146,6 +146,7 @@ export {
   PART_KINDS,
   PIPE_ALLOWANCE,
   buildPartsList,
+  partsListCsv,
   type PartGroup,
   type PartKind,
   type PartsListItem,

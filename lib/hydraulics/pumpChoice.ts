@@ -139,17 +139,21 @@ function neighbours(
 ): { up: MessagePart[]; down: MessagePart[] } {
   const i = NOMINAL_SIZES.indexOf(set.size);
   const n = set.count;
-  const each = n > 1 ? ` each (${n} pumps)` : '';
+  // "A ¾" pump needs" or "3 ¾" pumps need": the sentence follows the count
+  const who = (s: NominalSize, one: string, many: string) =>
+    n > 1 ? `${n} ${label(s)} pumps ${many}` : `A ${label(s)} pump ${one}`;
+  const each = n > 1 ? ' each' : '';
   const needDrive = (need * stage.pumpHeadM) / (stage.efficiency * stage.fallM);
   const downSize = NOMINAL_SIZES[i - 1];
   const upSize = NOMINAL_SIZES[i + 1];
   let down: MessagePart[] = [`${label(set.size)} is the smallest size in the table.`];
   if (downSize) {
-    const d = evaluate(stage, downSize, n, needDrive);
     const r = typicalDriveFlow(downSize);
-    down = d
-      ? say`A ${label(downSize)} pump${each} delivers at most ${qty('dailyVolume', perDay((stage.efficiency * Math.min(r.highM3s, stage.available === undefined ? r.highM3s : stage.available / n) * stage.fallM * n) / stage.pumpHeadM))}, less than the ${qty('dailyVolume', perDay(need))} wanted.`
-      : say`A ${label(downSize)} pump${each} needs at least ${qty('flow', r.lowM3s)} of drive water.`;
+    const cap = Math.min(r.highM3s, stage.available === undefined ? r.highM3s : stage.available / n);
+    const most = perDay((stage.efficiency * cap * stage.fallM * n) / stage.pumpHeadM);
+    down = evaluate(stage, downSize, n, needDrive)
+      ? say`${who(downSize, 'delivers', 'deliver')} at most ${qty('dailyVolume', most)}, less than the ${qty('dailyVolume', perDay(need))} wanted.`
+      : say`${who(downSize, 'needs', 'need')} at least ${qty('flow', r.lowM3s)}${each} of drive water.`;
   }
   let up: MessagePart[] = [`${label(set.size)} is the largest size in the table.`];
   if (upSize && !sizes.includes(upSize)) up = [`${label(set.size)} is the largest size you build.`];
@@ -157,11 +161,11 @@ function neighbours(
     const r = typicalDriveFlow(upSize);
     const avail = stage.available === undefined ? undefined : stage.available / n;
     if (avail !== undefined && r.lowM3s > avail)
-      up = say`A ${label(upSize)} pump${each} needs at least ${qty('flow', r.lowM3s)} of drive water; the source spares ${qty('flow', avail)}${n > 1 ? ' for each' : ''}.`;
+      up = say`${who(upSize, 'needs', 'need')} at least ${qty('flow', r.lowM3s)}${each} of drive water; the source spares ${qty('flow', avail)}${n > 1 ? ' for each' : ''}.`;
     else if (r.lowM3s * n > needDrive)
-      up = say`A ${label(upSize)} pump${each} beats steadily only on ${qty('flow', r.lowM3s)} or more, more drive water than this demand needs; it takes more from the stream and costs more.`;
+      up = say`${who(upSize, 'beats', 'beat')} steadily only on ${qty('flow', r.lowM3s)}${each} or more, more drive water than this demand needs; it takes more from the stream and costs more.`;
     else
-      up = say`A ${label(upSize)} pump${each} would do the same job with a larger, heavier pump and drive pipe; nothing is gained.`;
+      up = say`${who(upSize, 'would', 'would')} do the same job with ${n > 1 ? 'larger, heavier pumps and drive pipes' : 'a larger, heavier pump and drive pipe'}; nothing is gained.`;
   }
   return { up, down };
 }

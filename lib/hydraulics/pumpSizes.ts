@@ -35,8 +35,11 @@ export interface DriveFlowRange {
  * Searched for (Dec 2026): a table of drive flow by ram size in an extension bulletin or handbook. The
  * University of Georgia Cooperative Extension bulletin "Hydraulic Rams for Off-Stream Livestock Watering"
  * was found but its table could not be read to check; the one table found in a period handbook was a
- * pump maker's and is not used. Watt (1975) and Jeffery et al. (1992) were not found. So the ranges stay
- * common practice.
+ * pump maker's and is not used. Jeffery, T.D. et al., "Hydraulic Ram Pumps: A guide to ram pump water
+ * supply systems" (IT Publications, 1992) was found but not its table; Watt (1975) was not found. One
+ * cross-check only: Development Technology Unit, University of Warwick, Working Paper 33 (1992) runs its
+ * pumps on a 2-inch drive pipe from about 40 L/min of drive flow (the upper figure is unreadable in the copy
+ * found), near the 2-inch low end here (12 US gal/min, 45 L/min). So the ranges stay common practice.
  */
 export const PUMP_SIZE_SOURCE =
   'common practice, no published source found (no extension or handbook table of drive flow by size could be verified); measure the drive flow, or estimate it for the site';

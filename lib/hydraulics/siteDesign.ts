@@ -99,7 +99,12 @@ export function designDrivePipe(
     });
     const score = check.warnings.filter((w) => DANGER.has(w.code)).length;
     const d = { nominal, series, spec, lengthM: L, pathM: path, standpipe: path > max, supplyLengthM: 0, check };
-    if (!chosen || score < chosen.score) chosen = { d, score };
+    // on a tie, the series with more rating to spare over the shut-off pressure
+    const better =
+      !chosen ||
+      score < chosen.score ||
+      (score === chosen.score && check.results.shutOffMargin > chosen.d.check.results.shutOffMargin);
+    if (better) chosen = { d, score };
     if (score === 0) break;
   }
   // DRIVE_SERIES is not empty, so the loop ran

@@ -24,6 +24,7 @@ import { finish, type CalcOutput, type Step, type Warning } from './steps';
 import { monthlyDelivery, siteCautions, verdictFor, type MonthlyDelivery, type Verdict } from './siteVerdict';
 import { buildPartsList, type PartsListItem } from './partsList';
 import { sitePlanSchema, type SitePlanInput, type SitePlanSurvey } from './siteSurvey';
+import { airChamberStep, pumpChoiceSteps, supplySteps } from './siteSteps';
 
 export interface StageDesign {
   stage: 'source' | 'upper';
@@ -103,7 +104,7 @@ export function planSite(input: SitePlanInput): CalcOutput<SitePlanResults> {
   steps.push(
     ...titled(
       'Demand',
-      demandOnly.steps.filter((s) => !/^Delivered|^Surplus|^Time/.test(s.title)),
+      demandOnly.steps.filter((s) => !/^Delivered|^Surplus|^Time|^Tank/.test(s.title)),
     ),
   );
 
@@ -117,6 +118,7 @@ export function planSite(input: SitePlanInput): CalcOutput<SitePlanResults> {
     maxPumps: v.maxPumps,
     largestSize: v.largestSize,
   });
+  steps.push(...pumpChoiceSteps(pump, demand, v.liftM, v.deliveryLossShare));
   const stages: StageDesign[] = [];
   let supply: SupplyDesign | null = null;
   let array: ArrayPlannerResults | null = null;
@@ -152,6 +154,10 @@ export function planSite(input: SitePlanInput): CalcOutput<SitePlanResults> {
       airChamberM3: airChamberVolume(l.spec.insideDiameterM, l.lengthM),
     });
     stages.push(stage('source', drive, line));
+    steps.push(
+      ...supplySteps(v.fallM, v.sourceToPumpRunM, drive.lengthM, lower.totalDriveFlowM3s),
+      airChamberStep(line.spec.insideDiameterM, line.lengthM, AIR_CHAMBER_RULE.source),
+    );
     const part = staged ? 'Lower stage' : 'Pumps';
     steps.push(
       ...titled(`${part} drive pipe`, drive.check.steps),
@@ -195,6 +201,10 @@ export function planSite(input: SitePlanInput): CalcOutput<SitePlanResults> {
         v.freezes,
       );
       stages.push(stage('upper', upDrive, upLine));
+      steps.push({
+        ...airChamberStep(upLine.spec.insideDiameterM, upLine.lengthM, AIR_CHAMBER_RULE.source),
+        title: 'Upper stage air chamber: as large as its delivery line holds',
+      });
       steps.push(
         ...titled('Upper stage drive pipe', upDrive.check.steps),
         ...titled('Upper stage delivery line', upLine.check.steps),

@@ -38,8 +38,26 @@ export interface Verdict {
  * verdictFor(survey, { arrangement: 'single', pumps: { totalDriveFlowM3s: 3e-4 } }, 1, 0.6).verdict  // → 'marginal'
  * verdictFor(survey, { arrangement: 'single', pumps: { totalDriveFlowM3s: 3e-4 } }, 1, 0.4).verdict  // → 'wont-work'
  * verdictFor(survey, { arrangement: 'single', pumps: { totalDriveFlowM3s: 3e-4 } }, 1, 1.3).verdict  // → 'works'
+ * @example a fall read off a map asks first for a level
+ * const mapped = { fallM: 1.2192, liftM: 8.8392, spareFlowM3s: 6e-4, reserveDays: 3, fallMethod: 'gps-or-map' }
+ * verdictFor(mapped, { arrangement: 'single', pumps: { totalDriveFlowM3s: 3e-4 } }, 1, 1.3).wouldChange.length  // → 3
  */
 export function verdictFor(
+  v: Pick<SitePlanSurvey, 'fallM' | 'liftM' | 'spareFlowM3s' | 'reserveDays'> & { fallMethod?: string },
+  pump: Pick<PumpChoiceResults, 'arrangement' | 'why'> & { pumps: { totalDriveFlowM3s: number } | null },
+  demand: number,
+  delivered: number,
+): Verdict {
+  const verdict = judge(v, pump, demand, delivered);
+  // a map or GPS height can be out by more than a ram's whole fall, so the verdict rests on a level
+  if (v.fallMethod === 'gps-or-map')
+    verdict.wouldChange.unshift(
+      say`A fall measured with a level: a map or GPS reading can be out by more than ${qty('length', v.fallM)}.`,
+    );
+  return verdict;
+}
+
+function judge(
   v: Pick<SitePlanSurvey, 'fallM' | 'liftM' | 'spareFlowM3s' | 'reserveDays'>,
   pump: Pick<PumpChoiceResults, 'arrangement' | 'why'> & { pumps: { totalDriveFlowM3s: number } | null },
   demand: number,

@@ -64,6 +64,24 @@ describe('a demand one small pump cannot meet', () => {
   });
 });
 
+describe('a demand beyond the largest size', () => {
+  // 30 m³/day, 36 wanted: Q = 36/86400 × h_p/(η·H) = 202 gal/min, past 4"'s 130: two 4" pumps on 101 each
+  const need = (36 / 86400) * (hp / (eta * H));
+  const r = choosePump({ fallM: H, liftM: h, spareFlowM3s: gpm(250), demandM3PerDay: 30 });
+  it('takes two 4-inch pumps in parallel, and says two 3-inch pumps fall short', () => {
+    expect(need / gpm(1)).toBeCloseTo(202.1, 1);
+    expect(r.arrangement).toBe('parallel');
+    expect(r.pumps?.size).toBe('4');
+    expect(r.pumps?.count).toBe(2);
+    expect(r.pumps?.driveFlowEachM3s).toBeCloseTo(need / 2, 9);
+    // two 3" at their 75 gal/min top: 36 × 150/202.1 = 26.7 m³/day
+    expect(text(r.nextSizeDown)).toMatch(
+      /^2 3" pumps deliver at most 26,700 L\/day, less than the 36,000 L\/day wanted/,
+    );
+    expect(text(r.nextSizeUp)).toMatch(/largest size in the table/);
+  });
+});
+
 describe('a lift beyond one ram', () => {
   // 40 m above a 4 ft fall: 32.8 times, past the Pocketbook's 26
   const lift = 40;

@@ -15,6 +15,7 @@
 import { describe, expect, it } from 'vitest';
 import { DEFER, WARNING_INFO } from '@/lib/hydraulics/warnings';
 import { EngineInputError, metricText, planSite, renderMessage, type SitePlanInput } from '@/lib/hydraulics';
+import { workingLines } from '@/lib/calculators/working';
 
 const GAL = 3.785411784e-3;
 const gpm = (x: number) => (x * GAL) / 60;
@@ -188,6 +189,20 @@ describe('a drinking-water site that freezes', () => {
     const aug = m[7]?.deliveredM3PerDay ?? 0;
     expect(aug / out.results.deliveredM3PerDay).toBeCloseTo(2, 9);
     expect((m[1]?.deliveredM3PerDay ?? 0) / aug).toBeCloseTo(1.5, 9);
+  });
+});
+
+describe("the working in the reader's units", () => {
+  it('writes every number put in and every answer without e-notation, in US and metric units', () => {
+    const staged = { ...brook, liftM: 40, spareFlowM3s: gpm(40), sourceToPumpRunM: 40, demand: { otherM3PerDay: 0.3 } };
+    for (const input of [brook, staged])
+      for (const units of ['US', 'metric'] as const) {
+        const lines = workingLines(planSite(input).steps, units);
+        // Vinson's fatigue constant 5.05 × 10²¹ is the published rule's own, written as printed
+        const numbers = lines.map((l) => `${l.substituted} = ${l.answer}`.replace('5.05\\times10^{21}', '')).join('\n');
+        expect(numbers).not.toMatch(/\d[eE][+-]?\d|times ?10\^/);
+        expect(lines.some((l) => l.title === 'Pump choice: delivery wanted')).toBe(true);
+      }
   });
 });
 
