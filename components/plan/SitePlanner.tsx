@@ -15,7 +15,8 @@ import {
 import { sitePlanner, SURVEY_GROUPS } from '@/lib/calculators/defs/sitePlan';
 
 import { designSections } from '@/lib/plan/design';
-import { partRows } from '@/lib/plan/parts';
+import { partRows, planSources } from '@/lib/plan/parts';
+import { SourcesDisclosure } from '@/components/calculators/kit/EfficiencySources';
 import { useUnits } from '@/components/units/UnitsProvider';
 import { Field } from '@/components/calculators/kit/CalculatorCard';
 import { LOOK } from '@/components/calculators/kit/VerdictLine';
@@ -215,6 +216,7 @@ function Plan({
       <div className="cw-card font-sans">
         <h2 className="font-serif text-xl font-semibold">The working</h2>
         <Working steps={output.steps} />
+        <SourcesDisclosure lines={planSources(r)} />
       </div>
 
       <footer className="flex flex-wrap items-center gap-4 font-sans text-sm" data-print-hide>

@@ -62,7 +62,11 @@ export type Recomputed<R = unknown> =
  * a stored result is always the engine's, never the browser's. The first refusal
  * names the field by its form name (`prop`) and label, its numbers in `units` when given.
  */
-export function recompute<R>(def: CalculatorDef<R, string>, form: Record<string, string>, units?: UnitSystem): Recomputed<R> {
+export function recompute<R>(
+  def: CalculatorDef<R, string>,
+  form: Record<string, string>,
+  units?: UnitSystem,
+): Recomputed<R> {
   const state = initialState(def.fields, form, def.defaults, DEFAULT_UNITS, 'none');
   const { values, errors } = readForm(visibleFields(def, state), state);
   const firstError = Object.entries(errors)[0];

@@ -11,6 +11,7 @@ import { NOMINAL_LABELS } from './pipes';
 import type { QuantityKind } from './units';
 import type { StageDesign } from './sitePlan';
 import type { SitePlanSurvey } from './siteSurvey';
+import { pumpSideRating } from './siteVerdict';
 
 export const PART_KINDS = ['pipe', 'fitting', 'valve', 'gauge', 'union', 'tank', 'screen', 'vessel'] as const;
 export type PartKind = (typeof PART_KINDS)[number];
@@ -113,8 +114,8 @@ function pumpParts(stage: StageDesign, set: PumpSet, label: string): PartsListIt
       kind: 'valve',
       name: `${label} relief valve`,
       quantity: n,
-      pressurePa: dp.weakestRatingPa,
-      note: "set below the weakest part's rating",
+      pressurePa: pumpSideRating(stage),
+      note: 'set above the working pressure and below this, the lowest rating on the pump side (delivery line included)',
     },
     { group: 'delivery', kind: 'valve', name: `${label} delivery isolating valve`, quantity: n, nominal: d },
     { group: 'delivery', kind: 'union', name: `${label} union, pump to delivery line`, quantity: n, nominal: d },

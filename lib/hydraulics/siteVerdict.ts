@@ -119,6 +119,11 @@ function judge(
   };
 }
 
+/** The lowest pressure rating a stage's pump side must hold: its drive pipe (or threaded joints) and its delivery line. */
+export function pumpSideRating(s: Pick<StageDesign, 'drivePipe' | 'deliveryLine'>): number {
+  return Math.min(s.drivePipe.weakestRatingPa, s.deliveryLine.pressureRatingPa);
+}
+
 /**
  * The cautions a site plan shows: pressure, water in motion, frost, drinking water, diversion rights.
  * @example a freezing drinking-water site with no pumps yet still gets its cautions
@@ -133,12 +138,15 @@ export function siteCautions(
 ): Warning[] {
   const out: Warning[] = [];
   const peak = stages.reduce((m, s) => Math.max(m, s.drivePipe.shutOffPressurePa), 0);
-  const weakest = stages.reduce((m, s) => Math.min(m, s.drivePipe.weakestRatingPa), Infinity);
+  // a blocked delivery line (a shut valve at the tank, a float valve put on it by mistake) sees
+  // the shut-off pressure too, so the relief valve guards the delivery line's rating as well
+  const weakest = stages.reduce((m, s) => Math.min(m, pumpSideRating(s)), Infinity);
+  const working = stages.reduce((m, s) => Math.max(m, s.deliveryLine.pumpPressurePa), 0);
   if (stages.length > 0)
     out.push(
       warn(
         'plan-pressure',
-        say`Against a shut delivery the pump can reach ${qty('pressure', peak)}. Fit a pressure gauge and a relief valve set below ${qty('pressure', weakest)}, build the air chamber only of pressure-rated parts (never glass), and stop the pump before closing its delivery valve.`,
+        say`Against a shut delivery the pump can reach ${qty('pressure', peak)}. Fit a pressure gauge and a relief valve set above the working ${qty('pressure', working)} and below ${qty('pressure', weakest)}, the lowest rating on the pump side, build the air chamber only of pressure-rated parts (never glass), and stop the pump before closing its delivery valve.`,
       ),
     );
   out.push(

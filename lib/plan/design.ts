@@ -90,7 +90,9 @@ export function designSections(r: SitePlanResults, units: UnitSystem): DesignSec
         { label: 'Air chamber volume', value: q('volume', s.airChamberM3) },
         { label: 'Snifter hole', value: q('smallLength', r.snifterHoleM) },
       ],
-      notes: [r.airChamberRule, r.snifterSource],
+      notes: [
+        'The air chamber evens out the beat so the delivery line carries a steady flow; the snifter lets in a little air each beat to keep it from filling with water.',
+      ],
     });
   });
   if (r.supply) {

@@ -2,7 +2,16 @@
  * The plan's parts list as a reader takes it to the merchant: each row's size, how many
  * and how much, in the reader's units, and the same rows as CSV. Pure, no framework.
  */
-import { NOMINAL_LABELS, type PartGroup, type PartsListItem, type UnitSystem } from '@/lib/hydraulics';
+import {
+  NOMINAL_LABELS,
+  PIPE_ALLOWANCE,
+  SCREEN_APPROACH_VELOCITY,
+  SNIFTER_HOLE,
+  type PartGroup,
+  type PartsListItem,
+  type SitePlanResults,
+  type UnitSystem,
+} from '@/lib/hydraulics';
 import { formatQuantity } from '@/lib/calculators/format';
 import { SERIES_LABELS } from '@/lib/calculators/pipes';
 
@@ -44,8 +53,23 @@ export function partRows(parts: readonly PartsListItem[], units: UnitSystem): Pa
       .join(' '),
     quantity: p.quantity,
     amount: amountOf(p, units),
-    note: p.note ?? '',
+    // a rule's source belongs with the plan's sources, not on each row
+    note: p.note && !SOURCE_NOTES.has(p.note) ? p.note : '',
   }));
+}
+
+const SOURCE_NOTES = new Set<string>([PIPE_ALLOWANCE.source, SNIFTER_HOLE.source, SCREEN_APPROACH_VELOCITY.source]);
+
+/** Where the plan's rules come from, each once, for its Sources. */
+export function planSources(r: SitePlanResults): string[] {
+  const lines = [
+    `Drive flow by pump size: ${r.pump.driveFlowSource}`,
+    `Intake screen approach velocity: ${SCREEN_APPROACH_VELOCITY.source}`,
+    `Air chamber: ${r.airChamberRule}`,
+    `Snifter hole: ${r.snifterSource}`,
+    `Pipe lengths to buy: ${PIPE_ALLOWANCE.source}`,
+  ];
+  return [...new Set(lines)];
 }
 
 /** A cell as RFC 4180 writes it: quoted when it holds a comma, a quote or a line break. */

@@ -74,6 +74,18 @@ describe('a site that works with one pump', () => {
     for (const kind of ['valve', 'gauge', 'union', 'fitting', 'screen', 'vessel'])
       expect(r.parts.some((p) => p.kind === kind)).toBe(true);
   });
+
+  it('sets the relief valve below the delivery line’s rating, which a blocked line must hold too', () => {
+    // HDPE DR 17 is rated 125 psi = 862 kPa at 73 °F (ASTM D3035 / PPI TR-4 pressure classes, from memory);
+    // schedule 80 PVC in ¾" far above that (ASTM D1785, from memory): the line is the weakest part
+    const stage = r.stages[0]!;
+    const relief = r.parts.find((p) => p.name.includes('relief valve'));
+    expect(stage.deliveryLine.pressureRatingPa).toBeLessThan(stage.drivePipe.weakestRatingPa);
+    expect(relief?.pressurePa).toBe(stage.deliveryLine.pressureRatingPa);
+    expect(relief?.pressurePa).toBeCloseTo(125 * 6894.757, -3);
+    const caution = out.warnings.find((w) => w.code === 'plan-pressure')?.message ?? '';
+    expect(caution).toContain('below 862 kPa');
+  });
   it('brings water from an intake 40 m away to a standpipe, with a drive pipe of 10 × the fall', () => {
     const far = planSite({ ...brook, sourceToPumpRunM: 40 });
     const path = Math.hypot(40, H); // 40.02 m, more than 10 × 1.2192 m

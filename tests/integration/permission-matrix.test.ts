@@ -78,6 +78,16 @@ const SUSPENDED: Partial<Record<Persona, 'member' | 'expert' | 'admin'>> = {
  * `params` fills the dynamic segments; `owner` marks the persona that owns the resource.
  */
 type Sample = { params?: Record<string, string>; body?: unknown; url?: string };
+// an invented brook the planner accepts (common practice, no source)
+const SITE_SURVEY = {
+  fall: '4 ft',
+  lift: '29 ft',
+  sourceRun: '30 ft',
+  tankRun: '150 ft',
+  spareFlow: '10 gal/min',
+  people: '2',
+};
+const OWNER_SITE = 'MatrixSite01';
 const SAMPLES: Record<string, (ids: Record<string, number>) => Sample> = {
   'POST /api/calculations': () => ({
     body: { tool: 'yield-estimate', inputs: { fall: '4 ft', lift: '29 ft', driveFlow: '2 gal/min' } },
@@ -183,6 +193,10 @@ const SAMPLES: Record<string, (ids: Record<string, number>) => Sample> = {
   }),
   // a header with no rows: an allowed caller gets 422 for the empty file, never 401/403
   'POST /api/field-log/import': () => ({ body: { csv: 'site_name,tested_on\r\n' } }),
+  'POST /api/sites': () => ({ body: { name: 'Matrix brook', survey: SITE_SURVEY } }),
+  // a public site: anyone sees it, so a refusal to change it is a 403, not the 404 a private one gives
+  'PATCH /api/sites/[id]': () => ({ params: { id: OWNER_SITE }, body: { visibility: 'public' } }),
+  'POST /api/sites/[id]/versions': () => ({ params: { id: OWNER_SITE }, body: { survey: SITE_SURVEY } }),
 };
 
 /** Routes that only ever act on the caller's own account: every signed-in persona is the owner. */
@@ -417,6 +431,19 @@ describe('permission matrix: every API route × every persona, against the polic
         body: 'A first reply.',
       })
     ).id;
+    const ownerSite = await initModels().Site.create({
+      publicId: OWNER_SITE,
+      ownerId: ids.owner,
+      name: 'The owner’s public site',
+      visibility: 'public',
+    });
+    await initModels().SiteVersion.create({
+      siteId: ownerSite.id,
+      version: 1,
+      survey: SITE_SURVEY,
+      plan: {},
+      engineVersion: 'test',
+    });
     const failures: string[] = [];
     for (const h of handlers) {
       const action = API_ROUTES[h.key];

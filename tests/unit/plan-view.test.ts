@@ -3,7 +3,7 @@ import { describe, expect, it } from 'vitest';
 import { toSI, type PartsListItem } from '@/lib/hydraulics';
 import { partRows, partsCsv } from '@/lib/plan/parts';
 import { designSections } from '@/lib/plan/design';
-import { computeForm, initialState } from '@/lib/calculators';
+import { computeForm, formatMessage, initialState } from '@/lib/calculators';
 import { sitePlanner } from '@/lib/calculators/defs/sitePlan';
 import { wrongUnits } from '../support/unit-words';
 
@@ -58,7 +58,9 @@ describe('the default plan, read by each reader', () => {
       if (!out.ok) throw new Error(JSON.stringify(out));
       const text = [
         ...designSections(out.output.results, units).flatMap((s) => s.lines.map((l) => `${l.label} ${l.value}`)),
-        ...partRows(out.output.results.parts, units).map((r) => `${r.what} ${r.size} ${r.amount}`),
+        ...designSections(out.output.results, units).flatMap((s) => s.notes),
+        ...partRows(out.output.results.parts, units).map((r) => `${r.what} ${r.size} ${r.amount} ${r.note}`),
+        ...out.output.warnings.map((w) => formatMessage(w, units)),
       ];
       expect(text.flatMap((t) => wrongUnits(t, units))).toEqual([]);
     });
