@@ -22,6 +22,7 @@ import { Field } from '@/components/calculators/kit/CalculatorCard';
 import { LOOK } from '@/components/calculators/kit/VerdictLine';
 import { Working } from '@/components/calculators/kit/Working';
 import { PartsList } from './PartsList';
+import { SaveSite, type SaveTarget } from './SaveSite';
 import { MonthlyTable } from './MonthlyTable';
 
 const GROUP_TITLES: Record<keyof typeof SURVEY_GROUPS, string> = {
@@ -36,7 +37,14 @@ const GROUP_TITLES: Record<keyof typeof SURVEY_GROUPS, string> = {
  * the parts list and the working beside it, all redrawn as the reader types. The inputs
  * live in the address (Share link) so a plan can be passed on before it is saved.
  */
-export function SitePlanner({ props }: { props: Record<string, string | undefined> }) {
+export function SitePlanner({
+  props,
+  save = { kind: 'new' },
+}: {
+  props: Record<string, string | undefined>;
+  /** a site's own page saves the next version; /plan saves a new site */
+  save?: SaveTarget;
+}) {
   const { units } = useUnits();
   const uid = useId();
   const def = sitePlanner;
@@ -53,8 +61,8 @@ export function SitePlanner({ props }: { props: Record<string, string | undefine
   const query = shareQuery(def.fields, state).toString();
   // the address follows the survey, so Back, a bookmark or a copied address brings it back
   useEffect(() => {
-    window.history.replaceState(null, '', `/plan?${query}`);
-  }, [query]);
+    if (save.kind === 'new') window.history.replaceState(null, '', `/plan?${query}`);
+  }, [query, save.kind]);
 
   const shown = new Set(visibleFields(def, state).map((f) => f.name));
   const byName = new Map(def.fields.map((f) => [f.name, f]));
@@ -104,7 +112,9 @@ export function SitePlanner({ props }: { props: Record<string, string | undefine
         ))}
       </form>
       <div className="flex min-w-0 flex-col gap-5 lg:col-start-2 lg:row-start-2" data-testid="plan">
-        {outcome.ok ? <Plan results={outcome.output.results} output={outcome.output} query={query} /> : null}
+        {outcome.ok ? (
+          <Plan results={outcome.output.results} output={outcome.output} query={query} save={save} />
+        ) : null}
       </div>
     </div>
   );
@@ -143,10 +153,12 @@ function Plan({
   results: r,
   output,
   query,
+  save,
 }: {
   results: SitePlanResults;
   output: CalcOutput<SitePlanResults>;
   query: string;
+  save: SaveTarget;
 }) {
   const { units } = useUnits();
   const sections = designSections(r, units);
@@ -226,6 +238,7 @@ function Plan({
         <button type="button" className="cw-link inline-flex min-h-6 items-center" onClick={() => window.print()}>
           Print the plan
         </button>
+        <SaveSite survey={Object.fromEntries(new URLSearchParams(query))} target={save} />
       </footer>
     </>
   );
