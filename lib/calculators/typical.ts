@@ -1,4 +1,5 @@
 import type { UnitSystem } from '@/lib/hydraulics';
+import { formatNumber } from './format';
 import { computeForm } from './recompute';
 import type { CalculatorDef, FormState } from './types';
 
@@ -30,7 +31,10 @@ export function typicalEfficiency<R>(
   return band ? { field: field.name, ...band } : null;
 }
 
-/** "28 %": an efficiency as a reader writes it, to the whole percent. */
-export function percentWords(x: number): string {
-  return `${Math.round(x * 100)} %`;
+/**
+ * "27.7 %": an efficiency as the results write the efficiency used (three figures), so the
+ * box and the result row show the same number; `whole` for a band's ends, as the band row does.
+ */
+export function percentWords(x: number, whole = false): string {
+  return `${whole ? Math.round(x * 100) : formatNumber(x * 100)} %`;
 }

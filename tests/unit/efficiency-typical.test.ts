@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { CALCULATORS, computeForm, initialState, typicalEfficiency } from '@/lib/calculators';
+import { CALCULATORS, computeForm, initialState, percentWords, typicalEfficiency } from '@/lib/calculators';
 
 const def = CALCULATORS['yield-estimate'];
 const open = (props: Record<string, string> = {}) => initialState(def.fields, props, def.defaults, 'US');
@@ -33,6 +33,11 @@ describe('the yield estimate’s efficiency opens on the typical value for the s
     const higher = { ...open(), liftM: { text: '58', unit: 'ft' } };
     // h/H = 14.5: efficiency falls as the lift ratio grows (Building Trades Pocketbook table)
     expect(typicalEfficiency(def, higher, 'US')!.typical).toBeLessThan(0.2769);
+  });
+
+  it('writes the typical value as the result row writes the efficiency used, and a band’s ends whole', () => {
+    expect(percentWords(0.2769)).toBe('27.7 %'); // three figures, as lib/calculators/format.ts formatNumber (common practice, no source)
+    expect(percentWords(0.1385, true)).toBe('14 %'); // the band row's whole percent (common practice, no source)
   });
 
   it('gives nothing while the site does not compute', () => {

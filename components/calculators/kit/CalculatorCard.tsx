@@ -255,7 +255,7 @@ function Field({
       </div>
       {typical ? (
         <p id={`${id}-typical`} className="text-xs" data-testid="efficiency-typical">
-          {`Typical at this lift ratio: ${percentWords(typical.typical)}, in a band of ${percentWords(typical.low)} to ${percentWords(typical.high)}.`}
+          {`Typical at this lift ratio: ${percentWords(typical.typical)}, in a band of ${percentWords(typical.low, true)} to ${percentWords(typical.high, true)}.`}
         </p>
       ) : null}
       {field.help ? (
