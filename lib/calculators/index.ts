@@ -50,3 +50,4 @@ export {
   type Verdict,
   type VerdictLevel,
 } from './verdict';
+export { typicalEfficiency, percentWords, type TypicalEfficiency } from './typical';

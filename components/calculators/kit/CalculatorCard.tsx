@@ -17,6 +17,9 @@ import {
   type FieldDef,
   type FormState,
   type OpenIn,
+  percentWords,
+  typicalEfficiency,
+  type TypicalEfficiency,
 } from '@/lib/calculators';
 import { useUnits } from '@/components/units/UnitsProvider';
 import { calculatorView } from '../views';
@@ -67,6 +70,8 @@ export function CalculatorCard({
   }, [units, def.fields]);
 
   const outcome = useMemo(() => computeForm(def, state, units), [def, state, units]);
+  // An empty efficiency box stands for the typical value at this site: shown in it, band beside.
+  const typical = useMemo(() => typicalEfficiency(def, state, units), [def, state, units]);
   useEffect(() => {
     onOutput?.(state, outcome.ok ? outcome.output : null);
   }, [state, outcome, onOutput]);
@@ -101,6 +106,7 @@ export function CalculatorCard({
               field={f}
               state={state[f.name]}
               error={outcome.ok ? undefined : outcome.fieldErrors[f.name]}
+              typical={typical?.field === f.name ? typical : null}
               onChange={(p) => set(f.name, p)}
             />
           ))}
@@ -156,18 +162,22 @@ function Field({
   field,
   state,
   error,
+  typical = null,
   onChange,
 }: {
   id: string;
   field: FieldDef;
   state: { text: string; unit?: string } | undefined;
   error?: string;
+  typical?: TypicalEfficiency | null;
   onChange: (p: Partial<{ text: string; unit: string }>) => void;
 }) {
   const { units } = useUnits();
   const s = state ?? { text: '' };
   const describedBy =
-    [field.help ? `${id}-help` : null, error ? `${id}-error` : null].filter(Boolean).join(' ') || undefined;
+    [typical ? `${id}-typical` : null, field.help ? `${id}-help` : null, error ? `${id}-error` : null]
+      .filter(Boolean)
+      .join(' ') || undefined;
   const box = `w-full min-w-0 flex-1 rounded-md border bg-limestone-50 px-2 py-1.5 cw-num dark:bg-creek-950 ${error ? 'border-signal ring-1 ring-signal' : 'border-limestone-400 dark:border-creek-500'}`;
   return (
     <div className="flex flex-col gap-1">
@@ -233,11 +243,15 @@ function Field({
             aria-invalid={error ? true : undefined}
             aria-describedby={describedBy}
             placeholder={
-              field.type !== 'text' || field.placeholder === undefined
-                ? undefined
-                : typeof field.placeholder === 'string'
-                  ? field.placeholder
-                  : field.placeholder[units]
+              field.type !== 'text'
+                ? typical
+                  ? percentWords(typical.typical)
+                  : undefined
+                : field.placeholder === undefined
+                  ? undefined
+                  : typeof field.placeholder === 'string'
+                    ? field.placeholder
+                    : field.placeholder[units]
             }
           />
         )}
@@ -256,6 +270,11 @@ function Field({
           </select>
         ) : null}
       </div>
+      {typical ? (
+        <p id={`${id}-typical`} className="text-xs" data-testid="efficiency-typical">
+          {`Typical at this lift ratio: ${percentWords(typical.typical)}, in a band of ${percentWords(typical.low, true)} to ${percentWords(typical.high, true)}.`}
+        </p>
+      ) : null}
       {field.help ? (
         <p id={`${id}-help`} className="cw-muted text-xs">
           {field.help}
