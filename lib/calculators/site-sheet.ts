@@ -113,6 +113,7 @@ const PREFILL: Record<CalculatorId, Partial<Record<SiteSheetField, string>>> = {
     driveLength: 'driveLength',
     driveSize: 'driveSize',
     driveMaterial: 'driveMaterial',
+    elbows: 'elbows',
     sourceFlow: 'sourceFlow',
     pumpSize: 'pumpSize',
     pumps: 'pumps',
@@ -131,6 +132,7 @@ const PREFILL: Record<CalculatorId, Partial<Record<SiteSheetField, string>>> = {
     driveLength: 'length',
     driveSize: 'size',
     driveMaterial: 'material',
+    elbows: 'elbows',
     driveFlow: 'driveFlow',
   },
   'delivery-line': {
@@ -174,6 +176,7 @@ export const SITE_SHEET_LABELS: Record<SiteSheetField, string> = {
   driveLength: 'Drive pipe length',
   driveSize: 'Drive pipe size',
   driveMaterial: 'Drive pipe material',
+  elbows: 'Extra elbows on the drive pipe',
   sourceFlow: 'Source can spare',
   pumpSize: 'Pump size',
   pumps: 'Pumps',
