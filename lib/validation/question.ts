@@ -14,6 +14,7 @@ export const SITE_SHEET_FIELDS = [
   'driveLength',
   'driveSize',
   'driveMaterial',
+  'elbows',
   'sourceFlow',
   'pumpSize',
   'pumps',
