@@ -111,7 +111,7 @@ const s = {
     fontSize: '16px',
     fontWeight: 600,
     // about 44 px tall: a thumb's target
-    padding: '12px 18px',
+    padding: '14px 20px',
     ...wrap,
     textDecoration: 'none',
   },
