@@ -5,6 +5,7 @@ import { usePathname } from 'next/navigation';
 import { useEffect, useRef } from 'react';
 import { signOut, useSession } from 'next-auth/react';
 import { can, sessionActor, type Action } from '@/lib/auth/policy';
+import { signInPath } from '@/lib/auth/return-path';
 
 /** The workspaces a role may open, each behind the policy row that opens it. */
 const TOOLS: { href: string; label: string; action: Action }[] = [
@@ -52,7 +53,7 @@ export function AccountMenu() {
   if (!data?.user) {
     return (
       <Link
-        href="/sign-in"
+        href={signInPath(pathname)}
         className="inline-flex min-h-10 items-center rounded px-1 text-sm font-medium whitespace-nowrap no-underline hover:underline"
       >
         Sign in

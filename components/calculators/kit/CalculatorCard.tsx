@@ -39,12 +39,15 @@ export function CalculatorCard({
   props = {},
   openIn = 'all',
   onOutput,
+  saveLabel,
 }: {
   def: Calculator;
   props?: Record<string, string | undefined>;
   /** 'defaults' for a share link, whose values open exactly as the sharer typed them */
   openIn?: OpenIn;
   onOutput?: (state: FormState, output: CalcOutput<unknown> | null) => void;
+  /** the save button's words where "save" alone could be mistaken for another action (the answer form) */
+  saveLabel?: string;
 }) {
   const { units } = useUnits();
   // every id from useId, so the same calculator twice on one page keeps its labels to itself
@@ -142,7 +145,7 @@ export function CalculatorCard({
         >
           {copied ? 'Copied' : 'Copy link'}
         </button>
-        {outcome.ok ? <SaveCalculation tool={def.id} inputs={shareQuery(def.fields, state)} /> : null}
+        {outcome.ok ? <SaveCalculation tool={def.id} inputs={shareQuery(def.fields, state)} label={saveLabel} /> : null}
         <a href={`/guides/${def.guide}`} className={`${TARGET} ml-auto`}>
           Read the guide
         </a>
