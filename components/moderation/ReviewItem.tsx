@@ -17,8 +17,11 @@ export interface ReviewItemView {
     body: string;
     author: { id: number; handle: string; displayName: string; role: Role } | null;
     hiddenAt: string | null;
+    hiddenReason?: string | null;
     deletedAt: string | null;
     createdAt: string;
+    /** a question's thread lock */
+    lockedAt?: string | null;
     tags?: string[];
     /** a flagged photo's public id: the queue shows it even while hidden */
     photoId?: string | null;

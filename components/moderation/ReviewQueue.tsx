@@ -16,7 +16,7 @@ const AGES = [
 ];
 
 /**
- * The review queue: flagged posts, oldest flag first, each read in context with its
+ * The review queue: flagged posts, unsafe advice first and then oldest flag first, each read in context with its
  * flags and history and an action panel. After an action the list reloads, so a
  * settled post drops out.
  */
@@ -122,7 +122,8 @@ export function ReviewQueue({ viewer }: { viewer: { id: number; handle: string; 
       ) : (
         <>
           <p className="cw-muted font-sans text-sm">
-            {data.items.length === 1 ? '1 post waiting' : `${data.items.length} posts waiting`}, oldest flag first.
+            {data.items.length === 1 ? '1 post waiting' : `${data.items.length} posts waiting`}, unsafe advice first,
+            then oldest flag first.
           </p>
           <ol className="flex flex-col gap-4">
             {data.items.map((item) => (

@@ -5,9 +5,11 @@ import { ForumError } from '@/lib/questions/errors';
 import type { SessionUser } from '@/lib/auth/session';
 import { can, MODERATING, REFUSAL, type Actor, type Role } from '@/lib/auth/policy';
 import { recordAudit } from './audit';
-import { notifyModeration } from '@/lib/mail/notify';
+import { notifyModeration, notifyWithdrawn } from '@/lib/mail/notify';
 import { postsChanged } from '@/lib/questions/after-write';
 import { loadPost, type ModeratedType } from './posts';
+import { whyNotApplicable } from './applicable';
+import { QUESTION_ONLY_ACTIONS } from '@/lib/vocabulary';
 import { bumpSessionVersion } from '@/lib/auth/session-version';
 
 export { MODERATION_ACTIONS, type ModerationAction } from '@/lib/vocabulary';
@@ -59,6 +61,19 @@ export async function moderate(
   const done = await getSequelize().transaction(async (transaction) => {
     const { post, questionId } = await loadPost(input.postType, input.postId, transaction);
     if (post.authorId === moderator.id) throw new ForumError(403, 'Moderators cannot act on their own posts.');
+    // the panel offers only the actions that fit; a request for another (a stale page, a script) is refused
+    const unfit = whyNotApplicable(input.action, {
+      type: input.postType,
+      hiddenAt: post.hiddenAt,
+      hiddenReason: post.hiddenReason,
+      deletedAt: post.deletedAt,
+      lockedAt: input.postType === 'question' ? ((post as { lockedAt?: Date | null }).lockedAt ?? null) : undefined,
+    });
+    if (unfit) {
+      const field =
+        QUESTION_ONLY_ACTIONS.includes(input.action) && input.postType !== 'question' ? 'postType' : 'action';
+      throw new ForumError(422, `${field}: ${unfit}`, field);
+    }
     const author = await User.findByPk(post.authorId, { attributes: ['id', 'role'], transaction });
     if (author) checkRank(moderator, author.role);
     const ownFlag = await Flag.findOne({
@@ -81,10 +96,30 @@ export async function moderate(
         if (post.hiddenAt && /pending review/.test(post.hiddenReason ?? ''))
           await post.update({ hiddenAt: null, hiddenReason: null }, { transaction });
         break;
-      case 'hide':
+      case 'hide': {
+        // asked before the flags settle; upheld ones count too, so a hide after a restore still knows
+        const unsafe =
+          input.postType === 'answer' &&
+          (await Flag.count({
+            where: {
+              postType: 'answer',
+              postId: input.postId,
+              reason: 'unsafe',
+              status: { [Op.in]: ['open', 'upheld'] },
+            },
+            transaction,
+          })) > 0;
         await post.update({ hiddenAt: now, hiddenReason: input.reason }, { transaction });
         await settleFlags('upheld');
+        if (unsafe && questionId)
+          await notifyWithdrawn(transaction, {
+            answerId: input.postId,
+            questionId,
+            answerAuthorId: post.authorId,
+            moderatorId: moderator.id,
+          });
         break;
+      }
       case 'restore':
         await post.update({ hiddenAt: null, hiddenReason: null, deletedAt: null }, { transaction });
         await settleFlags('dismissed');

@@ -4,7 +4,9 @@ import { MODERATED_TYPES, type FlagReason, type ModeratedType } from '@/lib/voca
 import type { Role } from '@/lib/auth/policy';
 import { photoQuestionId } from './posts';
 
-/** Posts with open flags, oldest flag first, each with its context, the flaggers' notes and its revisions. */
+/**
+ * Posts with open flags: those flagged as unsafe advice first (a reader may act on it
+ * while it waits), then oldest flag first; each with its context, the flaggers' notes and its revisions. */
 export async function reviewQueue(filter: { reason?: FlagReason; olderThanHours?: number }) {
   const { Flag, User, Question, Answer, Reply, Revision, Tag, Photo, FieldLogEntry } = initModels();
   const where: Record<string | symbol, unknown> = { status: 'open', postType: { [Op.in]: [...MODERATED_TYPES] } };
@@ -30,6 +32,7 @@ export async function reviewQueue(filter: { reason?: FlagReason; olderThanHours?
       body: string;
       questionId?: number | null;
       hiddenAt: Date | null;
+      hiddenReason?: string | null;
       deletedAt: Date | null;
       createdAt: Date;
       author?: { id: number; handle: string; displayName: string; role: Role };
@@ -47,6 +50,7 @@ export async function reviewQueue(filter: { reason?: FlagReason; olderThanHours?
             body: `Field log: ${entry.siteName} (${entry.testedOn}). ${entry.notes}`.trim(),
             questionId: null,
             hiddenAt: entry.hiddenAt ?? null,
+            hiddenReason: entry.hiddenReason ?? null,
             deletedAt: entry.deletedAt ?? null,
             createdAt: entry.createdAt,
             author: author ?? undefined,
@@ -63,6 +67,7 @@ export async function reviewQueue(filter: { reason?: FlagReason; olderThanHours?
             body: photo.alt ?? '',
             questionId: await photoQuestionId(photo),
             hiddenAt: photo.hiddenAt ?? null,
+            hiddenReason: photo.hiddenReason ?? null,
             deletedAt: photo.deletedAt ?? null,
             createdAt: photo.createdAt,
             author: owner ?? undefined,
@@ -78,7 +83,7 @@ export async function reviewQueue(filter: { reason?: FlagReason; olderThanHours?
     if (!post) continue;
     const questionId = type === 'question' ? post.id : (post.questionId ?? 0);
     const q = await Question.findByPk(questionId, {
-      attributes: ['id', 'title'],
+      attributes: ['id', 'title', 'lockedAt'],
       include: [{ model: Tag, as: 'tags', attributes: ['slug'], through: { attributes: [] } }],
     });
     const revisions = await Revision.findAll({
@@ -102,9 +107,11 @@ export async function reviewQueue(filter: { reason?: FlagReason; olderThanHours?
             }
           : null,
         hiddenAt: post.hiddenAt?.toISOString() ?? null,
+        hiddenReason: post.hiddenReason ?? null,
         deletedAt: post.deletedAt?.toISOString() ?? null,
         createdAt: post.createdAt.toISOString(),
         tags: (q?.tags ?? []).map((t) => t.slug),
+        lockedAt: type === 'question' ? (q?.lockedAt?.toISOString() ?? null) : undefined,
         photoId: post.photoId ?? null,
       },
       flags: fs.map((f) => ({
@@ -125,5 +132,8 @@ export async function reviewQueue(filter: { reason?: FlagReason; olderThanHours?
       })),
     });
   }
+  // a stable sort: within each half the oldest-flag-first order of the groups stays
+  const unsafe = (i: (typeof items)[number]) => (i.flags.some((f) => f.reason === 'unsafe') ? 0 : 1);
+  items.sort((a, b) => unsafe(a) - unsafe(b));
   return { items };
 }
