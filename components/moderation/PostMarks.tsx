@@ -4,13 +4,20 @@ import type { PostType } from '@/lib/vocabulary';
 /**
  * What a thread shows about a post's review state, above its text: an amber caution
  * while an "unsafe advice" flag is open, and — for moderators, the only readers who
- * receive such posts — whether it is hidden or deleted.
+ * receive such posts — whether it is hidden or deleted. Its author, the one other reader
+ * of their hidden post, reads it marked with the moderator's reason.
  */
 export function PostMarks({
   post,
   kind,
 }: {
-  post: { cautionUnsafe: boolean; hiddenAt: string | null; deletedAt: string | null };
+  post: {
+    cautionUnsafe: boolean;
+    hiddenAt: string | null;
+    hiddenReason?: string | null;
+    ownPost?: boolean;
+    deletedAt: string | null;
+  };
   kind: PostType;
 }) {
   if (!post.cautionUnsafe && !post.hiddenAt && !post.deletedAt) return null;
@@ -20,13 +27,30 @@ export function PostMarks({
         <p className="flex gap-2 self-start font-sans text-xs font-semibold" data-testid="moderation-state">
           {post.hiddenAt ? (
             <span className="rounded bg-signal-100 px-1.5 py-0.5 text-creek-900 dark:bg-signal-900 dark:text-signal-100">
-              hidden — only moderators see this {kind}
+              {post.ownPost
+                ? `hidden — only you and the moderators see your ${kind}`
+                : `hidden — only moderators see this ${kind}`}
             </span>
           ) : null}
           {post.deletedAt ? (
             <span className="rounded bg-clay-200 px-1.5 py-0.5 text-clay-700 dark:bg-clay-700 dark:text-limestone-50">
               deleted — only moderators see this {kind}
             </span>
+          ) : null}
+        </p>
+      ) : null}
+      {post.hiddenAt && post.hiddenReason ? (
+        <p className="font-sans text-sm" data-testid="hidden-reason">
+          <span className="font-semibold">Why it is hidden:</span> {post.hiddenReason}
+          {post.ownPost ? (
+            <>
+              {' '}
+              You can ask the moderators to review this decision from{' '}
+              <a href="/settings#notices" className="cw-link">
+                your notices
+              </a>
+              .
+            </>
           ) : null}
         </p>
       ) : null}

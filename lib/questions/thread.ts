@@ -32,6 +32,10 @@ export interface ReplyView {
   edited: boolean;
   cautionUnsafe: boolean;
   hiddenAt: string | null;
+  /** why it is hidden: sent only to a reader who may see it hidden (its author, moderators) */
+  hiddenReason: string | null;
+  /** the reader wrote it (the author is shown their own hidden post, marked) */
+  ownPost: boolean;
   deletedAt: string | null;
 }
 export interface AnswerView {
@@ -47,6 +51,10 @@ export interface AnswerView {
   edited: boolean;
   cautionUnsafe: boolean;
   hiddenAt: string | null;
+  /** why it is hidden: sent only to a reader who may see it hidden (its author, moderators) */
+  hiddenReason: string | null;
+  /** the reader wrote it (the author is shown their own hidden post, marked) */
+  ownPost: boolean;
   deletedAt: string | null;
 }
 export interface ThreadView {
@@ -71,6 +79,10 @@ export interface ThreadView {
   edited: boolean;
   cautionUnsafe: boolean;
   hiddenAt: string | null;
+  /** why it is hidden: sent only to a reader who may see it hidden (its author, moderators) */
+  hiddenReason: string | null;
+  /** the reader wrote it (the author is shown their own hidden post, marked) */
+  ownPost: boolean;
   deletedAt: string | null;
   lockedAt: string | null;
 }
@@ -105,9 +117,15 @@ export async function loadThread(id: number, viewer: Actor | null): Promise<Thre
       photoInclude,
     ],
   });
-  // Hidden and deleted posts vanish for everyone but moderators.
+  // Hidden and deleted posts vanish for everyone but moderators, and a hidden one's author
+  // (the same rule as findVisiblePost): they read it marked, with the reason.
+  // (answers and replies: a hidden question takes the whole thread down, for its asker too)
   if (!q || (!seeHidden && (q.hiddenAt || q.deletedAt))) throw new ForumError(404, 'no such question', 'id');
-  const visible = seeHidden ? {} : { hiddenAt: null, deletedAt: null };
+  const visible = seeHidden
+    ? {}
+    : viewerId !== null
+      ? { deletedAt: null, [Op.or]: [{ hiddenAt: null }, { authorId: viewerId }] }
+      : { hiddenAt: null, deletedAt: null };
   const [answers, replies, follow] = await Promise.all([
     Answer.findAll({
       where: { questionId: id, ...visible },
@@ -146,9 +164,14 @@ export async function loadThread(id: number, viewer: Actor | null): Promise<Thre
     }),
   ]);
   const unsafe = new Set(unsafeRows.map((f) => `${f.postType}:${f.postId}`));
-  const modState = (t: string, p: { id: number; hiddenAt?: Date | null; deletedAt?: Date | null }) => ({
+  const modState = (
+    t: string,
+    p: { id: number; authorId: number; hiddenAt?: Date | null; hiddenReason?: string | null; deletedAt?: Date | null },
+  ) => ({
     cautionUnsafe: unsafe.has(`${t}:${p.id}`),
     hiddenAt: p.hiddenAt?.toISOString() ?? null,
+    hiddenReason: p.hiddenAt ? (p.hiddenReason ?? null) : null,
+    ownPost: viewerId !== null && p.authorId === viewerId,
     deletedAt: p.deletedAt?.toISOString() ?? null,
   });
   const marked = new Set(marks.map((m) => `${m.postType}:${m.postId}`));
