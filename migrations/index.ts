@@ -11,6 +11,7 @@ import * as listIndexes from './009-list-indexes';
 import * as rateLimits from './010-rate-limits';
 import * as sessionVersion from './011-session-version';
 import * as whatFixedIt from './012-what-fixed-it';
+import * as appeals from './014-appeals';
 
 type Step = (params: { context: QueryInterface }) => Promise<void>;
 
@@ -31,4 +32,5 @@ export const migrations: { name: string; up: Step; down: Step }[] = [
   { name: '010-rate-limits', ...rateLimits },
   { name: '011-session-version', ...sessionVersion },
   { name: '012-what-fixed-it', ...whatFixedIt },
+  { name: '014-appeals', ...appeals },
 ];

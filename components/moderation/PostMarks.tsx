@@ -1,5 +1,6 @@
 import { Caution } from '@/components/Caution';
 import type { PostType } from '@/lib/vocabulary';
+import { AppealForm } from './AppealForm';
 
 /**
  * What a thread shows about a post's review state, above its text: an amber caution
@@ -12,17 +13,26 @@ export function PostMarks({
   kind,
 }: {
   post: {
+    id: number;
     cautionUnsafe: boolean;
     hiddenAt: string | null;
     hiddenReason?: string | null;
     ownPost?: boolean;
+    inQueue?: boolean;
     deletedAt: string | null;
   };
   kind: PostType;
 }) {
-  if (!post.cautionUnsafe && !post.hiddenAt && !post.deletedAt) return null;
+  if (!post.cautionUnsafe && !post.hiddenAt && !post.deletedAt && !post.inQueue) return null;
   return (
     <>
+      {post.inQueue ? (
+        <p className="font-sans text-sm" data-testid="in-review-queue">
+          <a href={`/review#review-${kind}-${post.id}`} className="cw-link font-semibold">
+            Flagged: act on it in the review queue
+          </a>
+        </p>
+      ) : null}
       {post.hiddenAt || post.deletedAt ? (
         <p className="flex gap-2 self-start font-sans text-xs font-semibold" data-testid="moderation-state">
           {post.hiddenAt ? (
@@ -42,18 +52,9 @@ export function PostMarks({
       {post.hiddenAt && post.hiddenReason ? (
         <p className="font-sans text-sm" data-testid="hidden-reason">
           <span className="font-semibold">Why it is hidden:</span> {post.hiddenReason}
-          {post.ownPost ? (
-            <>
-              {' '}
-              You can ask the moderators to review this decision from{' '}
-              <a href="/settings#notices" className="cw-link">
-                your notices
-              </a>
-              .
-            </>
-          ) : null}
         </p>
       ) : null}
+      {post.hiddenAt && post.ownPost && !post.deletedAt ? <AppealForm postType={kind} postId={post.id} /> : null}
       {post.cautionUnsafe ? (
         <Caution title="Flagged as unsafe advice">
           A member has flagged this {kind} as possibly unsafe, and a moderator will review it. Until then, check it

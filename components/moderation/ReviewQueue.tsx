@@ -1,6 +1,6 @@
 'use client';
 
-import { useId, useState } from 'react';
+import { useEffect, useId, useState } from 'react';
 import Link from 'next/link';
 import useSWR from 'swr';
 import { getJson } from '@/components/forms/api';
@@ -34,6 +34,15 @@ export function ReviewQueue({ viewer }: { viewer: { id: number; handle: string; 
     getJson<{ items: ReviewItemView[] }>,
     { revalidateOnFocus: false },
   );
+
+  // a thread's "act on it in the review queue" link names the item; the list arrives after the page
+  const loaded = !!data;
+  useEffect(() => {
+    if (!loaded || !window.location.hash) return;
+    const target = document.getElementById(window.location.hash.slice(1));
+    target?.scrollIntoView({ block: 'start' });
+    target?.focus({ preventScroll: true });
+  }, [loaded]);
 
   return (
     <div className="flex flex-col gap-4">
@@ -127,7 +136,7 @@ export function ReviewQueue({ viewer }: { viewer: { id: number; handle: string; 
           </p>
           <ol className="flex flex-col gap-4">
             {data.items.map((item) => (
-              <li key={`${item.post.type}:${item.post.id}`}>
+              <li key={`${item.appeal ? `appeal-${item.appeal.id}` : 'flags'}:${item.post.type}:${item.post.id}`}>
                 <ReviewItem
                   item={item}
                   viewer={viewer}

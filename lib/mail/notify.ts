@@ -207,10 +207,17 @@ export async function notifyModeration(
     reason: string;
     questionId: number | null;
     postLabel: string;
+    /** the post's place in its thread ("answer-12"), so the link opens at it */
+    anchor?: string;
+    /** the author still sees the post, marked, and may ask for a review from it */
+    appealable?: boolean;
   },
 ) {
   const to = await recipient(m.authorId, m.moderatorId, 'notifyModeration', transaction);
   if (!to) return;
+  const title = m.questionId
+    ? (await initModels().Question.findByPk(m.questionId, { attributes: ['title'], transaction }))?.title
+    : null;
   await queue(
     `moderation:${m.auditId}:to:${to.id}`,
     'moderation',
@@ -221,12 +228,14 @@ export async function notifyModeration(
       preview: `${m.words}. Reason: ${m.reason}`,
       heading: m.words,
       paragraphs: [
-        `This concerns ${m.postLabel}.`,
+        title ? `This concerns ${m.postLabel} in “${title}”.` : `This concerns ${m.postLabel}.`,
         `The moderator’s reason: ${m.reason}`,
-        'Your notices in Settings keep a copy. If you think this was a mistake, reply in the thread or write to the moderators from your settings page.',
+        m.appealable
+          ? 'Your notices in Settings keep a copy. You still see the post in the thread, marked with this reason; if you think this was a mistake, ask the moderators to review the decision from there.'
+          : 'Your notices in Settings keep a copy.',
       ],
       action: m.questionId
-        ? { label: 'Open the thread', url: threadUrl(m.questionId) }
+        ? { label: 'Open the thread', url: threadUrl(m.questionId, m.anchor) }
         : { label: 'Open your settings', url: `${siteUrl()}/settings` },
       reason: 'You get this because a moderator acted on something you posted.',
     },

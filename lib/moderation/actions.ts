@@ -57,7 +57,7 @@ export async function moderate(
     until?: string;
   },
 ) {
-  const { Flag, Question, QuestionTag, Tag, User, Notice } = initModels();
+  const { Flag, Question, QuestionTag, Tag, User, Notice, Appeal } = initModels();
   const done = await getSequelize().transaction(async (transaction) => {
     const { post, questionId } = await loadPost(input.postType, input.postId, transaction);
     if (post.authorId === moderator.id) throw new ForumError(403, 'Moderators cannot act on their own posts.');
@@ -166,6 +166,11 @@ export async function moderate(
         break;
       }
     }
+    // the action is the moderator's answer to any appeal waiting on this post
+    const [appealsDecided] = await Appeal.update(
+      { status: 'decided', resolvedBy: moderator.id, resolvedAt: now },
+      { where: { postType: input.postType, postId: input.postId, status: 'open' }, transaction },
+    );
     const audit = await recordAudit(
       {
         actorId: moderator.id,
@@ -177,26 +182,34 @@ export async function moderate(
       },
       transaction,
     );
+    // a dismissal answering an appeal keeps the decision, and the author who asked hears so
+    const words =
+      input.action === 'dismiss' && appealsDecided > 0
+        ? 'A moderator reviewed your request and kept the decision'
+        : WORDS[input.action];
     const untilWords = input.action === 'suspend' ? ` until ${formatDate(details.until as string)}` : '';
     await Notice.create(
       {
         userId: post.authorId,
         kind: 'moderation',
-        message: `${WORDS[input.action]}${untilWords}. Reason: ${input.reason}`,
+        message: `${words}${untilWords}. Reason: ${input.reason}`,
         link: questionId ? `/questions/${questionId}` : null,
         readAt: null,
       },
       { transaction },
     );
-    if (input.action !== 'dismiss') {
+    if (input.action !== 'dismiss' || appealsDecided > 0) {
       await notifyModeration(transaction, {
         auditId: audit.id,
         authorId: post.authorId,
         moderatorId: moderator.id,
-        words: WORDS[input.action],
+        words,
         reason: input.reason,
         questionId,
         postLabel: POST_LABEL[input.postType],
+        anchor:
+          input.postType === 'answer' || input.postType === 'reply' ? `${input.postType}-${input.postId}` : undefined,
+        appealable: input.action === 'hide' && (input.postType === 'answer' || input.postType === 'reply'),
       });
     }
     return { auditId: audit.id, questionId };

@@ -8,7 +8,7 @@ import { photoQuestionId } from './posts';
  * Posts with open flags: those flagged as unsafe advice first (a reader may act on it
  * while it waits), then oldest flag first; each with its context, the flaggers' notes and its revisions. */
 export async function reviewQueue(filter: { reason?: FlagReason; olderThanHours?: number }) {
-  const { Flag, User, Question, Answer, Reply, Revision, Tag, Photo, FieldLogEntry } = initModels();
+  const { Flag, User, Question, Answer, Reply, Revision, Tag, Photo, FieldLogEntry, Appeal } = initModels();
   const where: Record<string | symbol, unknown> = { status: 'open', postType: { [Op.in]: [...MODERATED_TYPES] } };
   if (filter.reason) where.reason = filter.reason;
   if (filter.olderThanHours) where.createdAt = { [Op.lte]: new Date(Date.now() - filter.olderThanHours * 3_600_000) };
@@ -23,8 +23,26 @@ export async function reviewQueue(filter: { reason?: FlagReason; olderThanHours?
     const k = `${f.postType}:${f.postId}`;
     groups.set(k, [...(groups.get(k) ?? []), f]);
   }
+  // each open appeal is an item of its own, beside any flags on the same post
+  const appeals = filter.reason
+    ? []
+    : await Appeal.findAll({
+        where: {
+          status: 'open',
+          ...(filter.olderThanHours
+            ? { createdAt: { [Op.lte]: new Date(Date.now() - filter.olderThanHours * 3_600_000) } }
+            : {}),
+        },
+        include: [{ model: User, as: 'user', attributes: ['handle', 'displayName'] }],
+        order: [['createdAt', 'ASC']],
+        limit: 200,
+      });
+  const targets = [
+    ...[...groups].map(([k, fs]) => ({ k, fs, appeal: null as (typeof appeals)[number] | null })),
+    ...appeals.map((a) => ({ k: `${a.postType}:${a.postId}`, fs: [] as typeof flags, appeal: a })),
+  ];
   const items = [];
-  for (const [k, fs] of groups) {
+  for (const { k, fs, appeal } of targets) {
     const [type, idText] = k.split(':') as [ModeratedType, string];
     const id = Number(idText);
     type QueuedPost = {
@@ -114,6 +132,14 @@ export async function reviewQueue(filter: { reason?: FlagReason; olderThanHours?
         lockedAt: type === 'question' ? (q?.lockedAt?.toISOString() ?? null) : undefined,
         photoId: post.photoId ?? null,
       },
+      appeal: appeal
+        ? {
+            id: appeal.id,
+            text: appeal.text,
+            by: appeal.user?.displayName ?? 'the author',
+            createdAt: appeal.createdAt.toISOString(),
+          }
+        : null,
       flags: fs.map((f) => ({
         id: f.id,
         reason: f.reason,
@@ -132,8 +158,9 @@ export async function reviewQueue(filter: { reason?: FlagReason; olderThanHours?
       })),
     });
   }
-  // a stable sort: within each half the oldest-flag-first order of the groups stays
+  // unsafe advice first, then the oldest flag or appeal
   const unsafe = (i: (typeof items)[number]) => (i.flags.some((f) => f.reason === 'unsafe') ? 0 : 1);
-  items.sort((a, b) => unsafe(a) - unsafe(b));
+  const since = (i: (typeof items)[number]) => i.appeal?.createdAt ?? i.flags[0]?.createdAt ?? '';
+  items.sort((a, b) => unsafe(a) - unsafe(b) || since(a).localeCompare(since(b)));
   return { items };
 }

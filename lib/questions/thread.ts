@@ -36,6 +36,8 @@ export interface ReplyView {
   hiddenReason: string | null;
   /** the reader wrote it (the author is shown their own hidden post, marked) */
   ownPost: boolean;
+  /** open flags wait on it in the review queue (only ever true for moderators) */
+  inQueue: boolean;
   deletedAt: string | null;
 }
 export interface AnswerView {
@@ -55,6 +57,8 @@ export interface AnswerView {
   hiddenReason: string | null;
   /** the reader wrote it (the author is shown their own hidden post, marked) */
   ownPost: boolean;
+  /** open flags wait on it in the review queue (only ever true for moderators) */
+  inQueue: boolean;
   deletedAt: string | null;
 }
 export interface ThreadView {
@@ -83,6 +87,8 @@ export interface ThreadView {
   hiddenReason: string | null;
   /** the reader wrote it (the author is shown their own hidden post, marked) */
   ownPost: boolean;
+  /** open flags wait on it in the review queue (only ever true for moderators) */
+  inQueue: boolean;
   deletedAt: string | null;
   lockedAt: string | null;
 }
@@ -157,18 +163,21 @@ export async function loadThread(id: number, viewer: Actor | null): Promise<Thre
     viewerId
       ? HelpfulMark.findAll({ where: { userId: viewerId, [Op.or]: thisThread }, attributes: ['postType', 'postId'] })
       : Promise.resolve([]),
-    // an open "unsafe advice" flag shows readers a caution until a moderator reviews it
+    // an open "unsafe advice" flag shows readers a caution until a moderator reviews it;
+    // moderators also learn which posts wait in the queue, to open them there
     Flag.findAll({
-      where: { status: 'open', reason: 'unsafe', [Op.or]: thisThread },
-      attributes: ['postType', 'postId'],
+      where: { status: 'open', ...(seeHidden ? {} : { reason: 'unsafe' }), [Op.or]: thisThread },
+      attributes: ['postType', 'postId', 'reason'],
     }),
   ]);
-  const unsafe = new Set(unsafeRows.map((f) => `${f.postType}:${f.postId}`));
+  const unsafe = new Set(unsafeRows.filter((f) => f.reason === 'unsafe').map((f) => `${f.postType}:${f.postId}`));
+  const flagged = new Set(seeHidden ? unsafeRows.map((f) => `${f.postType}:${f.postId}`) : []);
   const modState = (
     t: string,
     p: { id: number; authorId: number; hiddenAt?: Date | null; hiddenReason?: string | null; deletedAt?: Date | null },
   ) => ({
     cautionUnsafe: unsafe.has(`${t}:${p.id}`),
+    inQueue: flagged.has(`${t}:${p.id}`),
     hiddenAt: p.hiddenAt?.toISOString() ?? null,
     hiddenReason: p.hiddenAt ? (p.hiddenReason ?? null) : null,
     ownPost: viewerId !== null && p.authorId === viewerId,
