@@ -61,6 +61,14 @@ export async function moderate(
   const done = await getSequelize().transaction(async (transaction) => {
     const { post, questionId } = await loadPost(input.postType, input.postId, transaction);
     if (post.authorId === moderator.id) throw new ForumError(403, 'Moderators cannot act on their own posts.');
+    const author = await User.findByPk(post.authorId, { attributes: ['id', 'role'], transaction });
+    if (author) checkRank(moderator, author.role);
+    const ownFlag = await Flag.findOne({
+      where: { postType: input.postType, postId: input.postId, flaggerId: moderator.id, status: 'open' },
+      transaction,
+    });
+    if (ownFlag)
+      throw new ForumError(403, 'Moderators cannot act on a post they flagged themselves; another moderator will.');
     // the panel offers only the actions that fit; a request for another (a stale page, a script) is refused
     const unfit = whyNotApplicable(input.action, {
       type: input.postType,
@@ -74,14 +82,6 @@ export async function moderate(
         QUESTION_ONLY_ACTIONS.includes(input.action) && input.postType !== 'question' ? 'postType' : 'action';
       throw new ForumError(422, `${field}: ${unfit}`, field);
     }
-    const author = await User.findByPk(post.authorId, { attributes: ['id', 'role'], transaction });
-    if (author) checkRank(moderator, author.role);
-    const ownFlag = await Flag.findOne({
-      where: { postType: input.postType, postId: input.postId, flaggerId: moderator.id, status: 'open' },
-      transaction,
-    });
-    if (ownFlag)
-      throw new ForumError(403, 'Moderators cannot act on a post they flagged themselves; another moderator will.');
     const now = new Date();
     const details: Record<string, unknown> = { questionId };
     const settleFlags = (status: 'dismissed' | 'upheld') =>
