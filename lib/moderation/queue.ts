@@ -5,8 +5,10 @@ import type { Role } from '@/lib/auth/policy';
 import { photoQuestionId } from './posts';
 
 /**
- * Posts with open flags: those flagged as unsafe advice first (a reader may act on it
- * while it waits), then oldest flag first; each with its context, the flaggers' notes and its revisions. */
+ * Posts with open flags, and authors' open appeals: those flagged as unsafe advice first
+ * (a reader may act on such advice while it waits), then the oldest flag or appeal first;
+ * each with its context, the flaggers' notes and its revisions.
+ */
 export async function reviewQueue(filter: { reason?: FlagReason; olderThanHours?: number }) {
   const { Flag, User, Question, Answer, Reply, Revision, Tag, Photo, FieldLogEntry, Appeal } = initModels();
   const where: Record<string | symbol, unknown> = { status: 'open', postType: { [Op.in]: [...MODERATED_TYPES] } };
@@ -159,8 +161,9 @@ export async function reviewQueue(filter: { reason?: FlagReason; olderThanHours?
     });
   }
   // unsafe advice first, then the oldest flag or appeal
-  const unsafe = (i: (typeof items)[number]) => (i.flags.some((f) => f.reason === 'unsafe') ? 0 : 1);
-  const since = (i: (typeof items)[number]) => i.appeal?.createdAt ?? i.flags[0]?.createdAt ?? '';
+  type Keys = { flags: { reason: string; createdAt: string }[]; appeal: { createdAt: string } | null };
+  const unsafe = (i: Keys) => (i.flags.some((f) => f.reason === 'unsafe') ? 0 : 1);
+  const since = (i: Keys) => i.appeal?.createdAt ?? i.flags[0]?.createdAt ?? '';
   items.sort((a, b) => unsafe(a) - unsafe(b) || since(a).localeCompare(since(b)));
   return { items };
 }
