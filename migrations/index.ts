@@ -12,6 +12,7 @@ import * as rateLimits from './010-rate-limits';
 import * as sessionVersion from './011-session-version';
 import * as whatFixedIt from './012-what-fixed-it';
 import * as safetyCheckText from './013-safety-check-text';
+import * as appeals from './014-appeals';
 
 type Step = (params: { context: QueryInterface }) => Promise<void>;
 
@@ -33,4 +34,5 @@ export const migrations: { name: string; up: Step; down: Step }[] = [
   { name: '011-session-version', ...sessionVersion },
   { name: '012-what-fixed-it', ...whatFixedIt },
   { name: '013-safety-check-text', ...safetyCheckText },
+  { name: '014-appeals', ...appeals },
 ];

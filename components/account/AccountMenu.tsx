@@ -72,6 +72,15 @@ export function AccountMenu() {
         title={name}
       >
         <span className="truncate">{name}</span>
+        {data.user.unreadNotices > 0 ? (
+          <span
+            className="shrink-0 rounded-full bg-signal-200 px-1.5 text-xs leading-5 font-semibold text-creek-900"
+            data-testid="notice-badge"
+          >
+            {data.user.unreadNotices}
+            <span className="sr-only">{data.user.unreadNotices === 1 ? ' unread notice' : ' unread notices'}</span>
+          </span>
+        ) : null}
         <svg
           viewBox="0 0 12 12"
           className="h-3 w-3 shrink-0 transition-transform group-open:rotate-180"
@@ -91,6 +100,7 @@ export function AccountMenu() {
         </Link>
         <Link href="/settings" className={ITEM} onClick={close}>
           Settings and notices
+          {data.user.unreadNotices > 0 ? ` (${data.user.unreadNotices} new)` : ''}
         </Link>
         {tools.length ? (
           <div
