@@ -1,6 +1,7 @@
 import matter from 'gray-matter';
 import { initModels } from '@/models';
 import { isDatabaseUnavailable } from '@/lib/db/errors';
+import { isoDay } from '@/lib/dates';
 import type { SafetyVerdict } from '@/models/SafetyCheck';
 import { stripEditorComments } from './content';
 
@@ -45,7 +46,7 @@ function updatedOf(text: string | null): string | null {
   if (!text) return null;
   try {
     const u = (matter(text).data as { updated?: unknown }).updated;
-    if (u instanceof Date) return u.toISOString().slice(0, 10);
+    if (u instanceof Date) return isoDay(u);
     return typeof u === 'string' && /^\d{4}-\d{2}-\d{2}$/.test(u) ? u : null;
   } catch {
     return null;
