@@ -72,10 +72,24 @@ export const MAIL_SAMPLES: { kind: string; content: MailContent }[] = [
       paragraphs: [
         `This concerns your answer in “${title}”.`,
         'The moderator’s reason: an air chamber made from a glass jar holds stored energy and can burst.',
-        'Your notices in Settings keep a copy. If you think this was a mistake, reply in the thread or write to the moderators from your settings page.',
+        'Your notices in Settings keep a copy. You still see the post in the thread, marked with this reason; if you think this was a mistake, ask the moderators to review the decision from there.',
+      ],
+      action: { label: 'Open the thread', url: `${site}/questions/1#answer-12` },
+      footer: footer('You get this because a moderator acted on something you posted.'),
+    },
+  },
+  {
+    kind: 'withdrawn',
+    content: {
+      subject: `Advice withdrawn as unsafe: ${title}`,
+      preview: 'A moderator withdrew an answer in this thread as unsafe advice.',
+      heading: 'An answer was withdrawn as unsafe',
+      paragraphs: [
+        `A moderator withdrew an answer in “${title}” as unsafe advice. If you read it in an earlier e-mail, please do not follow it.`,
+        'The thread shows the answers that still stand.',
       ],
       action: { label: 'Open the thread', url: `${site}/questions/1` },
-      footer: footer('You get this because a moderator acted on something you posted.'),
+      footer: footer('You get this because you asked or follow this question on Clackwater.'),
     },
   },
   {
