@@ -18,7 +18,7 @@ function StateLine({ id, state, units }: { id: number; state: QuestionState; uni
             <>
               {' — '}
               <Link href={`/questions/${id}#answer-${state.answerId}`} className="font-serif underline-offset-2">
-                {withReadings(state.line, units)}
+                <span data-member-words>{withReadings(state.line, units)}</span>
               </Link>
             </>
           ) : null}

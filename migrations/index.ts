@@ -11,6 +11,9 @@ import * as listIndexes from './009-list-indexes';
 import * as rateLimits from './010-rate-limits';
 import * as sessionVersion from './011-session-version';
 import * as whatFixedIt from './012-what-fixed-it';
+import * as safetyCheckText from './013-safety-check-text';
+import * as appeals from './014-appeals';
+import * as hiddenReasonLength from './015-hidden-reason-length';
 import * as sites from './016-sites';
 
 type Step = (params: { context: QueryInterface }) => Promise<void>;
@@ -32,5 +35,8 @@ export const migrations: { name: string; up: Step; down: Step }[] = [
   { name: '010-rate-limits', ...rateLimits },
   { name: '011-session-version', ...sessionVersion },
   { name: '012-what-fixed-it', ...whatFixedIt },
+  { name: '013-safety-check-text', ...safetyCheckText },
+  { name: '014-appeals', ...appeals },
+  { name: '015-hidden-reason-length', ...hiddenReasonLength },
   { name: '016-sites', ...sites },
 ];

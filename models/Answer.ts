@@ -35,7 +35,7 @@ export class Answer extends Model<InferAttributes<Answer>, InferCreationAttribut
         helpfulCount: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false, defaultValue: 0 },
         calculationId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: true },
         hiddenAt: { type: DataTypes.DATE, allowNull: true },
-        hiddenReason: { type: DataTypes.STRING(300), allowNull: true },
+        hiddenReason: { type: DataTypes.STRING(1000), allowNull: true },
         deletedAt: { type: DataTypes.DATE, allowNull: true },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,

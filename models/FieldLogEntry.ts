@@ -81,7 +81,7 @@ export class FieldLogEntry extends Model<InferAttributes<FieldLogEntry>, InferCr
         notes: { type: DataTypes.TEXT, allowNull: false },
         typed: { type: DataTypes.JSON, allowNull: false },
         hiddenAt: { type: DataTypes.DATE, allowNull: true },
-        hiddenReason: { type: DataTypes.STRING(300), allowNull: true },
+        hiddenReason: { type: DataTypes.STRING(1000), allowNull: true },
         deletedAt: { type: DataTypes.DATE, allowNull: true },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,

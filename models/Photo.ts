@@ -41,7 +41,7 @@ export class Photo extends Model<InferAttributes<Photo>, InferCreationAttributes
         bytes: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false },
         alt: { type: DataTypes.STRING(200), allowNull: true },
         hiddenAt: { type: DataTypes.DATE, allowNull: true },
-        hiddenReason: { type: DataTypes.STRING(300), allowNull: true },
+        hiddenReason: { type: DataTypes.STRING(1000), allowNull: true },
         deletedAt: { type: DataTypes.DATE, allowNull: true },
         createdAt: DataTypes.DATE,
       },

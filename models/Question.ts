@@ -55,7 +55,7 @@ export class Question extends Model<InferAttributes<Question>, InferCreationAttr
         guideSlug: { type: DataTypes.STRING(80), allowNull: true },
         lastActivityAt: { type: DataTypes.DATE, allowNull: true },
         hiddenAt: { type: DataTypes.DATE, allowNull: true },
-        hiddenReason: { type: DataTypes.STRING(300), allowNull: true },
+        hiddenReason: { type: DataTypes.STRING(1000), allowNull: true },
         deletedAt: { type: DataTypes.DATE, allowNull: true },
         lockedAt: { type: DataTypes.DATE, allowNull: true },
         fieldLogEntryId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: true },

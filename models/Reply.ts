@@ -42,7 +42,7 @@ export class Reply extends Model<InferAttributes<Reply>, InferCreationAttributes
         body: { type: DataTypes.TEXT, allowNull: false },
         helpfulCount: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false, defaultValue: 0 },
         hiddenAt: { type: DataTypes.DATE, allowNull: true },
-        hiddenReason: { type: DataTypes.STRING(300), allowNull: true },
+        hiddenReason: { type: DataTypes.STRING(1000), allowNull: true },
         deletedAt: { type: DataTypes.DATE, allowNull: true },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,

@@ -23,6 +23,8 @@ export class SafetyCheck extends Model<InferAttributes<SafetyCheck>, InferCreati
   declare expertId: ForeignKey<User['id']>;
   declare verdict: SafetyVerdict;
   declare notes: string | null;
+  /** The guide file the expert read, whole; null for checks older than migration 013. */
+  declare checkedText: CreationOptional<string | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -36,6 +38,7 @@ export class SafetyCheck extends Model<InferAttributes<SafetyCheck>, InferCreati
         contentHash: { type: DataTypes.CHAR(64), allowNull: false },
         verdict: { type: DataTypes.ENUM(...SAFETY_VERDICTS), allowNull: false },
         notes: { type: DataTypes.TEXT, allowNull: true },
+        checkedText: { type: DataTypes.TEXT('medium'), allowNull: true },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

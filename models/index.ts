@@ -19,6 +19,7 @@ import { HelpfulMark } from './HelpfulMark';
 import { QuestionFollow } from './QuestionFollow';
 import { Photo } from './Photo';
 import { Flag } from './Flag';
+import { Appeal } from './Appeal';
 import { AuditEntry } from './AuditEntry';
 import { FieldLogEntry } from './FieldLogEntry';
 import { FieldLogTrial } from './FieldLogTrial';
@@ -43,6 +44,7 @@ export {
   QuestionFollow,
   Photo,
   Flag,
+  Appeal,
   AuditEntry,
   FieldLogEntry,
   FieldLogTrial,
@@ -74,6 +76,7 @@ export function initModels(sequelize: Sequelize = getSequelize()) {
     QuestionFollow.initModel(sequelize);
     Photo.initModel(sequelize);
     Flag.initModel(sequelize);
+    Appeal.initModel(sequelize);
     AuditEntry.initModel(sequelize);
     FieldLogEntry.initModel(sequelize);
     FieldLogTrial.initModel(sequelize);
@@ -100,6 +103,7 @@ export function initModels(sequelize: Sequelize = getSequelize()) {
     Question.hasMany(Photo, { as: 'photos', foreignKey: 'questionId' });
     Answer.hasMany(Photo, { as: 'photos', foreignKey: 'answerId' });
     Flag.belongsTo(User, { as: 'flagger', foreignKey: 'flaggerId' });
+    Appeal.belongsTo(User, { as: 'user', foreignKey: 'userId' });
     AuditEntry.belongsTo(User, { as: 'actor', foreignKey: 'actorId' });
     FieldLogEntry.belongsTo(User, { as: 'author', foreignKey: 'authorId' });
     FieldLogEntry.hasMany(FieldLogTrial, { as: 'trials', foreignKey: 'entryId' });
@@ -129,6 +133,7 @@ export function initModels(sequelize: Sequelize = getSequelize()) {
     QuestionFollow,
     Photo,
     Flag,
+    Appeal,
     AuditEntry,
     FieldLogEntry,
     FieldLogTrial,

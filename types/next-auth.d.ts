@@ -9,6 +9,8 @@ declare module 'next-auth' {
       handle: string;
       /** the member's saved unit system, read fresh with every session */
       units: 'US' | 'metric';
+      /** notices not yet read (the header's badge), counted fresh with every session */
+      unreadNotices: number;
       name?: string | null;
       email?: string | null;
     };
@@ -24,5 +26,6 @@ declare module 'next-auth/jwt' {
     sv?: number;
     /** the saved unit system ('US' | 'metric') */
     units?: string;
+    unread?: number;
   }
 }

@@ -3,6 +3,8 @@ import Link from 'next/link';
 import { listGuides } from '@/lib/guides/content';
 import { GUIDE_LEVELS } from '@/lib/guides/frontmatter';
 import { LevelBadge } from '@/components/guides/LevelBadge';
+import { SafetyBadge } from '@/components/guides/SafetyBadge';
+import { safetyStatesIfReachable } from '@/lib/guides/safety';
 
 export const metadata: Metadata = {
   title: 'Guides',
@@ -19,6 +21,7 @@ export default async function GuidesIndex({ searchParams }: { searchParams: Prom
   const all = listGuides();
   const tags = [...new Set(all.flatMap((g) => g.meta.tags))].sort();
   const shown = all.filter((g) => (!level || g.meta.level === level) && (!tag || g.meta.tags.includes(tag)));
+  const states = await safetyStatesIfReachable(shown);
   const href = (next: { level?: string | null; tag?: string | null }) => {
     const q = new URLSearchParams();
     const l = next.level === undefined ? level : next.level;
@@ -74,6 +77,9 @@ export default async function GuidesIndex({ searchParams }: { searchParams: Prom
           ))}
         </div>
       </nav>
+      {states === null ? (
+        <p className="cw-muted text-sm">Safety checks could not be looked up just now; the guides read as usual.</p>
+      ) : null}
       {shown.length === 0 ? (
         <p className="cw-muted">No guide matches those filters.</p>
       ) : (
@@ -90,6 +96,11 @@ export default async function GuidesIndex({ searchParams }: { searchParams: Prom
                 </Link>
               </h2>
               <p className="cw-muted text-sm">{g.meta.summary}</p>
+              {states?.[g.slug] ? (
+                <p className="text-xs" data-testid="guide-safety">
+                  <SafetyBadge state={states[g.slug]!} />
+                </p>
+              ) : null}
             </li>
           ))}
         </ol>

@@ -5,6 +5,7 @@ import { usePathname } from 'next/navigation';
 import { useEffect, useRef } from 'react';
 import { signOut, useSession } from 'next-auth/react';
 import { can, sessionActor, type Action } from '@/lib/auth/policy';
+import { signInPath } from '@/lib/auth/return-path';
 
 /** The workspaces a role may open, each behind the policy row that opens it. */
 const TOOLS: { href: string; label: string; action: Action }[] = [
@@ -52,7 +53,7 @@ export function AccountMenu() {
   if (!data?.user) {
     return (
       <Link
-        href="/sign-in"
+        href={signInPath(pathname)}
         className="inline-flex min-h-10 items-center rounded px-1 text-sm font-medium whitespace-nowrap no-underline hover:underline"
       >
         Sign in
@@ -71,6 +72,15 @@ export function AccountMenu() {
         title={name}
       >
         <span className="truncate">{name}</span>
+        {data.user.unreadNotices > 0 ? (
+          <span
+            className="shrink-0 rounded-full bg-signal-200 px-1.5 text-xs leading-5 font-semibold text-creek-900"
+            data-testid="notice-badge"
+          >
+            {data.user.unreadNotices}
+            <span className="sr-only">{data.user.unreadNotices === 1 ? ' unread notice' : ' unread notices'}</span>
+          </span>
+        ) : null}
         <svg
           viewBox="0 0 12 12"
           className="h-3 w-3 shrink-0 transition-transform group-open:rotate-180"
@@ -90,6 +100,7 @@ export function AccountMenu() {
         </Link>
         <Link href="/settings" className={ITEM} onClick={close}>
           Settings and notices
+          {data.user.unreadNotices > 0 ? ` (${data.user.unreadNotices} new)` : ''}
         </Link>
         {tools.length ? (
           <div

@@ -1,9 +1,11 @@
 'use client';
 
+import Link from 'next/link';
 import useSWR from 'swr';
 import { getJson } from '@/components/forms/api';
 import { useSession } from 'next-auth/react';
 import { RecordSafetyCheck } from './RecordSafetyCheck';
+import { SafetyBadge } from './SafetyBadge';
 import type { SafetyCheckView, SafetyStatus } from '@/lib/guides/safety';
 import { can, sessionActor } from '@/lib/auth/policy';
 import { formatDate } from '@/lib/dates';
@@ -15,11 +17,15 @@ interface Payload {
 
 const day = formatDate;
 
+/** The day part of a timestamp or calendar day, to compare days as the reader sees them. */
+const dayOf = (d: string) => d.slice(0, 10);
+
 /**
  * The guide's safety check line. The page itself is static; the checks are read
  * live so a new check, or an edit that makes the last one stale, shows at once.
+ * `updated` is the guide's own "updated" day, set against the check's date.
  */
-export function SafetyCheckStatus({ slug }: { slug: string }) {
+export function SafetyCheckStatus({ slug, updated }: { slug: string; updated: string }) {
   const { data, error, isLoading, mutate } = useSWR(`/api/guides/${slug}/safety-checks`, getJson<Payload>, {
     revalidateOnFocus: false,
   });
@@ -30,29 +36,41 @@ export function SafetyCheckStatus({ slug }: { slug: string }) {
   if (error || !data) return <p className="cw-muted text-sm">Safety checks could not be loaded just now.</p>;
 
   const { status } = data;
+  const changesHref = (id?: number) => `/guides/${slug}/changes${id === undefined ? '' : `?check=${id}`}`;
   return (
     <div data-testid="safety-check-status" className="font-sans text-sm">
-      {status.state === 'checked' ? (
-        <p className="flex flex-wrap items-center gap-2">
-          <span className="rounded bg-moss px-2 py-0.5 font-semibold text-limestone-50">Safety checked</span>
+      <p className="flex flex-wrap items-center gap-2">
+        <SafetyBadge state={status.state} />
+        {status.state === 'checked' ? (
+          <span>{`checked by ${status.latest.expert.displayName} on ${day(status.latest.checkedAt)}`}</span>
+        ) : status.state === 'needs changes' ? (
           <span>
-            {`checked by ${status.latest.expert.displayName} on ${day(status.latest.checkedAt)}`}
-            {status.latest.verdict === 'needs changes' ? ' — needs changes' : ''}
+            {`checked by ${status.latest.expert.displayName} on ${day(status.latest.checkedAt)}, who asked for changes to this text`}
           </span>
-        </p>
-      ) : status.state === 'changed' ? (
-        <p className="flex flex-wrap items-center gap-2">
-          <span className="rounded bg-signal px-2 py-0.5 font-semibold text-creek-950">
-            Changed since its last safety check
+        ) : status.state === 'changed' ? (
+          <span data-testid="safety-check-dates">
+            {`last checked by ${status.latest.expert.displayName} on ${day(status.latest.checkedAt)} (${verdictWords(status.latest.verdict)})`}
+            {status.latest.checkedVersionUpdated
+              ? `, on the version updated ${day(status.latest.checkedVersionUpdated)}`
+              : ''}
+            {dayOf(updated) > dayOf(status.latest.checkedAt)
+              ? `. This version was updated ${day(updated)}, after that check.`
+              : '. The text has changed since that check.'}
           </span>
-          <span>{`last checked by ${status.latest.expert.displayName} on ${day(status.latest.checkedAt)}, before the latest edit`}</span>
-        </p>
-      ) : (
-        <p className="flex items-center gap-2">
-          <span className="rounded border border-creek-300 px-2 py-0.5 font-semibold">Not yet checked</span>
+        ) : (
           <span className="cw-muted">No expert has recorded a safety check on this guide yet.</span>
+        )}
+      </p>
+      {status.state === 'needs changes' && status.latest.notes ? (
+        <p className="mt-1">{`What the expert asked for: ${status.latest.notes}`}</p>
+      ) : null}
+      {status.state === 'changed' && status.latest.hasText ? (
+        <p className="mt-1">
+          <Link href={changesHref()} className="cw-link">
+            See what changed since that check
+          </Link>
         </p>
-      )}
+      ) : null}
       {data.checks.length > 0 ? (
         <details className="mt-2">
           <summary className="cw-link cursor-pointer">History of safety checks ({data.checks.length})</summary>
@@ -61,7 +79,16 @@ export function SafetyCheckStatus({ slug }: { slug: string }) {
               <li key={c.id} className="border-l-2 border-creek-200 pl-3">
                 <span className="font-semibold">{c.verdict === 'sound' ? 'Sound' : 'Needs changes'}</span>
                 {` — ${c.expert.displayName}, ${day(c.checkedAt)}`}
-                {c.current ? '' : ' (an earlier version)'}
+                {c.current ? '' : ' (an earlier version'}
+                {!c.current && c.hasText ? (
+                  <>
+                    {': '}
+                    <Link href={changesHref(c.id)} className="cw-link">
+                      what changed since
+                    </Link>
+                  </>
+                ) : null}
+                {c.current ? '' : ')'}
                 {c.notes ? <p className="cw-muted mt-1">{c.notes}</p> : null}
               </li>
             ))}
@@ -71,4 +98,8 @@ export function SafetyCheckStatus({ slug }: { slug: string }) {
       {isExpert ? <RecordSafetyCheck slug={slug} onRecorded={() => mutate()} /> : null}
     </div>
   );
+}
+
+function verdictWords(v: SafetyCheckView['verdict']): string {
+  return v === 'sound' ? 'sound' : 'needs changes';
 }

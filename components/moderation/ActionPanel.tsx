@@ -2,8 +2,9 @@
 
 import { useId, useState, type FormEvent } from 'react';
 import { FieldError, inputClass, labelClass, sendJson, type FormError } from '@/components/forms/api';
-import { ACTION_WORDS, QUESTION_ONLY, type ModerationAction, type PostType } from './words';
+import { ACTION_WORDS, type ModerationAction, type PostType } from './words';
 import { isoDay } from '@/lib/dates';
+import { applicableActions } from '@/lib/moderation/applicable';
 
 const ACTIONS = Object.keys(ACTION_WORDS) as ModerationAction[];
 
@@ -13,7 +14,8 @@ function tomorrow(): string {
 }
 
 /**
- * Choose an action, say why (the author's notice and the audit log both carry the
+ * Choose an action (none is chosen for the moderator: a default would be applied by a
+ * hurried tap), say why (the author's notice and the audit log both carry the
  * reason, so it is always required), then apply it.
  */
 export function ActionPanel({
@@ -21,13 +23,21 @@ export function ActionPanel({
   authorName,
   onDone,
 }: {
-  post: { type: PostType; id: number; tags?: string[]; hiddenAt: string | null; deletedAt: string | null };
+  post: {
+    type: PostType;
+    id: number;
+    tags?: string[];
+    hiddenAt: string | null;
+    hiddenReason?: string | null;
+    deletedAt: string | null;
+    lockedAt?: string | null;
+  };
   authorName: string;
   onDone: (message: string) => void;
 }) {
   const id = useId();
-  const choices = ACTIONS.filter((a) => post.type === 'question' || !QUESTION_ONLY.includes(a));
-  const [action, setAction] = useState<ModerationAction>(post.hiddenAt || post.deletedAt ? 'restore' : 'dismiss');
+  const choices = applicableActions(ACTIONS, post);
+  const [action, setAction] = useState<ModerationAction | ''>('');
   const [reason, setReason] = useState('');
   const [tags, setTags] = useState((post.tags ?? []).join(', '));
   const [until, setUntil] = useState('');
@@ -36,6 +46,7 @@ export function ActionPanel({
 
   async function onSubmit(e: FormEvent<HTMLFormElement>) {
     e.preventDefault();
+    if (!action) return setError({ field: 'action', message: 'Action: choose what to do with this post.' });
     const why = reason.trim();
     if (why.length < 3)
       return setError({ field: 'reason', message: 'Every action needs a reason (at least 3 characters).' });
@@ -79,9 +90,11 @@ export function ActionPanel({
         <select
           id={`${id}-action`}
           value={action}
-          onChange={(e) => setAction(e.target.value as ModerationAction)}
+          onChange={(e) => setAction(e.target.value as ModerationAction | '')}
+          aria-invalid={error?.field === 'action' || undefined}
           className={inputClass}
         >
+          <option value="">Choose an action…</option>
           {choices.map((a) => (
             <option key={a} value={a}>
               {ACTION_WORDS[a]}

@@ -17,12 +17,17 @@ export interface ReviewItemView {
     body: string;
     author: { id: number; handle: string; displayName: string; role: Role } | null;
     hiddenAt: string | null;
+    hiddenReason?: string | null;
     deletedAt: string | null;
     createdAt: string;
+    /** a question's thread lock */
+    lockedAt?: string | null;
     tags?: string[];
     /** a flagged photo's public id: the queue shows it even while hidden */
     photoId?: string | null;
   };
+  /** an author's request to look again at a decision: an item of its own */
+  appeal?: { id: number; text: string; by: string; createdAt: string } | null;
   flags: {
     id: number;
     reason: FlagReason;
@@ -45,7 +50,7 @@ export function ReviewItem({
   viewer: { id: number; handle: string; role: Role };
   onDone: (message: string) => void;
 }) {
-  const { post, flags, revisions } = item;
+  const { post, flags, revisions, appeal } = item;
   const authorName = post.author?.displayName ?? 'a removed member';
   const own = post.author?.id === viewer.id;
   const flaggedByMe = flags.some((f) => f.flagger.handle === viewer.handle);
@@ -62,8 +67,11 @@ export function ReviewItem({
   return (
     <article
       className="cw-card flex flex-col gap-3"
-      aria-label={`Flagged ${post.type} by ${authorName}`}
+      aria-label={appeal ? `Appeal on a ${post.type} by ${authorName}` : `Flagged ${post.type} by ${authorName}`}
       data-review-item={`${post.type}:${post.id}`}
+      data-review-kind={appeal ? 'appeal' : 'flags'}
+      id={`${appeal ? 'appeal' : 'review'}-${post.type}-${post.id}`}
+      tabIndex={-1}
     >
       <header className="flex flex-col gap-1 font-sans">
         <p className="text-sm">
@@ -124,18 +132,34 @@ export function ReviewItem({
         )}
       </section>
 
-      <section aria-label="Flags" className="font-sans text-sm">
-        <h3 className="font-semibold">{flags.length === 1 ? '1 flag' : `${flags.length} flags`}</h3>
-        <ul className="mt-1 flex flex-col gap-1">
-          {flags.map((f) => (
-            <li key={f.id}>
-              <span className="font-semibold">{FLAG_REASON_WORDS[f.reason] ?? f.reason}</span> — {f.flagger.displayName}
-              {f.flagger.role !== 'member' ? ` (${f.flagger.role})` : ''}, {when(f.createdAt)}
-              {f.note ? <q className="ml-1 italic">{f.note}</q> : null}
-            </li>
-          ))}
-        </ul>
-      </section>
+      {appeal ? (
+        <section aria-label="Appeal" className="font-sans text-sm">
+          <h3 className="font-semibold">The author asks for a review</h3>
+          <p className="cw-muted text-xs">
+            {appeal.by}, {when(appeal.createdAt)}
+          </p>
+          <MemberText>{appeal.text}</MemberText>
+          <p className="cw-muted mt-1 text-xs">
+            Restore the post to grant it, or dismiss to keep the decision; either way the author gets a notice with your
+            reason.
+          </p>
+        </section>
+      ) : null}
+      {flags.length === 0 ? null : (
+        <section aria-label="Flags" className="font-sans text-sm">
+          <h3 className="font-semibold">{flags.length === 1 ? '1 flag' : `${flags.length} flags`}</h3>
+          <ul className="mt-1 flex flex-col gap-1">
+            {flags.map((f) => (
+              <li key={f.id}>
+                <span className="font-semibold">{FLAG_REASON_WORDS[f.reason] ?? f.reason}</span> —{' '}
+                {f.flagger.displayName}
+                {f.flagger.role !== 'member' ? ` (${f.flagger.role})` : ''}, {when(f.createdAt)}
+                {f.note ? <q className="ml-1 italic">{f.note}</q> : null}
+              </li>
+            ))}
+          </ul>
+        </section>
+      )}
 
       {revisions.length > 1 ? (
         <details className="font-sans text-sm">

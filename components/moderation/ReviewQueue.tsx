@@ -1,6 +1,6 @@
 'use client';
 
-import { useId, useState } from 'react';
+import { useEffect, useId, useState } from 'react';
 import Link from 'next/link';
 import useSWR from 'swr';
 import { getJson } from '@/components/forms/api';
@@ -16,7 +16,7 @@ const AGES = [
 ];
 
 /**
- * The review queue: flagged posts, oldest flag first, each read in context with its
+ * The review queue: flagged posts, unsafe advice first and then oldest flag first, each read in context with its
  * flags and history and an action panel. After an action the list reloads, so a
  * settled post drops out.
  */
@@ -34,6 +34,15 @@ export function ReviewQueue({ viewer }: { viewer: { id: number; handle: string; 
     getJson<{ items: ReviewItemView[] }>,
     { revalidateOnFocus: false },
   );
+
+  // a thread's "act on it in the review queue" link names the item; the list arrives after the page
+  const loaded = !!data;
+  useEffect(() => {
+    if (!loaded || !window.location.hash) return;
+    const target = document.getElementById(window.location.hash.slice(1));
+    target?.scrollIntoView({ block: 'start' });
+    target?.focus({ preventScroll: true });
+  }, [loaded]);
 
   return (
     <div className="flex flex-col gap-4">
@@ -122,11 +131,12 @@ export function ReviewQueue({ viewer }: { viewer: { id: number; handle: string; 
       ) : (
         <>
           <p className="cw-muted font-sans text-sm">
-            {data.items.length === 1 ? '1 post waiting' : `${data.items.length} posts waiting`}, oldest flag first.
+            {data.items.length === 1 ? '1 post waiting' : `${data.items.length} posts waiting`}, unsafe advice first,
+            then oldest flag first.
           </p>
           <ol className="flex flex-col gap-4">
             {data.items.map((item) => (
-              <li key={`${item.post.type}:${item.post.id}`}>
+              <li key={`${item.appeal ? `appeal-${item.appeal.id}` : 'flags'}:${item.post.type}:${item.post.id}`}>
                 <ReviewItem
                   item={item}
                   viewer={viewer}

@@ -8,8 +8,9 @@ import { sendJson } from '@/components/forms/api';
 
 /**
  * Answer, optionally with a worked calculation: pick a calculator, it opens filled
- * from the question's site sheet, adjust it, attach it. The calculation is saved
- * (the server recomputes it) and linked to the answer.
+ * from the question's site sheet, adjust it, post. What the form shows is what is
+ * posted: a calculator left open goes with the answer (the server recomputes and
+ * saves it in the same step), and the form says so beside it; "None" leaves it out.
  */
 export function AnswerComposer({
   questionId,
@@ -18,16 +19,20 @@ export function AnswerComposer({
 }: {
   questionId: number;
   siteSheet: Record<string, string> | null;
-  onPosted: () => void;
+  onPosted: (answerId: number) => void;
 }) {
   const [body, setBody] = useState('');
   const [tool, setTool] = useState('');
-  const [form, setForm] = useState<FormState | null>(null);
-  const [attached, setAttached] = useState<{ id: string; tool: string } | null>(null);
+  const [calc, setCalc] = useState<{ form: FormState; ok: boolean } | null>(null);
   const [error, setError] = useState<{ field?: string; message: string } | null>(null);
+  const [posted, setPosted] = useState(false);
   const [busy, setBusy] = useState(false);
-  const onOutput = useCallback((state: FormState) => setForm(state), []);
+  const onOutput = useCallback(
+    (state: FormState, output: unknown) => setCalc({ form: state, ok: output !== null }),
+    [],
+  );
   const def = getCalculator(tool);
+  const going = def && calc ? calc : null;
 
   return (
     <form
@@ -35,18 +40,31 @@ export function AnswerComposer({
       aria-label="Your answer"
       onSubmit={async (e) => {
         e.preventDefault();
-        setBusy(true);
         setError(null);
-        const r = await sendJson(`/api/questions/${questionId}/answers`, 'POST', {
+        setPosted(false);
+        if (def && !going?.ok) {
+          setError({
+            field: 'calculation',
+            message: 'The calculation has an input to fix first, or choose “None” to post without it.',
+          });
+          return;
+        }
+        setBusy(true);
+        const r = await sendJson<{ id: number }>(`/api/questions/${questionId}/answers`, 'POST', {
           body,
-          ...(attached ? { calculationId: attached.id } : {}),
+          ...(def && going
+            ? {
+                calculation: { tool: def.id, inputs: Object.fromEntries(shareQuery(def.fields, going.form).entries()) },
+              }
+            : {}),
         });
         setBusy(false);
         if (r.ok) {
           setBody('');
           setTool('');
-          setAttached(null);
-          onPosted();
+          setCalc(null);
+          setPosted(true);
+          onPosted(r.data.id);
         } else setError(r.error);
       }}
     >
@@ -57,25 +75,23 @@ export function AnswerComposer({
       <textarea
         id="answer-body"
         value={body}
-        onChange={(e) => setBody(e.target.value)}
+        onChange={(e) => {
+          setBody(e.target.value);
+          setPosted(false);
+        }}
         rows={7}
         className="rounded-md border border-limestone-400 bg-limestone-50 p-2 font-serif dark:bg-creek-950"
       />
-      {error && (!error.field || error.field === 'body') ? (
-        <p role="alert" className="text-sm font-semibold text-signal-700 dark:text-signal-300">
-          {error.message}
-        </p>
-      ) : null}
       <div className="flex flex-col gap-2">
         <label htmlFor="answer-tool" className="text-sm font-medium">
-          Add a worked calculation
+          Add a worked calculation to my answer
         </label>
         <select
           id="answer-tool"
           value={tool}
           onChange={(e) => {
             setTool(e.target.value);
-            setAttached(null);
+            setCalc(null);
           }}
           className="rounded-md border border-limestone-400 bg-limestone-50 p-2 dark:bg-creek-950"
         >
@@ -88,39 +104,32 @@ export function AnswerComposer({
         </select>
         {def ? (
           <>
+            <p className="text-sm font-semibold" data-testid="calculation-attached">
+              {going && !going.ok
+                ? `The ${def.name.toLowerCase()} has an input to fix: fix it, or choose “None” to leave it out.`
+                : `This ${def.name.toLowerCase()} goes in your answer when you post it, with the numbers below. Choose “None” to leave it out.`}
+            </p>
             <CalculatorCard
               key={tool}
               def={def}
               props={calculatorPropsFromSiteSheet(def.id, siteSheet)}
               onOutput={onOutput}
+              saveLabel="Also keep this calculation on its own page"
             />
-            {attached ? (
-              <p role="status" className="text-sm text-moss-600 dark:text-moss-300" data-testid="calculation-attached">
-                Worked calculation attached. Change it and attach again to replace it.
-              </p>
-            ) : null}
-            <button
-              type="button"
-              className="cw-button self-start"
-              disabled={!form}
-              onClick={async () => {
-                if (!form) return;
-                const r = await sendJson<{ id: string }>('/api/calculations', 'POST', {
-                  tool,
-                  inputs: Object.fromEntries(shareQuery(def.fields, form).entries()),
-                });
-                if (r.ok) setAttached({ id: r.data.id, tool });
-                else setError(r.error);
-              }}
-            >
-              Attach this calculation
-            </button>
           </>
         ) : null}
       </div>
+      {error ? (
+        <p role="alert" className="text-sm font-semibold text-signal-700 dark:text-signal-300">
+          {error.message}
+        </p>
+      ) : null}
       <button type="submit" className="cw-button self-start" disabled={busy}>
-        Post the answer
+        {def ? 'Post the answer with the calculation' : 'Post the answer'}
       </button>
+      <p role="status" className="text-sm font-semibold text-moss-600 dark:text-moss-300" data-testid="answer-posted">
+        {posted ? 'Your answer is posted: it is in the thread above, marked “Posted just now”.' : ''}
+      </p>
     </form>
   );
 }

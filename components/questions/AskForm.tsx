@@ -1,10 +1,10 @@
 'use client';
 
-import { useDeferredValue, useEffect, useId, useMemo, useState, type ReactNode } from 'react';
+import { useDeferredValue, useEffect, useId, useMemo, useState, useSyncExternalStore, type ReactNode } from 'react';
 import { Controller, useForm, useWatch, type FieldPath } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import type { z } from 'zod';
-import { SYMPTOM_LABELS, SYMPTOMS, type UnitSystem } from '@/lib/hydraulics';
+import { SYMPTOM_LABELS, SYMPTOMS, unitLabel, type UnitSystem } from '@/lib/hydraulics';
 import { askQuestionSchema, SITE_SHEET_FIELDS, type SiteSheetField } from '@/lib/validation/question';
 import { CALCULATORS, recompute, seriesOptions, sizeOptions } from '@/lib/calculators';
 import { CALCULATOR_VIEWS } from '@/components/calculators/views';
@@ -12,6 +12,20 @@ import { inputClass, labelClass, sendJson } from '@/components/forms/api';
 import { MemberText } from '@/components/posts/MemberText';
 import { PhotoPicker } from '@/components/photos/PhotoPicker';
 import { useUnits } from '@/components/units/UnitsProvider';
+import {
+  clearDraft,
+  draftHasContent,
+  draftState,
+  draftStore,
+  loadDraft,
+  resetDraftState,
+  saveDraft,
+  serverDraftState,
+  setDraftState,
+  subscribeDraftState,
+  type AskDraft,
+} from './ask-draft';
+import { bareNumberUnit, typedUnits, withReaderUnits } from './site-sheet-units';
 
 type AskInput = z.input<typeof askQuestionSchema>;
 type AskOutput = z.output<typeof askQuestionSchema>;
@@ -39,6 +53,14 @@ const MEASUREMENTS: { name: SiteSheetField; label: string; hint: Record<UnitSyst
     },
   },
   { name: 'driveLength', label: 'Drive pipe length', hint: { US: 'e.g. “24 ft”', metric: 'e.g. “7.5 m”' } },
+  {
+    name: 'elbows',
+    label: 'Extra elbows on the drive pipe',
+    hint: {
+      US: 'optional, bends beyond a straight run, e.g. “1”',
+      metric: 'optional, bends beyond a straight run, e.g. “1”',
+    },
+  },
   {
     name: 'sourceFlow',
     label: 'Source flow the source can spare',
@@ -91,6 +113,7 @@ const STALL_PROPS = [
   'driveLength',
   'driveSize',
   'driveMaterial',
+  'elbows',
   'sourceFlow',
   'pumpSize',
   'pumps',
@@ -114,7 +137,9 @@ type StallView =
   | { kind: 'causes'; node: ReactNode };
 
 function runStall(sheet: SiteSheet, units: UnitSystem): StallView {
-  const props = siteSheetAsStallProps(sheet);
+  const typed = siteSheetAsStallProps(sheet);
+  // checked as it will be posted: a bare number in the reader's units
+  const props = withReaderUnits(typed, units);
   if (blank(props.fall) && blank(props.lift)) return { kind: 'idle' };
   const missing = STALL_NEEDS.filter((k) => blank(props[k]));
   try {
@@ -129,7 +154,9 @@ function runStall(sheet: SiteSheet, units: UnitSystem): StallView {
         ? needs(missing)
         : { kind: 'refused', field: r.field, message: r.message };
     if (missing.length) return needs(missing);
-    return { kind: 'causes', node: CALCULATOR_VIEWS['stall-check']?.extra?.(r.output.results, units) };
+    // answered in the units the asker typed, whatever the reader's preference says
+    const answerIn = typedUnits(typed, units);
+    return { kind: 'causes', node: CALCULATOR_VIEWS['stall-check']?.extra?.(r.output.results, answerIn) };
   } catch {
     return missing.length ? needs(missing) : { kind: 'idle' };
   }
@@ -145,6 +172,24 @@ function FieldMessage({ id, message }: { id: string; message?: string }) {
       {message}
     </p>
   ) : null;
+}
+
+/** Under a box holding a bare number: the unit it will be read in, and a button to write it in. */
+function UnitPrompt({ id, unit, onAdd }: { id: string; unit?: string; onAdd: (unit: string) => void }) {
+  if (!unit) return null;
+  const shown = unitLabel(unit);
+  return (
+    <p
+      id={id}
+      data-testid="unit-prompt"
+      className="mt-1 flex flex-wrap items-center gap-2 rounded-md border-l-4 border-signal bg-signal-100 px-2 py-1 text-xs text-signal-900 dark:bg-signal-900 dark:text-signal-100"
+    >
+      <span>No unit: this will be read in {shown}, your units.</span>
+      <button type="button" className="cw-link min-h-6 font-semibold" onClick={() => onAdd(unit)}>
+        Add “{shown}”
+      </button>
+    </p>
+  );
 }
 
 interface SimilarQuestion {
@@ -203,6 +248,8 @@ export function AskForm({
     handleSubmit,
     setError,
     setValue,
+    getValues,
+    reset,
     formState: { errors, isSubmitting },
   } = useForm<AskInput, unknown, AskOutput>({
     resolver: zodResolver(askQuestionSchema),
@@ -228,13 +275,84 @@ export function AskForm({
   );
   const similar = useSimilarQuestions(title, chosenTags, sheet.fall ?? '', sheet.lift ?? '');
 
+  // The draft: restored once after hydration (the server has no storage), then kept on every change.
+  const { loaded, status: draft } = useSyncExternalStore(subscribeDraftState, draftState, serverDraftState);
+  const draftOf = (v: AskInput): AskDraft => ({
+    title: v.title ?? '',
+    body: v.body ?? '',
+    tags: v.tags ?? [],
+    siteSheet: Object.fromEntries(
+      Object.entries(v.siteSheet ?? {}).filter((e): e is [string, string] => typeof e[1] === 'string'),
+    ),
+  });
+  useEffect(() => {
+    const saved = loadDraft(draftStore());
+    if (saved) {
+      const now = getValues();
+      reset({
+        ...now,
+        title: saved.title,
+        body: saved.body,
+        tags: saved.tags,
+        siteSheet: { ...now.siteSheet, ...saved.siteSheet },
+      });
+    }
+    setDraftState({ loaded: true, status: saved ? 'restored' : 'none' });
+    return resetDraftState;
+  }, [getValues, reset]);
+  // the form as it opens (a tag from the link, a field log's sheet) is no draft of the member's
+  const startKey = useMemo(
+    () =>
+      JSON.stringify(
+        draftOf({
+          title: '',
+          body: '',
+          tags: defaultTag ? [defaultTag] : [],
+          siteSheet: Object.fromEntries(SITE_SHEET_FIELDS.map((f) => [f, fromFieldLog?.siteSheet[f] ?? ''])),
+        }),
+      ),
+    [defaultTag, fromFieldLog],
+  );
+  const watched = useWatch({ control });
+  const draftKey = JSON.stringify(draftOf(watched as AskInput));
+  useEffect(() => {
+    if (!loaded) return;
+    const d = JSON.parse(draftKey) as AskDraft;
+    const worth = draftKey !== startKey && draftHasContent(d);
+    if (worth) saveDraft(draftStore(), d);
+    else clearDraft(draftStore());
+    const was = draftState().status;
+    setDraftState({ status: worth ? (was === 'none' ? 'kept' : was) : 'none' });
+  }, [draftKey, startKey, loaded]);
+  function discardDraft() {
+    clearDraft(draftStore());
+    reset({
+      title: '',
+      body: '',
+      tags: defaultTag ? [defaultTag] : [],
+      siteSheet: Object.fromEntries(SITE_SHEET_FIELDS.map((f) => [f, fromFieldLog?.siteSheet[f] ?? ''])),
+      fieldLogEntryId: fromFieldLog?.id,
+      photoIds: getValues('photoIds') ?? [],
+      guide,
+    });
+    setDraftState({ status: 'none' });
+  }
+
   async function onSubmit(values: AskOutput) {
-    const siteSheet = Object.fromEntries(Object.entries(values.siteSheet ?? {}).filter(([, v]) => !blank(v)));
+    // a bare number goes out with the unit the form said it would be read in
+    const siteSheet = withReaderUnits(
+      Object.fromEntries(
+        Object.entries(values.siteSheet ?? {}).filter((e): e is [string, string] => !blank(e[1] ?? undefined)),
+      ),
+      units,
+    );
     const out = await sendJson<{ id: number; url: string }>('/api/questions', 'POST', {
       ...values,
       siteSheet: Object.keys(siteSheet).length ? siteSheet : undefined,
     });
     if (out.ok) {
+      clearDraft(draftStore());
+      setDraftState({ loaded: false, status: 'none' }); // nothing more to keep while the page goes
       window.location.assign(out.data.url ?? `/questions/${out.data.id}`);
       return;
     }
@@ -264,6 +382,14 @@ export function AskForm({
       className="flex flex-col gap-4 font-sans lg:grid lg:grid-cols-[minmax(0,1fr)_20rem] lg:items-start"
     >
       <div className="flex flex-col gap-4">
+        {draft === 'restored' ? (
+          <p role="status" className="cw-card text-sm" data-testid="draft-restored">
+            Your draft is back as you left it.{' '}
+            <button type="button" className="cw-link" onClick={discardDraft}>
+              Discard this draft
+            </button>
+          </p>
+        ) : null}
         <section className="cw-card flex flex-col gap-4" aria-labelledby={id('q')}>
           <h2 id={id('q')} className="font-serif text-xl font-semibold">
             Your question
@@ -374,6 +500,16 @@ export function AskForm({
                   <p id={`${id(name)}-hint`} className="cw-muted mt-1 text-xs">
                     {m.hint[units]}
                   </p>
+                  <UnitPrompt
+                    id={`${id(name)}-unit`}
+                    unit={bareNumberUnit(m.name, sheet[m.name], units)}
+                    onAdd={(unit) =>
+                      setValue(name, `${(sheet[m.name] ?? '').trim()} ${unit}`, {
+                        shouldDirty: true,
+                        shouldValidate: Boolean(errorAt(name)),
+                      })
+                    }
+                  />
                   <FieldMessage id={`${id(name)}-error`} message={errorAt(name)} />
                 </div>
               );
@@ -442,25 +578,9 @@ export function AskForm({
           <PhotoPicker onChange={(ids: string[]) => setValue('photoIds', ids)} />
           <FieldMessage id={`${id('photoIds')}-error`} message={errorAt('photoIds')} />
         </section>
-
-        {guide ? (
-          <p className="cw-muted text-sm">
-            Asked from the guide{' '}
-            <a href={`/guides/${guide}`} className="cw-link">
-              {guide.replace(/-/g, ' ')}
-            </a>
-            .
-          </p>
-        ) : null}
-        <FieldMessage id={id('server')} message={errors.root?.server?.message} />
-        <div>
-          <button type="submit" className="cw-button" disabled={isSubmitting}>
-            {isSubmitting ? 'Posting…' : 'Post my question'}
-          </button>
-        </div>
       </div>
 
-      <aside className="flex flex-col gap-4 lg:sticky lg:top-4">
+      <aside className="flex flex-col gap-4 lg:sticky lg:top-4 lg:col-start-2 lg:row-span-2 lg:row-start-1">
         <section className="cw-card flex flex-col gap-2" aria-labelledby={id('before')} data-testid="before-you-post">
           <h2 id={id('before')} className="font-serif text-lg font-semibold">
             Before you post
@@ -506,6 +626,34 @@ export function AskForm({
           </section>
         ) : null}
       </aside>
+
+      {/* After the stall check and the similar questions on a phone, so both are read before posting;
+          under the form on a wide screen, where they sit beside it. */}
+      <div className="flex flex-col gap-2 lg:col-start-1">
+        {guide ? (
+          <p className="cw-muted text-sm">
+            Asked from the guide{' '}
+            <a href={`/guides/${guide}`} className="cw-link">
+              {guide.replace(/-/g, ' ')}
+            </a>
+            .
+          </p>
+        ) : null}
+        <FieldMessage id={id('server')} message={errors.root?.server?.message} />
+        <div className="flex flex-wrap items-center gap-3">
+          <button type="submit" className="cw-button" disabled={isSubmitting}>
+            {isSubmitting ? 'Posting…' : 'Post my question'}
+          </button>
+          {draft !== 'none' ? (
+            <button type="button" className="cw-link text-sm" onClick={discardDraft}>
+              Discard this draft
+            </button>
+          ) : null}
+        </div>
+        {draft !== 'none' ? (
+          <p className="cw-muted text-xs">Your draft is kept on this device until you post or discard it.</p>
+        ) : null}
+      </div>
     </form>
   );
 }

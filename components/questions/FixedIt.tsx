@@ -34,7 +34,11 @@ export function WhatFixedIt({ initial }: { initial: ThreadView }) {
       <StateDrop kind="fixed" className="mt-1 h-5 w-5 text-moss-600 dark:text-moss-300" />
       <div className="flex flex-col gap-1">
         <p className="text-xs font-semibold uppercase tracking-wide text-moss-700 dark:text-moss-100">What fixed it</p>
-        {t.whatFixedIt ? <p className="font-serif text-lg leading-snug">{withReadings(t.whatFixedIt, units)}</p> : null}
+        {t.whatFixedIt ? (
+          <p className="font-serif text-lg leading-snug" data-member-words>
+            {withReadings(t.whatFixedIt, units)}
+          </p>
+        ) : null}
         <p className="text-sm">
           {t.whatFixedIt ? `— ${t.author.displayName}, who asked. ` : `${t.author.displayName}, who asked, chose `}
           <a href={`#answer-${answer.id}`} className="font-semibold underline underline-offset-2">

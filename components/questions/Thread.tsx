@@ -1,6 +1,7 @@
 'use client';
 
 import Link from 'next/link';
+import { useEffect, useRef, useState } from 'react';
 import useSWR from 'swr';
 import { useSession } from 'next-auth/react';
 import { MemberText } from '@/components/posts/MemberText';
@@ -16,7 +17,8 @@ import { FlagButton } from '@/components/moderation/FlagButton';
 import { PostMarks } from '@/components/moderation/PostMarks';
 import { ChooseFix } from './FixedIt';
 import { StateDrop } from './StateDrop';
-import { formatDate } from '@/lib/dates';
+import { Byline } from './Byline';
+import { signInPath } from '@/lib/auth/return-path';
 
 type Viewer = { id: number; handle: string; role: 'member' | 'expert' | 'moderator' | 'admin' } | null;
 
@@ -27,22 +29,6 @@ export function useViewer(): Viewer {
   if (!u?.id || !u.handle || !u.role) return null;
   return { id: u.id, handle: u.handle, role: u.role as NonNullable<Viewer>['role'] };
 }
-const when = formatDate;
-
-function Byline({ person, at }: { person: { handle: string; displayName: string; expert: boolean }; at: string }) {
-  return (
-    <span className="cw-muted text-xs">
-      <Link href={`/people/${person.handle}`} className="cw-link">
-        {person.displayName}
-      </Link>
-      {person.expert ? (
-        <span className="ml-1 rounded bg-creek px-1.5 py-0.5 font-semibold text-limestone-50">expert</span>
-      ) : null}{' '}
-      · {when(at)}
-    </span>
-  );
-}
-
 /**
  * The live part of a thread page. The server draws it first; after that SWR keeps
  * it current, and every action (answer, reply, helpful, fixed it, follow) goes
@@ -65,6 +51,17 @@ export function Thread({ initial }: { initial: ThreadView }) {
     void mutate(patch(t), { revalidate: false });
     void settle.then(() => mutate());
   };
+
+  // the answer just posted: marked, and focused once it is drawn (far above the form on a phone)
+  const [posted, setPosted] = useState<number | null>(null);
+  const focused = useRef<number | null>(null);
+  useEffect(() => {
+    if (posted === null || focused.current === posted) return;
+    const el = document.getElementById(`answer-${posted}`);
+    if (!el) return;
+    el.focus();
+    focused.current = posted;
+  }, [posted, t.answers]);
 
   const repliesUnder = (answerId: number | null) => t.replies.filter((r) => r.answerId === answerId);
 
@@ -143,15 +140,23 @@ export function Thread({ initial }: { initial: ThreadView }) {
             onChange={refresh}
             replies={repliesUnder(a.id)}
             optimistic={optimistic}
+            justPosted={a.id === posted}
           />
         ))}
       </section>
 
       {t.lockedAt ? null : viewer ? (
-        <AnswerComposer questionId={t.id} siteSheet={t.siteSheet} onPosted={refresh} />
+        <AnswerComposer
+          questionId={t.id}
+          siteSheet={t.siteSheet}
+          onPosted={(answerId) => {
+            setPosted(answerId);
+            refresh();
+          }}
+        />
       ) : (
         <p className="cw-card">
-          <Link href={`/sign-in?callbackUrl=/questions/${t.id}`} className="cw-link">
+          <Link href={signInPath(`/questions/${t.id}`)} className="cw-link">
             Sign in
           </Link>{' '}
           to answer or reply.
@@ -169,6 +174,7 @@ function Answer({
   onChange,
   replies,
   optimistic,
+  justPosted,
 }: {
   a: AnswerView;
   t: ThreadView;
@@ -177,6 +183,7 @@ function Answer({
   onChange: () => void;
   replies: ReplyView[];
   optimistic: (patch: (v: ThreadView) => ThreadView) => (o: unknown, settle: Promise<unknown>) => void;
+  justPosted: boolean;
 }) {
   return (
     <article
@@ -184,6 +191,7 @@ function Answer({
       data-answer={a.id}
       data-fixed={a.fixed || undefined}
       id={`answer-${a.id}`}
+      tabIndex={-1}
       aria-label={`Answer by ${a.author.displayName}`}
     >
       {a.fixed ? (
@@ -194,6 +202,12 @@ function Answer({
           </span>
         </p>
       ) : null}
+      <header className="flex flex-wrap items-center gap-2" data-testid="answer-byline">
+        <Byline person={a.author} at={a.createdAt} lead />
+        {justPosted ? (
+          <span className="text-sm font-semibold text-moss-600 dark:text-moss-300">· Posted just now</span>
+        ) : null}
+      </header>
       <PostMarks post={a} kind="answer" />
       <MemberText>{a.body}</MemberText>
       {a.photos.length ? (
@@ -212,7 +226,6 @@ function Answer({
         </div>
       ) : null}
       <div className="flex flex-wrap items-center gap-3">
-        <Byline person={a.author} at={a.createdAt} />
         <HelpfulButton
           postType="answer"
           postId={a.id}

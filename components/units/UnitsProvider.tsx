@@ -48,7 +48,7 @@ const UnitsContext = createContext<UnitsApi>({ units: DEFAULT_UNITS, setUnits: (
  */
 export function UnitsProvider({ children }: { children: ReactNode }) {
   const router = useRouter();
-  const { data: session, update } = useSession();
+  const { data: session, status, update } = useSession();
   const units = useSyncExternalStore(subscribe, readCookie, () => DEFAULT_UNITS);
 
   const adoptUnits = useCallback(
@@ -63,27 +63,41 @@ export function UnitsProvider({ children }: { children: ReactNode }) {
   );
 
   const signedIn = session?.user?.id !== undefined;
+  const loading = status === 'loading';
+  // The session then carries the new choice, so the alignment below sees no change to undo.
+  const save = useCallback(
+    (u: UnitPreference) =>
+      void sendJson<{ units: UnitPreference }>('/api/account/units', 'PUT', { units: u }).then((out) => {
+        if (out.ok) void update();
+      }),
+    [update],
+  );
+  // A switch pressed before the session has said who is reading: saved once it has.
+  const chosenWhileLoading = useRef<UnitPreference | null>(null);
   const setUnits = useCallback(
     (u: UnitPreference) => {
       adoptUnits(u);
-      if (!signedIn) return;
-      // The session then carries the new choice, so the alignment below sees no change to undo.
-      void sendJson<{ units: UnitPreference }>('/api/account/units', 'PUT', { units: u }).then((out) => {
-        if (out.ok) void update();
-      });
+      if (loading) chosenWhileLoading.current = u;
+      else if (signedIn) save(u);
     },
-    [adoptUnits, signedIn, update],
+    [adoptUnits, loading, signedIn, save],
   );
 
   // Take up the saved choice each time the session brings a different one, not on every render:
-  // between a switch and its save the session still holds the old choice.
+  // between a switch and its save the session still holds the old choice, and a choice made
+  // while it loaded is newer than what it brings.
   const saved = session?.user?.units;
   const seen = useRef<UnitPreference | undefined>(undefined);
   useEffect(() => {
+    if (status === 'unauthenticated') chosenWhileLoading.current = null;
     if (saved === undefined || seen.current === saved) return;
     seen.current = saved;
-    if (readCookie() !== saved) adoptUnits(saved);
-  }, [saved, adoptUnits]);
+    const chosen = chosenWhileLoading.current;
+    chosenWhileLoading.current = null;
+    if (chosen) {
+      if (chosen !== saved) save(chosen);
+    } else if (readCookie() !== saved) adoptUnits(saved);
+  }, [saved, status, adoptUnits, save]);
 
   const value = useMemo(() => ({ units, setUnits, adoptUnits }), [units, setUnits, adoptUnits]);
   return <UnitsContext.Provider value={value}>{children}</UnitsContext.Provider>;

@@ -7,6 +7,8 @@ export interface NoticeView {
   message: string;
   link: string | null;
   createdAt: Date;
+  /** not read before this visit */
+  fresh: boolean;
 }
 
 /**
@@ -28,6 +30,9 @@ export async function loadSettingsPage(user: Actor) {
         limit: 50,
       })
     : [];
+  // shown on this page is read: the header's badge clears at the next session read
+  if (notices.some((n) => n.readAt === null))
+    await Notice.update({ readAt: new Date() }, { where: { userId: user.id, readAt: null } });
   const mail = await loadMailSettings(user.id);
   if (!row || !mail) return null;
   return {
@@ -36,6 +41,12 @@ export async function loadSettingsPage(user: Actor) {
     handle: row.handle,
     canApply: can(user, 'expertApplication.submit'),
     values: { displayName: row.displayName, region: row.region ?? '', bio: row.bio ?? '', units: row.units },
-    notices: notices.map((n): NoticeView => ({ id: n.id, message: n.message, link: n.link, createdAt: n.createdAt })),
+    notices: notices.map((n): NoticeView => ({
+      id: n.id,
+      message: n.message,
+      link: n.link,
+      createdAt: n.createdAt,
+      fresh: n.readAt === null,
+    })),
   };
 }

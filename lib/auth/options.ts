@@ -91,7 +91,8 @@ export const authOptions: NextAuthOptions = {
   logger: authLogger,
   callbacks: {
     async jwt({ token, user }) {
-      const { User } = initModels();
+      const { User, Notice } = initModels();
+      const unread = (userId: number) => Notice.count({ where: { userId, readAt: null } });
       if (user) {
         // A link sign-in hands us the adapter's view of the user; read role and handle from ours.
         const u = await User.findByPk(Number(user.id), {
@@ -103,6 +104,7 @@ export const authOptions: NextAuthOptions = {
           token.handle = u.handle;
           token.sv = u.sessionVersion;
           token.units = u.units;
+          token.unread = await unread(u.id);
           // a fresh browser's first page after signing in is drawn in the member's saved units
           await rememberUnits(u.units);
         }
@@ -118,6 +120,8 @@ export const authOptions: NextAuthOptions = {
       if (!u || u.sessionVersion !== tokenVersion(token)) throw new SessionRevoked();
       // the saved units as they are now, so a change made in another browser reaches this one
       token.units = u.units;
+      // a moderator's notice reaches the header's badge at the next session read
+      token.unread = await unread(u.id);
       return token;
     },
     redirect({ url, baseUrl }) {
@@ -130,6 +134,7 @@ export const authOptions: NextAuthOptions = {
         role: String(token.role),
         handle: String(token.handle),
         units: parseUnitPreference(token.units),
+        unreadNotices: Number(token.unread ?? 0),
       } as typeof session.user;
       return session;
     },

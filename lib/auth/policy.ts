@@ -81,6 +81,11 @@ export const POLICY = {
   /** flag a post for the review queue */
   'post.flag': signedIn(),
   /**
+   * ask the moderators to look again at a decision on one's own post (the author is
+   * checked per post); a suspended member keeps it, as the decision may be the mistake
+   */
+  'moderation.appeal': { ...signedIn('own'), keptWhenSuspended: true },
+  /**
    * the review queue and its actions on members' and experts' posts and accounts
    * (never on one's own posts or flags: checked per post); lifting a suspension
    */
@@ -198,6 +203,7 @@ export const REFUSAL: Record<Action, string> = {
   'question.follow': 'Sign in to follow a question.',
   'photo.upload': 'Sign in to add photos.',
   'post.flag': 'Sign in to flag a post.',
+  'moderation.appeal': 'Only its author can ask for a review of a decision on a post.',
   'moderation.act': 'Only moderators can use the review queue.',
   'moderation.actOnModerator': 'Only an admin can act on a moderator’s post or account.',
   'moderation.actOnAdmin': 'Only another admin can act on an admin’s post or account.',

@@ -37,3 +37,17 @@ export function sameSiteRedirect(url: string, baseUrl: string): string {
   }
   return `${base}${safeReturnPath(target)}`;
 }
+
+/** The account pages themselves: signing in from one of them should not lead back to it. */
+const NO_RETURN = ['/sign-in', '/sign-up', '/reset-password', '/verify-email', '/unsubscribe'];
+
+/**
+ * The sign-in link from the page at `here`: it carries the way back, so a reader who
+ * signs in from a thread or a guide lands on it again instead of on the home page.
+ */
+export function signInPath(here: string | null | undefined): string {
+  const back = safeReturnPath(here ?? '/');
+  if (back === '/' || NO_RETURN.some((p) => back === p || back.startsWith(`${p}/`) || back.startsWith(`${p}?`)))
+    return '/sign-in';
+  return `/sign-in?callbackUrl=${encodeURIComponent(back)}`;
+}

@@ -53,6 +53,7 @@ export const API_ROUTES: Record<string, Action | 'public' | 'session'> = {
   'POST /api/helpful': 'post.markHelpful',
   'DELETE /api/helpful': 'post.markHelpful',
   'POST /api/flags': 'post.flag',
+  'POST /api/appeals': 'moderation.appeal',
   'GET /api/review': 'moderation.act',
   'POST /api/review/actions': 'moderation.act',
   'GET /api/review/suspensions': 'moderation.act',

@@ -52,3 +52,4 @@ export {
   type Verdict,
   type VerdictLevel,
 } from './verdict';
+export { typicalEfficiency, percentWords, type TypicalEfficiency } from './typical';

@@ -115,6 +115,7 @@ const PREFILL: Record<CalculatorId, Partial<Record<SiteSheetField, string>>> = {
     driveLength: 'driveLength',
     driveSize: 'driveSize',
     driveMaterial: 'driveMaterial',
+    elbows: 'elbows',
     sourceFlow: 'sourceFlow',
     pumpSize: 'pumpSize',
     pumps: 'pumps',
@@ -133,6 +134,7 @@ const PREFILL: Record<CalculatorId, Partial<Record<SiteSheetField, string>>> = {
     driveLength: 'length',
     driveSize: 'size',
     driveMaterial: 'material',
+    elbows: 'elbows',
     driveFlow: 'driveFlow',
   },
   'delivery-line': {
@@ -176,6 +178,7 @@ export const SITE_SHEET_LABELS: Record<SiteSheetField, string> = {
   driveLength: 'Drive pipe length',
   driveSize: 'Drive pipe size',
   driveMaterial: 'Drive pipe material',
+  elbows: 'Extra elbows on the drive pipe',
   sourceFlow: 'Source can spare',
   pumpSize: 'Pump size',
   pumps: 'Pumps',

@@ -113,6 +113,11 @@ export interface CalculatorDef<R = unknown, Id extends string = CalculatorId> {
   /** the engine call, on an engine input (SI); throws EngineInputError naming the field */
   run(input: unknown): CalcOutput<R>;
   rows(results: R): ResultRow[];
+  /**
+   * The efficiency an empty efficiency field stands for, and the band around it, from a
+   * run with that field empty (lib/calculators/typical.ts); null when the results lack one.
+   */
+  efficiencyBand?(results: R): { typical: number; low: number; high: number } | null;
   /** fields shown only when this holds (e.g. staged-only inputs) */
   visible?(fieldName: string, state: FormState): boolean;
 }

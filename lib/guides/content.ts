@@ -16,6 +16,8 @@ export interface GuideFile {
   body: string;
   /** MDX body with the editors' `{/* check: ... *\/}` comments the guides-agree test reads. */
   source: string;
+  /** The whole file as read: a safety check keeps it, to show later what changed. */
+  raw: string;
   /** sha256 of the whole file: a safety check is tied to exactly this text. */
   hash: string;
 }
@@ -44,6 +46,7 @@ export function readGuideFile(slug: string, dir = guidesDir()): GuideFile | null
     meta: meta.data,
     body: stripEditorComments(parsed.content),
     source: parsed.content,
+    raw,
     hash: contentHash(raw),
   };
 }

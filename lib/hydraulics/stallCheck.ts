@@ -14,7 +14,7 @@ import { typicalDriveFlow } from './pumpSizes';
 import { estimateDriveFlow } from './ramCycle';
 import { EngineInputError } from './errors';
 import { addRangeIssue, fallM, flowM3s, liftM, parseInput, siNumber, waterTempC } from './schemaKit';
-import { qty, said, say } from './message';
+import { metricText, qty, renderMessage, said, say, type MessagePart } from './message';
 import { STALL_CAUSES, SYMPTOMS, type StallCauseCode, type Symptom } from './stallCauses';
 import { finish, step, sub, tq, type CalcOutput, type Step, type Warning } from './steps';
 import { waveSpeed } from './transients';
@@ -68,7 +68,10 @@ export type StallCheckInput = z.input<typeof stallCheckSchema>;
 export interface StallCause {
   code: StallCauseCode;
   title: string;
+  /** the reason in metric words, for logs and callers with no reader */
   reason: string;
+  /** the reason with its numbers as quantities, to write in the reader's units */
+  reasonParts: MessagePart[];
   score: number;
   guide: string;
   /** true when the site sheet's numbers (not only the symptoms) point to this cause */
@@ -89,7 +92,7 @@ export interface StallCheckResults {
   sourceShare?: number;
 }
 
-type Evidence = { state: 'problem' | 'ok' | 'unknown'; strength?: number; reason: string };
+type Evidence = { state: 'problem' | 'ok' | 'unknown'; strength?: number; reason: string | MessagePart[] };
 
 /** Usual beat rate of small rams, beats per minute — common practice, no source. */
 const BPM_RANGE = [PRACTICE.beatsPerMinuteMin.value, PRACTICE.beatsPerMinuteMax.value] as const;
@@ -100,14 +103,19 @@ function score(code: StallCauseCode, symptoms: readonly Symptom[], ev: Evidence)
     .filter((w) => w > 0);
   const sym = weights.length ? Math.max(...weights) + 0.1 * (weights.length - 1) : 0;
   let s: number;
-  if (ev.state === 'problem') s = 0.4 * (ev.strength ?? 1) + 0.6 * sym;
+  // What the numbers show outweighs what the symptoms suggest: a full-strength problem (≥ 0.6) ranks above
+  // any cause the symptoms alone point to (unknown: at most 0.5 · 1.1), whichever box the asker ticked.
+  if (ev.state === 'problem') s = 0.6 * (ev.strength ?? 1) + 0.4 * sym;
   else if (ev.state === 'ok') s = 0.15 * sym;
   else s = 0.5 * sym;
   return Math.round(Math.min(1, s) * 1000) / 1000;
 }
 
+const reasonOf = (r: string | MessagePart[]) =>
+  typeof r === 'string' ? { reason: r, reasonParts: [r] } : { reason: renderMessage(r, metricText), reasonParts: r };
+
 const f2 = (x: number, d = 2) => x.toFixed(d);
-const lpm = (q: number) => `${(q * 6e4).toFixed(2)} L/min`;
+const lpm = (q: number) => qty('flow', q);
 
 /**
  * Ranks the likely causes of a stall or weak delivery.
@@ -127,13 +135,15 @@ const lpm = (q: number) => `${(q * 6e4).toFixed(2)} L/min`;
  *    Q·H with a measured Q is refused as impossible (EngineInputError);
  *  - intake: submergence against S = D·(1 + 2.3·Fr), Fr = v₀/√(gD) (ANSI/HI
  *    9.8-1998, Pump Intake Design, Hydraulic Institute — the formula from memory);
- *  - fittings: ΔH = ΣK·v_c²/(2g) of the fall, strength min(1, 5·ΔH/H);
+ *  - fittings: ΔH = ΣK·v_c²/(2g) of the fall, strength min(1, 5·ΔH/H); none
+ *    listed is unknown, not ruled out (a question's site sheet has no box for them);
  *  - delivery line: h_f + h_m at the measured or expected delivery against
  *    10 % of the lift (common practice, no source).
  * Score of a cause, with w the largest weight of the reported symptoms for it
  * plus 0.1 for each further matching symptom (stallCauses.ts):
- *   problem: 0.4·strength + 0.6·w (strength 0–1, default 1); ok: 0.15·w;
- *   unknown: 0.5·w; capped at 1 and rounded to 0.001. Causes scoring 0 are
+ *   problem: 0.6·strength + 0.4·w (strength 0–1, default 1); ok: 0.15·w;
+ *   unknown: 0.5·w; capped at 1 and rounded to 0.001. A full-strength problem the
+ *   numbers show (≥ 0.6) so outranks any cause only the symptoms suggest (≤ 0.55). Causes scoring 0 are
  *   left out; the rest are sorted by score, then by code.
  * Units: SI (m, m³/s, Pa). Range: as the site-sheet schema (H ≤ 100 m,
  * H < h ≤ 1000 m, drive pipe ≤ 500 m, 1–20 pumps, 1–400 beats/min, 0–40 °C).
@@ -143,9 +153,9 @@ const lpm = (q: number) => `${(q * 6e4).toFixed(2)} L/min`;
  * const drivePipe = { lengthM: 6.096, insideDiameterM: p.insideDiameterM, wallThicknessM: p.wallThicknessM, material: 'hdpe' }
  * const site = { fallM: 1.2192, liftM: 8.8392, drivePipe }
  * const r = runStallCheck({ site, symptoms: ['weak-delivery'] }).results
- * // the flexible pipe ranks first: a problem (strength 1) with weight 0.6 for weak delivery, 0.4 × 1 + 0.6 × 0.6
+ * // the flexible pipe ranks first: a problem (strength 1) with weight 0.6 for weak delivery, 0.6 × 1 + 0.4 × 0.6
  * r.causes[0].code  // → 'flexible-drive-pipe'
- * r.causes[0].score  // ≈ 0.76
+ * r.causes[0].score  // ≈ 0.84
  * // wave speed ≈ 310 m/s (E = 0.9 GPa) against ≈ 1450 m/s rigid, water at 10 °C
  * const w = waterProperties(10)
  * waveSpeed(w.bulkModulusPa, w.densityKgM3, p.insideDiameterM, 0.9e9, p.wallThicknessM)  // ≈ 310 ±1%
@@ -179,7 +189,7 @@ export function runStallCheck(input: StallCheckInput): CalcOutput<StallCheckResu
   const outLD = ld < 150 || ld > 1000;
   ev['drive-pipe-outside-range'] = {
     state: outLH || outLD ? 'problem' : 'ok',
-    reason: `The drive pipe is ${f2(L, 1)} m: ${f2(lh, 1)} times the fall (guides ${lhMin}–${lhMax}) and ${ld.toFixed(0)} times its bore (guide 150–1000)${outLH || outLD ? ', outside the usual range' : ', inside the usual range'}.`,
+    reason: say`The drive pipe is ${qty('length', L)}: ${f2(lh, 1)} times the fall (guides ${lhMin}–${lhMax}) and ${ld.toFixed(0)} times its bore (guide 150–1000)${outLH || outLD ? ', outside the usual range' : ', inside the usual range'}.`,
   };
 
   const eps = roughnessOf(dp);
@@ -206,12 +216,12 @@ export function runStallCheck(input: StallCheckInput): CalcOutput<StallCheckResu
     ev['drive-flow-above-source'] = {
       state: share > 0.9 ? 'problem' : 'ok',
       strength: share > 1 ? 1 : 0.6,
-      reason: `The pumps use ${lpm(totalDrive)}${s.driveFlowM3s === undefined ? ' (estimated)' : ''}, ${(share * 100).toFixed(0)} % of the ${lpm(s.sourceSpareFlowM3s)} the source spares${share > 0.9 ? '; the intake draws down and sucks air' : ''}.`,
+      reason: say`The pumps use ${lpm(totalDrive)}${s.driveFlowM3s === undefined ? ' (estimated)' : ''}, ${(share * 100).toFixed(0)} % of the ${lpm(s.sourceSpareFlowM3s)} the source spares${share > 0.9 ? '; the intake draws down and sucks air' : ''}.`,
     };
   } else {
     ev['drive-flow-above-source'] = {
       state: 'unknown',
-      reason: `The pumps use about ${lpm(totalDrive)}; measure what the source spares in the driest month to compare.`,
+      reason: say`The pumps use about ${lpm(totalDrive)}; measure what the source spares in the driest month to compare.`,
     };
   }
 
@@ -222,7 +232,7 @@ export function runStallCheck(input: StallCheckInput): CalcOutput<StallCheckResu
   ev['lift-too-high'] = {
     state: band.typical <= 0 || r > rMax / 2 ? 'problem' : 'ok',
     strength: band.typical <= 0 ? 1 : 0.6,
-    reason: `The lift is ${f2(r, 1)} times the fall; a ${s.pumpType} ram is expected to manage up to about ${rMax} times, and its typical efficiency here is ${f2(band.typical)}.`,
+    reason: say`The lift is ${f2(r, 1)} times the fall; a ${s.pumpType} ram is expected to manage up to about ${rMax} times, and its typical efficiency here is ${f2(band.typical)}.`,
   };
 
   const c =
@@ -233,8 +243,8 @@ export function runStallCheck(input: StallCheckInput): CalcOutput<StallCheckResu
   ev['flexible-drive-pipe'] = {
     state: mat.rigid ? 'ok' : 'problem',
     reason: mat.rigid
-      ? `The drive pipe is ${mat.label}, stiff enough to carry the pressure wave${c ? ` (wave speed ≈ ${c.toFixed(0)} m/s)` : ''}.`
-      : `The drive pipe is ${mat.label}: it stretches under the surge${c ? ` (wave speed ≈ ${c.toFixed(0)} m/s against ≈ ${cRigid.toFixed(0)} m/s in a rigid pipe)` : ''} and soaks up the energy the pump needs.`,
+      ? say`The drive pipe is ${mat.label}, stiff enough to carry the pressure wave${c ? say` (wave speed ≈ ${qty('velocity', c)})` : ''}.`
+      : say`The drive pipe is ${mat.label}: it stretches under the surge${c ? say` (wave speed ≈ ${qty('velocity', c)} against ≈ ${qty('velocity', cRigid)} in a rigid pipe)` : ''} and soaks up the energy the pump needs.`,
   };
 
   const bpmModel = actual.beatsPerMinute;
@@ -255,7 +265,7 @@ export function runStallCheck(input: StallCheckInput): CalcOutput<StallCheckResu
     ev['waste-valve-setting'] = {
       state: out ? 'problem' : 'ok',
       strength: 0.7,
-      reason: `It beats ${s.beatsPerMinute.toFixed(0)} times a minute (usual ${BPM_RANGE[0]}–${BPM_RANGE[1]}; the model expects about ${bpmModel.toFixed(0)} for this fall and drive pipe)${out ? (fast ? ': a short stroke or light valve shuts before the water gains speed' : ': a long stroke or heavy valve wastes water between beats') : ''}.`,
+      reason: say`It beats ${s.beatsPerMinute.toFixed(0)} times a minute (usual ${BPM_RANGE[0]}–${BPM_RANGE[1]}; the model expects about ${bpmModel.toFixed(0)} for this fall and drive pipe)${out ? (fast ? ': a short stroke or light valve shuts before the water gains speed' : ': a long stroke or heavy valve wastes water between beats') : ''}.`,
     };
   } else if (
     size &&
@@ -266,12 +276,12 @@ export function runStallCheck(input: StallCheckInput): CalcOutput<StallCheckResu
     ev['waste-valve-setting'] = {
       state: 'problem',
       strength: 0.5,
-      reason: `The measured drive flow, ${lpm(s.driveFlowM3s)}, is outside the ${lpm(sizeRange.lowM3s)}–${lpm(sizeRange.highM3s)} typical of a ${NOMINAL_LABELS[size]} pump (common practice, no published source found); the waste valve's stroke or weight sets it.`,
+      reason: say`The measured drive flow, ${lpm(s.driveFlowM3s)}, is outside the ${lpm(sizeRange.lowM3s)}–${lpm(sizeRange.highM3s)} typical of a ${NOMINAL_LABELS[size]} pump (common practice, no published source found); the waste valve's stroke or weight sets it.`,
     };
   } else {
     ev['waste-valve-setting'] = {
       state: 'unknown',
-      reason: `Count the beats per minute: the model expects about ${bpmModel.toFixed(0)} for this fall and drive pipe; far off that, reset the stroke and weight.`,
+      reason: say`Count the beats per minute: the model expects about ${bpmModel.toFixed(0)} for this fall and drive pipe; far off that, reset the stroke and weight.`,
     };
   }
 
@@ -292,7 +302,7 @@ export function runStallCheck(input: StallCheckInput): CalcOutput<StallCheckResu
     }
     ev['delivery-valve-or-snifter'] = {
       state: 'unknown',
-      reason: `It delivers ${lpm(s.deliveredFlowM3s)}, more than the estimated drive flow of ${lpm(totalDrive)} could lift; measure the drive flow at the waste valve.`,
+      reason: say`It delivers ${qty('smallFlow', s.deliveredFlowM3s)}, more than the estimated drive flow of ${lpm(totalDrive)} could lift; measure the drive flow at the waste valve.`,
     };
   } else if (s.deliveredFlowM3s !== undefined) {
     measuredEff = dAubuissonEfficiency(totalDrive, s.deliveredFlowM3s, H, h);
@@ -309,12 +319,12 @@ export function runStallCheck(input: StallCheckInput): CalcOutput<StallCheckResu
     ev['delivery-valve-or-snifter'] = {
       state: low ? 'problem' : 'ok',
       strength: 0.6,
-      reason: `It delivers ${lpm(s.deliveredFlowM3s)}, an efficiency of ${f2(measuredEff)} against a typical ${f2(band.low)}–${f2(band.high)}${low ? '; a leaking or sticking delivery valve returns water at every beat' : ''}.`,
+      reason: say`It delivers ${qty('smallFlow', s.deliveredFlowM3s)}, an efficiency of ${f2(measuredEff)} against a typical ${f2(band.low)}–${f2(band.high)}${low ? '; a leaking or sticking delivery valve returns water at every beat' : ''}.`,
     };
   } else {
     ev['delivery-valve-or-snifter'] = {
       state: 'unknown',
-      reason: `Expected delivery is about ${lpm(expected)}; measure it at the tank, and check the delivery valve seats and the snifter hole.`,
+      reason: say`Expected delivery is about ${qty('smallFlow', expected)}; measure it at the tank, and check the delivery valve seats and the snifter hole.`,
     };
   }
 
@@ -333,7 +343,7 @@ export function runStallCheck(input: StallCheckInput): CalcOutput<StallCheckResu
     );
     ev['air-in-drive-pipe'] = {
       state: s.intakeSubmergenceM < need ? 'problem' : 'ok',
-      reason: `The drive pipe's mouth is ${f2(s.intakeSubmergenceM)} m under the surface; at ${f2(straight.fullFlowVelocityMs)} m/s it needs about ${f2(need)} m to keep a vortex from drawing air${s.intakeSubmergenceM < need ? '' : ' — enough'}.`,
+      reason: say`The drive pipe's mouth is ${qty('smallLength', s.intakeSubmergenceM)} under the surface; at ${qty('velocity', straight.fullFlowVelocityMs)} it needs about ${qty('smallLength', need)} to keep a vortex from drawing air${s.intakeSubmergenceM < need ? '' : ' — enough'}.`,
     };
   } else {
     ev['air-in-drive-pipe'] = {
@@ -380,7 +390,7 @@ export function runStallCheck(input: StallCheckInput): CalcOutput<StallCheckResu
         };
   ev['fall-too-small'] = {
     state: H < 0.5 ? 'problem' : 'ok',
-    reason: `The fall is ${f2(H)} m; most rams need at least 0.5 m (Water for the World RWS.4.D.5).`,
+    reason: say`The fall is ${qty('length', H)}; most rams need at least ${qty('length', PRACTICE.minFallM.value)} (Water for the World RWS.4.D.5).`,
   };
 
   const vc = straight.closureVelocityMs * (qEach / straight.driveFlowM3s);
@@ -390,9 +400,13 @@ export function runStallCheck(input: StallCheckInput): CalcOutput<StallCheckResu
       ? {
           state: 'problem',
           strength: Math.min(1, (5 * dH) / H),
-          reason: `Fittings in the drive pipe (ΣK = ${f2(k)}) take about ${f2(dH, 3)} m of the ${f2(H, 3)} m fall (${((dH / H) * 100).toFixed(1)} %) at the closing velocity of ${f2(vc)} m/s.`,
+          reason: say`Fittings in the drive pipe (ΣK = ${f2(k)}) take about ${qty('smallLength', dH)} of the ${qty('length', H)} fall (${((dH / H) * 100).toFixed(1)} %) at the closing velocity of ${qty('velocity', vc)}.`,
         }
-      : { state: 'ok', reason: 'The site sheet lists no fittings in the drive pipe.' };
+      : // no fittings listed is not the same as none: the asker's site sheet has no box for them
+        {
+          state: 'unknown',
+          reason: 'Elbows, tees or a part-closed valve in the drive pipe each take some of the fall: keep it straight.',
+        };
 
   if (s.deliveryLine) {
     const q = s.deliveredFlowM3s ?? expected;
@@ -401,7 +415,7 @@ export function runStallCheck(input: StallCheckInput): CalcOutput<StallCheckResu
     const loss = l.frictionHeadM + l.minorHeadM;
     ev['delivery-line-friction'] = {
       state: loss > 0.1 * h ? 'problem' : 'ok',
-      reason: `At ${lpm(q)} the delivery line loses ${f2(loss, 3)} m, ${((loss / h) * 100).toFixed(1)} % of the lift${loss > 0.1 * h ? ' — more than the 10 % usually allowed' : ''}.`,
+      reason: say`At ${qty('smallFlow', q)} the delivery line loses ${qty('length', loss)}, ${((loss / h) * 100).toFixed(1)} % of the lift${loss > 0.1 * h ? ' — more than the 10 % usually allowed' : ''}.`,
     };
   } else {
     ev['delivery-line-friction'] = {
@@ -418,7 +432,7 @@ export function runStallCheck(input: StallCheckInput): CalcOutput<StallCheckResu
     .map((code) => ({
       code,
       title: STALL_CAUSES[code].title,
-      reason: ev[code].reason,
+      ...reasonOf(ev[code].reason),
       score: score(code, sym, ev[code]),
       guide: STALL_CAUSES[code].guide,
       fromNumbers: ev[code].state === 'problem',

@@ -23,8 +23,12 @@ const SCOPE_OF: Record<Switch, Exclude<UnsubscribeScope, 'digest' | 'all'>> = {
   notifyExpert: 'expert',
 };
 
-/** At most this many characters of a member's words are quoted in a message. */
-const QUOTE_CHARS = 600;
+/**
+ * At most this many characters of a member's words are quoted in a message: enough to
+ * recognise the post, while the advice itself is read in the thread, where a
+ * moderator can still withdraw it.
+ */
+const QUOTE_CHARS = 200;
 
 export function excerpt(text: string, max = QUOTE_CHARS): string {
   const t = text.replace(/\r\n/g, '\n').trim();
@@ -203,10 +207,17 @@ export async function notifyModeration(
     reason: string;
     questionId: number | null;
     postLabel: string;
+    /** the post's place in its thread ("answer-12"), so the link opens at it */
+    anchor?: string;
+    /** the author still sees the post, marked, and may ask for a review from it */
+    appealable?: boolean;
   },
 ) {
   const to = await recipient(m.authorId, m.moderatorId, 'notifyModeration', transaction);
   if (!to) return;
+  const title = m.questionId
+    ? (await initModels().Question.findByPk(m.questionId, { attributes: ['title'], transaction }))?.title
+    : null;
   await queue(
     `moderation:${m.auditId}:to:${to.id}`,
     'moderation',
@@ -217,17 +228,57 @@ export async function notifyModeration(
       preview: `${m.words}. Reason: ${m.reason}`,
       heading: m.words,
       paragraphs: [
-        `This concerns ${m.postLabel}.`,
+        title ? `This concerns ${m.postLabel} in “${title}”.` : `This concerns ${m.postLabel}.`,
         `The moderator’s reason: ${m.reason}`,
-        'Your notices in Settings keep a copy. If you think this was a mistake, reply in the thread or write to the moderators from your settings page.',
+        m.appealable
+          ? 'Your notices in Settings keep a copy. You still see the post in the thread, marked with this reason; if you think this was a mistake, ask the moderators to review the decision from there.'
+          : 'Your notices in Settings keep a copy.',
       ],
       action: m.questionId
-        ? { label: 'Open the thread', url: threadUrl(m.questionId) }
+        ? { label: 'Open the thread', url: threadUrl(m.questionId, m.anchor) }
         : { label: 'Open your settings', url: `${siteUrl()}/settings` },
       reason: 'You get this because a moderator acted on something you posted.',
     },
     transaction,
   );
+}
+
+/**
+ * An answer hidden as unsafe advice: the asker and the thread's followers may have read
+ * it by e-mail, so each gets one short follow-up (keyed per answer and recipient, so a
+ * second hide sends nothing more). It names the thread but never repeats the advice.
+ */
+export async function notifyWithdrawn(
+  transaction: Transaction,
+  w: { answerId: number; questionId: number; answerAuthorId: number; moderatorId: number },
+) {
+  const { Question, QuestionFollow } = initModels();
+  const q = await Question.findByPk(w.questionId, { attributes: ['id', 'title', 'authorId'], transaction });
+  if (!q) return;
+  const follows = await QuestionFollow.findAll({ where: { questionId: q.id }, attributes: ['userId'], transaction });
+  const ids = [...new Set([q.authorId, ...follows.map((f) => f.userId)])].filter((id) => id !== w.moderatorId);
+  for (const id of ids) {
+    const to = await recipient(id, w.answerAuthorId, 'notifyAnswers', transaction);
+    if (!to) continue;
+    await queue(
+      `withdrawn:answer:${w.answerId}:to:${to.id}`,
+      'withdrawn',
+      to,
+      'notifyAnswers',
+      {
+        subject: `Advice withdrawn as unsafe: ${q.title}`,
+        preview: 'A moderator withdrew an answer in this thread as unsafe advice.',
+        heading: 'An answer was withdrawn as unsafe',
+        paragraphs: [
+          `A moderator withdrew an answer in “${q.title}” as unsafe advice. If you read it in an earlier e-mail, please do not follow it.`,
+          'The thread shows the answers that still stand.',
+        ],
+        action: { label: 'Open the thread', url: threadUrl(q.id) },
+        reason: 'You get this because you asked or follow this question on Clackwater.',
+      },
+      transaction,
+    );
+  }
 }
 
 /** A moderator decided your expert application. */

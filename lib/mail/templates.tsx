@@ -40,6 +40,19 @@ export interface MailContent {
 const serif = 'Literata, Georgia, "Times New Roman", serif';
 const sans = 'system-ui, -apple-system, "Segoe UI", Roboto, Arial, sans-serif';
 
+/** A long word (a pasted link, a pipe part number) breaks instead of widening the message past a phone's screen. */
+const wrap = { overflowWrap: 'anywhere' as const, wordBreak: 'break-word' as const };
+
+/**
+ * Phones: the viewport meta makes a phone lay the message out at its own width
+ * (without it, 980 px shrunk to fit); below 480 px the card loses its side borders and
+ * most of its padding so the text keeps the width. Clients that drop <style> still get
+ * the fluid table and the inline sizes, which fit on their own.
+ */
+const PHONE_CSS = `@media only screen and (max-width: 480px) {
+  .cw-card { border-left: 0 !important; border-right: 0 !important; border-radius: 0 !important; padding: 20px 16px !important; }
+}`;
+
 const s = {
   body: {
     backgroundColor: palette.limestone[100],
@@ -53,6 +66,8 @@ const s = {
     border: `1px solid ${palette.limestone[300]}`,
     borderRadius: '6px',
     maxWidth: '600px',
+    width: '100%',
+    boxSizing: 'border-box' as const,
     padding: '24px 28px',
   },
   brand: {
@@ -63,44 +78,57 @@ const s = {
     letterSpacing: '0.04em',
     margin: '0 0 12px',
   },
-  heading: { color: palette.creek[800], fontFamily: serif, fontSize: '24px', lineHeight: '1.25', margin: '0 0 12px' },
-  p: { fontSize: '15px', lineHeight: '1.55', margin: '0 0 12px' },
+  heading: {
+    color: palette.creek[800],
+    fontFamily: serif,
+    fontSize: '24px',
+    lineHeight: '1.25',
+    margin: '0 0 12px',
+    ...wrap,
+  },
+  p: { fontSize: '16px', lineHeight: '1.55', margin: '0 0 12px', ...wrap },
   quote: {
     borderLeft: `3px solid ${palette.clay[400]}`,
     color: palette.creek[700],
-    fontSize: '15px',
+    fontSize: '16px',
     lineHeight: '1.55',
     margin: '0 0 16px',
     padding: '2px 0 2px 12px',
     whiteSpace: 'pre-line' as const,
+    ...wrap,
   },
-  quoteBy: { color: palette.creek[400], fontSize: '13px', margin: '0 0 4px' },
-  sectionTitle: { color: palette.creek[800], fontFamily: serif, fontSize: '18px', margin: '20px 0 6px' },
-  note: { color: palette.creek[500], fontSize: '14px', lineHeight: '1.5', margin: '0 0 8px' },
-  item: { fontSize: '15px', lineHeight: '1.4', margin: '0 0 2px' },
-  meta: { color: palette.creek[400], fontSize: '13px', margin: '0 0 10px' },
+  quoteBy: { color: palette.creek[400], fontSize: '14px', margin: '0 0 4px', ...wrap },
+  sectionTitle: { color: palette.creek[800], fontFamily: serif, fontSize: '19px', margin: '20px 0 6px', ...wrap },
+  note: { color: palette.creek[500], fontSize: '15px', lineHeight: '1.5', margin: '0 0 8px', ...wrap },
+  item: { fontSize: '16px', lineHeight: '1.4', margin: '0 0 2px', ...wrap },
+  meta: { color: palette.creek[400], fontSize: '14px', margin: '0 0 10px', ...wrap },
   link: { color: palette.clay[600], textDecoration: 'underline' },
   action: {
     backgroundColor: palette.creek[700],
     borderRadius: '4px',
     color: palette.limestone[50],
     display: 'inline-block',
-    fontSize: '15px',
+    fontSize: '16px',
     fontWeight: 600,
-    padding: '10px 16px',
+    // about 44 px tall: a thumb's target
+    padding: '14px 20px',
+    ...wrap,
     textDecoration: 'none',
   },
   hr: { borderColor: palette.limestone[300], margin: '24px 0 12px' },
-  footer: { color: palette.creek[400], fontSize: '12px', lineHeight: '1.5', margin: '0 0 4px' },
+  footer: { color: palette.creek[400], fontSize: '13px', lineHeight: '1.5', margin: '0 0 4px', ...wrap },
 };
 
 export function ClackwaterEmail({ content: c }: { content: MailContent }) {
   return (
     <Html lang="en">
-      <Head />
+      <Head>
+        <meta name="viewport" content="width=device-width, initial-scale=1" />
+        <style>{PHONE_CSS}</style>
+      </Head>
       <Preview>{c.preview}</Preview>
       <Body style={s.body}>
-        <Container style={s.container}>
+        <Container style={s.container} className="cw-card">
           <Text style={s.brand}>CLACKWATER</Text>
           <Heading as="h1" style={s.heading}>
             {c.heading}

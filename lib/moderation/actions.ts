@@ -5,9 +5,11 @@ import { ForumError } from '@/lib/questions/errors';
 import type { SessionUser } from '@/lib/auth/session';
 import { can, MODERATING, REFUSAL, type Actor, type Role } from '@/lib/auth/policy';
 import { recordAudit } from './audit';
-import { notifyModeration } from '@/lib/mail/notify';
+import { notifyModeration, notifyWithdrawn } from '@/lib/mail/notify';
 import { postsChanged } from '@/lib/questions/after-write';
 import { loadPost, type ModeratedType } from './posts';
+import { whyNotApplicable } from './applicable';
+import { QUESTION_ONLY_ACTIONS } from '@/lib/vocabulary';
 import { bumpSessionVersion } from '@/lib/auth/session-version';
 
 export { MODERATION_ACTIONS, type ModerationAction } from '@/lib/vocabulary';
@@ -55,7 +57,7 @@ export async function moderate(
     until?: string;
   },
 ) {
-  const { Flag, Question, QuestionTag, Tag, User, Notice } = initModels();
+  const { Flag, Question, QuestionTag, Tag, User, Notice, Appeal } = initModels();
   const done = await getSequelize().transaction(async (transaction) => {
     const { post, questionId } = await loadPost(input.postType, input.postId, transaction);
     if (post.authorId === moderator.id) throw new ForumError(403, 'Moderators cannot act on their own posts.');
@@ -67,6 +69,19 @@ export async function moderate(
     });
     if (ownFlag)
       throw new ForumError(403, 'Moderators cannot act on a post they flagged themselves; another moderator will.');
+    // the panel offers only the actions that fit; a request for another (a stale page, a script) is refused
+    const unfit = whyNotApplicable(input.action, {
+      type: input.postType,
+      hiddenAt: post.hiddenAt,
+      hiddenReason: post.hiddenReason,
+      deletedAt: post.deletedAt,
+      lockedAt: input.postType === 'question' ? ((post as { lockedAt?: Date | null }).lockedAt ?? null) : undefined,
+    });
+    if (unfit) {
+      const field =
+        QUESTION_ONLY_ACTIONS.includes(input.action) && input.postType !== 'question' ? 'postType' : 'action';
+      throw new ForumError(422, `${field}: ${unfit}`, field);
+    }
     const now = new Date();
     const details: Record<string, unknown> = { questionId };
     const settleFlags = (status: 'dismissed' | 'upheld') =>
@@ -81,10 +96,30 @@ export async function moderate(
         if (post.hiddenAt && /pending review/.test(post.hiddenReason ?? ''))
           await post.update({ hiddenAt: null, hiddenReason: null }, { transaction });
         break;
-      case 'hide':
+      case 'hide': {
+        // asked before the flags settle; upheld ones count too, so a hide after a restore still knows
+        const unsafe =
+          input.postType === 'answer' &&
+          (await Flag.count({
+            where: {
+              postType: 'answer',
+              postId: input.postId,
+              reason: 'unsafe',
+              status: { [Op.in]: ['open', 'upheld'] },
+            },
+            transaction,
+          })) > 0;
         await post.update({ hiddenAt: now, hiddenReason: input.reason }, { transaction });
         await settleFlags('upheld');
+        if (unsafe && questionId)
+          await notifyWithdrawn(transaction, {
+            answerId: input.postId,
+            questionId,
+            answerAuthorId: post.authorId,
+            moderatorId: moderator.id,
+          });
         break;
+      }
       case 'restore':
         await post.update({ hiddenAt: null, hiddenReason: null, deletedAt: null }, { transaction });
         await settleFlags('dismissed');
@@ -131,6 +166,11 @@ export async function moderate(
         break;
       }
     }
+    // the action is the moderator's answer to any appeal waiting on this post
+    const [appealsDecided] = await Appeal.update(
+      { status: 'decided', resolvedBy: moderator.id, resolvedAt: now },
+      { where: { postType: input.postType, postId: input.postId, status: 'open' }, transaction },
+    );
     const audit = await recordAudit(
       {
         actorId: moderator.id,
@@ -142,26 +182,34 @@ export async function moderate(
       },
       transaction,
     );
+    // a dismissal answering an appeal keeps the decision, and the author who asked hears so
+    const words =
+      input.action === 'dismiss' && appealsDecided > 0
+        ? 'A moderator reviewed your request and kept the decision'
+        : WORDS[input.action];
     const untilWords = input.action === 'suspend' ? ` until ${formatDate(details.until as string)}` : '';
     await Notice.create(
       {
         userId: post.authorId,
         kind: 'moderation',
-        message: `${WORDS[input.action]}${untilWords}. Reason: ${input.reason}`,
+        message: `${words}${untilWords}. Reason: ${input.reason}`,
         link: questionId ? `/questions/${questionId}` : null,
         readAt: null,
       },
       { transaction },
     );
-    if (input.action !== 'dismiss') {
+    if (input.action !== 'dismiss' || appealsDecided > 0) {
       await notifyModeration(transaction, {
         auditId: audit.id,
         authorId: post.authorId,
         moderatorId: moderator.id,
-        words: WORDS[input.action],
+        words,
         reason: input.reason,
         questionId,
         postLabel: POST_LABEL[input.postType],
+        anchor:
+          input.postType === 'answer' || input.postType === 'reply' ? `${input.postType}-${input.postId}` : undefined,
+        appealable: input.action === 'hide' && (input.postType === 'answer' || input.postType === 'reply'),
       });
     }
     return { auditId: audit.id, questionId };

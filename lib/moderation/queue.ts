@@ -4,9 +4,13 @@ import { MODERATED_TYPES, type FlagReason, type ModeratedType } from '@/lib/voca
 import type { Role } from '@/lib/auth/policy';
 import { photoQuestionId } from './posts';
 
-/** Posts with open flags, oldest flag first, each with its context, the flaggers' notes and its revisions. */
+/**
+ * Posts with open flags, and authors' open appeals: those flagged as unsafe advice first
+ * (a reader may act on such advice while it waits), then the oldest flag or appeal first;
+ * each with its context, the flaggers' notes and its revisions.
+ */
 export async function reviewQueue(filter: { reason?: FlagReason; olderThanHours?: number }) {
-  const { Flag, User, Question, Answer, Reply, Revision, Tag, Photo, FieldLogEntry } = initModels();
+  const { Flag, User, Question, Answer, Reply, Revision, Tag, Photo, FieldLogEntry, Appeal } = initModels();
   const where: Record<string | symbol, unknown> = { status: 'open', postType: { [Op.in]: [...MODERATED_TYPES] } };
   if (filter.reason) where.reason = filter.reason;
   if (filter.olderThanHours) where.createdAt = { [Op.lte]: new Date(Date.now() - filter.olderThanHours * 3_600_000) };
@@ -21,8 +25,26 @@ export async function reviewQueue(filter: { reason?: FlagReason; olderThanHours?
     const k = `${f.postType}:${f.postId}`;
     groups.set(k, [...(groups.get(k) ?? []), f]);
   }
+  // each open appeal is an item of its own, beside any flags on the same post
+  const appeals = filter.reason
+    ? []
+    : await Appeal.findAll({
+        where: {
+          status: 'open',
+          ...(filter.olderThanHours
+            ? { createdAt: { [Op.lte]: new Date(Date.now() - filter.olderThanHours * 3_600_000) } }
+            : {}),
+        },
+        include: [{ model: User, as: 'user', attributes: ['handle', 'displayName'] }],
+        order: [['createdAt', 'ASC']],
+        limit: 200,
+      });
+  const targets = [
+    ...[...groups].map(([k, fs]) => ({ k, fs, appeal: null as (typeof appeals)[number] | null })),
+    ...appeals.map((a) => ({ k: `${a.postType}:${a.postId}`, fs: [] as typeof flags, appeal: a })),
+  ];
   const items = [];
-  for (const [k, fs] of groups) {
+  for (const { k, fs, appeal } of targets) {
     const [type, idText] = k.split(':') as [ModeratedType, string];
     const id = Number(idText);
     type QueuedPost = {
@@ -30,6 +52,7 @@ export async function reviewQueue(filter: { reason?: FlagReason; olderThanHours?
       body: string;
       questionId?: number | null;
       hiddenAt: Date | null;
+      hiddenReason?: string | null;
       deletedAt: Date | null;
       createdAt: Date;
       author?: { id: number; handle: string; displayName: string; role: Role };
@@ -47,6 +70,7 @@ export async function reviewQueue(filter: { reason?: FlagReason; olderThanHours?
             body: `Field log: ${entry.siteName} (${entry.testedOn}). ${entry.notes}`.trim(),
             questionId: null,
             hiddenAt: entry.hiddenAt ?? null,
+            hiddenReason: entry.hiddenReason ?? null,
             deletedAt: entry.deletedAt ?? null,
             createdAt: entry.createdAt,
             author: author ?? undefined,
@@ -63,6 +87,7 @@ export async function reviewQueue(filter: { reason?: FlagReason; olderThanHours?
             body: photo.alt ?? '',
             questionId: await photoQuestionId(photo),
             hiddenAt: photo.hiddenAt ?? null,
+            hiddenReason: photo.hiddenReason ?? null,
             deletedAt: photo.deletedAt ?? null,
             createdAt: photo.createdAt,
             author: owner ?? undefined,
@@ -78,7 +103,7 @@ export async function reviewQueue(filter: { reason?: FlagReason; olderThanHours?
     if (!post) continue;
     const questionId = type === 'question' ? post.id : (post.questionId ?? 0);
     const q = await Question.findByPk(questionId, {
-      attributes: ['id', 'title'],
+      attributes: ['id', 'title', 'lockedAt'],
       include: [{ model: Tag, as: 'tags', attributes: ['slug'], through: { attributes: [] } }],
     });
     const revisions = await Revision.findAll({
@@ -102,11 +127,21 @@ export async function reviewQueue(filter: { reason?: FlagReason; olderThanHours?
             }
           : null,
         hiddenAt: post.hiddenAt?.toISOString() ?? null,
+        hiddenReason: post.hiddenReason ?? null,
         deletedAt: post.deletedAt?.toISOString() ?? null,
         createdAt: post.createdAt.toISOString(),
         tags: (q?.tags ?? []).map((t) => t.slug),
+        lockedAt: type === 'question' ? (q?.lockedAt?.toISOString() ?? null) : undefined,
         photoId: post.photoId ?? null,
       },
+      appeal: appeal
+        ? {
+            id: appeal.id,
+            text: appeal.text,
+            by: appeal.user?.displayName ?? 'the author',
+            createdAt: appeal.createdAt.toISOString(),
+          }
+        : null,
       flags: fs.map((f) => ({
         id: f.id,
         reason: f.reason,
@@ -125,5 +160,10 @@ export async function reviewQueue(filter: { reason?: FlagReason; olderThanHours?
       })),
     });
   }
+  // unsafe advice first, then the oldest flag or appeal
+  type Keys = { flags: { reason: string; createdAt: string }[]; appeal: { createdAt: string } | null };
+  const unsafe = (i: Keys) => (i.flags.some((f) => f.reason === 'unsafe') ? 0 : 1);
+  const since = (i: Keys) => i.appeal?.createdAt ?? i.flags[0]?.createdAt ?? '';
+  items.sort((a, b) => unsafe(a) - unsafe(b) || since(a).localeCompare(since(b)));
   return { items };
 }

@@ -12,6 +12,7 @@ import { validateSiteSheet } from '@/lib/calculators/site-sheet';
 import { postsChanged, threadChanged } from './after-write';
 import { findWritablePost, namedInBody, type PostType } from './visibility';
 import { checkPostText } from './post-text';
+import { saveWorkedCalculation, type NewWorkedCalculation } from '@/lib/calculations/store';
 
 /** Runs a write, then brings the thread's search documents and its cached page up to date (same request). */
 async function thenIndex<T>(write: Promise<T>, questionId: (result: T) => number): Promise<T> {
@@ -136,6 +137,8 @@ export async function postAnswer(
   user: SessionUser,
   questionId: number,
   input: { body: string; calculationId?: string; photoIds: string[] },
+  /** a calculation from the answer form, already recomputed by the server; saved in the answer's transaction */
+  newCalculation?: Omit<NewWorkedCalculation, 'authorId'>,
 ) {
   checkPostText(user, 'answer', input);
   const { Answer, WorkedCalculation, Revision } = initModels();
@@ -143,7 +146,9 @@ export async function postAnswer(
     const q = await writableQuestion(user, questionId, transaction);
     if (q.lockedAt) throw new ForumError(409, 'This thread is locked: no new answers or replies.');
     let calculationId: number | null = null;
-    if (input.calculationId) {
+    if (newCalculation) {
+      calculationId = (await saveWorkedCalculation({ ...newCalculation, authorId: user.id }, transaction)).id;
+    } else if (input.calculationId) {
       const calc = await WorkedCalculation.findOne({ where: { publicId: input.calculationId }, transaction });
       if (!calc) throw new ForumError(422, 'calculationId: no worked calculation with that id', 'calculationId');
       calculationId = calc.id;

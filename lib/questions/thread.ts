@@ -32,6 +32,12 @@ export interface ReplyView {
   edited: boolean;
   cautionUnsafe: boolean;
   hiddenAt: string | null;
+  /** why it is hidden: sent only to a reader who may see it hidden (its author, moderators) */
+  hiddenReason: string | null;
+  /** the reader wrote it (the author is shown their own hidden post, marked) */
+  ownPost: boolean;
+  /** open flags wait on it in the review queue (only ever true for moderators) */
+  inQueue: boolean;
   deletedAt: string | null;
 }
 export interface AnswerView {
@@ -47,6 +53,12 @@ export interface AnswerView {
   edited: boolean;
   cautionUnsafe: boolean;
   hiddenAt: string | null;
+  /** why it is hidden: sent only to a reader who may see it hidden (its author, moderators) */
+  hiddenReason: string | null;
+  /** the reader wrote it (the author is shown their own hidden post, marked) */
+  ownPost: boolean;
+  /** open flags wait on it in the review queue (only ever true for moderators) */
+  inQueue: boolean;
   deletedAt: string | null;
 }
 export interface ThreadView {
@@ -71,6 +83,12 @@ export interface ThreadView {
   edited: boolean;
   cautionUnsafe: boolean;
   hiddenAt: string | null;
+  /** why it is hidden: sent only to a reader who may see it hidden (its author, moderators) */
+  hiddenReason: string | null;
+  /** the reader wrote it (the author is shown their own hidden post, marked) */
+  ownPost: boolean;
+  /** open flags wait on it in the review queue (only ever true for moderators) */
+  inQueue: boolean;
   deletedAt: string | null;
   lockedAt: string | null;
 }
@@ -105,9 +123,15 @@ export async function loadThread(id: number, viewer: Actor | null): Promise<Thre
       photoInclude,
     ],
   });
-  // Hidden and deleted posts vanish for everyone but moderators.
+  // Hidden and deleted posts vanish for everyone but moderators, and a hidden one's author
+  // (the same rule as findVisiblePost): they read it marked, with the reason.
+  // (answers and replies: a hidden question takes the whole thread down, for its asker too)
   if (!q || (!seeHidden && (q.hiddenAt || q.deletedAt))) throw new ForumError(404, 'no such question', 'id');
-  const visible = seeHidden ? {} : { hiddenAt: null, deletedAt: null };
+  const visible = seeHidden
+    ? {}
+    : viewerId !== null
+      ? { deletedAt: null, [Op.or]: [{ hiddenAt: null }, { authorId: viewerId }] }
+      : { hiddenAt: null, deletedAt: null };
   const [answers, replies, follow] = await Promise.all([
     Answer.findAll({
       where: { questionId: id, ...visible },
@@ -139,16 +163,24 @@ export async function loadThread(id: number, viewer: Actor | null): Promise<Thre
     viewerId
       ? HelpfulMark.findAll({ where: { userId: viewerId, [Op.or]: thisThread }, attributes: ['postType', 'postId'] })
       : Promise.resolve([]),
-    // an open "unsafe advice" flag shows readers a caution until a moderator reviews it
+    // an open "unsafe advice" flag shows readers a caution until a moderator reviews it;
+    // moderators also learn which posts wait in the queue, to open them there
     Flag.findAll({
-      where: { status: 'open', reason: 'unsafe', [Op.or]: thisThread },
-      attributes: ['postType', 'postId'],
+      where: { status: 'open', ...(seeHidden ? {} : { reason: 'unsafe' }), [Op.or]: thisThread },
+      attributes: ['postType', 'postId', 'reason'],
     }),
   ]);
-  const unsafe = new Set(unsafeRows.map((f) => `${f.postType}:${f.postId}`));
-  const modState = (t: string, p: { id: number; hiddenAt?: Date | null; deletedAt?: Date | null }) => ({
+  const unsafe = new Set(unsafeRows.filter((f) => f.reason === 'unsafe').map((f) => `${f.postType}:${f.postId}`));
+  const flagged = new Set(seeHidden ? unsafeRows.map((f) => `${f.postType}:${f.postId}`) : []);
+  const modState = (
+    t: string,
+    p: { id: number; authorId: number; hiddenAt?: Date | null; hiddenReason?: string | null; deletedAt?: Date | null },
+  ) => ({
     cautionUnsafe: unsafe.has(`${t}:${p.id}`),
+    inQueue: flagged.has(`${t}:${p.id}`),
     hiddenAt: p.hiddenAt?.toISOString() ?? null,
+    hiddenReason: p.hiddenAt ? (p.hiddenReason ?? null) : null,
+    ownPost: viewerId !== null && p.authorId === viewerId,
     deletedAt: p.deletedAt?.toISOString() ?? null,
   });
   const marked = new Set(marks.map((m) => `${m.postType}:${m.postId}`));

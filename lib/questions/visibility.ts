@@ -36,7 +36,8 @@ const notFound = (postType: PostType, field: string) => new ForumError(404, `no 
  * A post and its thread as one reader may see them: the same rule as the thread page
  * (`loadThread`), so no side door (revisions, marks, follows, photos) shows more. A post
  * is visible when it and its question are neither hidden nor deleted; moderators
- * ('moderation.seeHidden') see everything. Anything else is "not found", exactly as a
+ * ('moderation.seeHidden') see everything, and an author may read their own hidden (not
+ * deleted) answer or reply in a visible thread, so a hide never just makes their words vanish for them. Anything else is "not found", exactly as a
  * post that never existed. With `questionId`, an answer or reply must belong to it.
  * Locks follow `opts.lock`, one row only, so two writers never take them in opposite orders.
  */
@@ -70,7 +71,9 @@ export async function findVisiblePost(
   });
   if (!question) throw notFound(postType, field);
   const takenDown = isTakenDown(question) || isTakenDown(post);
-  if (takenDown && !can(viewer, 'moderation.seeHidden')) throw notFound(postType, field);
+  // answers and replies only: a hidden question takes its whole thread down, for its asker too
+  const ownHidden = !!viewer && !!post && post.authorId === viewer.id && !post.deletedAt && !isTakenDown(question);
+  if (takenDown && !ownHidden && !can(viewer, 'moderation.seeHidden')) throw notFound(postType, field);
   return { question, post: post ?? question, takenDown };
 }
 
@@ -86,6 +89,9 @@ export async function findWritablePost(
   opts: FindOptions = {},
 ): Promise<FoundPost> {
   const found = await findVisiblePost(user, postType, postId, opts);
+  // its author reads a hidden post but writes to it no more than anyone else who cannot see it
+  if (found.takenDown && !can(user, 'moderation.seeHidden'))
+    throw notFound(postType, opts.field ?? (postType === 'question' ? 'id' : 'postId'));
   if (found.takenDown) {
     const what = isTakenDown(found.question) ? 'This question' : `This ${postType}`;
     throw new ForumError(409, `${what} is hidden or deleted: restore it before anyone writes to it.`, opts.field);

@@ -35,6 +35,15 @@ export const moderationActionSchema = z.object({
     .optional(),
 });
 
+export const appealSchema = z.object({
+  ...postRef,
+  text: z
+    .string({ error: 'text is required' })
+    .trim()
+    .min(10, 'text: say why the moderators should look again (at least 10 characters)')
+    .max(1000, 'text must be at most 1,000 characters'),
+});
+
 export const reviewFilterSchema = z.object({
   reason: z.enum(FLAG_REASONS).optional(),
   olderThanHours: z

@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { POST_TYPES } from '@/lib/vocabulary';
 import { BROKEN_TEXT_MESSAGE, isWellFormedText } from './text';
+import { saveCalculationSchema } from './calculation';
 
 /**
  * Shared by the ask form (react-hook-form's zod resolver) and POST /api/questions.
@@ -14,6 +15,7 @@ export const SITE_SHEET_FIELDS = [
   'driveLength',
   'driveSize',
   'driveMaterial',
+  'elbows',
   'sourceFlow',
   'pumpSize',
   'pumps',
@@ -70,21 +72,31 @@ export type AskQuestion = z.input<typeof askQuestionSchema>;
 
 export const editQuestionSchema = askQuestionSchema.pick({ title: true, body: true, tags: true, siteSheet: true });
 
-export const answerSchema = z.object({
-  body: z
-    .string({ error: 'body is required' })
-    .trim()
-    .min(20, 'body must be at least 20 characters')
-    .max(20_000, 'body must be at most 20,000 characters'),
-  calculationId: z
-    .string()
-    .regex(/^[0-9A-Za-z]{6,16}$/, 'calculationId must be a worked calculation id')
-    .optional(),
-  photoIds: z
-    .array(z.string().regex(/^[0-9A-Za-z]{10,24}$/))
-    .max(6, 'at most six photos')
-    .default([]),
-});
+export const answerSchema = z
+  .object({
+    body: z
+      .string({ error: 'body is required' })
+      .trim()
+      .min(20, 'body must be at least 20 characters')
+      .max(20_000, 'body must be at most 20,000 characters'),
+    calculationId: z
+      .string()
+      .regex(/^[0-9A-Za-z]{6,16}$/, 'calculationId must be a worked calculation id')
+      .optional(),
+    /**
+     * A calculation shown in the answer form, saved with the answer in one go: what the
+     * answerer sees in the form is what is posted, with no separate "attach" step to miss.
+     */
+    calculation: saveCalculationSchema.pick({ tool: true, inputs: true }).optional(),
+    photoIds: z
+      .array(z.string().regex(/^[0-9A-Za-z]{10,24}$/))
+      .max(6, 'at most six photos')
+      .default([]),
+  })
+  .refine((a) => !(a.calculationId && a.calculation), {
+    message: 'calculation: send either calculationId or calculation, not both',
+    path: ['calculation'],
+  });
 
 export const editBodySchema = z.object({
   body: z

@@ -272,15 +272,20 @@ export const demoQuestions: DemoQuestion[] = [
   },
 ];
 
-/** Experts' safety checks on the guides. One is stale: the guide changed after it. */
+/** Experts' safety checks on the guides. The drive pipe's are stale: the guide changed after them. */
 export const demoSafetyChecks: {
   guide: string;
   expert: string;
   verdict: 'sound' | 'needs changes';
   notes: string;
-  daysAgo: number;
-  stale?: boolean;
-  staleBecause?: string;
+  /** For a check on the text now: how long ago (never before the guide's "updated" day). */
+  daysAgo?: number;
+  /**
+   * A check made on an earlier wording, which carried its own "updated" day: the seed
+   * rebuilds that wording from the file now by leaving out the sections named and putting
+   * back the sentences replaced since, and dates the check `checkedDaysLater` after that day.
+   */
+  earlier?: { updated: string; checkedDaysLater: number; without?: string[]; was?: [now: string, then: string][] };
 }[] = [
   {
     guide: 'how-a-ram-pump-works',
@@ -293,18 +298,23 @@ export const demoSafetyChecks: {
     guide: 'the-drive-pipe',
     expert: 'quarry_lane_valves',
     verdict: 'needs changes',
-    daysAgo: 40,
-    stale: true,
-    staleBecause: 'the surge section was added',
+    earlier: {
+      updated: '2026-10-20',
+      checkedDaysLater: 2,
+      without: ['## Water hammer'],
+      was: [['Two elbows cost more still.', 'Elbows cost a little.']],
+    },
     notes: 'Needs a plain statement that a flexible drive pipe soaks up the surge, and a caution on pressure ratings.',
   },
   {
     guide: 'the-drive-pipe',
     expert: 'quarry_lane_valves',
     verdict: 'sound',
-    daysAgo: 20,
-    stale: true,
-    staleBecause: 'the fittings section was rewritten',
+    earlier: {
+      updated: '2026-11-12',
+      checkedDaysLater: 1,
+      was: [['Two elbows cost more still.', 'Elbows cost a little.']],
+    },
     notes: 'Surge caution added; the length guidance now says where sources disagree.',
   },
   {

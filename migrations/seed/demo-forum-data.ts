@@ -30,6 +30,7 @@ export const demoThreads: DemoThread[] = [
       driveLength: '24 ft',
       driveSize: '1/2',
       driveMaterial: 'pvc-sch40',
+      elbows: '1',
       pumpSize: '1/2',
       pumps: '2',
       driveFlow: '2 gal/min',

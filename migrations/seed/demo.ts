@@ -1,6 +1,7 @@
 import type { Sequelize } from 'sequelize';
 import { initModels } from '@/models';
 import { contentHash, readGuideFile } from '@/lib/guides/content';
+import { toDate } from '@/lib/dates';
 import { computeFromForm } from '@/lib/calculators';
 import { newPublicId } from '@/lib/calculations/store';
 import { hashPassword } from '@/lib/auth/password';
@@ -89,17 +90,23 @@ export async function seedDemo(sequelize: Sequelize, now = new Date()): Promise<
       }
     }
 
-    // Safety checks are tied to the guide file's hash as it is now; a "stale" one
-    // records the hash of an earlier wording, so the guide shows it changed since.
+    // A check keeps the guide file the expert read and is tied to its hash. A check on
+    // an earlier wording keeps that wording, rebuilt from the file now, so the guide can
+    // show what changed since; its date falls before the guide's "updated" day, and a
+    // check on the text now never predates that day, so the two dates never disagree.
     for (const c of demoSafetyChecks) {
       const guide = readGuideFile(c.guide);
       if (!guide) continue;
-      const hash = c.stale ? contentHash(`${c.guide}: an earlier version, before ${c.staleBecause}`) : guide.hash;
-      const at = new Date(now.getTime() - c.daysAgo * DAY);
+      const updatedDay = toDate(guide.meta.updated).getTime();
+      const text = c.earlier ? earlierWording(guide.raw, c.earlier) : guide.raw;
+      const at = c.earlier
+        ? new Date(toDate(c.earlier.updated).getTime() + (c.earlier.checkedDaysLater * 24 + 10) * 3_600_000)
+        : new Date(Math.min(now.getTime(), Math.max(now.getTime() - (c.daysAgo ?? 0) * DAY, updatedDay)));
       await SafetyCheck.create(
         {
           guideSlug: c.guide,
-          contentHash: hash,
+          contentHash: contentHash(text),
+          checkedText: text,
           expertId: must(userId, c.expert),
           verdict: c.verdict,
           notes: c.notes,
@@ -235,4 +242,23 @@ function must<K, V>(map: Map<K, V>, key: K): V {
   const v = map.get(key);
   if (v === undefined) throw new Error(`demo data refers to unknown key ${String(key)}`);
   return v;
+}
+
+/** A guide file as it read before: its old "updated" day, without later sections, old sentences back. */
+function earlierWording(
+  raw: string,
+  e: { updated: string; without?: string[]; was?: [now: string, then: string][] },
+): string {
+  let text = raw.replace(/^updated: .*$/m, `updated: "${e.updated}"`);
+  for (const heading of e.without ?? []) {
+    const start = text.indexOf(`\n${heading}\n`);
+    if (start < 0) throw new Error(`demo safety check: no section "${heading}"`);
+    const next = text.indexOf('\n## ', start + 1);
+    text = text.slice(0, start) + (next < 0 ? '\n' : text.slice(next));
+  }
+  for (const [now, then] of e.was ?? []) {
+    if (!text.includes(now)) throw new Error(`demo safety check: no sentence "${now}"`);
+    text = text.replace(now, then);
+  }
+  return text;
 }

@@ -22,11 +22,14 @@ const READER = 'shepherd@highcrag.example';
  * The text a reader sees, one entry per block: visible text nodes joined by their nearest
  * block (or SVG text) so "4" and "ft" in neighbouring spans read as "4 ft"; the selected
  * option of each select; input values and placeholders; KaTeX by its MathML (the drawn
- * copy splits every glyph). Members' Markdown (.member-text) is their own words.
+ * copy splits every glyph). Members' Markdown (.member-text) is their own words; a member's
+ * words quoted with the reader's readings in brackets ([data-member-words]) come apart, as
+ * `quoted`.
  */
-async function visibleBlocks(page: Page): Promise<string[]> {
+async function visibleBlocks(page: Page): Promise<{ blocks: string[]; quoted: string[] }> {
   return page.evaluate(() => {
     const blocks = new Map<Element, string>();
+    const quoted = new Map<Element, string>();
     const skip = 'script, style, noscript, template, option, .member-text, .katex-html, .katex-mathml';
     const blockOf = (el: Element): Element => {
       for (let e: Element | null = el; e; e = e.parentElement) {
@@ -40,6 +43,11 @@ async function visibleBlocks(page: Page): Promise<string[]> {
       const parent = n.parentElement;
       if (!parent || !n.textContent?.trim() || parent.closest(skip)) continue;
       if (!parent.checkVisibility({ visibilityProperty: true, opacityProperty: false })) continue;
+      const words = parent.closest('[data-member-words]');
+      if (words) {
+        quoted.set(words, (quoted.get(words) ?? '') + n.textContent);
+        continue;
+      }
       const block = blockOf(parent);
       blocks.set(block, (blocks.get(block) ?? '') + n.textContent);
     }
@@ -87,16 +95,18 @@ async function visibleBlocks(page: Page): Promise<string[]> {
         if (el.placeholder) out.push(el.placeholder);
       }
     }
-    return out.map((t) => t.replace(/\s+/g, ' ').trim()).filter(Boolean);
+    const tidy = (list: string[]) => list.map((t) => t.replace(/\s+/g, ' ').trim()).filter(Boolean);
+    return { blocks: tidy(out), quoted: tidy([...quoted.values()]) };
   });
 }
 
 async function check(page: Page, where: string, system: System, found: string[]) {
   await settled(page);
   await page.waitForLoadState('networkidle');
-  for (const block of await visibleBlocks(page)) {
-    for (const hit of wrongUnits(block, system)) found.push(`${where}: ${hit}`);
-  }
+  const { blocks, quoted } = await visibleBlocks(page);
+  for (const block of blocks) for (const hit of wrongUnits(block, system)) found.push(`${where}: ${hit}`);
+  for (const words of quoted)
+    for (const hit of wrongUnits(words, system, { quoted: true })) found.push(`${where} (quoted): ${hit}`);
 }
 
 /** Ids of demo pages, from the API as the pages themselves get them. */
@@ -225,8 +235,8 @@ async function answerMail(page: Page, browser: import('@playwright/test').Browse
     .getByLabel('Answer (Markdown; math between $ signs)')
     .fill('Here is the drive pipe check for your site, worked with the numbers on your sheet.');
   await composer.getByLabel('Add a worked calculation').selectOption('drive-pipe-check');
-  await composer.getByRole('button', { name: 'Attach this calculation' }).click();
-  await expect(composer.getByTestId('calculation-attached')).toBeVisible();
+  // a chosen calculator goes with the answer; the form says so
+  await expect(composer.getByTestId('calculation-attached')).toContainText('goes in your answer');
   const saved = ep.waitForResponse((r) => r.request().method() === 'POST' && r.url().endsWith('/answers'));
   await composer.getByRole('button', { name: 'Post the answer' }).click();
   expect((await saved).status()).toBe(201);

@@ -74,6 +74,7 @@ const SAMPLE: Record<string, Record<string, unknown>> = {
   '/api/replies/[id]': { body: 'Thanks, that did it.' },
   '/api/helpful': { postType: 'question', postId: 1 },
   '/api/flags': { postType: 'answer', postId: 1, reason: 'spam' },
+  '/api/appeals': { postType: 'answer', postId: 1, text: 'Please look at this decision again.' },
   '/api/review/actions': { action: 'warn', postType: 'answer', postId: 1, reason: 'checking' },
   '/api/expert-applications': {
     pumpsBuilt: 3,

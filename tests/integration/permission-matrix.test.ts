@@ -154,6 +154,10 @@ const SAMPLES: Record<string, (ids: Record<string, number>) => Sample> = {
   'POST /api/helpful': (ids) => ({ body: { postType: 'question', postId: ids.otherQuestion } }),
   'DELETE /api/helpful': (ids) => ({ body: { postType: 'question', postId: ids.otherQuestion } }),
   'POST /api/flags': (ids) => ({ body: { postType: 'answer', postId: ids.flagTarget, reason: 'spam' } }),
+  // the owner's answer is shown to readers: an allowed caller gets 422, never 401/403
+  'POST /api/appeals': (ids) => ({
+    body: { postType: 'answer', postId: ids.ownerAnswer, text: 'checking the matrix: please look again' },
+  }),
   'GET /api/review': () => ({}),
   'POST /api/review/actions': (ids) => ({
     body: { action: 'warn', postType: 'answer', postId: ids.ownerAnswer, reason: 'checking the matrix' },

@@ -162,9 +162,13 @@ describe('revision history follows the visibility of its post and its thread (is
     }
   });
 
-  it('hidden answers and deleted replies in an open thread: not found but for moderators', async () => {
+  it('hidden answers and deleted replies in an open thread: not found but for moderators and a hidden answer’s author', async () => {
     for (const who of [null, MEMBER, 'quarry_lane_valves']) {
-      expect((await revisions(open, who, `?postType=answer&postId=${hiddenAnswer}`)).status).toBe(404);
+      // issue 21: the author reads their own hidden answer (never a deleted post, never another's)
+      const expected = who === 'quarry_lane_valves' ? 200 : 404;
+      expect((await revisions(open, who, `?postType=answer&postId=${hiddenAnswer}`)).status, `as ${who}`).toBe(
+        expected,
+      );
       expect((await revisions(open, who, `?postType=reply&postId=${deletedReply}`)).status).toBe(404);
     }
     expect((await revisions(open, MOD, `?postType=answer&postId=${hiddenAnswer}`)).status).toBe(200);

@@ -69,11 +69,15 @@ const READING_AFTER = /^\s?\((\d[\d.,]*\s?[^()]+)\)/u;
 
 const READINGS = /\s?\(\d[\d.,]*\s?[^()]+\)/gu;
 
-/** A member's quantity at text[i, i + length) followed by its reading, their words once the readings are taken out. */
-function quotedWithReading(text: string, i: number, length: number, system: System): boolean {
+/**
+ * A member's quantity at text[i, i + length) followed by its reading: in a passage the page
+ * marks as a member's quoted words, or where the text without the readings is a demo member's.
+ */
+function quotedWithReading(text: string, i: number, length: number, system: System, quoted = false): boolean {
   const end = i + length;
   const reading = READING_AFTER.exec(text.slice(end));
   if (!reading || !/\p{L}/u.test(reading[1]) || wrongUnits(reading[1], system).length > 0) return false;
+  if (quoted) return true;
   const before = text.slice(0, i).replace(READINGS, '');
   const words = before + text.slice(i, end) + text.slice(end + reading[0].length).replace(READINGS, '');
   return isMemberWords(words, before.length, length);
@@ -126,7 +130,7 @@ function isMemberWords(text: string, index: number, length: number): boolean {
 }
 
 /** Every unit of the other system, and every e-notation, in one block of text. */
-export function wrongUnits(text: string, system: System): string[] {
+export function wrongUnits(text: string, system: System, opts: { quoted?: boolean } = {}): string[] {
   const hits: string[] = [];
   if (SIZE_ALONE.test(text.trim())) return hits;
   const excused: [number, number][] = [];
@@ -149,7 +153,7 @@ export function wrongUnits(text: string, system: System): string[] {
       if (system === 'metric' && isNominalSize(m[0], text.slice(Math.max(0, i - 12), i), text.slice(i + m[0].length)))
         continue;
       if (isMemberWords(text, i, m[0].length)) continue;
-      if (m[1] !== undefined && quotedWithReading(text, i, m[0].length, system)) continue;
+      if (m[1] !== undefined && quotedWithReading(text, i, m[0].length, system, opts.quoted)) continue;
       report(i, m[0].length);
     }
   }

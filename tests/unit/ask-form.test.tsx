@@ -14,6 +14,8 @@ const TAGS = [
 
 const fetchMock = vi.fn();
 beforeEach(() => {
+  // the form keeps its draft on the device; each test starts with none
+  localStorage.clear();
   fetchMock.mockReset();
   fetchMock.mockResolvedValue(
     new Response(JSON.stringify({ items: [] }), { status: 200, headers: { 'content-type': 'application/json' } }),

@@ -3,7 +3,7 @@ import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { contentHash, listGuides, neighbours, readGuideFile } from '@/lib/guides/content';
-import { safetyStatus, type SafetyCheckView } from '@/lib/guides/safety';
+import { safetyState, safetyStatus, type SafetyCheckView } from '@/lib/guides/safety';
 
 const front = (title: string, order: number) =>
   `---\ntitle: "${title}"\nsummary: "A summary long enough."\nlevel: "first build"\ntags: ["survey"]\nupdated: "2026-11-01"\norder: ${order}\ncalculators: []\n---\n\n## A heading\n\nBody of ${title}.\n`;
@@ -41,17 +41,27 @@ describe('guide content', () => {
 });
 
 describe('safety status', () => {
-  const check = (current: boolean, id = 1): SafetyCheckView => ({
+  const check = (current: boolean, id = 1, verdict: SafetyCheckView['verdict'] = 'sound'): SafetyCheckView => ({
     id,
-    verdict: 'sound',
+    verdict,
     notes: null,
     expert: { handle: 'e', displayName: 'E' },
     checkedAt: '2026-11-01T00:00:00Z',
     current,
+    checkedVersionUpdated: null,
+    hasText: false,
   });
   it('is checked, changed or not checked by the newest check', () => {
     expect(safetyStatus([]).state).toBe('not checked');
     expect(safetyStatus([check(true)]).state).toBe('checked');
     expect(safetyStatus([check(false), check(true, 2)]).state).toBe('changed');
+  });
+  it('says "needs changes" when the newest check on this text asked for changes, never "checked"', () => {
+    expect(safetyStatus([check(true, 1, 'needs changes')]).state).toBe('needs changes');
+    expect(safetyStatus([check(true, 2, 'needs changes'), check(true, 1)]).state).toBe('needs changes');
+    expect(safetyStatus([check(true, 2), check(true, 1, 'needs changes')]).state).toBe('checked');
+    // an edit after a "needs changes" check: the text is no longer the one judged
+    expect(safetyStatus([check(false, 1, 'needs changes')]).state).toBe('changed');
+    expect(safetyState(undefined)).toBe('not checked');
   });
 });

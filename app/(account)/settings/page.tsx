@@ -7,6 +7,7 @@ import { SettingsForm } from './SettingsForm';
 import { MailSettingsForm } from './MailSettingsForm';
 import { SignOutEverywhere } from '@/components/account/SignOutEverywhere';
 import { formatDate } from '@/lib/dates';
+import { NoticesSeen } from '@/components/account/NoticesSeen';
 
 export const metadata: Metadata = { title: 'Settings' };
 export const dynamic = 'force-dynamic';
@@ -67,6 +68,7 @@ export default async function SettingsPage() {
         <h2 id="notices" className="font-serif text-xl font-semibold">
           Notices
         </h2>
+        {loaded.notices.some((n) => n.fresh) ? <NoticesSeen /> : null}
         {loaded.notices.length === 0 ? (
           <p className="cw-muted font-sans text-sm">
             No notices yet. A moderator’s decision about one of your posts, a change to your role and the answer to an
@@ -76,6 +78,11 @@ export default async function SettingsPage() {
           <ol className="flex flex-col gap-2 font-sans">
             {loaded.notices.map((n) => (
               <li key={n.id} className="cw-card py-3">
+                {n.fresh ? (
+                  <p className="mb-1 text-xs font-semibold uppercase tracking-wide text-clay-700 dark:text-clay-300">
+                    New
+                  </p>
+                ) : null}
                 <p className="whitespace-pre-line">{n.message}</p>
                 <p className="cw-muted mt-1 text-sm">
                   {formatDate(n.createdAt)}

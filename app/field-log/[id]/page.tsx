@@ -149,12 +149,20 @@ export default async function FieldLogEntryPage({ params }: { params: Params }) 
               : 'not recorded'}
           </Row>
           <Row label={`Drive flow (${e.driveFlowMethod})`}>{flow(e.driveFlowM3s)}</Row>
-          <Row label="How the drive flow was found">{withReadings(e.driveFlowHow, units) || '—'}</Row>
+          <Row label="How the drive flow was found">
+            {e.driveFlowHow ? <span data-member-words>{withReadings(e.driveFlowHow, units)}</span> : '—'}
+          </Row>
           <Row label="Beats per minute">{e.beatsPerMinute ?? '—'}</Row>
-          <Row label="Waste valve setting">{withReadings(e.wasteValveSetting, units) || '—'}</Row>
+          <Row label="Waste valve setting">
+            {e.wasteValveSetting ? <span data-member-words>{withReadings(e.wasteValveSetting, units)}</span> : '—'}
+          </Row>
           <Row label="Water temperature">{e.waterTempC !== null ? shown('temperature', e.waterTempC, units) : '—'}</Row>
         </dl>
-        {e.notes ? <p className="cw-prose mt-3 whitespace-pre-line">{withReadings(e.notes, units)}</p> : null}
+        {e.notes ? (
+          <p className="cw-prose mt-3 whitespace-pre-line" data-member-words>
+            {withReadings(e.notes, units)}
+          </p>
+        ) : null}
       </section>
 
       {photos.length ? (

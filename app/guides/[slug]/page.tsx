@@ -54,7 +54,7 @@ export default async function GuidePage({ params }: { params: Promise<{ slug: st
             </Link>
           ))}
         </div>
-        <SafetyCheckStatus slug={slug} />
+        <SafetyCheckStatus slug={slug} updated={guide.meta.updated} />
       </header>
 
       <div className="grid gap-8 lg:grid-cols-[minmax(0,1fr)_14rem]">

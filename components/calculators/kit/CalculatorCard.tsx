@@ -18,6 +18,9 @@ import {
   type FieldDef,
   type FormState,
   type OpenIn,
+  percentWords,
+  typicalEfficiency,
+  type TypicalEfficiency,
 } from '@/lib/calculators';
 import { useUnits } from '@/components/units/UnitsProvider';
 import { calculatorView } from '../views';
@@ -37,12 +40,15 @@ export function CalculatorCard({
   props = {},
   openIn = 'all',
   onOutput,
+  saveLabel,
 }: {
   def: Calculator;
   props?: Record<string, string | undefined>;
   /** 'defaults' for a share link, whose values open exactly as the sharer typed them */
   openIn?: OpenIn;
   onOutput?: (state: FormState, output: CalcOutput<unknown> | null) => void;
+  /** the save button's words where "save" alone could be mistaken for another action (the answer form) */
+  saveLabel?: string;
 }) {
   const { units } = useUnits();
   // every id from useId, so the same calculator twice on one page keeps its labels to itself
@@ -72,6 +78,8 @@ export function CalculatorCard({
   }, [units, def.fields, def.defaults, def.metricDefaults]);
 
   const outcome = useMemo(() => computeForm(def, state, units), [def, state, units]);
+  // An empty efficiency box stands for the typical value at this site: shown in it, band beside.
+  const typical = useMemo(() => typicalEfficiency(def, state, units), [def, state, units]);
   useEffect(() => {
     onOutput?.(state, outcome.ok ? outcome.output : null);
   }, [state, outcome, onOutput]);
@@ -106,6 +114,7 @@ export function CalculatorCard({
               field={f}
               state={state[f.name]}
               error={outcome.ok ? undefined : outcome.fieldErrors[f.name]}
+              typical={typical?.field === f.name ? typical : null}
               onChange={(p) => set(f.name, p)}
             />
           ))}
@@ -141,7 +150,7 @@ export function CalculatorCard({
         >
           {copied ? 'Copied' : 'Copy link'}
         </button>
-        {outcome.ok ? <SaveCalculation tool={def.id} inputs={shareQuery(def.fields, state)} /> : null}
+        {outcome.ok ? <SaveCalculation tool={def.id} inputs={shareQuery(def.fields, state)} label={saveLabel} /> : null}
         <a href={`/guides/${def.guide}`} className={`${TARGET} ml-auto`}>
           Read the guide
         </a>
@@ -161,18 +170,22 @@ export function Field({
   field,
   state,
   error,
+  typical = null,
   onChange,
 }: {
   id: string;
   field: FieldDef;
   state: { text: string; unit?: string } | undefined;
   error?: string;
+  typical?: TypicalEfficiency | null;
   onChange: (p: Partial<{ text: string; unit: string }>) => void;
 }) {
   const { units } = useUnits();
   const s = state ?? { text: '' };
   const describedBy =
-    [field.help ? `${id}-help` : null, error ? `${id}-error` : null].filter(Boolean).join(' ') || undefined;
+    [typical ? `${id}-typical` : null, field.help ? `${id}-help` : null, error ? `${id}-error` : null]
+      .filter(Boolean)
+      .join(' ') || undefined;
   const box = `w-full min-w-0 flex-1 rounded-md border bg-limestone-50 px-2 py-1.5 cw-num dark:bg-creek-950 ${error ? 'border-signal ring-1 ring-signal' : 'border-limestone-400 dark:border-creek-500'}`;
   return (
     <div className="flex flex-col gap-1">
@@ -237,7 +250,13 @@ export function Field({
             className={box}
             aria-invalid={error ? true : undefined}
             aria-describedby={describedBy}
-            placeholder={field.type === 'text' ? inUnits(field.placeholder, units) : undefined}
+            placeholder={
+              field.type === 'text'
+                ? inUnits(field.placeholder, units)
+                : typical
+                  ? percentWords(typical.typical)
+                  : undefined
+            }
           />
         )}
         {field.type === 'quantity' ? (
@@ -255,6 +274,11 @@ export function Field({
           </select>
         ) : null}
       </div>
+      {typical ? (
+        <p id={`${id}-typical`} className="text-xs" data-testid="efficiency-typical">
+          {`Typical at this lift ratio: ${percentWords(typical.typical)}, in a band of ${percentWords(typical.low, true)} to ${percentWords(typical.high, true)}.`}
+        </p>
+      ) : null}
       {field.help ? (
         <p id={`${id}-help`} className="cw-muted text-xs">
           {inUnits(field.help, units)}

@@ -14,7 +14,15 @@ const TARGET = 'cw-link inline-flex min-h-6 items-center';
  * "Save as a worked calculation": posts the inputs as typed; the server recomputes
  * and stores the result and answers with the permalink. Shown per the policy table.
  */
-export function SaveCalculation({ tool, inputs }: { tool: string; inputs: URLSearchParams }) {
+export function SaveCalculation({
+  tool,
+  inputs,
+  label = 'Save as a worked calculation',
+}: {
+  tool: string;
+  inputs: URLSearchParams;
+  label?: string;
+}) {
   // Read the context directly: a card may be drawn where no session provider is (tests, print).
   const session = useContext(SessionContext);
   const user = session?.data?.user;
@@ -55,7 +63,7 @@ export function SaveCalculation({ tool, inputs }: { tool: string; inputs: URLSea
           setState(r.ok ? { url: r.data.url } : { error: r.error.message });
         }}
       >
-        Save as a worked calculation
+        {label}
       </button>
       {state.error ? (
         <span role="alert" className="text-xs text-signal-700 dark:text-signal-300">

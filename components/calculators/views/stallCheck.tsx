@@ -1,10 +1,10 @@
 import type { StallCheckResults } from '@/lib/hydraulics';
-import { causeStrength } from '@/lib/calculators';
+import { causeStrength, formatMessage } from '@/lib/calculators';
 import { RelatedThreads } from '@/components/search/RelatedThreads';
 import type { CalculatorView } from './types';
 
 export const stallCheckView: CalculatorView<StallCheckResults> = {
-  extra: (r) =>
+  extra: (r, units) =>
     r.causes.length === 0 ? (
       <p className="text-sm">
         Nothing in these numbers points to a cause. Tick what the pump does to rank the likely ones.
@@ -21,7 +21,7 @@ export const stallCheckView: CalculatorView<StallCheckResults> = {
               <p className="font-semibold">
                 {i + 1}. {c.title} <span className="cw-muted text-xs">({causeStrength(c.score)})</span>
               </p>
-              <p className="cw-muted">{c.reason}</p>
+              <p className="cw-muted">{formatMessage({ message: c.reason, parts: c.reasonParts }, units)}</p>
               <a href={`/guides/${c.guide}`} className="cw-link inline-flex min-h-6 items-center text-xs">
                 How to fix it
               </a>

@@ -67,7 +67,7 @@ export const arrayPlanner = defineCalculator(planArray, {
       prop: 'efficiency',
       label: 'Efficiency of each pump (optional)',
       percent: true,
-      help: 'As 0.6 or 60 %. Leave empty to use the typical value for the lift ratio.',
+      help: 'Leave empty to use the typical value for each pump’s lift ratio; type your pumps’ own, as 0.3 or 30 %, once you have measured it.',
     },
     ...pipeFields(
       'drivePipe',

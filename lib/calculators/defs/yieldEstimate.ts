@@ -40,7 +40,7 @@ export const yieldEstimate = defineCalculator(estimateYield, {
       prop: 'efficiency',
       label: 'Efficiency (optional)',
       percent: true,
-      help: 'As 0.6 or 60 %. Leave empty to use the typical value for this lift ratio.',
+      help: 'Leave empty to use the typical value for this lift ratio, shown in the box; type your pump’s own, as 0.3 or 30 %, once you have measured it.',
     },
     {
       type: 'select',
@@ -59,6 +59,7 @@ export const yieldEstimate = defineCalculator(estimateYield, {
     },
   ],
   defaults: { fall: '4 ft', lift: '29 ft', driveFlow: '2 gal/min', pumpType: 'homemade' },
+  efficiencyBand: (r) => ({ typical: r.band.typical, low: r.band.low, high: r.band.high }),
   rows: (r) => [
     { label: 'Delivered', value: r.deliveredFlowM3s, qty: 'smallFlow', emphasis: true },
     { label: 'Per day', value: r.deliveredPerDayM3PerDay, qty: 'dailyVolume', emphasis: true },

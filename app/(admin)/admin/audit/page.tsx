@@ -42,6 +42,10 @@ function Target({ item }: { item: AuditItem }) {
 }
 
 /** The audit log: every moderation action with who, when and why. Read-only, admins only. */
+/** A cell: a table cell from sm up, a labelled line of a card below it. */
+const CELL =
+  'px-3 py-2 max-sm:flex max-sm:gap-2 max-sm:p-0 max-sm:before:w-16 max-sm:before:shrink-0 max-sm:before:font-semibold max-sm:before:content-[attr(data-label)]';
+
 export default async function AuditPage({ searchParams }: { searchParams: Search }) {
   const query = readQuery(await searchParams);
   const parsed = auditFilterSchema.safeParse(query);
@@ -117,36 +121,32 @@ export default async function AuditPage({ searchParams }: { searchParams: Search
           : `${data.total} ${data.total === 1 ? 'entry' : 'entries'}, newest first · page ${data.page} of ${totalPages}. Times are UTC.`}
       </p>
       {data.items.length ? (
-        <div className="cw-card overflow-x-auto p-0">
-          <table className="w-full font-sans text-sm">
+        // Below the sm breakpoint each row is a card with its labels beside the values, so
+        // Target and Reason are never scrolled off-screen; the explicit roles keep the table's
+        // semantics for screen readers once CSS stops displaying it as one.
+        <div className="sm:overflow-x-auto sm:rounded-lg sm:border sm:border-limestone-300 sm:bg-limestone-50 sm:shadow-sm sm:dark:border-creek-600 sm:dark:bg-creek-900">
+          <table role="table" className="w-full font-sans text-sm max-sm:block">
             <caption className="sr-only">Moderation actions</caption>
-            <thead>
-              <tr className="border-b border-limestone-300 text-left dark:border-creek-600">
-                <th scope="col" className="px-3 py-2">
-                  When
-                </th>
-                <th scope="col" className="px-3 py-2">
-                  Who
-                </th>
-                <th scope="col" className="px-3 py-2">
-                  Action
-                </th>
-                <th scope="col" className="px-3 py-2">
-                  Target
-                </th>
-                <th scope="col" className="px-3 py-2">
-                  Reason
-                </th>
+            <thead className="max-sm:sr-only">
+              <tr role="row" className="border-b border-limestone-300 text-left dark:border-creek-600">
+                {['When', 'Who', 'Action', 'Target', 'Reason'].map((h) => (
+                  <th key={h} scope="col" role="columnheader" className="px-3 py-2">
+                    {h}
+                  </th>
+                ))}
               </tr>
             </thead>
-            <tbody>
+            <tbody className="max-sm:flex max-sm:flex-col max-sm:gap-3">
               {data.items.map((item) => (
                 <tr
                   key={item.id}
-                  className="border-b border-limestone-200 align-top last:border-0 dark:border-creek-700"
+                  role="row"
+                  className="border-b border-limestone-200 align-top last:border-0 dark:border-creek-700 max-sm:flex max-sm:flex-col max-sm:gap-1 max-sm:rounded-lg max-sm:border max-sm:border-limestone-300 max-sm:bg-limestone-50 max-sm:p-4 max-sm:shadow-sm max-sm:last:border max-sm:dark:border-creek-600 max-sm:dark:bg-creek-900"
                 >
-                  <td className="cw-num whitespace-nowrap px-3 py-2">{formatDateTime(item.at)}</td>
-                  <td className="px-3 py-2">
+                  <td role="cell" data-label="When" className={CELL}>
+                    <span className="cw-num whitespace-nowrap">{formatDateTime(item.at)}</span>
+                  </td>
+                  <td role="cell" data-label="Who" className={CELL}>
                     {item.actor ? (
                       <Link href={`/people/${item.actor.handle}`} className="cw-link">
                         {item.actor.displayName}
@@ -155,11 +155,15 @@ export default async function AuditPage({ searchParams }: { searchParams: Search
                       <span className="cw-muted">Clackwater (automatic)</span>
                     )}
                   </td>
-                  <td className="px-3 py-2">{AUDIT_ACTION_WORDS[item.action] ?? item.action}</td>
-                  <td className="whitespace-nowrap px-3 py-2">
+                  <td role="cell" data-label="Action" className={CELL}>
+                    {AUDIT_ACTION_WORDS[item.action] ?? item.action}
+                  </td>
+                  <td role="cell" data-label="Target" className={`${CELL} sm:whitespace-nowrap`}>
                     <Target item={item} />
                   </td>
-                  <td className="px-3 py-2">{item.reason}</td>
+                  <td role="cell" data-label="Reason" className={CELL}>
+                    {item.reason}
+                  </td>
                 </tr>
               ))}
             </tbody>

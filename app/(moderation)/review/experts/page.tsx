@@ -37,8 +37,13 @@ export default async function ReviewExpertsPage() {
       <h1 className="font-serif text-3xl font-semibold">Expert applications</h1>
       <p className="cw-muted font-sans text-sm">
         {applications.length === 0
-          ? 'No applications are waiting. Members apply from their settings; each new one appears here, and the review queue has any flagged posts.'
-          : `${applications.length} waiting, oldest first. Your note is sent to the applicant with the decision.`}
+          ? 'No applications are waiting. Members apply from their settings; each new one appears here.'
+          : `${applications.length} waiting, oldest first. Your note is sent to the applicant with the decision.`}{' '}
+        Flagged posts and appeals are in the{' '}
+        <Link href="/review" className="cw-link">
+          review queue
+        </Link>
+        .
       </p>
       <ol className="flex flex-col gap-4">
         {applications.map((a) => (

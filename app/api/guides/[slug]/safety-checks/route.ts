@@ -41,6 +41,7 @@ export async function POST(request: Request, { params }: { params: Promise<{ slu
         {
           guideSlug: slug,
           contentHash: guide.hash,
+          checkedText: guide.raw,
           expertId: user.id,
           verdict: body.data.verdict,
           notes: body.data.notes || null,
@@ -56,6 +57,8 @@ export async function POST(request: Request, { params }: { params: Promise<{ slu
         expert: { handle: user.handle, displayName: user.displayName },
         checkedAt: check.createdAt.toISOString(),
         current: true,
+        checkedVersionUpdated: guide.meta.updated,
+        hasText: true,
       },
       { status: 201 },
     );
