@@ -153,7 +153,11 @@ export function wrongUnits(text: string, system: System, opts: { quoted?: boolea
       if (system === 'metric' && isNominalSize(m[0], text.slice(Math.max(0, i - 12), i), text.slice(i + m[0].length)))
         continue;
       if (isMemberWords(text, i, m[0].length)) continue;
-      if (m[1] !== undefined && quotedWithReading(text, i, m[0].length, system, opts.quoted)) continue;
+      if (m[1] !== undefined && quotedWithReading(text, i, m[0].length, system, opts.quoted)) {
+        // the unit alone ("ft") matches again below: it is excused with its number
+        seen.push([i, i + m[0].length]);
+        continue;
+      }
       report(i, m[0].length);
     }
   }
