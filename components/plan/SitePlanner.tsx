@@ -80,7 +80,7 @@ export function SitePlanner({
   // On a phone the verdict comes first, above the survey it answers; on a wide screen it
   // heads the right-hand column beside the survey.
   return (
-    <div className="grid gap-6 lg:grid-cols-[minmax(0,22rem)_minmax(0,1fr)]">
+    <div className="cw-plan grid gap-6 lg:grid-cols-[minmax(0,22rem)_minmax(0,1fr)]">
       <div className="min-w-0 lg:col-start-2 lg:row-start-1" aria-live="polite">
         {outcome.ok ? <PlanVerdict verdict={outcome.output.results.verdict} /> : failed}
       </div>
@@ -225,7 +225,7 @@ function Plan({
 
       <PartsList rows={rows} />
 
-      <div className="cw-card font-sans">
+      <div className="cw-card font-sans" data-print-hide>
         <h2 className="font-serif text-xl font-semibold">The working</h2>
         <Working steps={output.steps} />
         <SourcesDisclosure lines={planSources(r)} />

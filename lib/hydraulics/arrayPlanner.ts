@@ -23,7 +23,7 @@ import { finish, joinParts, step, sub, tq, type CalcOutput, type Step, type Warn
 import { PRACTICE } from './practice';
 import { warn } from './warnings';
 import { qty, say } from './message';
-import { waterProperties } from './water';
+import { G, waterProperties } from './water';
 
 /**
  * Limits of the planner, one value each: up to 20 pumps listed one by one, and
@@ -207,7 +207,7 @@ export function planArray(input: ArrayPlannerInput): CalcOutput<ArrayPlannerResu
         step(
           `${p.label}: fittings in the drive pipe`,
           '\\Delta H = \\Sigma K\\,\\frac{v_c^2}{2g}',
-          sub`\\Delta H = ${tq(p.fittingsK)} \\times \\frac{(${tq(p.closureVelocityMs, 'm/s')})^2}{2 \\times 9.807\\,\\mathrm{m/s^2}}`,
+          sub`\\Delta H = ${tq(p.fittingsK)} \\times \\frac{(${tq(p.closureVelocityMs, 'm/s')})^2}{2 \\times ${tq(G, 'm/s²')}}`,
           p.fittingHeadLossM,
           'm',
           'length',

@@ -6,7 +6,15 @@
 import * as z from 'zod/mini';
 import { sumK, type Fitting } from './fittings';
 import { hazenWilliamsHeadLoss, pipeLoss, type FlowRegime } from './friction';
-import { NOMINAL_SIZES, PIPE_SERIES, defaultSeries, resolvePipe, type NominalSize, type PipeSeries } from './pipes';
+import {
+  NOMINAL_LABELS,
+  NOMINAL_SIZES,
+  PIPE_SERIES,
+  defaultSeries,
+  resolvePipe,
+  type NominalSize,
+  type PipeSeries,
+} from './pipes';
 import { hazenCOf, pipeRunSchema, roughnessOf } from './pipeSchemas';
 import { flowM3s, liftM, parseInput, siNumber, waterTempC } from './schemaKit';
 import { finish, step, sub, tq, type CalcOutput, type Step, type Warning } from './steps';
@@ -150,24 +158,32 @@ export function checkDeliveryLine(input: DeliveryLineInput): CalcOutput<Delivery
     step(
       'Friction loss (Darcy-Weisbach)',
       'h_f = f\\,\\frac{L}{D}\\,\\frac{v^2}{2g}',
-      sub`h_f = ${tq(fr.f)} \\times \\frac{${tq(line.lengthM, 'm')}}{${tq(D, 'm', 'smallLength')}} \\times \\frac{(${tq(loss.velocityMs, 'm/s')})^2}{2 \\times 9.807\\,\\mathrm{m/s^2}}`,
+      sub`h_f = ${tq(fr.f)} \\times \\frac{${tq(line.lengthM, 'm')}}{${tq(D, 'm', 'smallLength')}} \\times \\frac{(${tq(loss.velocityMs, 'm/s')})^2}{2 \\times ${tq(G, 'm/s²')}}`,
       loss.frictionHeadM,
       'm',
       'length',
     ),
   );
   const hw = hazenWilliamsHeadLoss(Q, line.lengthM, D, C);
-  steps.push(
-    step(
-      'Friction loss (Hazen-Williams, second opinion)',
-      'h_f = \\frac{10.67\\,L\\,Q^{1.852}}{C^{1.852}\\,D^{4.87}}',
-      sub`h_f = \\frac{10.67 \\times ${tq(line.lengthM, 'm', null)} \\times (${tq(Q, 'm³/s', null)})^{1.852}}{${tq(C)}^{1.852} \\times (${tq(D, 'm', null)})^{4.87}}`,
-      hw,
-      'm',
-      'length',
-      'The constant 10.67 holds for metres and cubic metres a second, so this rule keeps its numbers in those units.',
-    ),
+  const hazen = step(
+    'Friction loss (Hazen-Williams, second opinion)',
+    'h_f = \\frac{10.67\\,L\\,Q^{1.852}}{C^{1.852}\\,D^{4.87}}',
+    sub`h_f = \\frac{10.67 \\times ${tq(line.lengthM, 'm', null)} \\times (${tq(Q, 'm³/s', null)})^{1.852}}{${tq(C)}^{1.852} \\times (${tq(D, 'm', null)})^{4.87}}`,
+    hw,
+    'm',
+    'length',
+    'The constant 10.67 holds for metres and cubic metres a second, so this rule keeps its numbers in those units.',
   );
+  // the same rule in feet: 10.67 × 0.0283168^1.852 ÷ 0.3048^4.87 = 4.72 (usually quoted as 4.73)
+  const ft = 0.3048;
+  hazen.inSystem = {
+    US: {
+      formula: 'h_f = \\frac{4.72\\,L\\,Q^{1.852}}{C^{1.852}\\,D^{4.87}}',
+      substituted: sub`h_f = \\frac{4.72 \\times ${tq(line.lengthM / ft, 'ft', null)} \\times (${tq(Q / ft ** 3, 'ft³/s', null)})^{1.852}}{${tq(C)}^{1.852} \\times (${tq(D / ft, 'ft', null)})^{4.87}}`,
+      note: 'The constant 4.72 holds for feet and cubic feet a second (it is 10.67 in metres), so this rule keeps its numbers in those units.',
+    },
+  };
+  steps.push(hazen);
   steps.push(
     step(
       'Fitting losses',
@@ -218,7 +234,7 @@ export function checkDeliveryLine(input: DeliveryLineInput): CalcOutput<Delivery
       step(
         'Smallest size in this series that keeps the loss within the target',
         'h_f + h_m \\le h_{target}',
-        sub`${smallest.nominal}\\text{ in: } ${tq(smallest.lossM, 'm')} \\le ${tq(target, 'm')}`,
+        sub`\\text{${NOMINAL_LABELS[smallest.nominal]} pipe: } ${tq(smallest.lossM, 'm')} \\le ${tq(target, 'm')}`,
         smallest.insideDiameterM,
         'm',
         'smallLength',

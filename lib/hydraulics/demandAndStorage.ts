@@ -150,7 +150,7 @@ export function planDemandAndStorage(input: DemandAndStorageInput): CalcOutput<D
     step(
       'Total demand',
       'D = D_h + D_g + \\sum D_i + D_o',
-      sub`D = ${tq(house)} + ${tq(garden)} + ${tq(stock)} + ${tq(v.otherM3PerDay)}\\,\\mathrm{m^3/day}`,
+      sub`D = ${tq(house, 'm³/day')} + ${tq(garden, 'm³/day')} + ${tq(stock, 'm³/day')} + ${tq(v.otherM3PerDay, 'm³/day')}`,
       total,
       'm³/day',
       'dailyVolume',

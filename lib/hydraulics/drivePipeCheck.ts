@@ -289,7 +289,7 @@ export function checkDrivePipe(input: DrivePipeCheckInput): CalcOutput<DrivePipe
     step(
       'Full-flow velocity (waste valve held open)',
       'v_0 = \\sqrt{\\frac{2gH}{1 + K_e + K_p + \\Sigma K + f\\,L/D}}',
-      sub`v_0 = \\sqrt{\\frac{2 \\times 9.807 \\times ${tq(H, 'm')}}{1 + ${DEFAULT_ENTRANCE_K} + ${DEFAULT_PUMP_LOSS_K} + ${tq(sumK(dp.fittings as Fitting[]))} + ${tq(ff.f)} \\times ${tq(ld)}}}`,
+      sub`v_0 = \\sqrt{\\frac{2 \\times ${tq(G, 'm/s²')} \\times ${tq(H, 'm')}}{1 + ${DEFAULT_ENTRANCE_K} + ${DEFAULT_PUMP_LOSS_K} + ${tq(sumK(dp.fittings as Fitting[]))} + ${tq(ff.f)} \\times ${tq(ld)}}}`,
       v0,
       'm/s',
       'velocity',

@@ -163,7 +163,7 @@ export function estimateShutOffPressure(input: ShutOffInput): CalcOutput<ShutOff
       step(
         'Full-flow velocity (the most the pipe can reach)',
         'v_0 = \\sqrt{\\frac{2gH}{R}}',
-        sub`v_0 = \\sqrt{\\frac{2 \\times 9.807 \\times ${tq(H, 'm')}}{${tq(ff.R)}}}`,
+        sub`v_0 = \\sqrt{\\frac{2 \\times ${tq(G, 'm/s²')} \\times ${tq(H, 'm')}}{${tq(ff.R)}}}`,
         vel,
         'm/s',
         'velocity',

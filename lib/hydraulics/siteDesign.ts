@@ -20,7 +20,7 @@ import type { CalcOutput } from './steps';
 export const SCREEN_APPROACH_VELOCITY = {
   value: 0.06096,
   source:
-    'National Marine Fisheries Service, Southwest Region, pump intake screen criteria (addendum to "Fish Screening Criteria for Anadromous Salmonids", 1997): passive screens 0.2 ft/s',
+    'National Marine Fisheries Service, Southwest Region, pump intake screen criteria (addendum to "Fish Screening Criteria for Anadromous Salmonids", 1997), for a passive screen',
 } as const;
 
 /** Supply-pipe friction allowed to a standpipe, as a share of the fall (common practice, no source). */
@@ -38,7 +38,7 @@ export const AIR_CHAMBER_RULE = {
 } as const;
 export const SNIFTER_HOLE = {
   diameterM: 0.0015875,
-  source: 'common practice, no published source found: a hole of about 1/16 in just below the delivery valve',
+  source: 'common practice, no published source found: a small hole just below the delivery valve',
 } as const;
 
 /** Drive pipe series tried in order: the first whose surge, shut-off pressure and fatigue life pass is used. */

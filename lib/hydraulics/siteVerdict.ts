@@ -119,7 +119,13 @@ function judge(
   };
 }
 
-/** The lowest pressure rating a stage's pump side must hold: its drive pipe (or threaded joints) and its delivery line. */
+/**
+ * The lowest pressure rating a stage's pump side must hold: its drive pipe (or threaded joints) and
+ * its delivery line, which a blocked line (a shut valve at the tank) loads to the shut-off pressure.
+ * Units: Pa. Reference: the stage's own ratings (pipes.ts).
+ * @example ¾" PVC sch 80 at 690 psi (4.757 MPa) and ½" HDPE DR 17 at 125 psi (862 kPa): the line
+ * pumpSideRating({ drivePipe: { weakestRatingPa: 4757000 }, deliveryLine: { pressureRatingPa: 862000 } })  // → 862000
+ */
 export function pumpSideRating(s: Pick<StageDesign, 'drivePipe' | 'deliveryLine'>): number {
   return Math.min(s.drivePipe.weakestRatingPa, s.deliveryLine.pressureRatingPa);
 }

@@ -78,6 +78,8 @@ const PAGES: { path: string | ((ids: Ids) => string); name?: string; as: Role; p
     phone: id === 'yield-estimate',
   })),
   { path: '/calculations/FerncombeY1', as: 'visitor' },
+  // the planner with a wet month given, so its month-by-month table is drawn too
+  { path: '/plan?wetFlow=25+gal%2Fmin', name: 'the site planner', as: 'visitor', phone: true },
   { path: '/questions', as: 'visitor', phone: true },
   { path: (ids) => ids.thread, name: 'a thread with a site sheet', as: 'visitor' },
   { path: (ids) => ids.thread, name: 'a thread with the answer form', as: 'member', phone: true },

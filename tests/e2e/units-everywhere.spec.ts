@@ -60,6 +60,10 @@ async function visibleBlocks(page: Page): Promise<{ blocks: string[]; quoted: st
         case 'annotation':
           return '';
         case 'mi':
+          // a letter in math italic is a variable (L, h_m), not a unit: units are set upright
+          return !e.getAttribute('mathvariant') && (e.textContent ?? '').length === 1
+            ? `_${e.textContent}`
+            : (e.textContent ?? '');
         case 'mn':
         case 'mo':
         case 'mtext':
@@ -171,6 +175,12 @@ for (const system of ['US', 'metric'] as const) {
         await page.goto(`/calculators/${id}`);
         await check(page, `/calculators/${id}`, system, found);
       }
+
+      // the site planner, its month-by-month table and working open
+      await page.goto(`/plan?${new URLSearchParams({ wetFlow: '25 gal/min' })}`);
+      await settled(page);
+      await page.getByText('Show the working').first().click();
+      await check(page, '/plan (working open)', system, found);
 
       // questions, a thread with a site sheet, the ask form's hints
       for (const path of ['/questions', ids.thread, '/questions/ask']) {
