@@ -180,7 +180,7 @@ export function checkDeliveryLine(input: DeliveryLineInput): CalcOutput<Delivery
     US: {
       formula: 'h_f = \\frac{4.72\\,L\\,Q^{1.852}}{C^{1.852}\\,D^{4.87}}',
       substituted: sub`h_f = \\frac{4.72 \\times ${tq(line.lengthM / ft, 'ft', null)} \\times (${tq(Q / ft ** 3, 'ft³/s', null)})^{1.852}}{${tq(C)}^{1.852} \\times (${tq(D / ft, 'ft', null)})^{4.87}}`,
-      note: 'The constant 4.72 holds for feet and cubic feet a second (it is 10.67 in metres), so this rule keeps its numbers in those units.',
+      note: 'The constant 4.72 holds for feet and cubic feet a second, so this rule keeps its numbers in those units.',
     },
   };
   steps.push(hazen);
