@@ -25,7 +25,7 @@ describe('guide rendering', () => {
 
   it('compiles every guide in content/guides, each with a caution and the calculators it declares', async () => {
     const guides = listGuides();
-    expect(guides.length).toBe(10);
+    expect(guides.length).toBe(13);
     for (const g of guides) {
       expect(g.body, g.slug).toMatch(/<Caution/);
       for (const id of g.meta.calculators) {

@@ -18,7 +18,7 @@
  * appear in the guide's text after the comment, before the next check (stacked
  * checks share the text after them all), so the
  * prose cannot change without the check seeing it. `check: engine` reads the
- * engine's rules of practice instead of a calculator. Every embedded calculator
+ * engine's rules of practice (and its table of drive flow by pump size) instead of a calculator. Every embedded calculator
  * must have a check with exactly its props, so the card and the text agree.
  *
  * The expected numbers are the guides' own; the reference is the engine, whose
@@ -30,12 +30,14 @@ import { renderToStaticMarkup } from 'react-dom/server';
 import {
   ARRAY_LIMITS,
   DRIVE_PIPE_GUIDES,
+  NOMINAL_SIZES,
   PRACTICE,
   RATING_MARGIN,
   UNIT_CHOICES,
   fromSI,
   householdRate,
   livestockRates,
+  typicalDriveFlow,
   type QuantityKind,
   type UnitSystem,
 } from '@/lib/hydraulics';
@@ -120,6 +122,8 @@ function resultsOf(check: Check, system: UnitSystem): unknown {
       RATING_MARGIN,
       household: householdRate(),
       livestock: livestockRates(),
+      // keyed 1_2, 1-1_4, …: a path is split on dots and takes no slash
+      pumpSizes: Object.fromEntries(NOMINAL_SIZES.map((s) => [s.replace('/', '_'), typicalDriveFlow(s)])),
     };
   if (!isCalculatorId(check.calc)) throw new Error(`unknown calculator ${check.calc}`);
   const def = CALCULATORS[check.calc];

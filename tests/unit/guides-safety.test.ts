@@ -40,8 +40,9 @@ describe('safety wording in the guides', () => {
         expect(s, slug).toMatch(/gauge/);
       }
     }
-    // how-a-ram-pump-works, first-start (caution), care (air chamber), when-it-stops (two), the-delivery-line
-    expect(places).toBeGreaterThanOrEqual(6);
+    // how-a-ram-pump-works, first-start (caution), care (air chamber), when-it-stops (two), the-delivery-line,
+    // building-a-ram-from-fittings (taking a fitting off)
+    expect(places).toBeGreaterThanOrEqual(7);
   });
 
   it('has the bleed valve, gauge and relief valve in the build, and charges the chamber against a gauge', () => {
@@ -67,5 +68,25 @@ describe('safety wording in the guides', () => {
     expect(care).toMatch(/backflow preventer/);
     expect(care).toMatch(/Fence livestock off the intake/);
     expect(guide('will-a-ram-meet-my-demand')).toMatch(/backflow preventer/);
+    const build = guide('building-a-ram-from-fittings');
+    expect(build).toMatch(/Schedule 40 PVC must not be threaded/);
+    expect(build).toMatch(/Never glass/);
+    expect(build).toMatch(/relief valve set below the rating of the weakest part/);
+    expect(build).toMatch(/Never loosen one, or stand over it, while the pump runs/);
+    const intake = guide('the-intake-and-supply');
+    expect(intake).toMatch(/Fence livestock off the intake/);
+    expect(intake).toMatch(/fisheries authority/);
+    expect(intake).toMatch(/water rights and permits/);
+    expect(intake).toMatch(/never alone in high water/);
+    expect(guide('choosing-a-pump-size')).toMatch(/water rights and permits/);
+  });
+
+  it('takes a fitting off the pump only once it is stopped, isolated, bled to zero and drained', () => {
+    const s = guide('building-a-ram-from-fittings');
+    const at = (re: RegExp) => s.search(re);
+    // the stick holds the waste valve shut; letting it go before the drive valve is closed restarts the pump
+    expect(at(/close the drive pipe's valve slowly now/)).toBeGreaterThan(at(/gauge reads zero/));
+    expect(at(/only then let the waste valve go/)).toBeGreaterThan(at(/close the drive pipe's valve slowly now/));
+    expect(at(/Loosen the fitting a little at a time/)).toBeGreaterThan(at(/only then let the waste valve go/));
   });
 });
