@@ -157,7 +157,15 @@ for (const system of ['US', 'metric'] as const) {
       const ids = await demo(page);
 
       // guides with calculators and charts
-      for (const slug of ['how-a-ram-pump-works', 'pumps-in-parallel-and-in-stages', 'the-delivery-line']) {
+      for (const slug of [
+        'how-a-ram-pump-works',
+        'pumps-in-parallel-and-in-stages',
+        'the-delivery-line',
+        'surveying-fall-and-flow',
+        'choosing-a-pump-size',
+        'the-intake-and-supply',
+        'building-a-ram-from-fittings',
+      ]) {
         await page.goto(`/guides/${slug}`);
         await check(page, `/guides/${slug}`, system, found);
       }
