@@ -1,5 +1,6 @@
 import { test, expect, type Page } from '@playwright/test';
 import { newContext, press } from '../support/session';
+import { guideSlugs } from '../support/guides';
 
 const firstCard = (page: Page) => page.locator('[data-calculator="yield-estimate"]').first();
 const delivered = (page: Page) => firstCard(page).locator('[data-result="Delivered"]');
@@ -63,7 +64,8 @@ test('a guide changed since its last safety check says so, with the history', as
 
 test('the guide index filters by level and tag', async ({ page }) => {
   await page.goto('/guides');
-  await expect(page.getByTestId('guide-list').getByRole('listitem')).toHaveCount(10);
+  // every guide in content/guides is listed
+  await expect(page.getByTestId('guide-list').getByRole('listitem')).toHaveCount(guideSlugs().length);
   await page.getByRole('navigation', { name: 'Filter guides' }).getByRole('link', { name: 'advanced' }).click();
   await expect(page.getByTestId('guide-list').getByRole('listitem')).toHaveCount(1);
   await expect(page.getByRole('link', { name: 'Pumps in parallel and in stages' })).toBeVisible();
