@@ -116,6 +116,12 @@ describe('a site that needs pumps in parallel', () => {
     expect(r.verdict.verdict).toBe('works'); // 1.40 ≥ 1.2
     expect(r.parts.find((p) => p.name.includes('waste valve'))?.quantity).toBe(3);
   });
+
+  it('takes two thirds of what the source spares without a caution: spare flow is already what may be taken', () => {
+    // 3 × 2.246 = 6.74 of 10 US gal/min spare: 67 %, above the calculators' 50 % of a whole stream (common practice, no source)
+    const out = planSite({ ...brook, demand: { otherM3PerDay: 1 }, largestSize: '1/2' });
+    expect(out.warnings.map((w) => w.code)).not.toContain('drive-near-source-limit');
+  });
 });
 
 describe('a site that needs staging', () => {
