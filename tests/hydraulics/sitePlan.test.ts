@@ -274,3 +274,12 @@ describe('no NaN or Infinity anywhere', () => {
     expect(bad).toEqual([]);
   });
 });
+
+describe('a drive pipe laid at the longest the rule allows', () => {
+  it('is 10 × the fall with no "longer than 5–10 times" caution (common practice, no published source: PRACTICE)', () => {
+    // 3 ft fall, 30 ft run: the path (30.1 ft) is longer than 10 × 3 ft, so the pipe is cut at 30 ft and a standpipe takes the rest
+    const out = planSite({ ...brook, fallM: 3 * 0.3048, sourceToPumpRunM: 30 * 0.3048 });
+    expect(out.results.stages[0]?.drivePipe.lengthToFall).toBeCloseTo(10, 9);
+    expect(out.warnings.map((w) => w.code)).not.toContain('drive-length-long-for-fall');
+  });
+});
