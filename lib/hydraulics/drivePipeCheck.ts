@@ -245,14 +245,16 @@ export function checkDrivePipe(input: DrivePipeCheckInput): CalcOutput<DrivePipe
   const lhMin = PRACTICE.driveLengthToFallMin.value;
   const lhMax = PRACTICE.driveLengthToFallMax.value;
   const rule = `${lhMin}–${lhMax} times the fall (${PRACTICE.driveLengthToFallMin.source})`;
-  if (lh < lhMin) {
+  // a pipe laid at exactly 10 × the fall (the site plan's longest) is inside the rule: no float noise
+  const EPS = 1e-9;
+  if (lh < lhMin * (1 - EPS)) {
     warnings.push(
       warn(
         'drive-length-short-for-fall',
         `The drive pipe is ${lh.toFixed(1)} times the fall; the engine asks for ${rule}. A short pipe returns the pressure wave too soon for a strong beat.`,
       ),
     );
-  } else if (lh > lhMax) {
+  } else if (lh > lhMax * (1 + EPS)) {
     warnings.push(
       warn(
         'drive-length-long-for-fall',

@@ -242,8 +242,10 @@ export function planSite(input: SitePlanInput): CalcOutput<SitePlanResults> {
 
   const verdict = verdictFor(v, pump, demand, delivered);
   warnings.push(...siteCautions(v, stages, supply, array));
-  // the plan sizes lines by Darcy-Weisbach, so the Hazen-Williams aside would only be noise here
-  const seen = new Set<string>(['hazen-williams-outside-range']);
+  // the plan sizes lines by Darcy-Weisbach, so the Hazen-Williams aside would only be noise here;
+  // and the survey's flow is already what the source can spare, so the share of it the pumps
+  // take is no caution (taking more than it is: drive-exceeds-source stays)
+  const seen = new Set<string>(['hazen-williams-outside-range', 'drive-near-source-limit']);
   const unique = warnings.filter((w) =>
     seen.has(w.code) || seen.has(w.code + w.message) ? false : (seen.add(w.code + w.message), true),
   );

