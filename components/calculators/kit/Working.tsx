@@ -93,6 +93,9 @@ function FormulaStrip({ html, label }: { html: string; label: string }) {
     update();
     const ro = new ResizeObserver(update);
     ro.observe(el);
+    // the formula itself widens when KaTeX's fonts arrive, while its strip keeps its size
+    if (el.firstElementChild) ro.observe(el.firstElementChild);
+    void document.fonts?.ready.then(update);
     return () => ro.disconnect();
   }, [html, update]);
   return (
