@@ -1,4 +1,5 @@
 import { diffWords, type Change } from 'diff';
+import { ChangeMark } from '@/components/posts/RevisionDiff';
 
 /** Unchanged text longer than this is cut to its ends, so a phone shows the changes, not the whole guide. */
 const KEEP = 160;
@@ -27,24 +28,8 @@ export function GuideChanges({ before, after }: { before: string; after: string 
       data-testid="revision-diff"
     >
       {changes.map((c, i) =>
-        c.added ? (
-          <ins
-            key={i}
-            className="rounded-sm bg-moss-100 text-moss-700 no-underline dark:bg-moss-700 dark:text-moss-100"
-          >
-            <span className="sr-only">[added: </span>
-            {c.value}
-            <span className="sr-only">]</span>
-          </ins>
-        ) : c.removed ? (
-          <del
-            key={i}
-            className="rounded-sm bg-clay-200 text-clay-700 line-through dark:bg-clay-700 dark:text-clay-200"
-          >
-            <span className="sr-only">[removed: </span>
-            {c.value}
-            <span className="sr-only">]</span>
-          </del>
+        c.added || c.removed ? (
+          <ChangeMark key={i} change={c} />
         ) : (
           <span key={i} className="cw-muted">
             {trimmed(c.value, i === 0, i === changes.length - 1)}

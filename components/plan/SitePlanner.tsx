@@ -1,19 +1,9 @@
 'use client';
 
-import { useEffect, useId, useMemo, useRef, useState } from 'react';
+import { useEffect, useId } from 'react';
 import type { CalcOutput, SitePlanResults } from '@/lib/hydraulics';
-import {
-  computeForm,
-  convertState,
-  formatMessage,
-  initialState,
-  shareQuery,
-  visibleFields,
-  VERDICT_WORDS,
-  type FormState,
-} from '@/lib/calculators';
+import { formatMessage, shareQuery, visibleFields, VERDICT_WORDS } from '@/lib/calculators';
 import { sitePlanner, SURVEY_GROUPS } from '@/lib/calculators/defs/sitePlan';
-
 import { designSections } from '@/lib/plan/design';
 import { partRows, planSources } from '@/lib/plan/parts';
 import { SourcesDisclosure } from '@/components/calculators/kit/EfficiencySources';
@@ -21,6 +11,8 @@ import { useUnits } from '@/components/units/UnitsProvider';
 import { Field } from '@/components/calculators/kit/CalculatorCard';
 import { LOOK } from '@/components/calculators/kit/VerdictLine';
 import { Working } from '@/components/calculators/kit/Working';
+import { Warnings } from '@/components/calculators/kit/Warnings';
+import { useFormState } from '@/components/calculators/kit/useFormState';
 import { PartsList } from './PartsList';
 import { SaveSite, type SaveTarget } from './SaveSite';
 import { MonthlyTable } from './MonthlyTable';
@@ -45,19 +37,9 @@ export function SitePlanner({
   /** a site's own page saves the next version; /plan saves a new site */
   save?: SaveTarget;
 }) {
-  const { units } = useUnits();
-  const uid = useId();
   const def = sitePlanner;
-  const [state, setState] = useState<FormState>(() => initialState(def.fields, props, def.defaults, units));
-  const lastUnits = useRef(units);
-  useEffect(() => {
-    if (lastUnits.current !== units) {
-      lastUnits.current = units;
-      setState((s) => convertState(def.fields, s, units));
-    }
-  }, [units, def.fields]);
-
-  const outcome = useMemo(() => computeForm(def, state, units), [def, state, units]);
+  const { state, outcome, set } = useFormState(def, props);
+  const uid = useId();
   const query = shareQuery(def.fields, state).toString();
   // the address follows the survey, so Back, a bookmark or a copied address brings it back
   useEffect(() => {
@@ -66,8 +48,6 @@ export function SitePlanner({
 
   const shown = new Set(visibleFields(def, state).map((f) => f.name));
   const byName = new Map(def.fields.map((f) => [f.name, f]));
-  const set = (name: string, patch: Partial<{ text: string; unit: string }>) =>
-    setState((s) => ({ ...s, [name]: { ...s[name], ...patch } as FormState[string] }));
 
   const failed = outcome.ok ? null : (
     <p
@@ -170,21 +150,7 @@ function Plan({
           <h2 id="plan-cautions" className="mb-2 font-serif text-xl font-semibold">
             Cautions
           </h2>
-          <ul className="flex flex-col gap-2">
-            {output.warnings.map((w) => (
-              <li
-                key={w.code}
-                className="rounded-md border-l-4 border-signal bg-signal-100 p-2 text-sm text-creek-900 dark:bg-signal-900 dark:text-signal-100"
-                data-warning={w.code}
-              >
-                <span aria-hidden="true">⚠ </span>
-                {formatMessage(w, units)}{' '}
-                <a href={`/guides/${w.guide}`} className="cw-link">
-                  Read more
-                </a>
-              </li>
-            ))}
-          </ul>
+          <Warnings warnings={output.warnings} />
         </section>
       ) : null}
 

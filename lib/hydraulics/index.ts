@@ -10,7 +10,16 @@
 // What every calculator returns, and the error a bad input throws.
 export { ENGINE_VERSION } from './version';
 export { EngineInputError, type FieldIssue } from './errors';
-export { partsTex, siTex, texNum, type CalcOutput, type Step, type StepPart, type StepValue } from './steps';
+export {
+  partsTex,
+  siTex,
+  texNum,
+  type CalcOutput,
+  type Step,
+  type StepPart,
+  type StepValue,
+  type Warning,
+} from './steps';
 export { WARNING_CODES } from './warnings';
 export { metricText, qty, renderMessage, said, say, type MessagePart, type MessageQuantity } from './message';
 
@@ -146,7 +155,6 @@ export {
   PART_KINDS,
   PIPE_ALLOWANCE,
   buildPartsList,
-  partsListCsv,
   type PartGroup,
   type PartKind,
   type PartsListItem,

@@ -7,8 +7,6 @@ import type { DemandAndStorageResults } from './demandAndStorage';
 import { NOMINAL_SIZES, type NominalSize, type PipeSeries } from './pipes';
 import type { PumpChoiceResults, PumpSet } from './pumpChoice';
 import { SCREEN_APPROACH_VELOCITY, SNIFTER_HOLE, type SupplyDesign } from './siteDesign';
-import { NOMINAL_LABELS } from './pipes';
-import type { QuantityKind } from './units';
 import type { StageDesign } from './sitePlan';
 import type { SitePlanSurvey } from './siteSurvey';
 import { pumpSideRating } from './siteVerdict';
@@ -214,56 +212,4 @@ export function buildPartsList(plan: {
     },
   );
   return items;
-}
-
-const CSV_COLUMNS = [
-  'group',
-  'kind',
-  'name',
-  'quantity',
-  'size',
-  'series',
-  'length',
-  'volume',
-  'area',
-  'pressure',
-  'hole',
-  'note',
-];
-
-/** One CSV field, quoted when it holds a comma, a quote or a line break (RFC 4180). */
-function csvField(x: string): string {
-  return /[",\n\r]/.test(x) ? `"${x.replace(/"/g, '""')}"` : x;
-}
-
-/**
- * The parts list as CSV (RFC 4180), each quantity written by `show` in the reader's units.
- * @example a pipe run shown in SI; the comma in its name and the inch mark in its size get the fields quoted
- * const items = [{ group: 'delivery', kind: 'pipe', name: 'delivery line, to the tank', quantity: 1, nominal: '1/2', lengthM: 66.7 }]
- * partsListCsv(items, (k, si) => `${si} ${k}`).split('\n')[1]  // → 'delivery,pipe,"delivery line, to the tank",1,"½""",,66.7 length,,,,,'
- */
-export function partsListCsv(
-  items: readonly PartsListItem[],
-  show: (kind: QuantityKind, si: number) => string,
-): string {
-  const q = (kind: QuantityKind, si: number | undefined) => (si === undefined ? '' : show(kind, si));
-  const rows = items.map((p) =>
-    [
-      p.group,
-      p.kind,
-      p.name,
-      String(p.quantity),
-      p.nominal ? NOMINAL_LABELS[p.nominal] : '',
-      p.series ?? '',
-      q('length', p.lengthM),
-      q('volume', p.volumeM3),
-      q('area', p.areaM2),
-      q('pressure', p.pressurePa),
-      q('smallLength', p.diameterM),
-      p.note ?? '',
-    ]
-      .map(csvField)
-      .join(','),
-  );
-  return [CSV_COLUMNS.join(','), ...rows].join('\n');
 }

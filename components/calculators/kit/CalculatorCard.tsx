@@ -1,14 +1,10 @@
 'use client';
 
-import { useEffect, useId, useMemo, useRef, useState } from 'react';
+import { useEffect, useId, useMemo, useState } from 'react';
 import { UNIT_CHOICES, unitLabel } from '@/lib/hydraulics';
 import type { CalcOutput } from '@/lib/hydraulics';
 import {
-  computeForm,
-  convertState,
-  formatMessage,
   formatNumber,
-  initialState,
   inUnits,
   readableQuantity,
   shareQuery,
@@ -29,6 +25,8 @@ import { SaveCalculation } from './SaveCalculation';
 import { SiteSketch } from './SiteSketch';
 import { SourcesDisclosure } from './EfficiencySources';
 import { VerdictLine } from './VerdictLine';
+import { Warnings } from './Warnings';
+import { useFormState } from './useFormState';
 
 /**
  * A live calculator: inputs with unit pickers on one side, a verdict in a sentence
@@ -50,42 +48,16 @@ export function CalculatorCard({
   /** the save button's words where "save" alone could be mistaken for another action (the answer form) */
   saveLabel?: string;
 }) {
-  const { units } = useUnits();
+  const { units, state, outcome, set } = useFormState(def, props, openIn);
   // every id from useId, so the same calculator twice on one page keeps its labels to itself
   const uid = useId();
-  const defaultsIn = (u: typeof units) => (u === 'metric' ? { ...def.defaults, ...def.metricDefaults } : def.defaults);
-  const [state, setState] = useState<FormState>(() =>
-    initialState(def.fields, props, defaultsIn(units), units, openIn),
-  );
-  const lastUnits = useRef(units);
   const [copied, setCopied] = useState(false);
-
-  // The site-wide unit switch re-expresses what is in the boxes, so the same quantity shows converted.
-  useEffect(() => {
-    if (lastUnits.current !== units) {
-      const [from, to] = [defaultsIn(lastUnits.current), defaultsIn(units)];
-      lastUnits.current = units;
-      setState((s) => {
-        const next = convertState(def.fields, s, units);
-        // a worded default in the other system ("5 gal in 42 s") still untouched opens as this system's own
-        for (const f of def.fields)
-          if (f.type === 'text' && s[f.name]?.text === from[f.prop] && to[f.prop] !== undefined)
-            next[f.name] = { ...next[f.name], text: to[f.prop] };
-        return next;
-      });
-    }
-    // eslint-disable-next-line react-hooks/exhaustive-deps -- defaultsIn reads only def, listed through its parts
-  }, [units, def.fields, def.defaults, def.metricDefaults]);
-
-  const outcome = useMemo(() => computeForm(def, state, units), [def, state, units]);
   // An empty efficiency box stands for the typical value at this site: shown in it, band beside.
   const typical = useMemo(() => typicalEfficiency(def, state, units), [def, state, units]);
   useEffect(() => {
     onOutput?.(state, outcome.ok ? outcome.output : null);
   }, [state, outcome, onOutput]);
 
-  const set = (name: string, patch: Partial<{ text: string; unit: string }>) =>
-    setState((s) => ({ ...s, [name]: { ...s[name], ...patch } as FormState[string] }));
   const shareHref = `/calculators/${def.id}?${shareQuery(def.fields, state)}`;
 
   return (
@@ -335,23 +307,7 @@ function Results({
           );
         })}
       </dl>
-      {output.warnings.length > 0 ? (
-        <ul className="flex flex-col gap-2" aria-label="Warnings">
-          {output.warnings.map((w) => (
-            <li
-              key={w.code}
-              className="rounded-md border-l-4 border-signal bg-signal-100 p-2 text-sm text-creek-900 dark:bg-signal-900 dark:text-signal-100"
-              data-warning={w.code}
-            >
-              <span aria-hidden="true">⚠ </span>
-              {formatMessage(w, units)}{' '}
-              <a href={`/guides/${w.guide}`} className="cw-link">
-                Read more
-              </a>
-            </li>
-          ))}
-        </ul>
-      ) : null}
+      <Warnings warnings={output.warnings} label="Warnings" />
       {view.extra ? view.extra(output.results, units) : null}
       {view.chart ? <div className="min-w-0">{view.chart(output.results, units, input)}</div> : null}
       <Working steps={output.steps} />

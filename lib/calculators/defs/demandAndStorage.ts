@@ -41,6 +41,32 @@ export function parseArea(text: string): number {
 
 const count = (v: unknown) => Math.max(0, Math.round(Number(v ?? 0)));
 
+/** One count box a kind of stock ("animal.sheep"), as the demand calculator and the site planner ask them. */
+export const ANIMAL_COUNT_FIELDS: FieldDef[] = ANIMALS.map((a) => ({
+  type: 'number',
+  name: `animal.${a.prop}`,
+  prop: a.prop,
+  label: a.label,
+  min: 0,
+  step: 1,
+}));
+
+/**
+ * The engine's livestock lines from the count boxes, each at `rateOf` (the table's rate
+ * unless given). The table is per 100 birds and counts are whole: 12 chickens go in as
+ * one flock at 12/100 of the table's rate.
+ */
+export function livestockInput(
+  animals: Record<string, unknown>,
+  rateOf: (a: (typeof ANIMALS)[number]) => number = (a) => livestockRates()[a.kind].typicalM3PerDay,
+) {
+  return ANIMALS.filter((a) => count(animals[a.prop]) > 0).map((a) =>
+    a.perHundred
+      ? { kind: a.kind, count: 1, perHeadM3PerDay: (rateOf(a) * count(animals[a.prop])) / 100 }
+      : { kind: a.kind, count: count(animals[a.prop]), perHeadM3PerDay: rateOf(a) },
+  );
+}
+
 /**
  * The engine's rates as the form's defaults, in the US gallons its tables are
  * written in, so the default reads back exactly and a form saved before the
@@ -97,14 +123,8 @@ export const demandAndStorage = defineCalculator(planDemandAndStorage, {
         metric: 'About 25 mm a week in the growing season (common practice, no source).',
       },
     },
-    ...ANIMALS.map((a): FieldDef => ({
-      type: 'number',
-      name: `animal.${a.prop}`,
-      prop: a.prop,
-      label: a.label,
-      min: 0,
-      step: 1,
-    })),
+    ...ANIMAL_COUNT_FIELDS,
+
     ...ANIMALS.map((a): FieldDef => ({
       type: 'quantity',
       name: rateField(a.prop),
@@ -136,7 +156,6 @@ export const demandAndStorage = defineCalculator(planDemandAndStorage, {
       const rate = given[a.prop];
       return typeof rate === 'number' && !same(rate, table) ? rate : table;
     };
-    const rates = ANIMALS.filter((a) => count(animals[a.prop]) > 0);
     return {
       deliveredFlowM3s: Number(v.deliveryPerDay) / 86_400,
       people: count(v.people),
@@ -146,16 +165,7 @@ export const demandAndStorage = defineCalculator(planDemandAndStorage, {
         : {}),
       gardenAreaM2: typeof v.gardenAreaM2 === 'number' ? v.gardenAreaM2 : 0,
       ...(v.gardenDepthPerWeekM !== undefined ? { gardenDepthPerWeekM: v.gardenDepthPerWeekM } : {}),
-      livestock: rates.map((a) =>
-        // The table is per 100 birds and counts are whole: 12 chickens go in as one flock at 12/100 of the table's rate.
-        a.perHundred
-          ? {
-              kind: a.kind,
-              count: 1,
-              perHeadM3PerDay: (rateOf(a) * count(animals[a.prop])) / 100,
-            }
-          : { kind: a.kind, count: count(animals[a.prop]), perHeadM3PerDay: rateOf(a) },
-      ),
+      livestock: livestockInput(animals, rateOf),
       reserveDays: v.reserveDays === undefined ? 3 : Number(v.reserveDays),
       ...(v.tankVolumeM3 !== undefined ? { tankVolumeM3: v.tankVolumeM3 } : {}),
     };

@@ -1,7 +1,7 @@
-import { FALL_METHODS, fromSI, householdRate, livestockRates, planSite, sitePlanSchema } from '@/lib/hydraulics';
+import { FALL_METHODS, fromSI, householdRate, planSite, sitePlanSchema } from '@/lib/hydraulics';
 import { defineCalculator, type FieldDef } from '../types';
 import { PUMP_TYPE_OPTIONS } from '../options';
-import { ANIMALS } from './demandAndStorage';
+import { ANIMAL_COUNT_FIELDS, ANIMALS, livestockInput } from './demandAndStorage';
 
 /**
  * The site planner's survey as a form: the same field kit, unit switch, share link and
@@ -117,14 +117,7 @@ const fields: FieldDef[] = [
     qty: 'dailyVolume',
   },
   { type: 'quantity', name: 'demand.gardenAreaM2', prop: 'garden', label: 'Garden area (optional)', qty: 'area' },
-  ...ANIMALS.map((a): FieldDef => ({
-    type: 'number',
-    name: `animal.${a.prop}`,
-    prop: a.prop,
-    label: a.label,
-    min: 0,
-    step: 1,
-  })),
+  ...ANIMAL_COUNT_FIELDS,
   {
     type: 'quantity',
     name: 'demand.otherM3PerDay',
@@ -205,16 +198,7 @@ export const sitePlanner = defineCalculator(planSite, {
         ...(typeof demand.perPersonM3PerDay === 'number' ? { perPersonM3PerDay: demand.perPersonM3PerDay } : {}),
         gardenAreaM2: typeof demand.gardenAreaM2 === 'number' ? demand.gardenAreaM2 : 0,
         otherM3PerDay: typeof demand.otherM3PerDay === 'number' ? demand.otherM3PerDay : 0,
-        livestock: ANIMALS.filter((a) => count(animals[a.prop]) > 0).map((a) =>
-          // the table is per 100 birds: a dozen hens go in as 0.12 of a hundred
-          a.perHundred
-            ? {
-                kind: a.kind,
-                count: 1,
-                perHeadM3PerDay: (livestockRates()[a.kind].typicalM3PerDay * count(animals[a.prop])) / 100,
-              }
-            : { kind: a.kind, count: count(animals[a.prop]) },
-        ),
+        livestock: livestockInput(animals),
       },
     };
   },
