@@ -18,6 +18,9 @@ export const GUIDES = [
   'storage-overflow-and-float-valves',
   'when-it-stops-cycling',
   'care-frost-floods-and-water-rights',
+  'choosing-a-pump-size',
+  'the-intake-and-supply',
+  'building-a-ram-from-fittings',
 ] as const;
 export type GuideSlug = (typeof GUIDES)[number];
 
@@ -77,10 +80,10 @@ const CATALOGUE = {
   'high-water-safety': ['danger', 'care-frost-floods-and-water-rights'],
   'air-chamber-safety': ['danger', 'when-it-stops-cycling'],
   // site plan
-  'plan-pressure': ['danger', 'first-start-and-tuning'],
+  'plan-pressure': ['danger', 'building-a-ram-from-fittings'],
   'plan-water-in-motion': ['danger', 'care-frost-floods-and-water-rights'],
   'plan-freezes': ['caution', 'care-frost-floods-and-water-rights'],
-  'plan-standpipe-needed': ['info', 'the-drive-pipe'],
+  'plan-standpipe-needed': ['info', 'the-intake-and-supply'],
 } as const satisfies Record<string, readonly [Severity, GuideSlug]>;
 
 export type WarningCode = keyof typeof CATALOGUE;
