@@ -118,6 +118,15 @@ export {
   type DrivePipeCheckResults,
 } from './drivePipeCheck';
 export { checkDeliveryLine, deliveryLineSchema, type DeliveryLineResults } from './deliveryLine';
+export {
+  BEAT_COUNT_SECONDS,
+  BEAT_GAP_RANGE,
+  CLOSURE_TOLERANCE_M,
+  beatsPerMinute,
+  levelSurvey,
+  type BeatsResult,
+  type LevelSurveyResult,
+} from './fieldKit';
 export { measureSourceFlow, sourceFlowSchema, type SourceFlowResults } from './sourceFlow';
 export { planDemandAndStorage, demandAndStorageSchema, type DemandAndStorageResults } from './demandAndStorage';
 export { runStallCheck, stallCheckSchema, type StallCheckInput, type StallCheckResults } from './stallCheck';
