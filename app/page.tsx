@@ -25,6 +25,11 @@ const PATHS = [
     title: 'Read the field log',
     text: 'Measured installations: what real pumps delivered on real falls.',
   },
+  {
+    href: '/field-kit',
+    title: 'Measure at the water',
+    text: 'The field kit: a one-handed trial timer, a beat counter and a hose-level fall survey.',
+  },
 ];
 
 export default async function HomePage() {

@@ -80,6 +80,10 @@ const PAGES: { path: string | ((ids: Ids) => string); name?: string; as: Role; p
   { path: '/calculations/FerncombeY1', as: 'visitor' },
   // the planner with a wet month given, so its month-by-month table is drawn too
   { path: '/plan?wetFlow=25+gal%2Fmin', name: 'the site planner', as: 'visitor', phone: true },
+  // the field kit: its big buttons and pole readings are made for a phone at the water
+  { path: '/field-kit', as: 'visitor' },
+  { path: '/field-kit/timer', as: 'visitor', phone: true },
+  { path: '/field-kit/fall', as: 'visitor', phone: true },
   { path: '/questions', as: 'visitor', phone: true },
   { path: (ids) => ids.thread, name: 'a thread with a site sheet', as: 'visitor' },
   { path: (ids) => ids.thread, name: 'a thread with the answer form', as: 'member', phone: true },
