@@ -107,6 +107,14 @@ async function visibleBlocks(page: Page): Promise<{ blocks: string[]; quoted: st
 async function check(page: Page, where: string, system: System, found: string[]) {
   await settled(page);
   await page.waitForLoadState('networkidle');
+  // A static guide is drawn on the server in the default units and its calculators follow the
+  // reader's once React has taken them over: read the page as it settles, not the flash before.
+  await page.waitForFunction(() =>
+    [...document.querySelectorAll('header[data-site-header] button, [data-calculator]')].every((el) =>
+      Object.keys(el).some((k) => k.startsWith('__reactFiber')),
+    ),
+  );
+  await page.evaluate(() => new Promise((done) => requestAnimationFrame(() => requestAnimationFrame(done))));
   const { blocks, quoted } = await visibleBlocks(page);
   for (const block of blocks) for (const hit of wrongUnits(block, system)) found.push(`${where}: ${hit}`);
   for (const words of quoted)
@@ -189,6 +197,16 @@ for (const system of ['US', 'metric'] as const) {
       await settled(page);
       await page.getByText('Show the working').first().click();
       await check(page, '/plan (working open)', system, found);
+
+      // the field kit: the buckets offered, and a hose-level stage read in the reader's pole marks
+      await page.goto('/field-kit/timer');
+      await check(page, '/field-kit/timer', system, found);
+      await page.goto('/field-kit/fall');
+      await settled(page);
+      await page.getByLabel('Uphill pole reads').fill('10');
+      await page.getByLabel('Downhill pole reads').fill('28');
+      await expect(page.getByTestId('fall-total')).toBeVisible();
+      await check(page, '/field-kit/fall (one stage read)', system, found);
 
       // questions, a thread with a site sheet, the ask form's hints
       for (const path of ['/questions', ids.thread, '/questions/ask']) {
