@@ -10,6 +10,7 @@ import { SafetyCheck } from './SafetyCheck';
 import { WorkedCalculation } from './WorkedCalculation';
 import { Site } from './Site';
 import { SiteVersion } from './SiteVersion';
+import { IdempotencyKey } from './IdempotencyKey';
 import { AuthToken } from './AuthToken';
 import { ExpertApplication } from './ExpertApplication';
 import { Notice } from './Notice';
@@ -53,6 +54,7 @@ export {
   MailMessage,
   Site,
   SiteVersion,
+  IdempotencyKey,
 };
 
 const initialised = new WeakSet<Sequelize>();
@@ -85,6 +87,7 @@ export function initModels(sequelize: Sequelize = getSequelize()) {
     MailMessage.initModel(sequelize);
     Site.initModel(sequelize);
     SiteVersion.initModel(sequelize);
+    IdempotencyKey.initModel(sequelize);
 
     Question.belongsTo(User, { as: 'author', foreignKey: 'authorId' });
     User.hasMany(Question, { as: 'questions', foreignKey: 'authorId' });
@@ -142,5 +145,6 @@ export function initModels(sequelize: Sequelize = getSequelize()) {
     MailMessage,
     Site,
     SiteVersion,
+    IdempotencyKey,
   };
 }

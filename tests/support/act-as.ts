@@ -26,12 +26,14 @@ export function actAs(subnet: string) {
     who: string | null,
     body?: unknown,
     params: Record<string, string> = {},
+    extraHeaders: Record<string, string> = {},
   ) {
     // as the site's own pages send it: JSON, from the site's origin (lib/http/request-checks.ts)
     const headers: Record<string, string> = {
       'content-type': 'application/json',
       origin: new URL(siteUrl()).origin,
       'x-forwarded-for': `${subnet}.${++ip}`,
+      ...extraHeaders,
     };
     if (who) headers.cookie = await sessionCookie(who);
     return handler(
@@ -50,8 +52,9 @@ export function actAs(subnet: string) {
     who: string | null,
     body?: unknown,
     params: Record<string, string> = {},
+    extraHeaders: Record<string, string> = {},
   ) {
-    const res = await raw(handler, method, url, who, body, params);
+    const res = await raw(handler, method, url, who, body, params, extraHeaders);
     return { status: res.status, body: await res.json() };
   }
   return { raw, call };

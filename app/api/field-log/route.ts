@@ -7,6 +7,7 @@ import { ForumError } from '@/lib/questions/errors';
 import { fieldLogEntrySchema, fieldLogFilterSchema } from '@/lib/validation/field-log';
 import { createEntry, filteredEntries, sortAndPage } from '@/lib/field-log/store';
 import { indexFieldLog } from '@/lib/search';
+import { idempotencyKeyOf, once } from '@/lib/http/idempotency';
 
 export const dynamic = 'force-dynamic';
 
@@ -29,11 +30,16 @@ export async function POST(request: Request) {
     request,
     'fieldLog.create',
     async (user) => {
+      const key = idempotencyKeyOf(request);
       const body = await readJson(request, fieldLogEntrySchema);
       if ('response' in body) return body.response;
-      const e = await createEntry(user, body.data);
-      await indexFieldLog([e.id]);
-      return NextResponse.json({ id: e.id, url: `/field-log/${e.id}` }, { status: 201 });
+      // a phone that lost the answer sends again with the same key and gets the same entry
+      const out = await once(user.id, 'field-log.create', key, body.data, async (transaction) => {
+        const e = await createEntry(user, body.data, transaction);
+        return { status: 201, body: { id: e.id, url: `/field-log/${e.id}` } };
+      });
+      if (!out.replayed) await indexFieldLog([out.body.id]);
+      return NextResponse.json(out.body, { status: out.status });
     },
     { flood: 'post' },
   );
