@@ -1,5 +1,6 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
+import { OutboxPanel } from '@/components/field-kit/OutboxPanel';
 
 export const metadata: Metadata = {
   title: 'Field kit',
@@ -39,6 +40,7 @@ export default function FieldKitPage() {
           </li>
         ))}
       </ul>
+      <OutboxPanel />
     </div>
   );
 }
