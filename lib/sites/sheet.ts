@@ -4,8 +4,7 @@
  * drive pipe, delivery line). Pure, like lib/calculators/site-sheet.ts, so the pages and the
  * tests share it.
  */
-import { asWritten, unitSystemOf, type QuantityKind, type UnitSystem } from '@/lib/hydraulics';
-import type { SitePlanResults } from '@/lib/hydraulics';
+import { asWritten, unitSystemOf, type QuantityKind, type SitePlanResults, type UnitSystem } from '@/lib/hydraulics';
 import { calculatorPropsFromSiteSheet, type SiteSheet } from '@/lib/calculators/site-sheet';
 import type { CalculatorId } from '@/lib/calculators/ids';
 import { splitTyped } from '@/lib/calculators/state';
