@@ -11,6 +11,7 @@ import {
 } from 'sequelize';
 import type { User } from './User';
 import type { Tag } from './Tag';
+import type { Site } from './Site';
 
 export class Question extends Model<InferAttributes<Question>, InferCreationAttributes<Question>> {
   declare id: CreationOptional<number>;
@@ -40,6 +41,7 @@ export class Question extends Model<InferAttributes<Question>, InferCreationAttr
 
   declare author?: NonAttribute<User>;
   declare tags?: NonAttribute<Tag[]>;
+  declare site?: NonAttribute<Site | null>;
 
   static initModel(sequelize: Sequelize) {
     Question.init(

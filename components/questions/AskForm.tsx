@@ -232,14 +232,18 @@ export function AskForm({
   defaultTag,
   guide,
   fromFieldLog,
+  fromSite,
 }: {
   tags: { slug: string; name: string }[];
   defaultTag?: string;
   guide?: string;
   /** a field log entry to fill the site sheet from, and to link the question to */
   fromFieldLog?: { id: number; siteSheet: SiteSheet };
+  /** the asker's own site: the question is about it, and its plan fills the sheet unless a field log entry does */
+  fromSite?: { id: string; siteSheet: SiteSheet };
 }) {
   const uid = useId();
+  const startSheet = fromFieldLog?.siteSheet ?? fromSite?.siteSheet;
   const { units } = useUnits();
   const id = (name: string) => `${uid}-${name.replace('.', '-')}`;
   const {
@@ -257,8 +261,9 @@ export function AskForm({
       title: '',
       body: '',
       tags: defaultTag ? [defaultTag] : [],
-      siteSheet: Object.fromEntries(SITE_SHEET_FIELDS.map((f) => [f, fromFieldLog?.siteSheet[f] ?? ''])),
+      siteSheet: Object.fromEntries(SITE_SHEET_FIELDS.map((f) => [f, startSheet?.[f] ?? ''])),
       fieldLogEntryId: fromFieldLog?.id,
+      siteId: fromSite?.id,
       photoIds: [],
       guide,
     },
@@ -308,10 +313,10 @@ export function AskForm({
           title: '',
           body: '',
           tags: defaultTag ? [defaultTag] : [],
-          siteSheet: Object.fromEntries(SITE_SHEET_FIELDS.map((f) => [f, fromFieldLog?.siteSheet[f] ?? ''])),
+          siteSheet: Object.fromEntries(SITE_SHEET_FIELDS.map((f) => [f, startSheet?.[f] ?? ''])),
         }),
       ),
-    [defaultTag, fromFieldLog],
+    [defaultTag, startSheet],
   );
   const watched = useWatch({ control });
   const draftKey = JSON.stringify(draftOf(watched as AskInput));
@@ -330,8 +335,9 @@ export function AskForm({
       title: '',
       body: '',
       tags: defaultTag ? [defaultTag] : [],
-      siteSheet: Object.fromEntries(SITE_SHEET_FIELDS.map((f) => [f, fromFieldLog?.siteSheet[f] ?? ''])),
+      siteSheet: Object.fromEntries(SITE_SHEET_FIELDS.map((f) => [f, startSheet?.[f] ?? ''])),
       fieldLogEntryId: fromFieldLog?.id,
+      siteId: fromSite?.id,
       photoIds: getValues('photoIds') ?? [],
       guide,
     });

@@ -74,6 +74,14 @@ export function Thread({ initial }: { initial: ThreadView }) {
       ) : null}
       <section aria-label="The question" className="flex flex-col gap-3">
         <PostMarks post={t} kind="question" />
+        {t.site ? (
+          <p className="font-sans text-sm" data-testid="thread-site">
+            About the site{' '}
+            <Link href={`/sites/${t.site.id}`} className="cw-link font-semibold">
+              {t.site.name}
+            </Link>
+          </p>
+        ) : null}
         <MemberText>{t.body}</MemberText>
         {t.photos.length ? <PhotoGallery photos={t.photos} canFlag={!!viewer && viewer.id !== t.author.id} /> : null}
         <div className="flex flex-wrap items-center gap-3">

@@ -23,6 +23,8 @@ export interface NewWorkedCalculation {
   engineVersion: string;
   authorId: number | null;
   title?: string | null;
+  /** the author's own site it was worked out from (checked by the caller) */
+  siteId?: number | null;
 }
 
 /**
@@ -48,6 +50,7 @@ export async function saveWorkedCalculation(c: NewWorkedCalculation, transaction
       engineVersion: c.engineVersion,
       authorId: c.authorId,
       title: c.title ?? null,
+      siteId: c.siteId ?? null,
     },
     { transaction },
   );

@@ -13,6 +13,7 @@ import { postsChanged, threadChanged } from './after-write';
 import { findWritablePost, namedInBody, type PostType } from './visibility';
 import { checkPostText } from './post-text';
 import { saveWorkedCalculation, type NewWorkedCalculation } from '@/lib/calculations/store';
+import { linkedSiteId } from '@/lib/sites/links';
 
 /** Runs a write, then brings the thread's search documents and its cached page up to date (same request). */
 async function thenIndex<T>(write: Promise<T>, questionId: (result: T) => number): Promise<T> {
@@ -42,6 +43,7 @@ export async function askQuestion(
     photoIds: string[];
     guide?: string;
     fieldLogEntryId?: number;
+    siteId?: string;
   },
 ) {
   checkPostText(user, 'question', input);
@@ -57,6 +59,7 @@ export async function askQuestion(
       });
       if (!entry) throw new ForumError(422, 'fieldLogEntryId: no such field log entry', 'fieldLogEntryId');
     }
+    const siteId = await linkedSiteId(user, input.siteId, transaction);
     const now = new Date();
     const q = await Question.create(
       {
@@ -68,6 +71,7 @@ export async function askQuestion(
         siteSheet,
         guideSlug: input.guide ?? null,
         fieldLogEntryId: input.fieldLogEntryId ?? null,
+        siteId,
         lastActivityAt: now,
       },
       { transaction },

@@ -4,6 +4,7 @@ import { ForumError } from './errors';
 import { can, type Actor } from '@/lib/auth/policy';
 import { findVisiblePost } from './visibility';
 import type { PostType } from '@/lib/vocabulary';
+import { maySee } from '@/lib/sites/store';
 
 /** A photo with a post; `ref` is what a flag names, `hidden` only ever true for moderators. */
 export interface PhotoView {
@@ -70,6 +71,8 @@ export interface ThreadView {
   siteSheet: Record<string, string> | null;
   guideSlug: string | null;
   fieldLogEntryId: number | null;
+  /** the site it is about, only when this reader may see that site */
+  site: { id: string; name: string } | null;
   helpfulCount: number;
   markedByViewer: boolean;
   fixedAnswerId: number | null;
@@ -106,8 +109,20 @@ const person = (u: { handle: string; displayName: string; role: string } | undef
 export async function loadThread(id: number, viewer: Actor | null): Promise<ThreadView> {
   const viewerId = viewer?.id ?? null;
   const seeHidden = can(viewer, 'moderation.seeHidden');
-  const { Question, Answer, Reply, User, Tag, WorkedCalculation, Photo, HelpfulMark, QuestionFollow, Revision, Flag } =
-    initModels();
+  const {
+    Question,
+    Answer,
+    Reply,
+    User,
+    Tag,
+    WorkedCalculation,
+    Photo,
+    HelpfulMark,
+    QuestionFollow,
+    Revision,
+    Flag,
+    Site,
+  } = initModels();
   // hidden and deleted photos are left out for everyone but moderators, like posts
   const photoInclude = {
     model: Photo,
@@ -120,6 +135,7 @@ export async function loadThread(id: number, viewer: Actor | null): Promise<Thre
     include: [
       { model: User, as: 'author', attributes: ['id', 'handle', 'displayName', 'role'] },
       { model: Tag, as: 'tags', attributes: ['slug', 'name'], through: { attributes: [] } },
+      { model: Site, as: 'site', attributes: ['publicId', 'name', 'ownerId', 'visibility'], required: false },
       photoInclude,
     ],
   });
@@ -248,6 +264,8 @@ export async function loadThread(id: number, viewer: Actor | null): Promise<Thre
     siteSheet: (q.siteSheet as Record<string, string> | null) ?? null,
     guideSlug: q.guideSlug ?? null,
     fieldLogEntryId: q.fieldLogEntryId ?? null,
+    // a private site's name is its owner's alone; the cached page (no reader) names shared and public ones
+    site: q.site && maySee(viewer, q.site) ? { id: q.site.publicId, name: q.site.name } : null,
     helpfulCount: q.helpfulCount,
     markedByViewer: marked.has(`question:${q.id}`),
     fixedAnswerId: q.fixedAnswerId,

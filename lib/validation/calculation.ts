@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { CALCULATOR_IDS } from '@/lib/calculators/ids';
 import { BROKEN_TEXT_MESSAGE, isWellFormedText } from './text';
+import { siteIdField } from './site';
 
 /** POST /api/calculations: the tool and its inputs as typed (share-link form). */
 export const saveCalculationSchema = z.object({
@@ -17,5 +18,7 @@ export const saveCalculationSchema = z.object({
     .max(160, 'title must be at most 160 characters')
     .refine(isWellFormedText, BROKEN_TEXT_MESSAGE)
     .optional(),
+  /** the caller's own site it was worked out from */
+  siteId: siteIdField.optional(),
 });
 export type SaveCalculation = z.output<typeof saveCalculationSchema>;

@@ -2,6 +2,7 @@ import { z } from 'zod';
 import { POST_TYPES } from '@/lib/vocabulary';
 import { BROKEN_TEXT_MESSAGE, isWellFormedText } from './text';
 import { saveCalculationSchema } from './calculation';
+import { siteIdField } from './site';
 
 /**
  * Shared by the ask form (react-hook-form's zod resolver) and POST /api/questions.
@@ -67,6 +68,8 @@ export const askQuestionSchema = z.object({
     .optional(),
   /** the field log entry the site sheet was filled from */
   fieldLogEntryId: z.number({ error: 'fieldLogEntryId must be a field log entry number' }).int().positive().optional(),
+  /** the asker's own site the question is about (its site sheet may be filled from it) */
+  siteId: siteIdField.optional(),
 });
 export type AskQuestion = z.input<typeof askQuestionSchema>;
 

@@ -33,3 +33,8 @@ export const updateSiteSchema = z
     visibility: z.enum(SITE_VISIBILITIES, { error: 'visibility must be private, link or public' }).optional(),
   })
   .refine((v) => v.name !== undefined || v.visibility !== undefined, 'send a new name or visibility');
+
+/** A site a question or worked calculation is about, by its address; the server checks it is the caller's own. */
+export const siteIdField = z
+  .string({ error: 'siteId must be a site’s id' })
+  .regex(/^[0-9A-Za-z]{6,16}$/, 'siteId must be a site’s id');

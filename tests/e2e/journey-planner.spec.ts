@@ -4,7 +4,8 @@ import { press, settled, signIn } from '../support/session';
 /**
  * Issue 22, a newcomer on a phone: from the home page to a verdict in at most three taps,
  * the units switched midway (every number follows), the plan saved as a site and found
- * again, and printed on at most three pages with no controls.
+ * again, printed on at most three pages with no controls, and a question asked from it: the
+ * site's numbers in its site sheet, the thread linking back to the site, the site listing it.
  */
 test('@phone-only the planner’s journey: a verdict in three taps, units that follow, a saved site, a printable plan', async ({
   page,
@@ -65,4 +66,35 @@ test('@phone-only the planner’s journey: a verdict in three taps, units that f
   const pages = (pdf.toString('latin1').match(/\/Type\s*\/Page[^s]/g) ?? []).length;
   expect(pages).toBeGreaterThan(0);
   expect(pages).toBeLessThanOrEqual(3);
+
+  // asking a question from the saved site: the plan fills the site sheet, the thread links back
+  await page.emulateMedia({ media: 'screen' });
+  const siteAddress = new URL(page.url()).pathname;
+  await press(page.getByTestId('ask-about-site'));
+  await expect(page).toHaveURL(/\/questions\/ask\?site=[0-9A-Za-z]+$/);
+  await settled(page);
+  await expect(page.getByTestId('from-site')).toContainText('Ridge spring');
+  const sheet = page.locator('section', { has: page.getByRole('heading', { name: 'Site sheet' }) });
+  // the newest survey as typed in the reader's US units: 5 ft of fall, 40 ft of lift, 12 US gal/min
+  await expect(sheet.getByLabel('Fall', { exact: true })).toHaveValue('5 ft');
+  await expect(sheet.getByLabel('Lift', { exact: true })).toHaveValue('40 ft');
+  await expect(sheet.getByLabel('Source flow the source can spare', { exact: true })).toHaveValue('12 gal/min');
+  // and the plan's design: its pump and drive pipe, in feet
+  await expect(sheet.getByLabel('Pump size', { exact: true })).not.toHaveValue('');
+  await expect(sheet.getByLabel('Drive pipe size', { exact: true })).not.toHaveValue('');
+  await expect(sheet.getByLabel('Drive pipe length', { exact: true })).toHaveValue(/^\d+(\.\d)? ft$/);
+  const title = `Ridge spring: one pump or two for a dry summer? (${Date.now() % 100000})`;
+  await page.getByLabel('Title', { exact: true }).fill(title);
+  await page
+    .getByLabel('What happened')
+    .fill('The plan for my spring says one pump will do. Is a second worth building before the dry months?');
+  await press(page.getByLabel('Drive pipe', { exact: true }));
+  await press(page.getByRole('button', { name: 'Post my question' }));
+  await expect(page).toHaveURL(/\/questions\/\d+$/);
+  // the site is private: its owner's own view names it
+  const about = page.getByTestId('thread-site');
+  await expect(about).toContainText('Ridge spring');
+  await press(about.getByRole('link', { name: 'Ridge spring' }));
+  await expect(page).toHaveURL(new RegExp(`${siteAddress}$`));
+  await expect(page.getByTestId('site-questions')).toContainText(title);
 });

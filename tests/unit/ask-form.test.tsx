@@ -129,6 +129,27 @@ describe('AskForm', () => {
     expect(Object.keys(sent.siteSheet)).toEqual(['fall']);
   });
 
+  it('opens with the site’s sheet and posts the question about that site; a refusal of the site is said', async () => {
+    fetchMock.mockImplementation(async (url: string) =>
+      url === '/api/questions'
+        ? new Response(JSON.stringify({ error: { field: 'siteId', message: 'No such site.' } }), { status: 404 })
+        : new Response(JSON.stringify({ items: [] }), { status: 200 }),
+    );
+    // an invented site's plan: 5 ft of fall, 40 ft of lift, one pump, 33 ft of drive pipe (common practice, no source)
+    const siteSheet = { fall: '5 ft', lift: '40 ft', pumps: '1', driveLength: '33 ft' };
+    render(<AskForm tags={TAGS} defaultTag="drive-pipe" fromSite={{ id: 'RidgeSpring1', siteSheet }} />);
+    expect((screen.getByLabelText('Fall') as HTMLInputElement).value).toBe('5 ft');
+    type('Title', 'One pump or two for a dry summer?');
+    type('What happened', 'The plan says one pump will do; is a second worth building?');
+    await act(async () => {
+      fireEvent.click(screen.getByRole('button', { name: /post my question/i }));
+    });
+    await screen.findByText('No such site.');
+    const post = fetchMock.mock.calls.find((c) => c[0] === '/api/questions');
+    const sent = JSON.parse(String(post?.[1]?.body));
+    expect(sent).toMatchObject({ siteId: 'RidgeSpring1', siteSheet });
+  });
+
   it('renders a live preview of the Markdown body', () => {
     render(<AskForm tags={TAGS} />);
     type('What happened', 'The drive pipe is **galvanised**.');

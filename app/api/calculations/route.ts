@@ -3,7 +3,8 @@ import { saveCalculationSchema } from '@/lib/validation/calculation';
 import { readJson } from '@/lib/http/body';
 import { apiError } from '@/lib/http/errors';
 import { guarded } from '@/lib/http/guard';
-import { keepToolFields, saveWorkedCalculation } from '@/lib/calculations/store';
+import { keepToolFields } from '@/lib/calculations/store';
+import { saveSiteCalculation } from '@/lib/sites/links';
 import { calculatorInputNames, computeFromForm } from '@/lib/calculators';
 import { unitPreferenceOf } from '@/lib/units/preference';
 
@@ -12,7 +13,8 @@ export const dynamic = 'force-dynamic';
 /**
  * POST /api/calculations — saves a worked calculation. The server recomputes the
  * result from the inputs with its own engine; a result sent by the browser is ignored,
- * and so is any input the calculator does not have.
+ * and so is any input the calculator does not have. With `siteId`, the calculation is
+ * linked to the caller's own site (checked in the same transaction as the save).
  */
 export async function POST(request: Request) {
   return guarded(
@@ -32,7 +34,7 @@ export async function POST(request: Request) {
           computed.field ? `inputs.${computed.field}` : undefined,
           'invalid_inputs',
         );
-      const saved = await saveWorkedCalculation({
+      const saved = await saveSiteCalculation(user, body.data.siteId, {
         tool,
         form,
         results: computed.output.results,

@@ -5,6 +5,9 @@ import 'katex/dist/katex.min.css';
 import { CALCULATOR_LIST, getCalculator } from '@/lib/calculators';
 import { CalculatorById } from '@/components/calculators/Calculators';
 import { Caution } from '@/components/Caution';
+import { SaveToSite } from '@/components/sites/SaveTarget';
+import { currentUserInPage } from '@/lib/auth/session';
+import { ownSiteForCalculator } from '@/lib/sites/links';
 
 type Params = Promise<{ tool: string }>;
 type SP = Promise<Record<string, string | string[] | undefined>>;
@@ -20,7 +23,15 @@ export default async function CalculatorPage({ params, searchParams }: { params:
   if (!entry) notFound();
   const sp = await searchParams;
   // The share link's inputs, as typed (with their units).
-  const props = Object.fromEntries(Object.entries(sp).filter((e): e is [string, string] => typeof e[1] === 'string'));
+  const props = Object.fromEntries(
+    Object.entries(sp).filter((e): e is [string, string] => typeof e[1] === 'string' && e[0] !== 'site'),
+  );
+  // opened from the reader's own site: what they save is linked to it
+  const site =
+    typeof sp.site === 'string' && /^[0-9A-Za-z]{6,16}$/.test(sp.site)
+      ? await ownSiteForCalculator(await currentUserInPage(), sp.site)
+      : null;
+  const card = <CalculatorById id={tool} props={props} />;
   return (
     <div className="flex flex-col gap-4">
       <nav aria-label="Breadcrumb" className="cw-muted text-sm" data-print-hide>
@@ -37,7 +48,16 @@ export default async function CalculatorPage({ params, searchParams }: { params:
         </Link>
         .
       </p>
-      <CalculatorById id={tool} props={props} />
+      {site ? (
+        <p className="cw-muted font-sans text-sm" data-testid="from-site">
+          Opened with the numbers of your site{' '}
+          <Link href={`/sites/${site.id}`} className="cw-link">
+            {site.name}
+          </Link>
+          ; a worked calculation you save here is listed on the site.
+        </p>
+      ) : null}
+      {site ? <SaveToSite site={{ id: site.id, name: site.name }}>{card}</SaveToSite> : card}
       <Caution title="Numbers for planning">
         These results come from standard formulas and typical values; real pumps, pipes and streams vary. Pressure and
         moving water can hurt people: follow local codes and ask a licensed plumber or engineer where it matters.

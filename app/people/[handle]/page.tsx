@@ -6,6 +6,10 @@ import { publicProfile } from '@/lib/accounts/profile';
 import type { Role } from '@/models/User';
 import { getCalculator } from '@/lib/calculators';
 import { formatDate, formatMonth } from '@/lib/dates';
+import { currentUserInPage } from '@/lib/auth/session';
+import { sitesOnProfile } from '@/lib/sites/links';
+import { VISIBILITY_WORDS } from '@/components/plan/words';
+import type { SiteVisibility } from '@/lib/vocabulary';
 
 export const dynamic = 'force-dynamic';
 
@@ -35,6 +39,7 @@ export default async function PersonPage({ params }: { params: Promise<{ handle:
   const found = await findPerson(handle);
   if (!found) notFound();
   const { person, calculations } = found;
+  const { own, sites } = await sitesOnProfile(await currentUserInPage(), person.id);
   const label = ROLE_LABEL[person.role as Role];
 
   return (
@@ -57,6 +62,36 @@ export default async function PersonPage({ params }: { params: Promise<{ handle:
         </p>
       </header>
       {person.bio ? <p className="cw-prose whitespace-pre-line">{person.bio}</p> : null}
+      {sites.length || own ? (
+        <section aria-labelledby="sites" className="flex flex-col gap-2" data-testid="person-sites">
+          <h2 id="sites" className="font-serif text-xl font-semibold">
+            {own ? 'Your sites' : 'Sites'}
+          </h2>
+          {sites.length === 0 ? (
+            <p className="cw-muted font-sans text-sm">
+              You have not saved a site yet.{' '}
+              <Link href="/plan" className="cw-link">
+                Plan a site
+              </Link>{' '}
+              and save it: it is listed here, private until you share it.
+            </p>
+          ) : (
+            <ul className="flex flex-col gap-2 font-sans">
+              {sites.map((s) => (
+                <li key={s.id} className="cw-card py-3">
+                  <Link href={`/sites/${s.id}`} className="cw-link font-semibold">
+                    {s.name}
+                  </Link>
+                  <p className="cw-muted text-sm">
+                    {own ? `${VISIBILITY_WORDS[s.visibility as SiteVisibility]} · ` : ''}changed{' '}
+                    {formatDate(s.updatedAt)}
+                  </p>
+                </li>
+              ))}
+            </ul>
+          )}
+        </section>
+      ) : null}
       <section aria-labelledby="calcs" className="flex flex-col gap-2">
         <h2 id="calcs" className="font-serif text-xl font-semibold">
           Worked calculations

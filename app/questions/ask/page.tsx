@@ -9,6 +9,7 @@ import { getEntry } from '@/lib/field-log/store';
 import { entrySiteSheet } from '@/lib/calculators/site-sheet';
 import { readUnitPreference } from '@/lib/units/server';
 import { idParam } from '@/lib/http/guard';
+import { askFromSite } from '@/lib/sites/links';
 
 export const metadata: Metadata = { title: 'Ask a question' };
 export const dynamic = 'force-dynamic';
@@ -25,6 +26,8 @@ export default async function AskQuestionPage({
 
   const fieldLogId = typeof sp.fieldLog === 'string' ? idParam(sp.fieldLog) : undefined;
   let fromFieldLog: { id: number; siteSheet: ReturnType<typeof entrySiteSheet> } | undefined;
+  let fromSite: NonNullable<Awaited<ReturnType<typeof askFromSite>>> | undefined;
+  const siteParam = typeof sp.site === 'string' && /^[0-9A-Za-z]{6,16}$/.test(sp.site) ? sp.site : undefined;
   let state: { kind: 'signed-out' } | { kind: 'refused' } | { kind: 'form'; tags: { slug: string; name: string }[] };
   const user = await currentUserInPage();
   if (!user) state = { kind: 'signed-out' };
@@ -35,6 +38,8 @@ export default async function AskQuestionPage({
     const entry = fieldLogId ? await getEntry(fieldLogId, user) : null;
     if (entry && !entry.hidden && !entry.deleted)
       fromFieldLog = { id: entry.id, siteSheet: entrySiteSheet(entry, await readUnitPreference()) };
+    // the asker's own site only: anyone else's opens the form without it
+    if (siteParam) fromSite = (await askFromSite(user, siteParam, await readUnitPreference())) ?? undefined;
   }
 
   const tag = one(sp.tag);
@@ -56,9 +61,21 @@ export default async function AskQuestionPage({
           ; the question will link to it.
         </p>
       ) : null}
+      {fromSite ? (
+        <p className="cw-muted max-w-prose font-sans text-sm" data-testid="from-site">
+          {fromFieldLog ? 'The question will be about your site ' : 'The site sheet is filled from your site '}
+          <Link href={`/sites/${fromSite.id}`} className="cw-link">
+            {fromSite.name}
+          </Link>
+          {fromFieldLog ? '.' : ', its newest plan; the question will link to it.'}
+        </p>
+      ) : null}
       {state.kind === 'signed-out' ? (
         <p className="cw-card max-w-prose font-sans">
-          <Link href="/sign-in?callbackUrl=/questions/ask" className="cw-link">
+          <Link
+            href={`/sign-in?callbackUrl=${encodeURIComponent(siteParam ? `/questions/ask?site=${siteParam}` : '/questions/ask')}`}
+            className="cw-link"
+          >
             Sign in to ask
           </Link>{' '}
           a question. Reading and the calculators need no account.
@@ -71,6 +88,7 @@ export default async function AskQuestionPage({
           defaultTag={tag && state.tags.some((t) => t.slug === tag) ? tag : undefined}
           guide={one(sp.guide)}
           fromFieldLog={fromFieldLog}
+          fromSite={fromSite}
         />
       )}
     </div>

@@ -6,6 +6,7 @@ import { SessionContext } from 'next-auth/react';
 import { can } from '@/lib/auth/policy';
 import { sendJson } from '@/components/forms/api';
 import { ENGINE_VERSION } from '@/lib/hydraulics';
+import { useSiteSaveTarget } from '@/components/sites/SaveTarget';
 
 /** At least 24 × 24 px to touch (WCAG 2.2, 2.5.8). */
 const TARGET = 'cw-link inline-flex min-h-6 items-center';
@@ -27,6 +28,7 @@ export function SaveCalculation({
   const session = useContext(SessionContext);
   const user = session?.data?.user;
   const [state, setState] = useState<{ url?: string; error?: string; busy?: boolean }>({});
+  const site = useSiteSaveTarget();
   const actor = user ? { id: Number(user.id), role: user.role as 'member' } : null;
   if (!can(actor, 'calculation.save')) {
     return (
@@ -59,11 +61,12 @@ export function SaveCalculation({
           const r = await sendJson<{ url: string }>('/api/calculations', 'POST', {
             tool,
             inputs: Object.fromEntries(inputs.entries()),
+            ...(site ? { siteId: site.id } : {}),
           });
           setState(r.ok ? { url: r.data.url } : { error: r.error.message });
         }}
       >
-        {label}
+        {site ? `${label} for ${site.name}` : label}
       </button>
       {state.error ? (
         <span role="alert" className="text-xs text-signal-700 dark:text-signal-300">

@@ -5,6 +5,7 @@ import { guarded } from '@/lib/http/guard';
 import { currentUser } from '@/lib/auth/session';
 import { loadSite, SiteError, updateSite } from '@/lib/sites/store';
 import { updateSiteSchema } from '@/lib/validation/site';
+import { siteThreadsChanged } from '@/lib/sites/links';
 
 export const dynamic = 'force-dynamic';
 type Ctx = { params: Promise<{ id: string }> };
@@ -36,6 +37,7 @@ export async function PATCH(request: Request, { params }: Ctx) {
     if ('response' in body) return body.response;
     try {
       await updateSite(user, id, body.data);
+      await siteThreadsChanged(id);
       return NextResponse.json({ id });
     } catch (err) {
       return refusal(err);
