@@ -11,6 +11,7 @@ import { can, type Actor } from '@/lib/auth/policy';
 import { ForumError } from '@/lib/questions/errors';
 import { parseNominalSize } from '@/lib/hydraulics';
 import { attachPhotos } from '@/lib/photos/store';
+import { SiteError, siteIdForLink } from '@/lib/sites/store';
 import type { FieldLogEntryData, FieldLogFilter } from '@/lib/validation/field-log';
 import { performance, readEntry, type EntryPerformance, type TrialSI } from './measure';
 import { deliveryRatio, plannerRatio, type Ratio } from './compare';
@@ -58,16 +59,28 @@ export function entryRows(authorId: number, v: FieldLogEntryData) {
   return { entry, trials: si.trials.map((x, i) => ({ position: i, volumeL: x.volumeL, seconds: x.seconds })) };
 }
 
-/** Writes one entry and its trials, in the given transaction or a new one. */
+/** The internal id of the member's own site a test is recorded on; a ForumError naming siteId otherwise. */
+async function siteOfEntry(user: Actor, publicId: string | undefined, t: Transaction): Promise<number | null> {
+  if (!publicId) return null;
+  try {
+    return await siteIdForLink(user, publicId, t);
+  } catch (err) {
+    if (err instanceof SiteError) throw new ForumError(err.status, `siteId: ${err.message}`, 'siteId');
+    throw err;
+  }
+}
+
+/** Writes one entry and its trials (and the site it is on, the member's own), in the given transaction or a new one. */
 export async function createEntry(
-  user: { id: number },
+  user: Actor,
   v: FieldLogEntryData,
   transaction?: Transaction,
 ): Promise<FieldLogEntry> {
   const rows = entryRows(user.id, v);
   const { FieldLogEntry, FieldLogTrial } = initModels();
   const work = async (t: Transaction) => {
-    const e = await FieldLogEntry.create(rows.entry, { transaction: t });
+    const siteId = await siteOfEntry(user, v.siteId, t);
+    const e = await FieldLogEntry.create({ ...rows.entry, siteId }, { transaction: t });
     await FieldLogTrial.bulkCreate(
       rows.trials.map((x) => ({ ...x, entryId: e.id })),
       { transaction: t },
