@@ -186,6 +186,21 @@ export async function getEntry(id: number, viewer: Actor | null): Promise<EntryV
   return e ? toView(e) : null;
 }
 
+/** The visible entries recorded on a site (by its internal id), as views, oldest test first. */
+export async function entriesOnSite(siteId: number, viewer: Actor | null): Promise<EntryView[]> {
+  const { FieldLogEntry } = initModels();
+  const rows = await FieldLogEntry.findAll({
+    where: { siteId, ...visibleWhere(viewer) },
+    include,
+    order: [
+      ['testedOn', 'ASC'],
+      ['id', 'ASC'],
+    ],
+    limit: 500,
+  });
+  return rows.map(toView);
+}
+
 /** Every visible entry matching the filter, as views (the chart needs them all; the table pages them). */
 export async function filteredEntries(
   filter: Pick<FieldLogFilter, 'pumpSize' | 'material'>,

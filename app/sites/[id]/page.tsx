@@ -9,6 +9,7 @@ import { SitePlanner } from '@/components/plan/SitePlanner';
 import { SiteSettings } from '@/components/plan/SiteSettings';
 import { VISIBILITY_WORDS } from '@/components/plan/words';
 import { Caution } from '@/components/Caution';
+import { SiteFieldLog } from '@/components/sites/SiteFieldLog';
 
 export const dynamic = 'force-dynamic';
 type Params = Promise<{ id: string }>;
@@ -80,6 +81,7 @@ export default async function SitePage({ params, searchParams }: { params: Param
         save={site.mine ? { kind: 'version', siteId: site.id } : { kind: 'new' }}
         key={site.current.version}
       />
+      <SiteFieldLog site={site} />
       <Caution title="A plan, not a permit">
         A ram’s pump side and delivery line hold pressure, and moving water can hurt people. Taking water from a stream
         may need a permit, and water for drinking must be tested and treated as your local rules say. Follow local codes
