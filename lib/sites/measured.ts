@@ -129,7 +129,7 @@ export function measureAgainstPlan(tests: readonly SiteTest[], versions: readonl
       const v = versionOn(versions, t.testedOn);
       const layout = v ? (layouts.get(v.version) ?? null) : null;
       const measured = trialSpread(t.trials);
-      const predictedM3s = layout ? predict(layout, t) : null;
+      const predictedM3s = layout ? predictedDelivery(layout, t) : null;
       return {
         id: t.id,
         testedOn: t.testedOn,
@@ -143,7 +143,11 @@ export function measureAgainstPlan(tests: readonly SiteTest[], versions: readonl
     });
 }
 
-function predict(layout: PlanLayout, t: SiteTest): number | null {
+/** What a plan's layout delivers, m³/s, at a test's fall, lift, drive flow (an equal share to each pump) and temperature; null when it cannot say. */
+export function predictedDelivery(
+  layout: PlanLayout,
+  t: Pick<SiteTest, 'fallM' | 'liftM' | 'driveFlowM3s' | 'waterTempC'>,
+): number | null {
   try {
     const q = layoutDelivery(
       { ...layout, fallM: t.fallM, liftM: t.liftM, waterTempC: t.waterTempC ?? layout.waterTempC },
