@@ -11,6 +11,7 @@ import {
   type SiteTest,
 } from '@/lib/sites/measured';
 import { planSite, toSI } from '@/lib/hydraulics';
+import { entryPrefill } from '@/lib/sites/prefill';
 
 /**
  * Issue 22: a site's field log tests measured against its plan over time, checked by
@@ -179,5 +180,26 @@ describe('a site’s tests against its plan (lib/sites/measured.ts)', () => {
     );
     // the plan's own figure, not a hand one: the comparison must agree with what the plan said
     expect((row!.predictedM3s! * 86400) / l.deliveredM3PerDay).toBeCloseTo(1, 6);
+  });
+
+  it('fills a new test from the plan in the reader’s units, so the member adds only the measurements', () => {
+    const us = entryPrefill('Cabin creek', planLayout(plan), 'US');
+    expect(us).toMatchObject({
+      siteName: 'Cabin creek',
+      pumpSize: '1',
+      pumpCount: '1',
+      arrangement: 'single',
+      driveSize: '1',
+      driveMaterial: 'pvc',
+      deliverySize: '1/2',
+      deliveryMaterial: 'hdpe',
+      // the survey's 4 ft and 29 ft back as written (0.3048 m/ft exact, NIST SP 811, 2008)
+      fall: '4 ft',
+      lift: '29 ft',
+    });
+    expect(us.deliveryLength).toMatch(/ ft$/);
+    // 1.2192 m as a tape gives it: 1.22 m (common practice, no source)
+    expect(entryPrefill('Cabin creek', planLayout(plan), 'metric').fall).toBe('1.22 m');
+    expect(entryPrefill('Cabin creek', null, 'metric')).toEqual({ siteName: 'Cabin creek' });
   });
 });
