@@ -1,6 +1,7 @@
 'use client';
 
 import { useState } from 'react';
+import Link from 'next/link';
 import { useRouter } from 'next/navigation';
 import { NOMINAL_LABELS, NOMINAL_SIZES } from '@/lib/hydraulics/pipes';
 import { PIPE_MATERIAL_CHOICES } from '@/lib/validation/field-log';
@@ -48,8 +49,17 @@ const BARE_VOLUME: Record<UnitSystem, { unit: string; words: string; example: st
 const toCelsius = (t: number | undefined, units: UnitSystem) =>
   t === undefined || units === 'metric' ? t : Math.round((((t - 32) * 5) / 9) * 10) / 10;
 
-/** Records one test: the installation, the drive flow and each bucket trial. */
-export function EntryForm() {
+/**
+ * Records one test: the installation, the drive flow and each bucket trial. Opened from
+ * a site, it records the test on that site, the installation filled in from its plan.
+ */
+export function EntryForm({
+  initial = {},
+  site,
+}: {
+  initial?: Record<string, string>;
+  site?: { id: string; name: string; version: number };
+} = {}) {
   const router = useRouter();
   const { units } = useUnits();
   const [v, setV] = useState<Record<string, string>>({
@@ -74,6 +84,7 @@ export function EntryForm() {
     wasteValveSetting: '',
     waterTempC: '',
     notes: '',
+    ...initial,
   });
   const [trials, setTrials] = useState<Trial[]>([{ volume: '', seconds: '' }]);
   const [photoIds, setPhotoIds] = useState<string[]>([]);
@@ -87,6 +98,7 @@ export function EntryForm() {
     ev.preventDefault();
     setBusy(true);
     const out = await sendJson<{ id: number; url: string }>('/api/field-log', 'POST', {
+      ...(site ? { siteId: site.id } : {}),
       siteName: v.siteName,
       testedOn: v.testedOn,
       pumpType: v.pumpType,
@@ -166,6 +178,17 @@ export function EntryForm() {
       className="flex max-w-3xl flex-col gap-5 font-sans"
       aria-label="Record a field log test"
     >
+      {site ? (
+        <p className="cw-card text-sm" data-testid="entry-site">
+          Recorded on your site{' '}
+          <Link href={`/sites/${site.id}`} className="cw-link font-semibold">
+            {site.name}
+          </Link>
+          . The pumps and pipes are filled in from its plan (version {site.version}): change anything built differently,
+          and set the fall and lift to the day’s if the water stands higher or lower.
+          <FieldError error={error} field="siteId" />
+        </p>
+      ) : null}
       <fieldset className="grid gap-4 sm:grid-cols-2">
         <legend className="mb-2 font-serif text-lg font-semibold">The test</legend>
         {text('siteName', 'Site name', 'the same name links tests of one installation')}

@@ -50,6 +50,37 @@ function pipe(lengthM: number, size: string, material: string) {
   return { lengthM, insideDiameterM: spec.insideDiameterM, material: mat, wallThicknessM: spec.wallThicknessM };
 }
 
+/** An installation as the array planner sees it: the pumps, their drive pipes and the shared delivery line. */
+export interface PumpLayout {
+  pumpType: PumpType;
+  pumpCount: number;
+  fallM: number;
+  liftM: number;
+  drivePipe: { lengthM: number; insideDiameterM: number; material: PipeMaterial; wallThicknessM?: number };
+  deliveryLine: { lengthM: number; insideDiameterM: number; material: PipeMaterial; wallThicknessM?: number };
+  waterTempC?: number | null;
+}
+
+/**
+ * The array planner's combined delivery, m³/s, for a layout whose pumps each take an
+ * equal share `perPumpDriveM3s` of the drive flow. Throws the engine's input error
+ * when the layout is outside its range.
+ */
+export function layoutDelivery(l: PumpLayout, perPumpDriveM3s: number): number {
+  const out = planArray({
+    fallM: l.fallM,
+    liftM: l.liftM,
+    pumps: Array.from({ length: l.pumpCount }, () => ({
+      pumpType: l.pumpType,
+      driveFlowM3s: perPumpDriveM3s,
+      drivePipe: l.drivePipe,
+    })),
+    deliveryLine: l.deliveryLine,
+    ...(l.waterTempC !== null && l.waterTempC !== undefined ? { waterTempC: l.waterTempC } : {}),
+  });
+  return out.results.combinedDeliveryM3s;
+}
+
 /**
  * The planner's combined delivery for an entry's pumps (each pump taking an equal
  * share of `perPumpDriveM3s`), or null when the planner does not apply (staged, or
@@ -57,19 +88,18 @@ function pipe(lengthM: number, size: string, material: string) {
  */
 function plannedDelivery(e: ComparableEntry, perPumpDriveM3s: number): number | null {
   if (e.arrangement === 'staged' || e.deliveryLengthM === null || !e.deliverySize || !e.deliveryMaterial) return null;
-  const drivePipe = pipe(e.driveLengthM, e.driveSize, e.driveMaterial);
-  const out = planArray({
-    fallM: e.fallM,
-    liftM: e.liftM,
-    pumps: Array.from({ length: e.pumpCount }, () => ({
+  return layoutDelivery(
+    {
       pumpType: e.pumpType,
-      driveFlowM3s: perPumpDriveM3s,
-      drivePipe,
-    })),
-    deliveryLine: pipe(e.deliveryLengthM, e.deliverySize, e.deliveryMaterial),
-    ...(e.waterTempC !== null ? { waterTempC: e.waterTempC } : {}),
-  });
-  return out.results.combinedDeliveryM3s;
+      pumpCount: e.pumpCount,
+      fallM: e.fallM,
+      liftM: e.liftM,
+      drivePipe: pipe(e.driveLengthM, e.driveSize, e.driveMaterial),
+      deliveryLine: pipe(e.deliveryLengthM, e.deliverySize, e.deliveryMaterial),
+      waterTempC: e.waterTempC,
+    },
+    perPumpDriveM3s,
+  );
 }
 
 /**

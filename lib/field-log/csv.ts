@@ -3,6 +3,7 @@
  * header names, one installation test a row; trials as `;`-separated lists.
  * Import is all-or-nothing unless the caller asks for the valid rows only.
  */
+import type { Actor } from '@/lib/auth/policy';
 import Papa from 'papaparse';
 import { getSequelize } from '@/lib/db';
 import { ForumError } from '@/lib/questions/errors';
@@ -227,7 +228,7 @@ export function parseCsv(text: string): { rows: Record<string, string>[] } {
  * and the bad ones listed as skipped.
  */
 export async function importCsv(
-  user: { id: number },
+  user: Actor,
   text: string,
   mode: 'all-or-nothing' | 'valid-only',
 ): Promise<ImportResult> {

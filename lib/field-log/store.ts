@@ -11,6 +11,7 @@ import { can, type Actor } from '@/lib/auth/policy';
 import { ForumError } from '@/lib/questions/errors';
 import { parseNominalSize } from '@/lib/hydraulics';
 import { attachPhotos } from '@/lib/photos/store';
+import { SiteError, siteIdForLink } from '@/lib/sites/store';
 import type { FieldLogEntryData, FieldLogFilter } from '@/lib/validation/field-log';
 import { performance, readEntry, type EntryPerformance, type TrialSI } from './measure';
 import { deliveryRatio, plannerRatio, type Ratio } from './compare';
@@ -58,16 +59,28 @@ export function entryRows(authorId: number, v: FieldLogEntryData) {
   return { entry, trials: si.trials.map((x, i) => ({ position: i, volumeL: x.volumeL, seconds: x.seconds })) };
 }
 
-/** Writes one entry and its trials, in the given transaction or a new one. */
+/** The internal id of the member's own site a test is recorded on; a ForumError naming siteId otherwise. */
+async function siteOfEntry(user: Actor, publicId: string | undefined, t: Transaction): Promise<number | null> {
+  if (!publicId) return null;
+  try {
+    return await siteIdForLink(user, publicId, t);
+  } catch (err) {
+    if (err instanceof SiteError) throw new ForumError(err.status, `siteId: ${err.message}`, 'siteId');
+    throw err;
+  }
+}
+
+/** Writes one entry and its trials (and the site it is on, the member's own), in the given transaction or a new one. */
 export async function createEntry(
-  user: { id: number },
+  user: Actor,
   v: FieldLogEntryData,
   transaction?: Transaction,
 ): Promise<FieldLogEntry> {
   const rows = entryRows(user.id, v);
   const { FieldLogEntry, FieldLogTrial } = initModels();
   const work = async (t: Transaction) => {
-    const e = await FieldLogEntry.create(rows.entry, { transaction: t });
+    const siteId = await siteOfEntry(user, v.siteId, t);
+    const e = await FieldLogEntry.create({ ...rows.entry, siteId }, { transaction: t });
     await FieldLogTrial.bulkCreate(
       rows.trials.map((x) => ({ ...x, entryId: e.id })),
       { transaction: t },
@@ -171,6 +184,21 @@ export async function getEntry(id: number, viewer: Actor | null): Promise<EntryV
   const { FieldLogEntry } = initModels();
   const e = await FieldLogEntry.findOne({ where: { id, ...visibleWhere(viewer) }, include });
   return e ? toView(e) : null;
+}
+
+/** The visible entries recorded on a site (by its internal id), as views, oldest test first. */
+export async function entriesOnSite(siteId: number, viewer: Actor | null): Promise<EntryView[]> {
+  const { FieldLogEntry } = initModels();
+  const rows = await FieldLogEntry.findAll({
+    where: { siteId, ...visibleWhere(viewer) },
+    include,
+    order: [
+      ['testedOn', 'ASC'],
+      ['id', 'ASC'],
+    ],
+    limit: 500,
+  });
+  return rows.map(toView);
 }
 
 /** Every visible entry matching the filter, as views (the chart needs them all; the table pages them). */

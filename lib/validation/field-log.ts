@@ -35,6 +35,12 @@ export const trialSchema = z.object({
 });
 
 export const fieldLogEntrySchema = z.object({
+  /** the member's own saved site this test is on (its address); checked against the owner on save */
+  siteId: z
+    .string({ error: 'siteId must be a site address' })
+    .trim()
+    .regex(/^[0-9A-Za-z]{6,16}$/, 'siteId must be a site address')
+    .optional(),
   siteName: z
     .string({ error: 'siteName is required' })
     .trim()

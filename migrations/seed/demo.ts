@@ -8,6 +8,7 @@ import { hashPassword } from '@/lib/auth/password';
 import { demoThreads } from './demo-forum-data';
 import { seedPhoto } from './demo-photos';
 import { seedFieldLog } from './demo-field-log';
+import { seedSites } from './demo-sites';
 import {
   DEMO_PASSWORD,
   demoMailChoices,
@@ -234,6 +235,7 @@ export async function seedDemo(sequelize: Sequelize, now = new Date()): Promise<
     }
 
     await seedFieldLog(initModels(sequelize), (handle) => must(userId, handle), now, transaction);
+    await seedSites(initModels(sequelize), (handle) => must(userId, handle), now, transaction);
   });
   return true;
 }

@@ -95,6 +95,9 @@ const PAGES: { path: string | ((ids: Ids) => string); name?: string; as: Role; p
   { path: (ids) => `/field-log/${ids.entry}`, name: 'a field log entry', as: 'visitor', phone: true },
   { path: (ids) => `/field-log/compare/${ids.compare}`, name: 'a field log comparison', as: 'visitor', phone: true },
   { path: '/field-log/new', as: 'member', phone: true },
+  // a public demo site with its field log tests against the plan, and the form filled from a site's plan
+  { path: '/sites/HcFarPaddock26', name: 'a public site with its tests', as: 'visitor', phone: true },
+  { path: '/field-log/new?site=FerncombeTop18', name: 'a test recorded on a site', as: 'member', phone: true },
   { path: '/field-log/import', as: 'member' },
   { path: '/people/ferncombe_tamsin', as: 'visitor' },
   { path: '/safety', as: 'visitor' },

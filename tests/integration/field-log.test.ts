@@ -14,6 +14,7 @@ import { getComparison, getEntry } from '@/lib/field-log/store';
 import { entrySiteSheet } from '@/lib/calculators/site-sheet';
 import { POST as ask } from '@/app/api/questions/route';
 import { demoFieldLog } from '@/migrations/seed/demo-field-log';
+import { demoSiteTestCount } from '@/migrations/seed/demo-sites';
 import { initModels } from '@/models';
 import { newPhotoId } from '@/lib/photos/storage';
 import { actAs } from '../support/act-as';
@@ -57,12 +58,12 @@ describe('field log API', () => {
   it('lists the demo entries with their engine view, paged and sortable', async () => {
     const res = await call(list, 'GET', '/api/field-log?perPage=100&sort=efficiency&dir=asc', null);
     expect(res.status).toBe(200);
-    expect(res.body.total).toBe(demoFieldLog().length);
+    expect(res.body.total).toBe(demoFieldLog().length + demoSiteTestCount());
     const etas: number[] = res.body.items.map((e: { performance: { dAubuisson: number } }) => e.performance.dAubuisson);
     expect(etas).toEqual([...etas].sort((a, b) => a - b));
     const page2 = await call(list, 'GET', '/api/field-log?perPage=10&page=2', null);
     expect(page2.body.items.length).toBe(10);
-    expect(page2.body.totalPages).toBe(Math.ceil(demoFieldLog().length / 10));
+    expect(page2.body.totalPages).toBe(Math.ceil((demoFieldLog().length + demoSiteTestCount()) / 10));
     const bad = await call(list, 'GET', '/api/field-log?material=bamboo', null);
     expect(bad.status).toBe(400);
     expect(bad.body.error.field).toBe('material');

@@ -7,6 +7,7 @@ import { seedDemo } from '@/migrations/seed/demo';
 import { demoQuestions, demoUsers } from '@/migrations/seed/demo-data';
 import { demoThreads } from '@/migrations/seed/demo-forum-data';
 import { demoFieldLog } from '@/migrations/seed/demo-field-log';
+import { demoSites, demoSiteTestCount } from '@/migrations/seed/demo-sites';
 import { initModels } from '@/models';
 import { assertTestDatabase } from '../support/reset';
 
@@ -45,8 +46,14 @@ describe('migrations round trip on the real MariaDB', () => {
     expect(await Question.count()).toBe(demoQuestions.length + demoThreads.length);
     expect(await Answer.count()).toBe([...demoQuestions, ...demoThreads].reduce((n, q) => n + q.answers.length, 0));
     const { FieldLogEntry, FieldLogTrial, FieldLogLink } = initModels(sequelize);
-    expect(await FieldLogEntry.count()).toBe(demoFieldLog().length);
-    expect(await FieldLogTrial.count()).toBe(demoFieldLog().reduce((n, e) => n + e.trials.length, 0));
+    // the demo sites' tests are field log entries too, three bucket trials each
+    expect(await FieldLogEntry.count()).toBe(demoFieldLog().length + demoSiteTestCount());
+    expect(await FieldLogTrial.count()).toBe(
+      demoFieldLog().reduce((n, e) => n + e.trials.length, 0) + 3 * demoSiteTestCount(),
+    );
+    const { Site, SiteVersion } = initModels(sequelize);
+    expect(await Site.count()).toBe(demoSites.length);
+    expect(await SiteVersion.count()).toBe(demoSites.reduce((n, s) => n + s.versions.length, 0));
     expect(await FieldLogLink.count()).toBe(1);
     const q = await Question.findOne({ where: { title: demoQuestions[0].title }, include: ['author', 'tags'] });
     expect(q?.author?.handle).toBe(demoQuestions[0].author);

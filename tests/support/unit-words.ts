@@ -1,5 +1,6 @@
 import { demoCalculations, demoQuestions } from '../../migrations/seed/demo-data';
 import { demoThreads } from '../../migrations/seed/demo-forum-data';
+import { demoSites } from '../../migrations/seed/demo-sites';
 import { demoFieldLog } from '../../migrations/seed/demo-field-log';
 
 /**
@@ -117,7 +118,7 @@ function memberStrings(): string[] {
     else if (v && typeof v === 'object' && key !== 'siteSheet' && key !== 'inputs')
       for (const [k, x] of Object.entries(v)) walk(x, k);
   };
-  walk([demoQuestions, demoThreads, demoCalculations, demoFieldLog()]);
+  walk([demoQuestions, demoThreads, demoCalculations, demoFieldLog(), demoSites]);
   return out;
 }
 const MEMBER_WORDS = memberStrings();

@@ -4,12 +4,38 @@ import { currentUserInPage } from '@/lib/auth/session';
 import { can, REFUSAL } from '@/lib/auth/policy';
 import { Caution } from '@/components/Caution';
 import { EntryForm } from '@/components/field-log/EntryForm';
+import { loadSite, SiteError } from '@/lib/sites/store';
+import { planLayout } from '@/lib/sites/measured';
+import { entryPrefill } from '@/lib/sites/prefill';
+import { readUnitPreference } from '@/lib/units/server';
+import type { Actor } from '@/lib/auth/policy';
 
 export const metadata: Metadata = { title: 'Record a test' };
 export const dynamic = 'force-dynamic';
 
-export default async function NewFieldLogEntryPage() {
+type SP = Promise<Record<string, string | string[] | undefined>>;
+
+/** The member's own site the test is for, with the form filled from its newest plan; why not, when it cannot be. */
+async function fromSite(user: Actor, id: string) {
+  try {
+    const site = await loadSite(user, id);
+    if (!site.mine) return { refused: 'Tests go only on your own sites; this one is recorded without a site.' };
+    const units = await readUnitPreference();
+    return {
+      site: { id: site.id, name: site.name, version: site.current.version },
+      initial: entryPrefill(site.name, planLayout(site.current.plan), units),
+    };
+  } catch (err) {
+    if (err instanceof SiteError && err.status === 404)
+      return { refused: 'No such site of yours; this test is recorded without a site.' };
+    throw err;
+  }
+}
+
+export default async function NewFieldLogEntryPage({ searchParams }: { searchParams: SP }) {
   const user = await currentUserInPage();
+  const siteParam = (await searchParams).site;
+  const siteId = typeof siteParam === 'string' && siteParam ? siteParam : undefined;
   const state: 'signed-out' | 'refused' | 'form' = !user
     ? 'signed-out'
     : can(user, 'fieldLog.create')
@@ -28,7 +54,10 @@ export default async function NewFieldLogEntryPage() {
       </Caution>
       {state === 'signed-out' ? (
         <p className="cw-card max-w-prose font-sans">
-          <Link href="/sign-in?callbackUrl=/field-log/new" className="cw-link">
+          <Link
+            href={`/sign-in?callbackUrl=${encodeURIComponent(siteId ? `/field-log/new?site=${siteId}` : '/field-log/new')}`}
+            className="cw-link"
+          >
             Sign in to record a test
           </Link>
           ; reading the field log needs no account.
@@ -36,8 +65,20 @@ export default async function NewFieldLogEntryPage() {
       ) : state === 'refused' ? (
         <p className="cw-card max-w-prose font-sans">{REFUSAL['fieldLog.create']}</p>
       ) : (
-        <EntryForm />
+        <SiteEntryForm user={user!} siteId={siteId} />
       )}
     </div>
   );
+}
+
+async function SiteEntryForm({ user, siteId }: { user: Actor; siteId?: string }) {
+  const linked = siteId ? await fromSite(user, siteId) : null;
+  if (!linked || 'refused' in linked)
+    return (
+      <>
+        {linked ? <p className="cw-card max-w-prose font-sans text-sm">{linked.refused}</p> : null}
+        <EntryForm />
+      </>
+    );
+  return <EntryForm initial={linked.initial} site={linked.site} />;
 }

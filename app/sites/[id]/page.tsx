@@ -10,6 +10,7 @@ import { SiteSettings } from '@/components/plan/SiteSettings';
 import { VISIBILITY_WORDS } from '@/components/plan/words';
 import { Caution } from '@/components/Caution';
 import { SiteQuestions } from '@/components/sites/SiteQuestions';
+import { SiteFieldLog } from '@/components/sites/SiteFieldLog';
 
 export const dynamic = 'force-dynamic';
 type Params = Promise<{ id: string }>;
@@ -81,6 +82,7 @@ export default async function SitePage({ params, searchParams }: { params: Param
         save={site.mine ? { kind: 'version', siteId: site.id } : { kind: 'new' }}
         key={site.current.version}
       />
+      <SiteFieldLog site={site} />
       <SiteQuestions site={site} />
       <Caution title="A plan, not a permit">
         A ram’s pump side and delivery line hold pressure, and moving water can hurt people. Taking water from a stream
