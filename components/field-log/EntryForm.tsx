@@ -1,6 +1,6 @@
 'use client';
 
-import { useState } from 'react';
+import { useRef, useState } from 'react';
 import Link from 'next/link';
 import { useRouter } from 'next/navigation';
 import { NOMINAL_LABELS, NOMINAL_SIZES } from '@/lib/hydraulics/pipes';
@@ -8,6 +8,8 @@ import { PIPE_MATERIAL_CHOICES } from '@/lib/validation/field-log';
 import { PUMP_TYPES } from '@/lib/vocabulary';
 import { FieldError, inputClass, labelClass, sendJson, type FormError } from '@/components/forms/api';
 import { PhotoPicker } from '@/components/photos/PhotoPicker';
+import { OutboxPanel } from '@/components/field-kit/OutboxPanel';
+import { enqueue } from '@/lib/offline/outbox';
 import { MATERIAL_LABELS } from './format';
 import { isoDay } from '@/lib/dates';
 import { useUnits } from '@/components/units/UnitsProvider';
@@ -90,6 +92,8 @@ export function EntryForm({
   const [photoIds, setPhotoIds] = useState<string[]>([]);
   const [error, setError] = useState<FormError | null>(null);
   const [busy, setBusy] = useState(false);
+  const [kept, setKept] = useState(false);
+  const sendKey = useRef<string | null>(null);
   const set = (k: string) => (e: { target: { value: string } }) => setV((o) => ({ ...o, [k]: e.target.value }));
   const num = (s: string) => (s.trim() === '' ? undefined : Number(s));
   const opt = (s: string) => (s.trim() === '' ? undefined : s);
@@ -97,7 +101,7 @@ export function EntryForm({
   async function submit(ev: React.FormEvent) {
     ev.preventDefault();
     setBusy(true);
-    const out = await sendJson<{ id: number; url: string }>('/api/field-log', 'POST', {
+    const body = {
       ...(site ? { siteId: site.id } : {}),
       siteName: v.siteName,
       testedOn: v.testedOn,
@@ -125,11 +129,43 @@ export function EntryForm({
       waterTempC: toCelsius(num(v.waterTempC), units),
       notes: v.notes,
       photoIds,
-    });
+    };
+    // one key for this record, however many times it is sent, so a send cut off after
+    // the server wrote it and sent again from the phone's outbox is still one entry
+    const key = (sendKey.current ??= crypto.randomUUID());
+    const out = navigator.onLine
+      ? await sendJson<{ id: number; url: string }>('/api/field-log', 'POST', body, {
+          headers: { 'Idempotency-Key': key },
+        })
+      : null;
     setBusy(false);
-    if (out.ok) router.push(out.data.url);
-    else setError(out.error);
+    if (out?.ok) return router.push(out.data.url);
+    if (out && out.status !== 0) return setError(out.error);
+    // no signal (or the server out of reach): kept on the phone, sent when it comes back
+    await enqueue({
+      id: key,
+      kind: 'field-log',
+      url: '/api/field-log',
+      body,
+      label: `Field log: ${v.siteName || 'a test'}, ${v.testedOn}`,
+    });
+    sendKey.current = null;
+    setKept(true);
   }
+
+  if (kept)
+    return (
+      <div className="flex max-w-3xl flex-col gap-4 font-sans" data-testid="entry-kept">
+        <p className="cw-card" role="status">
+          No signal: the test is kept on this phone and will be sent when it is back online. Keep this page or the{' '}
+          <Link href="/field-kit" className="cw-link">
+            field kit
+          </Link>{' '}
+          open, or tap “Send now” below.
+        </p>
+        <OutboxPanel />
+      </div>
+    );
 
   const text = (name: string, label: string, hint?: string, type = 'text') => (
     <div>

@@ -28,16 +28,17 @@ export async function sendJson<T = unknown>(
   url: string,
   method: Method,
   body?: unknown,
-  init: { signal?: AbortSignal } = {},
+  init: { signal?: AbortSignal; headers?: Record<string, string> } = {},
 ): Promise<Sent<T>> {
   let res: Response;
   try {
     res = await fetch(url, {
       method,
-      headers:
-        body === undefined
-          ? { accept: 'application/json' }
-          : { accept: 'application/json', 'content-type': 'application/json' },
+      headers: {
+        accept: 'application/json',
+        ...(body === undefined ? {} : { 'content-type': 'application/json' }),
+        ...init.headers,
+      },
       body: body === undefined ? undefined : JSON.stringify(body),
       signal: init.signal,
     });

@@ -48,12 +48,22 @@ export function closeOutbox() {
   opened = null;
 }
 
-/** Puts a record in the outbox; it is sent by the next {@link flush}. */
+/**
+ * Puts a record in the outbox; it is sent by the next {@link flush}. A form that already
+ * tried to send it passes the key it tried with, so a send that reached the server before
+ * the signal went is not written twice.
+ */
 export async function enqueue(
-  record: Pick<OutboxRecord, 'kind' | 'url' | 'body' | 'label'>,
+  record: Pick<OutboxRecord, 'kind' | 'url' | 'body' | 'label'> & { id?: string },
   now = Date.now(),
 ): Promise<OutboxRecord> {
-  const full: OutboxRecord = { ...record, id: crypto.randomUUID(), createdAt: now, state: 'waiting', attempts: 0 };
+  const full: OutboxRecord = {
+    ...record,
+    id: record.id ?? crypto.randomUUID(),
+    createdAt: now,
+    state: 'waiting',
+    attempts: 0,
+  };
   await (await db()).put('records', full);
   return full;
 }
