@@ -15,7 +15,7 @@ import { Warnings } from '@/components/calculators/kit/Warnings';
 import { useFormState } from '@/components/calculators/kit/useFormState';
 import { PartsList } from './PartsList';
 import { SaveSite, type SaveTarget } from './SaveSite';
-import { MonthlyTable } from './MonthlyTable';
+import { MonthlyChart } from './MonthlyChart';
 
 const GROUP_TITLES: Record<keyof typeof SURVEY_GROUPS, string> = {
   ground: '1. The ground',
@@ -187,7 +187,7 @@ function Plan({
         </div>
       </section>
 
-      {r.monthly ? <MonthlyTable monthly={r.monthly} /> : null}
+      {r.monthly ? <MonthlyChart monthly={r.monthly} /> : null}
 
       <PartsList rows={rows} />
 
