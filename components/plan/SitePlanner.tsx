@@ -16,6 +16,7 @@ import { useFormState } from '@/components/calculators/kit/useFormState';
 import { PartsList } from './PartsList';
 import { SaveSite, type SaveTarget } from './SaveSite';
 import { MonthlyChart } from './MonthlyChart';
+import { PlanSketch } from './PlanSketch';
 
 const GROUP_TITLES: Record<keyof typeof SURVEY_GROUPS, string> = {
   ground: '1. The ground',
@@ -153,6 +154,8 @@ function Plan({
           <Warnings warnings={output.warnings} />
         </section>
       ) : null}
+
+      <PlanSketch results={r} />
 
       <section aria-labelledby="plan-design" className="flex flex-col gap-3 font-sans">
         <h2 id="plan-design" className="font-serif text-xl font-semibold">
