@@ -10,6 +10,7 @@ import { TONES } from '@/components/charts/tones';
 import { useWidth } from '@/components/charts/useWidth';
 import { useUnits } from '@/components/units/UnitsProvider';
 import { MonthlyTable } from './MonthlyTable';
+import { usePrinting } from './usePrinting';
 
 // the charts' type size and line step (components/charts/XYChart), kept here so the plan
 // does not load the curve chart for two numbers
@@ -20,9 +21,10 @@ const BAR = TONES.tableA;
 const NEED = TONES.curve;
 
 /** Delivery against demand month by month, when the reader gave a wet and a dry flow. */
-export function MonthlyChart({ monthly }: { monthly: MonthlyDelivery }) {
+export function MonthlyChart({ monthly, printWidth }: { monthly: MonthlyDelivery; printWidth: number }) {
   const { units } = useUnits();
-  const [ref, width] = useWidth<HTMLDivElement>();
+  const [ref, measured] = useWidth<HTMLDivElement>();
+  const width = usePrinting() ? printWidth : measured;
   const [active, setActive] = useState<number | null>(null);
   const hatch = `hatch-${useId().replace(/[^\w-]/g, '')}`;
   const l = monthChartLayout(monthly, units, width, { font: FONT, line: LINE });

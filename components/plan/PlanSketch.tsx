@@ -7,6 +7,7 @@ import { layoutSketch, type Box, type Point } from '@/lib/plan/sketchLayout';
 import { useWidth } from '@/components/charts/useWidth';
 import { AREA, LINE, TEXT } from '@/components/drawing-colours';
 import { useUnits } from '@/components/units/UnitsProvider';
+import { usePrinting } from './usePrinting';
 
 const FONT = 12;
 const STEP = 15;
@@ -20,9 +21,10 @@ const rect = ([x, y, width, height]: Box) => ({ x, y, width, height });
  * the fall, the pumps, the delivery line up the lift, the tank, each part labelled with
  * its numbers in the reader's units. Not to scale; laid out afresh at the card's width.
  */
-export function PlanSketch({ results }: { results: SitePlanResults }) {
+export function PlanSketch({ results, printWidth }: { results: SitePlanResults; printWidth: number }) {
   const { units } = useUnits();
-  const [ref, width] = useWidth<HTMLDivElement>();
+  const [ref, measured] = useWidth<HTMLDivElement>();
+  const width = usePrinting() ? printWidth : measured;
   const options = sketchOptions(results);
   const texts = sketchTexts(results, units);
   // laying the labels out takes a few milliseconds; most keystrokes change none of them

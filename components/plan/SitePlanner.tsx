@@ -18,6 +18,10 @@ import { SaveSite, type SaveTarget } from './SaveSite';
 import { MonthlyChart } from './MonthlyChart';
 import { PlanSketch } from './PlanSketch';
 
+/** The drawings' widths on paper, px: a Letter or A4 page's text column holds two of 330 side by side. */
+const PRINT_HALF = 330;
+const PRINT_WHOLE = 560;
+
 const GROUP_TITLES: Record<keyof typeof SURVEY_GROUPS, string> = {
   ground: '1. The ground',
   water: '2. The water you can take',
@@ -155,7 +159,11 @@ function Plan({
         </section>
       ) : null}
 
-      <PlanSketch results={r} />
+      {/* on paper the sketch and the months stand side by side, each drawn for half the page */}
+      <div className={`grid gap-5 ${r.monthly ? 'print:grid-cols-2 print:gap-2' : ''}`}>
+        <PlanSketch results={r} printWidth={r.monthly ? PRINT_HALF : PRINT_WHOLE} />
+        {r.monthly ? <MonthlyChart monthly={r.monthly} printWidth={PRINT_HALF} /> : null}
+      </div>
 
       <section aria-labelledby="plan-design" className="flex flex-col gap-3 font-sans">
         <h2 id="plan-design" className="font-serif text-xl font-semibold">
@@ -189,8 +197,6 @@ function Plan({
           ))}
         </div>
       </section>
-
-      {r.monthly ? <MonthlyChart monthly={r.monthly} /> : null}
 
       <PartsList rows={rows} />
 
