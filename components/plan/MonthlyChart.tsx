@@ -133,7 +133,8 @@ export function MonthlyChart({ monthly, printWidth }: { monthly: MonthlyDelivery
                   width={b.width}
                   height={Math.max(1, b.height)}
                   fill={b.short ? `url(#${hatch})` : undefined}
-                  className={b.short ? `${BAR.stroke} ${TONES.card.fill}` : BAR.fill}
+                  // a fill class would override the hatch's fill attribute
+                  className={b.short ? BAR.stroke : BAR.fill}
                   strokeWidth={b.short ? 1.5 : 0}
                 />
                 {active === b.month ? (
@@ -208,7 +209,11 @@ export function MonthlyChart({ monthly, printWidth }: { monthly: MonthlyDelivery
           </li>
         </ul>
         <figcaption className="text-sm" data-testid="plan-months-summary">
-          {short.length ? `Short of the need in ${listWords(short)}.` : 'Enough for the need in every month.'}
+          {short.length === l.bars.length
+            ? 'Short of the need in every month.'
+            : short.length
+              ? `Short of the need in ${listWords(short)}.`
+              : 'Enough for the need in every month.'}
           <ChartTable
             data={{
               caption: title,

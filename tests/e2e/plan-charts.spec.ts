@@ -86,6 +86,24 @@ for (const units of ['US', 'metric'] as const) {
   });
 }
 
+test('months short of the need are hatched and named, not told by colour alone', async ({ page, baseURL }) => {
+  await page.context().addCookies([{ name: 'cw_units', value: 'US', url: baseURL! }]);
+  // 3.5 US gal/min in the driest month for three people (invented): only August, the driest, is short
+  await page.goto(`/plan?${new URLSearchParams({ wetFlow: '25 gal/min', spareFlow: '3.5 gal/min', people: '3' })}`);
+  await settled(page);
+  const chart = page.getByTestId('plan-months-chart');
+  const short = chart.locator('[data-month="8"]');
+  await expect(short).toHaveAttribute('data-short', 'true');
+  // the bar is filled with the hatch pattern, not a flat colour
+  const fill = await short
+    .locator('rect')
+    .nth(1)
+    .evaluate((r) => getComputedStyle(r).fill);
+  expect(fill).toMatch(/^url\(/);
+  await expect(short.locator('[data-tick="x"]')).toHaveAttribute('font-weight', '700');
+  await expect(chart.getByTestId('plan-months-summary')).toHaveText(/^Short of the need in August\./);
+});
+
 test('the printed plan carries the sketch and the month chart, no controls, on at most three pages', async ({
   page,
   baseURL,
