@@ -15,7 +15,12 @@ import { Warnings } from '@/components/calculators/kit/Warnings';
 import { useFormState } from '@/components/calculators/kit/useFormState';
 import { PartsList } from './PartsList';
 import { SaveSite, type SaveTarget } from './SaveSite';
-import { MonthlyTable } from './MonthlyTable';
+import { MonthlyChart } from './MonthlyChart';
+import { PlanSketch } from './PlanSketch';
+
+/** The drawings' widths on paper, px: a Letter or A4 page's text column holds two of 330 side by side. */
+const PRINT_HALF = 330;
+const PRINT_WHOLE = 560;
 
 const GROUP_TITLES: Record<keyof typeof SURVEY_GROUPS, string> = {
   ground: '1. The ground',
@@ -154,6 +159,12 @@ function Plan({
         </section>
       ) : null}
 
+      {/* on paper the sketch and the months stand side by side, each drawn for half the page */}
+      <div className={`grid gap-5 ${r.monthly ? 'print:grid-cols-2 print:gap-2' : ''}`}>
+        <PlanSketch results={r} printWidth={r.monthly ? PRINT_HALF : PRINT_WHOLE} />
+        {r.monthly ? <MonthlyChart monthly={r.monthly} printWidth={PRINT_HALF} /> : null}
+      </div>
+
       <section aria-labelledby="plan-design" className="flex flex-col gap-3 font-sans">
         <h2 id="plan-design" className="font-serif text-xl font-semibold">
           The design
@@ -186,8 +197,6 @@ function Plan({
           ))}
         </div>
       </section>
-
-      {r.monthly ? <MonthlyTable monthly={r.monthly} /> : null}
 
       <PartsList rows={rows} />
 
