@@ -16,6 +16,8 @@ const securityHeaders = [
 const nextConfig = {
   reactStrictMode: true,
   poweredByHeader: false,
+  // ANALYZE=1 writes browser source maps, so bench/chunk-sources.ts can say what each chunk holds
+  productionBrowserSourceMaps: process.env.ANALYZE === '1',
   // Sequelize loads its dialect at run time; keep it and the driver out of the bundle.
   // The e-mail renderer uses react-dom/server, which the server-component bundle refuses.
   serverExternalPackages: [

@@ -1,10 +1,11 @@
 /**
  * First-load JavaScript of a guide page, gzipped.
- *   npx next build && npx next start -p 3000 &   then
+ *   npx next build && node scripts/server.mjs -p 3000 &   then
  *   npx tsx bench/guide-first-load.ts http://localhost:3000/guides/the-delivery-line [--files]
  * "First load" is what Next counts: the scripts the page's HTML names (script tags and
- * script preloads). Charts load after hydration and KaTeX on "show the working"; the
- * bench reports those separately, as a browser fetches them.
+ * script preloads). The live calculator cards (engine, zod, charts) load after hydration
+ * and KaTeX on "show the working"; the bench reports those separately, as a browser
+ * fetches them. Target (issue 23): 150 kB or less. What each chunk holds: bench/chunk-sources.ts.
  */
 import { gzipSync } from 'node:zlib';
 import { chromium } from '@playwright/test';
@@ -53,7 +54,9 @@ async function main() {
   const kb = (n: number) => (n / 1024).toFixed(1);
   console.log(`${url} (${calculators} calculators)`);
   console.log(`first-load JS (scripts the HTML names): ${kb(first)} kB gzipped in ${named.size} files`);
-  console.log(`loaded after hydration (charts): ${kb(await sum(afterIdle))} kB gzipped in ${afterIdle.length} files`);
+  console.log(
+    `loaded after hydration (the live cards: engine, zod, charts): ${kb(await sum(afterIdle))} kB gzipped in ${afterIdle.length} files`,
+  );
   console.log(
     `loaded on "show the working" (KaTeX): ${kb(await sum(onWorking))} kB gzipped in ${onWorking.length} files`,
   );

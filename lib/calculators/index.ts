@@ -27,7 +27,6 @@ export {
 } from './registry';
 export {
   computeForm,
-  computeFromForm,
   issueMessage,
   recompute,
   resultsDiffer,
@@ -35,6 +34,7 @@ export {
   type FormOutcome,
   type Recomputed,
 } from './recompute';
+export { computeFromForm } from './from-form';
 export { convertState, hasOwnUnit, initialState, readForm, shareQuery, splitTyped, type OpenIn } from './state';
 export { displayQuantity, formatMessage, formatNumber, formatQuantity, inputNumber, readableQuantity } from './format';
 export { SERIES_LABELS, seriesOptions, sizeOptions } from './pipes';

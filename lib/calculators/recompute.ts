@@ -4,7 +4,6 @@ import type { CalcOutput, UnitSystem } from '@/lib/hydraulics';
 import type { FieldIssue } from '@/lib/hydraulics';
 import { formatQuantity } from './format';
 import { DEFAULT_UNITS } from '@/lib/units/preference';
-import { getCalculator } from './registry';
 import { initialState, readForm } from './state';
 import type { CalculatorDef, FormState } from './types';
 
@@ -87,13 +86,6 @@ export function recompute<R>(
     }
     throw err;
   }
-}
-
-/** {@link recompute} by the calculator's id, as stored or sent (an unknown id is refused naming `tool`). */
-export function computeFromForm(tool: string, form: Record<string, string>, units?: UnitSystem): Recomputed {
-  const def = getCalculator(tool);
-  if (!def) return { ok: false, field: 'tool', message: `no calculator called ${tool}` };
-  return recompute(def, form, units);
 }
 
 /** Whether two results differ beyond rounding (relative 1e-9), ignoring key order. */

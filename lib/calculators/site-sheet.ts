@@ -21,7 +21,7 @@ import type { SiteSheetField } from '@/lib/validation/question';
 import { formatQuantity } from './format';
 import type { CalculatorId } from './ids';
 import { SERIES_LABELS } from './pipes';
-import { computeFromForm } from './recompute';
+import { computeFromForm } from './from-form';
 import { CALCULATORS } from './registry';
 import { initialState, readForm } from './state';
 

@@ -19,8 +19,11 @@ function resolveSpecifier(root: string, from: string, spec: string): string | nu
   return base; // a stylesheet or another non-TypeScript file
 }
 
-/** The module specifiers a file imports; with `types`, type-only imports too. */
-export function importsOf(file: string, { types = false } = {}): string[] {
+/**
+ * The module specifiers a file imports; with `types`, type-only imports too; without
+ * `dynamic`, not import() (what a bundler leaves to a chunk fetched later).
+ */
+export function importsOf(file: string, { types = false, dynamic = true } = {}): string[] {
   const src = ts.createSourceFile(file, readFileSync(file, 'utf8'), ts.ScriptTarget.Latest, true);
   const out: string[] = [];
   const visit = (n: ts.Node) => {
@@ -34,7 +37,7 @@ export function importsOf(file: string, { types = false } = {}): string[] {
       const named = n.exportClause && ts.isNamedExports(n.exportClause) ? n.exportClause.elements : undefined;
       const typeOnly = n.isTypeOnly || (!!named && named.length > 0 && named.every((e) => e.isTypeOnly));
       if (types || !typeOnly) out.push((n.moduleSpecifier as ts.StringLiteral).text);
-    } else if (ts.isCallExpression(n) && n.expression.kind === ts.SyntaxKind.ImportKeyword) {
+    } else if (dynamic && ts.isCallExpression(n) && n.expression.kind === ts.SyntaxKind.ImportKeyword) {
       const arg = n.arguments[0];
       if (arg && ts.isStringLiteral(arg)) out.push(arg.text);
     }
@@ -49,8 +52,11 @@ const packageName = (spec: string) =>
 
 const USE_CLIENT = /^\s*(?:(?:\/\/[^\n]*\n|\/\*[\s\S]*?\*\/)\s*)*['"]use client['"]/;
 
-/** Everything a module pulls in at run time: project files (relative to `root`), packages, and the client modules among the files. */
-export function importClosure(root: string, entry: string) {
+/**
+ * Everything a module pulls in at run time: project files (relative to `root`), packages, and
+ * the client modules among the files. `dynamic: false` leaves out what import() fetches later.
+ */
+export function importClosure(root: string, entry: string, { dynamic = true } = {}) {
   const files = new Set<string>();
   const packages = new Set<string>();
   const stack = [path.resolve(root, entry)];
@@ -59,7 +65,7 @@ export function importClosure(root: string, entry: string) {
     if (files.has(f)) continue;
     files.add(f);
     if (!/\.(ts|tsx)$/.test(f)) continue;
-    for (const spec of importsOf(f)) {
+    for (const spec of importsOf(f, { dynamic })) {
       const r = resolveSpecifier(root, f, spec);
       if (r) stack.push(r);
       else packages.add(packageName(spec));

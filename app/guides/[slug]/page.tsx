@@ -6,6 +6,7 @@ import { listGuides, neighbours, readGuideFile } from '@/lib/guides/content';
 import { renderGuide } from '@/components/guides/GuideBody';
 import { LevelBadge } from '@/components/guides/LevelBadge';
 import { SafetyCheckStatusLazy as SafetyCheckStatus } from '@/components/guides/SafetyCheckStatusLazy';
+import { PreloadReadingFont } from '@/components/guides/PreloadReadingFont';
 import { formatDate } from '@/lib/dates';
 
 export const dynamicParams = false;
@@ -29,6 +30,7 @@ export default async function GuidePage({ params }: { params: Promise<{ slug: st
 
   return (
     <article className="guide flex flex-col gap-5" data-guide={slug}>
+      <PreloadReadingFont />
       <header className="flex flex-col gap-2">
         <nav aria-label="Breadcrumb" data-print-hide className="cw-muted text-sm">
           <Link href="/guides" className="cw-link">

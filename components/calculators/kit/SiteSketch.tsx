@@ -1,4 +1,6 @@
-import { formatQuantity, readForm, type FieldDef, type FormState } from '@/lib/calculators';
+import { formatQuantity } from '@/lib/calculators/format';
+import { readForm } from '@/lib/calculators/state';
+import type { FieldDef, FormState } from '@/lib/calculators/types';
 import type { UnitSystem } from '@/lib/hydraulics';
 import { useUnits } from '@/components/units/UnitsProvider';
 import { AREA, LINE, TEXT } from '@/components/drawing-colours';

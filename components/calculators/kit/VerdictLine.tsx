@@ -1,4 +1,4 @@
-import { BEYOND_RANGE_WORDS, VERDICT_WORDS, type Verdict, type VerdictLevel } from '@/lib/calculators';
+import { BEYOND_RANGE_WORDS, VERDICT_WORDS, type Verdict, type VerdictLevel } from '@/lib/calculators/verdict';
 
 /**
  * Each level in its own colour and symbol, so the words and the colour both say

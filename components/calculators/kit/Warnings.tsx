@@ -1,7 +1,7 @@
 'use client';
 
 import type { Warning } from '@/lib/hydraulics';
-import { formatMessage } from '@/lib/calculators';
+import { formatMessage } from '@/lib/calculators/format';
 import { useUnits } from '@/components/units/UnitsProvider';
 
 /** The engine's warnings in the reader's units, each with the guide that says more. */

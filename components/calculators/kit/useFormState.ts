@@ -1,14 +1,9 @@
 'use client';
 
 import { useEffect, useMemo, useRef, useState } from 'react';
-import {
-  computeForm,
-  convertState,
-  initialState,
-  type CalculatorDef,
-  type FormState,
-  type OpenIn,
-} from '@/lib/calculators';
+import { computeForm } from '@/lib/calculators/recompute';
+import { convertState, initialState, type OpenIn } from '@/lib/calculators/state';
+import type { CalculatorDef, FormState } from '@/lib/calculators/types';
 import { useUnits } from '@/components/units/UnitsProvider';
 
 /**

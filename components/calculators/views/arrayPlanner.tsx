@@ -1,5 +1,5 @@
 import type { ArrayPlannerResults } from '@/lib/hydraulics';
-import { displayQuantity } from '@/lib/calculators';
+import { displayQuantity } from '@/lib/calculators/format';
 import { EfficiencySources, pumpTypeOf } from '../kit/EfficiencySources';
 import type { CalculatorView } from './types';
 

@@ -1,5 +1,5 @@
 import type { DeliveryLineResults } from '@/lib/hydraulics';
-import { lossAgainstFlow } from '@/lib/calculators';
+import { lossAgainstFlow } from '@/lib/calculators/defs/deliveryLine';
 import { chartUnit, LineChartCard } from '../charts';
 import type { CalculatorView } from './types';
 

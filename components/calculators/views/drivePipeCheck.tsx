@@ -1,5 +1,5 @@
 import type { DrivePipeCheckResults } from '@/lib/hydraulics';
-import { surgeByMaterial } from '@/lib/calculators';
+import { surgeByMaterial } from '@/lib/calculators/defs/drivePipeCheck';
 import { BarChartCard, chartUnit } from '../charts';
 import type { CalculatorView } from './types';
 

@@ -1,5 +1,6 @@
 import type { StallCheckResults } from '@/lib/hydraulics';
-import { causeStrength, formatMessage } from '@/lib/calculators';
+import { formatMessage } from '@/lib/calculators/format';
+import { causeStrength } from '@/lib/calculators/verdict';
 import { RelatedThreads } from '@/components/search/RelatedThreads';
 import type { CalculatorView } from './types';
 
