@@ -107,12 +107,14 @@ async function visibleBlocks(page: Page): Promise<{ blocks: string[]; quoted: st
 async function check(page: Page, where: string, system: System, found: string[]) {
   await settled(page);
   await page.waitForLoadState('networkidle');
-  // A static guide is drawn on the server in the default units and its calculators follow the
-  // reader's once React has taken them over: read the page as it settles, not the flash before.
-  await page.waitForFunction(() =>
-    [...document.querySelectorAll('header[data-site-header] button, [data-calculator]')].every((el) =>
-      Object.keys(el).some((k) => k.startsWith('__reactFiber')),
-    ),
+  // A guide's calculators are shells in its HTML and live cards once React has fetched them:
+  // read the page when every card is live and hydrated, not the first paint before it.
+  await page.waitForFunction(
+    () =>
+      !document.querySelector('[data-calculator-shell]') &&
+      [...document.querySelectorAll('header[data-site-header] button, [data-calculator]')].every((el) =>
+        Object.keys(el).some((k) => k.startsWith('__reactFiber')),
+      ),
   );
   await page.evaluate(() => new Promise((done) => requestAnimationFrame(() => requestAnimationFrame(done))));
   const { blocks, quoted } = await visibleBlocks(page);
