@@ -15,6 +15,7 @@ import * as safetyCheckText from './013-safety-check-text';
 import * as appeals from './014-appeals';
 import * as hiddenReasonLength from './015-hidden-reason-length';
 import * as sites from './016-sites';
+import * as listCounts from './017-list-counts';
 import * as idempotencyKeys from './020-idempotency-keys';
 
 type Step = (params: { context: QueryInterface }) => Promise<void>;
@@ -40,5 +41,6 @@ export const migrations: { name: string; up: Step; down: Step }[] = [
   { name: '014-appeals', ...appeals },
   { name: '015-hidden-reason-length', ...hiddenReasonLength },
   { name: '016-sites', ...sites },
+  { name: '017-list-counts', ...listCounts },
   { name: '020-idempotency-keys', ...idempotencyKeys },
 ];

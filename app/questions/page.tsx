@@ -1,10 +1,11 @@
 import type { Metadata } from 'next';
 import { notFound } from 'next/navigation';
-import { paginationSchema } from '@/lib/validation/pagination';
+import { listPageSchema } from '@/lib/validation/list-page';
 import Link from 'next/link';
 import { listQuestions, type ListFilter } from '@/lib/questions/list';
 import { currentUserInPage } from '@/lib/auth/session';
-import { QuestionList, Pager } from '@/components/QuestionList';
+import { QuestionList } from '@/components/QuestionList';
+import { ListPager } from '@/components/questions/ListPager';
 import { STATE_WORDS } from '@/components/questions/state-words';
 import { readUnitPreference } from '@/lib/units/server';
 
@@ -20,7 +21,12 @@ export default async function QuestionsPage({
 }) {
   const sp = await searchParams;
   const one = (v: string | string[] | undefined) => (typeof v === 'string' ? v : undefined);
-  const parsed = paginationSchema.safeParse({ page: one(sp.page), perPage: one(sp.perPage) });
+  const parsed = listPageSchema.safeParse({
+    page: one(sp.page),
+    perPage: one(sp.perPage),
+    after: one(sp.after),
+    before: one(sp.before),
+  });
   if (!parsed.success) notFound();
 
   const show = one(sp.show) ?? 'newest';
@@ -35,7 +41,8 @@ export default async function QuestionsPage({
           ? { kind: 'followed', userId: viewer.id }
           : { kind: 'newest' };
   const [data, units] = await Promise.all([listQuestions(parsed.data, filter), readUnitPreference()]);
-  if (parsed.data.page > data.totalPages) notFound();
+  // past the end by number, or a place with nothing older: nothing to show
+  if ((data.page ?? 1) > data.totalPages || (data.page === null && data.items.length === 0)) notFound();
 
   const choices: [string, string][] = [
     ['newest', 'all questions'],
@@ -75,11 +82,10 @@ export default async function QuestionsPage({
           </span>
         ))}
       </nav>
-      <p className="cw-muted cw-num mb-2 text-sm">{data.total} questions, newest first</p>
+      <p className="cw-muted cw-num mb-2 text-sm">{data.total.toLocaleString('en-US')} questions, newest first</p>
       <QuestionList items={data.items} units={units} />
-      <Pager
-        page={data.page}
-        totalPages={data.totalPages}
+      <ListPager
+        data={data}
         basePath="/questions"
         query={{
           ...(one(sp.perPage) ? { perPage: String(data.perPage) } : {}),

@@ -1,4 +1,3 @@
-import { forgetListCounts } from '@/lib/questions/list';
 import { indexFieldLog, indexThread } from '@/lib/search';
 
 /**
@@ -9,11 +8,10 @@ import { indexFieldLog, indexThread } from '@/lib/search';
  * Next's page cache; each signed-in reader's own marks, and the hidden posts
  * moderators see, are fetched by the browser after the page loads. A write marks the
  * thread's page stale, so the next visit renders it afresh (the page's `revalidate`
- * is the backstop for writes made on another app instance), and forgets the lists'
- * cached counts.
+ * is the backstop for writes made on another app instance). The lists' counts need
+ * nothing here: the database keeps them in the write's own transaction (migration 017).
  */
 export function threadChanged(questionId: number | null | undefined): void {
-  forgetListCounts();
   if (questionId) pageStale(`/questions/${questionId}`);
 }
 
@@ -45,7 +43,7 @@ function pageStale(path: string): void {
 }
 
 /**
- * The page and counts as above, then search: the thread's documents, and a field log
+ * The page as above, then search: the thread's documents, and a field log
  * entry's. `reindex: false` for a write search does not see (a flag that hid nothing).
  */
 export async function postsChanged(w: {

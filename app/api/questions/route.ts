@@ -1,5 +1,5 @@
 import { NextResponse, type NextRequest } from 'next/server';
-import { paginationSchema } from '@/lib/validation/pagination';
+import { listPageSchema } from '@/lib/validation/list-page';
 import { queryObject, serverError, validationError } from '@/lib/http/errors';
 import { listQuestions } from '@/lib/questions/list';
 import { askQuestionSchema } from '@/lib/validation/question';
@@ -9,9 +9,9 @@ import { askQuestion } from '@/lib/questions/posts';
 
 export const dynamic = 'force-dynamic';
 
-/** GET /api/questions?page=1&perPage=20 — newest first, with the total. */
+/** GET /api/questions?page=1&perPage=20 (or ?after= / ?before= a place the list gave) — newest first, with the total. */
 export async function GET(request: NextRequest) {
-  const parsed = paginationSchema.safeParse(queryObject(request.nextUrl.searchParams));
+  const parsed = listPageSchema.safeParse(queryObject(request.nextUrl.searchParams));
   if (!parsed.success) return validationError(parsed.error);
   try {
     return NextResponse.json(await listQuestions(parsed.data));
