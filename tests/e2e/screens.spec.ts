@@ -46,6 +46,9 @@ function headerParts(page: Page, signedIn: boolean) {
 
 async function allBoxes(page: Page, signedIn: boolean) {
   const p = headerParts(page, signedIn);
+  // a member's menu arrives after hydration and moves the header's other parts as it does:
+  // measure the header once it is there, not the parts on either side of that moment
+  await expect(p.account, 'account').toBeVisible();
   const named: [string, Locator][] = [
     ['logo', p.logo],
     ...p.links.map((l, i) => [`nav ${i}`, l] as [string, Locator]),
