@@ -9,7 +9,7 @@ import { BIG_BUTTON, Field, Seconds, useTicker } from './parts';
 /** Buckets people have at hand, in the reader's own units. */
 const BUCKETS = { US: ['1 gal', '2 gal', '5 gal'], metric: ['5 L', '10 L', '20 L'] } as const;
 
-interface Trial {
+export interface Trial {
   volumeM3: number;
   timeS: number;
 }

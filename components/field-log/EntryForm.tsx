@@ -15,7 +15,7 @@ import { isoDay } from '@/lib/dates';
 import { useUnits } from '@/components/units/UnitsProvider';
 import type { UnitSystem } from '@/lib/hydraulics';
 
-type Trial = { volume: string; seconds: string };
+export type Trial = { volume: string; seconds: string };
 
 /** Hints show an example in the reader's own units; any unit typed is accepted. */
 const TEXT_FIELDS: { name: string; label: string; hint: Record<UnitSystem, string> }[] = [
@@ -57,9 +57,12 @@ const toCelsius = (t: number | undefined, units: UnitSystem) =>
  */
 export function EntryForm({
   initial = {},
+  initialTrials,
   site,
 }: {
   initial?: Record<string, string>;
+  /** trials timed already (the trial timer's), as typed: "5 gal", seconds */
+  initialTrials?: Trial[];
   site?: { id: string; name: string; version: number };
 } = {}) {
   const router = useRouter();
@@ -88,7 +91,7 @@ export function EntryForm({
     notes: '',
     ...initial,
   });
-  const [trials, setTrials] = useState<Trial[]>([{ volume: '', seconds: '' }]);
+  const [trials, setTrials] = useState<Trial[]>(initialTrials?.length ? initialTrials : [{ volume: '', seconds: '' }]);
   const [photoIds, setPhotoIds] = useState<string[]>([]);
   const [error, setError] = useState<FormError | null>(null);
   const [busy, setBusy] = useState(false);

@@ -1,5 +1,5 @@
 import { test, expect, type Page } from '@playwright/test';
-import { press, settled } from '../support/session';
+import { press, settled, signIn } from '../support/session';
 
 const START = Date.UTC(2026, 5, 1, 9);
 /** The page's clock, set going at a fixed time; paused once the page is up, it moves only as the test says. */
@@ -108,3 +108,61 @@ test('the fall survey adds the stages and checks the walk back', async ({ page, 
   await back.getByRole('listitem').nth(1).getByLabel('Downhill pole reads').fill('36');
   await expect(survey.getByTestId('fall-closure')).toContainText('5 in apart, more than 2 in');
 });
+
+test('a whole visit with no signal: trials and beats timed, kept as a field log test, sent once when back online', async ({
+  page,
+  baseURL,
+}) => {
+  await signIn(page, 'tamsin@ferncombe.example');
+  await page.context().addCookies([{ name: 'cw_units', value: 'US', url: baseURL! }]);
+  const before = await fieldLogTotal(page);
+  await stillClock(page);
+  await page.goto('/field-kit/timer');
+  await settled(page);
+  await page.clock.pauseAt(START + 60_000);
+  // the page is up: from here the phone has no signal
+  await page.context().setOffline(true);
+  const timer = page.getByTestId('trial-timer');
+  await press(timer.getByRole('button', { name: '5 US gal' }));
+  for (const ms of [12_000, 12_600, 11_400]) {
+    await press(timer.getByTestId('trial-tap'));
+    await page.clock.runFor(ms);
+    await press(timer.getByTestId('trial-tap'));
+  }
+  const beat = page.getByTestId('beat-counter').getByTestId('beat-tap');
+  // a tap every 1.2 s for 26 taps: 25 gaps in 30 s = 50 a minute (arithmetic by hand)
+  for (let i = 0; i < 26; i++) {
+    if (i > 0) await page.clock.runFor(1_200);
+    await press(beat);
+  }
+  await page.clock.resume();
+  const record = page.getByTestId('field-visit-record');
+  await press(record.getByRole('button', { name: 'Record these 3 trials as a field log test' }));
+  const form = record.getByRole('form', { name: 'Record a field log test' });
+  await expect(form.getByLabel('Trial 3 seconds')).toHaveValue('11.4');
+  await expect(form.getByLabel('Trial 1 volume')).toHaveValue('5 gal');
+  await expect(form.getByLabel('Beats per minute')).toHaveValue('50');
+  await form.getByLabel('Site name').fill('Hollin spring, below the sheepfold');
+  await form.getByLabel('Fall', { exact: true }).fill('5 ft');
+  await form.getByLabel('Lift', { exact: true }).fill('40 ft');
+  await form.getByLabel('Drive pipe length').fill('40 ft');
+  await form.getByLabel('Drive flow (all pumps)').fill('8 gal/min');
+  await press(form.getByRole('button', { name: 'Save the test' }));
+  const kept = page.getByTestId('entry-kept');
+  await expect(kept.getByTestId('outbox')).toContainText('Waiting to send');
+  expect(await fieldLogTotal(page)).toBe(before);
+
+  await page.context().setOffline(false);
+  await expect(kept.getByTestId('outbox')).toContainText('Nothing waiting');
+  const sent = kept.getByRole('link', { name: /^Field log: Hollin spring/ });
+  const url = await sent.getAttribute('href');
+  expect(await fieldLogTotal(page)).toBe(before + 1);
+  // the trials arrived as timed: 5 US gal = 18.927 L (NIST Handbook 44, 2023: 1 gal = 231 in³)
+  const entry = await (await page.request.get(`/api${url}`)).json();
+  expect(entry.trials.map((t: { seconds: number }) => t.seconds)).toEqual([12, 12.6, 11.4]);
+  expect(entry.trials[0].volumeL).toBeCloseTo(18.93, 2);
+  expect(entry.bpm).toBe(50);
+});
+
+const fieldLogTotal = async (page: Page) =>
+  ((await (await page.request.get('/api/field-log?perPage=1')).json()) as { total: number }).total;

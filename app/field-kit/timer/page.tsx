@@ -1,6 +1,5 @@
 import type { Metadata } from 'next';
-import { TrialTimer } from '@/components/field-kit/TrialTimer';
-import { BeatCounter } from '@/components/field-kit/BeatCounter';
+import { FieldVisit } from '@/components/field-kit/FieldVisit';
 import { Caution } from '@/components/Caution';
 
 export const metadata: Metadata = {
@@ -16,8 +15,7 @@ export default function TrialTimerPage() {
         Streams rise fast and banks are slippery: do not measure alone or in high water. Keep hands clear of the waste
         valve while it beats, and stand where its spray and the outlet’s water do not undercut your footing.
       </Caution>
-      <TrialTimer />
-      <BeatCounter />
+      <FieldVisit />
     </div>
   );
 }
