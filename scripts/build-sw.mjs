@@ -25,6 +25,8 @@ const { count, size, warnings } = await injectManifest({
   globDirectory: '.next',
   // the scripts, styles and fonts every page is made of; pages themselves are kept as read
   globPatterns: ['static/**/*.{js,css,woff2}'],
+  // the body face's other scripts load only for text that needs them (unicode-range)
+  globIgnores: ['static/media/literata-{cyrillic,cyrillic-ext,greek,greek-ext,vietnamese}-*'],
   modifyURLPrefix: { 'static/': '/_next/static/' },
   // file names already carry a content hash
   dontCacheBustURLsMatching: /^\/_next\/static\//,
