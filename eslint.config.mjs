@@ -34,7 +34,17 @@ const engineOnly = [
 const config = [
   ...nextCoreWebVitals,
   ...nextTypescript,
-  { ignores: ['.next/**', 'node_modules/**', '.data/**', 'test-results/**', 'playwright-report/**', 'next-env.d.ts'] },
+  {
+    ignores: [
+      '.next/**',
+      'node_modules/**',
+      '.data/**',
+      'test-results/**',
+      'playwright-report/**',
+      'next-env.d.ts',
+      'public/sw.js',
+    ],
+  },
   {
     files: ['lib/**/*.{ts,tsx}', 'models/**/*.{ts,tsx}'],
     rules: { 'no-restricted-imports': ['error', { patterns: [noAppOrComponents] }] },

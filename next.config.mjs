@@ -12,6 +12,22 @@ const securityHeaders = [
   { key: 'Permissions-Policy', value: 'camera=(), microphone=(), geolocation=()' },
 ];
 
+/**
+ * Public pages that read no session: the service worker (app/sw.ts) may keep them for
+ * offline use. Next marks every page rendered per request `private, no-store`, so this
+ * mark is how the app says a page is the same for everyone. Never add a member's page.
+ */
+const offlinePublic = [{ key: 'Clackwater-Offline', value: 'public' }];
+const offlinePages = [
+  '/guides',
+  '/guides/:path*',
+  '/calculators',
+  '/calculators/:path*',
+  '/plan',
+  '/field-kit',
+  '/field-kit/:path*',
+];
+
 /** @type {import('next').NextConfig} */
 const nextConfig = {
   reactStrictMode: true,
@@ -34,6 +50,10 @@ const nextConfig = {
     return [
       { source: '/:path*', headers: securityHeaders },
       { source: '/api/:path*', headers: [{ key: 'Content-Security-Policy', value: apiCsp }] },
+      // a calculator opened from a member's site (?site=) shows that site: never marked
+      ...offlinePages.map((source) => ({ source, missing: [{ type: 'query', key: 'site' }], headers: offlinePublic })),
+      // the worker must always be fetched fresh so a new build reaches readers
+      { source: '/sw.js', headers: [{ key: 'Cache-Control', value: 'no-cache' }] },
     ];
   },
 };

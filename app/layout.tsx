@@ -8,6 +8,7 @@ import { SiteHeader } from '@/components/SiteHeader';
 import { SiteFooter } from '@/components/SiteFooter';
 import { UnitsProvider } from '@/components/units/UnitsProvider';
 import { Providers } from '@/components/account/Providers';
+import { RegisterServiceWorker } from '@/components/offline/RegisterServiceWorker';
 import { palette } from '@/tailwind.config';
 import { UNITS_FIRST_PAINT_SCRIPT } from '@/lib/units/first-paint';
 import { SITE_DESCRIPTION, SITE_NAME, siteUrl } from '@/lib/site';
@@ -50,6 +51,7 @@ export default function RootLayout({ children }: { children: ReactNode }) {
               {children}
             </main>
             <SiteFooter />
+            <RegisterServiceWorker />
           </UnitsProvider>
         </Providers>
       </body>

@@ -22,7 +22,7 @@ step "lint" npx eslint . --max-warnings=0
 step "format (prettier --check)" npx prettier --check . --log-level=warn
 step "reset test database" npx tsx scripts/reset-db.ts
 step "unit and integration tests (vitest)" npx vitest run --reporter=default --reporter=json --outputFile=.data/reports/vitest.json
-step "build" npx next build
+step "build" npm run build
 step "reset test database" npx tsx scripts/reset-db.ts
 step "browser tests (playwright)" env PLAYWRIGHT_JSON_OUTPUT_NAME=.data/reports/playwright.json npx playwright test --reporter=list,json
 

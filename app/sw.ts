@@ -1,0 +1,83 @@
+/// <reference lib="webworker" />
+/**
+ * The service worker, built by scripts/build-sw.mjs into public/sw.js after `next build`
+ * (Serwist: precache of the build's static files, routes below).
+ *
+ * Privacy first: a member's pages must never be served to whoever uses the phone next.
+ * Only public pages that read no session are kept, and only when the app marks the
+ * response `Clackwater-Offline: public` (next.config.mjs), because Next marks every page
+ * it renders per request `private, no-store` whether or not it is private, so the header
+ * alone cannot tell /plan from /settings. Everything else goes to the network only, and
+ * signing out empties the kept pages.
+ */
+import {
+  CacheableResponsePlugin,
+  ExpirationPlugin,
+  NetworkFirst,
+  NetworkOnly,
+  Serwist,
+  type PrecacheEntry,
+} from 'serwist';
+
+declare const self: ServiceWorkerGlobalScope & { __SW_MANIFEST: (PrecacheEntry | string)[] | undefined };
+
+/** Pages a reader may keep: the same for everyone (the app marks them too). */
+export const KEEP = /^\/(guides|calculators|plan|field-kit)(\/|$)/;
+/** Never kept, whatever a response says: a member's own pages and every API answer. */
+export const NEVER =
+  /^\/(api|sites|settings|review|admin|people|questions\/ask|field-log\/new|sign-in|sign-up|moderation)(\/|$)/;
+export const PAGES_CACHE = 'clackwater-pages';
+
+function keepable(response: Response): boolean {
+  if (!response.ok || response.type !== 'basic' || response.redirected) return false;
+  if (response.headers.get('clackwater-offline') === 'public') return true;
+  return !/\b(private|no-store)\b/i.test(response.headers.get('cache-control') ?? '');
+}
+
+const serwist = new Serwist({
+  precacheEntries: self.__SW_MANIFEST,
+  skipWaiting: true,
+  clientsClaim: true,
+  navigationPreload: false,
+  runtimeCaching: [
+    {
+      matcher: ({ request, url, sameOrigin }) =>
+        sameOrigin &&
+        request.mode === 'navigate' &&
+        KEEP.test(url.pathname) &&
+        !NEVER.test(url.pathname) &&
+        // a calculator opened from a member's own site names that site
+        !url.searchParams.has('site'),
+      handler: new NetworkFirst({
+        cacheName: PAGES_CACHE,
+        // a creek bank with one bar of signal: show the kept page rather than wait on it
+        networkTimeoutSeconds: 6,
+        plugins: [
+          { cacheWillUpdate: async ({ response }) => (keepable(response) ? response : null) },
+          new CacheableResponsePlugin({ statuses: [200] }),
+          new ExpirationPlugin({ maxEntries: 200, maxAgeSeconds: 60 * 60 * 24 * 60 }),
+        ],
+      }),
+    },
+    // every other page: the network, or the offline page when there is none
+    { matcher: ({ request }) => request.mode === 'navigate', handler: new NetworkOnly() },
+  ],
+  fallbacks: { entries: [{ url: '/offline', matcher: ({ request }) => request.destination === 'document' }] },
+});
+
+async function forgetPages() {
+  await caches.delete(PAGES_CACHE);
+}
+
+// next-auth's signOut() posts here; the page navigates only after the answer, so the kept
+// pages are gone before the next member can open anything
+self.addEventListener('fetch', (event) => {
+  const url = new URL(event.request.url);
+  if (event.request.method === 'POST' && url.origin === self.location.origin && url.pathname === '/api/auth/signout')
+    event.waitUntil(forgetPages());
+});
+self.addEventListener('message', (event) => {
+  if (event.data?.type === 'forget-pages') event.waitUntil(forgetPages());
+});
+
+serwist.addEventListeners();
