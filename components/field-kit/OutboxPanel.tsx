@@ -62,7 +62,8 @@ export function OutboxPanel() {
               <span className="text-sm">Waiting to send{r.attempts > 0 ? ` (tried ${r.attempts} times)` : ''}.</span>
             ) : (
               <span role="alert" className="text-sm text-signal-700 dark:text-signal-300">
-                Not accepted: {r.error?.message} It stays here until you change it or let it go.
+                Not accepted: {r.error?.message} It stays on this phone until you let it go; record it again with that
+                put right.
               </span>
             )}
             {r.state === 'refused' ? (
