@@ -4,6 +4,22 @@
  * hydration print the same words wherever the reader is (a thread page is cached
  * for every reader). Plain Intl: safe in the browser and on the server.
  */
+/** The months by name, January first (the planner's driest month, the month chart). */
+export const MONTH_NAMES = [
+  'January',
+  'February',
+  'March',
+  'April',
+  'May',
+  'June',
+  'July',
+  'August',
+  'September',
+  'October',
+  'November',
+  'December',
+] as const;
+
 const parts = new Intl.DateTimeFormat('en', {
   day: 'numeric',
   month: 'short',

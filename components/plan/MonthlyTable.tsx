@@ -2,7 +2,7 @@
 
 import type { MonthlyDelivery } from '@/lib/hydraulics';
 import { formatQuantity } from '@/lib/calculators';
-import { MONTH_NAMES } from '@/lib/plan/monthChart';
+import { MONTH_NAMES } from '@/lib/dates';
 import { useUnits } from '@/components/units/UnitsProvider';
 
 /** Delivery against demand month by month as a table: the chart's numbers, exactly. */

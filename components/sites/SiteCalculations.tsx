@@ -2,9 +2,9 @@ import Link from 'next/link';
 import type { SiteView } from '@/lib/sites/store';
 import type { SiteCalculationItem } from '@/lib/sites/links';
 import { calculatorPropsFromSite } from '@/lib/sites/sheet';
-import { CALCULATOR_LIST, getCalculator } from '@/lib/calculators';
+import { CALCULATOR_LIST } from '@/lib/calculators';
 import { readUnitPreference } from '@/lib/units/server';
-import { formatDate } from '@/lib/dates';
+import { CalculationItem } from '@/components/calculations/CalculationItem';
 
 /**
  * The worked calculations made from a site and, for its owner, every calculator opened with
@@ -32,14 +32,7 @@ export async function SiteCalculations({
       {calculations.length ? (
         <ul className="flex flex-col gap-2" data-testid="site-calculations">
           {calculations.map((c) => (
-            <li key={c.id} className="cw-card py-3">
-              <Link href={`/calculations/${c.id}`} className="cw-link font-semibold">
-                {c.title ?? `${getCalculator(c.tool)?.name ?? c.tool}: worked calculation`}
-              </Link>
-              <p className="cw-muted text-sm">
-                {getCalculator(c.tool)?.name ?? c.tool} · {formatDate(c.createdAt)}
-              </p>
-            </li>
+            <CalculationItem key={c.id} c={c} />
           ))}
         </ul>
       ) : (

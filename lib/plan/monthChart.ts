@@ -6,22 +6,8 @@
  */
 import { fromSI, readableDisplay, type MonthlyDelivery, type UnitSystem } from '@/lib/hydraulics';
 import { formatNumber } from '@/lib/calculators/format';
+import { MONTH_NAMES } from '@/lib/dates';
 import { textWidth, verticalTicks, wrapText, type AxisTicks } from '@/lib/charts/layout';
-
-export const MONTH_NAMES = [
-  'January',
-  'February',
-  'March',
-  'April',
-  'May',
-  'June',
-  'July',
-  'August',
-  'September',
-  'October',
-  'November',
-  'December',
-] as const;
 
 export interface MonthBar {
   month: number;

@@ -4,11 +4,11 @@ import { notFound } from 'next/navigation';
 import { cache } from 'react';
 import { publicProfile } from '@/lib/accounts/profile';
 import type { Role } from '@/models/User';
-import { getCalculator } from '@/lib/calculators';
 import { formatDate, formatMonth } from '@/lib/dates';
 import { currentUserInPage } from '@/lib/auth/session';
 import { sitesOnProfile } from '@/lib/sites/links';
 import { VISIBILITY_WORDS } from '@/components/plan/words';
+import { CalculationItem } from '@/components/calculations/CalculationItem';
 import type { SiteVisibility } from '@/lib/vocabulary';
 
 export const dynamic = 'force-dynamic';
@@ -107,14 +107,7 @@ export default async function PersonPage({ params }: { params: Promise<{ handle:
         ) : (
           <ul className="flex flex-col gap-2 font-sans">
             {calculations.map((c) => (
-              <li key={c.publicId} className="cw-card py-3">
-                <Link href={`/calculations/${c.publicId}`} className="cw-link font-semibold">
-                  {c.title ?? `${getCalculator(c.tool)?.name ?? c.tool}: worked calculation`}
-                </Link>
-                <p className="cw-muted text-sm">
-                  {getCalculator(c.tool)?.name ?? c.tool} · {formatDate(c.createdAt)}
-                </p>
-              </li>
+              <CalculationItem key={c.publicId} c={{ ...c, id: c.publicId }} />
             ))}
           </ul>
         )}

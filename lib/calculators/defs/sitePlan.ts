@@ -2,6 +2,7 @@ import { FALL_METHODS, fromSI, householdRate, planSite, sitePlanSchema } from '@
 import { defineCalculator, type FieldDef } from '../types';
 import { PUMP_TYPE_OPTIONS } from '../options';
 import { ANIMAL_COUNT_FIELDS, ANIMALS, livestockInput } from './demandAndStorage';
+import { MONTH_NAMES } from '@/lib/dates';
 
 /**
  * The site planner's survey as a form: the same field kit, unit switch, share link and
@@ -15,21 +16,6 @@ const FALL_METHOD_LABELS: Record<(typeof FALL_METHODS)[number], string> = {
   'gps-or-map': 'GPS or a map (rough: measure before you build)',
   other: 'Another way',
 };
-
-const MONTHS = [
-  'January',
-  'February',
-  'March',
-  'April',
-  'May',
-  'June',
-  'July',
-  'August',
-  'September',
-  'October',
-  'November',
-  'December',
-];
 
 const count = (v: unknown) => Math.max(0, Math.round(Number(v ?? 0)));
 
@@ -106,7 +92,7 @@ const fields: FieldDef[] = [
     name: 'driestMonth',
     prop: 'driestMonth',
     label: 'The driest month',
-    options: MONTHS.map((m, i) => ({ value: String(i + 1), label: m })),
+    options: MONTH_NAMES.map((m, i) => ({ value: String(i + 1), label: m })),
   },
   { type: 'number', name: 'demand.people', prop: 'people', label: 'People', min: 0, step: 1 },
   {
