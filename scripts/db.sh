@@ -3,6 +3,8 @@
 # socket and pid file in $DB_DATA_DIR (inside the project, ignored by git).
 # Usage: scripts/db.sh start | stop | status | kill
 # With DATABASE_URL set, the embedded server is not used and this does nothing.
+# With DB_BINLOG=1 the server writes a binary log and can feed replicas
+# (scripts/db-replica.sh); without it nothing about the server changes.
 set -euo pipefail
 . "$(dirname "$0")/env.sh"
 
@@ -24,12 +26,25 @@ start() {
       --auth-root-authentication-method=normal --skip-test-db >"$DB_DATA_DIR/install.log" 2>&1 \
       || { cat "$DB_DATA_DIR/install.log" >&2; die "mariadb-install-db failed"; }
   fi
-  log "starting MariaDB on 127.0.0.1:$DB_PORT"
+  local binlog=()
+  if [ "${DB_BINLOG:-}" = "1" ]; then
+    # ROW format replays exactly what changed (no re-running of NOW() or triggers on the
+    # replica); GTIDs let a replica join at "where this dump was taken" without file and
+    # offset bookkeeping. Migration 017 creates triggers, which under a binary log need
+    # SUPER unless the server trusts function creators.
+    binlog=(--log-bin="$DB_DATA_DIR/binlog" --server-id="${DB_SERVER_ID:-1}" --binlog-format=ROW
+      --log-slave-updates=1 --gtid-strict-mode=1 --log-bin-trust-function-creators=1
+      --expire-logs-days=2)
+    log "starting MariaDB on 127.0.0.1:$DB_PORT with a binary log (server id ${DB_SERVER_ID:-1})"
+  else
+    log "starting MariaDB on 127.0.0.1:$DB_PORT"
+  fi
   rm -f "$SOCK"
   nohup "$MARIADBD" --no-defaults --user=root --datadir="$DB_DATA_DIR" --socket="$SOCK" \
     --pid-file="$PIDF" --port="$DB_PORT" --bind-address=127.0.0.1 \
     --character-set-server=utf8mb4 --collation-server=utf8mb4_unicode_ci \
-    --innodb-buffer-pool-size=256M --max-connections=300 \
+    --innodb-buffer-pool-size="${DB_BUFFER_POOL:-256M}" --max-connections=300 \
+    ${binlog[@]+"${binlog[@]}"} \
     --log-error="$DB_DATA_DIR/error.log" >/dev/null 2>&1 &
   for _ in $(seq 1 120); do
     if answers; then break; fi
@@ -45,6 +60,14 @@ GRANT ALL PRIVILEGES ON *.* TO '$DB_USER'@'127.0.0.1';
 GRANT ALL PRIVILEGES ON *.* TO '$DB_USER'@'localhost';
 FLUSH PRIVILEGES;
 SQL
+  if [ "${DB_BINLOG:-}" = "1" ]; then
+    # the account replicas log in with (scripts/db-replica.sh); loopback only
+    mariadb --no-defaults --socket="$SOCK" -uroot <<SQL
+CREATE USER IF NOT EXISTS '$DB_REPL_USER'@'127.0.0.1' IDENTIFIED BY '$DB_REPL_PASSWORD';
+GRANT REPLICATION SLAVE, REPLICATION CLIENT ON *.* TO '$DB_REPL_USER'@'127.0.0.1';
+FLUSH PRIVILEGES;
+SQL
+  fi
   log "MariaDB is up (pid $(cat "$PIDF"), database $DB_NAME)"
 }
 

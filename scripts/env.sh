@@ -18,6 +18,9 @@ fi
 export DB_HOST="${DB_HOST:-127.0.0.1}"
 export DB_USER="${DB_USER:-clackwater}"
 export DB_PASSWORD="${DB_PASSWORD:-clackwater}"
+# the replication account (scripts/db.sh with DB_BINLOG=1, scripts/db-replica.sh)
+export DB_REPL_USER="${DB_REPL_USER:-clackwater_repl}"
+export DB_REPL_PASSWORD="${DB_REPL_PASSWORD:-clackwater_repl}"
 
 export NEXTAUTH_URL="${NEXTAUTH_URL:-http://localhost:$PORT}"
 export SITE_URL="${SITE_URL:-$NEXTAUTH_URL}"
