@@ -36,12 +36,16 @@ launch() {
     --server-id="$REPLICA_SERVER_ID" --read-only=1 --relay-log="$REPLICA_DATA_DIR/relay" \
     --log-bin-trust-function-creators=1 --replicate-wild-ignore-table=mysql.% \
     --log-error="$REPLICA_DATA_DIR/error.log" >/dev/null 2>&1 &
+  local pid=$!
   for _ in $(seq 1 120); do
     if answers; then return 0; fi
+    # a server that gave up (port taken, bad datadir) is reported now, not after a minute
+    kill -0 "$pid" 2>/dev/null || break
     sleep 0.5
   done
   tail -20 "$REPLICA_DATA_DIR/error.log" >&2
-  die "MariaDB replica did not answer within 60 s"
+  kill -0 "$pid" 2>/dev/null && die "MariaDB replica did not answer within 60 s"
+  die "MariaDB replica exited at start (log above)"
 }
 
 # Waits until the replica has applied everything the primary had logged when asked.

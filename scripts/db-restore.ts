@@ -18,7 +18,8 @@ export async function restoreDatabase(
   opts: { force?: boolean } = {},
 ): Promise<void> {
   if (!existsSync(file)) throw new Error(`no backup file at ${file}`);
-  const admin = createSequelize({ ...cfg, database: '' });
+  // the primary only: whether the database is empty must not be a replica's older answer
+  const admin = createSequelize({ ...cfg, database: '', replicas: [] });
   try {
     await admin.query(
       `CREATE DATABASE IF NOT EXISTS \`${cfg.database.replace(/`/g, '')}\` CHARACTER SET utf8mb4 COLLATE utf8mb4_unicode_ci`,

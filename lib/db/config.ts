@@ -35,3 +35,28 @@ export function readDbConfig(env: Record<string, string | undefined> = process.e
     database: env.DB_NAME ?? (isTest ? 'clackwater_test' : 'clackwater'),
   };
 }
+
+export interface ReplicaAddress {
+  host: string;
+  port: number;
+}
+
+/**
+ * Read replicas from DB_REPLICAS ("host:port[,host:port]"), reached with the primary's
+ * user, password and database. Empty or unset: no replicas, every query goes to the primary.
+ */
+export function readReplicaConfig(env: Record<string, string | undefined> = process.env): ReplicaAddress[] {
+  const raw = (env.DB_REPLICAS ?? '').trim();
+  if (!raw) return [];
+  return raw.split(',').map((item) => {
+    const m = /^\s*([^\s:]+):(\d{1,5})\s*$/.exec(item);
+    if (!m || Number(m[2]) < 1 || Number(m[2]) > 65535) {
+      throw new Error(`DB_REPLICAS must be host:port[,host:port], not "${item.trim()}"`);
+    }
+    return { host: m[1]!, port: Number(m[2]) };
+  });
+}
+
+export function replicasConfigured(env: Record<string, string | undefined> = process.env): boolean {
+  return readReplicaConfig(env).length > 0;
+}

@@ -1,7 +1,8 @@
 import 'server-only';
 import { QueryTypes, Sequelize } from 'sequelize';
 import * as mariadb from 'mariadb';
-import { readDbConfig } from './config';
+import { readDbConfig, readReplicaConfig, type ReplicaAddress } from './config';
+import { installReplicaFailover } from './replication';
 
 /**
  * One Sequelize instance (and so one connection pool) per process. In development
@@ -9,11 +10,27 @@ import { readDbConfig } from './config';
  */
 const globalForDb = globalThis as unknown as { __clackwaterSequelize?: Sequelize };
 
-export function createSequelize(overrides: Partial<ReturnType<typeof readDbConfig>> = {}): Sequelize {
-  const cfg = { ...readDbConfig(), ...overrides };
-  return new Sequelize(cfg.database, cfg.user, cfg.password, {
+/**
+ * With DB_REPLICAS set, SELECTs outside a transaction go to the replicas (Sequelize's
+ * read replication) and everything else to the primary; lib/db/replication.ts adds the
+ * failover to the primary and read-your-writes. Without it, one pool on the primary.
+ */
+export function createSequelize(
+  overrides: Partial<ReturnType<typeof readDbConfig>> & { replicas?: ReplicaAddress[] } = {},
+): Sequelize {
+  const { replicas = readReplicaConfig(), ...own } = overrides;
+  const cfg = { ...readDbConfig(), ...own };
+  const sequelize = new Sequelize(cfg.database, cfg.user, cfg.password, {
     host: cfg.host,
     port: cfg.port,
+    ...(replicas.length
+      ? {
+          replication: {
+            write: { host: cfg.host, port: cfg.port, username: cfg.user, password: cfg.password },
+            read: replicas.map((r) => ({ host: r.host, port: r.port, username: cfg.user, password: cfg.password })),
+          },
+        }
+      : {}),
     dialect: 'mariadb',
     dialectModule: mariadb,
     logging: process.env.DB_LOG === '1' ? console.log : false,
@@ -22,6 +39,8 @@ export function createSequelize(overrides: Partial<ReturnType<typeof readDbConfi
     timezone: '+00:00',
     define: { underscored: true, charset: 'utf8mb4', collate: 'utf8mb4_unicode_ci' },
   });
+  if (replicas.length) installReplicaFailover(sequelize);
+  return sequelize;
 }
 
 export function getSequelize(): Sequelize {

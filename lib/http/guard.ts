@@ -6,6 +6,9 @@ import { ForumError } from '@/lib/questions/errors';
 import { clientIp, limitMessage, refund, spend, type LimitName } from '@/lib/auth/rate-limit';
 import { isNewMember } from '@/lib/accounts/new-member';
 import { formatDate } from '@/lib/dates';
+import { hasPrimaryMarker, onPrimary, primaryMarkerCookie } from '@/lib/db/read-your-writes';
+import { replicasConfigured } from '@/lib/db/config';
+import { siteUrl } from '@/lib/site';
 
 export type FloodKind = 'post' | 'flag' | 'upload' | 'calculation';
 
@@ -23,6 +26,35 @@ export async function guarded(
   action: Action,
   work: (user: SessionUser) => Promise<Response>,
   options: { flood?: FloodKind } = {},
+): Promise<Response> {
+  if (!replicasConfigured()) return guardedWork(request, action, work, options);
+  // With read replicas (DB_REPLICAS), read-your-writes is decided here because every
+  // protected write passes through this one function: a write request reads what it is
+  // about to change from the primary, its success marks the member's next few seconds of
+  // requests (lib/db/read-your-writes.ts), and a request carrying that mark reads from the
+  // primary too. A hook lower down (the session, the pool) cannot tell a write request from
+  // a read or see the response the mark is set on.
+  const writes = request.method !== 'GET' && request.method !== 'HEAD';
+  const run = () => guardedWork(request, action, work, options);
+  const res = writes || hasPrimaryMarker(request.headers.get('cookie')) ? await onPrimary(run) : await run();
+  if (!writes || !res.ok) return res;
+  const marker = primaryMarkerCookie(siteUrl().startsWith('https:'));
+  try {
+    res.headers.append('Set-Cookie', marker);
+    return res;
+  } catch {
+    // a Response.redirect's headers are immutable: copy it
+    const copy = new Response(res.body, res);
+    copy.headers.append('Set-Cookie', marker);
+    return copy;
+  }
+}
+
+async function guardedWork(
+  request: Request,
+  action: Action,
+  work: (user: SessionUser) => Promise<Response>,
+  options: { flood?: FloodKind },
 ): Promise<Response> {
   const crossSite = crossSiteRefusal(request);
   if (crossSite) return crossSite;
