@@ -23,27 +23,11 @@ export async function register() {
   );
 }
 
-/**
- * With read replicas, which renders read the primary (lib/db/read-your-writes.ts). Next
- * serves each request inside its work-unit store; reading that store (not `cookies()`)
- * neither opts a page out of the page cache nor throws during a prerender.
- * - a request whose member wrote in the last few seconds (the `cw_rw` marker): the primary,
- *   so they see what they just wrote;
- * - a render Next keeps and hands to every reader (a page-cache regeneration after a write
- *   marked it stale, a prerender): the primary, so the kept copy is never a replica's older
- *   one. These are rare (at most one per page per revalidate period), so they cost the
- *   primary little.
- * Everything else (a request without the marker) reads a replica.
- */
+/** With read replicas, renders outside guarded() read the primary when they must (lib/http/read-your-writes.ts). */
 async function readYourWritesInPages() {
-  const [{ workUnitAsyncStorage }, { wantPrimaryWhen, PRIMARY_MARKER_COOKIE }] = await Promise.all([
-    import('next/dist/server/app-render/work-unit-async-storage.external'),
+  const [{ wantPrimaryWhen }, { renderWantsPrimary }] = await Promise.all([
     import('@/lib/db/read-your-writes'),
+    import('@/lib/http/read-your-writes'),
   ]);
-  wantPrimaryWhen(() => {
-    const store = workUnitAsyncStorage.getStore();
-    if (!store) return false;
-    if (store.type === 'request') return store.cookies.has(PRIMARY_MARKER_COOKIE);
-    return true;
-  });
+  wantPrimaryWhen(renderWantsPrimary);
 }

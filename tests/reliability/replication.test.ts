@@ -1,3 +1,5 @@
+// first, as in Next's own server: gives Next's request stores a real AsyncLocalStorage
+import 'next/dist/server/node-environment-baseline';
 import { execFileSync, spawnSync } from 'node:child_process';
 import { rmSync } from 'node:fs';
 import path from 'node:path';
@@ -7,7 +9,10 @@ import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
 import { GET as listGET } from '@/app/api/questions/route';
 import { GET as settingsGET, PUT as settingsPUT } from '@/app/api/account/settings/route';
 import { getSequelize } from '@/lib/db';
-import { onPrimary } from '@/lib/db/read-your-writes';
+import { onPrimary, wantPrimaryWhen } from '@/lib/db/read-your-writes';
+import { renderWantsPrimary } from '@/lib/http/read-your-writes';
+import { workUnitAsyncStorage } from 'next/dist/server/app-render/work-unit-async-storage.external';
+import { RequestCookies } from 'next/dist/server/web/spec-extension/cookies';
 import { replicaHealth } from '@/lib/db/replication';
 import { freshDemoDatabase } from '../support/db';
 import { actAs, sessionCookie } from '../support/act-as';
@@ -129,7 +134,18 @@ describe.skipIf(!HAS_MARIADBD)('read replica: MariaDB replication with Sequelize
       const mine = await raw(settingsGET, 'GET', '/api/account/settings', null, undefined, {}, { cookie });
       expect(mine.status).toBe(200);
       expect((await mine.json()).region).toBe('Lower Wendle');
+
+      // a page or public handler (not through guarded) on a request with the marker, as
+      // instrumentation.ts registers it; Next's request store is stood in for here
+      wantPrimaryWhen(renderWantsPrimary);
+      const store = (cookie: string) =>
+        ({ type: 'request', cookies: new RequestCookies(new Headers({ cookie })) }) as unknown as Parameters<
+          typeof workUnitAsyncStorage.run
+        >[0];
+      expect(await workUnitAsyncStorage.run(store(marker!), serverOfRead)).toBe(1);
+      expect(await workUnitAsyncStorage.run(store('cw_units=US'), serverOfRead)).toBe(2);
     } finally {
+      wantPrimaryWhen(() => false);
       await asRoot(REPLICA_DIR, 'START SLAVE SQL_THREAD');
     }
     await caughtUp();
