@@ -37,6 +37,7 @@ launch() {
     --log-bin-trust-function-creators=1 --replicate-wild-ignore-table=mysql.% \
     --log-error="$REPLICA_DATA_DIR/error.log" >/dev/null 2>&1 &
   local pid=$!
+  disown "$pid" 2>/dev/null || true
   for _ in $(seq 1 120); do
     if answers; then return 0; fi
     # a server that gave up (port taken, bad datadir) is reported now, not after a minute
@@ -57,6 +58,16 @@ catch_up() {
   waited=$(replica -N -e "SELECT MASTER_GTID_WAIT('$pos', ${REPLICA_CATCH_UP_S:-60})")
   [ "$waited" = "0" ] || die "replica did not reach the primary's position $pos (io $(slave_field Slave_IO_Running), sql $(slave_field Slave_SQL_Running): $(slave_field Last_Error)$(slave_field Last_IO_Error))"
   log "replica caught up with the primary at GTID $pos"
+}
+
+# The IO thread's error 1236: the primary's binary log does not hold the position asked for.
+lost_position() {
+  for _ in 1 2 3 4; do
+    [ "$(slave_field Last_IO_Errno)" = "1236" ] && return 0
+    [ "$(slave_field Slave_IO_Running)" = "Yes" ] && return 1
+    sleep 0.5
+  done
+  return 1
 }
 
 initialise() {
@@ -114,6 +125,12 @@ start() {
     # restarted after a stop or a crash: the replica resumes from its own gtid_slave_pos
     launch
     [ "$(slave_field Slave_SQL_Running)" = "Yes" ] || replica -e 'START SLAVE'
+    if lost_position; then
+      log "the primary no longer holds this replica's position (made again since?); copying it afresh"
+      kill -KILL "$(cat "$PIDF")" || true
+      sleep 0.5
+      initialise
+    fi
   else
     if running; then kill -KILL "$(cat "$PIDF")" || true; sleep 0.5; fi
     initialise

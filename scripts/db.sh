@@ -17,7 +17,16 @@ answers() { mariadb-admin --no-defaults --socket="$SOCK" -uroot ping >/dev/null 
 
 start() {
   if [ -n "${DATABASE_URL:-}" ]; then log "DATABASE_URL is set: using that server"; return 0; fi
-  if running && answers; then log "MariaDB already running on 127.0.0.1:$DB_PORT (pid $(cat "$PIDF"))"; return 0; fi
+  if running && answers; then
+    if [ "${DB_BINLOG:-}" = "1" ] && [ "$(mariadb --no-defaults --socket="$SOCK" -uroot -N -e 'SELECT @@GLOBAL.log_bin')" != "1" ]; then
+      # a replica cannot follow a server without a binary log: restart this one with it
+      log "MariaDB is running without a binary log; restarting it with one (DB_BINLOG=1)"
+      stop
+    else
+      log "MariaDB already running on 127.0.0.1:$DB_PORT (pid $(cat "$PIDF"))"
+      return 0
+    fi
+  fi
   [ -x "$MARIADBD" ] || die "mariadbd not found: run scripts/ensure-system.sh"
   mkdir -p "$DB_DATA_DIR"
   if [ ! -d "$DB_DATA_DIR/mysql" ]; then

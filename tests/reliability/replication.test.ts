@@ -27,6 +27,11 @@ const PRIMARY_PORT = process.env.REPLICATION_PRIMARY_PORT ?? '3420';
 const REPLICA_PORT = process.env.REPLICATION_REPLICA_PORT ?? '3421';
 const PRIMARY_DIR = path.join(ROOT, '.data/replication-primary');
 const REPLICA_DIR = path.join(ROOT, '.data/replication-replica');
+const savedEnv = {
+  DB_PORT: process.env.DB_PORT,
+  DB_REPLICAS: process.env.DB_REPLICAS,
+  DB_REPLICA_RETRY_S: process.env.DB_REPLICA_RETRY_S,
+};
 process.env.DB_PORT = PRIMARY_PORT;
 process.env.DB_REPLICAS = `127.0.0.1:${REPLICA_PORT}`;
 // the replicas are tried again a second after a failure, so the test need not wait long
@@ -91,6 +96,12 @@ describe.skipIf(!HAS_MARIADBD)('read replica: MariaDB replication with Sequelize
 
   afterAll(async () => {
     await getSequelize().close();
+    // no later file in this process may find the closed instance or these settings
+    delete (globalThis as { __clackwaterSequelize?: unknown }).__clackwaterSequelize;
+    for (const [k, v] of Object.entries(savedEnv)) {
+      if (v === undefined) delete process.env[k];
+      else process.env[k] = v;
+    }
     sh('db-replica.sh', 'stop');
     sh('db.sh', 'stop');
   }, 120_000);
