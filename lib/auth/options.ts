@@ -58,7 +58,9 @@ export const authOptions: NextAuthOptions = {
         ]);
         if (!limited.ok) throw new Error(limitMessage(limited.retryAfterS));
         const { User } = initModels();
-        const found = await User.unscoped().findOne({ where: { email } });
+        // the primary, with read replicas: a password just reset or an address just
+        // confirmed counts at once, whatever a replica has applied so far
+        const found = await User.unscoped().findOne({ where: { email }, useMaster: true });
         // Only the address as registered signs in, not one the collation merely folds onto it.
         const user = found && sameAddress(email, found.email) ? found : null;
         // Verify even when there is no such account, so timing does not tell.
@@ -97,6 +99,8 @@ export const authOptions: NextAuthOptions = {
         // A link sign-in hands us the adapter's view of the user; read role and handle from ours.
         const u = await User.findByPk(Number(user.id), {
           attributes: ['id', 'role', 'handle', 'sessionVersion', 'units'],
+          // the session version a reset just raised, not a replica's older one
+          useMaster: true,
         });
         if (u) {
           token.uid = u.id;

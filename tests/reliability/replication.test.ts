@@ -14,6 +14,9 @@ import { renderWantsPrimary } from '@/lib/http/read-your-writes';
 import { workUnitAsyncStorage } from 'next/dist/server/app-render/work-unit-async-storage.external';
 import { RequestCookies } from 'next/dist/server/web/spec-extension/cookies';
 import { replicaHealth } from '@/lib/db/replication';
+import { authOptions } from '@/lib/auth/options';
+import { hashPassword } from '@/lib/auth/password';
+import { initModels } from '@/models';
 import { freshDemoDatabase } from '../support/db';
 import { actAs, sessionCookie } from '../support/act-as';
 
@@ -23,22 +26,26 @@ import { actAs, sessionCookie } from '../support/act-as';
  * 3408, which runs without a binary log): REPLICATION_PRIMARY_PORT / REPLICATION_REPLICA_PORT.
  */
 const ROOT = path.resolve(__dirname, '../..');
-const PRIMARY_PORT = process.env.REPLICATION_PRIMARY_PORT ?? '3420';
-const REPLICA_PORT = process.env.REPLICATION_REPLICA_PORT ?? '3421';
 const PRIMARY_DIR = path.join(ROOT, '.data/replication-primary');
 const REPLICA_DIR = path.join(ROOT, '.data/replication-replica');
-const savedEnv = {
-  DB_PORT: process.env.DB_PORT,
-  DB_REPLICAS: process.env.DB_REPLICAS,
-  DB_REPLICA_RETRY_S: process.env.DB_REPLICA_RETRY_S,
-  DATABASE_URL: process.env.DATABASE_URL,
-};
-// this file's own servers even where the suite runs against another MariaDB
-delete process.env.DATABASE_URL;
-process.env.DB_PORT = PRIMARY_PORT;
-process.env.DB_REPLICAS = `127.0.0.1:${REPLICA_PORT}`;
-// the replicas are tried again a second after a failure, so the test need not wait long
-process.env.DB_REPLICA_RETRY_S = '1';
+// before the imports run: some of them (the auth options) make the app's Sequelize instance
+const { PRIMARY_PORT, REPLICA_PORT, savedEnv } = vi.hoisted(() => {
+  const PRIMARY_PORT = process.env.REPLICATION_PRIMARY_PORT ?? '3420';
+  const REPLICA_PORT = process.env.REPLICATION_REPLICA_PORT ?? '3421';
+  const savedEnv = {
+    DB_PORT: process.env.DB_PORT,
+    DB_REPLICAS: process.env.DB_REPLICAS,
+    DB_REPLICA_RETRY_S: process.env.DB_REPLICA_RETRY_S,
+    DATABASE_URL: process.env.DATABASE_URL,
+  };
+  // this file's own servers even where the suite runs against another MariaDB
+  delete process.env.DATABASE_URL;
+  process.env.DB_PORT = PRIMARY_PORT;
+  process.env.DB_REPLICAS = `127.0.0.1:${REPLICA_PORT}`;
+  // the replicas are tried again a second after a failure, so the test need not wait long
+  process.env.DB_REPLICA_RETRY_S = '1';
+  return { PRIMARY_PORT, REPLICA_PORT, savedEnv };
+});
 
 const HAS_MARIADBD = spawnSync('bash', ['-c', 'command -v mariadbd || test -x /usr/sbin/mariadbd']).status === 0;
 if (!HAS_MARIADBD)
@@ -160,6 +167,29 @@ describe.skipIf(!HAS_MARIADBD)('read replica: MariaDB replication with Sequelize
       expect(await workUnitAsyncStorage.run(store('cw_units=US'), serverOfRead)).toBe(2);
     } finally {
       wantPrimaryWhen(() => false);
+      await asRoot(REPLICA_DIR, 'START SLAVE SQL_THREAD');
+    }
+    await caughtUp();
+  });
+
+  it('a password just changed signs in at once, whatever the replica has applied', async () => {
+    const { User } = initModels();
+    const member = (await User.findOne({ where: { handle: MEMBER } }))!;
+    const authorize = (
+      authOptions.providers.find(
+        (x) => (x as unknown as { options?: { id?: string } }).options?.id === 'password',
+      ) as unknown as { options: { authorize: (c: Record<string, string>, r: unknown) => Promise<unknown> } }
+    ).options.authorize;
+    await asRoot(REPLICA_DIR, 'STOP SLAVE SQL_THREAD');
+    try {
+      const password = 'a new password for the ram shed';
+      await User.update({ passwordHash: await hashPassword(password) }, { where: { id: member.id } });
+      const user = await authorize(
+        { email: member.email, password },
+        { headers: { 'x-forwarded-for': '10.7.63.200' } },
+      );
+      expect(user).toMatchObject({ id: String(member.id) });
+    } finally {
       await asRoot(REPLICA_DIR, 'START SLAVE SQL_THREAD');
     }
     await caughtUp();
