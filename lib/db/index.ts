@@ -52,6 +52,7 @@ export function getSequelize(): Sequelize {
 export async function pingDatabase(): Promise<{ latencyMs: number }> {
   const t0 = performance.now();
   // QueryTypes.SELECT: a RAW query trips over the mariadb driver's frozen result meta.
-  await getSequelize().query('SELECT 1', { type: QueryTypes.SELECT });
+  // useMaster: with read replicas this is the primary's health, not a replica's
+  await getSequelize().query('SELECT 1', { type: QueryTypes.SELECT, useMaster: true });
   return { latencyMs: Math.round((performance.now() - t0) * 10) / 10 };
 }
