@@ -177,7 +177,8 @@ describe('several instances on the engines a host would use (npm run cluster)', 
     expect(await attempt(A)).toMatch(/Too many attempts/);
   });
 
-  let hiddenAt = 0;
+  /** 2b's result, watched at the same time as 2a's list: each has the same second from the hide */
+  let pageGone: Promise<unknown> = Promise.resolve('not watched');
   it('2a. a moderator hiding the question on A takes it off the questions list on B within a second', async () => {
     // B has the thread page in its cache from test 1
     expect((await send(B, threadUrl)).text).toContain(title);
@@ -186,8 +187,15 @@ describe('several instances on the engines a host would use (npm run cluster)', 
       body: { action: 'hide', postType: 'question', postId: qid, reason: 'cluster check' },
     });
     expect(hidden.status, hidden.text).toBe(200);
-    hiddenAt = Date.now();
     // within a second (issue 23's target for a moderator's hide on every instance)
+    pageGone = within(
+      1_000,
+      async () => {
+        const page = await send(B, threadUrl);
+        return page.status === 404 && !page.text.includes(title);
+      },
+      'the hidden question gone from B’s thread page',
+    ).catch((err: Error) => err);
     await within(
       1_000,
       async () => !(await send(B, '/questions')).text.includes(title),
@@ -196,15 +204,9 @@ describe('several instances on the engines a host would use (npm run cluster)', 
   });
 
   it('2b. … and off B’s thread page within a second (a page cache shared by the instances)', async () => {
-    expect(hiddenAt).toBeGreaterThan(0);
-    await within(
-      Math.max(0, hiddenAt + 1_000 - Date.now()),
-      async () => {
-        const page = await send(B, threadUrl);
-        return page.status === 404 && !page.text.includes(title);
-      },
-      'the hidden question gone from B’s thread page',
-    );
+    const gone = await pageGone;
+    if (gone instanceof Error) throw gone;
+    expect(typeof gone).toBe('number');
   });
 
   it('3. the replica serves the lists: its Com_select grows with list loads, the primary’s does not', async () => {
