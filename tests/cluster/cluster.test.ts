@@ -49,14 +49,19 @@ async function send(base: string, p: string, init: { method?: string; who?: stri
   return { status: res.status, text, json: () => JSON.parse(text) };
 }
 
-/** Polls until `check` holds; how long it took, or throws after `ms`. */
+/**
+ * Polls until `check` holds; returns when the check that held was sent, counted from the
+ * start. Fails when a check sent after `ms` still does not hold: "within a second" is what a
+ * request made a second after the write sees, however long that request then takes.
+ */
 async function within(ms: number, check: () => Promise<boolean>, what: string): Promise<number> {
   const t0 = Date.now();
-  while (!(await check())) {
-    if (Date.now() - t0 > ms) throw new Error(`${what}: not within ${ms} ms`);
+  for (;;) {
+    const sent = Date.now() - t0;
+    if (await check()) return sent;
+    if (sent > ms) throw new Error(`${what}: not within ${ms} ms`);
     await new Promise((r) => setTimeout(r, 50));
   }
-  return Date.now() - t0;
 }
 
 async function comSelect(port: number): Promise<number> {
@@ -117,7 +122,8 @@ describe('several instances on the engines a host would use (npm run cluster)', 
 
   it('6. a post made on A is found by /api/search on B within a second', async () => {
     // B's search route loaded once, so the second measures the index change, not the route's first load
-    expect((await send(B, '/api/search?q=ram')).status).toBe(200);
+    for (const q of ['ram', 'waste valve'])
+      expect((await send(B, `/api/search?q=${encodeURIComponent(q)}`)).status).toBe(200);
     const answered = await send(A, `/api/questions/${qid}/answers`, {
       who: 'ironwheel_builds',
       body: { body: 'Check the clapper for a film of Glenmorrow algae: it makes the valve sticky as the water cools.' },
@@ -211,9 +217,8 @@ describe('several instances on the engines a host would use (npm run cluster)', 
 
   it('3. the replica serves the lists: its Com_select grows with list loads, the primary’s does not', async () => {
     expect(replicaRunning(), 'scripts/db-replica.sh is missing: no replica to read from').toBe(true);
-    const loads: string[] = [];
-    for (let page = 1; page <= 3; page++)
-      for (const perPage of [10, 20, 30, 40, 50]) loads.push(`/questions?page=${page}&perPage=${perPage}`);
+    // twenty pages not asked for before (a response cache in front would have none of them)
+    const loads = Array.from({ length: 20 }, (_, i) => `/questions?page=1&perPage=${i + 1}`);
     const [primary0, replica0] = [await comSelect(ports.db), await comSelect(ports.replica)];
     for (const p of loads) expect((await send(BALANCER, p)).status).toBe(200);
     const [primary1, replica1] = [await comSelect(ports.db), await comSelect(ports.replica)];
@@ -255,7 +260,9 @@ describe('several instances on the engines a host would use (npm run cluster)', 
     process.kill(pidOf(path.join(DIR, 'mariadb-replica/pid')), 'SIGKILL');
     const primary0 = await comSelect(ports.db);
     const statuses: number[] = [];
-    for (let page = 1; page <= 10; page++) statuses.push((await send(BALANCER, `/questions?page=${page}`)).status);
+    // ten more pages not asked for before (the demo has more than twenty questions)
+    for (let perPage = 1; perPage <= 10; perPage++)
+      statuses.push((await send(BALANCER, `/questions?page=2&perPage=${perPage}`)).status);
     expect(
       statuses.every((s) => s === 200),
       statuses.join(','),
