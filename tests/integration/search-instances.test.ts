@@ -57,12 +57,15 @@ describe('in-process search indexes follow each other through Redis (REDIS_URL)'
     await feedB.start();
   });
   afterAll(async () => {
-    feedB.stop();
-    stopIndexFeed();
-    delete process.env.REDIS_URL;
-    setSearchEngine(new FlexEngine());
-    await closeRedis();
-    await server.stop();
+    try {
+      feedB.stop();
+      stopIndexFeed();
+      delete process.env.REDIS_URL;
+      setSearchEngine(new FlexEngine());
+      await closeRedis();
+    } finally {
+      await server.stop();
+    }
   });
 
   let qid = 0;

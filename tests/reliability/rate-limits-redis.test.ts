@@ -26,11 +26,14 @@ describe('rate limits on Redis hold across app instances (REDIS_URL)', () => {
     g.__clackwaterLimits = undefined;
   });
   afterAll(async () => {
-    delete process.env.REDIS_URL;
-    g.__clackwaterLimits = undefined;
-    for (const c of clients) c.disconnect();
-    await closeRedis();
-    await server.stop();
+    try {
+      delete process.env.REDIS_URL;
+      g.__clackwaterLimits = undefined;
+      for (const c of clients) c.disconnect();
+      await closeRedis();
+    } finally {
+      await server.stop();
+    }
   });
 
   it('counts one key once across two instances and refuses past the limit on either', async () => {
