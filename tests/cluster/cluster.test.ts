@@ -229,29 +229,34 @@ describe('several instances on the engines a host would use (npm run cluster)', 
   });
 
   it('4. SIGTERM to one instance under a steady stream through the balancer loses no request', async () => {
-    const results = { ok: 0, bad: [] as string[] };
+    const results = { ok: 0, okAfterStop: 0, bad: [] as string[] };
     let stopAt = Infinity;
+    let stoppedAt = Infinity;
     const worker = async () => {
       while (Date.now() < stopAt) {
+        const sent = Date.now();
         try {
           const res = await fetch(`${BALANCER}/questions`, { headers: { 'x-forwarded-for': '10.24.0.1' } });
           await res.arrayBuffer();
-          if (res.status >= 200 && res.status < 300) results.ok++;
-          else results.bad.push(`HTTP ${res.status}`);
+          if (res.status >= 200 && res.status < 300) {
+            results.ok++;
+            if (sent > stoppedAt) results.okAfterStop++;
+          } else results.bad.push(`HTTP ${res.status}`);
         } catch (err) {
           results.bad.push(err instanceof Error ? err.message : String(err));
         }
       }
     };
-    const start = Date.now();
-    stopAt = start + 8_000;
+    stopAt = Date.now() + 10_000;
     const workers = Array.from({ length: 4 }, worker);
     await new Promise((r) => setTimeout(r, 2_000));
     process.kill(pidOf(path.join(DIR, `app-${ports.appA}.pid`)), 'SIGTERM');
+    stoppedAt = Date.now();
     await Promise.all(workers);
     // none lost: the instance finishes what it has in flight and HAProxy resends refused connections
     expect(results.bad, results.bad.slice(0, 5).join(' | ')).toEqual([]);
-    expect(results.ok).toBeGreaterThan(20);
+    // the stream ran on across the stop: each of the four workers was answered after it (common practice, no source)
+    expect(results.okAfterStop, `${results.ok} answered in all`).toBeGreaterThanOrEqual(4);
     await within(10_000, async () => (await fetch(`${A}/api/health`).catch(() => null)) === null, 'A stopped');
   });
 
