@@ -2,7 +2,8 @@
  * Runs once when a server starts (Next's instrumentation hook): writes in lib/ mark
  * thread pages stale through Next's page cache (lib/questions/after-write.ts), search builds its
  * index in the background so the first search does not wait for it, and the mail
- * scheduler starts the outbox worker and the digests (MAIL_WORKER=off skips it).
+ * scheduler starts the outbox worker and the digests (MAIL_WORKER=off skips it). With
+ * REDIS_URL the shared Redis connection opens at once.
  */
 export async function register() {
   if (process.env.NEXT_RUNTIME !== 'nodejs') return;
@@ -12,6 +13,11 @@ export async function register() {
   ]);
   onPageStale((path) => revalidatePath(path));
   if (process.env.DB_REPLICAS) await readYourWritesInPages();
+  if (process.env.REDIS_URL) {
+    // connect now: until the connection is ready, rate limits count in this process's memory only
+    const { redis } = await import('@/lib/redis');
+    redis();
+  }
   if (process.env.MAIL_WORKER !== 'off') {
     const { startMailScheduler } = await import('@/lib/mail/scheduler');
     startMailScheduler();

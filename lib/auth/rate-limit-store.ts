@@ -1,6 +1,7 @@
 import 'server-only';
 import { QueryTypes, type Sequelize } from 'sequelize';
-import { RateLimiterMemory, RateLimiterMySQL } from 'rate-limiter-flexible';
+import type Redis from 'ioredis';
+import { RateLimiterMemory, RateLimiterMySQL, RateLimiterRedis } from 'rate-limiter-flexible';
 
 /**
  * rate-limiter-flexible's MySQL limiter, kept as the library wrote it (ranking,
@@ -10,6 +11,30 @@ import { RateLimiterMemory, RateLimiterMySQL } from 'rate-limiter-flexible';
  * not. Every app instance on the same database then shares one count per key.
  */
 type Row = { points: number; expire: number | null };
+
+/** What a shared store falls back to when it does not answer: this process's own count. */
+function insurance(points: number, duration: number, keyPrefix: string) {
+  return new RateLimiterMemory({ points, duration, keyPrefix: `${keyPrefix}-insurance` });
+}
+
+/**
+ * rate-limiter-flexible's Redis limiter on our ioredis client (REDIS_URL): one atomic
+ * INCR-with-expiry per attempt, shared by every instance. Redis down or reconnecting
+ * sends the attempt to this process's memory at once (`rejectIfRedisNotReady`), so a
+ * sign-in never waits on Redis and a flood is still counted, per instance, meanwhile.
+ */
+export function rateLimiterOnRedis(opts: { points: number; duration: number; keyPrefix: string; client: Redis }) {
+  return new RateLimiterRedis({
+    storeClient: opts.client,
+    // ioredis, not node-redis: the library's own switch for the client's call style
+    useRedisPackage: false,
+    rejectIfRedisNotReady: true,
+    points: opts.points,
+    duration: opts.duration,
+    keyPrefix: `cw-rl:${opts.keyPrefix}`,
+    insuranceLimiter: insurance(opts.points, opts.duration, opts.keyPrefix),
+  });
+}
 
 export class RateLimiterMariaDB extends RateLimiterMySQL {
   private db: Sequelize;
@@ -24,11 +49,7 @@ export class RateLimiterMariaDB extends RateLimiterMySQL {
       tableName: 'rate_limits',
       tableCreated: true,
       // the database not answering must not lock everyone out, nor let floods through
-      insuranceLimiter: new RateLimiterMemory({
-        points: opts.points,
-        duration: opts.duration,
-        keyPrefix: `${opts.keyPrefix}-insurance`,
-      }),
+      insuranceLimiter: insurance(opts.points, opts.duration, opts.keyPrefix),
     });
     this.db = opts.sequelize;
   }

@@ -1,14 +1,18 @@
 import 'server-only';
 import { RateLimiterMemory, RateLimiterRes } from 'rate-limiter-flexible';
 import { getSequelize } from '@/lib/db';
-import { RateLimiterMariaDB } from './rate-limit-store';
+import { redis } from '@/lib/redis';
+import { RateLimiterMariaDB, rateLimiterOnRedis } from './rate-limit-store';
 
 /** Limits on the account endpoints and on writing, per client address and per account. */
 /**
- * In this process's memory by default; with RATE_LIMIT_STORE=mariadb the counts live
- * in the database, so they hold across every app instance (README, "Scaling out").
+ * With REDIS_URL the counts live in Redis, one count per key for every app instance;
+ * else in this process's memory, or with RATE_LIMIT_STORE=mariadb in the database
+ * (README, "Scaling out").
  */
 function limiter(points: number, durationS: number, keyPrefix: string) {
+  const client = redis();
+  if (client) return rateLimiterOnRedis({ points, duration: durationS, keyPrefix, client });
   if (process.env.RATE_LIMIT_STORE === 'mariadb')
     return new RateLimiterMariaDB({ points, duration: durationS, keyPrefix, sequelize: getSequelize() });
   return new RateLimiterMemory({ points, duration: durationS, keyPrefix });

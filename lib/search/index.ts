@@ -1,14 +1,16 @@
 import 'server-only';
 import { mkdirSync, statSync, writeFileSync } from 'node:fs';
 import path from 'node:path';
-import { allGuideDocs, allThreadDocs, fieldLogDocs, threadDocs, type SearchKind } from './documents';
+import { allGuideDocs, allThreadDocs, fieldLogDocs, threadDocs, type SearchDoc, type SearchKind } from './documents';
 import type { SearchEngine, SearchFilters } from './engine';
+import { IndexFeed, type IndexChange } from './feed';
 import { FlexEngine } from './flex-engine';
 import { MeiliEngine } from './meili-engine';
 import { queryTerms } from './normalize';
 import type { UnitSystem } from '@/lib/hydraulics';
 import { quantitiesInUnits } from '@/lib/units/in-text';
 import { highlight, snippet, type Segment } from './snippet';
+import { redisUrl } from '@/lib/redis';
 
 export { SEARCH_KINDS, type SearchKind, type SearchDoc } from './documents';
 export type { Segment } from './snippet';
@@ -16,7 +18,8 @@ export type { Segment } from './snippet';
 /**
  * Search across guides, questions, answers, replies and field log entries.
  * One interface, two engines: flexsearch in this process (the default), or
- * Meilisearch when MEILISEARCH_URL is set (shared by every app instance).
+ * Meilisearch when MEILISEARCH_URL is set (shared by every app instance). With
+ * REDIS_URL, in-process indexes pass their changes to each other (./feed.ts).
  */
 
 interface State {
@@ -26,7 +29,7 @@ interface State {
   checkedAt: number;
 }
 
-const g = globalThis as unknown as { __clackwaterSearch?: State };
+const g = globalThis as unknown as { __clackwaterSearch?: State; __clackwaterSearchFeed?: IndexFeed | null };
 
 export function createEngine(env: Record<string, string | undefined> = process.env): SearchEngine {
   return env.MEILISEARCH_URL
@@ -45,6 +48,7 @@ function state(): State {
  */
 export function setSearchEngine(engine: SearchEngine, opts: { filled?: boolean } = {}) {
   const now = Date.now();
+  stopIndexFeed();
   g.__clackwaterSearch = {
     engine,
     built: opts.filled ? Promise.resolve() : null,
@@ -55,6 +59,47 @@ export function setSearchEngine(engine: SearchEngine, opts: { filled?: boolean }
 
 export function searchEngine(): SearchEngine {
   return state().engine;
+}
+
+/** Another instance's change, applied to this in-process index (nothing to do for a shared Meilisearch). */
+async function applyChange(change: IndexChange): Promise<void> {
+  const s = state();
+  if (s.engine.name !== 'flexsearch' || !s.built) return; // not built yet: the coming build reads the database
+  await s.built;
+  if (change.upsert?.length) await s.engine.upsert(change.upsert);
+  if (change.remove?.length) await s.engine.remove(change.remove);
+}
+
+/**
+ * With REDIS_URL and the in-process engine, the channel this instance's index changes
+ * go out on and the others' come in on (lib/search/feed.ts); null otherwise.
+ */
+function feed(): IndexFeed | null {
+  if (g.__clackwaterSearchFeed === undefined) {
+    g.__clackwaterSearchFeed =
+      redisUrl() && state().engine.name === 'flexsearch'
+        ? new IndexFeed(applyChange, () => {
+            // changes may have been missed while away: rebuild on the next search
+            state().built = null;
+          })
+        : null;
+  }
+  return g.__clackwaterSearchFeed;
+}
+
+/** Stops listening to other instances (tests; a script that should end). */
+export function stopIndexFeed() {
+  g.__clackwaterSearchFeed?.stop();
+  g.__clackwaterSearchFeed = undefined;
+}
+
+/** Indexes `docs` here (when this index is built) and tells the other instances. */
+async function indexDocs(docs: SearchDoc[]): Promise<void> {
+  const s = state();
+  await feed()?.publish({ upsert: docs });
+  if (!s.built) return;
+  await s.built;
+  await s.engine.upsert(docs);
 }
 
 /** `npm run search:rebuild` touches this file; in-process indexes older than it rebuild. */
@@ -116,6 +161,8 @@ export async function ensureIndex(): Promise<void> {
     if (stampTime() > s.builtAt) s.built = null;
   }
   s.built ??= (async () => {
+    // listening before reading, so no change falls between the build's read and the first message
+    await feed()?.start();
     s.builtAt = Date.now();
     if (s.engine.name === 'meilisearch' && (await s.engine.count()) > 0) return;
     await fill(s.engine);
@@ -133,11 +180,10 @@ export async function ensureIndex(): Promise<void> {
  * error is logged; the next rebuild repairs the index.
  */
 export async function indexThread(questionId: number): Promise<void> {
-  const s = state();
-  if (!s.built) return; // not built yet: the coming build reads the database anyway
+  // not built here and nobody to tell: the coming build reads the database anyway
+  if (!state().built && !feed()) return;
   try {
-    await s.built;
-    await s.engine.upsert(await threadDocs([questionId]));
+    await indexDocs(await threadDocs([questionId]));
   } catch (err) {
     console.error(`search: could not index thread ${questionId}:`, err instanceof Error ? err.message : err);
   }
@@ -145,11 +191,9 @@ export async function indexThread(questionId: number): Promise<void> {
 
 /** Brings field log entries up to date after a write (record, import, hide, restore, delete). */
 export async function indexFieldLog(ids: number[]): Promise<void> {
-  const s = state();
-  if (!s.built || ids.length === 0) return;
+  if ((!state().built && !feed()) || ids.length === 0) return;
   try {
-    await s.built;
-    await s.engine.upsert(await fieldLogDocs(ids));
+    await indexDocs(await fieldLogDocs(ids));
   } catch (err) {
     console.error(
       `search: could not index field log entries ${ids.join(', ')}:`,
