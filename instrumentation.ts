@@ -10,7 +10,17 @@ export async function register() {
     import('next/cache'),
     import('@/lib/questions/after-write'),
   ]);
-  onPageStale((path) => revalidatePath(path));
+  // the production server's response cache (scripts/response-cache.mjs) keeps the lists
+  // and the home page that show this thread, so a stale thread empties it too
+  // (set up by the server after this runs, so looked up at each write)
+  const responseCache = () =>
+    (globalThis as { [k: symbol]: { clear(reason: string): void } | undefined })[
+      Symbol.for('clackwater.responseCache')
+    ];
+  onPageStale((path) => {
+    responseCache()?.clear(`stale ${path}`);
+    revalidatePath(path);
+  });
   if (process.env.MAIL_WORKER !== 'off') {
     const { startMailScheduler } = await import('@/lib/mail/scheduler');
     startMailScheduler();
