@@ -31,3 +31,16 @@ export async function register() {
     console.error(`search: the index will be built on the first search (${err instanceof Error ? err.message : err})`),
   );
 }
+
+/**
+ * A page whose render failed (the database went away mid-render, say) may still go out
+ * as a 200 with the error boundary in it: the response cache must not keep it. The
+ * server marks each render it may keep with a header (scripts/response-cache.mjs).
+ */
+export function onRequestError(_err: unknown, request: Readonly<{ headers: NodeJS.Dict<string | string[]> }>) {
+  const id = request.headers['x-clackwater-render'];
+  const cache = (globalThis as { [k: symbol]: { renderFailed?(id: string): void } | undefined })[
+    Symbol.for('clackwater.responseCache')
+  ];
+  if (typeof id === 'string') cache?.renderFailed?.(id);
+}

@@ -7,6 +7,7 @@
  *   node --import tsx bench/load.ts http://127.0.0.1:3300 <threadId> [deep list path]
  * ONLY=a,b runs only the targets whose names contain one of the words (the baseline always).
  */
+import { loadavg } from 'node:os';
 import autocannon, { type Result } from 'autocannon';
 
 const base = process.argv[2] ?? 'http://127.0.0.1:3300';
@@ -61,7 +62,12 @@ async function main() {
     });
   }
   const baseline = rows[0].rps;
-  console.log(`\n20 connections, ${SECONDS} s each, ${base}`);
+  // the machine is shared: the load average says how much else ran beside the server
+  console.log(
+    `\n20 connections, ${SECONDS} s each, ${base}; load average ${loadavg()
+      .map((l) => l.toFixed(1))
+      .join(', ')}`,
+  );
   console.log('| page | req/s | × static | p50 ms | p99 ms | errors | non-2xx | target met |');
   console.log('|---|---|---|---|---|---|---|---|');
   for (const [i, r] of rows.entries()) {
@@ -79,6 +85,11 @@ async function main() {
   });
   console.log(
     `\n100 connections for ${SOAK_SECONDS} s over the ${targets.length - 1} pages in turn: ${soak.requests.total} requests, ${soak.requests.average.toFixed(0)} req/s, p50 ${soak.latency.p50} ms, p99 ${soak.latency.p99} ms, errors ${soak.errors}, timeouts ${soak.timeouts}, non-2xx ${soak.non2xx} (target: p99 < 1,000 ms; 0, 0, 0)`,
+  );
+  console.log(
+    `load average after the soak: ${loadavg()
+      .map((l) => l.toFixed(1))
+      .join(', ')}`,
   );
   if (soak.errors || soak.timeouts || soak.non2xx) process.exitCode = 1;
 }

@@ -22,6 +22,8 @@ export function createResponseCache(opts?: {
 }): {
   wrap(handle: Handler): (req: IncomingMessage, res: ServerResponse) => Promise<unknown>;
   clear(reason?: string, opts?: { local?: boolean }): void;
+  renderFailed(id: string): void;
+  idle(): Promise<void>;
   stats: Record<'hits' | 'misses' | 'stored' | 'clears' | 'evictions' | 'passes', number>;
   readonly size: number;
   readonly bytes: number;

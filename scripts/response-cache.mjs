@@ -8,7 +8,9 @@
 // moment anything is written. Signed-in members always get pages rendered for them.
 //
 // What is never kept: a response with Set-Cookie, anything but a 200, a request carrying a
-// session cookie or Next's client-navigation headers, and any path off the allow-list.
+// session cookie or Next's client-navigation headers, any path off the allow-list, a render
+// that reported an error (onRequestError in instrumentation.ts) and a page showing the
+// database outage notice (a failed page can still go out as a 200 with its error boundary).
 //
 // CSP: a page rendered per request carries a fresh nonce (proxy.ts). A kept copy must not
 // hand that nonce to every later reader (an injected script could reuse it), so before a
@@ -60,9 +62,13 @@ const DROPPED = new Set([
   'content-length',
   'content-encoding',
   'x-clackwater-cache',
+  // how Next answered that one request (HIT, MISS, STALE): not true of a later copy
+  'x-nextjs-cache',
 ]);
 
 export const GLOBAL_KEY = Symbol.for('clackwater.responseCache');
+/** The attribute components/ServiceUnavailable.tsx puts on an outage notice. */
+const OUTAGE_MARK = 'data-cw-outage';
 
 function cookieValue(header, name) {
   const m = (header ?? '').match(new RegExp(`(?:^|;\\s*)${name}=([^;]*)`));
@@ -155,6 +161,8 @@ export function createResponseCache(opts = {}) {
   const entries = new Map();
   /** renders in flight, by key: later readers wait for the first instead of rendering too */
   const inflight = new Map();
+  /** renders that reported an error (instrumentation.ts onRequestError): never kept */
+  const failedRenders = new Set();
   let bytes = 0;
   let generation = 0;
   const stats = { hits: 0, misses: 0, stored: 0, clears: 0, evictions: 0, passes: 0 };
@@ -216,6 +224,8 @@ export function createResponseCache(opts = {}) {
   /** Passes the request to Next, keeping a copy of a 200 without Set-Cookie. */
   function renderAndKeep(req, res, handle, key) {
     const gen = generation;
+    const renderId = randomUUID();
+    req.headers['x-clackwater-render'] = renderId;
     delete req.headers['accept-encoding']; // the copy kept must be plain text to take its nonce out
     const chunks = [];
     let size = 0;
@@ -251,11 +261,15 @@ export function createResponseCache(opts = {}) {
     inflight.set(key, new Promise((r) => (done = r)));
     const finish = async () => {
       try {
-        if (tooBig || res.statusCode !== 200 || gen !== generation || !available()) return;
+        if (failedRenders.delete(renderId) || tooBig || res.statusCode !== 200) return;
+        if (gen !== generation || !available()) return;
         const headers = new Map();
         for (const [k, v] of [...Object.entries(res.getHeaders()), ...headArgs]) headers.set(k.toLowerCase(), v);
         if (headers.has('set-cookie') || headers.has('content-encoding')) return;
-        const clean = withoutNonce(Buffer.concat(chunks), headers.get('content-security-policy'));
+        const body = Buffer.concat(chunks);
+        // a page showing an outage in place of its content (components/ServiceUnavailable.tsx)
+        if (body.includes(OUTAGE_MARK)) return;
+        const clean = withoutNonce(body, headers.get('content-security-policy'));
         if (!clean) return;
         if (clean.csp) headers.set('content-security-policy', clean.csp);
         const gz = clean.body.length > 1024 ? await gzipAsync(clean.body) : null;
@@ -273,6 +287,7 @@ export function createResponseCache(opts = {}) {
     res.once('finish', () => void finish());
     res.once('close', () => {
       if (!res.writableFinished) {
+        failedRenders.delete(renderId);
         inflight.delete(key);
         done();
       }
@@ -311,7 +326,13 @@ export function createResponseCache(opts = {}) {
   return {
     wrap,
     clear,
+    /** The render with this id failed: its page is not kept. */
+    renderFailed(id) {
+      if (failedRenders.size < 10_000) failedRenders.add(id);
+    },
     stats,
+    /** Resolves once every render under way has been kept or let go (for tests). */
+    idle: () => Promise.all([...inflight.values()]).then(() => undefined),
     get size() {
       return entries.size;
     },

@@ -59,7 +59,7 @@ async function responseCache() {
     const { redisInvalidation } = await import('./response-cache-redis.mjs');
     channel = redisInvalidation(process.env.REDIS_URL, INSTANCE_ID, (reason) => cache.clear(reason, { local: true }));
   }
-  globalThis[GLOBAL_KEY] = { clear: (reason) => cache.clear(reason) };
+  globalThis[GLOBAL_KEY] = { clear: (reason) => cache.clear(reason), renderFailed: (id) => cache.renderFailed(id) };
   return cache;
 }
 

@@ -10,7 +10,14 @@ import { inlineScriptHashes, newNonce } from '@/lib/http/csp';
  * like a page rendered per request, puts a fresh nonce in its policy and on its scripts
  * and streams the page in pieces. `renders` counts the requests that reached it.
  */
-type Reply = { status?: number; setCookie?: boolean; body?: string; delayMs?: number };
+type Reply = {
+  status?: number;
+  setCookie?: boolean;
+  body?: string;
+  delayMs?: number;
+  fail?: boolean;
+  during?: () => void;
+};
 let servers: http.Server[] = [];
 afterEach(async () => {
   await Promise.all(servers.map((s) => new Promise((r) => s.close(r))));
@@ -35,7 +42,10 @@ async function start(
       `default-src 'self'; script-src 'self' 'nonce-${nonce}' 'sha256-abc='; object-src 'none'`,
     );
     if (r.setCookie) res.setHeader('set-cookie', 'x=1; Path=/');
+    // what instrumentation.ts onRequestError does when a render throws
+    if (r.fail) cache.renderFailed(String(req.headers['x-clackwater-render']));
     res.write(`<!DOCTYPE html><html><head><script nonce="${nonce}">self.__next_f=[]</script></head>`);
+    r.during?.();
     res.write(`<body>${r.body ?? `v${state.version} ${req.url}`}<script src="/_next/a.js" nonce="${nonce}"></script>`);
     res.end(`<script nonce="${nonce}">self.__next_f.push([1,"{\\"nonce\\":\\"${nonce}\\"}"])</script></body></html>`);
   };
@@ -44,12 +54,17 @@ async function start(
   await new Promise<void>((r) => server.listen(0, '127.0.0.1', r));
   const base = `http://127.0.0.1:${(server.address() as AddressInfo).port}`;
   const get = (path: string, headers: Record<string, string> = {}, method = 'GET') =>
-    fetch(base + path, { method, headers, redirect: 'manual' }).then(async (r) => ({
-      status: r.status,
-      headers: r.headers,
-      body: await r.text(),
-      cache: r.headers.get('x-clackwater-cache'),
-    }));
+    fetch(base + path, { method, headers, redirect: 'manual' }).then(async (r) => {
+      const out = {
+        status: r.status,
+        headers: r.headers,
+        body: await r.text(),
+        cache: r.headers.get('x-clackwater-cache'),
+      };
+      // a copy is kept just after its response ends: wait for that, so each check sees it
+      await cache.idle();
+      return out;
+    });
   return { cache, state, get, base };
 }
 
@@ -72,10 +87,13 @@ describe('response cache', () => {
     expect(state.renders).toBe(4);
   });
 
-  it('never keeps a signed-in request, a Set-Cookie, a non-200, a client navigation or a path off the list', async () => {
+  it('never keeps a signed-in request, a Set-Cookie, a non-200, a failed render, an outage notice, a client navigation or a path off the list', async () => {
     const { state, get } = await start({}, (req) => ({
       status: req.url === '/tags/missing' ? 404 : 200,
       setCookie: req.url === '/search?q=cookie',
+      // a render that threw (then answered 200 with the error boundary), and the outage notice
+      fail: req.url === '/questions?page=2',
+      body: req.url === '/questions?show=unanswered' ? '<div role="alert" data-cw-outage="">…</div>' : undefined,
     }));
     const twice = async (path: string, headers: Record<string, string> = {}) => {
       const before = state.renders;
@@ -87,6 +105,8 @@ describe('response cache', () => {
     await twice('/', { cookie: 'next-auth.session-token=abc' });
     await twice('/', { cookie: 'cw_units=US; __Secure-next-auth.session-token.0=abc' });
     await twice('/search?q=cookie');
+    await twice('/questions?page=2', {});
+    await twice('/questions?show=unanswered');
     await twice('/tags/missing');
     await twice('/questions', { rsc: '1' });
     for (const path of [
@@ -118,11 +138,12 @@ describe('response cache', () => {
   });
 
   it('a page whose render began before a write finished is not kept', async () => {
-    const { state, get, cache } = await start({}, (req) => ({ delayMs: req.url === '/field-log' ? 150 : 0 }));
-    const slow = get('/field-log');
-    await new Promise((r) => setTimeout(r, 30));
-    cache.clear('a write committed while the page was rendering');
-    await slow;
+    let clear = () => {};
+    const { state, get, cache } = await start({}, (req) => ({
+      during: req.url === '/field-log' && state.renders === 1 ? clear : undefined,
+    }));
+    clear = () => cache.clear('a write committed while the page was rendering');
+    await get('/field-log');
     await get('/field-log');
     expect(state.renders).toBe(2);
   });
