@@ -216,7 +216,8 @@ export function createResponseCache(opts = {}) {
     headers['content-length'] = String(body.length);
     headers['x-clackwater-cache'] = 'hit';
     if (zipped) headers['content-encoding'] = 'gzip';
-    if (e.gz) headers.vary = headers.vary ? `${headers.vary}, Accept-Encoding` : 'Accept-Encoding';
+    if (e.gz && !/accept-encoding/i.test(String(headers.vary ?? '')))
+      headers.vary = headers.vary ? `${headers.vary}, Accept-Encoding` : 'Accept-Encoding';
     res.writeHead(e.status, headers);
     res.end(req.method === 'HEAD' ? undefined : body);
   }
