@@ -48,6 +48,7 @@ const NAVIGATION_HEADERS = [
   'rsc',
   'next-router-state-tree',
   'next-router-prefetch',
+  'next-router-segment-prefetch',
   'next-action',
   'next-url',
   'purpose',
@@ -100,7 +101,8 @@ export function isCacheableRequest(req, paths = CACHEABLE_PATHS) {
   if (req.method !== 'GET' && req.method !== 'HEAD') return false;
   const pathname = (req.url ?? '').split('?')[0];
   if (!paths.some((p) => p.test(pathname))) return false;
-  if (hasSession(req.headers.cookie)) return false;
+  // next-auth's getToken also takes the session from `Authorization: Bearer …`
+  if (hasSession(req.headers.cookie) || req.headers.authorization) return false;
   return !NAVIGATION_HEADERS.some((h) => h in req.headers);
 }
 

@@ -104,6 +104,7 @@ describe('response cache', () => {
     };
     await twice('/', { cookie: 'next-auth.session-token=abc' });
     await twice('/', { cookie: 'cw_units=US; __Secure-next-auth.session-token.0=abc' });
+    await twice('/', { authorization: 'Bearer abc' });
     await twice('/search?q=cookie');
     await twice('/questions?page=2', {});
     await twice('/questions?show=unanswered');
