@@ -227,6 +227,8 @@ export function createResponseCache(opts = {}) {
   /** Passes the request to Next, keeping a copy of a 200 without Set-Cookie. */
   function renderAndKeep(req, res, handle, key) {
     const gen = generation;
+    // a page's age counts from when it began to render: what it shows is from then
+    const started = now();
     const renderId = randomUUID();
     req.headers['x-clackwater-render'] = renderId;
     delete req.headers['accept-encoding']; // the copy kept must be plain text to take its nonce out
@@ -279,7 +281,7 @@ export function createResponseCache(opts = {}) {
         if (gen !== generation) return;
         const kept = [...headers].filter(([k]) => !DROPPED.has(k));
         const size = clean.body.length + (gz?.length ?? 0) + 1024;
-        if (size <= maxBytes) store(key, { status: 200, headers: kept, body: clean.body, gz, at: now(), size });
+        if (size <= maxBytes) store(key, { status: 200, headers: kept, body: clean.body, gz, at: started, size });
       } catch (err) {
         console.error(`response cache: not kept (${err instanceof Error ? err.message : String(err)})`);
       } finally {
