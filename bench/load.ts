@@ -45,9 +45,16 @@ function run(opts: autocannon.Options): Promise<Result> {
 
 async function main() {
   // warm every route (compiles nothing in production, but fills caches and the search index)
+  // (a few tries: while the server builds its search index at start-up a database
+  // connection can time out on a busy machine, and that one answer is a 500)
   for (const t of targets) {
-    const res = await fetch(base + t.path);
-    if (!res.ok) throw new Error(`${t.path} answered ${res.status} before the run`);
+    for (let attempt = 1; ; attempt++) {
+      const res = await fetch(base + t.path);
+      if (res.ok) break;
+      if (attempt === 3) throw new Error(`${t.path} answered ${res.status} before the run`);
+      console.error(`${t.path} answered ${res.status} while warming up; trying again`);
+      await new Promise((r) => setTimeout(r, 5_000));
+    }
   }
   const rows: { name: string; rps: number; p50: number; p99: number; errors: number; non2xx: number }[] = [];
   for (const t of targets) {
