@@ -11,7 +11,17 @@ export async function register() {
     import('next/cache'),
     import('@/lib/questions/after-write'),
   ]);
-  onPageStale((path) => revalidatePath(path));
+  // the production server's response cache (scripts/response-cache.mjs) keeps the lists
+  // and the home page that show this thread, so a stale thread empties it too
+  // (set up by the server after this runs, so looked up at each write)
+  const responseCache = () =>
+    (globalThis as { [k: symbol]: { clear(reason: string): void } | undefined })[
+      Symbol.for('clackwater.responseCache')
+    ];
+  onPageStale((path) => {
+    responseCache()?.clear(`stale ${path}`);
+    revalidatePath(path);
+  });
   if (process.env.DB_REPLICAS) await readYourWritesInPages();
   if (process.env.REDIS_URL) {
     // connect now: until the connection is ready, rate limits count in this process's memory only
@@ -36,4 +46,17 @@ async function readYourWritesInPages() {
     import('@/lib/http/read-your-writes'),
   ]);
   wantPrimaryWhen(renderWantsPrimary);
+}
+
+/**
+ * A page whose render failed (the database went away mid-render, say) may still go out
+ * as a 200 with the error boundary in it: the response cache must not keep it. The
+ * server marks each render it may keep with a header (scripts/response-cache.mjs).
+ */
+export function onRequestError(_err: unknown, request: Readonly<{ headers: NodeJS.Dict<string | string[]> }>) {
+  const id = request.headers['x-clackwater-render'];
+  const cache = (globalThis as { [k: symbol]: { renderFailed?(id: string): void } | undefined })[
+    Symbol.for('clackwater.responseCache')
+  ];
+  if (typeof id === 'string') cache?.renderFailed?.(id);
 }

@@ -3,6 +3,8 @@
  * HSTS from proxy.ts; API answers are data, never a document to run, so they allow
  * nothing at all. Two CSP headers on one response would both apply, so pages get none here.
  */
+import { fileURLToPath } from 'node:url';
+
 const apiCsp = "default-src 'none'; frame-ancestors 'none'";
 
 const securityHeaders = [
@@ -46,6 +48,12 @@ const nextConfig = {
     '@aws-sdk/client-s3',
   ],
   typedRoutes: false,
+  // With REDIS_URL, Next's page cache (the thread pages) lives in Redis for every instance,
+  // so a write marks a page stale on all of them at once (scripts/redis-cache-handler.mjs);
+  // without it, Next's default (each instance's disk and memory). Read when the server starts.
+  cacheHandler: process.env.REDIS_URL
+    ? fileURLToPath(new URL('./scripts/redis-cache-handler.mjs', import.meta.url))
+    : undefined,
   async headers() {
     return [
       { source: '/:path*', headers: securityHeaders },

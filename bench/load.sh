@@ -1,8 +1,8 @@
 #!/usr/bin/env bash
 # npm run bench:load — the load benchmark end to end on loopback: a benchmark database
 # (clackwater_test_load on the test MariaDB) with the demo, 20,000 invented members and
-# 400,000 invented posts (100,000 questions, 300,000 answers and replies), `next start`
-# on it, then bench/load.ts. About six minutes on two cores. BENCH_PORT picks the server's
+# 400,000 invented posts (100,000 questions, 300,000 answers and replies), the production
+# server (scripts/server.mjs: Next behind the response cache) on it, then bench/load.ts. About six minutes on two cores. BENCH_PORT picks the server's
 # port; DB_PORT the test MariaDB's.
 set -euo pipefail
 export CLACKWATER_ENV=test DB_NAME=clackwater_test_load PORT="${BENCH_PORT:-3300}"
@@ -19,7 +19,7 @@ else
   npx tsx scripts/migrate.ts up # posts seeded before a newer migration (017 fills the lists' counts)
 fi
 [ -f .next/BUILD_ID ] || npx next build
-node node_modules/next/dist/bin/next start -p "$PORT" -H 127.0.0.1 >.data/bench-load-server.log 2>&1 &
+node scripts/server.mjs -p "$PORT" -H 127.0.0.1 >.data/bench-load-server.log 2>&1 &
 server=$!
 trap 'kill $server 2>/dev/null || true' EXIT
 for _ in $(seq 1 120); do curl -sf "http://127.0.0.1:$PORT/api/health" >/dev/null && break; sleep 0.5; done

@@ -7,10 +7,14 @@
 // would key on whatever the client chose. With the peer always last, lib/auth/rate-limit.ts
 // counts from the right (TRUST_PROXY_HOPS entries are the proxies in front).
 //
+// It also keeps the public pages a signed-out reader sees (response-cache.mjs says which,
+// and when they are dropped); RESPONSE_CACHE=off serves every page from Next.
+//
 //   node scripts/server.mjs [-p PORT] [-H HOST]
 import http from 'node:http';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
+import { createResponseCache, GLOBAL_KEY, INSTANCE_ID } from './response-cache.mjs';
 
 /** Adds the socket's peer to the request's X-Forwarded-For (Node joins repeated headers with ", "). */
 export function appendPeer(req) {
@@ -38,6 +42,27 @@ function arg(flag, long, fallback) {
   return i >= 0 && argv[i + 1] ? argv[i + 1] : fallback;
 }
 
+/**
+ * The response cache, shared by every instance through Redis when REDIS_URL is set (a
+ * write on one empties all), and reachable from the app's page-stale hook (instrumentation.ts).
+ */
+async function responseCache() {
+  if (process.env.RESPONSE_CACHE === 'off') return null;
+  let channel = null;
+  const cache = createResponseCache({
+    maxAgeMs: Number(process.env.RESPONSE_CACHE_MAX_AGE_S ?? 60) * 1000,
+    maxBytes: Number(process.env.RESPONSE_CACHE_MB ?? 64) * 1024 * 1024,
+    available: () => !channel || channel.connected(),
+    onClear: (reason) => channel?.publish(reason),
+  });
+  if (process.env.REDIS_URL) {
+    const { redisInvalidation } = await import('./response-cache-redis.mjs');
+    channel = redisInvalidation(process.env.REDIS_URL, INSTANCE_ID, (reason) => cache.clear(reason, { local: true }));
+  }
+  globalThis[GLOBAL_KEY] = { clear: (reason) => cache.clear(reason), renderFailed: (id) => cache.renderFailed(id) };
+  return cache;
+}
+
 async function main() {
   const port = Number(arg('-p', '--port', process.env.PORT ?? 3000));
   // like `next start`: every interface unless -H names one
@@ -48,7 +73,8 @@ async function main() {
   const app = next({ dev: false, dir, hostname: hostname ?? 'localhost', port });
   await app.prepare();
   const handle = app.getRequestHandler();
-  const server = peerAwareServer((req, res) => handle(req, res));
+  const cache = await responseCache();
+  const server = peerAwareServer(cache ? cache.wrap(handle) : (req, res) => handle(req, res));
   server.listen(port, hostname, () => console.log(`Clackwater listening on http://${hostname ?? 'localhost'}:${port}`));
   const stop = () => {
     server.close(() => process.exit(0));

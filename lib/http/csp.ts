@@ -16,6 +16,9 @@ import { createHash } from 'node:crypto';
  *   ISR) has inline scripts that change with each regeneration; only for those does
  *   the policy keep 'unsafe-inline' for scripts, and those pages read nothing from
  *   the request, so nothing a visitor sends can be reflected into them.
+ * A page rendered per request and then kept for signed-out readers by the production
+ * server (scripts/response-cache.mjs) has its nonce taken out and the sha256 of each
+ * inline script put in its place, so one nonce is never served twice.
  */
 export type ScriptSource = { nonce: string; hashes?: string[] } | { hashes: string[] } | { unsafeInline: true };
 
