@@ -10,6 +10,7 @@ import { EntryForm } from '@/components/field-log/EntryForm';
 import { TrialTimer, type Trial } from './TrialTimer';
 import { BeatCounter } from './BeatCounter';
 import { useFieldMember } from './useFieldMember';
+import { KeepEntryForm } from './KeepEntryForm';
 
 /**
  * The timer's screen: bucket trials and beats, and, for a member, the field log test they
@@ -32,6 +33,7 @@ export function FieldVisit() {
 
   return (
     <>
+      <KeepEntryForm />
       <TrialTimer onTrials={setTrials} />
       <BeatCounter onCount={setBpm} />
       {trials.length > 0 ? (
