@@ -12,7 +12,7 @@ import { enqueue } from '@/lib/offline/outbox';
 import { sendKeptPhotos, withPhotoIds, type KeptPhoto } from '@/lib/offline/photos';
 import { KeptPhotos } from './KeptPhotos';
 import { MATERIAL_LABELS } from './format';
-import { isoDay } from '@/lib/dates';
+import { formatDate, isoDay } from '@/lib/dates';
 import { useUnits } from '@/components/units/UnitsProvider';
 import type { UnitSystem } from '@/lib/hydraulics';
 
@@ -165,7 +165,7 @@ export function EntryForm({
       kind: 'field-log',
       url: '/api/field-log',
       body,
-      label: `Field log: ${v.siteName || 'a test'}, ${v.testedOn}`,
+      label: `Field log: ${v.siteName || 'a test'}, ${formatDate(v.testedOn) || v.testedOn}`,
       photos: chosen,
     });
     sendKey.current = null;
