@@ -1,7 +1,7 @@
 import mariadb from 'mariadb';
 import sharp from 'sharp';
 import { test, expect, type BrowserContext, type Page } from '@playwright/test';
-import { press, settled, signIn } from '../support/session';
+import { openAccountMenu, press, settled, signIn } from '../support/session';
 
 /**
  * Issue 24's "done when": a member does a whole field visit — fall survey, trials, beats a
@@ -209,4 +209,40 @@ test('a send cut off after the server wrote the photo, and again after it wrote 
     photos: before.photos + 1,
     attached: before.attached + 1,
   });
+});
+
+test('signing out forgets the kept form and the member, so the next person on the phone gets neither', async ({
+  page,
+  context,
+  baseURL,
+}) => {
+  test.setTimeout(60_000);
+  await visitFieldKitOnline(page, context, baseURL!);
+  expect(await page.evaluate(() => localStorage.getItem('clackwater-member'))).toContain(HANDLE);
+  const menu = await openAccountMenu(page);
+  await press(menu.getByRole('button', { name: 'Sign out' }));
+  await expect(page.getByRole('banner').getByRole('link', { name: 'Sign in' })).toBeVisible();
+  await expect.poll(() => cachedUrls(page)).not.toContain('/field-log/new');
+  await expect.poll(() => page.evaluate(() => localStorage.getItem('clackwater-member'))).toBeNull();
+
+  // the next person opens the timer with signal (signing out forgot every kept page), then loses it
+  await page.clock.install({ time: START });
+  await page.goto('/field-kit/timer');
+  await expect.poll(() => cachedUrls(page)).toContain('/field-kit/timer');
+  await context.setOffline(true);
+  await page.goto('/field-log/new');
+  await expect(page.getByRole('heading', { level: 1, name: /No signal/ })).toBeVisible();
+  await expect(page.getByRole('form', { name: 'Record a field log test' })).toHaveCount(0);
+  // the timer offers to sign in rather than to record as the last member
+  await page.goto('/field-kit/timer');
+  await settled(page);
+  await page.clock.pauseAt(START + 60_000);
+  const timer = page.getByTestId('trial-timer');
+  await press(timer.getByRole('button', { name: '1 US gal' }));
+  await press(timer.getByTestId('trial-tap'));
+  await page.clock.runFor(98_000);
+  await press(timer.getByTestId('trial-tap'));
+  const record = page.getByTestId('field-visit-record');
+  await expect(record.getByRole('link', { name: 'Sign in' })).toBeVisible();
+  await expect(record.getByText(HANDLE)).toHaveCount(0);
 });
