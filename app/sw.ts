@@ -34,12 +34,53 @@ function keepable(response: Response): boolean {
   return !/\b(private|no-store)\b/i.test(response.headers.get('cache-control') ?? '');
 }
 
+// ---- The field log form, kept for its member (issue 24) --------------------------------
+// /field-log/new is a member's page, so it never goes in the shared page cache above. It
+// is kept alone, in a cache of its own, for the member signed in when it was fetched: the
+// field kit asks for it ('keep-entry-form') once it knows its member, and each visit with
+// signal refreshes it; the same message keeps the field kit's own (public) pages, so one
+// visit to the field kit is enough for the whole visit at the water. Any sign-in or sign-out forgets it, so the next member on the phone
+// never gets it. Only the bare form: a form opened from a site (?site=) names that site.
+export const MEMBER_CACHE = 'clackwater-member-pages';
+const ENTRY_FORM = '/field-log/new';
+const keepForMember = (response: Response) => response.ok && response.type === 'basic' && !response.redirected;
+const entryFormRoute = {
+  matcher: ({ request, url, sameOrigin }: { request: Request; url: URL; sameOrigin: boolean }) =>
+    sameOrigin && request.mode === 'navigate' && url.pathname === ENTRY_FORM && url.search === '',
+  handler: new NetworkFirst({
+    cacheName: MEMBER_CACHE,
+    networkTimeoutSeconds: 6,
+    plugins: [{ cacheWillUpdate: async ({ response }) => (keepForMember(response) ? response : null) }],
+  }),
+};
+self.addEventListener('fetch', (event) => {
+  const url = new URL(event.request.url);
+  if (url.origin === self.location.origin && /^\/api\/auth\/(signout|callback\/)/.test(url.pathname))
+    event.waitUntil(caches.delete(MEMBER_CACHE));
+});
+const FIELD_KIT_PAGES = ['/field-kit', '/field-kit/timer', '/field-kit/fall'];
+async function keepPage(url: string, cacheName: string, ok: (res: Response) => boolean) {
+  const res = await fetch(url, { credentials: 'same-origin' }).catch(() => null);
+  if (res && ok(res)) await (await caches.open(cacheName)).put(url, res);
+}
+self.addEventListener('message', (event) => {
+  if (event.data?.type !== 'keep-entry-form') return;
+  event.waitUntil(
+    Promise.all([
+      keepPage(ENTRY_FORM, MEMBER_CACHE, keepForMember),
+      ...FIELD_KIT_PAGES.map((url) => keepPage(url, PAGES_CACHE, keepable)),
+    ]),
+  );
+});
+// ------------------------------------------------------------------------------------------
+
 const serwist = new Serwist({
   precacheEntries: self.__SW_MANIFEST,
   skipWaiting: true,
   clientsClaim: true,
   navigationPreload: false,
   runtimeCaching: [
+    entryFormRoute,
     {
       matcher: ({ request, url, sameOrigin }) =>
         sameOrigin &&

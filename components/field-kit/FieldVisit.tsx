@@ -1,15 +1,16 @@
 'use client';
 
-import { useContext, useState } from 'react';
+import { useState } from 'react';
 import Link from 'next/link';
-import { SessionContext } from 'next-auth/react';
-import { can, type Actor } from '@/lib/auth/policy';
+import { can } from '@/lib/auth/policy';
 import { fromSI } from '@/lib/hydraulics';
 import { inputNumber } from '@/lib/calculators';
 import { useUnits } from '@/components/units/UnitsProvider';
 import { EntryForm } from '@/components/field-log/EntryForm';
 import { TrialTimer, type Trial } from './TrialTimer';
 import { BeatCounter } from './BeatCounter';
+import { useFieldMember } from './useFieldMember';
+import { KeepEntryForm } from './KeepEntryForm';
 
 /**
  * The timer's screen: bucket trials and beats, and, for a member, the field log test they
@@ -17,9 +18,7 @@ import { BeatCounter } from './BeatCounter';
  * phone might not reach.
  */
 export function FieldVisit() {
-  const session = useContext(SessionContext);
-  const user = session?.data?.user;
-  const actor: Actor | null = user ? { id: Number(user.id), role: user.role as Actor['role'] } : null;
+  const { actor, handle, offline } = useFieldMember();
   const { units } = useUnits();
   const [trials, setTrials] = useState<Trial[]>([]);
   const [bpm, setBpm] = useState<number | null>(null);
@@ -34,6 +33,7 @@ export function FieldVisit() {
 
   return (
     <>
+      <KeepEntryForm />
       <TrialTimer onTrials={setTrials} />
       <BeatCounter onCount={setBpm} />
       {trials.length > 0 ? (
@@ -49,8 +49,16 @@ export function FieldVisit() {
               to record these trials as a field log test; the trials stay on this screen.
             </p>
           ) : recording ? (
-            // the form takes the trials timed so far; one timed later is added in the form
-            <EntryForm initialTrials={typed} initial={bpm !== null ? { bpm: String(Math.round(bpm)) } : {}} />
+            <>
+              {offline ? (
+                <p className="cw-card font-sans text-sm" data-testid="known-offline">
+                  No signal: recorded as @{handle}, kept on this phone and sent when the signal is back. If you have
+                  been signed out by then, it waits for you to sign in again.
+                </p>
+              ) : null}
+              {/* the form takes the trials timed so far; one timed later is added in the form */}
+              <EntryForm initialTrials={typed} initial={bpm !== null ? { bpm: String(Math.round(bpm)) } : {}} />
+            </>
           ) : (
             <button
               type="button"

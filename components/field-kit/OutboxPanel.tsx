@@ -2,14 +2,18 @@
 
 import Link from 'next/link';
 import { useCallback, useEffect, useState } from 'react';
-import { discard, flush, pending, type OutboxRecord } from '@/lib/offline/outbox';
+import { discard, flush, pending, revise, type OutboxRecord } from '@/lib/offline/outbox';
 import { formatDateTime } from '@/lib/dates';
+import { KeptThumb } from '@/components/field-log/KeptPhotos';
 
 /**
  * What this phone still has to send: each record waiting (with a "send now"), or refused
  * with the server's reason for the member to fix. It sends by itself when the phone comes
  * back online and when the page opens.
  */
+/** Where to come back to after signing in: this page. */
+const here = () => (typeof window === 'undefined' ? '/field-kit' : window.location.pathname);
+
 export function OutboxPanel() {
   const [records, setRecords] = useState<OutboxRecord[] | null>(null);
   const [busy, setBusy] = useState(false);
@@ -58,14 +62,46 @@ export function OutboxPanel() {
           >
             <span className="font-semibold">{r.label}</span>
             <span className="cw-muted text-xs">Made {formatDateTime(new Date(r.createdAt).toISOString())}</span>
+            {r.photos?.length ? (
+              <ul className="flex flex-wrap gap-2" aria-label={`Photos kept with ${r.label}`}>
+                {r.photos.map((p, i) => (
+                  <li key={p.key}>
+                    <KeptThumb
+                      photo={p}
+                      alt={`Photo ${i + 1}: ${p.name}`}
+                      className="h-16 w-16 rounded-md border border-limestone-300 object-cover dark:border-creek-600"
+                    />
+                  </li>
+                ))}
+              </ul>
+            ) : null}
             {r.state === 'waiting' ? (
               <span className="text-sm">Waiting to send{r.attempts > 0 ? ` (tried ${r.attempts} times)` : ''}.</span>
+            ) : r.error?.status === 401 ? (
+              // the session ended before the signal came back: nothing is wrong with the record
+              <span role="alert" className="text-sm text-signal-700 dark:text-signal-300">
+                Not sent: you were signed out before it could go. It stays on this phone;{' '}
+                <Link href={`/sign-in?callbackUrl=${encodeURIComponent(here())}`} className="cw-link">
+                  sign in
+                </Link>{' '}
+                and send it again.
+              </span>
             ) : (
               <span role="alert" className="text-sm text-signal-700 dark:text-signal-300">
                 Not accepted: {r.error?.message} It stays on this phone until you let it go; record it again with that
                 put right.
               </span>
             )}
+            {r.state === 'refused' && r.error?.status === 401 ? (
+              <button
+                type="button"
+                disabled={busy}
+                className="cw-link min-h-9 self-start"
+                onClick={() => void revise(r.id, r.body).then(send)}
+              >
+                Send it again<span className="sr-only">: {r.label}</span>
+              </button>
+            ) : null}
             {r.state === 'refused' ? (
               <button
                 type="button"

@@ -7,11 +7,12 @@ import { NOMINAL_LABELS, NOMINAL_SIZES } from '@/lib/hydraulics/pipes';
 import { PIPE_MATERIAL_CHOICES } from '@/lib/validation/field-log';
 import { PUMP_TYPES } from '@/lib/vocabulary';
 import { FieldError, inputClass, labelClass, sendJson, type FormError } from '@/components/forms/api';
-import { PhotoPicker } from '@/components/photos/PhotoPicker';
 import { OutboxPanel } from '@/components/field-kit/OutboxPanel';
 import { enqueue } from '@/lib/offline/outbox';
+import { sendKeptPhotos, withPhotoIds, type KeptPhoto } from '@/lib/offline/photos';
+import { KeptPhotos } from './KeptPhotos';
 import { MATERIAL_LABELS } from './format';
-import { isoDay } from '@/lib/dates';
+import { formatDate, isoDay } from '@/lib/dates';
 import { useUnits } from '@/components/units/UnitsProvider';
 import type { UnitSystem } from '@/lib/hydraulics';
 
@@ -92,7 +93,7 @@ export function EntryForm({
     ...initial,
   });
   const [trials, setTrials] = useState<Trial[]>(initialTrials?.length ? initialTrials : [{ volume: '', seconds: '' }]);
-  const [photoIds, setPhotoIds] = useState<string[]>([]);
+  const [photos, setPhotos] = useState<KeptPhoto[]>([]);
   const [error, setError] = useState<FormError | null>(null);
   const [busy, setBusy] = useState(false);
   const [kept, setKept] = useState(false);
@@ -131,13 +132,27 @@ export function EntryForm({
       wasteValveSetting: v.wasteValveSetting,
       waterTempC: toCelsius(num(v.waterTempC), units),
       notes: v.notes,
-      photoIds,
+      // the photos are named when sent, by the ids the server gives them (withPhotoIds)
+      photoIds: [] as string[],
     };
     // one key for this record, however many times it is sent, so a send cut off after
     // the server wrote it and sent again from the phone's outbox is still one entry
     const key = (sendKey.current ??= crypto.randomUUID());
-    const out = navigator.onLine
-      ? await sendJson<{ id: number; url: string }>('/api/field-log', 'POST', body, {
+    let online = navigator.onLine;
+    let chosen = photos;
+    if (online && chosen.some((p) => !p.uploadedId)) {
+      // the photos first, each under its own key; the ids they get stay with them
+      const up = await sendKeptPhotos(chosen, fetch, async (now) => void (chosen = now));
+      chosen = up.photos;
+      setPhotos(chosen);
+      if (up.outcome === 'refused') {
+        setBusy(false);
+        return setError({ field: 'photos', message: up.error.message });
+      }
+      online = up.outcome === 'sent';
+    }
+    const out = online
+      ? await sendJson<{ id: number; url: string }>('/api/field-log', 'POST', withPhotoIds(body, chosen), {
           headers: { 'Idempotency-Key': key },
         })
       : null;
@@ -150,7 +165,8 @@ export function EntryForm({
       kind: 'field-log',
       url: '/api/field-log',
       body,
-      label: `Field log: ${v.siteName || 'a test'}, ${v.testedOn}`,
+      label: `Field log: ${v.siteName || 'a test'}, ${formatDate(v.testedOn) || v.testedOn}`,
+      photos: chosen,
     });
     sendKey.current = null;
     setKept(true);
@@ -326,8 +342,8 @@ export function EntryForm({
         <textarea id="fl-notes" name="notes" rows={4} className={inputClass} value={v.notes} onChange={set('notes')} />
       </div>
       <section aria-label="Photos" className="flex flex-col gap-2">
-        <h2 className={labelClass}>Photos of the installation (optional)</h2>
-        <PhotoPicker onChange={setPhotoIds} />
+        <KeptPhotos photos={photos} onChange={setPhotos} />
+        <FieldError error={error} field="photos" />
         <FieldError error={error} field="photoIds" />
       </section>
       <FieldError error={error} />

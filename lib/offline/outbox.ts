@@ -7,6 +7,7 @@
  * Browser code with no framework in it, so a page, a service worker or a test can use it.
  */
 import { openDB, type DBSchema, type IDBPDatabase } from 'idb';
+import { refusedForGood, sendKeptPhotos, withPhotoIds, type KeptPhoto } from './photos';
 
 export type OutboxKind = 'field-log' | 'site-version';
 
@@ -24,6 +25,8 @@ export interface OutboxRecord {
   attempts: number;
   /** the server's reason, for a refused record */
   error?: { message: string; field?: string; status: number };
+  /** photos kept with it, uploaded before it is sent (lib/offline/photos.ts) */
+  photos?: KeptPhoto[];
 }
 
 interface OutboxDb extends DBSchema {
@@ -54,7 +57,7 @@ export function closeOutbox() {
  * the signal went is not written twice.
  */
 export async function enqueue(
-  record: Pick<OutboxRecord, 'kind' | 'url' | 'body' | 'label'> & { id?: string },
+  record: Pick<OutboxRecord, 'kind' | 'url' | 'body' | 'label' | 'photos'> & { id?: string },
   now = Date.now(),
 ): Promise<OutboxRecord> {
   const full: OutboxRecord = {
@@ -104,14 +107,30 @@ export interface FlushResult {
 export async function flush(send: typeof fetch = fetch): Promise<FlushResult> {
   const out: FlushResult = { sent: [], refused: [], stopped: false };
   const d = await db();
-  for (const record of await pending()) {
+  for (let record of await pending()) {
     if (record.state !== 'waiting') continue;
+    if (record.photos?.some((p) => !p.uploadedId)) {
+      // the photos first, each id kept as it lands; the record then names them
+      const up = await sendKeptPhotos(record.photos, send, (photos) => d.put('records', { ...record, photos }).then());
+      record = { ...record, photos: up.photos };
+      if (up.outcome === 'refused') {
+        const refused: OutboxRecord = { ...record, attempts: record.attempts + 1, state: 'refused', error: up.error };
+        await d.put('records', refused);
+        out.refused.push(refused);
+        continue;
+      }
+      if (up.outcome === 'stopped') {
+        await d.put('records', { ...record, attempts: record.attempts + 1 });
+        out.stopped = true;
+        break;
+      }
+    }
     let res: Response;
     try {
       res = await send(record.url, {
         method: 'POST',
         headers: { 'content-type': 'application/json', 'Idempotency-Key': record.id },
-        body: JSON.stringify(record.body),
+        body: JSON.stringify(withPhotoIds(record.body, record.photos)),
         credentials: 'same-origin',
       });
     } catch {
@@ -123,7 +142,7 @@ export async function flush(send: typeof fetch = fetch): Promise<FlushResult> {
     if (res.ok) {
       await d.delete('records', record.id);
       out.sent.push({ record, response: body });
-    } else if (res.status >= 400 && res.status < 500 && res.status !== 408 && res.status !== 429) {
+    } else if (refusedForGood(res.status)) {
       const e = (body as { error?: { message?: string; field?: string } } | null)?.error;
       const refused: OutboxRecord = {
         ...record,

@@ -1,5 +1,5 @@
-import { randomBytes } from 'node:crypto';
-import { open, stat } from 'node:fs/promises';
+import { createHash, randomBytes } from 'node:crypto';
+import { open, readFile, stat } from 'node:fs/promises';
 import type { IncomingHttpHeaders } from 'node:http';
 import { Readable } from 'node:stream';
 import type { ReadableStream as NodeWebStream } from 'node:stream/web';
@@ -9,6 +9,7 @@ import sharp, { type Metadata } from 'sharp';
 import { z } from 'zod';
 import type { CreationAttributes } from 'sequelize';
 import { initModels, type Photo } from '@/models';
+import { once } from '@/lib/http/idempotency';
 import { displayName, PHOTO_LIMITS, PHOTO_MESSAGES } from './limits';
 import {
   isStorageUnavailable,
@@ -57,8 +58,13 @@ const altSchema = z.array(z.string().trim().max(PHOTO_LIMITS.maxAltChars, ALT_TO
  * checks every file by its content, and stores two metadata-free WebP copies of
  * each with one `photos` row per photo. All or nothing: one refused file and
  * nothing is kept — no copies, no rows; temp files are always removed.
+ *
+ * With an idempotency key (a phone's outbox sending a photo kept offline) the rows are
+ * written once per key: a repeat, after an answer lost on the way back, gets the photos
+ * the first upload made, and the copies it just encoded are removed. The same key with
+ * different files is refused (422), so a key cannot stand for two photos.
  */
-export async function ingestUpload(request: Request, ownerId: number): Promise<IngestedPhoto[]> {
+export async function ingestUpload(request: Request, ownerId: number, key?: string): Promise<IngestedPhoto[]> {
   const contentType = request.headers.get('content-type') ?? '';
   if (!/^multipart\/form-data;/i.test(contentType) || !request.body) {
     throw new UploadRefused(400, 'Send photos as multipart/form-data in the field “photos”.', 'not_multipart');
@@ -87,7 +93,15 @@ export async function ingestUpload(request: Request, ownerId: number): Promise<I
     for (const f of files) await inspect(f);
 
     const rows: CreationAttributes<Photo>[] = [];
+    // what was sent, by content: the key's fingerprint (names and temp paths differ on a resend)
+    const sent: string[] = [];
     for (const [i, f] of files.entries()) {
+      if (key !== undefined)
+        sent.push(
+          createHash('sha256')
+            .update(await readFile(f.filepath))
+            .digest('hex'),
+        );
       const copy = await encode(f);
       const publicId = newPhotoId();
       written.push(await writeVariant(publicId, 'web', copy.web.data));
@@ -105,17 +119,20 @@ export async function ingestUpload(request: Request, ownerId: number): Promise<I
       });
     }
 
-    const { sequelize, Photo } = initModels();
-    await sequelize.transaction(async (transaction) => {
-      await Photo.bulkCreate(rows, { transaction });
-    });
-    return rows.map((r) => ({
+    const made: IngestedPhoto[] = rows.map((r) => ({
       id: r.publicId,
       width: r.width,
       height: r.height,
       url: photoUrl(r.publicId),
       thumbUrl: photoUrl(r.publicId, 'thumb'),
     }));
+    const { Photo } = initModels();
+    const out = await once(ownerId, 'photo.upload', key, { sent, alts: altParsed.data }, async (transaction) => {
+      await Photo.bulkCreate(rows, { transaction });
+      return { status: 201, body: { photos: made } };
+    });
+    if (out.replayed) await removeFiles(written);
+    return out.body.photos;
   } catch (err) {
     await removeFiles(written);
     throw storageRefusal(err);
