@@ -65,7 +65,7 @@ export function SaveSite({ survey, target }: { survey: Record<string, string>; t
         <p role="status" className="text-sm">
           No signal: the survey is kept on this phone and will be sent when it is back online.
         </p>
-        <OutboxPanel kinds={['site', 'site-version']} />
+        <OutboxPanel />
       </div>
     );
   if (target.kind === 'version')

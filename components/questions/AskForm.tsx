@@ -401,7 +401,7 @@ export function AskForm({
           No signal: your question is kept on this phone and will be posted when it is back online. Keep this page open,
           or tap “Send now” below.
         </p>
-        <OutboxPanel kinds={['question']} />
+        <OutboxPanel />
       </div>
     );
 
