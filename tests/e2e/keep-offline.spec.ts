@@ -8,6 +8,10 @@ import { press, settled, signIn } from '../support/session';
  * signal is posted once, even when a send is cut off after the server wrote it.
  */
 
+// the worker installs (precaching the build's scripts) before it can keep anything; on a
+// busy machine that alone can take most of the default 30 s
+test.describe.configure({ timeout: 60_000 });
+
 async function controlled(page: Page) {
   await page.waitForFunction(() => navigator.serviceWorker.controller?.state === 'activated');
 }
