@@ -13,6 +13,10 @@ export const KIND_WORDS: Record<OutboxKind, string> = {
   question: 'Question',
 };
 
+/** The server's reason as a sentence (its messages may end without a full stop). */
+const sentence = (m: string) => (/[.!?]$/.test(m.trim()) ? m.trim() : `${m.trim()}.`);
+const tried = (n: number) => (n === 0 ? '' : n === 1 ? ' (tried once)' : ` (tried ${n} times)`);
+
 /**
  * What this phone still has to send, of every kind (or of the kinds a page is about):
  * each record waiting, with "Send now", or refused with the server's reason and a way to
@@ -81,10 +85,10 @@ export function OutboxPanel({
             <span className="font-semibold">{r.label}</span>
             <span className="cw-muted text-xs">Made {formatDateTime(new Date(r.createdAt).toISOString())}</span>
             {r.state === 'waiting' ? (
-              <span className="text-sm">Waiting to send{r.attempts > 0 ? ` (tried ${r.attempts} times)` : ''}.</span>
+              <span className="text-sm">Waiting to send{tried(r.attempts)}.</span>
             ) : (
               <span role="alert" className="text-sm text-signal-700 dark:text-signal-300">
-                Not accepted: {r.error?.message}{' '}
+                Not accepted: {sentence(r.error?.message ?? '')}{' '}
                 {r.fixAt
                   ? 'It stays on this phone until you put it right or let it go.'
                   : 'It stays on this phone until you let it go; make it again with that put right.'}
@@ -93,9 +97,10 @@ export function OutboxPanel({
             {r.state === 'refused' ? (
               <span className="flex flex-wrap gap-x-4">
                 {r.fixAt ? (
-                  <Link href={r.fixAt} className="cw-link inline-flex min-h-9 items-center">
+                  // a full load: the form may be the page already open, still showing "kept"
+                  <a href={r.fixAt} className="cw-link inline-flex min-h-9 items-center">
                     Put it right<span className="sr-only">: {r.label}</span>
-                  </Link>
+                  </a>
                 ) : null}
                 <button
                   type="button"

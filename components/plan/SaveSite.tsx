@@ -54,7 +54,6 @@ export function SaveSite({ survey, target }: { survey: Record<string, string>; t
       url,
       body,
       label: target.kind === 'new' ? `Site: ${name.trim() || 'unnamed'}` : 'Survey changed on this site',
-      fixAt: target.kind === 'new' ? undefined : `/sites/${target.siteId}`,
     });
     sendKey.current = null;
     setState({ kept: true });

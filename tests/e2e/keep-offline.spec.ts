@@ -37,6 +37,36 @@ async function newSite(page: Page, baseURL: string, name: string): Promise<strin
   return ((await res.json()) as { id: string }).id;
 }
 
+/** A field log test on that site (invented figures: three fills of a 1-gallon can). */
+async function newTest(page: Page, baseURL: string, siteId: string): Promise<string> {
+  const res = await page.request.post('/api/field-log', {
+    headers: { origin: new URL(baseURL).origin },
+    data: {
+      siteId,
+      siteName: 'Kept test by the brook',
+      testedOn: '2026-06-02',
+      pumpSize: '1',
+      fall: '4 ft',
+      lift: '29 ft',
+      driveLength: '40 ft',
+      driveSize: '1',
+      driveMaterial: 'pvc',
+      driveFlow: '6 gal/min',
+      driveFlowMethod: 'measured',
+      driveFlowHow: 'the waste water caught in a bucket',
+      trials: [
+        { volume: '1 gal', seconds: 95 },
+        { volume: '1 gal', seconds: 100 },
+        { volume: '1 gal', seconds: 98 },
+      ],
+      bpm: 55,
+      notes: 'kept for offline with its site',
+    },
+  });
+  expect(res.status()).toBe(201);
+  return ((await res.json()) as { url: string }).url;
+}
+
 const versions = async (page: Page, id: string) =>
   ((await (await page.request.get(`/api/sites/${id}`)).json()) as { versions: unknown[] }).versions.length;
 
@@ -44,6 +74,7 @@ test('a site kept for offline opens with no signal, and is let go again', async 
   await signIn(page, 'tamsin@ferncombe.example');
   const name = `Kept site ${Date.now()}`;
   const id = await newSite(page, baseURL!, name);
+  const testPath = await newTest(page, baseURL!, id);
   await page.goto(`/sites/${id}`);
   await controlled(page);
   await settled(page);
@@ -58,11 +89,18 @@ test('a site kept for offline opens with no signal, and is let go again', async 
   await expect(page.getByRole('heading', { level: 1, name })).toBeVisible();
   await settled(page);
   await expect(keep).toHaveAttribute('data-kept', 'kept');
+  // its test, never opened on this phone, came with it
+  await page.goto(testPath);
+  await expect(page.getByRole('heading', { level: 1, name: 'Kept test by the brook' })).toBeVisible();
+  await page.goto(`/sites/${id}`);
+  await settled(page);
 
   await press(keep.getByRole('button', { name: 'Forget it on this phone' }));
   await expect(keep.getByTestId('kept-state')).toHaveText('Not kept on this phone.');
-  await page.goto(`/sites/${id}`);
-  await expect(page.getByRole('heading', { level: 1, name: /No signal/ })).toBeVisible();
+  for (const path of [`/sites/${id}`, testPath]) {
+    await page.goto(path);
+    await expect(page.getByRole('heading', { level: 1, name: /No signal/ })).toBeVisible();
+  }
   await context.setOffline(false);
 });
 
@@ -150,4 +188,63 @@ test('a question whose answer was lost on the way back, and sent again, is one q
   await expect(kept.getByTestId('outbox')).toContainText('Nothing waiting');
   await expect(kept.getByRole('link', { name: `Question: ${title}` })).toBeVisible();
   expect(await questionsTitled(page, title)).toBe(1);
+});
+
+test('a question the server refused stays on the phone with its reason, and is put right in the form', async ({
+  page,
+  context,
+}) => {
+  await signIn(page, 'cabin@sorrelcreek.example');
+  const title = `Refused by the server ${Date.now()}`;
+  await fillQuestion(page, title);
+  await context.setOffline(true);
+  await press(page.getByRole('button', { name: 'Post my question' }));
+  const kept = page.getByTestId('question-kept');
+  await expect(kept.getByTestId('outbox')).toContainText('Waiting to send');
+  // what an older form could have queued: a body the server refuses as too short
+  await page.evaluate(async () => {
+    const db: IDBDatabase = await new Promise((ok, no) => {
+      const r = indexedDB.open('clackwater-outbox');
+      r.onsuccess = () => ok(r.result);
+      r.onerror = () => no(r.error);
+    });
+    const store = db.transaction('records', 'readwrite').objectStore('records');
+    const all: { body: { body: string } }[] = await new Promise((ok) => {
+      const q = store.getAll();
+      q.onsuccess = () => ok(q.result);
+    });
+    for (const r of all) store.put({ ...r, body: { ...r.body, body: 'Too short.' } });
+  });
+
+  await context.setOffline(false);
+  const refused = kept.getByTestId('outbox').locator('[data-state="refused"]');
+  await expect(refused).toContainText('Not accepted: body must be at least 20 characters');
+  expect(await questionsTitled(page, title)).toBe(0);
+
+  await press(refused.getByRole('link', { name: /Put it right/ }));
+  await expect(page).toHaveURL(/\/questions\/ask\?outbox=/);
+  await settled(page);
+  await expect(page.getByLabel('Title', { exact: true })).toHaveValue(title);
+  const body = page.getByLabel('What happened');
+  await expect(body).toHaveValue('Too short.');
+  await expect(page.getByText('body must be at least 20 characters')).toBeVisible();
+  await body.fill('It beats a few dozen times by the spring, then stops; put right after the refusal.');
+  await press(page.getByRole('button', { name: 'Post my question' }));
+  await expect(page).toHaveURL(/\/questions\/\d+$/);
+  expect(await questionsTitled(page, title)).toBe(1);
+  // the refused record left the phone with it
+  await page.goto('/questions/ask');
+  await settled(page);
+  expect(
+    await page.evaluate(
+      () =>
+        new Promise<number>((ok) => {
+          const r = indexedDB.open('clackwater-outbox');
+          r.onsuccess = () => {
+            const q = r.result.transaction('records').objectStore('records').count();
+            q.onsuccess = () => ok(q.result);
+          };
+        }),
+    ),
+  ).toBe(0);
 });

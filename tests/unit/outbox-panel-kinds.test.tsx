@@ -30,7 +30,7 @@ describe('the outbox panel, every kind of record', () => {
     await enqueue({ kind: 'question', url: '/api/questions', body: {}, label: 'Question: stops after dark' }, 4);
     fetchMock.mockRejectedValue(new TypeError('Failed to fetch'));
     render(<OutboxPanel />);
-    await screen.findByText(/tried 1 times/);
+    await screen.findByText(/tried once/);
     const items = screen.getAllByRole('listitem');
     expect(items.map((li) => li.getAttribute('data-kind'))).toEqual(['field-log', 'site', 'site-version', 'question']);
     expect(items.map((li) => li.firstElementChild?.textContent)).toEqual([
