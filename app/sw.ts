@@ -17,7 +17,9 @@ import {
   NetworkOnly,
   Serwist,
   type PrecacheEntry,
+  type RuntimeCaching,
 } from 'serwist';
+import { ENTRY_FORM_CACHE, MEMBER_PAGE, keptForSignedIn, memberIs } from '@/lib/offline/kept';
 
 declare const self: ServiceWorkerGlobalScope & { __SW_MANIFEST: (PrecacheEntry | string)[] | undefined };
 
@@ -41,7 +43,9 @@ function keepable(response: Response): boolean {
 // signal refreshes it; the same message keeps the field kit's own (public) pages, so one
 // visit to the field kit is enough for the whole visit at the water. Any sign-in or sign-out forgets it, so the next member on the phone
 // never gets it. Only the bare form: a form opened from a site (?site=) names that site.
-export const MEMBER_CACHE = 'clackwater-member-pages';
+// not under kept.ts's per-member prefix, whose clean-up would take it on every session check;
+// kept.ts `memberIs` forgets it when another member, or nobody, is signed in
+export const MEMBER_CACHE = ENTRY_FORM_CACHE;
 const ENTRY_FORM = '/field-log/new';
 const keepForMember = (response: Response) => response.ok && response.type === 'basic' && !response.redirected;
 const entryFormRoute = {
@@ -74,6 +78,58 @@ self.addEventListener('message', (event) => {
 });
 // ------------------------------------------------------------------------------------------
 
+// ---- keep: a member's own pages (sites, field log tests), per member (lib/offline/kept.ts) ----
+
+/**
+ * The member's own pages go to the network; with none, the page kept in the cache of the
+ * member signed in now (never another member's), else the offline page. The worker never
+ * writes these pages itself: the page keeps them, after checking they are the member's.
+ */
+const memberPages: RuntimeCaching = {
+  matcher: ({ request, url, sameOrigin }) =>
+    sameOrigin && request.mode === 'navigate' && MEMBER_PAGE.test(url.pathname) && url.search === '',
+  handler: async ({ request, url }) => {
+    try {
+      return await new Promise<Response>((resolve, reject) => {
+        // one bar of signal at the creek: the kept page rather than a long wait
+        const timer = setTimeout(() => reject(new Error('timeout')), 6000);
+        fetch(request)
+          .then(resolve, reject)
+          .finally(() => clearTimeout(timer));
+      });
+    } catch {
+      return (await keptForSignedIn(url.pathname)) ?? (await serwist.matchPrecache('/offline')) ?? Response.error();
+    }
+  },
+};
+
+self.addEventListener('fetch', (event) => {
+  const url = new URL(event.request.url);
+  if (url.origin !== self.location.origin) return;
+  // the server's word on who is signed in (every page asks it): other members' pages go
+  if (event.request.method === 'GET' && url.pathname === '/api/auth/session')
+    event.respondWith(
+      fetch(event.request).then((res) => {
+        if (res.ok)
+          event.waitUntil(
+            res
+              .clone()
+              .json()
+              .then((s: { user?: { id?: number | string } } | null) =>
+                memberIs(s?.user?.id === undefined ? null : String(s.user.id)),
+              )
+              .catch(() => undefined),
+          );
+        return res;
+      }),
+    );
+  if (event.request.method === 'POST' && url.pathname === '/api/auth/signout') event.waitUntil(memberIs(null));
+});
+self.addEventListener('message', (event) => {
+  if (event.data?.type === 'forget-pages') event.waitUntil(memberIs(null));
+});
+// ---- end keep ----
+
 const serwist = new Serwist({
   precacheEntries: self.__SW_MANIFEST,
   skipWaiting: true,
@@ -100,6 +156,7 @@ const serwist = new Serwist({
         ],
       }),
     },
+    memberPages,
     // every other page: the network, or the offline page when there is none
     { matcher: ({ request }) => request.mode === 'navigate', handler: new NetworkOnly() },
   ],

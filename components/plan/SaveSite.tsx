@@ -1,11 +1,13 @@
 'use client';
 
-import { useContext, useId, useState } from 'react';
+import { useContext, useId, useRef, useState } from 'react';
 import Link from 'next/link';
 import { useRouter } from 'next/navigation';
 import { SessionContext } from 'next-auth/react';
 import { can, type Actor } from '@/lib/auth/policy';
 import { sendJson } from '@/components/forms/api';
+import { enqueue } from '@/lib/offline/outbox';
+import { OutboxPanel } from '@/components/offline/OutboxPanel';
 
 const TARGET = 'cw-link inline-flex min-h-6 items-center';
 
@@ -24,8 +26,12 @@ export function SaveSite({ survey, target }: { survey: Record<string, string>; t
   const router = useRouter();
   const id = useId();
   const [name, setName] = useState('');
-  const [state, setState] = useState<{ busy?: boolean; error?: string; field?: string }>({});
-  if (!can(actor, 'site.save'))
+  const [state, setState] = useState<{ busy?: boolean; error?: string; field?: string; kept?: boolean }>({});
+  // one key per save, however often it is sent, so a save cut off after the server wrote it is one site
+  const sendKey = useRef<string | null>(null);
+  // a new version is offered on the owner's own site page only, which the server made for
+  // them: with no signal the session cannot be asked, and the member is still its owner
+  if (target.kind === 'new' && !can(actor, 'site.save'))
     return (
       <Link href="/sign-in" className={TARGET}>
         Sign in to save this site
@@ -33,13 +39,34 @@ export function SaveSite({ survey, target }: { survey: Record<string, string>; t
     );
   const send = async () => {
     setState({ busy: true });
-    const r =
-      target.kind === 'new'
-        ? await sendJson<{ url: string }>('/api/sites', 'POST', { name, survey })
-        : await sendJson<{ url: string }>(`/api/sites/${target.siteId}/versions`, 'POST', { survey });
-    if (r.ok) router.push(r.data.url);
-    else setState({ error: r.error.message, field: r.error.field });
+    const key = (sendKey.current ??= crypto.randomUUID());
+    const [url, body] =
+      target.kind === 'new' ? ['/api/sites', { name, survey }] : [`/api/sites/${target.siteId}/versions`, { survey }];
+    const r = navigator.onLine
+      ? await sendJson<{ url: string }>(url, 'POST', body, { headers: { 'Idempotency-Key': key } })
+      : null;
+    if (r?.ok) return router.push(r.data.url);
+    if (r && r.status !== 0) return setState({ error: r.error.message, field: r.error.field });
+    // no signal: the survey waits on the phone and is sent, once, when it is back
+    await enqueue({
+      id: key,
+      kind: target.kind === 'new' ? 'site' : 'site-version',
+      url,
+      body,
+      label: target.kind === 'new' ? `Site: ${name.trim() || 'unnamed'}` : 'Survey changed on this site',
+    });
+    sendKey.current = null;
+    setState({ kept: true });
   };
+  if (state.kept)
+    return (
+      <div className="flex basis-full flex-col gap-2" data-testid="site-kept">
+        <p role="status" className="text-sm">
+          No signal: the survey is kept on this phone and will be sent when it is back online.
+        </p>
+        <OutboxPanel />
+      </div>
+    );
   if (target.kind === 'version')
     return (
       <span className="flex flex-wrap items-center gap-2">

@@ -26,6 +26,8 @@ import {
   type AskDraft,
 } from './ask-draft';
 import { bareNumberUnit, typedUnits, withReaderUnits } from './site-sheet-units';
+import { useAskOutbox } from './ask-outbox';
+import { OutboxPanel } from '@/components/offline/OutboxPanel';
 
 type AskInput = z.input<typeof askQuestionSchema>;
 type AskOutput = z.output<typeof askQuestionSchema>;
@@ -344,6 +346,18 @@ export function AskForm({
     setDraftState({ status: 'none' });
   }
 
+  const outbox = useAskOutbox((sent, error) => {
+    const now = getValues();
+    reset({ ...now, ...(sent as Partial<AskInput>), siteSheet: { ...now.siteSheet, ...(sent.siteSheet ?? {}) } });
+    if (error) showServerError(error);
+  });
+  function showServerError(error: { field?: string; message: string }) {
+    const field = error.field;
+    const known =
+      field && (['title', 'body', 'tags', 'photoIds', 'guide'].includes(field) || /^siteSheet\.\w+$/.test(field));
+    setError(known ? (field as FieldPath<AskInput>) : 'root.server', { message: error.message }, { shouldFocus: true });
+  }
+
   async function onSubmit(values: AskOutput) {
     // a bare number goes out with the unit the form said it would be read in
     const siteSheet = withReaderUnits(
@@ -352,24 +366,23 @@ export function AskForm({
       ),
       units,
     );
-    const out = await sendJson<{ id: number; url: string }>('/api/questions', 'POST', {
+    const out = await outbox.post({
       ...values,
       siteSheet: Object.keys(siteSheet).length ? siteSheet : undefined,
     });
+    if (out === null) {
+      // no signal: the question is in the outbox now, so the draft has nothing more to keep
+      clearDraft(draftStore());
+      setDraftState({ loaded: false, status: 'none' });
+      return;
+    }
     if (out.ok) {
       clearDraft(draftStore());
       setDraftState({ loaded: false, status: 'none' }); // nothing more to keep while the page goes
       window.location.assign(out.data.url ?? `/questions/${out.data.id}`);
       return;
     }
-    const field = out.error.field;
-    const known =
-      field && (['title', 'body', 'tags', 'photoIds', 'guide'].includes(field) || /^siteSheet\.\w+$/.test(field));
-    setError(
-      known ? (field as FieldPath<AskInput>) : 'root.server',
-      { message: out.error.message },
-      { shouldFocus: true },
-    );
+    showServerError(out.error);
   }
 
   const describe = (name: string, hint?: boolean) =>
@@ -380,6 +393,17 @@ export function AskForm({
         ?.message;
     return (errors as Record<string, { message?: string } | undefined>)[name]?.message;
   };
+
+  if (outbox.kept)
+    return (
+      <div className="flex max-w-3xl flex-col gap-4 font-sans" data-testid="question-kept">
+        <p className="cw-card" role="status">
+          No signal: your question is kept on this phone and will be posted when it is back online. Keep this page open,
+          or tap “Send now” below.
+        </p>
+        <OutboxPanel />
+      </div>
+    );
 
   return (
     <form

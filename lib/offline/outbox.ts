@@ -9,7 +9,7 @@
 import { openDB, type DBSchema, type IDBPDatabase } from 'idb';
 import { refusedForGood, sendKeptPhotos, withPhotoIds, type KeptPhoto } from './photos';
 
-export type OutboxKind = 'field-log' | 'site-version';
+export type OutboxKind = 'field-log' | 'site' | 'site-version' | 'question';
 
 export interface OutboxRecord {
   /** the idempotency key too: one per record, made on the device */
@@ -23,6 +23,8 @@ export interface OutboxRecord {
   createdAt: number;
   state: 'waiting' | 'refused';
   attempts: number;
+  /** where the member puts a refused record right (the form it came from), if not made again from scratch */
+  fixAt?: string;
   /** the server's reason, for a refused record */
   error?: { message: string; field?: string; status: number };
   /** photos kept with it, uploaded before it is sent (lib/offline/photos.ts) */
@@ -57,7 +59,7 @@ export function closeOutbox() {
  * the signal went is not written twice.
  */
 export async function enqueue(
-  record: Pick<OutboxRecord, 'kind' | 'url' | 'body' | 'label' | 'photos'> & { id?: string },
+  record: Pick<OutboxRecord, 'kind' | 'url' | 'body' | 'label' | 'photos' | 'fixAt'> & { id?: string },
   now = Date.now(),
 ): Promise<OutboxRecord> {
   const full: OutboxRecord = {
@@ -74,6 +76,11 @@ export async function enqueue(
 /** Everything still on the device, oldest first. */
 export async function pending(): Promise<OutboxRecord[]> {
   return (await db()).getAllFromIndex('records', 'createdAt');
+}
+
+/** One record, if it is still on the device. */
+export async function outboxRecord(id: string): Promise<OutboxRecord | undefined> {
+  return (await db()).get('records', id);
 }
 
 /** The member changed a refused record: it waits to be sent again, under the same key. */

@@ -45,11 +45,12 @@ export async function askQuestion(
     fieldLogEntryId?: number;
     siteId?: string;
   },
+  outer?: Transaction,
 ) {
   checkPostText(user, 'question', input);
   const siteSheet = validateSiteSheet(input.siteSheet);
   const { Question, QuestionTag, Revision, QuestionFollow, FieldLogEntry } = initModels();
-  const write = getSequelize().transaction(async (transaction) => {
+  const work = async (transaction: Transaction) => {
     const ids = await tagIds([...new Set(input.tags)], transaction);
     if (input.fieldLogEntryId !== undefined) {
       const entry = await FieldLogEntry.findOne({
@@ -91,8 +92,16 @@ export async function askQuestion(
         throw new ForumError(422, 'photoIds: a photo is not yours or is already attached', 'photoIds');
     }
     return q;
-  });
-  return thenIndex(write, (q) => q.id);
+  };
+  // in the caller's transaction (one that keeps an idempotency key), the caller brings the
+  // thread up to date once it has committed: see questionAsked
+  if (outer) return work(outer);
+  return thenIndex(getSequelize().transaction(work), (q) => q.id);
+}
+
+/** After a question written in the caller's transaction has committed: search and cached pages. */
+export async function questionAsked(questionId: number): Promise<void> {
+  await postsChanged({ questionId });
 }
 
 /**

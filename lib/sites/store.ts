@@ -51,14 +51,23 @@ export function maySee(actor: Actor | null, site: Pick<Site, 'ownerId' | 'visibi
 }
 
 /** A new site with its first version, in one transaction. */
-export async function createSite(owner: Actor, input: { name: string } & SiteSurvey): Promise<Site> {
+export async function createSite(
+  owner: Actor,
+  input: { name: string } & SiteSurvey,
+  transaction?: Transaction,
+): Promise<Site> {
   if (!can(owner, 'site.save')) throw new SiteError(403, REFUSAL['site.save']);
   const { Site, SiteVersion } = initModels();
-  return getSequelize().transaction(async (transaction) => {
-    const site = await Site.create({ publicId: newPublicId(), ownerId: owner.id, name: input.name }, { transaction });
-    await SiteVersion.create({ siteId: site.id, version: 1, ...surveyOf(input) }, { transaction });
+  const work = async (t: Transaction) => {
+    const site = await Site.create(
+      { publicId: newPublicId(), ownerId: owner.id, name: input.name },
+      { transaction: t },
+    );
+    await SiteVersion.create({ siteId: site.id, version: 1, ...surveyOf(input) }, { transaction: t });
     return site;
-  });
+  };
+  // the caller's transaction when it keeps an idempotency key with the site
+  return transaction ? work(transaction) : getSequelize().transaction(work);
 }
 
 function surveyOf(s: SiteSurvey) {
@@ -75,9 +84,14 @@ async function ownSite(actor: Actor, publicId: string, transaction: Transaction)
 }
 
 /** A changed survey: a new version after the newest; the older ones stay as they were. */
-export async function addSiteVersion(actor: Actor, publicId: string, input: SiteSurvey): Promise<number> {
+export async function addSiteVersion(
+  actor: Actor,
+  publicId: string,
+  input: SiteSurvey,
+  outer?: Transaction,
+): Promise<number> {
   const { SiteVersion } = initModels();
-  return getSequelize().transaction(async (transaction) => {
+  const work = async (transaction: Transaction) => {
     const site = await ownSite(actor, publicId, transaction);
     // the row lock on the site serialises two saves at once, so versions never collide
     const newest = ((await SiteVersion.max('version', { where: { siteId: site.id }, transaction })) as number) ?? 0;
@@ -85,7 +99,8 @@ export async function addSiteVersion(actor: Actor, publicId: string, input: Site
     site.changed('updatedAt', true);
     await site.save({ transaction });
     return newest + 1;
-  });
+  };
+  return outer ? work(outer) : getSequelize().transaction(work);
 }
 
 /** The owner renames a site or changes who may see it. */

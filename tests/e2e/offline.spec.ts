@@ -133,6 +133,18 @@ test('the manifest and the worker pass Chromium’s installability checks', asyn
   rmSync(profile, { recursive: true, force: true });
 });
 
+/** The URLs in each cache of the page's Cache Storage, by the cache's name. */
+function cachesByName(page: Page): Promise<Record<string, string[]>> {
+  return page.evaluate(async () => {
+    const out: Record<string, string[]> = {};
+    for (const name of await caches.keys())
+      out[name] = (await (await caches.open(name)).keys()).map((r) => new URL(r.url).pathname);
+    return out;
+  });
+}
+const memberCaches = async (page: Page) =>
+  Object.entries(await cachesByName(page)).filter(([name]) => name.startsWith('clackwater-member-'));
+
 test('one member’s pages are never kept for the next member on the same phone', async ({ browser }) => {
   const context = await newContext(browser);
   const page = await context.newPage();
@@ -143,18 +155,29 @@ test('one member’s pages are never kept for the next member on the same phone'
   await expect(page.getByRole('heading', { level: 1, name: 'Ferncombe top garden' })).toBeVisible();
   await page.goto('/settings');
   await expect(page.getByText('Signed in as @ferncombe_tamsin').first()).toBeVisible();
-  // opened again now the worker controls every navigation
+  // opened again now the worker controls every navigation; her site kept for offline
   await page.goto('/sites/FerncombeTop18');
+  await settled(page);
+  const keep = page.getByTestId('keep-offline');
+  await press(keep.getByRole('button', { name: 'Keep for offline' }));
+  await expect(keep).toHaveAttribute('data-kept', 'kept');
   await page.goto('/settings');
-  const whileIn = await cachedUrls(page);
-  expect(whileIn).toContain(GUIDE);
-  expect(whileIn.filter((u) => /^\/(sites|settings)(\/|$)/.test(u))).toEqual([]);
+  const whileIn = await cachesByName(page);
+  const shared = Object.entries(whileIn).filter(([name]) => !name.startsWith('clackwater-member-'));
+  expect(shared.flatMap(([, urls]) => urls)).toContain(GUIDE);
+  // her site is in her own cache only, and /settings nowhere
+  expect(shared.flatMap(([, urls]) => urls).filter((u) => /^\/(sites|settings)(\/|$)/.test(u))).toEqual([]);
+  const mine = await memberCaches(page);
+  expect(mine).toHaveLength(1);
+  expect(mine[0]![1]).toContain('/sites/FerncombeTop18');
+  expect(mine[0]![1].filter((u) => /^\/settings/.test(u))).toEqual([]);
 
   const menu = await openAccountMenu(page);
   await press(menu.getByRole('button', { name: 'Sign out' }));
   await expect(page.getByRole('banner').getByRole('link', { name: 'Sign in' })).toBeVisible();
-  // signing out forgets the kept pages too
+  // signing out forgets the kept pages too, her own among them
   await expect.poll(() => cachedUrls(page)).not.toContain(GUIDE);
+  await expect.poll(() => memberCaches(page)).toEqual([]);
 
   await signIn(page, 'cabin@sorrelcreek.example');
   await context.setOffline(true);
@@ -165,5 +188,34 @@ test('one member’s pages are never kept for the next member on the same phone'
     await expect(page.getByText('ferncombe_tamsin')).toHaveCount(0);
   }
   expect((await cachedUrls(page)).filter((u) => /^\/(sites|settings|api)(\/|$)/.test(u))).toEqual([]);
+  // online, her private site is not there for him either
+  await context.setOffline(false);
+  await page.goto('/sites/FerncombeTop18');
+  await expect(page.getByText('Ferncombe top garden')).toHaveCount(0);
+  await context.close();
+});
+
+test('a member’s kept site is dropped when another member signs in without a sign-out', async ({ browser }) => {
+  const context = await newContext(browser);
+  const page = await context.newPage();
+  await signIn(page, 'tamsin@ferncombe.example');
+  await controlled(page);
+  await page.goto('/sites/FerncombeTop18');
+  await settled(page);
+  const keep = page.getByTestId('keep-offline');
+  await press(keep.getByRole('button', { name: 'Keep for offline' }));
+  await expect(keep).toHaveAttribute('data-kept', 'kept');
+  await expect.poll(async () => (await memberCaches(page)).length).toBe(1);
+
+  // her session ends with no sign-out on this phone (cookies cleared), and he signs in
+  await context.clearCookies();
+  await signIn(page, 'cabin@sorrelcreek.example');
+  await settled(page);
+  await expect.poll(() => memberCaches(page)).toEqual([]);
+  await context.setOffline(true);
+  await page.goto('/sites/FerncombeTop18');
+  await expect(page.getByRole('heading', { level: 1, name: /No signal/ })).toBeVisible();
+  await expect(page.getByText('Ferncombe top garden')).toHaveCount(0);
+  await context.setOffline(false);
   await context.close();
 });

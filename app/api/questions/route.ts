@@ -5,7 +5,8 @@ import { listQuestions } from '@/lib/questions/list';
 import { askQuestionSchema } from '@/lib/validation/question';
 import { readJson } from '@/lib/http/body';
 import { guarded } from '@/lib/http/guard';
-import { askQuestion } from '@/lib/questions/posts';
+import { askQuestion, questionAsked } from '@/lib/questions/posts';
+import { idempotencyKeyOf, once } from '@/lib/http/idempotency';
 
 export const dynamic = 'force-dynamic';
 
@@ -26,10 +27,16 @@ export async function POST(request: Request) {
     request,
     'question.ask',
     async (user) => {
+      const key = idempotencyKeyOf(request);
       const body = await readJson(request, askQuestionSchema);
       if ('response' in body) return body.response;
-      const q = await askQuestion(user, body.data);
-      return NextResponse.json({ id: q.id, url: `/questions/${q.id}` }, { status: 201 });
+      // a question posted with no signal and sent again after a lost answer is one thread
+      const out = await once(user.id, 'question.ask', key, body.data, async (transaction) => {
+        const q = await askQuestion(user, body.data, transaction);
+        return { status: 201, body: { id: q.id, url: `/questions/${q.id}` } };
+      });
+      if (!out.replayed) await questionAsked(out.body.id);
+      return NextResponse.json(out.body, { status: out.status });
     },
     { flood: 'post' },
   );

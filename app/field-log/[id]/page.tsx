@@ -2,6 +2,7 @@ import type { Metadata } from 'next';
 import Link from 'next/link';
 import { notFound } from 'next/navigation';
 import { currentUserInPage } from '@/lib/auth/session';
+import { KeepForOffline } from '@/components/sites/KeepForOffline';
 import { idParam } from '@/lib/http/guard';
 import { getEntry } from '@/lib/field-log/store';
 import { loadEntryPage } from '@/lib/field-log/entry-page';
@@ -40,7 +41,8 @@ function Row({ label, children }: { label: string; children: React.ReactNode }) 
 export default async function FieldLogEntryPage({ params }: { params: Params }) {
   const id = idParam((await params).id);
   if (!id) notFound();
-  const loaded = await loadEntryPage(id, await currentUserInPage());
+  const viewer = await currentUserInPage();
+  const loaded = await loadEntryPage(id, viewer);
   if (!loaded) notFound();
   const { entry: e, links, photos, mayLink, mayAsk } = loaded;
   const candidates = loaded.linkCandidates.map((r) => ({
@@ -55,6 +57,10 @@ export default async function FieldLogEntryPage({ params }: { params: Params }) 
   return (
     <article className="flex flex-col gap-5">
       <header className="flex flex-col gap-1">
+        {/* the member's own test: on their phone for offline once opened */}
+        {viewer && viewer.id === e.authorId ? (
+          <KeepForOffline memberId={viewer.id} path={`/field-log/${e.id}`} button={false} />
+        ) : null}
         <p className="font-sans text-sm">
           <Link href="/field-log" className="cw-link">
             Field log

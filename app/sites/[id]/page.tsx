@@ -11,6 +11,9 @@ import { VISIBILITY_WORDS } from '@/components/plan/words';
 import { Caution } from '@/components/Caution';
 import { SiteQuestions } from '@/components/sites/SiteQuestions';
 import { SiteFieldLog } from '@/components/sites/SiteFieldLog';
+import { KeepForOffline } from '@/components/sites/KeepForOffline';
+import { siteTests } from '@/lib/sites/site-tests';
+import { VISITED_LIMIT } from '@/lib/offline/kept';
 
 export const dynamic = 'force-dynamic';
 type Params = Promise<{ id: string }>;
@@ -43,6 +46,9 @@ export default async function SitePage({ params, searchParams }: { params: Param
   const site = await load(id, (await searchParams).version);
   const newest = site.versions[site.versions.length - 1]?.version;
   const old = site.current.version !== newest;
+  const viewer = site.mine ? await currentUserInPage() : null;
+  // the newest tests go with the site when the member keeps it for offline
+  const recent = viewer ? ((await siteTests(viewer, site.id))?.rows ?? []).slice(-VISITED_LIMIT) : [];
   return (
     <article className="flex flex-col gap-4">
       <header className="flex flex-col gap-1">
@@ -62,6 +68,13 @@ export default async function SitePage({ params, searchParams }: { params: Param
         ) : null}
       </header>
       {site.mine ? <SiteSettings id={site.id} name={site.name} visibility={site.visibility} /> : null}
+      {viewer && !old ? (
+        <KeepForOffline
+          memberId={viewer.id}
+          path={`/sites/${site.id}`}
+          alsoKeep={recent.map((t) => `/field-log/${t.id}`)}
+        />
+      ) : null}
       {site.versions.length > 1 ? (
         <nav aria-label="Versions" className="flex flex-wrap gap-3 font-sans text-sm" data-print-hide>
           <span className="cw-muted">Versions:</span>
