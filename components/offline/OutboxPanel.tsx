@@ -2,8 +2,9 @@
 
 import Link from 'next/link';
 import { useCallback, useEffect, useState } from 'react';
-import { discard, flush, pending, type OutboxKind, type OutboxRecord } from '@/lib/offline/outbox';
+import { discard, flush, pending, revise, type OutboxKind, type OutboxRecord } from '@/lib/offline/outbox';
 import { formatDateTime } from '@/lib/dates';
+import { KeptThumb } from '@/components/field-log/KeptPhotos';
 
 /** What each kind of record is called in the list. */
 export const KIND_WORDS: Record<OutboxKind, string> = {
@@ -15,12 +16,16 @@ export const KIND_WORDS: Record<OutboxKind, string> = {
 
 /** The server's reason as a sentence (its messages may end without a full stop). */
 const sentence = (m: string) => (/[.!?]$/.test(m.trim()) ? m.trim() : `${m.trim()}.`);
+/** Where to come back to after signing in: this page. */
+const here = () => (typeof window === 'undefined' ? '/field-kit' : window.location.pathname);
 const tried = (n: number) => (n === 0 ? '' : n === 1 ? ' (tried once)' : ` (tried ${n} times)`);
 
 /**
  * What this phone still has to send, of every kind (or of the kinds a page is about):
  * each record waiting, with "Send now", or refused with the server's reason and a way to
- * put it right. It sends by itself when the phone comes back online and when it opens.
+ * put it right (a record refused only because the member was signed out is sent again
+ * after signing in), with the photos kept with it. It sends by itself when the phone comes
+ * back online and when it opens. The one panel for every page that keeps records.
  */
 export function OutboxPanel({
   kinds,
@@ -84,8 +89,30 @@ export function OutboxPanel({
             <span className="cw-muted text-xs font-semibold tracking-wide uppercase">{KIND_WORDS[r.kind]}</span>
             <span className="font-semibold">{r.label}</span>
             <span className="cw-muted text-xs">Made {formatDateTime(new Date(r.createdAt).toISOString())}</span>
+            {r.photos?.length ? (
+              <ul className="flex flex-wrap gap-2" aria-label={`Photos kept with ${r.label}`}>
+                {r.photos.map((p, i) => (
+                  <li key={p.key}>
+                    <KeptThumb
+                      photo={p}
+                      alt={`Photo ${i + 1}: ${p.name}`}
+                      className="h-16 w-16 rounded-md border border-limestone-300 object-cover dark:border-creek-600"
+                    />
+                  </li>
+                ))}
+              </ul>
+            ) : null}
             {r.state === 'waiting' ? (
               <span className="text-sm">Waiting to send{tried(r.attempts)}.</span>
+            ) : r.error?.status === 401 ? (
+              // the session ended before the signal came back: nothing is wrong with the record
+              <span role="alert" className="text-sm text-signal-700 dark:text-signal-300">
+                Not sent: you were signed out before it could go. It stays on this phone;{' '}
+                <Link href={`/sign-in?callbackUrl=${encodeURIComponent(here())}`} className="cw-link">
+                  sign in
+                </Link>{' '}
+                and send it again.
+              </span>
             ) : (
               <span role="alert" className="text-sm text-signal-700 dark:text-signal-300">
                 Not accepted: {sentence(r.error?.message ?? '')}{' '}
@@ -96,7 +123,17 @@ export function OutboxPanel({
             )}
             {r.state === 'refused' ? (
               <span className="flex flex-wrap gap-x-4">
-                {r.fixAt ? (
+                {r.error?.status === 401 ? (
+                  <button
+                    type="button"
+                    disabled={busy}
+                    className="cw-link min-h-9 self-start"
+                    onClick={() => void revise(r.id, r.body).then(send)}
+                  >
+                    Send it again<span className="sr-only">: {r.label}</span>
+                  </button>
+                ) : null}
+                {r.fixAt && r.error?.status !== 401 ? (
                   // a full load: the form may be the page already open, still showing "kept"
                   <a href={r.fixAt} className="cw-link inline-flex min-h-9 items-center">
                     Put it right<span className="sr-only">: {r.label}</span>

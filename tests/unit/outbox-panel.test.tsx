@@ -29,9 +29,9 @@ describe('the outbox panel', () => {
     await enqueue(record('Hollin spring, 2 June'));
     fetchMock.mockRejectedValueOnce(new TypeError('Failed to fetch'));
     render(<OutboxPanel />);
-    expect(await screen.findByText(/Waiting to send \(tried 1 times\)/)).toBeTruthy();
+    expect(await screen.findByText(/Waiting to send \(tried once\)/)).toBeTruthy();
     fetchMock.mockResolvedValueOnce(Response.json({ id: 7, url: '/field-log/7' }, { status: 201 }));
-    fireEvent.click(screen.getByRole('button', { name: 'Send now' }));
+    fireEvent.click(screen.getByRole('button', { name: 'Try again now' }));
     const link = await screen.findByRole('link', { name: 'Hollin spring, 2 June' });
     expect(link.getAttribute('href')).toBe('/field-log/7');
     await waitFor(async () => expect(await pending()).toEqual([]));
