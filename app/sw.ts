@@ -36,34 +36,28 @@ function keepable(response: Response): boolean {
   return !/\b(private|no-store)\b/i.test(response.headers.get('cache-control') ?? '');
 }
 
-// ---- The field log form, kept for its member (issue 24) --------------------------------
+// ---- The field log form, kept for its member ----------------------------------------
 // /field-log/new is a member's page, so it never goes in the shared page cache above. It
-// is kept alone, in a cache of its own, for the member signed in when it was fetched: the
-// field kit asks for it ('keep-entry-form') once it knows its member, and each visit with
-// signal refreshes it; the same message keeps the field kit's own (public) pages, so one
-// visit to the field kit is enough for the whole visit at the water. Any sign-in or sign-out forgets it, so the next member on the phone
-// never gets it. Only the bare form: a form opened from a site (?site=) names that site.
-// not under kept.ts's per-member prefix, whose clean-up would take it on every session check;
-// kept.ts `memberIs` forgets it when another member, or nobody, is signed in
-export const MEMBER_CACHE = ENTRY_FORM_CACHE;
+// is kept alone, in a cache of its own (ENTRY_FORM_CACHE, lib/offline/kept.ts), for the
+// member signed in when it was fetched: the field kit asks for it ('keep-entry-form') once
+// it knows its member, and each visit with signal refreshes it; the same message keeps the
+// field kit's own (public) pages, so one visit to the field kit is enough for the whole
+// visit at the water. Who is signed in is followed below (`memberIs`), which forgets it on
+// sign-out and when another member signs in. Only the bare form: a form opened from a site
+// (?site=) names that site.
 const ENTRY_FORM = '/field-log/new';
 const keepForMember = (response: Response) => response.ok && response.type === 'basic' && !response.redirected;
 const entryFormRoute = {
   matcher: ({ request, url, sameOrigin }: { request: Request; url: URL; sameOrigin: boolean }) =>
     sameOrigin && request.mode === 'navigate' && url.pathname === ENTRY_FORM && url.search === '',
   handler: new NetworkFirst({
-    cacheName: MEMBER_CACHE,
+    cacheName: ENTRY_FORM_CACHE,
     networkTimeoutSeconds: 6,
     plugins: [{ cacheWillUpdate: async ({ response }) => (keepForMember(response) ? response : null) }],
   }),
 };
-self.addEventListener('fetch', (event) => {
-  const url = new URL(event.request.url);
-  if (url.origin === self.location.origin && /^\/api\/auth\/(signout|callback\/)/.test(url.pathname))
-    event.waitUntil(caches.delete(MEMBER_CACHE));
-});
 const FIELD_KIT_PAGES = ['/field-kit', '/field-kit/timer', '/field-kit/fall'];
-async function keepPage(url: string, cacheName: string, ok: (res: Response) => boolean) {
+async function fetchInto(url: string, cacheName: string, ok: (res: Response) => boolean) {
   const res = await fetch(url, { credentials: 'same-origin' }).catch(() => null);
   if (res && ok(res)) await (await caches.open(cacheName)).put(url, res);
 }
@@ -71,12 +65,11 @@ self.addEventListener('message', (event) => {
   if (event.data?.type !== 'keep-entry-form') return;
   event.waitUntil(
     Promise.all([
-      keepPage(ENTRY_FORM, MEMBER_CACHE, keepForMember),
-      ...FIELD_KIT_PAGES.map((url) => keepPage(url, PAGES_CACHE, keepable)),
+      fetchInto(ENTRY_FORM, ENTRY_FORM_CACHE, keepForMember),
+      ...FIELD_KIT_PAGES.map((url) => fetchInto(url, PAGES_CACHE, keepable)),
     ]),
   );
 });
-// ------------------------------------------------------------------------------------------
 
 // ---- keep: a member's own pages (sites, field log tests), per member (lib/offline/kept.ts) ----
 
@@ -124,6 +117,8 @@ self.addEventListener('fetch', (event) => {
       }),
     );
   if (event.request.method === 'POST' && url.pathname === '/api/auth/signout') event.waitUntil(memberIs(null));
+  // a sign-in: whoever's form was kept is not this member's until the session says so
+  if (url.pathname.startsWith('/api/auth/callback/')) event.waitUntil(caches.delete(ENTRY_FORM_CACHE));
 });
 self.addEventListener('message', (event) => {
   if (event.data?.type === 'forget-pages') event.waitUntil(memberIs(null));

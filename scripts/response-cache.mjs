@@ -159,7 +159,7 @@ export function createResponseCache(opts = {}) {
   const maxAgeMs = opts.maxAgeMs ?? 60_000;
   const now = opts.now ?? Date.now;
   const available = opts.available ?? (() => true);
-  /** @type {Map<string, { status: number, headers: [string, any][], body: Buffer, gz: Buffer | null, at: number, size: number }>} */
+  /** @type {Map<string, { status: number, headers: Record<string, any>, body: Buffer, gz: Buffer | null, at: number, size: number }>} */
   const entries = new Map();
   /** renders in flight, by key: later readers wait for the first instead of rendering too */
   const inflight = new Map();
@@ -214,12 +214,8 @@ export function createResponseCache(opts = {}) {
     stats.hits++;
     const zipped = e.gz && /\bgzip\b/.test(String(req.headers['accept-encoding'] ?? ''));
     const body = zipped ? e.gz : e.body;
-    const headers = Object.fromEntries(e.headers);
-    headers['content-length'] = String(body.length);
-    headers['x-clackwater-cache'] = 'hit';
+    const headers = { ...e.headers, 'content-length': String(body.length), 'x-clackwater-cache': 'hit' };
     if (zipped) headers['content-encoding'] = 'gzip';
-    if (e.gz && !/accept-encoding/i.test(String(headers.vary ?? '')))
-      headers.vary = headers.vary ? `${headers.vary}, Accept-Encoding` : 'Accept-Encoding';
     res.writeHead(e.status, headers);
     res.end(req.method === 'HEAD' ? undefined : body);
   }
@@ -279,7 +275,10 @@ export function createResponseCache(opts = {}) {
         if (clean.csp) headers.set('content-security-policy', clean.csp);
         const gz = clean.body.length > 1024 ? await gzipAsync(clean.body) : null;
         if (gen !== generation) return;
-        const kept = [...headers].filter(([k]) => !DROPPED.has(k));
+        // the headers every hit replays, built once here rather than on each hit
+        const kept = Object.fromEntries([...headers].filter(([k]) => !DROPPED.has(k)));
+        if (gz && !/accept-encoding/i.test(String(kept.vary ?? '')))
+          kept.vary = kept.vary ? `${kept.vary}, Accept-Encoding` : 'Accept-Encoding';
         const size = clean.body.length + (gz?.length ?? 0) + 1024;
         if (size <= maxBytes) store(key, { status: 200, headers: kept, body: clean.body, gz, at: started, size });
       } catch (err) {

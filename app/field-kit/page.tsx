@@ -1,6 +1,6 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
-import { OutboxPanel } from '@/components/field-kit/OutboxPanel';
+import { OutboxPanel } from '@/components/offline/OutboxPanel';
 import { KeepEntryForm } from '@/components/field-kit/KeepEntryForm';
 
 export const metadata: Metadata = {

@@ -7,7 +7,7 @@ import { NOMINAL_LABELS, NOMINAL_SIZES } from '@/lib/hydraulics/pipes';
 import { PIPE_MATERIAL_CHOICES } from '@/lib/validation/field-log';
 import { PUMP_TYPES } from '@/lib/vocabulary';
 import { FieldError, inputClass, labelClass, sendJson, type FormError } from '@/components/forms/api';
-import { OutboxPanel } from '@/components/field-kit/OutboxPanel';
+import { OutboxPanel } from '@/components/offline/OutboxPanel';
 import { enqueue } from '@/lib/offline/outbox';
 import { sendKeptPhotos, withPhotoIds, type KeptPhoto } from '@/lib/offline/photos';
 import { KeptPhotos } from './KeptPhotos';

@@ -2,7 +2,7 @@
 import 'fake-indexeddb/auto';
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import { cleanup, fireEvent, render, screen, waitFor } from '@testing-library/react';
-import { OutboxPanel } from '@/components/field-kit/OutboxPanel';
+import { OutboxPanel } from '@/components/offline/OutboxPanel';
 import { closeOutbox, enqueue, pending } from '@/lib/offline/outbox';
 
 vi.mock('next/link', () => ({
